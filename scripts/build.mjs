@@ -1,0 +1,18 @@
+// Bundles the CLI into one ESM file so `fincheck` starts fast (no TypeScript at run time,
+// tree-shaken mathjs). Native or WASM packages stay external and load lazily.
+import { build } from 'esbuild';
+
+await build({
+  entryPoints: ['cli/main.ts'],
+  outfile: 'dist/fincheck.js',
+  bundle: true,
+  platform: 'node',
+  format: 'esm',
+  target: 'node20',
+  sourcemap: true,
+  banner: {
+    js: "#!/usr/bin/env node\nimport { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);",
+  },
+  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
+  logLevel: 'warning',
+});

@@ -1,0 +1,96 @@
+/**
+ * The normalised case: what every layer after parsing sees.
+ *
+ * All quantities are SI (m, W/(m*K), W/(m^2*K), m^2*K/W). Absolute temperatures are degrees
+ * Celsius and carry the suffix `_degC`; temperature differences are kelvin. The parser
+ * (src/case/parse.ts) is the only place that knows about units and file formats.
+ */
+
+/** Fin shapes of the case-file contract (`fin.profile`). Lengths in m. */
+export type Profile =
+  | { kind: 'rectangular'; length: number; thickness: number; width: number }
+  | { kind: 'pin'; length: number; diameter: number }
+  | { kind: 'trapezoidal'; length: number; baseThickness: number; tipThickness: number; width: number }
+  | { kind: 'triangular'; length: number; baseThickness: number; width: number }
+  | { kind: 'parabolic-concave'; length: number; baseThickness: number; width: number }
+  | { kind: 'parabolic-convex'; length: number; baseThickness: number; width: number }
+  | { kind: 'conical-pin'; length: number; baseDiameter: number; tipDiameter: number }
+  | { kind: 'annular'; innerRadius: number; outerRadius: number; thickness: number }
+  | TabulatedProfile;
+
+/** A measured or drawn profile, linear between points; x from the base (0) to the tip (last x). */
+export interface TabulatedProfile {
+  kind: 'tabulated';
+  shape: 'straight' | 'pin';
+  /** Positions along the fin, m, strictly increasing, first = 0. */
+  x: Float64Array;
+  /** Thickness (straight) or diameter (pin) at each x, m. */
+  size: Float64Array;
+  /** Width of a straight fin, m (absent for pins). */
+  width?: number;
+}
+
+export type ProfileKind = Profile['kind'];
+
+/** Whether the two narrow side edges of a straight fin lose heat. Pins and annular fins ignore it. */
+export type Edges = 'cooled' | 'insulated';
+
+export interface FinSpec {
+  profile: Profile;
+  edges: Edges;
+}
+
+/**
+ * Convection coefficient over the faces, W/(m^2*K), as a function of the position x along the fin
+ * (m from the base; for annular fins x = r - innerRadius).
+ */
+export type HDistribution =
+  | { kind: 'uniform'; h: number }
+  | { kind: 'linear'; base: number; tip: number }
+  | { kind: 'points'; x: Float64Array; h: Float64Array }
+  /** h = base * (theta / theta_base)^exponent (natural convection, boiling); nonlinear. */
+  | { kind: 'power'; base: number; exponent: number };
+
+/** Tip condition. `convective` with h = null uses the local face h at the tip. */
+export type TipCondition =
+  | { kind: 'adiabatic' }
+  | { kind: 'convective'; h: number | null }
+  | { kind: 'temperature'; T_degC: number }
+  | { kind: 'infinite' };
+
+/** Thermal conductivity, W/(m*K): constant or tabulated over temperature (linear between points). */
+export type Conductivity =
+  | { kind: 'constant'; k: number }
+  | { kind: 'table'; T_degC: Float64Array; k: Float64Array };
+
+export interface Material {
+  /** Built-in name, or 'custom' for `{ k: ... }`. */
+  name: string;
+  k: Conductivity;
+  /** Published source of the value (built-ins), or 'given in the case file'. */
+  source: string;
+}
+
+export interface Convection {
+  ambient_degC: number;
+  h: HDistribution;
+  tip: TipCondition;
+  /** Grey-body emissivity of the faces, 0..1 (0 = no radiation). */
+  emissivity: number;
+  /** Temperature of the radiating surroundings, degC (defaults to ambient). */
+  surroundings_degC: number;
+}
+
+export interface BaseSpec {
+  T_degC: number;
+  /** Contact resistance per unit of base area, m^2*K/W; 0 when absent. */
+  contactResistance: number;
+}
+
+export interface Case {
+  name: string;
+  fin: FinSpec;
+  material: Material;
+  convection: Convection;
+  base: BaseSpec;
+}

@@ -1,0 +1,46 @@
+/**
+ * Errors that reach the user. Each carries the exit code of the output contract:
+ * 2 bad input or usage, 3 solver failure. The CLI prints `message` on stderr and exits from one place.
+ */
+
+/** One problem in the input: the key path, the value given and what is accepted. */
+export interface InputIssue {
+  /** Key path in the case file, e.g. `fin.thickness` or `convection.h.points[2][0]`. */
+  path: string;
+  /** The value as given (stringified for display). */
+  value: string;
+  /** What is accepted, in words, e.g. `a length > 0 such as "2 mm"`. */
+  accepted: string;
+  /** 1-based line and column in the file, where the format allows. */
+  line?: number;
+  column?: number;
+}
+
+export class InputError extends Error {
+  readonly exitCode = 2;
+  constructor(
+    readonly issues: InputIssue[],
+    readonly file?: string,
+  ) {
+    super(formatIssues(issues, file));
+    this.name = 'InputError';
+  }
+}
+
+export class UsageError extends Error {
+  readonly exitCode = 2;
+  override name = 'UsageError';
+}
+
+export class SolverError extends Error {
+  readonly exitCode = 3;
+  override name = 'SolverError';
+}
+
+export function formatIssues(issues: InputIssue[], file?: string): string {
+  const lines = issues.map((i) => {
+    const where = i.line !== undefined ? `${file ?? 'case'}:${i.line}${i.column !== undefined ? `:${i.column}` : ''}: ` : file ? `${file}: ` : '';
+    return `${where}${i.path}: got ${i.value}; expected ${i.accepted}`;
+  });
+  return lines.join('\n');
+}
