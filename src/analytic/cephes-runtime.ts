@@ -3,12 +3,17 @@
  *
  * Cephes (S. L. Moshier, "Methods and Programs for Mathematical Functions", Ellis Horwood 1989) is
  * used through the `cephes` npm package, whose WebAssembly build must finish compiling before the first
- * call. `initBessel()` awaits that once; every synchronous wrapper in this folder asks `cephesLibrary()`
- * for the loaded module and gets a clear error if nobody awaited `initBessel()` first.
+ * call. `initBessel()` loads the package lazily and awaits that once; every synchronous wrapper in this
+ * folder asks `cephesLibrary()` for the loaded module and gets a clear error if nobody awaited
+ * `initBessel()` first.
+ *
+ * The package ships type declarations only for its CommonJS entry, so it is loaded through
+ * `createRequire` (its CommonJS build) and typed from that entry; it stays external to the CLI bundle.
  */
-import cephes from 'cephes';
+import { createRequire } from 'node:module';
+import type CephesModule from 'cephes' with { 'resolution-mode': 'require' };
 
-export type CephesLibrary = typeof cephes;
+export type CephesLibrary = typeof CephesModule;
 
 let loaded: CephesLibrary | null = null;
 let loading: Promise<void> | null = null;
@@ -17,8 +22,10 @@ let loading: Promise<void> | null = null;
 export function initBessel(): Promise<void> {
   if (loaded !== null) return Promise.resolve();
   if (loading === null) {
-    loading = cephes.compiled.then(() => {
-      loaded = cephes;
+    const required = createRequire(import.meta.url)('cephes') as { default: CephesLibrary };
+    const library = required.default;
+    loading = library.compiled.then(() => {
+      loaded = library;
     });
   }
   return loading;
