@@ -1,0 +1,63 @@
+/**
+ * SVG -> PNG with resvg (@resvg/resvg-js), text set in the DejaVu Sans files (regular and bold) that ship with the
+ * `dejavu-fonts-ttf` package. System fonts are never loaded: the PNG bytes then depend only on
+ * the SVG and the options (resvg draws nothing for text when it has no font, so the font file
+ * is required, and its absence is an error here).
+ *
+ * Size: the SVG is laid out in CSS px (96 per inch). `dpi` scales the raster by dpi / 96 and
+ * records the resolution in the PNG (pHYs), so a 1200 px wide chart at 300 dpi is 3750 px wide
+ * and still 12.5 in wide when placed in a document. `width` instead fixes the pixel width.
+ * resvg is loaded on first use (dynamic import) so that commands that draw nothing start fast.
+ */
+
+import { createRequire } from 'node:module';
+import { existsSync } from 'node:fs';
+import { fontFamily } from './text-metrics.js';
+import { setPngDpi } from './png-dpi.js';
+
+export interface RenderOptions {
+  /** Output resolution in dots per inch; the raster is scaled by dpi / 96. Default 96. */
+  dpi?: number;
+  /** Output width in pixels (the height follows the aspect ratio); overrides the dpi scale, the dpi is still recorded. */
+  width?: number;
+}
+
+let fontPaths: string[] | undefined;
+
+/**
+ * Absolute paths of DejaVuSans.ttf and DejaVuSans-Bold.ttf (titles are bold), resolved from this
+ * module, so they are found from src/ and from the bundle in dist/ alike.
+ */
+export function fontFiles(): string[] {
+  if (fontPaths !== undefined) return fontPaths;
+  const require = createRequire(import.meta.url);
+  const paths = ['DejaVuSans.ttf', 'DejaVuSans-Bold.ttf'].map((f) => require.resolve(`dejavu-fonts-ttf/ttf/${f}`));
+  for (const path of paths) if (!existsSync(path)) throw new Error(`render: font file not found at ${path}`);
+  fontPaths = paths;
+  return paths;
+}
+
+type ResvgModule = typeof import('@resvg/resvg-js');
+let resvgModule: Promise<ResvgModule> | undefined;
+
+function loadResvg(): Promise<ResvgModule> {
+  resvgModule ??= import('@resvg/resvg-js');
+  return resvgModule;
+}
+
+/** Rasterises an SVG to PNG bytes. Same SVG and options give the same bytes. */
+export async function svgToPng(svg: string, options: RenderOptions = {}): Promise<Buffer> {
+  const dpi = options.dpi ?? 96;
+  if (!(dpi > 0) || !Number.isFinite(dpi)) throw new RangeError(`render: dpi must be a positive number, got ${dpi}`);
+  if (options.width !== undefined && !(Number.isInteger(options.width) && options.width > 0)) {
+    throw new RangeError(`render: width must be a positive integer, got ${options.width}`);
+  }
+  const { Resvg } = await loadResvg();
+  const resvg = new Resvg(svg, {
+    font: { loadSystemFonts: false, fontFiles: fontFiles(), defaultFontFamily: fontFamily },
+    fitTo: options.width !== undefined ? { mode: 'width', value: options.width } : { mode: 'zoom', value: dpi / 96 },
+    logLevel: 'off',
+  });
+  const png = resvg.render().asPng();
+  return setPngDpi(png, dpi);
+}
