@@ -1,0 +1,24 @@
+/** The case layer's public API: reading, units, validation and the built-in materials. */
+export { loadCase, parseCaseObject, parseCaseText, type ParseOptions } from './parse.js';
+export { caseJsonSchema, caseSchema, profileNames, type ValidatedCase } from './schema.js';
+export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './keyPath.js';
+export type { Locate, SourcePosition } from './issues.js';
+export { readDocument, detectFormat, type ReadDocument, type SourceFormat } from './document.js';
+export {
+  builtInMaterials,
+  findMaterial,
+  materialNames,
+  similarMaterialNames,
+  type BuiltInMaterial,
+} from './materials.js';
+export {
+  describeQuantity,
+  fromSI,
+  normaliseUnitText,
+  parseQuantity,
+  quantityKinds,
+  type QuantityKind,
+  type QuantityResult,
+} from './units.js';
+export { finExtent, uniformProfiles } from './checks.js';
+export type * from './types.js';

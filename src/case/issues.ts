@@ -1,0 +1,108 @@
+/**
+ * From zod issues and check results to the InputIssues the user reads: key path, value as given, what is
+ * accepted, and where in the file.
+ */
+import type { z } from 'zod';
+import type { InputIssue } from '../errors.js';
+import { formatKeyPath, getByKeyPath, type KeyPath } from './keyPath.js';
+
+/** An issue before the value and position are looked up. */
+export interface PendingIssue {
+  path: KeyPath;
+  accepted: string;
+}
+
+/** Where a key path is in the source file, and the scalar's text as written when it is a scalar. */
+export interface SourcePosition {
+  line: number;
+  column: number;
+  source?: string;
+}
+
+export type Locate = (path: KeyPath) => SourcePosition | undefined;
+
+type ZodIssue = z.core.$ZodIssue;
+
+/** Flattens zod issues into pending issues: one per unknown key, and the intended option of a failed union. */
+export function fromZodIssues(issues: readonly ZodIssue[], raw: unknown, prefix: KeyPath = []): PendingIssue[] {
+  const out: PendingIssue[] = [];
+  for (const issue of issues) {
+    const path: KeyPath = [...prefix, ...issue.path.map((p) => (typeof p === 'symbol' ? String(p) : p))];
+    if (issue.code === 'unrecognized_keys') {
+      for (const key of issue.keys) out.push({ path: [...path, key], accepted: issue.message });
+    } else if (issue.code === 'invalid_union' && issue.errors.length > 0) {
+      out.push(...fromUnion(issue, path, raw));
+    } else {
+      out.push({ path, accepted: issue.message });
+    }
+  }
+  return out;
+}
+
+/**
+ * A union none of whose options matched. When the input is a mapping, the option it was meant for is the one
+ * that did not fail on the type of the whole value and has the fewest issues (each unknown key counts once);
+ * its issues are reported. Otherwise (or on a tie) the union's own message lists the accepted forms.
+ */
+function fromUnion(issue: Extract<ZodIssue, { code: 'invalid_union' }>, path: KeyPath, raw: unknown): PendingIssue[] {
+  const given = getByKeyPath(raw, path);
+  const isMapping = typeof given === 'object' && given !== null && !Array.isArray(given);
+  if (isMapping) {
+    const candidates = issue.errors
+      .filter((branch) => !branch.some((i) => i.path.length === 0 && i.code !== 'unrecognized_keys'))
+      .map((branch) => ({ branch, weight: branch.reduce((n, i) => n + (i.code === 'unrecognized_keys' ? i.keys.length : 1), 0) }))
+      .sort((a, b) => a.weight - b.weight);
+    const best = candidates[0];
+    if (best && (candidates.length === 1 || (candidates[1]?.weight ?? Infinity) > best.weight)) {
+      return fromZodIssues(best.branch, raw, path);
+    }
+  }
+  // A "did you mean" from a word-list option (a misspelt `tip: convection`) is worth keeping.
+  const hint = issue.errors
+    .flat()
+    .filter((i) => i.path.length === 0 && i.code === 'invalid_value')
+    .map((i) => /\(did you mean [^)]*\)/.exec(i.message)?.[0])
+    .find((h) => h !== undefined);
+  return [{ path, accepted: hint ? `${issue.message} ${hint}` : issue.message }];
+}
+
+/** The value at `path` as the user gave it: the scalar's source text when known, else a compact rendering. */
+export function displayValue(raw: unknown, path: KeyPath, position?: SourcePosition): string {
+  if (position?.source !== undefined) return position.source;
+  const value = getByKeyPath(raw, path);
+  return renderValue(value, pathExists(raw, path));
+}
+
+function pathExists(raw: unknown, path: KeyPath): boolean {
+  if (path.length === 0) return raw !== undefined;
+  const parent = getByKeyPath(raw, path.slice(0, -1));
+  const last = path[path.length - 1];
+  if (typeof last === 'number') return Array.isArray(parent) && last < parent.length;
+  return typeof parent === 'object' && parent !== null && last !== undefined && Object.hasOwn(parent, last);
+}
+
+export function renderValue(value: unknown, present = true): string {
+  if (value === undefined) return present ? 'an empty value' : 'nothing (the key is missing)';
+  if (value === null) return 'an empty value';
+  if (typeof value === 'number') return String(value);
+  if (typeof value === 'string') return JSON.stringify(value);
+  const text = JSON.stringify(value, (_key, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v));
+  return text.length > 80 ? `${text.slice(0, 77)}...` : text;
+}
+
+/** Finalises pending issues: display path, value, and the position when the source is known. */
+export function toInputIssues(pending: readonly PendingIssue[], raw: unknown, locate?: Locate): InputIssue[] {
+  return pending.map(({ path, accepted }) => {
+    const position = locate?.(path);
+    const issue: InputIssue = {
+      path: formatKeyPath(path) || '(top level)',
+      value: displayValue(raw, path, position),
+      accepted,
+    };
+    if (position) {
+      issue.line = position.line;
+      issue.column = position.column;
+    }
+    return issue;
+  });
+}

@@ -1,0 +1,83 @@
+/**
+ * Reading a case: text or file -> raw object -> schema (shape, units, ranges) -> cross-key checks -> Case.
+ * Every problem found is collected and thrown together as one InputError (exit code 2); nothing is computed
+ * for a case with an error.
+ */
+import { readFileSync } from 'node:fs';
+import { basename, extname } from 'node:path';
+import { InputError, type InputIssue } from '../errors.js';
+import { checkCase } from './checks.js';
+import { readDocument } from './document.js';
+import { fromZodIssues, toInputIssues, type Locate } from './issues.js';
+import { toCase } from './normalise.js';
+import { caseSchema } from './schema.js';
+import type { Case } from './types.js';
+
+export interface ParseOptions {
+  /** The case name when the file has no `name` key (parseCaseText uses the file name without extension). */
+  defaultName?: string;
+  /** The file name shown before line numbers in messages. */
+  file?: string;
+}
+
+/**
+ * Validates and normalises a raw case object (as read from YAML/JSON, or with values substituted by key path).
+ * `locate` maps a key path to its line and column in the source, when there is one.
+ * Throws InputError listing every issue.
+ */
+export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
+  const result = caseSchema.safeParse(raw);
+  const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
+  if (pending.length > 0 || !result.success) {
+    throw new InputError(sortByPosition(toInputIssues(pending, raw, locate)), options.file);
+  }
+  return toCase(result.data, options.defaultName ?? 'unnamed case');
+}
+
+/** Parses case text, YAML or JSON (by the file name's extension, else by content). Throws InputError. */
+export function parseCaseText(text: string, fileName: string): Case {
+  const document = readDocument(text, fileName);
+  const defaultName = basename(fileName, extname(fileName)) || 'unnamed case';
+  const options: ParseOptions = { defaultName, file: fileName };
+  const documentIssues: InputIssue[] = document.problems.map(({ issue, position, value }) => ({
+    path: issue.path.join('.'),
+    value,
+    accepted: issue.accepted,
+    ...(position ? { line: position.line, column: position.column } : {}),
+  }));
+  if (document.problems.some((p) => p.issue.path[0] === '(syntax)')) {
+    throw new InputError(documentIssues, fileName);
+  }
+  let parsed: Case | undefined;
+  let caseIssues: InputIssue[] = [];
+  try {
+    parsed = parseCaseObject(document.raw, document.locate, options);
+  } catch (err) {
+    if (!(err instanceof InputError)) throw err;
+    caseIssues = err.issues;
+  }
+  const issues = [...documentIssues, ...caseIssues];
+  if (issues.length > 0 || parsed === undefined) throw new InputError(sortByPosition(issues), fileName);
+  return parsed;
+}
+
+/** Reads and parses a case file. A missing or unreadable file is an InputError too. */
+export function loadCase(path: string): Case {
+  let text: string;
+  try {
+    text = readFileSync(path, 'utf8');
+  } catch (err) {
+    const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (err as Error).message;
+    throw new InputError([{ path: '(file)', value: JSON.stringify(path), accepted: `a readable case file (${reason})` }]);
+  }
+  return parseCaseText(text, path);
+}
+
+/** Issues in file order (those without a position keep their order, after the located ones). */
+function sortByPosition(issues: InputIssue[]): InputIssue[] {
+  const line = (i: InputIssue) => i.line ?? Number.MAX_SAFE_INTEGER;
+  return issues
+    .map((issue, index) => ({ issue, index }))
+    .sort((a, b) => line(a.issue) - line(b.issue) || (a.issue.column ?? 0) - (b.issue.column ?? 0) || a.index - b.index)
+    .map(({ issue }) => issue);
+}

@@ -1,0 +1,265 @@
+/**
+ * Quantities with units: the only place in fincheck that reads a unit.
+ *
+ * A quantity is a bare number (SI: m, W/(m*K), W/(m^2*K), m^2*K/W; a bare temperature is degC) or a string
+ * "<number> <unit>" such as "3 mm", "27 BTU/(h*ft^2*degF)", "185 degF". The unit expression is read by mathjs
+ * `unit()` (a private instance built from `unitDependencies` only, so the CLI bundle tree-shakes the rest of
+ * mathjs); the number is read here, so that non-finite input gets a message of its own.
+ *
+ * Temperatures: an absolute temperature (`ambient: 77 degF`) and a temperature difference (the K inside
+ * W/(m^2*K), or `10 K` of excess) convert differently. mathjs treats a lone degC/degF as absolute and a degC/degF
+ * inside a compound unit as a difference, which is right for compound units; lone temperature units are converted
+ * here by their definitions and never by arithmetic on degC values in mathjs:
+ *   T[degC] = T[K] - 273.15 = (T[degF] - 32) * 5/9 = T[degR] * 5/9 - 273.15      (absolute)
+ *   dT[K] = dT[degC] = dT[degF] * 5/9 = dT[degR] * 5/9                               (difference)
+ * (NIST SP 811 (2008), Guide for the Use of the International System of Units, sections 4.2.1.1 and B.9;
+ * from memory, section numbers not checked).
+ *
+ * mathjs defines BTU as the International Table Btu, 1055.05585262 J, ft = 0.3048 m and h = 3600 s, which gives
+ * 1 BTU/(h*ft^2*degF) = 5.678263341 W/(m^2*K) and 1 BTU/(h*ft*degF) = 1.730734666 W/(m*K); NIST SP 811 (2008),
+ * Appendix B.8, lists 5.678263 E+00 and 1.730735 E+00 for these (from memory, not checked against the document).
+ */
+import { create, unitDependencies, type Unit } from 'mathjs';
+
+export type QuantityKind =
+  | 'length'
+  | 'conductivity'
+  | 'heatTransferCoefficient'
+  | 'contactResistance'
+  | 'temperature'
+  | 'temperatureDifference'
+  | 'dimensionless';
+
+export type QuantityResult = { ok: true; value: number } | { ok: false; problem: string };
+
+interface KindInfo {
+  /** "a length": how the kind is named in messages. */
+  noun: string;
+  /** The unit a bare number is taken in. */
+  bareUnit: string;
+  /** Examples of accepted strings. */
+  examples: string[];
+}
+
+export const quantityKinds: Record<QuantityKind, KindInfo> = {
+  length: { noun: 'a length', bareUnit: 'm', examples: ['2 mm', '0.125 in'] },
+  conductivity: { noun: 'a thermal conductivity', bareUnit: 'W/(m*K)', examples: ['205 W/(m*K)', '120 BTU/(h*ft*degF)'] },
+  heatTransferCoefficient: {
+    noun: 'a heat-transfer coefficient',
+    bareUnit: 'W/(m^2*K)',
+    examples: ['40 W/(m^2*K)', '7 BTU/(h*ft^2*degF)'],
+  },
+  contactResistance: { noun: 'a contact resistance', bareUnit: 'm^2*K/W', examples: ['1.5e-4 m^2*K/W'] },
+  temperature: { noun: 'a temperature', bareUnit: 'degC', examples: ['85 degC', '185 degF', '358.15 K'] },
+  temperatureDifference: { noun: 'a temperature difference', bareUnit: 'K', examples: ['10 K', '18 degF'] },
+  dimensionless: { noun: 'a plain number', bareUnit: '', examples: ['0.9', '1/4'] },
+};
+
+/** "a length such as "2 mm", "0.125 in" or a bare number in m" (the range, if any, is added by the caller). */
+export function describeQuantity(kind: QuantityKind, range = ''): string {
+  const info = quantityKinds[kind];
+  const noun = range ? `${info.noun} ${range}` : info.noun;
+  if (kind === 'dimensionless') return `${noun} such as ${info.examples.join(' or ')}`;
+  const examples = info.examples.map((e) => `"${e}"`).join(', ');
+  return `${noun} such as ${examples} or a bare number in ${info.bareUnit}`;
+}
+
+// A private mathjs instance with the Unit class and nothing else.
+let mathjs: { unit: (text: string) => Unit } | undefined;
+function unitOf(text: string): Unit {
+  if (!mathjs) {
+    // The typings declare each dependency map possibly undefined; it is always defined at run time.
+    if (!unitDependencies) throw new Error('mathjs unitDependencies missing');
+    mathjs = create({ unitDependencies });
+  }
+  return mathjs.unit(text);
+}
+
+/** Rewrites typographic unit notation to what mathjs reads: °C, ℃, ², ³, ⁻¹, ·, ×, µ, μ, −. */
+export function normaliseUnitText(text: string): string {
+  const superscripts: Record<string, string> = {
+    '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-',
+  };
+  return text
+    .replace(/℃/g, 'degC')
+    .replace(/℉/g, 'degF')
+    .replace(/[°º˚]\s*([CFR])\b/g, 'deg$1')
+    .replace(/[°º˚]\s*K\b/g, 'K')
+    .replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹⁻]+/g, (s) => '^' + [...s].map((c) => superscripts[c] ?? c).join(''))
+    .replace(/[·⋅•×]/g, '*')
+    .replace(/[µμ]/g, 'u')
+    .replace(/−/g, '-')
+    .trim();
+}
+
+const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?/;
+const NON_FINITE = /^[+-]?(?:\.?inf(?:inity)?|\.?nan)\b/i;
+
+/**
+ * Lone temperature units by their definitions: scale of a difference (to K) and the absolute conversions.
+ * mathjs aliases (celsius, fahrenheit, rankine, kelvin) share the entries.
+ */
+interface TemperatureUnit {
+  differenceScale: number;
+  toDegC: (n: number) => number;
+  fromDegC: (t: number) => number;
+}
+const celsius: TemperatureUnit = { differenceScale: 1, toDegC: (n) => n, fromDegC: (t) => t };
+const fahrenheit: TemperatureUnit = {
+  differenceScale: 5 / 9,
+  toDegC: (n) => ((n - 32) * 5) / 9,
+  fromDegC: (t) => (t * 9) / 5 + 32,
+};
+const rankine: TemperatureUnit = {
+  differenceScale: 5 / 9,
+  toDegC: (n) => (n * 5) / 9 - 273.15,
+  fromDegC: (t) => ((t + 273.15) * 9) / 5,
+};
+const kelvin: TemperatureUnit = { differenceScale: 1, toDegC: (n) => n - 273.15, fromDegC: (t) => t + 273.15 };
+const temperatureUnits: Record<string, TemperatureUnit> = {
+  degC: celsius,
+  celsius,
+  degF: fahrenheit,
+  fahrenheit,
+  degR: rankine,
+  rankine,
+  K: kelvin,
+  kelvin,
+};
+
+const siReference: Partial<Record<QuantityKind, string>> = {
+  length: 'm',
+  conductivity: 'W/(m*K)',
+  heatTransferCoefficient: 'W/(m^2*K)',
+  contactResistance: 'm^2*K/W',
+};
+
+/** Names of common dimensions, to say what a wrong unit is ("W is a power, not a length"). */
+const dimensionNames: [string, string][] = [
+  ['a length', 'm'],
+  ['an area', 'm^2'],
+  ['a volume', 'm^3'],
+  ['a power', 'W'],
+  ['an energy', 'J'],
+  ['a temperature', 'K'],
+  ['a time', 's'],
+  ['a mass', 'kg'],
+  ['a thermal conductivity', 'W/(m*K)'],
+  ['a heat-transfer coefficient', 'W/(m^2*K)'],
+  ['a contact resistance', 'm^2*K/W'],
+  ['a thermal resistance', 'K/W'],
+  ['a heat flux', 'W/m^2'],
+  ['a pressure', 'Pa'],
+  ['a force', 'N'],
+];
+
+function dimensionName(u: Unit): string | undefined {
+  return dimensionNames.find(([, ref]) => u.equalBase(unitOf(ref)))?.[0];
+}
+
+/**
+ * Reads `given` as a quantity of `kind` and returns its value in SI (lengths m, conductivity W/(m*K),
+ * h W/(m^2*K), contact resistance m^2*K/W, temperature degC, temperature difference K).
+ * The result says what is wrong when it is not ok; ranges (> 0 and the like) are the caller's business.
+ */
+export function parseQuantity(given: unknown, kind: QuantityKind): QuantityResult {
+  if (typeof given === 'number') {
+    if (!Number.isFinite(given)) return { ok: false, problem: `${String(given)} is not a finite number` };
+    return { ok: true, value: given };
+  }
+  if (typeof given !== 'string') return { ok: false, problem: 'a number or a string with a unit is needed' };
+  const text = normaliseUnitText(given);
+  if (NON_FINITE.test(text)) return { ok: false, problem: 'not a finite number' };
+  if (kind === 'dimensionless') return parsePlainNumber(text);
+  const numberMatch = NUMBER.exec(text);
+  if (!numberMatch) return { ok: false, problem: 'it does not start with a number' };
+  const n = Number(numberMatch[0]);
+  if (!Number.isFinite(n)) return { ok: false, problem: `${numberMatch[0]} is not a finite number` };
+  const unitText = text.slice(numberMatch[0].length).trim();
+  if (unitText === '') return { ok: true, value: n };
+
+  let u: Unit;
+  try {
+    u = unitOf(unitText);
+  } catch (err) {
+    return { ok: false, problem: unitProblem(unitText, err) };
+  }
+  if (u.value !== null || u.units.length === 0) {
+    return { ok: false, problem: `"${unitText}" is not a unit (write one number followed by one unit)` };
+  }
+  if (kind === 'temperature' || kind === 'temperatureDifference') return temperatureValue(n, u, unitText, kind);
+
+  const reference = siReference[kind];
+  if (reference === undefined) throw new Error(`no SI reference for ${kind}`);
+  if (!u.equalBase(unitOf(reference))) return { ok: false, problem: wrongKind(u, unitText, kind) };
+  const value = n * u.toNumber(reference);
+  if (!Number.isFinite(value)) return { ok: false, problem: `${given} is not a finite value in ${reference}` };
+  return { ok: true, value };
+}
+
+function parsePlainNumber(text: string): QuantityResult {
+  const fraction = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*\/\s*((?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)$/.exec(text);
+  const value = fraction ? Number(fraction[1]) / Number(fraction[2]) : NUMBER.exec(text)?.[0] === text ? Number(text) : NaN;
+  if (Number.isNaN(value)) return { ok: false, problem: `"${text}" is not a plain number (no unit is taken here)` };
+  if (!Number.isFinite(value)) return { ok: false, problem: 'not a finite number' };
+  return { ok: true, value };
+}
+
+/** The single temperature unit of `u` and its prefix scale (only kelvin takes SI prefixes, e.g. mK). */
+function loneTemperatureUnit(u: Unit): { definition: TemperatureUnit; prefixScale: number } | undefined {
+  const single = u.units.length === 1 && u.units[0]?.power === 1 ? u.units[0] : undefined;
+  const definition = single ? temperatureUnits[single.unit.name] : undefined;
+  if (!single || !definition) return undefined;
+  const prefixScale = definition === kelvin ? u.toNumber('K') : 1;
+  return { definition, prefixScale };
+}
+
+function temperatureValue(n: number, u: Unit, unitText: string, kind: 'temperature' | 'temperatureDifference'): QuantityResult {
+  const lone = loneTemperatureUnit(u);
+  if (!lone) {
+    if (u.equalBase(unitOf('K'))) {
+      return { ok: false, problem: `write a single temperature unit (K, degC, degF, degR), not "${unitText}"` };
+    }
+    return { ok: false, problem: wrongKind(u, unitText, kind) };
+  }
+  const scaled = n * lone.prefixScale;
+  if (kind === 'temperatureDifference') return { ok: true, value: scaled * lone.definition.differenceScale };
+  return { ok: true, value: lone.definition.toDegC(scaled) };
+}
+
+function wrongKind(u: Unit, unitText: string, kind: QuantityKind): string {
+  const noun = quantityKinds[kind].noun;
+  const what = dimensionName(u);
+  const hint = /(^|[^A-Za-z])[CF]([^A-Za-z]|$)/.test(unitText)
+    ? ' (C is the coulomb and F the farad: write degC or degF)'
+    : '';
+  return what ? `"${unitText}" is ${what}, not ${noun}${hint}` : `"${unitText}" is not ${noun}${hint}`;
+}
+
+function unitProblem(unitText: string, err: unknown): string {
+  const message = err instanceof Error ? err.message : String(err);
+  const notFound = /Unit "([^"]*)" not found/.exec(message);
+  if (notFound) return `unit "${notFound[1]}" is not known`;
+  return `cannot read the unit "${unitText}" (${message.replace(/\.$/, '')})`;
+}
+
+/**
+ * Converts an SI value of `kind` (degC for temperatures, K for differences) to `unit`, for showing numbers in
+ * the user's unit (a map axis in mm, say). Throws an Error naming the problem for a unit of the wrong kind.
+ */
+export function fromSI(value: number, kind: QuantityKind, unit: string): number {
+  if (kind === 'dimensionless') return value;
+  const unitText = normaliseUnitText(unit);
+  if (kind === 'temperature' || kind === 'temperatureDifference') {
+    const check = parseQuantity(`1 ${unitText}`, kind);
+    if (!check.ok) throw new Error(check.problem);
+    const lone = loneTemperatureUnit(unitOf(unitText));
+    if (!lone) throw new Error(`"${unitText}" is not a temperature unit`);
+    return kind === 'temperature'
+      ? lone.definition.fromDegC(value) / lone.prefixScale
+      : value / lone.definition.differenceScale / lone.prefixScale;
+  }
+  const probe = parseQuantity(`1 ${unitText}`, kind);
+  if (!probe.ok) throw new Error(probe.problem);
+  return value / probe.value;
+}
