@@ -201,7 +201,7 @@ function drawAnnotations(points: readonly PointAnnotation[], panel: PanelGeometr
       'font-size': fontSize.annotation,
       'text-anchor': left ? 'end' : 'start',
     };
-    out.push(textEl(p.label, { ...attrs, fill: 'none', stroke: ink.halo, 'stroke-width': 4, 'stroke-linejoin': 'round' }));
+    out.push(textEl(p.label, { ...attrs, fill: 'none', stroke: ink.halo, 'stroke-width': 3, 'stroke-linejoin': 'round' }));
     out.push(textEl(p.label, { ...attrs, fill: ink.text }));
   }
   return out;

@@ -63,8 +63,20 @@ function widenRange(min: number, max: number): [number, number] {
   return [lo - pad, hi + pad];
 }
 
-/** Linear ticks over [min, max] with about `targetCount` ticks (Heckbert 1990). */
+/**
+ * Linear ticks over [min, max] with about `targetCount` ticks (Heckbert 1990). In "inside" mode a
+ * range that holds fewer than two multiples of the spacing is retried with more, finer ticks, so an
+ * axis always shows at least two labels.
+ */
 export function linearTicks(min: number, max: number, targetCount = 6, mode: TickMode = 'loose'): LinearTicks {
+  let ticks = heckbertTicks(min, max, targetCount, mode);
+  for (let count = Math.max(2, Math.round(targetCount)) + 1; ticks.values.length < 2 && count <= 40; count++) {
+    ticks = heckbertTicks(min, max, count, mode);
+  }
+  return ticks;
+}
+
+function heckbertTicks(min: number, max: number, targetCount: number, mode: TickMode): LinearTicks {
   const [lo, hi] = widenRange(min, max);
   const count = Math.max(2, Math.round(targetCount));
   const range = niceNumber(hi - lo, false);
