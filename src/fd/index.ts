@@ -1,0 +1,32 @@
+/** Public API of the 1-D finite-volume fin solver (fd-1d). */
+export type { LinearFinCase, LinearHDistribution } from './linear-case.js';
+export { isLinearFinCase } from './linear-case.js';
+export type { BaseBoundary, TipBoundary } from './boundary.js';
+export { baseBoundary, tipBoundary } from './boundary.js';
+export type { FinProblem1D } from './problem1d.js';
+export { finProblem1D } from './problem1d.js';
+export { hAt, hAtNodes, hBreakpoints, idealConvectiveConductance } from './convection1d.js';
+export { interfaceConductance, convectiveConductance } from './conductance1d.js';
+export { assembleFin1D } from './assemble1d.js';
+export type { TridiagonalSystem, RowSumSystem, TridiagonalSolver } from './tridiagonal.js';
+export {
+  createTridiagonalSystem,
+  thomas,
+  thomasInto,
+  twoSidedThomas,
+  twoSidedThomasInto,
+  solveTridiagonal,
+} from './tridiagonal.js';
+export { conservativeThomas, conservativeThomasInto, conservativeThomasFromTipInto } from './conservative-thomas.js';
+export type { FinHeatRates1D } from './heat-rate1d.js';
+export { finHeatRates, idealHeatRate, finEffectiveness } from './heat-rate1d.js';
+export type { Fin1DOptions, Fin1DResult, Fin1DStudy, Fin1DStudyOptions } from './fin1d.js';
+export {
+  solveFin1D,
+  studyFin1D,
+  solveFinProblem1D,
+  studyFinProblem1D,
+  solveOnMesh1D,
+  autoGrading,
+  DEFAULT_STUDY_NODES,
+} from './fin1d.js';

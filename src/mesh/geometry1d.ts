@@ -1,0 +1,232 @@
+/**
+ * Fin geometry for the 1-D model: cross-section A(x) and cooled perimeter P(x) of every profile.
+ *
+ * Equation served: d/dx(k A(x) dθ/dx) - h(x) P(x) θ = 0, x from the base (m). Units: m, m^2.
+ * Thin-fin convention (faces' slope neglected), as in Gardner, K. A., 1945, "Efficiency of extended
+ * surface", Trans. ASME 67, 621-631, and the fin tables of Incropera et al., Fundamentals of Heat and
+ * Mass Transfer (Table 3.5):
+ *   straight fin, thickness t(x), width w: A = w t, P = 2w + 2t (cooled edges) or 2w (insulated edges);
+ *   spine (pin), diameter D(x):            A = pi D^2 / 4, P = pi D;
+ *   annular, thickness t, r = r1 + x:      A = 2 pi r t, P = 4 pi r (both faces), tip = outer rim.
+ * Tapered profiles: size(x) = s_tip + (s_base - s_tip)(1 - x/L)^e with e = 0 (uniform), 1 (trapezoid,
+ * triangle, cone), 2 (concave parabola), 1/2 (convex parabola).
+ *
+ * The integral of g P over [a, b] for a linear g (used for the exact ideal heat rate and the face
+ * area) is a 3-point Gauss-Legendre rule, exact for polynomials of degree <= 5. g P is a polynomial of
+ * degree <= 3 in x for every profile except the convex parabola, where the substitution
+ * x = L(1 - s^2) makes g P dx a polynomial of degree 4 in s.
+ */
+import type { Case, Edges, TabulatedProfile } from '../case/types.js';
+import { InputError } from '../errors.js';
+import type { FinGeometry1D } from './types.js';
+
+/** Exponent e of a tapered profile, size ~ (1 - x/L)^e. */
+export type TaperExponent = 0 | 0.5 | 1 | 2;
+
+export interface TaperSpec {
+  readonly shape: 'straight' | 'pin';
+  readonly length: number;
+  /** Thickness (straight) or diameter (pin) at the base and at the tip, m. */
+  readonly baseSize: number;
+  readonly tipSize: number;
+  readonly exponent: TaperExponent;
+  /** Width of a straight fin, m (ignored for pins). */
+  readonly width?: number;
+  /** Whether a straight fin's side edges convect (default cooled; ignored for pins). */
+  readonly edges?: Edges;
+}
+
+const GAUSS_NODE = Math.sqrt(3 / 5);
+const GAUSS_WEIGHT_OUTER = 5 / 9;
+const GAUSS_WEIGHT_CENTRE = 8 / 9;
+
+/** 3-point Gauss-Legendre rule on [a, b]. */
+function gauss3(a: number, b: number, f: (x: number) => number): number {
+  const mid = 0.5 * (a + b);
+  const half = 0.5 * (b - a);
+  return (
+    half *
+    (GAUSS_WEIGHT_OUTER * (f(mid - half * GAUSS_NODE) + f(mid + half * GAUSS_NODE)) + GAUSS_WEIGHT_CENTRE * f(mid))
+  );
+}
+
+/** g linear through (a, gA) and (b, gB). */
+function linearThrough(a: number, b: number, gA: number, gB: number): (x: number) => number {
+  const slope = (gB - gA) / (b - a);
+  return (x) => gA + slope * (x - a);
+}
+
+/** Cross-section and perimeter of a straight fin or a spine of given size (thickness or diameter). */
+function sectionOf(shape: 'straight' | 'pin', width: number, edges: Edges) {
+  if (shape === 'pin') {
+    return { area: (s: number) => (Math.PI * s * s) / 4, perimeter: (s: number) => Math.PI * s };
+  }
+  const edgeFactor = edges === 'cooled' ? 2 : 0;
+  return { area: (s: number) => width * s, perimeter: (s: number) => 2 * width + edgeFactor * s };
+}
+
+/** Straight fin or spine whose size follows s_tip + (s_base - s_tip)(1 - x/L)^e. */
+export function taperedGeometry(spec: TaperSpec): FinGeometry1D {
+  const { length: L, baseSize, exponent } = spec;
+  const tipSize = exponent === 0 ? baseSize : spec.tipSize;
+  const section = sectionOf(spec.shape, spec.width ?? 0, spec.edges ?? 'cooled');
+  const drop = baseSize - tipSize;
+  const taper = (x: number): number => {
+    const s = Math.max(0, 1 - x / L);
+    switch (exponent) {
+      case 0:
+        return 1;
+      case 0.5:
+        return Math.sqrt(s);
+      case 1:
+        return s;
+      case 2:
+        return s * s;
+      default: {
+        const never: never = exponent;
+        throw new Error(`unknown taper exponent ${String(never)}`);
+      }
+    }
+  };
+  const size = (x: number): number => tipSize + drop * taper(x);
+  const perimeter = (x: number): number => section.perimeter(size(x));
+  const perimeterIntegral = (a: number, b: number, gA: number, gB: number): number => {
+    if (b <= a) return 0;
+    const g = linearThrough(a, b, gA, gB);
+    if (exponent !== 0.5) return gauss3(a, b, (x) => g(x) * perimeter(x));
+    // x = L(1 - s^2), dx = -2 L s ds: the integrand is a polynomial in s.
+    const sA = Math.sqrt(Math.max(0, 1 - a / L));
+    const sB = Math.sqrt(Math.max(0, 1 - b / L));
+    return gauss3(sB, sA, (s) => {
+      const x = L * (1 - s * s);
+      return g(x) * section.perimeter(tipSize + drop * s) * 2 * L * s;
+    });
+  };
+  return {
+    shape: spec.shape,
+    length: L,
+    area: (x) => section.area(size(x)),
+    perimeter,
+    size,
+    baseArea: section.area(baseSize),
+    tipArea: section.area(tipSize),
+    faceArea: perimeterIntegral(0, L, 1, 1),
+    breakpoints: new Float64Array([0, L]),
+    tipTaperExponent: tipSize === 0 ? exponent : 0,
+    perimeterIntegral,
+  };
+}
+
+/** Annular fin of uniform thickness t between r1 and r2; x = r - r1. */
+export function annularGeometry(innerRadius: number, outerRadius: number, thickness: number): FinGeometry1D {
+  const L = outerRadius - innerRadius;
+  const perimeter = (x: number): number => 4 * Math.PI * (innerRadius + x);
+  const perimeterIntegral = (a: number, b: number, gA: number, gB: number): number => {
+    if (b <= a) return 0;
+    const g = linearThrough(a, b, gA, gB);
+    return gauss3(a, b, (x) => g(x) * perimeter(x));
+  };
+  return {
+    shape: 'annular',
+    length: L,
+    area: (x) => 2 * Math.PI * (innerRadius + x) * thickness,
+    perimeter,
+    size: () => thickness,
+    baseArea: 2 * Math.PI * innerRadius * thickness,
+    tipArea: 2 * Math.PI * outerRadius * thickness,
+    faceArea: perimeterIntegral(0, L, 1, 1),
+    breakpoints: new Float64Array([0, L]),
+    tipTaperExponent: 0,
+    perimeterIntegral,
+  };
+}
+
+/** Index j of the segment [xs[j], xs[j+1]] holding x (clamped to the first and last segments). */
+function segmentIndex(xs: Float64Array, x: number): number {
+  let lo = 0;
+  let hi = xs.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if ((xs[mid] as number) <= x) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** Profile given by points, linear between them (thickness of a straight fin or diameter of a pin). */
+export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinGeometry1D {
+  const xs = profile.x;
+  const sizes = profile.size;
+  const last = xs.length - 1;
+  if (profile.shape === 'straight' && profile.width === undefined) {
+    throw new InputError([{ path: 'fin.width', value: 'missing', accepted: 'a width > 0 for a tabulated straight fin' }]);
+  }
+  const section = sectionOf(profile.shape, profile.width ?? 0, edges);
+  const L = xs[last] as number;
+  const size = (x: number): number => {
+    const j = segmentIndex(xs, x);
+    const x0 = xs[j] as number;
+    const x1 = xs[j + 1] as number;
+    const s0 = sizes[j] as number;
+    const s1 = sizes[j + 1] as number;
+    const f = Math.min(1, Math.max(0, (x - x0) / (x1 - x0)));
+    return s0 + (s1 - s0) * f;
+  };
+  const perimeter = (x: number): number => section.perimeter(size(x));
+  const perimeterIntegral = (a: number, b: number, gA: number, gB: number): number => {
+    if (b <= a) return 0;
+    const g = linearThrough(a, b, gA, gB);
+    let sum = 0;
+    let left = a;
+    for (let j = segmentIndex(xs, a); j < last && left < b; j++) {
+      const right = Math.min(b, xs[j + 1] as number);
+      if (right > left) sum += gauss3(left, right, (x) => g(x) * perimeter(x));
+      left = right;
+    }
+    return sum;
+  };
+  const tipSize = sizes[last] as number;
+  return {
+    shape: profile.shape,
+    length: L,
+    area: (x) => section.area(size(x)),
+    perimeter,
+    size,
+    baseArea: section.area(sizes[0] as number),
+    tipArea: section.area(tipSize),
+    faceArea: perimeterIntegral(0, L, 1, 1),
+    breakpoints: Float64Array.from(xs),
+    tipTaperExponent: tipSize === 0 ? 1 : 0,
+    perimeterIntegral,
+  };
+}
+
+/** The 1-D geometry of a case's fin, for every profile of the case-file contract. */
+export function finGeometry(c: Case): FinGeometry1D {
+  const p = c.fin.profile;
+  const edges = c.fin.edges;
+  switch (p.kind) {
+    case 'rectangular':
+      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.thickness, tipSize: p.thickness, exponent: 0, width: p.width, edges });
+    case 'pin':
+      return taperedGeometry({ shape: 'pin', length: p.length, baseSize: p.diameter, tipSize: p.diameter, exponent: 0 });
+    case 'trapezoidal':
+      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: p.tipThickness, exponent: 1, width: p.width, edges });
+    case 'triangular':
+      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: 0, exponent: 1, width: p.width, edges });
+    case 'parabolic-concave':
+      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: 0, exponent: 2, width: p.width, edges });
+    case 'parabolic-convex':
+      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: 0, exponent: 0.5, width: p.width, edges });
+    case 'conical-pin':
+      return taperedGeometry({ shape: 'pin', length: p.length, baseSize: p.baseDiameter, tipSize: p.tipDiameter, exponent: 1 });
+    case 'annular':
+      return annularGeometry(p.innerRadius, p.outerRadius, p.thickness);
+    case 'tabulated':
+      return tabulatedGeometry(p, edges);
+    default: {
+      const never: never = p;
+      throw new Error(`unknown profile ${JSON.stringify(never)}`);
+    }
+  }
+}

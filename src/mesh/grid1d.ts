@@ -1,0 +1,170 @@
+/**
+ * 1-D node sets (uniform or graded, with nodes on every breakpoint) and the vertex-centred mesh
+ * built on them: interface cross-sections and control-volume surfaces.
+ *
+ * Node set: the breakpoints split [0, L] into segments; segment s gets n_s cells (shared in
+ * proportion to length, at least one) and nodes x = a + (b - a) g(j / n_s), where g maps [0, 1]
+ * onto itself: uniform g = xi; power law g = xi^p (toward the base), 1 - (1 - xi)^p (toward the
+ * tip), xi^p / (xi^p + (1 - xi)^p) (both); geometric g = (S^xi - 1)/(S - 1), S = stretch.
+ * Because g is fixed, doubling every n_s gives a nested grid (Roache, P. J., 1998, Verification and
+ * Validation in Computational Science and Engineering, Hermosa: systematic refinement by a constant
+ * ratio on mapped grids) [from memory]. Grading applies to the first segment (base) and the last (tip).
+ *
+ * Mesh: CV i spans the interfaces at the midpoints of its cells (half cells at the ends, i.e. the
+ * vertex-centred finite volume of Patankar, S. V., 1980, Numerical Heat Transfer and Fluid Flow,
+ * Hemisphere, §4.6, "practice A": faces midway between grid points [from memory]). Interface area A((x_i + x_{i+1})/2), m^2. The convective
+ * conductance of CV i for an h linear between nodes is integrated by Simpson's rule on each half
+ * cell, which is exact when P is at most quadratic within a cell (every profile except the edges
+ * of a convex parabola, a sqrt at the tip):
+ *   left half of cell [x_i, x_{i+1}], Δ = x_{i+1} - x_i, q = x_i + Δ/4, c = x_i + Δ/2:
+ *     ∫ h P ≈ (Δ/12) [h_i P_i + 4 h_q P_q + h_c P_c], h_q = (3h_i + h_{i+1})/4, h_c = (h_i + h_{i+1})/2,
+ *   so h_i gets (Δ/12)(P_i + 3 P_q + P_c/2) and h_{i+1} gets (Δ/12)(P_q + P_c/2); mirrored on the right half.
+ */
+import type { FinGeometry1D, Grading, GradingEnd, Grid1DSpec, Mesh1D } from './types.js';
+
+/** Positions closer than this fraction of L are the same breakpoint. */
+const BREAKPOINT_TOLERANCE = 1e-12;
+
+/** The map g: [0,1] -> [0,1] of a grading, with which ends of this segment it refines. */
+function gradingMap(grading: Grading, refineStart: boolean, refineEnd: boolean): (xi: number) => number {
+  const toward: GradingEnd | 'none' =
+    refineStart && refineEnd ? 'both' : refineStart ? 'base' : refineEnd ? 'tip' : 'none';
+  if (toward === 'none') return (xi) => xi;
+  switch (grading.kind) {
+    case 'uniform':
+      return (xi) => xi;
+    case 'power': {
+      const p = grading.exponent;
+      if (toward === 'base') return (xi) => Math.pow(xi, p);
+      if (toward === 'tip') return (xi) => 1 - Math.pow(1 - xi, p);
+      return (xi) => {
+        const a = Math.pow(xi, p);
+        return a / (a + Math.pow(1 - xi, p));
+      };
+    }
+    case 'geometric': {
+      const s = grading.stretch;
+      const towardBase = (xi: number): number => (Math.pow(s, xi) - 1) / (s - 1);
+      if (toward === 'base') return towardBase;
+      if (toward === 'tip') return (xi) => 1 - towardBase(1 - xi);
+      return (xi) => (xi <= 0.5 ? 0.5 * towardBase(2 * xi) : 1 - 0.5 * towardBase(2 * (1 - xi)));
+    }
+    default: {
+      const never: never = grading;
+      throw new Error(`unknown grading ${JSON.stringify(never)}`);
+    }
+  }
+}
+
+/** Sorted, de-duplicated breakpoints of the geometry and the spec, within [0, L], ends included. */
+export function mergeBreakpoints(length: number, ...lists: ArrayLike<number>[]): Float64Array {
+  const all: number[] = [0, length];
+  for (const list of lists) {
+    for (let i = 0; i < list.length; i++) {
+      const x = list[i] as number;
+      if (x > 0 && x < length) all.push(x);
+    }
+  }
+  all.sort((a, b) => a - b);
+  const merged: number[] = [];
+  for (const x of all) {
+    const prev = merged[merged.length - 1];
+    if (prev === undefined || x - prev > BREAKPOINT_TOLERANCE * length) merged.push(x);
+  }
+  merged[merged.length - 1] = length;
+  return Float64Array.from(merged);
+}
+
+/** Cells per segment: proportional to length (largest remainder), at least one each. */
+export function allocateCells(breakpoints: Float64Array, cells: number): Int32Array {
+  const segments = breakpoints.length - 1;
+  const length = (breakpoints[segments] as number) - (breakpoints[0] as number);
+  const counts = new Int32Array(segments);
+  const remainders: { index: number; rest: number }[] = [];
+  let used = 0;
+  for (let s = 0; s < segments; s++) {
+    const share = (cells * ((breakpoints[s + 1] as number) - (breakpoints[s] as number))) / length;
+    const whole = Math.max(1, Math.floor(share));
+    counts[s] = whole;
+    used += whole;
+    remainders.push({ index: s, rest: share - whole });
+  }
+  remainders.sort((a, b) => b.rest - a.rest);
+  for (let r = 0; used < cells && r < remainders.length; r++, used++) {
+    const index = (remainders[r] as { index: number }).index;
+    counts[index] = (counts[index] as number) + 1;
+  }
+  return counts;
+}
+
+/** Node positions for a geometry and a grid spec (nodes on every breakpoint). */
+export function gridNodes(geometry: FinGeometry1D, spec: Grid1DSpec): { x: Float64Array; cellSize: number } {
+  const L = geometry.length;
+  const breakpoints = mergeBreakpoints(L, geometry.breakpoints, spec.breakpoints ?? []);
+  const refine = spec.refine ?? 1;
+  const counts = allocateCells(breakpoints, Math.max(1, Math.round(spec.cells)));
+  const segments = counts.length;
+  let total = 0;
+  for (let s = 0; s < segments; s++) total += (counts[s] as number) * refine;
+  const x = new Float64Array(total + 1);
+  const grading = spec.grading ?? { kind: 'uniform' };
+  const towardBase = grading.kind !== 'uniform' && grading.toward !== 'tip';
+  const towardTip = grading.kind !== 'uniform' && grading.toward !== 'base';
+  let node = 0;
+  for (let s = 0; s < segments; s++) {
+    const a = breakpoints[s] as number;
+    const b = breakpoints[s + 1] as number;
+    const n = (counts[s] as number) * refine;
+    const g = gradingMap(grading, towardBase && s === 0, towardTip && s === segments - 1);
+    for (let j = 0; j < n; j++) x[node++] = a + (b - a) * g(j / n);
+  }
+  x[node] = L;
+  return { x, cellSize: L / total };
+}
+
+/** The vertex-centred mesh of a geometry: node positions, interface areas and CV surfaces. */
+export function buildMesh1D(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
+  const { x, cellSize } = gridNodes(geometry, spec);
+  const n = x.length;
+  const dx = new Float64Array(n - 1);
+  const interfaceArea = new Float64Array(n - 1);
+  const weightPrev = new Float64Array(n);
+  const weightSelf = new Float64Array(n);
+  const weightNext = new Float64Array(n);
+  const P = geometry.perimeter;
+  let pLeft = P(x[0] as number);
+  for (let i = 0; i < n - 1; i++) {
+    const xi = x[i] as number;
+    const delta = (x[i + 1] as number) - xi;
+    dx[i] = delta;
+    const centre = xi + 0.5 * delta;
+    interfaceArea[i] = geometry.area(centre);
+    const pQuarter = P(xi + 0.25 * delta);
+    const pCentre = P(centre);
+    const pThreeQuarter = P(xi + 0.75 * delta);
+    const pRight = P(x[i + 1] as number);
+    const w = delta / 12;
+    weightSelf[i] = (weightSelf[i] as number) + w * (pLeft + 3 * pQuarter + 0.5 * pCentre);
+    weightNext[i] = w * (pQuarter + 0.5 * pCentre);
+    weightPrev[i + 1] = w * (0.5 * pCentre + pThreeQuarter);
+    weightSelf[i + 1] = w * (0.5 * pCentre + 3 * pThreeQuarter + pRight);
+    pLeft = pRight;
+  }
+  const cvSurface = new Float64Array(n);
+  for (let i = 0; i < n; i++) cvSurface[i] = (weightPrev[i] as number) + (weightSelf[i] as number) + (weightNext[i] as number);
+  return {
+    nodes: n,
+    x,
+    dx,
+    interfaceArea,
+    cvSurface,
+    surfaceWeightPrev: weightPrev,
+    surfaceWeightSelf: weightSelf,
+    surfaceWeightNext: weightNext,
+    baseArea: geometry.baseArea,
+    tipArea: geometry.tipArea,
+    tipPerimeter: geometry.perimeter(geometry.length),
+    length: geometry.length,
+    cellSize,
+  };
+}

@@ -1,0 +1,5 @@
+/** Public API of the 1-D mesh layer: fin geometry from a case, node sets and the vertex-centred mesh. */
+export type { FinGeometry1D, FinShape1D, Grading, GradingEnd, Grid1DSpec, Mesh1D } from './types.js';
+export type { TaperExponent, TaperSpec } from './geometry1d.js';
+export { finGeometry, taperedGeometry, annularGeometry, tabulatedGeometry } from './geometry1d.js';
+export { buildMesh1D, gridNodes, mergeBreakpoints, allocateCells } from './grid1d.js';
