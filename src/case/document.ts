@@ -145,6 +145,6 @@ function locateIn(
     node = next;
   }
   const range = nodeRange(node);
-  if (best && isScalar(node) && range) best = { ...best, source: text.slice(range[0], range[1]).trim() };
+  if (best && isScalar(node) && range) best = { ...best, scalar: { text: text.slice(range[0], range[1]).trim(), value: node.value } };
   return best;
 }

@@ -12,11 +12,11 @@ export interface PendingIssue {
   accepted: string;
 }
 
-/** Where a key path is in the source file, and the scalar's text as written when it is a scalar. */
+/** Where a key path is in the source file; for a scalar, its text as written and the value read from it. */
 export interface SourcePosition {
   line: number;
   column: number;
-  source?: string;
+  scalar?: { text: string; value: unknown };
 }
 
 export type Locate = (path: KeyPath) => SourcePosition | undefined;
@@ -66,10 +66,13 @@ function fromUnion(issue: Extract<ZodIssue, { code: 'invalid_union' }>, path: Ke
   return [{ path, accepted: hint ? `${issue.message} ${hint}` : issue.message }];
 }
 
-/** The value at `path` as the user gave it: the scalar's source text when known, else a compact rendering. */
+/**
+ * The value at `path` as the user gave it: the scalar's source text when the raw value is still the one read
+ * from the file (the map command substitutes values), else a compact rendering of the raw value.
+ */
 export function displayValue(raw: unknown, path: KeyPath, position?: SourcePosition): string {
-  if (position?.source !== undefined) return position.source;
   const value = getByKeyPath(raw, path);
+  if (position?.scalar && Object.is(position.scalar.value, value)) return position.scalar.text;
   return renderValue(value, pathExists(raw, path));
 }
 
