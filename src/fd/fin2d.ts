@@ -1,0 +1,131 @@
+/**
+ * fd-2d: the fin solved across its thickness on one grid.
+ *
+ * Pipeline (one function per stage): case -> 2-D problem (fin2dCase.ts) -> grid (mesh/grid2d.ts) ->
+ * conduction operator (assemble2d.ts) -> boundary terms and system (assemble2dBoundary.ts) -> solve
+ * (any Solver2D; automatic choice by default) -> heat rates and lines (fin2dHeat.ts, here).
+ * Temperatures: the field is the excess theta = T - T_inf (K) at the grid nodes, flat, with the grid's
+ * shape and strides (ndarray style, shared with the grid, never copied). Heat rates in W for the whole
+ * fin (width x section for straight fins, 2 pi x section for pins and annular fins).
+ */
+import type { Case } from '../case/types.js';
+import { buildGrid2D, type Grid2D } from '../mesh/grid2d.js';
+import { assembleConduction2D } from './assemble2d.js';
+import { buildSystem2D, coefficientAt, discretizeBoundaries, lumpedIntegral } from './assemble2dBoundary.js';
+import { fin2dProblem, type Fin2DProblem } from './fin2dCase.js';
+import { heatRates2D } from './fin2dHeat.js';
+import { autoSolver2D } from './sparse/autoSolver.js';
+import type { Solver2D } from './sparse/stencil9.js';
+
+export interface Fin2DOptions {
+  /** Grid nodes along the fin (>= 2). */
+  nx: number;
+  /** Grid nodes across the half-thickness (or radius) (>= 2). */
+  ny: number;
+  /** Linear solver; default: chosen by grid shape (banded Cholesky or multigrid-preconditioned CG). */
+  solver?: Solver2D;
+  /** Largest/smallest cell length along the fin, smallest at the base (default 1: uniform). */
+  baseGrading?: number;
+  /** Largest/smallest cell height across, smallest at the face (default 1: uniform). */
+  faceGrading?: number;
+}
+
+export interface Fin2DLine {
+  /** Position along the fin, m (annular: radius). */
+  x_m: Float64Array;
+  /** Position across the fin, m (half-thickness coordinate or radius). */
+  y_m: Float64Array;
+  T_degC: Float64Array;
+}
+
+export interface Fin2DResult {
+  model: 'fd-2d';
+  grid: Grid2D;
+  /** Excess temperature theta = T - T_inf (K) at the nodes: index i * grid.stride[0] + j * grid.stride[1]. */
+  field: Float64Array;
+  ambient_degC: number;
+  /** Heat entering the fin at its base, W (whole fin). */
+  heatRate_W: number;
+  /** Heat leaving through the faces and tip, W. */
+  surfaceHeatRate_W: number;
+  /** |Q_base - Q_surfaces| / Q_base. */
+  energyBalance: number;
+  /** Q / (heat rate with every cooled surface at the base temperature, same h); null for an infinite tip. */
+  efficiency: number | null;
+  /** Q / (h at the base x base area x theta_base). */
+  effectiveness: number;
+  baseTemperature_degC: number;
+  /** At the centre of the tip (x = end of the section, on the mid-plane or axis), degC. */
+  tipTemperature_degC: number;
+  /** Mid-plane (straight, annular) or axis (pins), from base to tip. */
+  centreline: Fin2DLine;
+  /** The cooled face, from base to tip. */
+  surface: Fin2DLine;
+  /** h (t/2)/k (straight, annular) or h (D/2)/k (pins) at the base. */
+  biot: number;
+  /** True when an infinite fin was cut and closed by its exact slowest mode (see fin2dCase.ts). */
+  truncatedInfinite: boolean;
+}
+
+export function solveFin2D(c: Case, opts: Fin2DOptions): Fin2DResult {
+  return solveFin2DProblem(fin2dProblem(c), opts);
+}
+
+export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fin2DResult {
+  const grid = buildGrid2D(problem.section, opts);
+  const K = assembleConduction2D(grid, problem.k);
+  const terms = discretizeBoundaries(grid, problem.conditions);
+  const system = buildSystem2D(K, terms);
+  const field = (opts.solver ?? autoSolver2D)(system);
+  const rates = heatRates2D(K, terms, field);
+  const depth = grid.depth;
+  const heatRate = rates.base * depth;
+  const { thetaBase, ambient_degC } = problem;
+
+  // Efficiency: every cooled surface (faces, and the tip when convective) at the base temperature.
+  let ideal = 0;
+  for (const side of [terms.face, terms.tip]) {
+    if (side.kind === 'convective') for (const g of side.conductance) ideal += g * thetaBase;
+  }
+  const efficiency = problem.truncatedInfinite ? null : (rates.base / ideal);
+  const baseArea = sum(lumpedIntegral(grid, terms.base.nodes, () => 1));
+  const hBase = coefficientAt(problem.h, 0, problem.section.length);
+  const effectiveness = rates.base / (hBase * baseArea * thetaBase);
+
+  const { nodesX: nx, nodesY: ny } = grid;
+  const line = (j: number): Fin2DLine => {
+    const x_m = new Float64Array(nx);
+    const y_m = new Float64Array(nx);
+    const T_degC = new Float64Array(nx);
+    for (let i = 0; i < nx; i++) {
+      const p = i * ny + j;
+      x_m[i] = grid.x[p] as number;
+      y_m[i] = grid.y[p] as number;
+      T_degC[i] = (field[p] as number) + ambient_degC;
+    }
+    return { x_m, y_m, T_degC };
+  };
+  return {
+    model: 'fd-2d',
+    grid,
+    field,
+    ambient_degC,
+    heatRate_W: heatRate,
+    surfaceHeatRate_W: rates.surfaces * depth,
+    energyBalance: rates.energyBalance,
+    efficiency,
+    effectiveness,
+    baseTemperature_degC: thetaBase + ambient_degC,
+    tipTemperature_degC: (field[(nx - 1) * ny] as number) + ambient_degC,
+    centreline: line(0),
+    surface: line(ny - 1),
+    biot: (hBase * problem.section.halfSize(0)) / problem.k,
+    truncatedInfinite: problem.truncatedInfinite,
+  };
+}
+
+function sum(a: Float64Array): number {
+  let s = 0;
+  for (const v of a) s += v;
+  return s;
+}

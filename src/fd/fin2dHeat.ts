@@ -1,0 +1,60 @@
+/**
+ * Heat rates of a solved 2-D section, from the node balances of the finite-volume scheme.
+ *
+ * For node p the balance of its control volume reads (sign convention of assemble2dBoundary.ts: heat
+ * leaving the fin is positive)
+ *     R_p = (K theta)_p + sum over its non-fixed boundaries s of G_s,p (theta_p - thetaFar_s),
+ * where R_p is the heat entering through a fixed-temperature boundary (0 on every other node). The heat
+ * entering through a boundary is then: fixed, the sum of R_p over its nodes (the "reaction"); convective or
+ * contact, sum G_p (thetaFar - theta_p); adiabatic, 0. Because K has zero row and column sums, heat in at
+ * the base equals heat out through the faces and tip up to the solver's residual:
+ *     energyBalance = |Q_base - Q_surfaces| / |Q_base|.
+ * Units: W per unit depth (per metre of width, or per radian); multiply by the grid's depth for the fin.
+ */
+import type { BoundaryTerms2D, SideTerms } from './assemble2dBoundary.js';
+import { applyStencil9, type Stencil9 } from './sparse/stencil9.js';
+
+export interface HeatRates2D {
+  /** Heat entering the fin through the base, W per unit depth. */
+  base: number;
+  /** Heat leaving through the faces, W per unit depth. */
+  face: number;
+  /** Heat leaving through the tip, W per unit depth. */
+  tip: number;
+  /** face + tip. */
+  surfaces: number;
+  /** |base - surfaces| / |base|. */
+  energyBalance: number;
+}
+
+export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): HeatRates2D {
+  const conducted = applyStencil9(K, theta, new Float64Array(theta.length));
+  const sides: SideTerms[] = [terms.base, terms.face, terms.tip];
+  // Boundary exchange of every node with its non-fixed boundaries.
+  const exchange = new Float64Array(theta.length);
+  for (const side of sides) {
+    if (side.kind === 'fixed') continue;
+    side.nodes.forEach((p, e) => {
+      exchange[p] = (exchange[p] as number) + (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta);
+    });
+  }
+  const claimed = new Uint8Array(theta.length);
+  const heatIn = (side: SideTerms): number => {
+    let q = 0;
+    side.nodes.forEach((p, e) => {
+      if (side.kind === 'fixed') {
+        if (claimed[p] === 1) return; // a corner shared by two fixed boundaries counts once
+        claimed[p] = 1;
+        q += (conducted[p] as number) + (exchange[p] as number);
+      } else {
+        q += (side.conductance[e] as number) * (side.farTheta - (theta[p] as number));
+      }
+    });
+    return q;
+  };
+  const base = heatIn(terms.base);
+  const tip = -heatIn(terms.tip);
+  const face = -heatIn(terms.face);
+  const surfaces = face + tip;
+  return { base, face, tip, surfaces, energyBalance: Math.abs(base - surfaces) / Math.abs(base) };
+}

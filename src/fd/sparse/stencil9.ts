@@ -1,0 +1,121 @@
+/**
+ * Symmetric 9-point operators on a structured node grid: the matrix format every 2-D solver reads.
+ *
+ * Nodes are numbered with the short (thickness) direction fastest: p = i * nodesY + j, with
+ * i = 0..nodesX-1 along the fin and j = 0..nodesY-1 across it. A symmetric matrix whose couplings reach
+ * only the eight neighbours is stored as five node arrays (the upper half of the stencil):
+ *   diag[p]       A(p, p)
+ *   east[p]       A(p, (i+1, j))        = A((i+1, j), p)
+ *   north[p]      A(p, (i, j+1))
+ *   northEast[p]  A(p, (i+1, j+1))
+ *   southEast[p]  A(p, (i+1, j-1))
+ * so that
+ *   (A x)_p = diag_p x_p + east_p x_E + east_W x_W + north_p x_N + north_S x_S
+ *           + northEast_p x_NE + northEast_SW x_SW + southEast_p x_SE + southEast_NW x_NW.
+ * Entries that would point outside the grid are zero. Any symmetric matrix in this form has bandwidth
+ * nodesY + 1, which is what the banded Cholesky factor exploits.
+ */
+
+export interface Stencil9 {
+  readonly nodesX: number;
+  readonly nodesY: number;
+  readonly diag: Float64Array;
+  readonly east: Float64Array;
+  readonly north: Float64Array;
+  readonly northEast: Float64Array;
+  readonly southEast: Float64Array;
+}
+
+/** A linear system A theta = rhs with A symmetric positive definite in the 9-point form. */
+export interface System2D {
+  readonly matrix: Stencil9;
+  readonly rhs: Float64Array;
+}
+
+/** Any solver of a 2-D system: returns the solution (a new array). */
+export type Solver2D = (system: System2D) => Float64Array;
+
+export function emptyStencil9(nodesX: number, nodesY: number): Stencil9 {
+  const n = nodesX * nodesY;
+  return {
+    nodesX,
+    nodesY,
+    diag: new Float64Array(n),
+    east: new Float64Array(n),
+    north: new Float64Array(n),
+    northEast: new Float64Array(n),
+    southEast: new Float64Array(n),
+  };
+}
+
+/**
+ * Adds `value` to the symmetric pair A(p, q) = A(q, p), where q is the neighbour (di, dj) of p = (i, j),
+ * with (di, dj) one of the eight neighbour offsets or (0, 0) for the diagonal.
+ */
+export function addCoupling(a: Stencil9, i: number, j: number, di: number, dj: number, value: number): void {
+  const ny = a.nodesY;
+  // Normalise to the upper half: di > 0, or di = 0 and dj > 0.
+  if (di < 0 || (di === 0 && dj < 0)) {
+    i += di;
+    j += dj;
+    di = -di;
+    dj = -dj;
+  }
+  const p = i * ny + j;
+  if (di === 0 && dj === 0) a.diag[p] = (a.diag[p] as number) + value;
+  else if (di === 0 && dj === 1) a.north[p] = (a.north[p] as number) + value;
+  else if (di === 1 && dj === 0) a.east[p] = (a.east[p] as number) + value;
+  else if (di === 1 && dj === 1) a.northEast[p] = (a.northEast[p] as number) + value;
+  else if (di === 1 && dj === -1) a.southEast[p] = (a.southEast[p] as number) + value;
+  else throw new RangeError(`addCoupling: (${di}, ${dj}) is not a 9-point neighbour`);
+}
+
+/** out = A x (out may not alias x). */
+export function applyStencil9(a: Stencil9, x: Float64Array, out: Float64Array): Float64Array {
+  const { nodesX: nx, nodesY: ny, diag, east, north, northEast, southEast } = a;
+  for (let i = 0; i < nx; i++) {
+    const base = i * ny;
+    for (let j = 0; j < ny; j++) {
+      const p = base + j;
+      let s = (diag[p] as number) * (x[p] as number);
+      if (j + 1 < ny) s += (north[p] as number) * (x[p + 1] as number);
+      if (j > 0) s += (north[p - 1] as number) * (x[p - 1] as number);
+      if (i + 1 < nx) {
+        s += (east[p] as number) * (x[p + ny] as number);
+        if (j + 1 < ny) s += (northEast[p] as number) * (x[p + ny + 1] as number);
+        if (j > 0) s += (southEast[p] as number) * (x[p + ny - 1] as number);
+      }
+      if (i > 0) {
+        s += (east[p - ny] as number) * (x[p - ny] as number);
+        if (j > 0) s += (northEast[p - ny - 1] as number) * (x[p - ny - 1] as number);
+        if (j + 1 < ny) s += (southEast[p - ny + 1] as number) * (x[p - ny + 1] as number);
+      }
+      out[p] = s;
+    }
+  }
+  return out;
+}
+
+/** r = rhs - A x. */
+export function residual(system: System2D, x: Float64Array, out = new Float64Array(x.length)): Float64Array {
+  applyStencil9(system.matrix, x, out);
+  const b = system.rhs;
+  for (let p = 0; p < out.length; p++) out[p] = (b[p] as number) - (out[p] as number);
+  return out;
+}
+
+/** The full matrix as rows of numbers (small grids only: tests and dense reference solves). */
+export function stencilToDense(a: Stencil9): number[][] {
+  const n = a.nodesX * a.nodesY;
+  if (n > 4000) throw new RangeError(`stencilToDense: ${n} unknowns is too many for a dense matrix`);
+  const rows: number[][] = Array.from({ length: n }, () => new Array<number>(n).fill(0));
+  const e = new Float64Array(n);
+  const col = new Float64Array(n);
+  for (let q = 0; q < n; q++) {
+    e.fill(0);
+    e[q] = 1;
+    applyStencil9(a, e, col);
+    for (let p = 0; p < n; p++) (rows[p] as number[])[q] = col[p] as number;
+  }
+  return rows;
+}
