@@ -61,3 +61,19 @@ export async function svgToPng(svg: string, options: RenderOptions = {}): Promis
   const png = resvg.render().asPng();
   return setPngDpi(png, dpi);
 }
+
+export type ChartFormat = 'png' | 'svg';
+
+/** The bytes to write for `--out FILE.png|FILE.svg`: the SVG text as UTF-8, or its PNG rendering. */
+export async function chartBytes(svg: string, format: ChartFormat, options: RenderOptions = {}): Promise<Buffer> {
+  switch (format) {
+    case 'svg':
+      return Buffer.from(svg, 'utf8');
+    case 'png':
+      return svgToPng(svg, options);
+    default: {
+      const unreachable: never = format;
+      throw new Error(`unknown chart format ${String(unreachable)}`);
+    }
+  }
+}

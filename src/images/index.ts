@@ -1,0 +1,39 @@
+/**
+ * Charts for fincheck: plain data in (typed arrays, strings), SVG text out, PNG through resvg.
+ * The module knows nothing about fins beyond the labels it is given.
+ *
+ *   lineChart   temperature profiles, heat flow / loss panels (series, legend notes, point annotations)
+ *   fieldChart  2-D field on a structured boundary-fitted grid: true outline, colour bar, labelled iso-lines
+ *   mapChart    scalar over a regular (linear/log) parameter grid, diverging colours, labelled contour levels
+ *   svgToPng    rasterise with the bundled DejaVu Sans; chartBytes for "--out FILE.png|FILE.svg"
+ */
+
+export { lineChart } from './line-chart.js';
+export type { LineChartSpec, LinePanel, LineSeries, PointAnnotation, LegendPlacement, ChartResult, PanelGeometry } from './line-chart.js';
+
+export { fieldChart, gridLayout } from './field-chart.js';
+export type { FieldChartSpec, FieldChartResult, StructuredGrid, EdgeLabels } from './field-chart.js';
+
+export { mapChart } from './map-chart.js';
+export type { MapChartSpec, MapChartResult, MapLevel, MapPoint } from './map-chart.js';
+
+export { svgToPng, chartBytes, fontFiles } from './render.js';
+export type { RenderOptions, ChartFormat } from './render.js';
+export { readPngDpi, setPngDpi } from './png-dpi.js';
+
+export { contourLines, placeLineLabel, polylineLength } from './contour.js';
+export type { Polyline, LabelAnchor } from './contour.js';
+export type { GridLayout } from './field-raster.js';
+
+export { linearTicks, logTicks, niceNumber, formatTick, formatLogTick } from './ticks.js';
+export type { LinearTicks, LogTicks, TickMode } from './ticks.js';
+export { project, unproject, makeAxis } from './scales.js';
+export type { Scale, ScaleKind, Axis } from './scales.js';
+
+export { getColormap, colormapRgb, colormapHex, colormapLut } from './colormaps.js';
+export type { Colormap, ColormapName, ColormapKind } from './colormaps.js';
+
+export type { LineStyle } from './series-styles.js';
+export type { MarkerShape } from './markers.js';
+export type { Rect } from './layout.js';
+export { defaultWidth, defaultHeight } from './theme.js';
