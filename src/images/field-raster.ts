@@ -51,7 +51,6 @@ export function rasterizeStructuredField(
     const bx = px[b] as number, by = py[b] as number;
     const cx = px[c] as number, cy = py[c] as number;
     const va = values[a] as number, vb = values[b] as number, vc = values[c] as number;
-    if (!Number.isFinite(va) || !Number.isFinite(vb) || !Number.isFinite(vc)) return;
     const area = (bx - ax) * (cy - ay) - (cx - ax) * (by - ay);
     if (area === 0 || !Number.isFinite(area)) return;
     // Pixel centres sit at (x + 0.5, y + 0.5).
@@ -89,6 +88,9 @@ export function rasterizeStructuredField(
       const n10 = n00 + strideI;
       const n01 = n00 + strideJ;
       const n11 = n10 + strideJ;
+      // A cell with any non-finite node is left out whole (as the contour lines leave it out).
+      if (!Number.isFinite(values[n00] as number) || !Number.isFinite(values[n10] as number)) continue;
+      if (!Number.isFinite(values[n01] as number) || !Number.isFinite(values[n11] as number)) continue;
       fillTriangle(n00, n10, n11);
       fillTriangle(n00, n11, n01);
     }
