@@ -19,7 +19,7 @@
  */
 import type { HDistribution } from '../case/types.js';
 import { boundaryNodes, radiusAt, type BoundaryName, type Grid2D } from '../mesh/grid2d.js';
-import { applyStencil9, type Stencil9, type System2D } from './sparse/stencil9.js';
+import { applyStencil9, couplingOf, type Stencil9, type System2D } from './sparse/stencil9.js';
 
 /** Convection coefficient along the fin (the linear distributions of the case contract). */
 export type LinearH = Exclude<HDistribution, { kind: 'power' }>;
@@ -174,6 +174,29 @@ export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
   for (let p = 0; p < n; p++) {
     if (fixed[p] === 0) rhs[p] = (rhs[p] as number) - (moved[p] as number);
   }
+  // Exact row sums after elimination: boundary conductances plus the couplings to fixed nodes.
+  const excess = new Float64Array(n);
+  for (const side of [terms.base, terms.face, terms.tip]) {
+    side.nodes.forEach((p, e) => {
+      excess[p] = (excess[p] as number) + (side.conductance[e] as number);
+    });
+  }
+  for (let p = 0; p < n; p++) {
+    if (fixed[p] === 1) {
+      excess[p] = 1;
+      continue;
+    }
+    const i = Math.floor(p / ny);
+    const j = p - i * ny;
+    for (let di = -1; di <= 1; di++) {
+      for (let dj = -1; dj <= 1; dj++) {
+        const q = p + di * ny + dj;
+        if ((di !== 0 || dj !== 0) && i + di >= 0 && i + di < nx && j + dj >= 0 && j + dj < ny && fixed[q] === 1) {
+          excess[p] = (excess[p] as number) - couplingOf(K, i, j, di, dj);
+        }
+      }
+    }
+  }
   for (let p = 0; p < n; p++) {
     if (fixed[p] === 0) continue;
     const i = Math.floor(p / ny);
@@ -191,5 +214,5 @@ export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
       if (j + 1 < ny) matrix.southEast[p - ny + 1] = 0;
     }
   }
-  return { matrix, rhs };
+  return { matrix, rhs, excess };
 }

@@ -12,7 +12,7 @@
  * Units: W per unit depth (per metre of width, or per radian); multiply by the grid's depth for the fin.
  */
 import type { BoundaryTerms2D, SideTerms } from './assemble2dBoundary.js';
-import { applyStencil9, type Stencil9 } from './sparse/stencil9.js';
+import { couplingOf, type Stencil9 } from './sparse/stencil9.js';
 
 export interface HeatRates2D {
   /** Heat entering the fin through the base, W per unit depth. */
@@ -28,7 +28,7 @@ export interface HeatRates2D {
 }
 
 export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): HeatRates2D {
-  const conducted = applyStencil9(K, theta, new Float64Array(theta.length));
+  const ny = K.nodesY;
   const sides: SideTerms[] = [terms.base, terms.face, terms.tip];
   // Boundary exchange of every node with its non-fixed boundaries.
   const exchange = new Float64Array(theta.length);
@@ -39,13 +39,30 @@ export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64A
     });
   }
   const claimed = new Uint8Array(theta.length);
+  const inSide = new Uint8Array(theta.length);
   const heatIn = (side: SideTerms): number => {
     let q = 0;
+    inSide.fill(0);
+    for (const p of side.nodes) inSide[p] = 1;
     side.nodes.forEach((p, e) => {
       if (side.kind === 'fixed') {
         if (claimed[p] === 1) return; // a corner shared by two fixed boundaries counts once
         claimed[p] = 1;
-        q += (conducted[p] as number) + (exchange[p] as number);
+        // Conduction from p to the nodes off this boundary, in difference form: the couplings between
+        // nodes of the boundary cancel in pairs and are left out, so no round-off of them remains.
+        const i = Math.floor(p / ny);
+        const j = p - i * ny;
+        const tp = theta[p] as number;
+        let conducted = 0;
+        for (let di = -1; di <= 1; di++) {
+          for (let dj = -1; dj <= 1; dj++) {
+            if (di === 0 && dj === 0) continue;
+            const c = couplingOf(K, i, j, di, dj);
+            const nb = p + di * ny + dj;
+            if (c !== 0 && inSide[nb] === 0) conducted += c * ((theta[nb] as number) - tp);
+          }
+        }
+        q += conducted + (exchange[p] as number);
       } else {
         q += (side.conductance[e] as number) * (side.farTheta - (theta[p] as number));
       }

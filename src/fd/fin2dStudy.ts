@@ -12,7 +12,7 @@
  */
 import type { Case } from '../case/types.js';
 import { fin2dProblem, type Fin2DProblem } from './fin2dCase.js';
-import { solveFin2DProblem, type Fin2DResult } from './fin2d.js';
+import { DEFAULT_GRADING, solveFin2DProblem, type Fin2DResult } from './fin2d.js';
 import { richardsonGci, type RefinementStudy } from './refinement.js';
 import type { Solver2D } from './sparse/stencil9.js';
 
@@ -23,7 +23,7 @@ export interface Fin2DStudyOptions {
   coarseCellsAcross?: number;
   /** Target cell aspect ratio (length along / height across) on the base of the fin (default 2). */
   aspect?: number;
-  /** Grading toward the base and the face (largest/smallest cell); defaults in DEFAULT_GRADING. */
+  /** Grading toward the base and the face (largest/smallest cell); defaults in DEFAULT_GRADING (fin2d.ts). */
   baseGrading?: number;
   faceGrading?: number;
   solver?: Solver2D;
@@ -58,13 +58,6 @@ export interface Fin2DStudy {
   energyBalance: number;
 }
 
-/**
- * Grading ratios used by default: cells 8x smaller at the base than at the tip, and at the face than on
- * the mid-plane. Chosen by measurement over the plate-fin series of references.md section 4 (Bi 0.01-2,
- * mL 0.5-4): the worst extrapolated error fell from 2.5e-5 (ratios 4) and 1.2e-4 (one direction only)
- * to 1.2e-5, and the observed order rose from 1.76-1.98 to 1.85-1.99, for the same node counts.
- */
-export const DEFAULT_GRADING = { base: 8, face: 8 } as const;
 
 export function studyFin2D(c: Case, opts: Fin2DStudyOptions = {}): Fin2DStudy {
   return studyFin2DProblem(fin2dProblem(c), opts);

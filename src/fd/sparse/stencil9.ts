@@ -26,10 +26,17 @@ export interface Stencil9 {
   readonly southEast: Float64Array;
 }
 
-/** A linear system A theta = rhs with A symmetric positive definite in the 9-point form. */
+/**
+ * A linear system A theta = rhs with A symmetric positive definite in the 9-point form.
+ * `excess`, when given, is the exact row sum of A (for a conduction matrix: the conductance of each node
+ * to fixed-temperature surroundings). Residuals are then evaluated in difference form,
+ *   (A x)_p = sum_{q != p} A_pq (x_q - x_p) + excess_p x_p,
+ * which does not lose the small heat flows along a thin fin to round-off in the large couplings across it.
+ */
 export interface System2D {
   readonly matrix: Stencil9;
   readonly rhs: Float64Array;
+  readonly excess?: Float64Array;
 }
 
 /** Any solver of a 2-D system: returns the solution (a new array). */
@@ -96,9 +103,53 @@ export function applyStencil9(a: Stencil9, x: Float64Array, out: Float64Array): 
   return out;
 }
 
-/** r = rhs - A x. */
+/**
+ * out = sum_{q != p} A_pq (x_q - x_p) + excess_p x_p: A x for a matrix whose row sums are `excess`
+ * (zero for a conduction operator K), without the cancellation of the diagonal against the couplings.
+ */
+export function applyDifferenceForm(a: Stencil9, excess: Float64Array | null, x: Float64Array, out: Float64Array): Float64Array {
+  const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = a;
+  for (let i = 0; i < nx; i++) {
+    const base = i * ny;
+    for (let j = 0; j < ny; j++) {
+      const p = base + j;
+      const xp = x[p] as number;
+      let s = excess === null ? 0 : (excess[p] as number) * xp;
+      if (j + 1 < ny) s += (north[p] as number) * ((x[p + 1] as number) - xp);
+      if (j > 0) s += (north[p - 1] as number) * ((x[p - 1] as number) - xp);
+      if (i + 1 < nx) {
+        s += (east[p] as number) * ((x[p + ny] as number) - xp);
+        if (j + 1 < ny) s += (northEast[p] as number) * ((x[p + ny + 1] as number) - xp);
+        if (j > 0) s += (southEast[p] as number) * ((x[p + ny - 1] as number) - xp);
+      }
+      if (i > 0) {
+        s += (east[p - ny] as number) * ((x[p - ny] as number) - xp);
+        if (j > 0) s += (northEast[p - ny - 1] as number) * ((x[p - ny - 1] as number) - xp);
+        if (j + 1 < ny) s += (southEast[p - ny + 1] as number) * ((x[p - ny + 1] as number) - xp);
+      }
+      out[p] = s;
+    }
+  }
+  return out;
+}
+
+/** Coupling A(p, q) between p = (i, j) and q = (i + di, j + dj), |di|, |dj| <= 1 (0 outside the grid). */
+export function couplingOf(a: Stencil9, i: number, j: number, di: number, dj: number): number {
+  const ni = i + di;
+  const nj = j + dj;
+  if (ni < 0 || nj < 0 || ni >= a.nodesX || nj >= a.nodesY) return 0;
+  if (di < 0 || (di === 0 && dj < 0)) return couplingOf(a, ni, nj, -di, -dj);
+  const p = i * a.nodesY + j;
+  if (di === 0 && dj === 0) return a.diag[p] as number;
+  if (di === 0) return a.north[p] as number;
+  if (dj === 0) return a.east[p] as number;
+  return dj === 1 ? (a.northEast[p] as number) : (a.southEast[p] as number);
+}
+
+/** r = rhs - A x (difference form when the system carries its row sums). */
 export function residual(system: System2D, x: Float64Array, out = new Float64Array(x.length)): Float64Array {
-  applyStencil9(system.matrix, x, out);
+  if (system.excess === undefined) applyStencil9(system.matrix, x, out);
+  else applyDifferenceForm(system.matrix, system.excess, x, out);
   const b = system.rhs;
   for (let p = 0; p < out.length; p++) out[p] = (b[p] as number) - (out[p] as number);
   return out;
