@@ -1,0 +1,35 @@
+/** `fincheck check CASE`: the reference solution against every applicable shortcut. */
+import type { Command } from 'commander';
+import { loadCase } from '../../src/case/parse.js';
+import { runCheck } from '../../src/compare/check.js';
+import { formatCheck } from '../../src/compare/format-check.js';
+import type { Io } from '../io.js';
+import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import type { SetExit } from '../program.js';
+
+export function registerCheck(program: Command, io: Io, setExit: SetExit): Command {
+  return program
+    .command('check')
+    .argument('<case>', 'case file (YAML or JSON)')
+    .description('solve the fin and show how far each textbook shortcut drifts from the solution, and why')
+    .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
+    .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
+    .option('--json', 'print one JSON document (outputs.md) instead of the table')
+    .option('--strict', 'exit with code 1 when any shortcut is unsafe')
+    .addHelpText(
+      'after',
+      `
+Examples:
+  fincheck check demo/inverter-plate-fin.yaml
+  fincheck check demo/polymer-fin-liquid-cooled.yaml --tolerance 5% --json
+  fincheck check my-fin.yaml --strict        # exit 1 when a shortcut is unsafe`,
+    )
+    .action(async (file: string, o: { tolerance: string; reference: string; json?: boolean; strict?: boolean }) => {
+      const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
+      const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
+      const c = loadCase(file);
+      const { report } = await runCheck(c, { tolerance, reference });
+      io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatCheck(c, report));
+      if (o.strict && report.models.some((m) => m.verdict === 'unsafe')) setExit(1);
+    });
+}

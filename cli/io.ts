@@ -1,0 +1,28 @@
+/** Where a command writes. Commands never touch process.stdout or process.exit directly. */
+export interface Io {
+  out(text: string): void;
+  err(text: string): void;
+  /** True when stderr is a terminal (progress bars only then). */
+  errIsTTY: boolean;
+}
+
+export function processIo(): Io {
+  return {
+    out: (t) => void process.stdout.write(t),
+    err: (t) => void process.stderr.write(t),
+    errIsTTY: Boolean(process.stderr.isTTY),
+  };
+}
+
+/** Collects output in memory: for tests and for commands that must write nothing on failure. */
+export function bufferIo(): Io & { stdout: () => string; stderr: () => string } {
+  let o = '';
+  let e = '';
+  return {
+    out: (t) => void (o += t),
+    err: (t) => void (e += t),
+    errIsTTY: false,
+    stdout: () => o,
+    stderr: () => e,
+  };
+}

@@ -1,0 +1,33 @@
+/**
+ * Option schemas shared by commands: zod parses and coerces; a failure becomes a UsageError that
+ * names the option, the value and what is accepted (exit 2).
+ */
+import { z } from 'zod';
+import { UsageError } from '../src/errors.js';
+
+/** "2%", "2 %", "0.02": a relative tolerance in (0, 1). */
+export const toleranceOption = z
+  .string()
+  .trim()
+  .transform((s, ctx) => {
+    const m = /^([0-9]*\.?[0-9]+(?:e-?[0-9]+)?)\s*(%?)$/i.exec(s);
+    const v = m ? Number(m[1]) / (m[2] ? 100 : 1) : Number.NaN;
+    if (!(v > 0 && v < 1)) {
+      ctx.addIssue({ code: 'custom', message: 'a relative tolerance such as "2%" or 0.02 (between 0 and 1)' });
+      return z.NEVER;
+    }
+    return v;
+  });
+
+export const referenceOption = z.enum(['auto', '1d', '2d']);
+
+/** An integer node count for a single 1-D solve (3 .. 1e7). */
+export const nodesOption = z.coerce.number().int().min(3).max(10_000_000);
+
+/** Parses `value` with `schema`, or throws a UsageError naming `--option`. */
+export function parseOption<T>(option: string, schema: z.ZodType<T>, value: unknown, accepted?: string): T {
+  const r = schema.safeParse(value);
+  if (r.success) return r.data;
+  const what = accepted ?? r.error.issues[0]?.message ?? 'a valid value';
+  throw new UsageError(`${option}: got ${JSON.stringify(value)}; expected ${what}`);
+}

@@ -1,0 +1,7 @@
+/** The cautions every design-guiding output carries (outputs.md `cautions`). */
+export const CAUTIONS: readonly string[] = [
+  'These are engineering estimates: confirm the design by test before relying on it.',
+  'The convection coefficient h is usually the largest uncertainty: a 20-30 % error in h is common, and it moves the heat rate more than any shortcut drift shown here.',
+  'Overheated electronics fail and hot surfaces burn: follow the applicable codes, standards and licensed engineering practice for temperature limits and guarding.',
+  'The numerical reference solves the stated idealisation (steady conduction, the given h and k); the discretisation error quoted is the error of that model, not of the real part.',
+];

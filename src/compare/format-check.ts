@@ -1,0 +1,57 @@
+/** Plain-text rendering of a check report for the terminal (the default output of `fincheck check`). */
+import type { Case } from '../case/types.js';
+import { describeCase } from './describe-case.js';
+import type { CheckReport, Flag } from './types.js';
+
+/** Signed percentage; drifts below 0.0005 % print as 0.000 % (no "-0.000"). */
+const pct = (x: number): string => {
+  const digits = Math.abs(x) < 0.001 ? 3 : 2;
+  const text = (100 * x).toFixed(digits);
+  return Number(text) === 0 ? `${(0).toFixed(digits)} %` : `${x > 0 ? '+' : ''}${text} %`;
+};
+const sig = (x: number, n = 5): string => (Math.abs(x) >= 1e5 || (Math.abs(x) < 1e-3 && x !== 0) ? x.toExponential(n - 1) : x.toPrecision(n));
+const pad = (s: string, n: number): string => (s.length >= n ? s : s + ' '.repeat(n - s.length));
+const lpad = (s: string, n: number): string => (s.length >= n ? s : ' '.repeat(n - s.length) + s);
+
+const MARK: Record<Flag['severity'], string> = { error: 'x', warning: '!', info: 'i' };
+
+export function formatCheck(c: Case, r: CheckReport): string {
+  const out: string[] = [];
+  out.push(`fincheck check: ${r.case}`);
+  for (const line of describeCase(c)) out.push(`  ${line}`);
+  out.push('');
+  const ref = r.reference;
+  const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} cells`;
+  out.push(`Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`);
+  out.push(`  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`);
+  out.push(`  ${ref.note}`);
+  out.push('');
+  out.push(`Shortcuts against the reference (tolerance +/-${(100 * r.tolerance).toFixed(1)} %):`);
+  const head = `  ${pad('model', 16)}${lpad('Q [W]', 12)}${lpad('efficiency', 12)}${lpad('drift', 11)}  verdict`;
+  out.push(head);
+  out.push(`  ${'-'.repeat(head.length - 2)}`);
+  for (const m of r.models) {
+    out.push(`  ${pad(m.model, 16)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency.toFixed(4), 12)}${lpad(pct(m.drift), 11)}  ${m.verdict}`);
+  }
+  for (const m of r.models) out.push(`    ${pad(m.model, 14)} ${m.basis}`);
+  for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);
+  out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature)');
+  out.push('');
+  if (r.assumptions.length > 0) {
+    out.push('Where the drift comes from (one assumption at a time):');
+    const w = Math.max(...r.assumptions.map((a) => a.assumption.length)) + 2;
+    for (const a of r.assumptions) {
+      out.push(`  ${pad(a.assumption, w)}${lpad(pct(a.drift), 10)}   made by ${a.madeBy.join(', ')}`);
+    }
+    out.push(`  (${[...new Set(r.assumptions.map((a) => a.method))].join('; ')})`);
+    out.push('');
+  }
+  if (r.flags.length > 0) {
+    out.push('Flags:');
+    for (const f of r.flags) out.push(`  [${MARK[f.severity]}] ${f.flag}: ${f.message}`);
+    out.push('');
+  }
+  out.push('Cautions:');
+  for (const t of r.cautions) out.push(`  - ${t}`);
+  return `${out.join('\n')}\n`;
+}

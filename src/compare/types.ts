@@ -1,0 +1,85 @@
+/**
+ * The result of `fincheck check`: plain data, serialised as the JSON of outputs.md.
+ * Heat rates in W (whole fin: whole width, whole ring), drift = (model - reference) / reference.
+ */
+
+/** Model ids of the output contract (tables, JSON, images). */
+export type ModelId = 'tanh-L' | 'tanh-Lc' | 'tanh-Lc-thin' | 'convective-tip' | 'closed-form' | 'fd-1d' | 'fd-2d';
+export type ShortcutId = Exclude<ModelId, 'fd-1d' | 'fd-2d'>;
+export type Verdict = 'ok' | 'marginal' | 'unsafe';
+
+export interface ReferenceResult {
+  model: 'fd-1d' | 'fd-2d';
+  heatRate_W: number;
+  efficiency: number;
+  effectiveness: number;
+  /** Estimated relative discretisation error of heatRate_W (GCI of the finest grid). */
+  discretizationError: number;
+  energyBalance: number;
+  observedOrder: number | null;
+  /** Grid of the finest solve: nodes (1-D) or nx, ny (2-D). */
+  grid: { nodes: number } | { nx: number; ny: number };
+  tipTemperature_degC: number;
+  note: string;
+}
+
+export interface ModelResult {
+  model: ShortcutId | 'fd-1d';
+  heatRate_W: number;
+  /** Q / Q_ideal of the actual fin (case-format.md definition), so every row is comparable. */
+  efficiency: number;
+  effectiveness: number;
+  drift: number;
+  verdict: Verdict;
+  /** The shortcut's own efficiency formula value (e.g. tanh(mLc)/(mLc)), where it has one. */
+  formulaEfficiency: number | null;
+  /** Fin parameter m and the length the formula used, where it uses them. */
+  m_per_m: number | null;
+  length_m: number | null;
+  /** What the model assumes, in one line. */
+  basis: string;
+  /** How accurate the number is as a solution of its own model. */
+  accuracy: string;
+}
+
+export interface NotApplicable {
+  model: ShortcutId;
+  reason: string;
+}
+
+export interface AssumptionRow {
+  assumption: string;
+  /** Drift of the heat rate caused by this assumption alone: (Q_with - Q_without) / Q_without. */
+  drift: number;
+  /** Which models make this assumption. */
+  madeBy: ModelId[];
+  /** How the drift was measured. */
+  method: string;
+}
+
+export type Severity = 'info' | 'warning' | 'error';
+
+export interface Flag {
+  flag: string;
+  severity: Severity;
+  value: number;
+  message: string;
+}
+
+export interface CheckReport {
+  case: string;
+  tolerance: number;
+  reference: ReferenceResult;
+  models: ModelResult[];
+  notApplicable: NotApplicable[];
+  assumptions: AssumptionRow[];
+  flags: Flag[];
+  cautions: string[];
+}
+
+export function verdictOf(drift: number, tolerance: number): Verdict {
+  const a = Math.abs(drift);
+  if (a <= tolerance) return 'ok';
+  if (a <= 2 * tolerance) return 'marginal';
+  return 'unsafe';
+}
