@@ -73,6 +73,9 @@ export interface FieldChartResult {
   /** y stretch factor actually used (1 = true shape). */
   yStretch: number;
   levels: number[];
+  /** Where the colour bar is drawn (px); its bottom is the low end of `valueRange`. */
+  colourBar: Rect;
+  valueRange: [number, number];
 }
 
 export function gridLayout(grid: StructuredGrid): GridLayout {
@@ -170,7 +173,7 @@ export function fieldChart(spec: FieldChartSpec): FieldChartResult {
   body.push(drawColourBar(map, barAxis, bar, spec.valueLabel, levels));
 
   const svg = svgDocument(width, height, body);
-  return { svg, plot, x: xAxis.scale, y: yAxis.scale, yStretch: stretch, levels };
+  return { svg, plot, x: xAxis.scale, y: yAxis.scale, yStretch: stretch, levels, colourBar: bar, valueRange: [low, high] };
 }
 
 /** Indices of the nodes along one grid edge. */

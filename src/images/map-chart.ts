@@ -74,6 +74,8 @@ export interface MapChartResult {
   /** Colour range used. */
   low: number;
   high: number;
+  /** Where the colour bar is drawn (px). */
+  colourBar: Rect;
 }
 
 function checkAxis(name: string, values: ArrayLike<number>, kind: ScaleKind): void {
@@ -187,5 +189,5 @@ export function mapChart(spec: MapChartSpec): MapChartResult {
   }
   const bar: Rect = { x: right + 24, y: plot.y, width: colourBarThickness, height: plot.height };
   body.push(drawColourBar(map, colourBarAxis(low, high, bar.y, bar.y + bar.height), bar, spec.valueLabel, levels.map((l) => l.value)));
-  return { svg: svgDocument(width, height, body), plot, x: xAxis.scale, y: yAxis.scale, low, high };
+  return { svg: svgDocument(width, height, body), plot, x: xAxis.scale, y: yAxis.scale, low, high, colourBar: bar };
 }
