@@ -320,7 +320,10 @@ const baseSchema = mapping(
 
 export const caseSchema = mapping(
   {
-    name: z.string({ error: () => 'free text (a string)' }).optional().describe('Free text shown in every output'),
+    name: z
+      .union([z.string(), z.number().transform(String)], { error: () => 'free text' })
+      .optional()
+      .describe('Free text shown in every output (default: the file name without extension)'),
     fin: finSchema,
     material: materialSchema,
     convection: convectionSchema,
