@@ -45,7 +45,7 @@ export function drawColourBar(map: Colormap, axis: Axis, bar: Rect, title: strin
       width: bar.width,
       height: bar.height,
       preserveAspectRatio: 'none',
-      href: gradientUri(map),
+      'xlink:href': gradientUri(map),
     }),
   );
   const levelPath = levels

@@ -51,7 +51,7 @@ export function fieldImage(
     py[k] = ((sy[k] as number) - top) * pixelScale;
   }
   const image = rasterizeStructuredField(layout, px, py, values, w, h, { lut: colormapLut(map), low, high });
-  return el('image', { x: left, y: top, width: w / pixelScale, height: h / pixelScale, preserveAspectRatio: 'none', href: rgbaToDataUri(image) });
+  return el('image', { x: left, y: top, width: w / pixelScale, height: h / pixelScale, preserveAspectRatio: 'none', 'xlink:href': rgbaToDataUri(image) });
 }
 
 /** A screen rectangle already taken by a label. */

@@ -59,9 +59,12 @@ export function textEl(content: string, attrs: Attrs): string {
 
 /** A whole SVG document of the given size in user units (px). */
 export function svgDocument(width: number, height: number, body: readonly string[], background = '#ffffff'): string {
+  // xlink:href on images (declared here) is read by SVG 1.1 tools as well as browsers; the generic
+  // sans-serif fallback only matters to viewers without DejaVu Sans (our PNGs always have it).
   const head =
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${fmt(width)}" height="${fmt(height)}" ` +
-    `viewBox="0 0 ${fmt(width)} ${fmt(height)}" font-family="DejaVu Sans">`;
+    `<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" ` +
+    `width="${fmt(width)}" height="${fmt(height)}" viewBox="0 0 ${fmt(width)} ${fmt(height)}" ` +
+    `font-family="DejaVu Sans, sans-serif">`;
   const bg = el('rect', { x: 0, y: 0, width, height, fill: background });
   return `${head}${bg}${body.join('')}</svg>\n`;
 }

@@ -24,7 +24,7 @@ export function pixel(img: Decoded, x: number, y: number): [number, number, numb
 }
 
 /** Pixels in [x0, x1) x [y0, y1) whose colour satisfies `test`. */
-export function countPixels(img: Decoded, x0: number, y0: number, x1: number, y1: number, test: (rgb: [number, number, number]) => boolean): number {
+export function countPixels(img: Decoded, x0: number, y0: number, x1: number, y1: number, test: (rgb: readonly number[]) => boolean): number {
   let n = 0;
   for (let y = Math.max(0, Math.floor(y0)); y < Math.min(img.height, Math.ceil(y1)); y++) {
     for (let x = Math.max(0, Math.floor(x0)); x < Math.min(img.width, Math.ceil(x1)); x++) {
@@ -36,8 +36,8 @@ export function countPixels(img: Decoded, x0: number, y0: number, x1: number, y1
 }
 
 /** Dark enough to be text or a line (each channel below 110 of 255). */
-export const isDark = ([r, g, b]: [number, number, number]): boolean => r < 110 && g < 110 && b < 110;
-export const isNotWhite = ([r, g, b]: [number, number, number]): boolean => r < 245 || g < 245 || b < 245;
+export const isDark = ([r = 0, g = 0, b = 0]: readonly number[]): boolean => r < 110 && g < 110 && b < 110;
+export const isNotWhite = ([r = 0, g = 0, b = 0]: readonly number[]): boolean => r < 245 || g < 245 || b < 245;
 
 /** Colour distance (max channel difference). */
 export function colourDistance(a: readonly number[], b: readonly number[]): number {

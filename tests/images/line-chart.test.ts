@@ -37,7 +37,7 @@ describe('line chart SVG', () => {
     for (const t of ['Temperature along the fin — case demo', 'Distance from base x (mm)', 'Temperature (°C)', 'fd-1d (reference)', 'flat 60 °C', 'drift +1.0 %', 'tip']) {
       expect(texts).toContain(t);
     }
-    expect(chart.svg).toContain('font-family="DejaVu Sans"');
+    expect(chart.svg).toContain('font-family="DejaVu Sans, sans-serif"');
   });
 
   it('escapes labels with markup characters and stays well-formed', () => {
