@@ -22,6 +22,8 @@ export interface CheckOptions {
   /** Relative drift accepted as `ok` (0.02 = 2 %). */
   tolerance: number;
   reference: 'auto' | '1d' | '2d';
+  /** Compute the assumption ledger (default true); maps skip it, their points need only drifts. */
+  ledger?: boolean;
 }
 
 export interface CheckOutcome {
@@ -73,7 +75,7 @@ export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcom
     };
   });
 
-  const assumptions = assumptionLedger(linear, geometry, eq, ref.heatRate);
+  const assumptions = opts.ledger === false ? [] : assumptionLedger(linear, geometry, eq, ref.heatRate);
   const mL = Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length;
   const flags = designFlags({
     family: geometry.shape,
