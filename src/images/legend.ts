@@ -25,24 +25,45 @@ export interface LegendEntry {
 const sampleWidth = 46;
 const noteGap = 18;
 
-export function legendSize(entries: readonly LegendEntry[]): { width: number; height: number } {
+/** Width of one legend entry (sample + label + note columns), the same for every entry. */
+function entryWidth(entries: readonly LegendEntry[]): number {
   const labelWidth = Math.max(0, ...entries.map((e) => textWidth(e.label, fontSize.legend)));
   const noteWidth = Math.max(0, ...entries.map((e) => (e.note ? textWidth(e.note, fontSize.legend) : 0)));
-  const width = 2 * gap.legendPad + sampleWidth + 10 + labelWidth + (noteWidth > 0 ? noteGap + noteWidth : 0);
-  const height = 2 * gap.legendPad + entries.length * fontSize.legend + (entries.length - 1) * gap.legendRow;
+  return sampleWidth + 10 + labelWidth + (noteWidth > 0 ? noteGap + noteWidth : 0);
+}
+
+const columnGap = 28;
+
+/** Size of the legend box laid out in `columns` columns (entries fill rows left to right). */
+export function legendSize(entries: readonly LegendEntry[], columns = 1): { width: number; height: number } {
+  const cols = Math.max(1, Math.min(columns, entries.length));
+  const rows = Math.ceil(entries.length / cols);
+  const width = 2 * gap.legendPad + cols * entryWidth(entries) + (cols - 1) * columnGap;
+  const height = 2 * gap.legendPad + rows * fontSize.legend + (rows - 1) * gap.legendRow;
   return { width, height };
 }
 
+/** Most columns whose legend fits in `maxWidth` px (at least 1). */
+export function legendColumnsFor(entries: readonly LegendEntry[], maxWidth: number): number {
+  let columns = 1;
+  while (columns < entries.length && legendSize(entries, columns + 1).width <= maxWidth) columns++;
+  return columns;
+}
+
 /** Draws the legend box with its top-left corner at (x, y). */
-export function drawLegend(entries: readonly LegendEntry[], x: number, y: number): string {
-  const { width, height } = legendSize(entries);
+export function drawLegend(entries: readonly LegendEntry[], x: number, y: number, columns = 1): string {
+  const cols = Math.max(1, Math.min(columns, entries.length));
+  const { width, height } = legendSize(entries, cols);
+  const cellWidth = entryWidth(entries);
   const out: string[] = [
     el('rect', { x, y, width, height, fill: '#ffffff', 'fill-opacity': 0.92, stroke: '#999999', 'stroke-width': 1, rx: 3 }),
   ];
   entries.forEach((e, k) => {
-    const rowTop = y + gap.legendPad + k * (fontSize.legend + gap.legendRow);
+    const row = Math.floor(k / cols);
+    const col = k % cols;
+    const rowTop = y + gap.legendPad + row * (fontSize.legend + gap.legendRow);
     const mid = rowTop + fontSize.legend / 2;
-    const sx = x + gap.legendPad;
+    const sx = x + gap.legendPad + col * (cellWidth + columnGap);
     if (e.sample === 'line') {
       out.push(
         el('path', {
@@ -59,7 +80,7 @@ export function drawLegend(entries: readonly LegendEntry[], x: number, y: number
     const baseline = mid + capHeight(fontSize.legend) / 2;
     out.push(textEl(e.label, { x: sx + sampleWidth + 10, y: baseline, 'font-size': fontSize.legend, fill: ink.text }));
     if (e.note) {
-      out.push(textEl(e.note, { x: x + width - gap.legendPad, y: baseline, 'font-size': fontSize.legend, 'text-anchor': 'end', fill: ink.text }));
+      out.push(textEl(e.note, { x: sx + cellWidth, y: baseline, 'font-size': fontSize.legend, 'text-anchor': 'end', fill: ink.text }));
     }
   });
   return el('g', {}, out);

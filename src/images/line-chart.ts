@@ -14,7 +14,7 @@ import { defaultHeight, defaultWidth, fontSize, gap, ink, stroke } from './theme
 import { extent, makeAxis, project, type Axis, type Scale, type ScaleKind } from './scales.js';
 import { drawAxes, drawGrid, xAxisMargin, yAxisMargin } from './axes.js';
 import { drawHeader, type Rect } from './layout.js';
-import { chooseLegendPlace, drawLegend, legendSize, type LegendEntry } from './legend.js';
+import { chooseLegendPlace, drawLegend, legendColumnsFor, legendSize, type LegendEntry } from './legend.js';
 import { markerElement, type MarkerShape } from './markers.js';
 import { dashArray, defaultSeriesStyle, type LineStyle, type ResolvedStyle } from './series-styles.js';
 import { pointAtLength, polylineLength } from './contour.js';
@@ -216,10 +216,13 @@ export function lineChart(spec: LineChartSpec): ChartResult {
   const { byLabel, entries } = resolveStyles(spec.panels);
   const legendMode = spec.legend ?? 'auto';
   const legendBox = legendSize(entries);
+  // Below the plot the legend spreads over as many columns as the canvas width allows.
+  const belowColumns = legendColumnsFor(entries, width - 2 * gap.outer);
+  const belowBox = legendSize(entries, belowColumns);
   const xKind = spec.xScale ?? 'linear';
 
   const layout = (legendBelow: boolean): { panels: PanelGeometry[]; axes: { x: Axis; y: Axis }[] } => {
-    const bottomReserve = xAxisMargin(true, true) + (legendBelow ? legendBox.height + 14 : 0) + gap.outer;
+    const bottomReserve = xAxisMargin(true, true) + (legendBelow ? belowBox.height + 14 : 0) + gap.outer;
     const top = header.bottom;
     const n = spec.panels.length;
     const panelHeight = (height - top - bottomReserve - (n - 1) * panelGap) / n;
@@ -329,8 +332,8 @@ export function lineChart(spec: LineChartSpec): ChartResult {
     else if (legendBelow) {
       const lastPlot = (geometry.panels[geometry.panels.length - 1] as PanelGeometry).plot;
       const y = lastPlot.y + lastPlot.height + xAxisMargin(true, true) + 10;
-      const x = Math.max(gap.outer, lastPlot.x + (lastPlot.width - legendBox.width) / 2);
-      body.push(drawLegend(entries, x, y));
+      const x = Math.max(gap.outer, Math.min(lastPlot.x + (lastPlot.width - belowBox.width) / 2, width - gap.outer - belowBox.width));
+      body.push(drawLegend(entries, x, y, belowColumns));
     }
   }
   const svg = svgDocument(width, height, [el('defs', {}, defs), ...body]);

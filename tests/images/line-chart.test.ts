@@ -133,3 +133,40 @@ describe('line chart PNG', async () => {
     expect([fixed.width, fixed.height]).toEqual([600, 375]);
   });
 });
+
+describe('legend placement', () => {
+  /** The legend box: the only rect drawn with fill-opacity 0.92. */
+  function legendRect(svg: string): { x: number; y: number; width: number; height: number } {
+    const m = /<rect x="([\d.]+)" y="([\d.]+)" width="([\d.]+)" height="([\d.]+)" fill="#ffffff" fill-opacity="0.92"/.exec(svg);
+    if (!m) throw new Error('no legend box');
+    return { x: Number(m[1]), y: Number(m[2]), width: Number(m[3]), height: Number(m[4]) };
+  }
+
+  it('goes inside, in a corner the data leave free', () => {
+    const chart = lineChart(spec);
+    const box = legendRect(chart.svg);
+    const g = chart.panels[0]!;
+    expect(box.y).toBeGreaterThanOrEqual(g.plot.y);
+    expect(box.y + box.height).toBeLessThanOrEqual(g.plot.y + g.plot.height);
+    // No data point of either series falls inside the box.
+    for (const s of spec.panels[0]!.series) {
+      for (let k = 0; k < s.x.length; k++) {
+        const px = project(g.x, s.x[k]!), py = project(g.y, s.y[k]!);
+        const inside = px > box.x && px < box.x + box.width && py > box.y && py < box.y + box.height;
+        expect(inside).toBe(false);
+      }
+    }
+  });
+
+  it('moves below the plot when lines cross every corner', () => {
+    // Horizontal lines at the bottom, middle and top of the range cover all six candidate places.
+    const levels = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
+    const crowded = lineChart({
+      title: 'crowded',
+      xLabel: 'x',
+      panels: [{ yLabel: 'y', yDomain: [0, 10], series: levels.map((v) => ({ label: `y = ${v}`, x: [0, 30], y: [v, v] })) }],
+    });
+    const g = crowded.panels[0]!;
+    expect(legendRect(crowded.svg).y).toBeGreaterThan(g.plot.y + g.plot.height);
+  });
+});
