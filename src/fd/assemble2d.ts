@@ -23,18 +23,19 @@ import { radiusAt } from '../mesh/grid2d.js';
 import { addCoupling, emptyStencil9, type Stencil9 } from './sparse/stencil9.js';
 
 /**
- * The coincident nodes of a collapsed (sharp) tip are tied by a conductance this many times the largest
- * coupling of the matrix: the limit of the collapsing cells' own conductance, which grows without bound as
- * their height goes to zero. Their temperatures then agree to ~1e-10 relative.
+ * The coincident nodes of a collapsed (sharp) tip are tied to each other by a conductance this many times
+ * their own total coupling to the rest of the grid: the limit of the collapsing cells' conductance, which
+ * grows without bound as their height goes to zero. Their temperatures then agree to ~1e-6 of the small
+ * temperature differences around the tip point. A tie scaled to the largest coupling of the whole matrix
+ * instead would lose the tip's own couplings (1e-8 of it on thin wedges) to round-off in the factorisation.
  */
-const TIP_TIE_FACTOR = 1e8;
+const TIP_TIE_FACTOR = 1e6;
 
 /** Conduction operator K (zero row sums), W/K per unit depth, for a uniform conductivity k (W/(m*K)). */
 export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
   const { nodesX: nx, nodesY: ny, x, y, diagonal, section } = grid;
   const K = emptyStencil9(nx, ny);
   const tri = new Int32Array(3);
-  let largest = 0;
   for (let i = 0; i + 1 < nx; i++) {
     for (let j = 0; j + 1 < ny; j++) {
       const a = i * ny + j;
@@ -52,13 +53,15 @@ export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
           tri[1] = half === 0 ? b : c;
           tri[2] = d;
         }
-        largest = Math.max(largest, addTriangle(K, tri, x, y, k, section, ny));
+        addTriangle(K, tri, x, y, k, section, ny);
       }
     }
   }
   if (grid.collapsedTip) {
-    const tie = TIP_TIE_FACTOR * largest;
     const i = nx - 1;
+    let own = 0;
+    for (let j = 0; j < ny; j++) own = Math.max(own, K.diag[i * ny + j] as number);
+    const tie = TIP_TIE_FACTOR * own;
     for (let j = 0; j + 1 < ny; j++) {
       addCoupling(K, i, j, 0, 1, -tie);
       addCoupling(K, i, j, 0, 0, tie);
@@ -68,7 +71,7 @@ export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
   return K;
 }
 
-/** Adds one triangle's couplings; returns the largest |coupling| (0 for a degenerate triangle). */
+/** Adds one triangle's couplings (nothing for the degenerate triangles of a collapsed tip). */
 function addTriangle(
   K: Stencil9,
   tri: Int32Array,
@@ -77,7 +80,7 @@ function addTriangle(
   k: number,
   section: Grid2D['section'],
   ny: number,
-): number {
+): void {
   const p0 = tri[0] as number;
   const p1 = tri[1] as number;
   const p2 = tri[2] as number;
@@ -96,7 +99,7 @@ function addTriangle(
   const ey2 = y1 - y0;
   const area = 0.5 * Math.abs(ex2 * -ey1 - ey2 * -ex1);
   const scale = Math.max(ex0 * ex0 + ey0 * ey0, ex1 * ex1 + ey1 * ey1, ex2 * ex2 + ey2 * ey2);
-  if (area <= 1e-14 * scale) return 0; // collapsed cell of a sharp tip
+  if (area <= 1e-14 * scale) return; // collapsed cell of a sharp tip
   const r = radiusAt(section, (x0 + x1 + x2) / 3, (y0 + y1 + y2) / 3);
   const f = (k * r) / (4 * area);
   const k01 = f * (ex0 * ex1 + ey0 * ey1);
@@ -115,5 +118,4 @@ function addTriangle(
   addCoupling(K, i0, j0, 0, 0, -k01 - k20);
   addCoupling(K, i1, j1, 0, 0, -k01 - k12);
   addCoupling(K, i2, j2, 0, 0, -k12 - k20);
-  return Math.max(Math.abs(k01), Math.abs(k12), Math.abs(k20));
 }

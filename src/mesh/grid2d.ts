@@ -137,7 +137,7 @@ function alongPositions(section: Section2D, nx: number, baseGrading: number): Fl
     const t = stretched(n + 1, grading, 'start');
     for (let c = 0; c < n; c++) {
       let u = t[c] as number;
-      if (section.verticalTip && k === segments - 1) u = 1 - (1 - u) ** 2; // cells ~ (1 - s)^(1/2) follow the face
+      if (section.tipClustering !== 1 && k === segments - 1) u = 1 - (1 - u) ** section.tipClustering;
       out[node++] = s0 + (s1 - s0) * u;
     }
   }

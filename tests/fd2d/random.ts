@@ -1,14 +1,18 @@
 /** Test matrices for the 2-D solvers. */
 import { addCoupling, emptyStencil9, type Stencil9 } from '../../src/fd/sparse/stencil9.js';
 
-/** A random symmetric 9-point matrix made positive definite by diagonal dominance (seeded, repeatable). */
-export function randomSpdStencil(nx: number, ny: number, seed: number): Stencil9 {
+/**
+ * A random symmetric 9-point conduction-like matrix (negative couplings, positive row sums `excess`),
+ * hence positive definite; seeded and repeatable.
+ */
+export function randomSpdStencil(nx: number, ny: number, seed: number): Stencil9 & { excess: Float64Array } {
   let state = seed;
   const rand = (): number => {
     state = (state * 1103515245 + 12345) % 2147483648;
     return state / 2147483648;
   };
   const a = emptyStencil9(nx, ny);
+  const excess = new Float64Array(nx * ny);
   const offsets: [number, number][] = [[1, 0], [0, 1], [1, 1], [1, -1]];
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
@@ -19,8 +23,10 @@ export function randomSpdStencil(nx: number, ny: number, seed: number): Stencil9
         addCoupling(a, i, j, 0, 0, -v);
         addCoupling(a, i + di, j + dj, 0, 0, -v);
       }
-      addCoupling(a, i, j, 0, 0, 0.01 + 0.1 * rand());
+      const e = 0.01 + 0.1 * rand();
+      excess[i * ny + j] = e;
+      addCoupling(a, i, j, 0, 0, e);
     }
   }
-  return a;
+  return { ...a, excess };
 }

@@ -1,8 +1,9 @@
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { SolverError } from '../../src/errors.js';
-import { factorBandedCholesky } from '../../src/fd/sparse/bandedCholesky.js';
-import { residual, stencilToDense, type Stencil9 } from '../../src/fd/sparse/stencil9.js';
+import { factorBanded, factorBandedCholesky } from '../../src/fd/sparse/bandedCholesky.js';
+import { factorBandedLdltRowSums } from '../../src/fd/sparse/bandedLdlt.js';
+import { addCoupling, emptyStencil9, residual, stencilToDense, type Stencil9 } from '../../src/fd/sparse/stencil9.js';
 import { randomSpdStencil } from './random.js';
 
 function denseSolve(a: Stencil9, rhs: Float64Array): Float64Array {
@@ -43,5 +44,51 @@ describe('banded Cholesky (thin direction fastest)', () => {
     const a = randomSpdStencil(4, 4, 5);
     a.diag[5] = -1;
     expect(() => factorBandedCholesky(a)).toThrow(SolverError);
+  });
+});
+
+describe('banded LDL^T carrying the row sums (for couplings of very different sizes)', () => {
+  it.each([
+    [2, 2],
+    [9, 4],
+    [20, 7],
+  ])('matches a dense Cholesky solve (ml-matrix) on a random conduction-like matrix, %i x %i nodes', (nx, ny) => {
+    const a = randomSpdStencil(nx, ny, 31 * nx + ny);
+    const rhs = Float64Array.from({ length: nx * ny }, (_, p) => Math.cos(3 * p));
+    const x = factorBandedLdltRowSums(a, a.excess).solve(rhs);
+    const ref = denseSolve(a, rhs);
+    // Well-conditioned (< 1e3): round-off agreement.
+    const scale = Math.max(...ref.map(Math.abs));
+    for (let p = 0; p < x.length; p++) expect(Math.abs((x[p] as number) - (ref[p] as number))).toBeLessThan(1e-11 * scale);
+  });
+
+  it('solves a chain of huge couplings that plain Cholesky cannot (a collapsing column)', () => {
+    // One column of 30 nodes joined by conductances 1e17, node 0 tied to theta = 0 by conductance 1,
+    // 1 W injected at the top node. Exact: theta_j = 1 + j * 1e-17 (series conductances). In the
+    // diagonal 2e17 + 1 the tie to ground is below the last bit.
+    const ny = 30;
+    const a = emptyStencil9(1, ny);
+    const excess = new Float64Array(ny);
+    for (let j = 0; j + 1 < ny; j++) {
+      addCoupling(a, 0, j, 0, 1, -1e17);
+      addCoupling(a, 0, j, 0, 0, 1e17);
+      addCoupling(a, 0, j + 1, 0, 0, 1e17);
+    }
+    addCoupling(a, 0, 0, 0, 0, 1);
+    excess[0] = 1;
+    const rhs = new Float64Array(ny);
+    rhs[ny - 1] = 1;
+    // Plain Cholesky loses the conductance to ground to round-off: it fails or returns nonsense.
+    let plainError = Infinity;
+    try {
+      const xc = factorBandedCholesky(a).solve(rhs);
+      plainError = Math.abs((xc[0] as number) - 1);
+    } catch {
+      plainError = Infinity;
+    }
+    expect(plainError).toBeGreaterThan(1e-3);
+    const x = factorBanded({ matrix: a, rhs, excess }).solve(rhs);
+    // Each pivot keeps full relative accuracy: theta_0 = 1 to round-off.
+    for (let j = 0; j < ny; j++) expect(Math.abs((x[j] as number) - 1)).toBeLessThan(1e-14);
   });
 });

@@ -9,13 +9,20 @@
  * Algorithm 4.3.5 (band Cholesky) [from memory]. Factor once, solve as often as needed.
  */
 import { SolverError } from '../../errors.js';
+import { factorBandedLdltRowSums } from './bandedLdlt.js';
 import { residual, type Solver2D, type Stencil9, type System2D } from './stencil9.js';
 
-export interface BandedCholesky {
+/** A stored factorisation of a banded system: factor once, solve many times. */
+export interface BandedFactor {
   readonly size: number;
   readonly bandwidth: number;
-  /** Solves A x = rhs with the stored factor; writes into `out` when given. */
+  /** Solves A x = rhs with the stored factor; writes into `out` when given (it may be `rhs`). */
   solve(rhs: Float64Array, out?: Float64Array): Float64Array;
+}
+
+export interface BandedCholesky extends BandedFactor {
+  /** Smallest pivot^2 / A_pp: how much of the diagonal survived the elimination (1e-8 = 8 digits lost). */
+  readonly pivotRatio: number;
 }
 
 /** Bytes the factor of a grid with these node counts needs (for the automatic solver choice). */
@@ -31,6 +38,7 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
   const band = new Float64Array(n * rowLength);
   const invDiag = new Float64Array(n);
   fillLowerBand(a, band, w);
+  let pivotRatio = 1;
 
   for (let p = 0; p < n; p++) {
     const rowP = p * rowLength - p + w; // band[rowP + q] = L(p, q)
@@ -79,6 +87,7 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
         `banded Cholesky: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${p}); check the boundary conditions`,
       );
     }
+    pivotRatio = Math.min(pivotRatio, d / (a.diag[p] as number));
     const root = Math.sqrt(d);
     band[rowP + p] = root;
     invDiag[p] = 1 / root;
@@ -87,6 +96,7 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
   return {
     size: n,
     bandwidth: w,
+    pivotRatio,
     solve(rhs: Float64Array, out = new Float64Array(n)): Float64Array {
       if (rhs.length !== n) throw new RangeError(`banded Cholesky: rhs has ${rhs.length} entries, expected ${n}`);
       const y = out;
@@ -119,29 +129,76 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
 }
 
 /**
- * Refine while |r|_1 > REFINE_TOLERANCE |rhs|_1. On very elongated cells the couplings across the fin
- * exceed those along it by (dx/dy)^2, and round-off in the large ones shows in the small heat flows
- * (energy balances of 1e-9 at dx/dy ~ 40). One step of iterative refinement in working precision makes
- * the solution componentwise backward stable (Skeel 1980, Math. Comp. 35, 817-832 [from memory]).
+ * Refinement target (residual in difference form when the system carries its row sums). On very elongated cells the couplings across the fin exceed those along it by (dx/dy)^2, and
+ * round-off in the large ones shows in the small heat flows. Iterative refinement in working precision
+ * with an accurate residual removes it (Skeel 1980, Math. Comp. 35, 817-832 [from memory]).
  */
 const REFINE_TOLERANCE = 1e-13;
+const MAX_REFINEMENTS = 4;
 
-/** Factor, solve, and refine when the residual is above round-off (at most two steps). */
-export function solveWithRefinement(factor: BandedCholesky, system: System2D): Float64Array {
+/**
+ * Below this pivot ratio ordinary Cholesky has lost more than half the digits of some pivot (couplings of
+ * very different sizes): the row-sum-preserving LDL^T is used instead (bandedLdlt.ts).
+ */
+const CANCELLATION_LIMIT = 1e-8;
+
+/**
+ * The factor of a 2-D system: Cholesky, or when it shows cancellation (or fails) and the system carries
+ * its exact row sums, the row-sum-preserving LDL^T.
+ */
+export function factorBanded(system: System2D): BandedFactor {
+  try {
+    const f = factorBandedCholesky(system.matrix);
+    if (f.pivotRatio >= CANCELLATION_LIMIT || system.excess === undefined) return f;
+  } catch (e) {
+    if (!(e instanceof SolverError) || system.excess === undefined) throw e;
+  }
+  return factorBandedLdltRowSums(system.matrix, system.excess);
+}
+
+/**
+ * Solve with a stored factor, then refine while the residual is above round-off: until |r|_1 is below
+ * REFINE_TOLERANCE times the right-hand side of the coupled rows (rows of fixed nodes are identities and
+ * carry no heat flow), or stops falling by half (its evaluation has reached round-off), at most
+ * MAX_REFINEMENTS steps.
+ */
+export function solveWithRefinement(factor: BandedFactor, system: System2D): Float64Array {
   const x = factor.solve(system.rhs);
-  const scale = norm1(system.rhs);
-  const r = new Float64Array(x.length);
-  for (let step = 0; step < 2; step++) {
-    residual(system, x, r);
-    if (!(norm1(r) > REFINE_TOLERANCE * scale)) break;
+  const scale = coupledRhsNorm1(system);
+  const r: Float64Array = new Float64Array(x.length);
+  residual(system, x, r);
+  let size = norm1(r);
+  for (let step = 0; step < MAX_REFINEMENTS && size > REFINE_TOLERANCE * scale; step++) {
     const dx = factor.solve(r);
     for (let p = 0; p < x.length; p++) x[p] = (x[p] as number) + (dx[p] as number);
+    residual(system, x, r);
+    const next = norm1(r);
+    if (next > 0.5 * size) break;
+    size = next;
   }
   return x;
 }
 
+/** sum |rhs_p| over the rows that have at least one coupling. */
+function coupledRhsNorm1(system: System2D): number {
+  const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = system.matrix;
+  const rhs = system.rhs;
+  let s = 0;
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      const p = i * ny + j;
+      const coupled =
+        east[p] !== 0 || north[p] !== 0 || northEast[p] !== 0 || southEast[p] !== 0 ||
+        (j > 0 && north[p - 1] !== 0) ||
+        (i > 0 && (east[p - ny] !== 0 || (j > 0 && northEast[p - ny - 1] !== 0) || (j + 1 < ny && southEast[p - ny + 1] !== 0)));
+      if (coupled) s += Math.abs(rhs[p] as number);
+    }
+  }
+  return s;
+}
+
 /** One-shot solver: factor, solve, refine if needed. */
-export const bandedCholeskySolver: Solver2D = (system: System2D) => solveWithRefinement(factorBandedCholesky(system.matrix), system);
+export const bandedCholeskySolver: Solver2D = (system: System2D) => solveWithRefinement(factorBanded(system), system);
 
 function norm1(v: Float64Array): number {
   let s = 0;

@@ -147,7 +147,7 @@ export function couplingOf(a: Stencil9, i: number, j: number, di: number, dj: nu
 }
 
 /** r = rhs - A x (difference form when the system carries its row sums). */
-export function residual(system: System2D, x: Float64Array, out = new Float64Array(x.length)): Float64Array {
+export function residual(system: System2D, x: Float64Array, out: Float64Array = new Float64Array(x.length)): Float64Array {
   if (system.excess === undefined) applyStencil9(system.matrix, x, out);
   else applyDifferenceForm(system.matrix, system.excess, x, out);
   const b = system.rhs;
