@@ -64,7 +64,10 @@ export interface LabelBox {
 
 const overlaps = (a: LabelBox, b: LabelBox): boolean => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 
-/** Iso-lines and their labels (labels kept inside `plot`, never on top of each other or of the `avoid` boxes). */
+/**
+ * Iso-lines and their labels: labels kept inside `plot`, never on top of each other or of the
+ * `avoid` boxes, and the lines are cut where a label sits (an SVG mask with id `maskId`).
+ */
 export function contourLayer(
   layout: GridLayout,
   sx: Float64Array,
@@ -73,9 +76,11 @@ export function contourLayer(
   levels: readonly ContourLevel[],
   plot: Rect,
   avoid: readonly LabelBox[] = [],
+  maskId = 'contour-label-gaps',
 ): string[] {
   const lines: string[] = [];
   const labels: string[] = [];
+  const gaps: string[] = [];
   const taken: LabelBox[] = [...avoid];
   const size = fontSize.annotation;
   levels.forEach((level, index) => {
@@ -116,11 +121,26 @@ export function contourLayer(
           'text-anchor': 'middle',
           transform: angle === 0 ? undefined : `rotate(${fmt(angle)} ${fmt(anchor.x)} ${fmt(anchor.y)})`,
         };
+        gaps.push(
+          el('rect', {
+            x: anchor.x - labelWidth / 2,
+            y: anchor.y - size * 0.55,
+            width: labelWidth,
+            height: size * 1.1,
+            fill: '#000000',
+            transform: attrs.transform,
+          }),
+        );
         labels.push(textEl(level.label, { ...attrs, fill: 'none', stroke: ink.halo, 'stroke-width': 3, 'stroke-linejoin': 'round' }));
         labels.push(textEl(level.label, { ...attrs, fill: ink.text }));
         break;
       }
     }
   });
-  return [...lines, ...labels];
+  if (gaps.length === 0) return [...lines, ...labels];
+  const mask = el('mask', { id: maskId, maskUnits: 'userSpaceOnUse', x: plot.x, y: plot.y, width: plot.width, height: plot.height }, [
+    el('rect', { x: plot.x, y: plot.y, width: plot.width, height: plot.height, fill: '#ffffff' }),
+    ...gaps,
+  ]);
+  return [el('defs', {}, mask), el('g', { mask: `url(#${maskId})` }, lines), ...labels];
 }
