@@ -1,0 +1,74 @@
+/**
+ * `npm run bench`: the performance targets of fincheck, measured and printed as one table of medians.
+ *
+ * Areas (one file each, each returns rows): oned.ts (tridiagonal solves), twod.ts (2-D grid solves
+ * against a general banded LU), images.ts (PNG charts), process.ts (whole `fincheck check` runs).
+ * Run a subset by name: `npm run bench -- 1d images`. Nothing is written to disk: the table is printed.
+ *
+ * The machine is shared (2 cores, other developers' builds and tests): the load average is printed
+ * before and after, wall-time medians are the measured values, and the notes carry min/max and the
+ * CPU time of this process per run, which a busy neighbour inflates much less than the wall time.
+ */
+import { cpus, loadavg } from 'node:os';
+import { benchImages } from './images.js';
+import { type BenchRow } from './measure.js';
+import { benchOneD } from './oned.js';
+import { benchProcess } from './process.js';
+import { benchTwoD } from './twod.js';
+
+const AREAS: Record<string, () => Promise<BenchRow[]>> = {
+  '1d': benchOneD,
+  '2d': benchTwoD,
+  images: benchImages,
+  process: benchProcess,
+};
+
+function loadText(): string {
+  return loadavg()
+    .map((l) => l.toFixed(2))
+    .join(' / ');
+}
+
+function pad(text: string, width: number): string {
+  return text.length >= width ? text : text + ' '.repeat(width - text.length);
+}
+
+function printTable(rows: readonly BenchRow[]): void {
+  const header = { n: '#', area: 'area', item: 'item', target: 'target', measured: 'median', verdict: 'verdict' };
+  const lines = rows.map((r, k) => ({ n: String(k + 1), area: r.area, item: r.item, target: r.target, measured: r.measured, verdict: r.verdict }));
+  const keys = ['n', 'area', 'item', 'target', 'measured', 'verdict'] as const;
+  const widths = keys.map((key) => Math.max(header[key].length, ...lines.map((l) => l[key].length)));
+  const format = (l: Record<(typeof keys)[number], string>) => keys.map((key, c) => pad(l[key], widths[c] as number)).join('  ').trimEnd();
+  console.log(format(header));
+  console.log(widths.map((w) => '-'.repeat(w)).join('  '));
+  for (const l of lines) console.log(format(l));
+  console.log('\nNotes:');
+  rows.forEach((r, k) => console.log(`  ${k + 1}. ${r.note}`));
+}
+
+async function main(): Promise<void> {
+  const asked = process.argv.slice(2);
+  const unknown = asked.filter((a) => !(a in AREAS));
+  if (unknown.length > 0) throw new Error(`bench: unknown area(s) ${unknown.join(', ')}; choose from ${Object.keys(AREAS).join(', ')}`);
+  const names = asked.length > 0 ? asked : Object.keys(AREAS);
+  const cpu = cpus()[0]?.model ?? 'unknown CPU';
+  console.log(`fincheck bench: Node ${process.version}, ${cpus().length} x ${cpu}`);
+  console.log(`load average (1/5/15 min) at start: ${loadText()}`);
+  const started = performance.now();
+  const rows: BenchRow[] = [];
+  for (const name of names) {
+    const run = AREAS[name];
+    if (run === undefined) continue;
+    const t0 = performance.now();
+    process.stderr.write(`bench: ${name}...`);
+    rows.push(...(await run()));
+    process.stderr.write(` ${((performance.now() - t0) / 1000).toFixed(1)} s\n`);
+  }
+  console.log(`load average at end: ${loadText()}; suite took ${((performance.now() - started) / 1000).toFixed(0)} s\n`);
+  printTable(rows);
+  const failed = rows.filter((r) => r.verdict === 'FAIL').length;
+  const skippedRows = rows.filter((r) => r.verdict === 'skip').length;
+  console.log(`\n${rows.length} rows: ${failed} FAIL, ${skippedRows} skipped (medians of wall time; see the notes for CPU time).`);
+}
+
+await main();

@@ -1,0 +1,184 @@
+/**
+ * 2-D benchmarks: grid solves of the fd-2d system (9-point, symmetric positive definite) with the library's
+ * automatic solver, against a general banded LU written in bench/generalBandLu.ts and timed in the same run.
+ *
+ *  - 2000 x 20 thin-fin grid (demo case): target <= 15 ms, in this process; with the factor and one
+ *    substitution pair timed apart, and the whole fd-2d solve and refinement study for context;
+ *  - 10000 x 50: target <= 0.6 s, in a child process (bench/twod-child.ts) so that its peak memory is its own;
+ *  - 1000 x 1000 (a block as thick as long): target <= 1 s and <= 1 GB, needs the multigrid-preconditioned
+ *    CG; skipped with a note while no such solver is exported from src/fd/sparse/.
+ * "Solve" = what the library calls: autoSolver2D(system) (factor, substitutions, iterative refinement).
+ * Ratios are baseline median / library median, both medians of wall time in this run.
+ */
+import { spawnSync } from 'node:child_process';
+import { solveFin2DProblem } from '../src/fd/fin2d.js';
+import { studyFin2DProblem } from '../src/fd/fin2dStudy.js';
+import { autoSolver2D } from '../src/fd/sparse/autoSolver.js';
+import { bandedCholeskyBytes, factorBandedCholesky } from '../src/fd/sparse/bandedCholesky.js';
+import type { ChildReport } from './twod-child.js';
+import { bandLuBytes, generalBandLuSolve, relativeDifference, stencilToCsr } from './generalBandLu.js';
+import { atMost, formatMs, skipped, spread, timeTask, type BenchRow } from './measure.js';
+import { benchProblem2D, benchSystem2D, findIterativeSolver, relativeResidual, type BenchCase2D } from './twodSystems.js';
+
+const AREA = '2-D';
+const BASELINE = 'general band LU (no symmetry, natural order; bench/generalBandLu.ts)';
+
+function gigabytes(bytes: number): string {
+  return `${(bytes / 2 ** 30).toFixed(1)} GB`;
+}
+
+function runChild(kind: BenchCase2D, nx: number, ny: number, solver: 'auto' | 'baseline' | 'iterative', runs: number, warmup: number): ChildReport {
+  const r = spawnSync(
+    process.execPath,
+    ['--import', 'tsx', 'bench/twod-child.ts', kind, String(nx), String(ny), solver, String(runs), String(warmup)],
+    { encoding: 'utf8', timeout: 240_000, maxBuffer: 1 << 20 },
+  );
+  if (r.error) throw r.error;
+  if (r.status !== 0) throw new Error(`twod-child ${kind} ${nx}x${ny} ${solver} exited with ${r.status}: ${r.stderr.trim().split('\n').slice(-3).join(' | ')}`);
+  const line = r.stdout.trim().split('\n').pop() ?? '';
+  return JSON.parse(line) as ChildReport;
+}
+
+function childNote(c: ChildReport): string {
+  const cpu = c.cpuMedianMs === null ? '' : `, CPU ${formatMs(c.cpuMedianMs)}`;
+  return (
+    `${c.samples} runs, min ${formatMs(c.minMs)}, max ${formatMs(c.maxMs)}${cpu}; child process peak RSS ${c.peakRssMB.toFixed(0)} MB ` +
+    `(${c.setupRssMB.toFixed(0)} MB before the first solve: Node, tsx, case, grid, system); residual ${c.relativeResidual.toExponential(1)}`
+  );
+}
+
+export async function benchTwoD(): Promise<BenchRow[]> {
+  const rows: BenchRow[] = [];
+  rows.push(...(await thinGrid()));
+  rows.push(...(await largeThinGrid()));
+  rows.push(...(await squareGrid()));
+  return rows;
+}
+
+/** 2000 x 20, in this process. */
+async function thinGrid(): Promise<BenchRow[]> {
+  const nx = 2000;
+  const ny = 20;
+  const problem = benchProblem2D('thin');
+  const system = benchSystem2D(problem, nx, ny);
+  const opts = { time: 1500, iterations: 20 };
+  const auto = await timeTask('2d auto 2000x20', () => autoSolver2D(system), opts);
+  const factor = await timeTask('2d factor 2000x20', () => factorBandedCholesky(system.matrix), opts);
+  const factored = factorBandedCholesky(system.matrix);
+  const out = new Float64Array(system.rhs.length);
+  const substitution = await timeTask('2d substitutions 2000x20', () => factored.solve(system.rhs, out), opts);
+  const csr = stencilToCsr(system.matrix);
+  const baseline = await timeTask('2d baseline 2000x20', () => generalBandLuSolve(csr, system.rhs, 'natural'), opts);
+  const rcm = await timeTask('2d baseline rcm 2000x20', () => generalBandLuSolve(csr, system.rhs, 'rcm'), { time: 1000, iterations: 10 });
+  const x = autoSolver2D(system);
+  const { x: y, lu } = generalBandLuSolve(csr, system.rhs, 'natural');
+  const { lu: luRcm } = generalBandLuSolve(csr, system.rhs, 'rcm');
+  const ratio = baseline.medianMs / auto.medianMs;
+  const whole = await timeTask('fd-2d 2000x20 end to end', () => solveFin2DProblem(problem, { nx, ny }), { time: 1500, iterations: 10 });
+  const study = await timeTask('fd-2d study demo', () => studyFin2DProblem(problem), { time: 2000, iterations: 5, warmupIterations: 1 });
+  const grids = studyFin2DProblem(problem).grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
+  return [
+    {
+      area: AREA,
+      item: `${nx}x${ny} thin-fin grid solve, autoSolver2D (demo case)`,
+      target: '<= 15 ms',
+      measured: formatMs(auto.medianMs),
+      verdict: atMost(auto.medianMs, 15),
+      note:
+        `${spread(auto)}; banded Cholesky factor alone ${formatMs(factor.medianMs)} (CPU ${formatMs(factor.cpuMedianMs ?? Number.NaN)}), ` +
+        `one forward+back substitution ${formatMs(substitution.medianMs)}; the rest is residuals and refinement; ` +
+        `residual ${relativeResidual(system, x).toExponential(1)}; ${BASELINE} takes ${ratio.toFixed(1)}x as long`,
+    },
+    {
+      area: AREA,
+      item: `${nx}x${ny} baseline: ${BASELINE}`,
+      target: '-',
+      measured: formatMs(baseline.medianMs),
+      verdict: 'info',
+      note:
+        `${spread(baseline)}; ratio baseline/library ${ratio.toFixed(2)}; bandwidths ${lu.lowerBandwidth}/${lu.upperBandwidth}; ` +
+        `same system: max difference from the library's solution ${relativeDifference(y, x).toExponential(1)} (relative); ` +
+        `with reverse Cuthill-McKee order (bandwidths ${luRcm.lowerBandwidth}/${luRcm.upperBandwidth}) ${formatMs(rcm.medianMs)}; ` +
+        `x-fastest natural order: bandwidth ${nx + 1}, ${gigabytes(bandLuBytes(nx * ny, nx, nx))} of band, not run`,
+    },
+    {
+      area: AREA,
+      item: `${nx}x${ny} fd-2d end to end (grid, assembly, solve, heat rates)`,
+      target: '-',
+      measured: formatMs(whole.medianMs),
+      verdict: 'info',
+      note: spread(whole),
+    },
+    {
+      area: AREA,
+      item: `fd-2d refinement study of the demo case in-process (grids ${grids})`,
+      target: '-',
+      measured: formatMs(study.medianMs),
+      verdict: 'info',
+      note: `${spread(study)}; the numerical part of check --reference 2d (the <= 1.5 s target adds Node start-up and the 1-D work)`,
+    },
+  ];
+}
+
+/** 10000 x 50, each solver in a child process of its own. */
+async function largeThinGrid(): Promise<BenchRow[]> {
+  const nx = 10000;
+  const ny = 50;
+  const auto = runChild('thin', nx, ny, 'auto', 5, 1);
+  // ~1.3e9 multiply-adds a run: three runs without warm-up (a run this long is JIT-compiled within the first rows).
+  const baseline = runChild('thin', nx, ny, 'baseline', 3, 0);
+  const ratio = baseline.medianMs / auto.medianMs;
+  const bands = baseline.bandwidths ? `bandwidths ${baseline.bandwidths[0]}/${baseline.bandwidths[1]}; ` : '';
+  return [
+    {
+      area: AREA,
+      item: `${nx}x${ny} thin-fin grid solve, autoSolver2D`,
+      target: '<= 0.6 s',
+      measured: formatMs(auto.medianMs),
+      verdict: atMost(auto.medianMs, 600),
+      note: `${childNote(auto)}; banded Cholesky factor ${(bandedCholeskyBytes(nx, ny) / 2 ** 20).toFixed(0)} MB; ${BASELINE} takes ${ratio.toFixed(1)}x as long`,
+    },
+    {
+      area: AREA,
+      item: `${nx}x${ny} baseline: ${BASELINE}`,
+      target: '-',
+      measured: formatMs(baseline.medianMs),
+      verdict: 'info',
+      note: `${childNote(baseline)}; ${bands}ratio baseline/library ${ratio.toFixed(2)}`,
+    },
+  ];
+}
+
+/** 1000 x 1000: only with an iterative (multigrid/PCG) solver; the band solvers cannot fit. */
+async function squareGrid(): Promise<BenchRow[]> {
+  const n = 1000;
+  const item = `${n}x${n} grid solve (block case)`;
+  const memoryItem = `${n}x${n} grid solve, peak memory (process RSS)`;
+  const cholesky = gigabytes(bandedCholeskyBytes(n, n));
+  const lu = gigabytes(bandLuBytes(n * n, n + 1, n + 1));
+  const bandNote = `banded Cholesky would need ${cholesky} for its factor, the baseline band LU ${lu}: neither is run`;
+  const found = await findIterativeSolver();
+  if (found === null) {
+    const why = `no multigrid/PCG solver exported from src/fd/sparse/ yet; ${bandNote}`;
+    return [skipped(AREA, item, '<= 1 s', why), skipped(AREA, memoryItem, '<= 1 GB', why)];
+  }
+  const r = runChild('block', n, n, 'iterative', 3, 1);
+  return [
+    {
+      area: AREA,
+      item: `${item}, ${found.name}`,
+      target: '<= 1 s',
+      measured: formatMs(r.medianMs),
+      verdict: atMost(r.medianMs, 1000),
+      note: `${childNote(r)}; ${bandNote}`,
+    },
+    {
+      area: AREA,
+      item: memoryItem,
+      target: '<= 1 GB',
+      measured: `${r.peakRssMB.toFixed(0)} MB`,
+      verdict: atMost(r.peakRssMB, 1024),
+      note: `peak RSS of the child process (maxRSS), of which ${r.setupRssMB.toFixed(0)} MB before the first solve; V8 heap + typed arrays after the solves ${r.heapAndBuffersMB.toFixed(0)} MB`,
+    },
+  ];
+}
