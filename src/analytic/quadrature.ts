@@ -77,7 +77,8 @@ export function integrate(f: (x: number) => number, a: number, b: number, option
       error += p.error;
       if (p.error > (panels[worst] as Panel).error) worst = i;
     }
-    if (!Number.isFinite(total)) throw new Error(`integrate: non-finite integrand on [${a}, ${b}]`);
+    if (Number.isNaN(total)) throw new Error(`integrate: NaN integrand on [${a}, ${b}]`);
+    if (!Number.isFinite(total)) return total; // overflow: report +-Infinity to the caller
     if (error <= Math.max(absTolerance, relTolerance * Math.abs(total))) return total;
     if (panels.length >= maxPanels) throw new Error(`integrate: tolerance not met with ${maxPanels} panels (error estimate ${error})`);
     const p = panels[worst] as Panel;
