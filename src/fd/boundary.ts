@@ -24,6 +24,20 @@ import type { Mesh1D } from '../mesh/types.js';
 import { convectiveConductance, interfaceConductance } from './conductance1d.js';
 import type { RowSumSystem } from './tridiagonal.js';
 
+/**
+ * A solution as the heat rates read it: θ_i = reference - drop_i (K). Differences of θ come from the
+ * drops (accurate when θ is nearly uniform, see drop-system.ts); a plain θ is { reference: 0, drop: -θ }.
+ */
+export interface ExcessField {
+  readonly reference: number;
+  readonly drop: Float64Array;
+}
+
+/** The field of a plain θ array (differences then carry the round-off of θ itself). */
+export function fieldFromTheta(theta: Float64Array): ExcessField {
+  return { reference: 0, drop: theta.map((t) => -t) };
+}
+
 export type BaseBoundary =
   /** Fixed base excess temperature θ_b, K. */
   | { readonly kind: 'temperature'; readonly theta: number }
@@ -138,17 +152,17 @@ export function baseHeatRate(
   mesh: Mesh1D,
   conductivity: number,
   hNodes: Float64Array,
-  theta: Float64Array,
+  field: ExcessField,
 ): number {
-  const theta0 = theta[0] as number;
+  const drop0 = field.drop[0] as number;
   switch (base.kind) {
     case 'temperature':
       return (
-        interfaceConductance(mesh, conductivity, 0) * (theta0 - (theta[1] as number)) +
-        convectiveConductance(mesh, hNodes, 0) * theta0
+        interfaceConductance(mesh, conductivity, 0) * ((field.drop[1] as number) - drop0) +
+        convectiveConductance(mesh, hNodes, 0) * (field.reference - drop0)
       );
     case 'contact':
-      return contactConductance(base, mesh) * (base.theta - theta0);
+      return contactConductance(base, mesh) * (base.theta - field.reference + drop0);
     default: {
       const never: never = base;
       throw new Error(`unknown base condition ${JSON.stringify(never)}`);
@@ -162,13 +176,14 @@ export function tipHeatLoss(
   mesh: Mesh1D,
   conductivity: number,
   hNodes: Float64Array,
-  theta: Float64Array,
+  field: ExcessField,
 ): number {
   const last = mesh.nodes - 1;
-  const thetaTip = theta[last] as number;
+  const dropTip = field.drop[last] as number;
+  const thetaTip = field.reference - dropTip;
   if (tip.kind === 'temperature') {
     return (
-      interfaceConductance(mesh, conductivity, last - 1) * ((theta[last - 1] as number) - thetaTip) -
+      interfaceConductance(mesh, conductivity, last - 1) * (dropTip - (field.drop[last - 1] as number)) -
       convectiveConductance(mesh, hNodes, last) * thetaTip
     );
   }

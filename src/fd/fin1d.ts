@@ -4,7 +4,8 @@
  *
  * Equation: d/dx(k A(x) dθ/dx) - h(x) P(x) θ = 0, θ = T - T_amb (K), x from the base (m), with the
  * case's base and tip conditions (boundary.ts). Discrete form: conservative vertex-centred finite
- * volumes (assemble1d.ts), second order in the cell size, solved by a tridiagonal direct solver.
+ * volumes (assemble1d.ts), second order in the cell size, solved for the drop θ_b - θ
+ * (drop-system.ts) by a tridiagonal direct solver (row-sum Thomas by default).
  * Heat rates in W for the whole fin (straight fins: the whole width; annular: the whole ring).
  * Refinement study: three or more nested grids of ratio 2, Richardson extrapolation and the GCI of
  * Celik et al. 2008, J. Fluids Eng. 130(7), 078001 (refinement.ts).
@@ -13,6 +14,7 @@ import { buildMesh1D } from '../mesh/grid1d.js';
 import type { FinGeometry1D, Grading, Mesh1D } from '../mesh/types.js';
 import { assembleFin1D } from './assemble1d.js';
 import { hAtNodes, hBreakpoints } from './convection1d.js';
+import { dropSystem } from './drop-system.js';
 import { finEffectiveness, finHeatRates, idealHeatRate } from './heat-rate1d.js';
 import type { LinearFinCase } from './linear-case.js';
 import { finProblem1D, type FinProblem1D } from './problem1d.js';
@@ -104,8 +106,11 @@ export function solveOnMesh1D(problem: FinProblem1D, mesh: Mesh1D, solver: Tridi
   const { geometry, conductivity, h, base, tip } = problem;
   const hNodes = hAtNodes(h, mesh.x, geometry.length);
   const system = assembleFin1D(mesh, conductivity, hNodes, base, tip);
-  const theta = solver(system);
-  const rates = finHeatRates(mesh, conductivity, hNodes, base, tip, theta);
+  // Solve for the drop below the base excess, δ = θ_b - θ (accurate base conduction: drop-system.ts).
+  const field = { reference: base.theta, drop: solver(dropSystem(system, base.theta)) };
+  const theta = new Float64Array(mesh.nodes);
+  for (let i = 0; i < mesh.nodes; i++) theta[i] = base.theta - (field.drop[i] as number);
+  const rates = finHeatRates(mesh, conductivity, hNodes, base, tip, field);
   const ideal = idealHeatRate(geometry, h, tip, base.theta);
   return {
     model: 'fd-1d',

@@ -5,7 +5,9 @@
  * the base CV's own convection), or the flow through the contact resistance (boundary.ts).
  * Surface heat rate: Q_surf = Σ_i G_i θ_i + Q_tip (convection from every CV plus the tip loss).
  * The scheme is conservative (interface fluxes cancel in pairs), so Q_base = Q_surf up to the
- * round-off of the solve: energyBalance = |Q_base - Q_surf| / |Q_base| (about 1e-13 and below).
+ * round-off of the solve: energyBalance = |Q_base - Q_surf| / |Q_base| (about 1e-12 and below).
+ * The solution comes as θ_i = reference - drop_i so that the base conduction K_0 (θ_0 - θ_1) is
+ * formed from drops, without cancellation (drop-system.ts).
  *
  * Ideal heat rate (efficiency, Harper, D. R. & Brown, W. B., 1922, NACA Report 158 [from memory]):
  * every cooled surface at the base excess θ_b with the same h distribution, computed exactly from
@@ -14,7 +16,7 @@
  * Q / (h(0) A_b θ_b), the heat rate of the bare base area the fin covers.
  */
 import type { FinGeometry1D, Mesh1D } from '../mesh/types.js';
-import { baseHeatRate, tipHeatLoss, type BaseBoundary, type TipBoundary } from './boundary.js';
+import { baseHeatRate, tipHeatLoss, type BaseBoundary, type ExcessField, type TipBoundary } from './boundary.js';
 import { convectiveConductance } from './conductance1d.js';
 import { hAt, idealConvectiveConductance } from './convection1d.js';
 import type { LinearHDistribution } from './linear-case.js';
@@ -28,18 +30,21 @@ export interface FinHeatRates1D {
   readonly energyBalance: number;
 }
 
-/** Base and surface heat rates of a solution θ (K at the nodes) and their energy balance. */
+/** Base and surface heat rates of a solution (θ_i = reference - drop_i, K) and their energy balance. */
 export function finHeatRates(
   mesh: Mesh1D,
   conductivity: number,
   hNodes: Float64Array,
   base: BaseBoundary,
   tip: TipBoundary,
-  theta: Float64Array,
+  field: ExcessField,
 ): FinHeatRates1D {
-  const heatRate = baseHeatRate(base, mesh, conductivity, hNodes, theta);
-  let surfaceHeatRate = tipHeatLoss(tip, mesh, conductivity, hNodes, theta);
-  for (let i = 0; i < mesh.nodes; i++) surfaceHeatRate += convectiveConductance(mesh, hNodes, i) * (theta[i] as number);
+  const heatRate = baseHeatRate(base, mesh, conductivity, hNodes, field);
+  let surfaceHeatRate = tipHeatLoss(tip, mesh, conductivity, hNodes, field);
+  const { reference, drop } = field;
+  for (let i = 0; i < mesh.nodes; i++) {
+    surfaceHeatRate += convectiveConductance(mesh, hNodes, i) * (reference - (drop[i] as number));
+  }
   const scale = Math.max(Math.abs(heatRate), Math.abs(surfaceHeatRate));
   const energyBalance = scale === 0 ? 0 : Math.abs(heatRate - surfaceHeatRate) / (Math.abs(heatRate) || scale);
   return { heatRate, surfaceHeatRate, energyBalance };

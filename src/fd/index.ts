@@ -1,8 +1,9 @@
 /** Public API of the 1-D finite-volume fin solver (fd-1d). */
 export type { LinearFinCase, LinearHDistribution } from './linear-case.js';
 export { isLinearFinCase } from './linear-case.js';
-export type { BaseBoundary, TipBoundary } from './boundary.js';
-export { baseBoundary, tipBoundary } from './boundary.js';
+export type { BaseBoundary, TipBoundary, ExcessField } from './boundary.js';
+export { baseBoundary, tipBoundary, fieldFromTheta, baseHeatRate, tipHeatLoss } from './boundary.js';
+export { dropSystem } from './drop-system.js';
 export type { FinProblem1D } from './problem1d.js';
 export { finProblem1D } from './problem1d.js';
 export { hAt, hAtNodes, hBreakpoints, idealConvectiveConductance } from './convection1d.js';

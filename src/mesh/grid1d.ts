@@ -2,7 +2,7 @@
  * 1-D node sets (uniform or graded, with nodes on every breakpoint) and the vertex-centred mesh
  * built on them: interface cross-sections and control-volume surfaces.
  *
- * Node set: the breakpoints split [0, L] into segments; segment s gets n_s cells (shared in
+ * Node set: the breakpoints (closer ones merged, see BREAKPOINT_MERGE_FRACTION) split [0, L] into segments; segment s gets n_s cells (shared in
  * proportion to length, at least one) and nodes x = a + (b - a) g(j / n_s), where g maps [0, 1]
  * onto itself: uniform g = xi; power law g = xi^p (toward the base), 1 - (1 - xi)^p (toward the
  * tip), xi^p / (xi^p + (1 - xi)^p) (both); geometric g = (S^xi - 1)/(S - 1), S = stretch.
@@ -22,8 +22,12 @@
  */
 import type { FinGeometry1D, Grading, GradingEnd, Grid1DSpec, Mesh1D } from './types.js';
 
-/** Positions closer than this fraction of L are the same breakpoint. */
-const BREAKPOINT_TOLERANCE = 1e-12;
+/**
+ * Breakpoints closer than this fraction of the nominal cell size L/cells are merged into one node:
+ * a cell that small adds nothing but round-off (its conductance k A/Δx would dwarf the rest of the
+ * row), and the kink it resolved then sits inside a cell of the refined grid, an O(Δx · spacing) effect.
+ */
+const BREAKPOINT_MERGE_FRACTION = 0.01;
 
 /** The map g: [0,1] -> [0,1] of a grading, with which ends of this segment it refines. */
 function gradingMap(grading: Grading, refineStart: boolean, refineEnd: boolean): (xi: number) => number {
@@ -56,22 +60,24 @@ function gradingMap(grading: Grading, refineStart: boolean, refineEnd: boolean):
   }
 }
 
-/** Sorted, de-duplicated breakpoints of the geometry and the spec, within [0, L], ends included. */
-export function mergeBreakpoints(length: number, ...lists: ArrayLike<number>[]): Float64Array {
-  const all: number[] = [0, length];
+/**
+ * Sorted breakpoints of the geometry and the spec within [0, L], ends included; positions closer than
+ * minSpacing (m) to the previous kept one are dropped (the ends always stay).
+ */
+export function mergeBreakpoints(length: number, minSpacing: number, ...lists: ArrayLike<number>[]): Float64Array {
+  const inside: number[] = [];
   for (const list of lists) {
     for (let i = 0; i < list.length; i++) {
       const x = list[i] as number;
-      if (x > 0 && x < length) all.push(x);
+      if (x > 0 && x < length) inside.push(x);
     }
   }
-  all.sort((a, b) => a - b);
-  const merged: number[] = [];
-  for (const x of all) {
-    const prev = merged[merged.length - 1];
-    if (prev === undefined || x - prev > BREAKPOINT_TOLERANCE * length) merged.push(x);
+  inside.sort((a, b) => a - b);
+  const merged: number[] = [0];
+  for (const x of inside) {
+    if (x - (merged[merged.length - 1] as number) >= minSpacing && length - x >= minSpacing) merged.push(x);
   }
-  merged[merged.length - 1] = length;
+  merged.push(length);
   return Float64Array.from(merged);
 }
 
@@ -100,9 +106,11 @@ export function allocateCells(breakpoints: Float64Array, cells: number): Int32Ar
 /** Node positions for a geometry and a grid spec (nodes on every breakpoint). */
 export function gridNodes(geometry: FinGeometry1D, spec: Grid1DSpec): { x: Float64Array; cellSize: number } {
   const L = geometry.length;
-  const breakpoints = mergeBreakpoints(L, geometry.breakpoints, spec.breakpoints ?? []);
+  const cells = Math.max(1, Math.round(spec.cells));
+  const minSpacing = (BREAKPOINT_MERGE_FRACTION * L) / cells;
+  const breakpoints = mergeBreakpoints(L, minSpacing, geometry.breakpoints, spec.breakpoints ?? []);
   const refine = spec.refine ?? 1;
-  const counts = allocateCells(breakpoints, Math.max(1, Math.round(spec.cells)));
+  const counts = allocateCells(breakpoints, cells);
   const segments = counts.length;
   let total = 0;
   for (let s = 0; s < segments; s++) total += (counts[s] as number) * refine;
