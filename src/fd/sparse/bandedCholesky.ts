@@ -10,7 +10,7 @@
  */
 import { SolverError } from '../../errors.js';
 import { factorBandedLdltRowSums } from './bandedLdlt.js';
-import { residual, type Solver2D, type Stencil9, type System2D } from './stencil9.js';
+import { coupledRhsNorm1, residual, type Solver2D, type Stencil9, type System2D } from './stencil9.js';
 
 /** A stored factorisation of a banded system: factor once, solve many times. */
 export interface BandedFactor {
@@ -177,24 +177,6 @@ export function solveWithRefinement(factor: BandedFactor, system: System2D): Flo
     size = next;
   }
   return x;
-}
-
-/** sum |rhs_p| over the rows that have at least one coupling. */
-function coupledRhsNorm1(system: System2D): number {
-  const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = system.matrix;
-  const rhs = system.rhs;
-  let s = 0;
-  for (let i = 0; i < nx; i++) {
-    for (let j = 0; j < ny; j++) {
-      const p = i * ny + j;
-      const coupled =
-        east[p] !== 0 || north[p] !== 0 || northEast[p] !== 0 || southEast[p] !== 0 ||
-        (j > 0 && north[p - 1] !== 0) ||
-        (i > 0 && (east[p - ny] !== 0 || (j > 0 && northEast[p - ny - 1] !== 0) || (j + 1 < ny && southEast[p - ny + 1] !== 0)));
-      if (coupled) s += Math.abs(rhs[p] as number);
-    }
-  }
-  return s;
 }
 
 /** One-shot solver: factor, solve, refine if needed. */

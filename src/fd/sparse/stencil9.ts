@@ -110,27 +110,51 @@ export function applyStencil9(a: Stencil9, x: Float64Array, out: Float64Array): 
 export function applyDifferenceForm(a: Stencil9, excess: Float64Array | null, x: Float64Array, out: Float64Array): Float64Array {
   const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = a;
   for (let i = 0; i < nx; i++) {
-    const base = i * ny;
-    for (let j = 0; j < ny; j++) {
-      const p = base + j;
-      const xp = x[p] as number;
-      let s = excess === null ? 0 : (excess[p] as number) * xp;
-      if (j + 1 < ny) s += (north[p] as number) * ((x[p + 1] as number) - xp);
-      if (j > 0) s += (north[p - 1] as number) * ((x[p - 1] as number) - xp);
-      if (i + 1 < nx) {
-        s += (east[p] as number) * ((x[p + ny] as number) - xp);
-        if (j + 1 < ny) s += (northEast[p] as number) * ((x[p + ny + 1] as number) - xp);
-        if (j > 0) s += (southEast[p] as number) * ((x[p + ny - 1] as number) - xp);
-      }
-      if (i > 0) {
-        s += (east[p - ny] as number) * ((x[p - ny] as number) - xp);
-        if (j > 0) s += (northEast[p - ny - 1] as number) * ((x[p - ny - 1] as number) - xp);
-        if (j + 1 < ny) s += (southEast[p - ny + 1] as number) * ((x[p - ny + 1] as number) - xp);
-      }
-      out[p] = s;
+    const start = i * ny;
+    if (i === 0 || i === nx - 1 || ny < 3) {
+      for (let j = 0; j < ny; j++) out[start + j] = differenceRowChecked(a, excess, x, i, j);
+      continue;
     }
+    out[start] = differenceRowChecked(a, excess, x, i, 0);
+    // Interior rows: every neighbour exists.
+    for (let p = start + 1; p < start + ny - 1; p++) {
+      const xp = x[p] as number;
+      const pw = p - ny;
+      const pe = p + ny;
+      out[p] =
+        (excess === null ? 0 : (excess[p] as number) * xp) +
+        (north[p] as number) * ((x[p + 1] as number) - xp) +
+        (north[p - 1] as number) * ((x[p - 1] as number) - xp) +
+        (east[p] as number) * ((x[pe] as number) - xp) +
+        (northEast[p] as number) * ((x[pe + 1] as number) - xp) +
+        (southEast[p] as number) * ((x[pe - 1] as number) - xp) +
+        (east[pw] as number) * ((x[pw] as number) - xp) +
+        (northEast[pw - 1] as number) * ((x[pw - 1] as number) - xp) +
+        (southEast[pw + 1] as number) * ((x[pw + 1] as number) - xp);
+    }
+    out[start + ny - 1] = differenceRowChecked(a, excess, x, i, ny - 1);
   }
   return out;
+}
+
+function differenceRowChecked(a: Stencil9, excess: Float64Array | null, x: Float64Array, i: number, j: number): number {
+  const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = a;
+  const p = i * ny + j;
+  const xp = x[p] as number;
+  let s = excess === null ? 0 : (excess[p] as number) * xp;
+  if (j + 1 < ny) s += (north[p] as number) * ((x[p + 1] as number) - xp);
+  if (j > 0) s += (north[p - 1] as number) * ((x[p - 1] as number) - xp);
+  if (i + 1 < nx) {
+    s += (east[p] as number) * ((x[p + ny] as number) - xp);
+    if (j + 1 < ny) s += (northEast[p] as number) * ((x[p + ny + 1] as number) - xp);
+    if (j > 0) s += (southEast[p] as number) * ((x[p + ny - 1] as number) - xp);
+  }
+  if (i > 0) {
+    s += (east[p - ny] as number) * ((x[p - ny] as number) - xp);
+    if (j > 0) s += (northEast[p - ny - 1] as number) * ((x[p - ny - 1] as number) - xp);
+    if (j + 1 < ny) s += (southEast[p - ny + 1] as number) * ((x[p - ny + 1] as number) - xp);
+  }
+  return s;
 }
 
 /** Coupling A(p, q) between p = (i, j) and q = (i + di, j + dj), |di|, |dj| <= 1 (0 outside the grid). */
@@ -169,4 +193,25 @@ export function stencilToDense(a: Stencil9): number[][] {
     for (let p = 0; p < n; p++) (rows[p] as number[])[q] = col[p] as number;
   }
   return rows;
+}
+
+/**
+ * sum |rhs_p| over the rows that have at least one coupling: the scale of the heat flows, without the
+ * identity rows of fixed nodes (their rhs is a temperature, not a heat flow).
+ */
+export function coupledRhsNorm1(system: System2D): number {
+  const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = system.matrix;
+  const rhs = system.rhs;
+  let s = 0;
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      const p = i * ny + j;
+      const coupled =
+        east[p] !== 0 || north[p] !== 0 || northEast[p] !== 0 || southEast[p] !== 0 ||
+        (j > 0 && north[p - 1] !== 0) ||
+        (i > 0 && (east[p - ny] !== 0 || (j > 0 && northEast[p - ny - 1] !== 0) || (j + 1 < ny && southEast[p - ny + 1] !== 0)));
+      if (coupled) s += Math.abs(rhs[p] as number);
+    }
+  }
+  return s;
 }

@@ -1,0 +1,152 @@
+/**
+ * Grid transfers and Galerkin coarse operators for the structured multigrid.
+ *
+ * Along a coarsened direction the coarse nodes are the fine nodes 0, 2, 4, ... and the last node; a fine
+ * node between two coarse ones takes half of each (linear interpolation in the index). The prolongation is
+ * the tensor product P = Px (x) Py (a direction not coarsened uses the identity), the restriction is P^T,
+ * and the coarse operator is A_c = P^T A P (Galerkin), computed one direction at a time: a 9-point
+ * stencil stays a 9-point stencil, symmetric positive definite when A is. Trottenberg, Oosterlee &
+ * Schuller, "Multigrid" (2001), sections 2.3 and 7.2 (Galerkin coarse-grid operator) [from memory].
+ */
+import { emptyFullStencil, type FullStencil } from './fullStencil.js';
+
+/** Parents of each fine index along one direction: p0 with weight w0, and p1 with w1 (p1 = -1: none). */
+export interface Transfer1D {
+  readonly fine: number;
+  readonly coarse: number;
+  readonly p0: Int32Array;
+  readonly w0: Float64Array;
+  readonly p1: Int32Array;
+  readonly w1: Float64Array;
+}
+
+export function linearTransfer(fine: number): Transfer1D {
+  const coarse = Math.ceil((fine - 1) / 2) + 1;
+  const p0 = new Int32Array(fine);
+  const w0 = new Float64Array(fine);
+  const p1 = new Int32Array(fine).fill(-1);
+  const w1 = new Float64Array(fine);
+  for (let f = 0; f < fine; f++) {
+    if (f % 2 === 0 || f === fine - 1) {
+      p0[f] = Math.ceil(f / 2);
+      w0[f] = 1;
+    } else {
+      p0[f] = (f - 1) / 2;
+      w0[f] = 0.5;
+      p1[f] = (f + 1) / 2;
+      w1[f] = 0.5;
+    }
+  }
+  return { fine, coarse, p0, w0, p1, w1 };
+}
+
+export function identityTransfer(n: number): Transfer1D {
+  return { fine: n, coarse: n, p0: Int32Array.from({ length: n }, (_, f) => f), w0: new Float64Array(n).fill(1), p1: new Int32Array(n).fill(-1), w1: new Float64Array(n) };
+}
+
+/** P^T A P with P acting along x only (t: the transfer along x). */
+export function galerkinAlongX(a: FullStencil, t: Transfer1D): FullStencil {
+  const { nodesX: nx, nodesY: ny, c } = a;
+  const out = emptyFullStencil(t.coarse, ny);
+  const oc = out.c;
+  const { p0, w0, p1, w1 } = t;
+  for (let i = 0; i < nx; i++) {
+    for (let di = -1; di <= 1; di++) {
+      const i2 = i + di;
+      if (i2 < 0 || i2 >= nx) continue;
+      for (let dj = -1; dj <= 1; dj++) {
+        const coef = c[3 * (di + 1) + (dj + 1)] as Float64Array;
+        for (let pa = 0; pa < 2; pa++) {
+          const I = pa === 0 ? (p0[i] as number) : (p1[i] as number);
+          if (I < 0) continue;
+          const wa = pa === 0 ? (w0[i] as number) : (w1[i] as number);
+          for (let pb = 0; pb < 2; pb++) {
+            const I2 = pb === 0 ? (p0[i2] as number) : (p1[i2] as number);
+            if (I2 < 0) continue;
+            const w = wa * (pb === 0 ? (w0[i2] as number) : (w1[i2] as number));
+            const target = oc[3 * (I2 - I + 1) + (dj + 1)] as Float64Array;
+            const fineStart = i * ny;
+            const coarseStart = I * ny;
+            for (let j = 0; j < ny; j++) target[coarseStart + j] = (target[coarseStart + j] as number) + w * (coef[fineStart + j] as number);
+          }
+        }
+      }
+    }
+  }
+  return out;
+}
+
+/** P^T A P with P acting along y only. */
+export function galerkinAlongY(a: FullStencil, t: Transfer1D): FullStencil {
+  const { nodesX: nx, nodesY: ny, c } = a;
+  const nyc = t.coarse;
+  const out = emptyFullStencil(nx, nyc);
+  const oc = out.c;
+  const { p0, w0, p1, w1 } = t;
+  for (let k = 0; k < 9; k++) {
+    const di = Math.floor(k / 3) - 1;
+    const dj = (k % 3) - 1;
+    const coef = c[k] as Float64Array;
+    for (let j = 0; j < ny; j++) {
+      const j2 = j + dj;
+      if (j2 < 0 || j2 >= ny) continue;
+      for (let pa = 0; pa < 2; pa++) {
+        const J = pa === 0 ? (p0[j] as number) : (p1[j] as number);
+        if (J < 0) continue;
+        const wa = pa === 0 ? (w0[j] as number) : (w1[j] as number);
+        for (let pb = 0; pb < 2; pb++) {
+          const J2 = pb === 0 ? (p0[j2] as number) : (p1[j2] as number);
+          if (J2 < 0) continue;
+          const w = wa * (pb === 0 ? (w0[j2] as number) : (w1[j2] as number));
+          const target = oc[3 * (di + 1) + (J2 - J + 1)] as Float64Array;
+          for (let i = 0; i < nx; i++) target[i * nyc + J] = (target[i * nyc + J] as number) + w * (coef[i * ny + j] as number);
+        }
+      }
+    }
+  }
+  return out;
+}
+
+/** coarse = P^T fine (overwrites coarse). */
+export function restrict(fine: Float64Array, coarse: Float64Array, tx: Transfer1D, ty: Transfer1D): void {
+  coarse.fill(0);
+  const nyf = ty.fine;
+  const nyc = ty.coarse;
+  for (let i = 0; i < tx.fine; i++) {
+    for (let pa = 0; pa < 2; pa++) {
+      const I = pa === 0 ? (tx.p0[i] as number) : (tx.p1[i] as number);
+      if (I < 0) continue;
+      const wx = pa === 0 ? (tx.w0[i] as number) : (tx.w1[i] as number);
+      const fs = i * nyf;
+      const cs = I * nyc;
+      for (let j = 0; j < nyf; j++) {
+        const v = wx * (fine[fs + j] as number);
+        const J0 = ty.p0[j] as number;
+        coarse[cs + J0] = (coarse[cs + J0] as number) + (ty.w0[j] as number) * v;
+        const J1 = ty.p1[j] as number;
+        if (J1 >= 0) coarse[cs + J1] = (coarse[cs + J1] as number) + (ty.w1[j] as number) * v;
+      }
+    }
+  }
+}
+
+/** fine += P coarse. */
+export function prolongAdd(coarse: Float64Array, fine: Float64Array, tx: Transfer1D, ty: Transfer1D): void {
+  const nyf = ty.fine;
+  const nyc = ty.coarse;
+  for (let i = 0; i < tx.fine; i++) {
+    for (let pa = 0; pa < 2; pa++) {
+      const I = pa === 0 ? (tx.p0[i] as number) : (tx.p1[i] as number);
+      if (I < 0) continue;
+      const wx = pa === 0 ? (tx.w0[i] as number) : (tx.w1[i] as number);
+      const fs = i * nyf;
+      const cs = I * nyc;
+      for (let j = 0; j < nyf; j++) {
+        const J1 = ty.p1[j] as number;
+        let v = (ty.w0[j] as number) * (coarse[cs + (ty.p0[j] as number)] as number);
+        if (J1 >= 0) v += (ty.w1[j] as number) * (coarse[cs + J1] as number);
+        fine[fs + j] = (fine[fs + j] as number) + wx * v;
+      }
+    }
+  }
+}
