@@ -15,7 +15,7 @@ import { isLinearFinCase } from '../src/fd/linear-case.js';
 import { fieldChart, type FieldChartSpec } from '../src/images/field-chart.js';
 import { lineChart, type LineChartSpec } from '../src/images/line-chart.js';
 import { svgToPng } from '../src/images/render.js';
-import { atMost, formatMs, spread, timeTask, type BenchRow } from './measure.js';
+import { atMost, cpuText, formatMs, spread, timeTask, type BenchRow } from './measure.js';
 
 const AREA = 'images';
 const DEMO_CASE = 'demo/inverter-plate-fin.yaml';
@@ -105,6 +105,7 @@ export async function benchImages(): Promise<BenchRow[]> {
       item,
       target: `<= ${limit} ms`,
       measured: formatMs(png.medianMs),
+      cpu: cpuText(png.cpuMedianMs),
       verdict: atMost(png.medianMs, limit),
       note: `${spread(png)}; of which building the SVG ${formatMs(svgOnly.medianMs)} (median), the rest resvg + PNG encoding`,
     });

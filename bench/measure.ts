@@ -15,8 +15,10 @@ export interface BenchRow {
   readonly item: string;
   /** The target as text, e.g. "<= 10 ms"; "-" when there is none. */
   readonly target: string;
-  /** The measured value as text (median, with units), or "-" when skipped. */
+  /** The measured value as text (median wall time, with units), or "-" when skipped. */
   readonly measured: string;
+  /** Median CPU time of the measuring process per run (see Timing.cpuMedianMs), or "-". */
+  readonly cpu: string;
   readonly verdict: Verdict;
   /** Samples, ratios, what was timed, why skipped. */
   readonly note: string;
@@ -112,13 +114,17 @@ export function atMost(value: number, limit: number): Verdict {
   return value <= limit ? 'pass' : 'FAIL';
 }
 
-/** "n samples, min..max" for the note column. */
+/** "n runs, min, max" for the note column. */
 export function spread(t: Timing): string {
-  const cpu = t.cpuMedianMs === null ? '' : `, CPU ${formatMs(t.cpuMedianMs)}`;
-  return `${t.samples} runs, min ${formatMs(t.minMs)}, max ${formatMs(t.maxMs)}${cpu}`;
+  return `${t.samples} runs, min ${formatMs(t.minMs)}, max ${formatMs(t.maxMs)}`;
+}
+
+/** The CPU column: the median CPU time, or "-" when it was not measured. */
+export function cpuText(ms: number | null): string {
+  return ms === null ? '-' : formatMs(ms);
 }
 
 /** A row for something that could not be measured. */
 export function skipped(area: string, item: string, target: string, why: string): BenchRow {
-  return { area, item, target, measured: '-', verdict: 'skip', note: why };
+  return { area, item, target, measured: '-', cpu: '-', verdict: 'skip', note: why };
 }

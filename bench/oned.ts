@@ -18,7 +18,7 @@ import { finProblem1D, type FinProblem1D } from '../src/fd/problem1d.js';
 import { thomasInto, twoSidedThomasInto, type RowSumSystem } from '../src/fd/tridiagonal.js';
 import { buildMesh1D } from '../src/mesh/grid1d.js';
 import type { Mesh1D } from '../src/mesh/types.js';
-import { atMost, formatMs, spread, timeTask, type BenchRow } from './measure.js';
+import { atMost, cpuText, formatMs, spread, timeTask, type BenchRow } from './measure.js';
 
 const AREA = '1-D';
 const DEMO_CASE = 'demo/inverter-plate-fin.yaml';
@@ -49,7 +49,7 @@ function assembled(problem: FinProblem1D, mesh: Mesh1D): { system: RowSumSystem;
 
 /** Time budget per size: enough runs for a stable median, small enough for the whole suite in ~3 min. */
 function budget(nodes: number): { time: number; iterations: number } {
-  return nodes >= 1e6 ? { time: 1500, iterations: 30 } : { time: 400, iterations: 50 };
+  return nodes >= 1e6 ? { time: 1000, iterations: 30 } : { time: 400, iterations: 50 };
 }
 
 export async function benchOneD(): Promise<BenchRow[]> {
@@ -69,6 +69,7 @@ export async function benchOneD(): Promise<BenchRow[]> {
       item: `tridiagonal solve alone, ${n} nodes (default row-sum Thomas)`,
       target: big ? '<= 10 ms' : '-',
       measured: formatMs(t.medianMs),
+      cpu: cpuText(t.cpuMedianMs),
       verdict: big ? atMost(t.medianMs, 10) : 'info',
       note: `${spread(t)}; ${((t.medianMs * 1e6) / n).toFixed(1)} ns/node${big ? `; ${(t.medianMs / C_THOMAS_1E6_MS).toFixed(2)}x the C Thomas (8.1 ms)` : ''}`,
     });
@@ -83,6 +84,7 @@ export async function benchOneD(): Promise<BenchRow[]> {
           item: `tridiagonal solve alone, ${n} nodes, ${label}`,
           target: '<= 10 ms',
           measured: formatMs(s.medianMs),
+      cpu: cpuText(s.cpuMedianMs),
           verdict: atMost(s.medianMs, 10),
           note: `${spread(s)}; ${(s.medianMs / C_THOMAS_1E6_MS).toFixed(2)}x the C Thomas (8.1 ms)`,
         });
@@ -103,6 +105,7 @@ export async function benchOneD(): Promise<BenchRow[]> {
         item: `assemble + solve, ${n} nodes (mesh reused, arrays reused)`,
         target: '-',
         measured: formatMs(a.medianMs),
+      cpu: cpuText(a.cpuMedianMs),
         verdict: 'info',
         note: spread(a),
       });
@@ -115,6 +118,7 @@ export async function benchOneD(): Promise<BenchRow[]> {
         item: `solveFinProblem1D end to end, ${n} nodes (mesh, assembly, solve, heat rates; allocates)`,
         target: '-',
         measured: formatMs(e.medianMs),
+      cpu: cpuText(e.cpuMedianMs),
         verdict: 'info',
         note: spread(e),
       });
@@ -156,6 +160,7 @@ async function repeatedSmallSolves(problem: FinProblem1D): Promise<BenchRow[]> {
       item: `${repeats} solves of ${n} nodes (conservativeThomasInto, arrays reused), total`,
       target: '<= 100 ms',
       measured: formatMs(solveOnly.medianMs),
+      cpu: cpuText(solveOnly.cpuMedianMs),
       verdict: atMost(solveOnly.medianMs, 100),
       note: spread(solveOnly),
     },
@@ -164,6 +169,7 @@ async function repeatedSmallSolves(problem: FinProblem1D): Promise<BenchRow[]> {
       item: `${repeats} x (assemble into + solve) of ${n} nodes, total`,
       target: '-',
       measured: formatMs(withAssembly.medianMs),
+      cpu: cpuText(withAssembly.cpuMedianMs),
       verdict: 'info',
       note: `${spread(withAssembly)}; what a nonlinear (Picard/Newton) loop pays per iteration x 1e4`,
     },

@@ -34,9 +34,9 @@ function pad(text: string, width: number): string {
 }
 
 function printTable(rows: readonly BenchRow[]): void {
-  const header = { n: '#', area: 'area', item: 'item', target: 'target', measured: 'median', verdict: 'verdict' };
-  const lines = rows.map((r, k) => ({ n: String(k + 1), area: r.area, item: r.item, target: r.target, measured: r.measured, verdict: r.verdict }));
-  const keys = ['n', 'area', 'item', 'target', 'measured', 'verdict'] as const;
+  const header = { n: '#', area: 'area', item: 'item', target: 'target', measured: 'median', verdict: 'verdict', cpu: 'CPU median' };
+  const lines = rows.map((r, k) => ({ n: String(k + 1), area: r.area, item: r.item, target: r.target, measured: r.measured, verdict: r.verdict, cpu: r.cpu }));
+  const keys = ['n', 'area', 'item', 'target', 'measured', 'verdict', 'cpu'] as const;
   const widths = keys.map((key) => Math.max(header[key].length, ...lines.map((l) => l[key].length)));
   const format = (l: Record<(typeof keys)[number], string>) => keys.map((key, c) => pad(l[key], widths[c] as number)).join('  ').trimEnd();
   console.log(format(header));
@@ -68,7 +68,10 @@ async function main(): Promise<void> {
   printTable(rows);
   const failed = rows.filter((r) => r.verdict === 'FAIL').length;
   const skippedRows = rows.filter((r) => r.verdict === 'skip').length;
-  console.log(`\n${rows.length} rows: ${failed} FAIL, ${skippedRows} skipped (medians of wall time; see the notes for CPU time).`);
+  console.log(
+    `\n${rows.length} rows: ${failed} FAIL, ${skippedRows} skipped. Verdicts judge the median wall time; the CPU median ` +
+      '(time on a core, waiting for one left out) shows how much of a miss is the load of a shared machine.',
+  );
 }
 
 await main();

@@ -17,7 +17,7 @@ import { autoSolver2D } from '../src/fd/sparse/autoSolver.js';
 import { bandedCholeskyBytes, factorBandedCholesky } from '../src/fd/sparse/bandedCholesky.js';
 import type { ChildReport } from './twod-child.js';
 import { bandLuBytes, generalBandLuSolve, relativeDifference, stencilToCsr } from './generalBandLu.js';
-import { atMost, formatMs, skipped, spread, timeTask, type BenchRow } from './measure.js';
+import { atMost, cpuText, formatMs, skipped, spread, timeTask, type BenchRow } from './measure.js';
 import { benchProblem2D, benchSystem2D, findIterativeSolver, relativeResidual, type BenchCase2D } from './twodSystems.js';
 
 const AREA = '2-D';
@@ -40,9 +40,8 @@ function runChild(kind: BenchCase2D, nx: number, ny: number, solver: 'auto' | 'b
 }
 
 function childNote(c: ChildReport): string {
-  const cpu = c.cpuMedianMs === null ? '' : `, CPU ${formatMs(c.cpuMedianMs)}`;
   return (
-    `${c.samples} runs, min ${formatMs(c.minMs)}, max ${formatMs(c.maxMs)}${cpu}; child process peak RSS ${c.peakRssMB.toFixed(0)} MB ` +
+    `${c.samples} runs, min ${formatMs(c.minMs)}, max ${formatMs(c.maxMs)}; child process peak RSS ${c.peakRssMB.toFixed(0)} MB ` +
     `(${c.setupRssMB.toFixed(0)} MB before the first solve: Node, tsx, case, grid, system); residual ${c.relativeResidual.toExponential(1)}`
   );
 }
@@ -61,7 +60,7 @@ async function thinGrid(): Promise<BenchRow[]> {
   const ny = 20;
   const problem = benchProblem2D('thin');
   const system = benchSystem2D(problem, nx, ny);
-  const opts = { time: 1500, iterations: 20 };
+  const opts = { time: 800, iterations: 15 };
   const auto = await timeTask('2d auto 2000x20', () => autoSolver2D(system), opts);
   const factor = await timeTask('2d factor 2000x20', () => factorBandedCholesky(system.matrix), opts);
   const factored = factorBandedCholesky(system.matrix);
@@ -74,8 +73,8 @@ async function thinGrid(): Promise<BenchRow[]> {
   const { x: y, lu } = generalBandLuSolve(csr, system.rhs, 'natural');
   const { lu: luRcm } = generalBandLuSolve(csr, system.rhs, 'rcm');
   const ratio = baseline.medianMs / auto.medianMs;
-  const whole = await timeTask('fd-2d 2000x20 end to end', () => solveFin2DProblem(problem, { nx, ny }), { time: 1500, iterations: 10 });
-  const study = await timeTask('fd-2d study demo', () => studyFin2DProblem(problem), { time: 2000, iterations: 5, warmupIterations: 1 });
+  const whole = await timeTask('fd-2d 2000x20 end to end', () => solveFin2DProblem(problem, { nx, ny }), { time: 800, iterations: 10 });
+  const study = await timeTask('fd-2d study demo', () => studyFin2DProblem(problem), { time: 800, iterations: 5, warmupIterations: 1 });
   const grids = studyFin2DProblem(problem).grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
   return [
     {
@@ -83,9 +82,10 @@ async function thinGrid(): Promise<BenchRow[]> {
       item: `${nx}x${ny} thin-fin grid solve, autoSolver2D (demo case)`,
       target: '<= 15 ms',
       measured: formatMs(auto.medianMs),
+      cpu: cpuText(auto.cpuMedianMs),
       verdict: atMost(auto.medianMs, 15),
       note:
-        `${spread(auto)}; banded Cholesky factor alone ${formatMs(factor.medianMs)} (CPU ${formatMs(factor.cpuMedianMs ?? Number.NaN)}), ` +
+        `${spread(auto)}; banded Cholesky factor alone ${formatMs(factor.medianMs)} (CPU ${cpuText(factor.cpuMedianMs)}), ` +
         `one forward+back substitution ${formatMs(substitution.medianMs)}; the rest is residuals and refinement; ` +
         `residual ${relativeResidual(system, x).toExponential(1)}; ${BASELINE} takes ${ratio.toFixed(1)}x as long`,
     },
@@ -94,6 +94,7 @@ async function thinGrid(): Promise<BenchRow[]> {
       item: `${nx}x${ny} baseline: ${BASELINE}`,
       target: '-',
       measured: formatMs(baseline.medianMs),
+      cpu: cpuText(baseline.cpuMedianMs),
       verdict: 'info',
       note:
         `${spread(baseline)}; ratio baseline/library ${ratio.toFixed(2)}; bandwidths ${lu.lowerBandwidth}/${lu.upperBandwidth}; ` +
@@ -106,6 +107,7 @@ async function thinGrid(): Promise<BenchRow[]> {
       item: `${nx}x${ny} fd-2d end to end (grid, assembly, solve, heat rates)`,
       target: '-',
       measured: formatMs(whole.medianMs),
+      cpu: cpuText(whole.cpuMedianMs),
       verdict: 'info',
       note: spread(whole),
     },
@@ -114,6 +116,7 @@ async function thinGrid(): Promise<BenchRow[]> {
       item: `fd-2d refinement study of the demo case in-process (grids ${grids})`,
       target: '-',
       measured: formatMs(study.medianMs),
+      cpu: cpuText(study.cpuMedianMs),
       verdict: 'info',
       note: `${spread(study)}; the numerical part of check --reference 2d (the <= 1.5 s target adds Node start-up and the 1-D work)`,
     },
@@ -124,9 +127,9 @@ async function thinGrid(): Promise<BenchRow[]> {
 async function largeThinGrid(): Promise<BenchRow[]> {
   const nx = 10000;
   const ny = 50;
-  const auto = runChild('thin', nx, ny, 'auto', 5, 1);
-  // ~1.3e9 multiply-adds a run: three runs without warm-up (a run this long is JIT-compiled within the first rows).
-  const baseline = runChild('thin', nx, ny, 'baseline', 3, 0);
+  const auto = runChild('thin', nx, ny, 'auto', 3, 1);
+  // ~1.3e9 multiply-adds a run: two runs without warm-up (a run this long is JIT-compiled within its first rows).
+  const baseline = runChild('thin', nx, ny, 'baseline', 2, 0);
   const ratio = baseline.medianMs / auto.medianMs;
   const bands = baseline.bandwidths ? `bandwidths ${baseline.bandwidths[0]}/${baseline.bandwidths[1]}; ` : '';
   return [
@@ -135,6 +138,7 @@ async function largeThinGrid(): Promise<BenchRow[]> {
       item: `${nx}x${ny} thin-fin grid solve, autoSolver2D`,
       target: '<= 0.6 s',
       measured: formatMs(auto.medianMs),
+      cpu: cpuText(auto.cpuMedianMs),
       verdict: atMost(auto.medianMs, 600),
       note: `${childNote(auto)}; banded Cholesky factor ${(bandedCholeskyBytes(nx, ny) / 2 ** 20).toFixed(0)} MB; ${BASELINE} takes ${ratio.toFixed(1)}x as long`,
     },
@@ -143,6 +147,7 @@ async function largeThinGrid(): Promise<BenchRow[]> {
       item: `${nx}x${ny} baseline: ${BASELINE}`,
       target: '-',
       measured: formatMs(baseline.medianMs),
+      cpu: cpuText(baseline.cpuMedianMs),
       verdict: 'info',
       note: `${childNote(baseline)}; ${bands}ratio baseline/library ${ratio.toFixed(2)}`,
     },
@@ -162,13 +167,15 @@ async function squareGrid(): Promise<BenchRow[]> {
     const why = `no multigrid/PCG solver exported from src/fd/sparse/ yet; ${bandNote}`;
     return [skipped(AREA, item, '<= 1 s', why), skipped(AREA, memoryItem, '<= 1 GB', why)];
   }
-  const r = runChild('block', n, n, 'iterative', 3, 1);
+  // Seconds a run: three runs without warm-up (the median leaves out the one that paid for the JIT).
+  const r = runChild('block', n, n, 'iterative', 3, 0);
   return [
     {
       area: AREA,
       item: `${item}, ${found.name}`,
       target: '<= 1 s',
       measured: formatMs(r.medianMs),
+      cpu: cpuText(r.cpuMedianMs),
       verdict: atMost(r.medianMs, 1000),
       note: `${childNote(r)}; ${bandNote}`,
     },
@@ -177,6 +184,7 @@ async function squareGrid(): Promise<BenchRow[]> {
       item: memoryItem,
       target: '<= 1 GB',
       measured: `${r.peakRssMB.toFixed(0)} MB`,
+      cpu: '-',
       verdict: atMost(r.peakRssMB, 1024),
       note: `peak RSS of the child process (maxRSS), of which ${r.setupRssMB.toFixed(0)} MB before the first solve; V8 heap + typed arrays after the solves ${r.heapAndBuffersMB.toFixed(0)} MB`,
     },
