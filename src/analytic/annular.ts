@@ -9,7 +9,7 @@
  *     [from memory]; Shabany, Heat Transfer: Thermal Management of Electronics, CRC 2009, eq. 7.53.
  *   Corrected radius: the same with r2c = r2 + t/2 and area 2 pi (r2c^2 - r1^2) (Shabany 2009, eq. 7.53).
  *   Exact convective rim (-k theta'(r2) = h_tip theta(r2), B = h_tip/(m k)):
- *     theta = I0(mr) + C K0(mr),  C = (I1(b) + B I0(b)) / (K1(b) - B K0(b)),
+ *     theta ~ (K1(b) - B K0(b)) I0(mr) + (I1(b) + B I0(b)) K0(mr),
  *     q = -2 pi r1 t k theta'(r1) thetaBase/theta(r1); eta on 2 pi (r2^2 - r1^2) + 2 pi r2 t.
  *     (derived from the general solution, A&S 1964 eqs. 9.6.27; checked against scipy in profiles.py)
  *   Schmidt's approximation: eta = tanh(m r1 phi)/(m r1 phi), phi = (r2/r1 - 1)(1 + 0.35 ln(r2/r1))
@@ -84,11 +84,12 @@ export function annularFinConvectiveTip(input: AnnularFinInput & { hTip?: number
   const b = m * r2;
   const B = hTip / (m * input.k);
   const decay = Math.exp(-2 * (b - a));
-  // C = e^{2b} rho with rho in scaled functions; theta(r1) and theta'(r1) share the factor e^{2b - a}.
-  const rhoDenominator = K1e(b) - B * K0e(b);
-  if (!(rhoDenominator > 0)) throw new RangeError('annularFinConvectiveTip: rim Biot number h t/(2k) too large for this radius');
-  const rho = (I1e(b) + B * I0e(b)) / rhoDenominator;
-  const minusSlopeOverTheta = (m * (rho * K1e(a) - I1e(a) * decay)) / (rho * K0e(a) + I0e(a) * decay);
+  // theta ~ alpha e^{-b} I0(mr) + gamma e^{b} K0(mr) with alpha = K1e(b) - B K0e(b), gamma = I1e(b) + B I0e(b)
+  // (no division by alpha, which vanishes or turns negative when B >= ~1); at r1 both theta and
+  // -theta'/m carry the factor e^{b - a}, which cancels.
+  const alpha = K1e(b) - B * K0e(b);
+  const gamma = I1e(b) + B * I0e(b);
+  const minusSlopeOverTheta = (m * (gamma * K1e(a) - alpha * I1e(a) * decay)) / (gamma * K0e(a) + alpha * I0e(a) * decay);
   const heatRate = 2 * Math.PI * r1 * input.thickness * input.k * minusSlopeOverTheta * input.thetaBase;
   const area = 2 * Math.PI * (r2 * r2 - r1 * r1) + 2 * Math.PI * r2 * input.thickness;
   return { efficiency: heatRate / (input.h * area * input.thetaBase), heatRate, area, m, mL: m * (r2 - r1) };
