@@ -18,6 +18,7 @@ import { cephesLibrary } from './cephes-runtime.js';
 import { besselIRatio } from './bessel-ratio.js';
 
 export { initBessel, isBesselReady } from './cephes-runtime.js';
+export { besselIRatio } from './bessel-ratio.js';
 
 function checkI(name: string, x: number): void {
   if (!(x >= 0)) throw new RangeError(`${name}: argument must be >= 0, got ${x}`);
