@@ -6,6 +6,7 @@ import { registerSolve } from './commands/solve.js';
 import { registerMaterials } from './commands/materials.js';
 import { registerSchema } from './commands/schema.js';
 import { registerDemo } from './commands/demo.js';
+import { registerMap } from './commands/map.js';
 import { VERSION } from '../src/version.js';
 
 /** A command reports a non-zero outcome (e.g. exit 1 for --strict) through this; errors are thrown. */
@@ -23,7 +24,7 @@ export function buildProgram(io: Io, setExit: SetExit): Command {
     .exitOverride()
     .showHelpAfterError('(run with --help for usage and examples)')
     .configureOutput({ writeOut: (s) => io.out(s), writeErr: (s) => io.err(s) });
-  for (const register of [registerCheck, registerSolve, registerMaterials, registerSchema, registerDemo]) {
+  for (const register of [registerCheck, registerSolve, registerMaterials, registerSchema, registerDemo, registerMap]) {
     const cmd = register(program, io, setExit);
     cmd.exitOverride().configureOutput({ writeOut: (s) => io.out(s), writeErr: (s) => io.err(s) });
   }

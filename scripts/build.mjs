@@ -16,3 +16,18 @@ await build({
   external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
   logLevel: 'warning',
 });
+
+// The map command's worker thread (src/map/worker.ts) needs its own entry: dist/fincheck.js starts
+// dist/map-worker.js beside it (src/map/worker-start.ts).
+await build({
+  entryPoints: ['src/map/worker.ts'],
+  outfile: 'dist/map-worker.js',
+  bundle: true,
+  platform: 'node',
+  format: 'esm',
+  target: 'node20',
+  sourcemap: true,
+  banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
+  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
+  logLevel: 'warning',
+});

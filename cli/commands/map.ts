@@ -1,0 +1,155 @@
+/** `fincheck map CASE --x KEY=FROM:TO --y KEY=FROM:TO`: where each shortcut holds, over two case parameters. */
+import type { Command } from 'commander';
+import { readFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { basename, extname, join } from 'node:path';
+import { z } from 'zod';
+import { loadCase } from '../../src/case/parse.js';
+import type { ShortcutId } from '../../src/compare/types.js';
+import { formatMapSummary } from '../../src/map/format.js';
+import { mapJsonText } from '../../src/map/json.js';
+import { OutputsInterrupted, renderMapFiles } from '../../src/map/outputs.js';
+import { MapInterrupted } from '../../src/map/pool.js';
+import { progressBar } from '../../src/map/progress.js';
+import { prepareMap, runMap } from '../../src/map/run-map.js';
+import { StagedFiles } from '../../src/map/staged-files.js';
+import type { Io } from '../io.js';
+import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import type { SetExit } from '../program.js';
+
+const shortcutIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form'] as const satisfies readonly ShortcutId[];
+
+/** "41x41" (NX x NY) or "41" (both): at least 2 and at most 1000 values per axis. */
+const stepsOption = z
+  .string()
+  .trim()
+  .transform((s, ctx): [number, number] => {
+    const m = /^(\d+)(?:\s*[x×*]\s*(\d+))?$/i.exec(s);
+    const nx = m ? Number(m[1]) : Number.NaN;
+    const ny = m ? Number(m[2] ?? m[1]) : Number.NaN;
+    if (!(nx >= 2 && ny >= 2 && nx <= 1000 && ny <= 1000)) {
+      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, each from 2 to 1000' });
+      return z.NEVER;
+    }
+    return [nx, ny];
+  });
+
+const modelsOption = z
+  .string()
+  .transform((s) => s.split(',').map((m) => m.trim()).filter((m) => m !== ''))
+  .pipe(z.array(z.enum(shortcutIds)).min(1));
+
+const jobsOption = z.coerce.number().int().min(1).max(256);
+const formatOption = z.enum(['png', 'svg']);
+
+interface MapOptions {
+  x: string;
+  y: string;
+  steps: string;
+  logX?: boolean;
+  logY?: boolean;
+  models?: string;
+  reference: string;
+  tolerance: string;
+  jobs?: string;
+  out?: string;
+  format: string;
+  json?: boolean;
+}
+
+/** ./fincheck-map-<file name as a slug>. */
+function defaultOutDir(file: string): string {
+  const slug = basename(file, extname(file)).toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'case';
+  return join('.', `fincheck-map-${slug}`);
+}
+
+export function registerMap(program: Command, io: Io, setExit: SetExit): Command {
+  return program
+    .command('map')
+    .argument('<case>', 'case file (YAML or JSON)')
+    .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point)')
+    .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm')
+    .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. convection.h=10:1000 W/(m^2*K)')
+    .option('--steps <NXxNY>', 'grid points along x and y', '41x41')
+    .option('--log-x', 'space the x values geometrically and draw a log axis')
+    .option('--log-y', 'space the y values geometrically and draw a log axis')
+    .option('--models <ids>', `shortcuts to map, comma-separated (${shortcutIds.join(', ')}); default every one that applies`)
+    .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
+    .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
+    .option('--jobs <n>', 'worker threads (default: all cores; 1 runs in this process)')
+    .option('--out <dir>', 'folder for map.csv, map.json and the images (default ./fincheck-map-<case>)')
+    .option('--format <png|svg>', 'image format', 'png')
+    .option('--json', 'print the map as one JSON document (outputs.md) instead of the summary')
+    .addHelpText(
+      'after',
+      `
+KEY is a key path of the case file; FROM and TO take units like the case file (a bare number is SI,
+a bare temperature degC; a unit on one end applies to both: 1:3 mm). Points where the case becomes
+invalid (a tip thicker than the base, say) are marked in the outputs and counted in the summary.
+Files are written under temporary names and renamed when all are complete; Ctrl-C leaves none.
+
+Examples:
+  fincheck map demo/inverter-plate-fin.yaml --x fin.thickness=0.5:5mm --y convection.h=10:500 --log-y
+  fincheck map my-fin.yaml --x fin.length=10mm:80mm --y material.k=15:400 --steps 21x21 --models tanh-Lc,convective-tip
+  fincheck map my-fin.yaml --x fin.thickness=1mm:4mm --y convection.h=20:2000 --log-y --json > map.json`,
+    )
+    .action(async (file: string, o: MapOptions) => {
+      const steps = parseOption('--steps', stepsOption, o.steps);
+      const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
+      const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
+      const models = o.models === undefined ? undefined : parseOption('--models', modelsOption, o.models, `a comma-separated list of ${shortcutIds.join(', ')}`);
+      const jobs = o.jobs === undefined ? availableParallelism() : parseOption('--jobs', jobsOption, o.jobs, 'a whole number of threads from 1 to 256');
+      const format = parseOption('--format', formatOption, o.format, 'png or svg');
+      const outDir = o.out ?? defaultOutDir(file);
+
+      loadCase(file);
+      const caseText = readFileSync(file, 'utf8');
+      const prepared = await prepareMap({
+        caseText,
+        fileName: file,
+        x: o.x,
+        y: o.y,
+        logX: o.logX === true,
+        logY: o.logY === true,
+        steps,
+        tolerance,
+        reference,
+        ...(models ? { models } : {}),
+      });
+
+      const controller = new AbortController();
+      const onInterrupt = (): void => controller.abort();
+      process.on('SIGINT', onInterrupt);
+      const total = steps[0] * steps[1];
+      const progress = progressBar((t) => io.err(t), io.errIsTTY, total);
+      const staged = new StagedFiles(outDir);
+      let done = 0;
+      try {
+        const run = await runMap(prepared, {
+          jobs,
+          signal: controller.signal,
+          onPoint: (n) => {
+            done = n;
+            progress.update(n);
+          },
+        });
+        progress.finish();
+        const files = await renderMapFiles(run, format, () => controller.signal.aborted);
+        if (controller.signal.aborted) throw new OutputsInterrupted('interrupted while writing');
+        for (const f of files) staged.stage(f.name, f.data);
+        const written = staged.commit();
+        io.out(o.json ? mapJsonText(run) : formatMapSummary(run, written));
+      } catch (err) {
+        progress.finish();
+        staged.discard();
+        if (err instanceof MapInterrupted || err instanceof OutputsInterrupted) {
+          io.err(`fincheck: interrupted after ${done} of ${total} points; no files were written\n`);
+          setExit(130);
+          return;
+        }
+        throw err;
+      } finally {
+        process.off('SIGINT', onInterrupt);
+      }
+    });
+}

@@ -1,0 +1,151 @@
+/**
+ * `--x KEY=FROM:TO` (and `--y`): which case key to sweep, between which values, in which unit. Everything that
+ * can be known before the run is checked here and refused with a UsageError (exit 2) naming the option: a key
+ * that is not a numeric key of the case, units of the wrong kind, FROM == TO, an end outside the key's own range,
+ * a log axis through zero.
+ *
+ * Units: FROM and TO are read like case-file values (`1 mm`, `0.04 in`, `27 BTU/(h*ft^2*degF)`, a bare number is
+ * SI, a bare temperature degC). A unit written on one end only applies to both (`1:3 mm` is 1 mm to 3 mm). When
+ * both ends carry different units, TO is converted to FROM's unit. Axis values are spaced in that unit.
+ */
+import {
+  fromSI,
+  formatKeyPath,
+  getByKeyPath,
+  normaliseUnitText,
+  parseKeyPath,
+  parseQuantity,
+  quantityKinds,
+  type Case,
+  type KeyPath,
+  type QuantityKind,
+} from '../case/index.js';
+import { UsageError } from '../errors.js';
+import { axisKeyInfo, mappableKeyExamples, type AxisKeyInfo } from './axis-keys.js';
+import { axisValues } from './spacing.js';
+import { rawAxisValue } from './substitute.js';
+import type { MapAxis } from './types.js';
+
+export interface AxisRequest {
+  /** '--x' or '--y', for messages. */
+  option: string;
+  /** KEY=FROM:TO as typed. */
+  text: string;
+  steps: number;
+  log: boolean;
+}
+
+const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?/;
+
+/** "3 mm" -> { value: 3, unit: 'mm' }; "3" -> { value: 3, unit: '' }. */
+function splitNumber(option: string, key: string, text: string): { value: number; unit: string } {
+  const normalised = normaliseUnitText(text);
+  const match = NUMBER.exec(normalised);
+  if (!match || !Number.isFinite(Number(match[0]))) {
+    throw new UsageError(`${option}: ${key}: got "${text}"; expected a number with an optional unit, such as "2 mm"`);
+  }
+  return { value: Number(match[0]), unit: normalised.slice(match[0].length).trim() };
+}
+
+function keyOf(option: string, keyText: string): { path: KeyPath; key: string } {
+  try {
+    const path = parseKeyPath(keyText);
+    return { path, key: formatKeyPath(path) };
+  } catch (err) {
+    if (err instanceof UsageError) throw new UsageError(`${option}: ${err.message}`);
+    throw err;
+  }
+}
+
+/** The SI value of the key in the case (its default when absent and optional), or throws when it is not there. */
+function caseValueSI(option: string, key: string, path: KeyPath, info: AxisKeyInfo, raw: unknown, c: Case): number {
+  if (key === 'material.k' && typeof getByKeyPath(raw, ['material']) === 'string') {
+    if (c.material.k.kind !== 'constant') throw new Error('built-in material without a constant k');
+    return c.material.k.k;
+  }
+  const current = getByKeyPath(raw, path);
+  if (current === undefined) {
+    if (info.absentDefault !== undefined) return info.absentDefault;
+    const parent = getByKeyPath(raw, path.slice(0, -1));
+    const present =
+      typeof parent === 'object' && parent !== null && !Array.isArray(parent)
+        ? ` (${formatKeyPath(path.slice(0, -1))} has ${Object.keys(parent).join(', ')})`
+        : '';
+    throw new UsageError(`${option}: ${key} is not in this case${present}; map a key the case has, e.g. ${mappableKeyExamples}`);
+  }
+  if (typeof current !== 'number' && typeof current !== 'string') {
+    throw new UsageError(
+      `${option}: ${key} is not a single value in this case (it is ${Array.isArray(current) ? 'a list' : 'a mapping'}); ` +
+        `map one of its values instead, e.g. ${key}.base or ${key}.points[0][1]`,
+    );
+  }
+  const parsed = parseQuantity(current, info.kind);
+  if (!parsed.ok) throw new Error(`${key} of a validated case does not parse: ${parsed.problem}`);
+  return parsed.value;
+}
+
+function unitProblem(kind: QuantityKind, unit: string): string | undefined {
+  if (unit === '') return undefined;
+  const probe = parseQuantity(`1 ${unit}`, kind);
+  return probe.ok ? undefined : probe.problem;
+}
+
+/** Parses and checks one axis option against the case (raw object as read, and its validated form). */
+export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAxis {
+  const { option, text } = request;
+  const eq = text.indexOf('=');
+  if (eq < 0) throw new UsageError(`${option}: got "${text}"; expected KEY=FROM:TO such as fin.thickness=1mm:3mm`);
+  const { path, key } = keyOf(option, text.slice(0, eq).trim());
+  const info = axisKeyInfo(key);
+  if (!info) throw new UsageError(`${option}: ${key} is not a numeric key of a case; map one of ${mappableKeyExamples}`);
+  const own = caseValueSI(option, key, path, info, raw, c);
+
+  const ends = text.slice(eq + 1).split(':');
+  if (ends.length !== 2 || ends.some((e) => e.trim() === '')) {
+    throw new UsageError(`${option}: ${key}: got "${text.slice(eq + 1)}"; expected FROM:TO such as 1mm:3mm`);
+  }
+  const from = splitNumber(option, key, (ends[0] as string).trim());
+  const to = splitNumber(option, key, (ends[1] as string).trim());
+  const unit = from.unit !== '' ? from.unit : to.unit;
+  const kindName = quantityKinds[info.kind].noun;
+  for (const u of new Set([from.unit, to.unit])) {
+    const problem = unitProblem(info.kind, u);
+    if (problem) throw new UsageError(`${option}: ${key} takes ${kindName}; ${problem}`);
+  }
+  let toValue = to.value;
+  if (to.unit !== '' && to.unit !== unit) {
+    const si = parseQuantity(`${to.value} ${to.unit}`, info.kind);
+    if (!si.ok) throw new UsageError(`${option}: ${key} takes ${kindName}; ${si.problem}`);
+    toValue = fromSI(si.value, info.kind, unit);
+  }
+  if (from.value === toValue) {
+    throw new UsageError(`${option}: ${key}: FROM and TO are the same (${ends[0]?.trim()}); give two different values`);
+  }
+  const lo = Math.min(from.value, toValue);
+  const hi = Math.max(from.value, toValue);
+  const substitution = { path, unit };
+  for (const end of [lo, hi]) {
+    const si = parseQuantity(rawAxisValue(substitution, end), info.kind);
+    if (!si.ok) throw new UsageError(`${option}: ${key}: ${si.problem}`);
+    if (!info.range.test(si.value)) {
+      throw new UsageError(`${option}: ${key} = ${end}${unit ? ` ${unit}` : ''} is outside its range: ${kindName} ${info.range.text}`);
+    }
+  }
+  if (request.log && !(lo > 0)) {
+    throw new UsageError(`${option}: a log axis needs FROM and TO above 0 in the unit given; got ${lo} ${unit}`.trimEnd());
+  }
+  if (!(Number.isInteger(request.steps) && request.steps >= 2)) {
+    throw new UsageError(`--steps: ${option} needs at least 2 steps; got ${request.steps}`);
+  }
+  const caseValue = unit === '' ? own : fromSI(own, info.kind, unit);
+  return {
+    key,
+    path,
+    kind: info.kind,
+    unit,
+    displayUnit: unit !== '' ? unit : quantityKinds[info.kind].bareUnit,
+    log: request.log,
+    values: axisValues(lo, hi, request.steps, request.log),
+    caseValue: Number.isFinite(caseValue) ? caseValue : null,
+  };
+}

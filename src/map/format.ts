@@ -1,0 +1,64 @@
+/**
+ * The readable summary `fincheck map` prints: the axes, the reference, per shortcut the share of the map where it
+ * is ok / marginal / unsafe and its drift range, the case's own point, the points without results grouped by
+ * cause, and the files written.
+ */
+import type { MapRun } from './run-map.js';
+import type { MapAxis } from './types.js';
+
+function pct(fraction: number): string {
+  return `${(100 * fraction).toFixed(Math.abs(fraction) < 0.1 ? 2 : 1)} %`;
+}
+
+function value(v: number, axis: MapAxis): string {
+  const text = `${Number(v.toPrecision(6))}`;
+  return axis.displayUnit === '' ? text : `${text} ${axis.displayUnit}`;
+}
+
+function axisLine(name: string, axis: MapAxis): string {
+  const first = axis.values[0] as number;
+  const last = axis.values[axis.values.length - 1] as number;
+  return `  ${name}: ${axis.key} from ${value(first, axis)} to ${value(last, axis)}, ${axis.values.length} values${axis.log ? ' (log spacing)' : ''}`;
+}
+
+function pad(text: string, width: number): string {
+  return text.length >= width ? `${text} ` : text + ' '.repeat(width - text.length);
+}
+
+export function formatMapSummary(run: MapRun, files: readonly string[]): string {
+  const { summary } = run;
+  const tolerance = run.job.check.tolerance;
+  const lines: string[] = [];
+  lines.push(`Map of ${run.caseName}`);
+  lines.push(axisLine('x', run.x), axisLine('y', run.y));
+  lines.push(
+    `  reference ${run.casePoint.reference.model}; tolerance ${pct(tolerance)} (ok), ${pct(2 * tolerance)} (marginal); ` +
+      `${summary.points} points, ${summary.solved} solved${summary.errors > 0 ? `, ${summary.errors} invalid` : ''}`,
+  );
+  lines.push('');
+  lines.push(`${pad('shortcut', 16)}${pad('ok', 10)}${pad('marginal', 10)}${pad('unsafe', 10)}drift over the map`);
+  for (const m of summary.models) {
+    const share = (n: number): string => pct(n / summary.points);
+    const range = Number.isFinite(m.minDrift) ? `${pct(m.minDrift)} .. ${pct(m.maxDrift)}` : 'no value';
+    lines.push(`${pad(m.model, 16)}${pad(share(m.ok), 10)}${pad(share(m.marginal), 10)}${pad(share(m.unsafe), 10)}${range}`);
+  }
+  const own = run.casePoint;
+  if (own.models.length > 0) {
+    lines.push('');
+    const where = `${run.x.key} = ${value(own.x, run.x)}, ${run.y.key} = ${value(own.y, run.y)}`;
+    lines.push(`This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot.toPrecision(3)}, mL = ${own.mL.toPrecision(3)}`);
+    for (const m of own.models) lines.push(`  ${pad(m.model, 14)}drift ${pad(pct(m.drift), 10)}${m.verdict}`);
+  }
+  if (summary.errors > 0) {
+    lines.push('');
+    lines.push(`${summary.errors} points have no result (grey on the maps, "error" in map.csv):`);
+    for (const g of summary.errorGroups.slice(0, 5)) lines.push(`  ${g.count} x ${g.example}`);
+    if (summary.errorGroups.length > 5) lines.push(`  ... and ${summary.errorGroups.length - 5} other kinds of problem`);
+  }
+  if (files.length > 0) {
+    lines.push('');
+    lines.push('Files:');
+    for (const f of files) lines.push(`  ${f}`);
+  }
+  return `${lines.join('\n')}\n`;
+}

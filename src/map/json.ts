@@ -1,0 +1,46 @@
+/**
+ * The JSON document of `fincheck map --json` (outputs.md): case, reference, tolerance, the two axes with their
+ * key, unit and values, and one entry per point, x fastest (index = j * NX + i). A point where the case became
+ * invalid carries `error` instead of results. Added to the contract's keys: each axis's `log`, the shortcuts
+ * mapped, the case's own point, the summary counts and (per point) `mL`, the reference's model, efficiency and
+ * discretisation error, each shortcut's heat rate and efficiency.
+ */
+import type { MapRun } from './run-map.js';
+import { isPointError, type MapAxis, type MapPoint } from './types.js';
+
+function axisJson(axis: MapAxis) {
+  return { key: axis.key, unit: axis.displayUnit, log: axis.log, values: Array.from(axis.values), caseValue: axis.caseValue };
+}
+
+function pointJson(p: MapPoint) {
+  if (isPointError(p)) return { x: p.x, y: p.y, error: p.error };
+  return { x: p.x, y: p.y, biot: p.biot, mL: p.mL, reference: p.reference, models: p.models };
+}
+
+const finiteOrNull = (v: number): number | null => (Number.isFinite(v) ? v : null);
+
+export function mapJson(run: MapRun) {
+  const { summary } = run;
+  const { index: _index, ...casePoint } = run.casePoint;
+  return {
+    case: run.caseName,
+    reference: run.casePoint.reference.model,
+    tolerance: run.job.check.tolerance,
+    x: axisJson(run.x),
+    y: axisJson(run.y),
+    models: run.job.check.models,
+    casePoint: { ...casePoint, x: finiteOrNull(casePoint.x), y: finiteOrNull(casePoint.y) },
+    summary: {
+      points: summary.points,
+      solved: summary.solved,
+      errors: summary.errors,
+      errorGroups: summary.errorGroups,
+      models: summary.models.map((m) => ({ ...m, minDrift: finiteOrNull(m.minDrift), maxDrift: finiteOrNull(m.maxDrift) })),
+    },
+    points: run.points.map(pointJson),
+  };
+}
+
+export function mapJsonText(run: MapRun): string {
+  return `${JSON.stringify(mapJson(run), null, 2)}\n`;
+}

@@ -1,0 +1,97 @@
+/**
+ * map-<model>.svg/png: one shortcut's drift over the map, in %, on a diverging colour map centred on zero (ColorBrewer
+ * RdBu: blue below, red above the reference), the +/- tolerance contours drawn and labelled, the case's own point
+ * marked, invalid points grey, axes in the user's units (log where asked), and iso-lines of Bi and mL where they
+ * help (iso-lines.ts).
+ *
+ * Colour range: +/- the largest |drift| on the map, but at least twice and at most five times the tolerance, so the
+ * tolerance band always reads as the pale middle of the map and a few wild points do not wash it out (the colour
+ * saturates beyond the range; the colour bar shows the range).
+ */
+import type { ShortcutId } from '../compare/types.js';
+import { mapChart, type MapChartResult, type MapPoint as ChartPoint } from '../images/index.js';
+import { appendToSvg, biotCandidates, isoLinesSvg, mLCandidates } from './iso-lines.js';
+import type { MapRun } from './run-map.js';
+import { isPointError, type MapAxis } from './types.js';
+
+export function axisLabel(axis: MapAxis): string {
+  return axis.displayUnit === '' ? axis.key : `${axis.key} (${axis.displayUnit})`;
+}
+
+export function percentText(fraction: number): string {
+  return `${Number((fraction * 100).toPrecision(3))} %`;
+}
+
+/** The case's own point, when it lies on the map. */
+export function casePointMark(run: MapRun): ChartPoint[] {
+  const { x, y } = run.casePoint;
+  const on = (v: number, axis: MapAxis): boolean =>
+    Number.isFinite(v) && v >= (axis.values[0] as number) && v <= (axis.values[axis.values.length - 1] as number);
+  return on(x, run.x) && on(y, run.y) ? [{ x, y, label: 'this case' }] : [];
+}
+
+/** Bi and mL at the grid points (NaN where a point has no result). */
+export function dimensionlessFields(run: MapRun): { biot: Float64Array; mL: Float64Array } {
+  const biot = new Float64Array(run.points.length).fill(Number.NaN);
+  const mL = new Float64Array(run.points.length).fill(Number.NaN);
+  for (const p of run.points) {
+    if (isPointError(p)) continue;
+    biot[p.index] = p.biot;
+    mL[p.index] = p.mL;
+  }
+  return { biot, mL };
+}
+
+export interface ModelChart {
+  svg: string;
+  chart: MapChartResult;
+  /** Drift in % at the grid points (NaN: invalid point or shortcut not applicable). */
+  driftPercent: Float64Array;
+}
+
+export function modelChart(run: MapRun, model: ShortcutId): ModelChart {
+  const tolerance = run.job.check.tolerance;
+  const driftPercent = new Float64Array(run.points.length).fill(Number.NaN);
+  let maxAbs = 0;
+  for (const p of run.points) {
+    if (isPointError(p)) continue;
+    const m = p.models.find((r) => r.model === model);
+    if (!m) continue;
+    driftPercent[p.index] = 100 * m.drift;
+    maxAbs = Math.max(maxAbs, Math.abs(100 * m.drift));
+  }
+  const tolPercent = 100 * tolerance;
+  const limit = Math.min(Math.max(maxAbs, 2 * tolPercent), 5 * tolPercent);
+  const invalid = run.summary.errors;
+  const reference = run.casePoint.reference.model;
+  const counts = run.summary.models.find((m) => m.model === model);
+  const everywhere = counts !== undefined && counts.ok === run.summary.solved - counts.missing;
+  const band = everywhere
+    ? `within +/-${percentText(tolerance)} at every valid point (no tolerance contour)`
+    : `contours: the tolerance, ok within +/-${percentText(tolerance)}`;
+  const chart = mapChart({
+    title: `Drift of ${model} from ${reference}: ${run.caseName}`,
+    subtitle: `drift = (${model} - ${reference}) / ${reference} on the heat rate; ${band}`,
+    xLabel: axisLabel(run.x),
+    yLabel: axisLabel(run.y),
+    valueLabel: `Drift of ${model} (%)`,
+    x: run.x.values,
+    y: run.y.values,
+    values: driftPercent,
+    xScale: run.x.log ? 'log' : 'linear',
+    yScale: run.y.log ? 'log' : 'linear',
+    limit,
+    levels: [
+      { value: tolPercent, label: `+${percentText(tolerance)}`, colour: '#000000' },
+      { value: -tolPercent, label: `-${percentText(tolerance)}`, colour: '#000000', dash: '8 5' },
+    ],
+    points: casePointMark(run),
+    ...(invalid > 0 ? { invalidNote: `grey: ${invalid} of ${run.summary.points} points where the case is invalid (see map.csv)` } : {}),
+  });
+  const { biot, mL } = dimensionlessFields(run);
+  const iso = isoLinesSvg(chart.plot, chart.x, chart.y, run.x.values, run.y.values, [
+    { name: 'Bi', values: biot, candidates: biotCandidates, dash: '2 4' },
+    { name: 'mL', values: mL, candidates: mLCandidates, dash: '7 4' },
+  ]);
+  return { svg: appendToSvg(chart.svg, iso), chart, driftPercent };
+}

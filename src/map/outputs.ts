@@ -1,0 +1,36 @@
+/**
+ * The files of a map, made in memory: map.csv, map.json, map-<model>.<format> per shortcut and
+ * overview.<format>. PNGs are rendered by resvg with the bundled font (src/images render.ts), so the same map gives
+ * the same bytes. `shouldStop` is asked between files, so Ctrl-C during rendering is not delayed by the rest.
+ */
+import { chartBytes, type ChartFormat } from '../images/index.js';
+import { mapCsv } from './csv.js';
+import { mapJsonText } from './json.js';
+import { modelChart } from './model-chart.js';
+import { overviewChart } from './overview-chart.js';
+import type { MapRun } from './run-map.js';
+
+export interface OutputFile {
+  name: string;
+  data: string | Uint8Array;
+}
+
+export class OutputsInterrupted extends Error {
+  override name = 'OutputsInterrupted';
+}
+
+export async function renderMapFiles(run: MapRun, format: ChartFormat, shouldStop: () => boolean = () => false): Promise<OutputFile[]> {
+  const files: OutputFile[] = [
+    { name: 'map.csv', data: mapCsv(run) },
+    { name: 'map.json', data: mapJsonText(run) },
+  ];
+  const charts: { name: string; svg: () => string }[] = [
+    ...run.job.check.models.map((model) => ({ name: `map-${model}.${format}`, svg: () => modelChart(run, model).svg })),
+    { name: `overview.${format}`, svg: () => overviewChart(run).svg },
+  ];
+  for (const chart of charts) {
+    if (shouldStop()) throw new OutputsInterrupted('interrupted while drawing the charts');
+    files.push({ name: chart.name, data: await chartBytes(chart.svg(), format) });
+  }
+  return files;
+}

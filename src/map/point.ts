@@ -1,0 +1,74 @@
+/**
+ * One grid point: substitute the two axis values into the raw case, validate it again, run `fincheck check`'s
+ * pipeline (runCheck, without the assumption ledger) and keep what the map reports. A point where the case becomes
+ * invalid, or where the solver fails, gives its message instead of results; every other error is a bug and is
+ * thrown. The same function runs in-process (`--jobs 1`) and in each worker, so both give the same numbers.
+ */
+import { parseCaseObject, readDocument, type Case, type Locate, type ParseOptions } from '../case/index.js';
+import { basename, extname } from 'node:path';
+import { runCheck } from '../compare/check.js';
+import type { CheckReport, ShortcutId } from '../compare/types.js';
+import { InputError, SolverError, UsageError } from '../errors.js';
+import { isLinearFinCase } from '../fd/linear-case.js';
+import { biotAndML } from './dimensionless.js';
+import { substituteAxis } from './substitute.js';
+import type { MapJob, MapPoint, PointModel, PointResult } from './types.js';
+
+export interface PointContext {
+  job: MapJob;
+  raw: unknown;
+  locate: Locate;
+  parseOptions: ParseOptions;
+}
+
+/** Reads the case text once per thread, as `fincheck check` reads the file (same default name, same positions). */
+export function pointContext(job: MapJob): PointContext {
+  const document = readDocument(job.caseText, job.fileName);
+  const defaultName = basename(job.fileName, extname(job.fileName)) || 'unnamed case';
+  return { job, raw: document.raw, locate: document.locate, parseOptions: { defaultName, file: job.fileName } };
+}
+
+/** The message of an error the map shows in a cell, or undefined for an error that is a bug. */
+function pointMessage(err: unknown): string | undefined {
+  if (err instanceof InputError) return err.issues.map((i) => `${i.path}: got ${i.value}; expected ${i.accepted}`).join('; ');
+  if (err instanceof SolverError) return `solver failure: ${err.message}`;
+  if (err instanceof UsageError) return err.message;
+  return undefined;
+}
+
+/** The map's numbers of one point from `fincheck check`'s report on its case (the ledger is not needed). */
+export function pointFromReport(index: number, x: number, y: number, c: Case, report: CheckReport, wanted: readonly ShortcutId[]): PointResult {
+  if (!isLinearFinCase(c)) throw new Error('runCheck accepted a nonlinear case');
+  const { biot, mL } = biotAndML(c);
+  const models: PointModel[] = [];
+  for (const id of wanted) {
+    const m = report.models.find((r) => r.model === id);
+    if (m && m.model !== 'fd-1d') {
+      models.push({ model: m.model, heatRate_W: m.heatRate_W, efficiency: m.efficiency, drift: m.drift, verdict: m.verdict });
+    }
+  }
+  const ref = report.reference;
+  return {
+    index,
+    x,
+    y,
+    biot,
+    mL,
+    reference: { model: ref.model, heatRate_W: ref.heatRate_W, efficiency: ref.efficiency, discretizationError: ref.discretizationError },
+    models,
+  };
+}
+
+export async function evaluatePoint(context: PointContext, index: number, x: number, y: number): Promise<MapPoint> {
+  const { job } = context;
+  try {
+    const raw = substituteAxis(substituteAxis(context.raw, job.x, x), job.y, y);
+    const c = parseCaseObject(raw, context.locate, context.parseOptions);
+    const { report } = await runCheck(c, { tolerance: job.check.tolerance, reference: job.check.reference, ledger: false });
+    return pointFromReport(index, x, y, c, report, job.check.models);
+  } catch (err) {
+    const error = pointMessage(err);
+    if (error === undefined) throw err;
+    return { index, x, y, error };
+  }
+}

@@ -1,0 +1,85 @@
+/**
+ * `fincheck map` as a library: check everything that can be known before the run (the case, both axes, the
+ * reference and the shortcuts asked for, on the case's own point), then solve every grid point (pool.ts) and
+ * return plain data. Files and text are written by the caller (outputs.ts, format.ts).
+ */
+import { parseCaseText, readDocument } from '../case/index.js';
+import { runCheck } from '../compare/check.js';
+import type { NotApplicable, ShortcutId } from '../compare/types.js';
+import { UsageError } from '../errors.js';
+import { parseMapAxis } from './axis.js';
+import { solvePoints } from './pool.js';
+import { pointFromReport } from './point.js';
+import { summariseMap, type MapSummary } from './summary.js';
+import type { MapAxis, MapJob, MapPoint, PointCheckOptions, PointResult } from './types.js';
+
+export interface MapRequest {
+  caseText: string;
+  fileName: string;
+  /** KEY=FROM:TO of each axis. */
+  x: string;
+  y: string;
+  logX: boolean;
+  logY: boolean;
+  steps: readonly [number, number];
+  tolerance: number;
+  reference: PointCheckOptions['reference'];
+  /** Shortcuts to map; undefined maps every one that applies to the case. */
+  models?: readonly ShortcutId[];
+}
+
+/** A map ready to run: checked axes, the job every point runs, and the case's own point. */
+export interface PreparedMap {
+  caseName: string;
+  x: MapAxis;
+  y: MapAxis;
+  job: MapJob;
+  /** The case as given (its own x, y), checked with the same options; index -1. */
+  casePoint: PointResult;
+  notApplicable: NotApplicable[];
+}
+
+export interface MapRun extends PreparedMap {
+  points: MapPoint[];
+  summary: MapSummary;
+}
+
+/** Every check that does not need the grid; throws InputError or UsageError (exit 2). */
+export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
+  const c = parseCaseText(request.caseText, request.fileName);
+  const { raw } = readDocument(request.caseText, request.fileName);
+  const x = parseMapAxis({ option: '--x', text: request.x, steps: request.steps[0], log: request.logX }, raw, c);
+  const y = parseMapAxis({ option: '--y', text: request.y, steps: request.steps[1], log: request.logY }, raw, c);
+  if (x.key === y.key) throw new UsageError(`--x and --y both sweep ${x.key}; give two different keys`);
+
+  const { report } = await runCheck(c, { tolerance: request.tolerance, reference: request.reference, ledger: false });
+  const applicable = report.models.map((m) => m.model).filter((id): id is ShortcutId => id !== 'fd-1d');
+  for (const id of request.models ?? []) {
+    if (applicable.includes(id)) continue;
+    const reason = report.notApplicable.find((n) => n.model === id)?.reason ?? 'not evaluated for this case';
+    throw new UsageError(`--models: ${id} does not apply to this case (${reason}); it applies: ${applicable.join(', ')}`);
+  }
+  const models = request.models ? [...new Set(request.models)] : applicable;
+  const check: PointCheckOptions = { tolerance: request.tolerance, reference: request.reference, models };
+  const job: MapJob = {
+    caseText: request.caseText,
+    fileName: request.fileName,
+    x: { path: x.path, unit: x.unit },
+    y: { path: y.path, unit: y.unit },
+    check,
+  };
+  const casePoint = pointFromReport(-1, x.caseValue ?? Number.NaN, y.caseValue ?? Number.NaN, c, report, models);
+  return { caseName: c.name, x, y, job, casePoint, notApplicable: report.notApplicable };
+}
+
+export interface RunOptions {
+  jobs: number;
+  signal?: AbortSignal;
+  onPoint?: (done: number, point: MapPoint) => void;
+}
+
+/** Solves every grid point. Rejects with MapInterrupted when the signal aborts. */
+export async function runMap(prepared: PreparedMap, options: RunOptions): Promise<MapRun> {
+  const points = await solvePoints(prepared.job, prepared.x.values, prepared.y.values, options);
+  return { ...prepared, points, summary: summariseMap(points, prepared.job.check.models) };
+}

@@ -1,0 +1,69 @@
+/**
+ * Counts over a finished map: per shortcut, how many points are ok, marginal and unsafe and the range of the
+ * drift; and the points without results, grouped by what went wrong (the value given is left out of the grouping,
+ * so "fin.tipThickness: got "3 mm"; expected ..." and "... got "4 mm" ..." count as one kind of problem).
+ */
+import type { ShortcutId } from '../compare/types.js';
+import { isPointError, type MapPoint } from './types.js';
+
+export interface ModelCounts {
+  model: ShortcutId;
+  ok: number;
+  marginal: number;
+  unsafe: number;
+  /** Points where the shortcut does not apply. */
+  missing: number;
+  minDrift: number;
+  maxDrift: number;
+}
+
+export interface ErrorGroup {
+  /** The first message of the group, as given. */
+  example: string;
+  count: number;
+}
+
+export interface MapSummary {
+  points: number;
+  solved: number;
+  errors: number;
+  errorGroups: ErrorGroup[];
+  models: ModelCounts[];
+}
+
+function groupKey(message: string): string {
+  return message.replace(/got [^;]*;/g, 'got …;');
+}
+
+export function summariseMap(points: readonly MapPoint[], models: readonly ShortcutId[]): MapSummary {
+  const counts: ModelCounts[] = models.map((model) => ({ model, ok: 0, marginal: 0, unsafe: 0, missing: 0, minDrift: Infinity, maxDrift: -Infinity }));
+  const groups = new Map<string, ErrorGroup>();
+  let errors = 0;
+  for (const p of points) {
+    if (isPointError(p)) {
+      errors++;
+      const key = groupKey(p.error);
+      const g = groups.get(key);
+      if (g) g.count++;
+      else groups.set(key, { example: p.error, count: 1 });
+      continue;
+    }
+    for (const c of counts) {
+      const m = p.models.find((r) => r.model === c.model);
+      if (!m) {
+        c.missing++;
+        continue;
+      }
+      c[m.verdict]++;
+      c.minDrift = Math.min(c.minDrift, m.drift);
+      c.maxDrift = Math.max(c.maxDrift, m.drift);
+    }
+  }
+  return {
+    points: points.length,
+    solved: points.length - errors,
+    errors,
+    errorGroups: [...groups.values()].sort((a, b) => b.count - a.count),
+    models: counts,
+  };
+}

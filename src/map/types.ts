@@ -1,0 +1,91 @@
+/**
+ * Plain data of `fincheck map`: the two axes, the options every point is checked with, and one result per grid
+ * point. Points are stored x fastest: index = j * nx + i (outputs.md). Axis values are in the user's unit;
+ * heat rates in W; drift = (shortcut - reference) / reference on the heat rate, as `fincheck check` reports it.
+ */
+import type { KeyPath, QuantityKind } from '../case/index.js';
+import type { ModelId, ShortcutId, Verdict } from '../compare/types.js';
+
+/** One axis of the map: a case key swept from `from` to `to` in the user's unit. */
+export interface MapAxis {
+  /** The key path as the user wrote it, normalised (`fin.thickness`). */
+  key: string;
+  path: KeyPath;
+  kind: QuantityKind;
+  /** The unit the values are in, as written by the user ('' for a bare number: SI, see `displayUnit`). */
+  unit: string;
+  /** The unit shown in headers and labels: `unit`, or the SI unit a bare number is read in. */
+  displayUnit: string;
+  log: boolean;
+  /** Grid values in the user's unit, ascending. */
+  values: Float64Array;
+  /** The case's own value in the user's unit, or null when the key is absent and has no default. */
+  caseValue: number | null;
+}
+
+/** What a worker needs to substitute one axis value into the raw case (structured-clone safe). */
+export interface AxisSubstitution {
+  path: KeyPath;
+  /** '' writes the bare number (SI), else the string "<value> <unit>". */
+  unit: string;
+}
+
+/** The options of `fincheck check` every point runs with. */
+export interface PointCheckOptions {
+  tolerance: number;
+  reference: 'auto' | '1d' | '2d';
+  /** Shortcuts to report, in this order. */
+  models: readonly ShortcutId[];
+}
+
+/** Everything a point needs besides its two values: the case text (re-read in each worker) and the axes. */
+export interface MapJob {
+  caseText: string;
+  fileName: string;
+  x: AxisSubstitution;
+  y: AxisSubstitution;
+  check: PointCheckOptions;
+}
+
+export interface PointModel {
+  model: ShortcutId;
+  heatRate_W: number;
+  efficiency: number;
+  drift: number;
+  verdict: Verdict;
+}
+
+export interface PointReference {
+  model: Extract<ModelId, 'fd-1d' | 'fd-2d'>;
+  heatRate_W: number;
+  efficiency: number;
+  discretizationError: number;
+}
+
+/** A grid point where the check ran. */
+export interface PointResult {
+  index: number;
+  x: number;
+  y: number;
+  /** Biot number across the thickness at the base, h (t/2)/k (pins h (D/2)/k). */
+  biot: number;
+  /** m L of the equivalent uniform fin (mean section, mean h), as `check` computes it. */
+  mL: number;
+  reference: PointReference;
+  /** The requested shortcuts that apply at this point. */
+  models: PointModel[];
+}
+
+/** A grid point where the substituted case is invalid or the solver failed: the message instead of results. */
+export interface PointError {
+  index: number;
+  x: number;
+  y: number;
+  error: string;
+}
+
+export type MapPoint = PointResult | PointError;
+
+export function isPointError(p: MapPoint): p is PointError {
+  return 'error' in p;
+}
