@@ -103,7 +103,7 @@ function continuation(b: NonlinearBoundaries, theta: number, out: FlowAndSlope):
   const AP = b.tipArea * b.tipPerimeter;
   const k = b.kirchhoff.conductivityAt(theta);
   const gap = theta - b.equilibrium;
-  const psi = gap === 0 ? 0 : continuationIntegral(b, theta);
+  const psi = gap === 0 || AP === 0 ? 0 : continuationIntegral(b, theta);
   if (!(psi > 0)) {
     out.value = 0;
     // Limit of A P q k / Q_tip at θ = θ_e (in the linear solver's order of factors).

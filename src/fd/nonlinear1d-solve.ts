@@ -123,6 +123,7 @@ function advice(problem: NonlinearFinProblem1D): string {
     const hi = Math.max(...k.k);
     items.push(`give a smoother conductivity table (k runs from ${lo} to ${hi} W/(m*K))`);
   }
+  if (items.length === 0) return 'this case is linear and should never fail to converge: please report it, with the case file';
   items.push('or change the number of nodes (--nodes)');
   return items.join(', ');
 }
