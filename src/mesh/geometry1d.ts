@@ -205,19 +205,21 @@ export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinG
 export function finGeometry(c: Case): FinGeometry1D {
   const p = c.fin.profile;
   const edges = c.fin.edges;
+  const straight = (length: number, baseSize: number, tipSize: number, exponent: TaperExponent, width: number) =>
+    taperedGeometry({ shape: 'straight', length, baseSize, tipSize, exponent, width, edges });
   switch (p.kind) {
     case 'rectangular':
-      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.thickness, tipSize: p.thickness, exponent: 0, width: p.width, edges });
+      return straight(p.length, p.thickness, p.thickness, 0, p.width);
     case 'pin':
       return taperedGeometry({ shape: 'pin', length: p.length, baseSize: p.diameter, tipSize: p.diameter, exponent: 0 });
     case 'trapezoidal':
-      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: p.tipThickness, exponent: 1, width: p.width, edges });
+      return straight(p.length, p.baseThickness, p.tipThickness, 1, p.width);
     case 'triangular':
-      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: 0, exponent: 1, width: p.width, edges });
+      return straight(p.length, p.baseThickness, 0, 1, p.width);
     case 'parabolic-concave':
-      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: 0, exponent: 2, width: p.width, edges });
+      return straight(p.length, p.baseThickness, 0, 2, p.width);
     case 'parabolic-convex':
-      return taperedGeometry({ shape: 'straight', length: p.length, baseSize: p.baseThickness, tipSize: 0, exponent: 0.5, width: p.width, edges });
+      return straight(p.length, p.baseThickness, 0, 0.5, p.width);
     case 'conical-pin':
       return taperedGeometry({ shape: 'pin', length: p.length, baseSize: p.baseDiameter, tipSize: p.tipDiameter, exponent: 1 });
     case 'annular':

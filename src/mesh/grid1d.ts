@@ -1,24 +1,27 @@
 /**
  * 1-D node sets (uniform or graded, with nodes on every breakpoint) and the vertex-centred mesh
- * built on them: interface cross-sections and control-volume surfaces.
+ * built on them: interface cross-sections and control-volume surfaces. Units: m, m^2.
  *
- * Node set: the breakpoints (closer ones merged, see BREAKPOINT_MERGE_FRACTION) split [0, L] into segments; segment s gets n_s cells (shared in
- * proportion to length, at least one) and nodes x = a + (b - a) g(j / n_s), where g maps [0, 1]
- * onto itself: uniform g = xi; power law g = xi^p (toward the base), 1 - (1 - xi)^p (toward the
- * tip), xi^p / (xi^p + (1 - xi)^p) (both); geometric g = (S^xi - 1)/(S - 1), S = stretch.
- * Because g is fixed, doubling every n_s gives a nested grid (Roache, P. J., 1998, Verification and
- * Validation in Computational Science and Engineering, Hermosa: systematic refinement by a constant
- * ratio on mapped grids) [from memory]. Grading applies to the first segment (base) and the last (tip).
+ * Node set: the breakpoints (closer ones merged, see BREAKPOINT_MERGE_FRACTION) split [0, L] into
+ * segments; segment s gets n_s cells (shared in proportion to length, at least one) and nodes
+ * x = a + (b - a) g(j / n_s), where g maps [0, 1] onto itself: uniform g = xi; power law g = xi^p
+ * (toward the base), 1 - (1 - xi)^p (toward the tip), xi^p / (xi^p + (1 - xi)^p) (both); geometric
+ * g = (S^xi - 1)/(S - 1), S = stretch. Because g is fixed, doubling every n_s gives a nested grid
+ * (systematic refinement by a constant ratio: Roache, P. J., 1998, Verification and Validation in
+ * Computational Science and Engineering, Hermosa [from memory]). Grading applies to the first
+ * segment (base) and the last (tip).
  *
- * Mesh: CV i spans the interfaces at the midpoints of its cells (half cells at the ends, i.e. the
- * vertex-centred finite volume of Patankar, S. V., 1980, Numerical Heat Transfer and Fluid Flow,
- * Hemisphere, §4.6, "practice A": faces midway between grid points [from memory]). Interface area A((x_i + x_{i+1})/2), m^2. The convective
- * conductance of CV i for an h linear between nodes is integrated by Simpson's rule on each half
- * cell, which is exact when P is at most quadratic within a cell (every profile except the edges
- * of a convex parabola, a sqrt at the tip):
+ * Mesh: CV i spans the interfaces at the midpoints of its cells (half cells at the ends: the
+ * vertex-centred finite volume with faces midway between grid points, Patankar, S. V., 1980,
+ * Numerical Heat Transfer and Fluid Flow, Hemisphere, §4.6 "practice A" [from memory]). Interface
+ * area A((x_i + x_{i+1})/2). The convective conductance of CV i for an h linear between nodes is
+ * integrated by Simpson's rule on each half cell, exact when P is at most quadratic within a cell
+ * (every profile except the convex parabola, whose spine perimeter and cooled edges have a square
+ * root at the tip):
  *   left half of cell [x_i, x_{i+1}], Δ = x_{i+1} - x_i, q = x_i + Δ/4, c = x_i + Δ/2:
- *     ∫ h P ≈ (Δ/12) [h_i P_i + 4 h_q P_q + h_c P_c], h_q = (3h_i + h_{i+1})/4, h_c = (h_i + h_{i+1})/2,
- *   so h_i gets (Δ/12)(P_i + 3 P_q + P_c/2) and h_{i+1} gets (Δ/12)(P_q + P_c/2); mirrored on the right half.
+ *     ∫ h P ≈ (Δ/12) [h_i P_i + 4 h_q P_q + h_c P_c],  h_q = (3h_i + h_{i+1})/4,  h_c = (h_i + h_{i+1})/2,
+ *   so h_i gets (Δ/12)(P_i + 3 P_q + P_c/2) and h_{i+1} gets (Δ/12)(P_q + P_c/2); mirrored on the
+ *   right half.
  */
 import type { FinGeometry1D, Grading, GradingEnd, Grid1DSpec, Mesh1D } from './types.js';
 

@@ -1,0 +1,69 @@
+/**
+ * Timing of the tridiagonal solvers and of the fd-1d study (not a test: run with
+ * `npx tsx tests/fd1d/bench-tridiagonal.ts`). Prints medians of repeated runs.
+ *
+ * Systems: the assembled fin system (R1 fin of the reference sheet §1a, drop form) with 1e6 nodes,
+ * and 1e4 solves of a 1000-node system, into preallocated arrays (the `...Into` variants).
+ */
+import { assembleFin1D } from '../../src/fd/assemble1d.js';
+import { conservativeThomasInto } from '../../src/fd/conservative-thomas.js';
+import { dropSystem } from '../../src/fd/drop-system.js';
+import { studyFin1D } from '../../src/fd/fin1d.js';
+import { thomasInto, twoSidedThomasInto, type RowSumSystem, type TridiagonalSystem } from '../../src/fd/tridiagonal.js';
+import { taperedGeometry } from '../../src/mesh/geometry1d.js';
+import { buildMesh1D } from '../../src/mesh/grid1d.js';
+import { linearCase } from './support/cases.js';
+
+const geometry = taperedGeometry({ shape: 'straight', length: 0.03, baseSize: 0.002, tipSize: 0.002, exponent: 0, width: 0.05 });
+
+function finSystem(nodes: number): RowSumSystem {
+  const mesh = buildMesh1D(geometry, { cells: nodes - 1 });
+  const h = new Float64Array(mesh.nodes).fill(40);
+  return dropSystem(assembleFin1D(mesh, 180, h, { kind: 'temperature', theta: 60 }, { kind: 'convective', h: 'local' }), 60);
+}
+
+const median = (values: number[]) => [...values].sort((a, b) => a - b)[values.length >> 1] as number;
+
+type Into = (system: TridiagonalSystem, solution: Float64Array, work: Float64Array) => Float64Array;
+const SOLVERS: [string, Into][] = [
+  ['thomasInto (one-sided)', thomasInto],
+  ['twoSidedThomasInto', twoSidedThomasInto],
+  ['conservativeThomasInto (default, row sums)', conservativeThomasInto],
+];
+
+const big = finSystem(1_000_000);
+const small = finSystem(1000);
+const solution = new Float64Array(1_000_000);
+const work = new Float64Array(1_000_000);
+const smallSolution = new Float64Array(1000);
+const smallWork = new Float64Array(1000);
+
+for (const [name, solve] of SOLVERS) {
+  for (let warm = 0; warm < 5; warm++) solve(big, solution, work);
+  const times: number[] = [];
+  for (let run = 0; run < 31; run++) {
+    const start = performance.now();
+    solve(big, solution, work);
+    times.push(performance.now() - start);
+  }
+  const batches: number[] = [];
+  for (let run = 0; run < 7; run++) {
+    const start = performance.now();
+    for (let k = 0; k < 10_000; k++) solve(small, smallSolution, smallWork);
+    batches.push(performance.now() - start);
+  }
+  console.log(`${name.padEnd(44)} 1e6 nodes: median ${median(times).toFixed(2)} ms | 1e4 x 1000 nodes: median ${median(batches).toFixed(1)} ms`);
+}
+
+const fin = linearCase({
+  profile: { kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 },
+  k: 180, h: { kind: 'uniform', h: 40 }, tip: { kind: 'convective', h: null }, thetaBase: 60,
+});
+for (let warm = 0; warm < 20; warm++) studyFin1D(fin);
+const studies: number[] = [];
+for (let run = 0; run < 51; run++) {
+  const start = performance.now();
+  studyFin1D(fin);
+  studies.push(performance.now() - start);
+}
+console.log(`studyFin1D (default grids 1001/2001/4001 nodes): median ${median(studies).toFixed(2)} ms`);
