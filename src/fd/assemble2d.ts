@@ -35,25 +35,37 @@ const TIP_TIE_FACTOR = 1e6;
 export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
   const { nodesX: nx, nodesY: ny, x, y, diagonal, section } = grid;
   const K = emptyStencil9(nx, ny);
-  const tri = new Int32Array(3);
+  // Local corners of cell (i, j): a = (i, j), b = (i+1, j), c = (i+1, j+1), d = (i, j+1).
+  // Each couple of corners is one stencil entry: ab east[a], ad north[a], ac northEast[a], bc north[b],
+  // dc east[d], db southEast[d].
   for (let i = 0; i + 1 < nx; i++) {
     for (let j = 0; j + 1 < ny; j++) {
       const a = i * ny + j;
       const b = a + ny;
       const c = b + 1;
       const d = a + 1;
-      const diag = diagonal[i * (ny - 1) + j];
-      for (let half = 0; half < 2; half++) {
-        if (diag === 0) {
-          tri[0] = a;
-          tri[1] = half === 0 ? b : c;
-          tri[2] = half === 0 ? c : d;
-        } else {
-          tri[0] = half === 0 ? a : b;
-          tri[1] = half === 0 ? b : c;
-          tri[2] = d;
-        }
-        addTriangle(K, tri, x, y, k, section, ny);
+      if (diagonal[i * (ny - 1) + j] === 0) {
+        // Triangles (a, b, c) and (a, c, d).
+        const t1 = triangleCouplings(x, y, a, b, c, k, section);
+        const t2 = triangleCouplings(x, y, a, c, d, k, section);
+        K.east[a] = (K.east[a] as number) + t1.k01;
+        K.north[b] = (K.north[b] as number) + t1.k12;
+        K.northEast[a] = (K.northEast[a] as number) + t1.k20 + t2.k01;
+        K.east[d] = (K.east[d] as number) + t2.k12;
+        K.north[a] = (K.north[a] as number) + t2.k20;
+        addDiagonals(K, a, b, c, t1);
+        addDiagonals(K, a, c, d, t2);
+      } else {
+        // Triangles (a, b, d) and (b, c, d).
+        const t1 = triangleCouplings(x, y, a, b, d, k, section);
+        const t2 = triangleCouplings(x, y, b, c, d, k, section);
+        K.east[a] = (K.east[a] as number) + t1.k01;
+        K.southEast[d] = (K.southEast[d] as number) + t1.k12 + t2.k20;
+        K.north[a] = (K.north[a] as number) + t1.k20;
+        K.north[b] = (K.north[b] as number) + t2.k01;
+        K.east[d] = (K.east[d] as number) + t2.k12;
+        addDiagonals(K, a, b, d, t1);
+        addDiagonals(K, b, c, d, t2);
       }
     }
   }
@@ -71,19 +83,24 @@ export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
   return K;
 }
 
-/** Adds one triangle's couplings (nothing for the degenerate triangles of a collapsed tip). */
-function addTriangle(
-  K: Stencil9,
-  tri: Int32Array,
+interface TriangleCouplings {
+  k01: number;
+  k12: number;
+  k20: number;
+}
+
+const NONE: TriangleCouplings = { k01: 0, k12: 0, k20: 0 };
+
+/** Couplings of triangle (p0, p1, p2); all zero for the degenerate triangles of a collapsed tip. */
+function triangleCouplings(
   x: Float64Array,
   y: Float64Array,
+  p0: number,
+  p1: number,
+  p2: number,
   k: number,
   section: Grid2D['section'],
-  ny: number,
-): void {
-  const p0 = tri[0] as number;
-  const p1 = tri[1] as number;
-  const p2 = tri[2] as number;
+): TriangleCouplings {
   const x0 = x[p0] as number;
   const y0 = y[p0] as number;
   const x1 = x[p1] as number;
@@ -99,23 +116,15 @@ function addTriangle(
   const ey2 = y1 - y0;
   const area = 0.5 * Math.abs(ex2 * -ey1 - ey2 * -ex1);
   const scale = Math.max(ex0 * ex0 + ey0 * ey0, ex1 * ex1 + ey1 * ey1, ex2 * ex2 + ey2 * ey2);
-  if (area <= 1e-14 * scale) return; // collapsed cell of a sharp tip
+  if (area <= 1e-14 * scale) return NONE;
   const r = radiusAt(section, (x0 + x1 + x2) / 3, (y0 + y1 + y2) / 3);
   const f = (k * r) / (4 * area);
-  const k01 = f * (ex0 * ex1 + ey0 * ey1);
-  const k12 = f * (ex1 * ex2 + ey1 * ey2);
-  const k20 = f * (ex2 * ex0 + ey2 * ey0);
-  const i0 = Math.floor(p0 / ny);
-  const j0 = p0 - i0 * ny;
-  const i1 = Math.floor(p1 / ny);
-  const j1 = p1 - i1 * ny;
-  const i2 = Math.floor(p2 / ny);
-  const j2 = p2 - i2 * ny;
-  addCoupling(K, i0, j0, i1 - i0, j1 - j0, k01);
-  addCoupling(K, i1, j1, i2 - i1, j2 - j1, k12);
-  addCoupling(K, i2, j2, i0 - i2, j0 - j2, k20);
-  // Zero row sums: the diagonal is minus the off-diagonal couplings.
-  addCoupling(K, i0, j0, 0, 0, -k01 - k20);
-  addCoupling(K, i1, j1, 0, 0, -k01 - k12);
-  addCoupling(K, i2, j2, 0, 0, -k12 - k20);
+  return { k01: f * (ex0 * ex1 + ey0 * ey1), k12: f * (ex1 * ex2 + ey1 * ey2), k20: f * (ex2 * ex0 + ey2 * ey0) };
+}
+
+/** Zero row sums: each vertex's diagonal is minus its couplings in the triangle. */
+function addDiagonals(K: Stencil9, p0: number, p1: number, p2: number, t: TriangleCouplings): void {
+  K.diag[p0] = (K.diag[p0] as number) - t.k01 - t.k20;
+  K.diag[p1] = (K.diag[p1] as number) - t.k01 - t.k12;
+  K.diag[p2] = (K.diag[p2] as number) - t.k12 - t.k20;
 }

@@ -67,7 +67,10 @@ export interface Fin2DResult {
   /** Q / (h at the base x base area x theta_base). */
   effectiveness: number;
   baseTemperature_degC: number;
-  /** At the centre of the tip (x = end of the section, on the mid-plane or axis), degC. */
+  /**
+   * At the centre of the tip (x = end of the section, on the mid-plane or axis), degC. An infinite fin
+   * reports its limit, the ambient temperature (its field ends at the cut, see fin2dCase.ts).
+   */
   tipTemperature_degC: number;
   /** Mid-plane (straight, annular) or axis (pins), from base to tip. */
   centreline: Fin2DLine;
@@ -135,7 +138,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     efficiency,
     effectiveness,
     baseTemperature_degC: thetaBase + ambient_degC,
-    tipTemperature_degC: (field[(nx - 1) * ny] as number) + ambient_degC,
+    tipTemperature_degC: problem.truncatedInfinite ? ambient_degC : (field[(nx - 1) * ny] as number) + ambient_degC,
     centreline: line(0),
     surface: line(ny - 1),
     biot: (hBase * problem.section.halfSize(0)) / problem.k,

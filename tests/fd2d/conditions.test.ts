@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Profile, TipCondition } from '../../src/case/types.js';
 import { solveFin2D } from '../../src/fd/fin2d.js';
+import { fieldViews } from '../../src/fd/fin2dField.js';
 import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { BASE, finCase, THETA_B } from './cases.js';
 
@@ -126,5 +127,20 @@ describe.each(profiles)('maximum principle and energy balance: %s', (_, profile)
     expect(r.energyBalance).toBeLessThan(1e-9);
     expect(r.efficiency as number).toBeGreaterThan(0);
     expect(r.efficiency as number).toBeLessThan(1);
+  });
+});
+
+describe('the 2-D field for images', () => {
+  it('is exposed as ndarray views sharing the result arrays', () => {
+    const c = finCase({ kind: 'trapezoidal', length: 0.02, baseThickness: 0.004, tipThickness: 0.002, width: 0.1 }, 50, { kind: 'uniform', h: 500 }, { kind: 'adiabatic' });
+    const r = solveFin2D(c, { nx: 21, ny: 7 });
+    const v = fieldViews(r);
+    expect(v.theta.shape).toEqual([21, 7]);
+    expect(v.theta.data).toBe(r.field); // no copy
+    // Node (i, j) = (20, 6): the tip corner on the face, at x = L, y = t_tip/2.
+    expect(v.x.get(20, 6)).toBeCloseTo(0.02, 15);
+    expect(v.y.get(20, 6)).toBeCloseTo(0.001, 15);
+    expect(v.theta.get(20, 0) + 25).toBeCloseTo(r.tipTemperature_degC, 12);
+    expect(v.theta.get(0, 3)).toBeCloseTo(THETA_B, 12); // base: fixed temperature
   });
 });
