@@ -7,8 +7,11 @@
  */
 import { Bench } from 'tinybench';
 
-/** pass/fail against a stated target; info: measured without a target; skip: not measured (note says why). */
-export type Verdict = 'pass' | 'FAIL' | 'info' | 'skip';
+/**
+ * pass/FAIL against a stated target; info: measured without a target; skip: not measured (note says why);
+ * error: the code under test threw (note quotes the error).
+ */
+export type Verdict = 'pass' | 'FAIL' | 'info' | 'skip' | 'error';
 
 export interface BenchRow {
   readonly area: string;
@@ -122,6 +125,12 @@ export function spread(t: Timing): string {
 /** The CPU column: the median CPU time, or "-" when it was not measured. */
 export function cpuText(ms: number | null): string {
   return ms === null ? '-' : formatMs(ms);
+}
+
+/** A row for code under test that threw: the first line of the error in the note. */
+export function errored(area: string, item: string, target: string, error: unknown): BenchRow {
+  const message = error instanceof Error ? error.message : String(error);
+  return { area, item, target, measured: '-', cpu: '-', verdict: 'error', note: `error: ${message.split('\n')[0] ?? ''}` };
 }
 
 /** A row for something that could not be measured. */

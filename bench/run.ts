@@ -11,7 +11,7 @@
  */
 import { cpus, loadavg } from 'node:os';
 import { benchImages } from './images.js';
-import { type BenchRow } from './measure.js';
+import { errored, type BenchRow } from './measure.js';
 import { benchOneD } from './oned.js';
 import { benchProcess } from './process.js';
 import { benchTwoD } from './twod.js';
@@ -61,15 +61,20 @@ async function main(): Promise<void> {
     if (run === undefined) continue;
     const t0 = performance.now();
     process.stderr.write(`bench: ${name}...`);
-    rows.push(...(await run()));
+    try {
+      rows.push(...(await run()));
+    } catch (error) {
+      rows.push(errored(name, `the ${name} area stopped`, '-', error));
+    }
     process.stderr.write(` ${((performance.now() - t0) / 1000).toFixed(1)} s\n`);
   }
   console.log(`load average at end: ${loadText()}; suite took ${((performance.now() - started) / 1000).toFixed(0)} s\n`);
   printTable(rows);
   const failed = rows.filter((r) => r.verdict === 'FAIL').length;
   const skippedRows = rows.filter((r) => r.verdict === 'skip').length;
+  const errors = rows.filter((r) => r.verdict === 'error').length;
   console.log(
-    `\n${rows.length} rows: ${failed} FAIL, ${skippedRows} skipped. Verdicts judge the median wall time; the CPU median ` +
+    `\n${rows.length} rows: ${failed} FAIL, ${errors} error, ${skippedRows} skipped. Verdicts judge the median wall time; the CPU median ` +
       '(time on a core, waiting for one left out) shows how much of a miss is the load of a shared machine.',
   );
 }

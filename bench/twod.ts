@@ -5,8 +5,9 @@
  *  - 2000 x 20 thin-fin grid (demo case): target <= 15 ms, in this process; with the factor and one
  *    substitution pair timed apart, and the whole fd-2d solve and refinement study for context;
  *  - 10000 x 50: target <= 0.6 s, in a child process (bench/twod-child.ts) so that its peak memory is its own;
- *  - 1000 x 1000 (a block as thick as long): target <= 1 s and <= 1 GB, needs the multigrid-preconditioned
- *    CG; skipped with a note while no such solver is exported from src/fd/sparse/.
+ *  - 1000 x 1000 (a block as thick as long): target <= 1 s and <= 1 GB; needs an iterative solver (the
+ *    multigrid-preconditioned CG): autoSolver2D when its exported chooser picks one, else an MG/PCG solver
+ *    found in src/fd/sparse/, else skipped with a note.
  * "Solve" = what the library calls: autoSolver2D(system) (factor, substitutions, iterative refinement).
  * Ratios are baseline median / library median, both medians of wall time in this run.
  */
@@ -17,8 +18,8 @@ import { autoSolver2D } from '../src/fd/sparse/autoSolver.js';
 import { bandedCholeskyBytes, factorBandedCholesky } from '../src/fd/sparse/bandedCholesky.js';
 import type { ChildReport } from './twod-child.js';
 import { bandLuBytes, generalBandLuSolve, relativeDifference, stencilToCsr } from './generalBandLu.js';
-import { atMost, cpuText, formatMs, skipped, spread, timeTask, type BenchRow } from './measure.js';
-import { benchProblem2D, benchSystem2D, findIterativeSolver, relativeResidual, type BenchCase2D } from './twodSystems.js';
+import { atMost, cpuText, errored, formatMs, skipped, spread, timeTask, type BenchRow } from './measure.js';
+import { autoSolverChoice, benchProblem2D, benchSystem2D, findIterativeSolver, relativeResidual, type BenchCase2D } from './twodSystems.js';
 
 const AREA = '2-D';
 const BASELINE = 'general band LU (no symmetry, natural order; bench/generalBandLu.ts)';
@@ -34,7 +35,10 @@ function runChild(kind: BenchCase2D, nx: number, ny: number, solver: 'auto' | 'b
     { encoding: 'utf8', timeout: 240_000, maxBuffer: 1 << 20 },
   );
   if (r.error) throw r.error;
-  if (r.status !== 0) throw new Error(`twod-child ${kind} ${nx}x${ny} ${solver} exited with ${r.status}: ${r.stderr.trim().split('\n').slice(-3).join(' | ')}`);
+  if (r.status !== 0 || r.signal !== null) {
+    const reason = r.stderr.split('\n').find((l) => /Error\b.*:/.test(l)) ?? (r.signal !== null ? `killed by ${r.signal}` : 'no error message');
+    throw new Error(`child ${kind} ${nx}x${ny} ${solver} exited with ${r.status ?? r.signal}: ${reason.trim()}`);
+  }
   const line = r.stdout.trim().split('\n').pop() ?? '';
   return JSON.parse(line) as ChildReport;
 }
@@ -48,10 +52,25 @@ function childNote(c: ChildReport): string {
 
 export async function benchTwoD(): Promise<BenchRow[]> {
   const rows: BenchRow[] = [];
-  rows.push(...(await thinGrid()));
+  rows.push(...(await guarded('2000x20 thin-fin grid solve', '<= 15 ms', thinGrid)));
   rows.push(...(await largeThinGrid()));
-  rows.push(...(await squareGrid()));
+  rows.push(...(await guarded('1000x1000 grid solve', '<= 1 s', squareGrid)));
   return rows;
+}
+
+/** Runs a group of measurements; if the code under test throws, one error row says so. */
+async function guarded(item: string, target: string, group: () => Promise<BenchRow[]>): Promise<BenchRow[]> {
+  try {
+    return await group();
+  } catch (error) {
+    return [errored(AREA, item, target, error)];
+  }
+}
+
+/** "autoSolver2D (banded-cholesky)" when the chooser is exported, else "autoSolver2D". */
+async function autoLabel(nx: number, ny: number): Promise<string> {
+  const choice = await autoSolverChoice(nx, ny);
+  return choice === null ? 'autoSolver2D' : `autoSolver2D (chose ${choice})`;
 }
 
 /** 2000 x 20, in this process. */
@@ -68,7 +87,7 @@ async function thinGrid(): Promise<BenchRow[]> {
   const substitution = await timeTask('2d substitutions 2000x20', () => factored.solve(system.rhs, out), opts);
   const csr = stencilToCsr(system.matrix);
   const baseline = await timeTask('2d baseline 2000x20', () => generalBandLuSolve(csr, system.rhs, 'natural'), opts);
-  const rcm = await timeTask('2d baseline rcm 2000x20', () => generalBandLuSolve(csr, system.rhs, 'rcm'), { time: 1000, iterations: 10 });
+  const rcm = await timeTask('2d baseline rcm 2000x20', () => generalBandLuSolve(csr, system.rhs, 'rcm'), { time: 800, iterations: 10 });
   const x = autoSolver2D(system);
   const { x: y, lu } = generalBandLuSolve(csr, system.rhs, 'natural');
   const { lu: luRcm } = generalBandLuSolve(csr, system.rhs, 'rcm');
@@ -79,7 +98,7 @@ async function thinGrid(): Promise<BenchRow[]> {
   return [
     {
       area: AREA,
-      item: `${nx}x${ny} thin-fin grid solve, autoSolver2D (demo case)`,
+      item: `${nx}x${ny} thin-fin grid solve, ${await autoLabel(nx, ny)}, demo case`,
       target: '<= 15 ms',
       measured: formatMs(auto.medianMs),
       cpu: cpuText(auto.cpuMedianMs),
@@ -87,7 +106,7 @@ async function thinGrid(): Promise<BenchRow[]> {
       note:
         `${spread(auto)}; banded Cholesky factor alone ${formatMs(factor.medianMs)} (CPU ${cpuText(factor.cpuMedianMs)}), ` +
         `one forward+back substitution ${formatMs(substitution.medianMs)}; the rest is residuals and refinement; ` +
-        `residual ${relativeResidual(system, x).toExponential(1)}; ${BASELINE} takes ${ratio.toFixed(1)}x as long`,
+        `residual ${relativeResidual(system, x).toExponential(1)}; the baseline takes ${ratio.toFixed(2)}x as long`,
     },
     {
       area: AREA,
@@ -127,34 +146,52 @@ async function thinGrid(): Promise<BenchRow[]> {
 async function largeThinGrid(): Promise<BenchRow[]> {
   const nx = 10000;
   const ny = 50;
-  const auto = runChild('thin', nx, ny, 'auto', 3, 1);
-  // ~1.3e9 multiply-adds a run: two runs without warm-up (a run this long is JIT-compiled within its first rows).
-  const baseline = runChild('thin', nx, ny, 'baseline', 2, 0);
-  const ratio = baseline.medianMs / auto.medianMs;
-  const bands = baseline.bandwidths ? `bandwidths ${baseline.bandwidths[0]}/${baseline.bandwidths[1]}; ` : '';
-  return [
-    {
+  const item = `${nx}x${ny} thin-fin grid solve, ${await autoLabel(nx, ny)}`;
+  let auto: ChildReport | null = null;
+  let baseline: ChildReport | null = null;
+  const rows: BenchRow[] = [];
+  try {
+    auto = runChild('thin', nx, ny, 'auto', 3, 1);
+  } catch (error) {
+    rows.push(errored(AREA, item, '<= 0.6 s', error));
+  }
+  try {
+    // ~1.3e9 multiply-adds a run: two runs without warm-up (a run this long is JIT-compiled within its first rows).
+    baseline = runChild('thin', nx, ny, 'baseline', 2, 0);
+  } catch (error) {
+    rows.push(errored(AREA, `${nx}x${ny} baseline: ${BASELINE}`, '-', error));
+  }
+  const ratio = auto !== null && baseline !== null ? `; the baseline takes ${(baseline.medianMs / auto.medianMs).toFixed(2)}x as long` : '';
+  if (auto !== null) {
+    rows.unshift({
       area: AREA,
-      item: `${nx}x${ny} thin-fin grid solve, autoSolver2D`,
+      item,
       target: '<= 0.6 s',
       measured: formatMs(auto.medianMs),
       cpu: cpuText(auto.cpuMedianMs),
       verdict: atMost(auto.medianMs, 600),
-      note: `${childNote(auto)}; banded Cholesky factor ${(bandedCholeskyBytes(nx, ny) / 2 ** 20).toFixed(0)} MB; ${BASELINE} takes ${ratio.toFixed(1)}x as long`,
-    },
-    {
+      note: `${childNote(auto)}; a banded Cholesky factor would take ${(bandedCholeskyBytes(nx, ny) / 2 ** 20).toFixed(0)} MB${ratio}`,
+    });
+  }
+  if (baseline !== null) {
+    const bands = baseline.bandwidths ? `bandwidths ${baseline.bandwidths[0]}/${baseline.bandwidths[1]}` : '';
+    rows.push({
       area: AREA,
       item: `${nx}x${ny} baseline: ${BASELINE}`,
       target: '-',
       measured: formatMs(baseline.medianMs),
       cpu: cpuText(baseline.cpuMedianMs),
       verdict: 'info',
-      note: `${childNote(baseline)}; ${bands}ratio baseline/library ${ratio.toFixed(2)}`,
-    },
-  ];
+      note: `${childNote(baseline)}; ${bands}${ratio}`,
+    });
+  }
+  return rows;
 }
 
-/** 1000 x 1000: only with an iterative (multigrid/PCG) solver; the band solvers cannot fit. */
+/**
+ * 1000 x 1000: with autoSolver2D when it picks a method other than the band (its chooser is exported),
+ * else with the multigrid/PCG solver found in src/fd/sparse/, else skipped; the band solvers cannot fit.
+ */
 async function squareGrid(): Promise<BenchRow[]> {
   const n = 1000;
   const item = `${n}x${n} grid solve (block case)`;
@@ -162,17 +199,26 @@ async function squareGrid(): Promise<BenchRow[]> {
   const cholesky = gigabytes(bandedCholeskyBytes(n, n));
   const lu = gigabytes(bandLuBytes(n * n, n + 1, n + 1));
   const bandNote = `banded Cholesky would need ${cholesky} for its factor, the baseline band LU ${lu}: neither is run`;
+  const choice = await autoSolverChoice(n, n);
   const found = await findIterativeSolver();
-  if (found === null) {
+  let solver: 'auto' | 'iterative';
+  let label: string;
+  if (choice !== null && choice !== 'banded-cholesky') {
+    solver = 'auto';
+    label = `autoSolver2D (chose ${choice})`;
+  } else if (found !== null) {
+    solver = 'iterative';
+    label = found.name;
+  } else {
     const why = `no multigrid/PCG solver exported from src/fd/sparse/ yet; ${bandNote}`;
     return [skipped(AREA, item, '<= 1 s', why), skipped(AREA, memoryItem, '<= 1 GB', why)];
   }
   // Seconds a run: three runs without warm-up (the median leaves out the one that paid for the JIT).
-  const r = runChild('block', n, n, 'iterative', 3, 0);
+  const r = runChild('block', n, n, solver, 3, 0);
   return [
     {
       area: AREA,
-      item: `${item}, ${found.name}`,
+      item: `${item}, ${label}`,
       target: '<= 1 s',
       measured: formatMs(r.medianMs),
       cpu: cpuText(r.cpuMedianMs),

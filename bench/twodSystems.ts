@@ -106,3 +106,15 @@ export async function findIterativeSolver(): Promise<FoundSolver | null> {
   }
   return null;
 }
+
+/**
+ * The method autoSolver2D picks for a grid, when autoSolver.ts exports its chooser
+ * (`chooseSolverMethod(nodesX, nodesY)`); null while it does not.
+ */
+export async function autoSolverChoice(nodesX: number, nodesY: number): Promise<string | null> {
+  const mod = (await import('../src/fd/sparse/autoSolver.js')) as Record<string, unknown>;
+  const choose = mod['chooseSolverMethod'];
+  if (typeof choose !== 'function') return null;
+  const method: unknown = choose(nodesX, nodesY);
+  return typeof method === 'string' ? method : null;
+}
