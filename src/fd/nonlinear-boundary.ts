@@ -30,7 +30,7 @@ import type { Mesh1D } from '../mesh/types.js';
 import { contactConductance, type BaseBoundary, type TipBoundary } from './boundary.js';
 import { hAt } from './convection1d.js';
 import type { KirchhoffTransform } from './nonlinear-conductivity.js';
-import { equilibriumExcess, faceFlux, faceFluxSlope, powerFactor, radiationGap, type FaceLaw } from './nonlinear-losses.js';
+import { convectedExcess, equilibriumExcess, faceFlux, faceFluxSlope, radiationGap, type FaceLaw } from './nonlinear-losses.js';
 import type { NonlinearFinProblem1D } from './nonlinear-problem.js';
 
 export interface NonlinearBoundaries {
@@ -133,7 +133,7 @@ export function continuationIntegral(b: NonlinearBoundaries, theta: number): num
     if (hx !== 0) {
       // ∫ g(s) s (a + slope s) ds = [a g s^2/(n+2) + slope g s^3/(n+3)], g = |s/θ_b|^n, a = k - slope lo.
       const a = k - slope * lo;
-      const primitive = (s: number): number => powerFactor(law, s) * s * s * (a / (n + 2) + (slope * s) / (n + 3));
+      const primitive = (s: number): number => convectedExcess(law, s) * s * (a / (n + 2) + (slope * s) / (n + 3));
       sum += hx * (primitive(hi) - primitive(lo));
     }
     if (law.radiative !== 0) {

@@ -53,15 +53,26 @@ export function radiationGap(law: FaceLaw, theta: number): number {
   return (T - Ts) * (T + Ts) * (T * T + Ts * Ts);
 }
 
+/**
+ * Largest convective slope (dq/dθ in W/(m^2 K), or G_i g (n+1) in W/K) put in the Newton matrix: for
+ * n < 0 it is infinite at θ = 0, and a finite stand-in keeps the matrix finite.
+ */
+const LARGEST_SLOPE = 1e300;
+
+/** g(θ) θ, K: 0 at θ = 0 also for n < 0 (where g itself is infinite). */
+export function convectedExcess(law: FaceLaw, theta: number): number {
+  return theta === 0 ? 0 : powerFactor(law, theta) * theta;
+}
+
 /** Face flux q(θ), W/m^2, for position part hx, W/(m^2 K). */
 export function faceFlux(law: FaceLaw, hx: number, theta: number): number {
-  const convected = hx === 0 ? 0 : hx * powerFactor(law, theta) * theta;
+  const convected = hx === 0 ? 0 : hx * convectedExcess(law, theta);
   return law.radiative === 0 ? convected : convected + law.radiative * radiationGap(law, theta);
 }
 
 /** dq/dθ, W/(m^2 K). */
 export function faceFluxSlope(law: FaceLaw, hx: number, theta: number): number {
-  const convected = hx === 0 ? 0 : (law.exponent + 1) * hx * powerFactor(law, theta);
+  const convected = hx === 0 ? 0 : Math.min(LARGEST_SLOPE, (law.exponent + 1) * hx * powerFactor(law, theta));
   if (law.radiative === 0) return convected;
   const T = law.ambient_K + theta;
   return convected + 4 * law.radiative * T * T * T;
@@ -86,8 +97,8 @@ export function cvLosses(
     const t = theta[i] as number;
     const g = exponent === 0 ? 1 : Math.pow(Math.abs(t) * scale, exponent);
     const Gi = G[i] as number;
-    let value = Gi * g * t;
-    let derivative = exponent === 0 ? Gi : (exponent + 1) * Gi * g;
+    let value = t === 0 ? 0 : Gi * g * t;
+    let derivative = exponent === 0 ? Gi : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
     if (radiative !== 0) {
       const T = Ta + t;
       const Si = radiative * (S[i] as number);

@@ -46,6 +46,12 @@ export interface NewtonSetup {
   readonly boundaries: NonlinearBoundaries;
   /** True when the problem is linear (one step solves it). */
   readonly linear: boolean;
+  /**
+   * True when no node may change the sign of its θ in one step: n < 0 (the loss ~ |θ|^(n+1), with an
+   * infinite slope at θ = 0, sends a plain Newton step from a small θ to -θ (n = -1/2) or beyond)
+   * and no radiation sink on the other side of the ambient, so θ cannot legitimately cross 0.
+   */
+  readonly keepSign: boolean;
 }
 
 export interface NewtonOptions {
@@ -234,11 +240,19 @@ function assembleNewton(setup: NewtonSetup, s: State, system: ReturnType<typeof 
   }
 }
 
-/** d_trial = d + λ δd, keeping fixed temperatures exact. */
+/**
+ * d_trial = d + λ δd, keeping fixed temperatures exact; with keepSign, a node whose θ would reach or
+ * cross 0 goes to a tenth of its θ instead (approaching 0 geometrically, as the exact solution does).
+ */
 function step(setup: NewtonSetup, from: Float64Array, delta: Float64Array, lambda: number, into: Float64Array): void {
   const n = from.length;
-  for (let i = 0; i < n; i++) into[i] = (from[i] as number) + lambda * (delta[i] as number);
   const b = setup.boundaries;
+  const reference = b.base.theta;
+  for (let i = 0; i < n; i++) {
+    const d = (from[i] as number) + lambda * (delta[i] as number);
+    const before = reference - (from[i] as number);
+    into[i] = setup.keepSign && before !== 0 && (reference - d) * before <= 0 ? reference - 0.1 * before : d;
+  }
   if (b.base.kind === 'temperature') into[0] = 0;
   if (b.tip.kind === 'temperature') into[n - 1] = b.base.theta - b.tip.theta;
 }

@@ -29,7 +29,17 @@ export function newtonSetup(problem: NonlinearFinProblem1D, mesh: Mesh1D): Newto
   const G = new Float64Array(n);
   for (let i = 0; i < n; i++) G[i] = convectiveConductance(mesh, hx, i);
   const law = faceLaw(problem);
-  return { mesh, K, G, law, kirchhoff, boundaries: nonlinearBoundaries(problem, mesh, law, kirchhoff), linear: isLinearProblem(problem) };
+  const sinkAcrossAmbient = law.radiative !== 0 && (law.surroundings_K - law.ambient_K) * problem.base.theta < 0;
+  return {
+    mesh,
+    K,
+    G,
+    law,
+    kirchhoff,
+    boundaries: nonlinearBoundaries(problem, mesh, law, kirchhoff),
+    linear: isLinearProblem(problem),
+    keepSign: problem.exponent < 0 && !sinkAcrossAmbient,
+  };
 }
 
 export interface MeshSolve {
@@ -81,7 +91,7 @@ export function solveNonlinearOnMesh(
   while (s < 1) {
     const target = Math.min(1, s + ds);
     const stageSetup = target === 1 ? setup : newtonSetup(scaleNonlinearity(problem, target, kRef), mesh);
-    const attempt = newtonSolve(stageSetup, reached.theta, opts);
+    const attempt = newtonSolve(stageSetup, reached.drop, opts);
     stages++;
     total += attempt.iterations;
     halvings += attempt.halvings;
@@ -115,7 +125,10 @@ function summary(setup: NewtonSetup, outcome: NewtonOutcome, total: number, halv
 /** What makes the problem nonlinear, as advice on what to change. */
 function advice(problem: NonlinearFinProblem1D): string {
   const items: string[] = [];
-  if (problem.exponent !== 0) items.push(`lower the exponent of the power-law h (now ${problem.exponent})`);
+  if (problem.exponent > 0) items.push(`lower the exponent of the power-law h (now ${problem.exponent})`);
+  if (problem.exponent < 0) {
+    items.push(`use an exponent closer to 0 or a shorter fin (now ${problem.exponent}: the fin reaches the fluid temperature, where h = base (θ/θ_b)^n is infinite)`);
+  }
   if (problem.radiation.emissivity !== 0) items.push(`give a smaller emissivity (now ${problem.radiation.emissivity})`);
   const k = problem.conductivity;
   if (k.kind === 'table') {
