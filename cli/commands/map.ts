@@ -5,7 +5,7 @@ import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
 import { loadCase } from '../../src/case/parse.js';
-import type { ShortcutId } from '../../src/compare/types.js';
+import type { MapModelId } from '../../src/map/types.js';
 import { formatMapSummary } from '../../src/map/format.js';
 import { mapJsonText } from '../../src/map/json.js';
 import { OutputsInterrupted, renderMapFiles } from '../../src/map/outputs.js';
@@ -17,7 +17,7 @@ import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import type { SetExit } from '../program.js';
 
-const shortcutIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form'] as const satisfies readonly ShortcutId[];
+const modelIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'] as const satisfies readonly MapModelId[];
 
 /** "41x41" (NX x NY) or "41" (both): at least 2 and at most 1000 values per axis. */
 const stepsOption = z
@@ -37,7 +37,7 @@ const stepsOption = z
 const modelsOption = z
   .string()
   .transform((s) => s.split(',').map((m) => m.trim()).filter((m) => m !== ''))
-  .pipe(z.array(z.enum(shortcutIds)).min(1));
+  .pipe(z.array(z.enum(modelIds)).min(1));
 
 const jobsOption = z.coerce.number().int().min(1).max(256);
 const formatOption = z.enum(['png', 'svg']);
@@ -73,7 +73,7 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
     .option('--steps <NXxNY>', 'grid points along x and y', '41x41')
     .option('--log-x', 'space the x values geometrically and draw a log axis')
     .option('--log-y', 'space the y values geometrically and draw a log axis')
-    .option('--models <ids>', `shortcuts to map, comma-separated (${shortcutIds.join(', ')}); default every one that applies`)
+    .option('--models <ids>', `models to map, comma-separated (${modelIds.join(', ')}); default every shortcut that applies, and fd-1d beside a 2-D reference`)
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
     .option('--jobs <n>', 'worker threads (default: all cores; 1 runs in this process)')
@@ -97,7 +97,7 @@ Examples:
       const steps = parseOption('--steps', stepsOption, o.steps);
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
-      const models = o.models === undefined ? undefined : parseOption('--models', modelsOption, o.models, `a comma-separated list of ${shortcutIds.join(', ')}`);
+      const models = o.models === undefined ? undefined : parseOption('--models', modelsOption, o.models, `a comma-separated list of ${modelIds.join(', ')}`);
       const jobs = o.jobs === undefined ? availableParallelism() : parseOption('--jobs', jobsOption, o.jobs, 'a whole number of threads from 1 to 256');
       const format = parseOption('--format', formatOption, o.format, 'png or svg');
       const outDir = o.out ?? defaultOutDir(file);

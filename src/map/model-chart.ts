@@ -8,11 +8,10 @@
  * tolerance band always reads as the pale middle of the map and a few wild points do not wash it out (the colour
  * saturates beyond the range; the colour bar shows the range).
  */
-import type { ShortcutId } from '../compare/types.js';
 import { mapChart, type MapChartResult, type MapPoint as ChartPoint } from '../images/index.js';
 import { appendToSvg, biotCandidates, isoLinesSvg, mLCandidates } from './iso-lines.js';
 import type { MapRun } from './run-map.js';
-import { isPointError, type MapAxis } from './types.js';
+import { isPointError, type MapAxis, type MapModelId } from './types.js';
 
 export function axisLabel(axis: MapAxis): string {
   return axis.displayUnit === '' ? axis.key : `${axis.key} (${axis.displayUnit})`;
@@ -49,7 +48,7 @@ export interface ModelChart {
   driftPercent: Float64Array;
 }
 
-export function modelChart(run: MapRun, model: ShortcutId): ModelChart {
+export function modelChart(run: MapRun, model: MapModelId): ModelChart {
   const tolerance = run.job.check.tolerance;
   const driftPercent = new Float64Array(run.points.length).fill(Number.NaN);
   let maxAbs = 0;

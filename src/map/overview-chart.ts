@@ -8,7 +8,6 @@
  * "unsafe" nodes placed on the plot's edges, so every region closes along the edge of the map and can be filled
  * (even-odd rule for holes). Invalid points and points where the shortcut does not apply count as unsafe.
  */
-import type { ShortcutId } from '../compare/types.js';
 import { contourLines, getColormap, makeAxis, project, type Axis } from '../images/index.js';
 import { drawAxes, xAxisMargin, yAxisMargin } from '../images/axes.js';
 import { fieldImage } from '../images/field-layer.js';
@@ -20,7 +19,7 @@ import { el, polylinePathData, svgDocument, textEl } from '../images/svg.js';
 import { defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/theme.js';
 import { axisLabel, casePointMark, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';
-import { isPointError } from './types.js';
+import { isPointError, type MapModelId } from './types.js';
 
 export interface OverviewChart {
   svg: string;
@@ -32,7 +31,7 @@ export interface OverviewChart {
 const styles: readonly LineStyle[] = ['solid', 'dashed', 'dotted', 'dashdot', 'longdash', 'dashdotdot'];
 
 /** s = tolerance - |drift| of one shortcut at the grid points; -tolerance where it has no value. */
-export function safetyMargin(run: MapRun, model: ShortcutId): Float64Array {
+export function safetyMargin(run: MapRun, model: MapModelId): Float64Array {
   const tolerance = run.job.check.tolerance;
   const s = new Float64Array(run.points.length).fill(-tolerance);
   for (const p of run.points) {

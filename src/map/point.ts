@@ -7,12 +7,12 @@
 import { parseCaseObject, readDocument, type Case, type Locate, type ParseOptions } from '../case/index.js';
 import { basename, extname } from 'node:path';
 import { runCheck } from '../compare/check.js';
-import type { CheckReport, ShortcutId } from '../compare/types.js';
+import type { CheckReport } from '../compare/types.js';
 import { InputError, SolverError, UsageError } from '../errors.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
 import { biotAndML } from './dimensionless.js';
 import { substituteAxis } from './substitute.js';
-import type { MapJob, MapPoint, PointModel, PointResult } from './types.js';
+import type { MapJob, MapModelId, MapPoint, PointModel, PointResult } from './types.js';
 
 export interface PointContext {
   job: MapJob;
@@ -37,13 +37,13 @@ function pointMessage(err: unknown): string | undefined {
 }
 
 /** The map's numbers of one point from `fincheck check`'s report on its case (the ledger is not needed). */
-export function pointFromReport(index: number, x: number, y: number, c: Case, report: CheckReport, wanted: readonly ShortcutId[]): PointResult {
+export function pointFromReport(index: number, x: number, y: number, c: Case, report: CheckReport, wanted: readonly MapModelId[]): PointResult {
   if (!isLinearFinCase(c)) throw new Error('runCheck accepted a nonlinear case');
   const { biot, mL } = biotAndML(c);
   const models: PointModel[] = [];
   for (const id of wanted) {
     const m = report.models.find((r) => r.model === id);
-    if (m && m.model !== 'fd-1d') {
+    if (m) {
       models.push({ model: m.model, heatRate_W: m.heatRate_W, efficiency: m.efficiency, drift: m.drift, verdict: m.verdict });
     }
   }

@@ -5,13 +5,13 @@
  */
 import { parseCaseText, readDocument } from '../case/index.js';
 import { runCheck } from '../compare/check.js';
-import type { NotApplicable, ShortcutId } from '../compare/types.js';
+import type { NotApplicable } from '../compare/types.js';
 import { UsageError } from '../errors.js';
 import { parseMapAxis } from './axis.js';
 import { solvePoints } from './pool.js';
 import { pointFromReport } from './point.js';
 import { summariseMap, type MapSummary } from './summary.js';
-import type { MapAxis, MapJob, MapPoint, PointCheckOptions, PointResult } from './types.js';
+import type { MapAxis, MapJob, MapModelId, MapPoint, PointCheckOptions, PointResult } from './types.js';
 
 export interface MapRequest {
   caseText: string;
@@ -24,8 +24,8 @@ export interface MapRequest {
   steps: readonly [number, number];
   tolerance: number;
   reference: PointCheckOptions['reference'];
-  /** Shortcuts to map; undefined maps every one that applies to the case. */
-  models?: readonly ShortcutId[];
+  /** Models to map; undefined maps every shortcut that applies to the case (and fd-1d beside a 2-D reference). */
+  models?: readonly MapModelId[];
 }
 
 /** A map ready to run: checked axes, the job every point runs, and the case's own point. */
@@ -53,11 +53,14 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
   if (x.key === y.key) throw new UsageError(`--x and --y both sweep ${x.key}; give two different keys`);
 
   const { report } = await runCheck(c, { tolerance: request.tolerance, reference: request.reference, ledger: false });
-  const applicable = report.models.map((m) => m.model).filter((id): id is ShortcutId => id !== 'fd-1d');
+  const applicable: MapModelId[] = report.models.map((m) => m.model);
   for (const id of request.models ?? []) {
     if (applicable.includes(id)) continue;
-    const reason = report.notApplicable.find((n) => n.model === id)?.reason ?? 'not evaluated for this case';
-    throw new UsageError(`--models: ${id} does not apply to this case (${reason}); it applies: ${applicable.join(', ')}`);
+    const reason =
+      id === 'fd-1d'
+        ? `it is the reference here; fd-1d is compared with fd-2d where the case allows 2-D (--reference auto or 2d)`
+        : (report.notApplicable.find((n) => n.model === id)?.reason ?? 'not evaluated for this case');
+    throw new UsageError(`--models: ${id} does not apply to this case (${reason}); these do: ${applicable.join(', ')}`);
   }
   const models = request.models ? [...new Set(request.models)] : applicable;
   const check: PointCheckOptions = { tolerance: request.tolerance, reference: request.reference, models };

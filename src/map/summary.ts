@@ -1,13 +1,13 @@
 /**
  * Counts over a finished map: per shortcut, how many points are ok, marginal and unsafe and the range of the
  * drift; and the points without results, grouped by what went wrong (the value given is left out of the grouping,
- * so "fin.tipThickness: got "3 mm"; expected ..." and "... got "4 mm" ..." count as one kind of problem).
+ * so "fin.tipThickness: got "3 mm"; expected ... (2 mm)" and "... got "4 mm"; expected ... (3 mm)" count as one kind
+ * of problem).
  */
-import type { ShortcutId } from '../compare/types.js';
-import { isPointError, type MapPoint } from './types.js';
+import { isPointError, type MapModelId, type MapPoint } from './types.js';
 
 export interface ModelCounts {
-  model: ShortcutId;
+  model: MapModelId;
   ok: number;
   marginal: number;
   unsafe: number;
@@ -31,11 +31,12 @@ export interface MapSummary {
   models: ModelCounts[];
 }
 
+/** The message without the values in it (the value given, the numbers in what is accepted). */
 function groupKey(message: string): string {
-  return message.replace(/got [^;]*;/g, 'got …;');
+  return message.replace(/got [^;]*;/g, 'got …;').replace(/[-+]?\d+(?:\.\d+)?(?:e[-+]?\d+)?/gi, '#');
 }
 
-export function summariseMap(points: readonly MapPoint[], models: readonly ShortcutId[]): MapSummary {
+export function summariseMap(points: readonly MapPoint[], models: readonly MapModelId[]): MapSummary {
   const counts: ModelCounts[] = models.map((model) => ({ model, ok: 0, marginal: 0, unsafe: 0, missing: 0, minDrift: Infinity, maxDrift: -Infinity }));
   const groups = new Map<string, ErrorGroup>();
   let errors = 0;

@@ -6,6 +6,9 @@
 import type { KeyPath, QuantityKind } from '../case/index.js';
 import type { ModelId, ShortcutId, Verdict } from '../compare/types.js';
 
+/** What a map can show the drift of: the shortcuts, and the 1-D model when fd-2d is the reference. */
+export type MapModelId = ShortcutId | 'fd-1d';
+
 /** One axis of the map: a case key swept from `from` to `to` in the user's unit. */
 export interface MapAxis {
   /** The key path as the user wrote it, normalised (`fin.thickness`). */
@@ -34,8 +37,8 @@ export interface AxisSubstitution {
 export interface PointCheckOptions {
   tolerance: number;
   reference: 'auto' | '1d' | '2d';
-  /** Shortcuts to report, in this order. */
-  models: readonly ShortcutId[];
+  /** Models to report, in this order. */
+  models: readonly MapModelId[];
 }
 
 /** Everything a point needs besides its two values: the case text (re-read in each worker) and the axes. */
@@ -48,7 +51,7 @@ export interface MapJob {
 }
 
 export interface PointModel {
-  model: ShortcutId;
+  model: MapModelId;
   heatRate_W: number;
   efficiency: number;
   drift: number;
@@ -72,7 +75,7 @@ export interface PointResult {
   /** m L of the equivalent uniform fin (mean section, mean h), as `check` computes it. */
   mL: number;
   reference: PointReference;
-  /** The requested shortcuts that apply at this point. */
+  /** The requested models that apply at this point. */
   models: PointModel[];
 }
 
