@@ -110,8 +110,8 @@ export async function benchOneD(): Promise<BenchRow[]> {
         note: spread(a),
       });
       const e = await timeTask('solveFinProblem1D 1e6', () => solveFinProblem1D(problem, { nodes: n }), {
-        time: 2000,
-        iterations: 10,
+        time: 1000,
+        iterations: 5,
       });
       rows.push({
         area: AREA,

@@ -2,11 +2,12 @@
  * One large 2-D solve in a process of its own, so that its peak memory can be read from the kernel
  * (process.resourceUsage().maxRSS: the largest resident set the process ever had) without the rest of
  * the suite in it. Started by twod.ts as
- *   node --import tsx bench/twod-child.ts <thin|block> <nx> <ny> <auto|baseline|iterative> <runs> [warm-up runs, 1]
+ *   node --import tsx bench/twod-child.ts <thin|block> <nx> <ny> <auto|banded|baseline|iterative> <runs> [warm-up runs, 1]
  * and prints one JSON line (ChildReport). The system is built before timing; each timed run is the
  * whole solve (factor or iterate, then solve), as the library calls it.
  */
 import { autoSolver2D } from '../src/fd/sparse/autoSolver.js';
+import { bandedCholeskySolver } from '../src/fd/sparse/bandedCholesky.js';
 import { generalBandLuSolve, stencilToCsr } from './generalBandLu.js';
 import { timeTask } from './measure.js';
 import { benchProblem2D, benchSystem2D, findIterativeSolver, relativeResidual, type BenchCase2D } from './twodSystems.js';
@@ -50,6 +51,10 @@ async function main(): Promise<void> {
       name = 'autoSolver2D';
       solve = () => autoSolver2D(system);
       break;
+    case 'banded':
+      name = 'bandedCholeskySolver';
+      solve = () => bandedCholeskySolver(system);
+      break;
     case 'baseline': {
       name = 'general band LU (natural order)';
       const csr = stencilToCsr(system.matrix);
@@ -68,7 +73,7 @@ async function main(): Promise<void> {
       break;
     }
     default:
-      throw new Error(`twod-child: solver must be auto, baseline or iterative, got ${solverArg}`);
+      throw new Error(`twod-child: solver must be auto, banded, baseline or iterative, got ${solverArg}`);
   }
 
   let x: Float64Array = new Float64Array(0);
