@@ -2,4 +2,10 @@
 import { processIo } from './io.js';
 import { runCli } from './run.js';
 
+// A reader that stops early (`fincheck ... | head`) is not an error.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+  throw e;
+});
+
 process.exitCode = await runCli(process.argv.slice(2), processIo());

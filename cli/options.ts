@@ -31,3 +31,16 @@ export function parseOption<T>(option: string, schema: z.ZodType<T>, value: unkn
   const what = accepted ?? r.error.issues[0]?.message ?? 'a valid value';
   throw new UsageError(`${option}: got ${JSON.stringify(value)}; expected ${what}`);
 }
+
+export const modelOption = z.enum(['1d', '2d']);
+
+/** "400x40": nodes along and across for a single 2-D solve. */
+export const gridOption = z
+  .string()
+  .trim()
+  .regex(/^\d+\s*[xX]\s*\d+$/)
+  .transform((s) => {
+    const [nx, ny] = s.split(/[xX]/).map((v) => Number(v.trim())) as [number, number];
+    return { nx, ny };
+  })
+  .refine((g) => g.nx >= 2 && g.ny >= 2 && g.nx <= 20000 && g.ny <= 20000);

@@ -4,25 +4,40 @@ import { loadCase } from '../../src/case/parse.js';
 import { runSolve, type SolveReport } from '../../src/compare/solve.js';
 import { describeCase } from '../../src/compare/describe-case.js';
 import type { Io } from '../io.js';
-import { nodesOption, parseOption } from '../options.js';
+import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
+import { runSolve2D, type Solve2DReport } from '../../src/compare/solve2d.js';
+import { UsageError } from '../../src/errors.js';
 
 export function registerSolve(program: Command, io: Io): Command {
   return program
     .command('solve')
     .argument('<case>', 'case file (YAML or JSON)')
     .description('solve the fin with finite volumes; by default a refinement study gives the discretisation error')
-    .option('--nodes <n>', 'solve once on exactly n nodes (no refinement study, discretisation error null)')
+    .option('--model <m>', '1d (finite volumes along the fin) or 2d (across the thickness too)', '1d')
+    .option('--nodes <n>', '1-D: solve once on exactly n nodes (no refinement study, discretisation error null)')
+    .option('--grid <NXxNY>', '2-D: solve once on exactly NX x NY nodes (no refinement study)')
     .option('--json', 'print one JSON document (outputs.md) with the temperature profile')
     .addHelpText(
       'after',
       `
 Examples:
   fincheck solve demo/inverter-plate-fin.yaml
-  fincheck solve demo/motor-housing-tapered-fin.yaml --nodes 200 --json`,
+  fincheck solve demo/motor-housing-tapered-fin.yaml --nodes 200 --json
+  fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d
+  fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d --grid 400x40 --json`,
     )
-    .action((file: string, o: { nodes?: string; json?: boolean }) => {
+    .action((file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean }) => {
+      const model = parseOption('--model', modelOption, o.model, '1d or 2d');
       const nodes = o.nodes === undefined ? undefined : parseOption('--nodes', nodesOption, o.nodes, 'a whole number of nodes from 3 to 10000000');
+      const grid = o.grid === undefined ? undefined : parseOption('--grid', gridOption, o.grid, 'NXxNY with whole numbers from 2 to 20000, e.g. 400x40');
+      if (model === '1d' && grid !== undefined) throw new UsageError('--grid goes with --model 2d; use --nodes N for the 1-D model');
+      if (model === '2d' && nodes !== undefined) throw new UsageError('--nodes goes with --model 1d; use --grid NXxNY for the 2-D model');
       const c = loadCase(file);
+      if (model === '2d') {
+        const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
+        io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
+        return;
+      }
       const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
       io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
@@ -42,6 +57,27 @@ function formatSolve(r: SolveReport, description: string[]): string {
   for (let j = 0; j < want; j++) {
     const p = pts[Math.round((j * (pts.length - 1)) / Math.max(1, want - 1))];
     if (p) lines.push(`  ${(p.x_m * 1000).toFixed(3).padStart(8)}   ${p.T_degC.toFixed(3).padStart(9)}`);
+  }
+  lines.push('', 'Estimates of the stated model: confirm by test; h is usually the largest uncertainty.');
+  return `${lines.join('\n')}\n`;
+}
+
+function formatSolve2D(r: Solve2DReport, description: string[]): string {
+  const lines = [`fincheck solve: ${r.case}`, ...description.map((d) => `  ${d}`), ''];
+  const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
+  lines.push(`Model ${r.model}, ${r.grid.nx} x ${r.grid.ny} nodes (along x across)`);
+  lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
+  if (r.efficiency !== null) lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
+  lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
+  lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
+  lines.push('', '  x [mm]   centre T [degC]   surface T [degC]');
+  const n = r.centreline.length;
+  const want = Math.min(11, n);
+  for (let j = 0; j < want; j++) {
+    const i = Math.round((j * (n - 1)) / Math.max(1, want - 1));
+    const c = r.centreline[i];
+    const s = r.surface[i];
+    if (c && s) lines.push(`  ${(c.x_m * 1000).toFixed(3).padStart(8)}   ${c.T_degC.toFixed(3).padStart(13)}   ${s.T_degC.toFixed(3).padStart(15)}`);
   }
   lines.push('', 'Estimates of the stated model: confirm by test; h is usually the largest uncertainty.');
   return `${lines.join('\n')}\n`;

@@ -21,7 +21,7 @@ export function formatCheck(c: Case, r: CheckReport): string {
   for (const line of describeCase(c)) out.push(`  ${line}`);
   out.push('');
   const ref = r.reference;
-  const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} cells`;
+  const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} nodes`;
   out.push(`Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`);
   out.push(`  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`);
   out.push(`  ${ref.note}`);
@@ -39,11 +39,12 @@ export function formatCheck(c: Case, r: CheckReport): string {
   out.push('');
   if (r.assumptions.length > 0) {
     out.push('Where the drift comes from (one assumption at a time):');
+    const methods = [...new Set(r.assumptions.map((a) => a.method))];
     const w = Math.max(...r.assumptions.map((a) => a.assumption.length)) + 2;
     for (const a of r.assumptions) {
-      out.push(`  ${pad(a.assumption, w)}${lpad(pct(a.drift), 10)}   made by ${a.madeBy.join(', ')}`);
+      out.push(`  ${pad(a.assumption, w)}${lpad(pct(a.drift), 10)} [${methods.indexOf(a.method) + 1}]  made by ${a.madeBy.join(', ')}`);
     }
-    out.push(`  (${[...new Set(r.assumptions.map((a) => a.method))].join('; ')})`);
+    methods.forEach((m, i) => out.push(`    [${i + 1}] ${m}`));
     out.push('');
   }
   if (r.flags.length > 0) {

@@ -27,7 +27,7 @@ base: { temperature: 80 degC }
 
 describe('fincheck check --json', () => {
   it('prints one JSON document with the contract keys and the published heat rates (R1)', async () => {
-    const r = await cli('check', R1, '--json');
+    const r = await cli('check', R1, '--json', '--reference', '1d');
     expect(r.code).toBe(0);
     expect(r.stderr).toBe('');
     const j = JSON.parse(r.stdout);
@@ -65,12 +65,51 @@ describe('fincheck check --json', () => {
   });
 
   it('prints a readable table naming the reference, each model and the cautions', async () => {
-    const r = await cli('check', R1);
+    const r = await cli('check', R1, '--reference', '1d');
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/Reference \(fd-1d\): heat rate 7\.2037\d* W/);
     for (const id of ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form']) expect(r.stdout).toContain(id);
     expect(r.stdout).toContain('Where the drift comes from');
     expect(r.stdout).toContain('Cautions:');
+  });
+});
+
+describe('fincheck check with the 2-D reference', () => {
+  // Plate fin with Bi = h b / k = 0.1 and mL = 1 (b = t/2 = 1 mm, L = b / sqrt(Bi)), insulated edges, convective
+  // tip with the face h. Exact 2-D eigen-series (separation of variables for the rectangular fin, cf. Lau &
+  // Tan 1973, J. Heat Transfer 95, 549; from memory): eta_2D = 0.648851377 on the area 2L + 2b; exact 1-D
+  // convective tip eta = 0.659934986 (Incropera et al., Table 3.4 case A; from memory); values computed with
+  // mpmath in the shared reference scripts (fin2d_series.py).
+  const L = 0.001 / Math.sqrt(0.1);
+  const plate = caseFile(
+    'plate-bi01.yaml',
+    `name: plate Bi 0.1 mL 1
+fin: { profile: rectangular, length: ${L}, thickness: 2 mm, width: 100 mm, edges: insulated }
+material: { k: 10 }
+convection: { ambient: 20, h: 1000, tip: convective }
+base: { temperature: 70 }
+`,
+  );
+  it('auto picks fd-2d; the one-dimensional conduction row equals the exact series error (+1.708 %)', async () => {
+    const r = await cli('check', plate, '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.reference.model).toBe('fd-2d');
+    expect(Object.keys(j.reference.grid).sort()).toEqual(['nx', 'ny']);
+    const q2d = 0.648851377 * 1000 * (2 * L + 0.002) * 0.1 * 50;
+    // The 2-D study's GCI is ~1e-4 here (corner singularity, order ~1.9): 5e-4 relative covers it.
+    expect(Math.abs(j.reference.heatRate_W / q2d - 1)).toBeLessThan(5e-4);
+    expect(Math.abs(j.reference.heatRate_W / q2d - 1)).toBeLessThan(2 * j.reference.discretizationError + 1e-6);
+    const row = j.assumptions.find((a: { assumption: string }) => a.assumption.startsWith('one-dimensional conduction'));
+    expect(row.drift).toBeCloseTo(0.659934986 / 0.648851377 - 1, 3);
+    const fd1d = j.models.find((m: { model: string }) => m.model === 'fd-1d');
+    expect(fd1d.drift).toBeCloseTo(row.drift, 12);
+    expect(j.flags.find((f: { flag: string }) => f.flag === 'thick-fin').message).toMatch(/2-D solution shows/);
+  });
+  it('--reference 1d keeps fd-1d and has no one-dimensional row', async () => {
+    const j = JSON.parse((await cli('check', plate, '--json', '--reference', '1d')).stdout);
+    expect(j.reference.model).toBe('fd-1d');
+    expect(j.assumptions.map((a: { assumption: string }) => a.assumption).join()).not.toMatch(/one-dimensional/);
   });
 });
 
@@ -120,6 +159,30 @@ describe('fincheck solve', () => {
     expect(j.discretizationError).toBeLessThan(1e-6);
     expect(Math.abs(j.heatRate_W / 7.203722261 - 1)).toBeLessThan(1e-6);
     expect(j.energyBalance).toBeLessThan(1e-10);
+  });
+});
+
+describe('fincheck solve --model 2d', () => {
+  it('--grid NXxNY solves once: grid as given, centre line and surface, no 1-D profile', async () => {
+    const r = await cli('solve', R1, '--model', '2d', '--grid', '61x9', '--json');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.model).toBe('fd-2d');
+    expect(j.grid).toEqual({ nx: 61, ny: 9 });
+    expect(j.discretizationError).toBeNull();
+    expect(j.profile).toBeUndefined();
+    expect(j.centreline).toHaveLength(61);
+    expect(j.surface).toHaveLength(61);
+    // Bi = h b / k = 2.2e-4: the section is nearly isothermal across, so centre and surface agree to
+    // ~Bi * theta = 0.013 K, and the heat rate is within a few 1e-4 of the 1-D closed form with insulated
+    // edges (P = 2w): the R1 fin per unit width, 2-D error ~Bi/6 (small-Bi asymptote of the exact series).
+    for (let i = 0; i < 61; i++) expect(Math.abs(j.centreline[i].T_degC - j.surface[i].T_degC)).toBeLessThan(0.02);
+    expect(j.energyBalance).toBeLessThan(1e-9);
+  });
+  it('rejects --grid with the 1-D model and --nodes with the 2-D model (exit 2)', async () => {
+    expect((await cli('solve', R1, '--grid', '10x10')).code).toBe(2);
+    expect((await cli('solve', R1, '--model', '2d', '--nodes', '100')).stderr).toMatch(/--nodes goes with --model 1d/);
+    expect((await cli('solve', R1, '--model', '3d')).stderr).toMatch(/--model: got "3d"; expected 1d or 2d/);
   });
 });
 
