@@ -13,7 +13,7 @@
  */
 import { factorBandedCholesky, type BandedFactor } from './bandedCholesky.js';
 import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, type Transfer1D } from './coarsen.js';
-import { applyFullStencil, toFullStencil, toStencil9, type FullStencil } from './fullStencil.js';
+import { toFullStencil, toStencil9, type FullStencil } from './fullStencil.js';
 import { factorLines, lineGaussSeidel, type LineFactors } from './lineSmoother.js';
 import type { Stencil9 } from './stencil9.js';
 
@@ -93,8 +93,7 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
     const { a: al, lines, r, work } = level;
     x.fill(0);
     lineGaussSeidel(al, lines, b, x, work, true);
-    applyFullStencil(al, x, r);
-    for (let p = 0; p < r.length; p++) r[p] = (b[p] as number) - (r[p] as number);
+    residualAfterForwardSweep(al, x, r);
     const next = levels[l + 1] as Level;
     restrict(r, next.b, level.tx as Transfer1D, level.ty as Transfer1D);
     cycle(l + 1, next.b, next.x);
@@ -110,6 +109,31 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
   };
 }
 
+/**
+ * r = b - A x right after a forward line sweep from x = 0: each column was solved exactly with its east
+ * neighbour still at zero, so only the east couplings times the (now updated) east column remain:
+ * r_p = -(E_p x_E + NE_p x_NE + SE_p x_SE).
+ */
+function residualAfterForwardSweep(a: FullStencil, x: Float64Array, r: Float64Array): void {
+  const { nodesX: nx, nodesY: ny, c } = a;
+  const se = c[6];
+  const e = c[7];
+  const ne = c[8];
+  for (let i = 0; i + 1 < nx; i++) {
+    const start = i * ny;
+    for (let j = 0; j < ny; j++) {
+      const p = start + j;
+      const q = p + ny;
+      let v = (e[p] as number) * (x[q] as number);
+      if (j > 0) v += (se[p] as number) * (x[q - 1] as number);
+      if (j + 1 < ny) v += (ne[p] as number) * (x[q + 1] as number);
+      r[p] = -v;
+    }
+  }
+  r.fill(0, (nx - 1) * ny);
+}
+
+/** Fraction of the nodes whose y couplings are below FULL_COARSENING_RATIO x their x couplings. */
 function xStrongFraction(a: FullStencil): number {
   const [sw, w, nw, s, , n, se, e, ne] = a.c;
   let count = 0;
