@@ -1,0 +1,89 @@
+/**
+ * `fincheck plot --kind profile`: the temperature along the fin for every model of the check on one
+ * chart. The reference is the solid black line; each shortcut has its own colour, dash pattern and
+ * marker (images/series-styles.ts), its heat rate, drift and verdict in the legend; the reference's tip
+ * temperature is marked. Axes in mm and °C.
+ */
+import type { Case } from '../case/types.js';
+import type { ModelProfiles } from '../compare/model-profiles.js';
+import type { CheckReport } from '../compare/types.js';
+import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
+import { withPointLabels, type PointLabel } from './point-labels.js';
+import { alongAxisLabel, faceLabel, isPin, lineLabel, modelStyle, referenceWords, sig, signedPercent, thinSeries, toMillimetres } from './labels.js';
+
+export interface ChartSize {
+  /** Canvas in CSS px (96 per inch). */
+  width: number;
+  height: number;
+}
+
+export interface CheckPlotInput {
+  case: Case;
+  report: CheckReport;
+  profiles: ModelProfiles;
+  /** The fd-2d study when it is the check's reference (the heat map reuses it). */
+  twoD: Fin2DStudy | null;
+}
+
+/** Legend note of a model: its heat rate, and for a shortcut its drift and verdict. */
+export function legendNote(input: CheckPlotInput, model: string, withHeatRate = true): string {
+  const { report } = input;
+  if (model === report.reference.model) return withHeatRate ? `Q ${sig(report.reference.heatRate_W)} W` : 'reference';
+  const row = report.models.find((m) => m.model === model);
+  if (!row) return '';
+  const drift = `drift ${signedPercent(row.drift)} (${row.verdict})`;
+  return withHeatRate ? `Q ${sig(row.heatRate_W)} W, ${drift}` : drift;
+}
+
+/** Subtitle lines shared by the profile and flux charts. */
+export function checkSubtitle(input: CheckPlotInput): string[] {
+  const { report, profiles } = input;
+  const lines = [
+    `Reference: ${referenceWords(report.reference)}.`,
+    `Shortcuts on the equivalent uniform fin; drift = (Q − Q_ref)/Q_ref; verdict at a tolerance of ±${(100 * report.tolerance).toFixed(1)} %.`,
+  ];
+  if (report.reference.model === 'fd-2d' && !isPin(input.case) && input.case.fin.profile.kind !== 'annular' && input.case.fin.edges === 'cooled') {
+    lines.push("fd-2d lines are the section with insulated side edges; the reference Q adds the edges' cooling from fd-1d.");
+  }
+  if (profiles.omitted.length > 0) lines.push(profiles.omitted.map((o) => `${o.model} not drawn: ${o.reason}.`).join(' '));
+  return lines;
+}
+
+export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineChartSpec {
+  const { case: c, report, profiles } = input;
+  const series: LineSeries[] = [];
+  for (const p of profiles.profiles) {
+    const line = thinSeries(toMillimetres(p.temperature.x_m, profiles.baseX_m), p.temperature.values);
+    series.push({ label: lineLabel(c, p.model, report.reference), x: line.x, y: line.y, note: legendNote(input, p.model), ...modelStyle(p.model, report.reference.model) });
+    if (p.faceTemperature) {
+      // The face of the 2-D solution: grey long dashes, so the mid-plane-to-face drop reads as a band.
+      const face = thinSeries(toMillimetres(p.faceTemperature.x_m, profiles.baseX_m), p.faceTemperature.values);
+      series.push({ label: faceLabel(p.model), x: face.x, y: face.y, colour: '#555555', style: 'longdash', marker: 'none' });
+    }
+  }
+  const points: PointAnnotation[] = [];
+  const labels: PointLabel[] = [];
+  const reference = profiles.profiles.find((p) => p.model === report.reference.model);
+  if (reference) {
+    const tipX = (profiles.baseX_m + profiles.length_m) * 1000;
+    const tipT = reference.tipTemperature_degC;
+    points.push({ x: tipX, y: tipT, marker: 'circle' });
+    labels.push({ panel: 0, x: tipX, y: tipT, text: `tip ${tipT.toFixed(2)} °C (${reference.model})` });
+    if (c.base.contactResistance > 0) {
+      const baseX = profiles.baseX_m * 1000;
+      const baseT = reference.temperature.values[0] as number;
+      points.push({ x: baseX, y: baseT, marker: 'square' });
+      labels.push({ panel: 0, x: baseX, y: baseT, text: `fin base ${baseT.toFixed(2)} °C (wall ${c.base.T_degC} °C behind the contact resistance)` });
+    }
+  }
+  const spec: LineChartSpec = {
+    title: `Temperature along the fin: ${c.name}`,
+    subtitle: checkSubtitle(input),
+    xLabel: alongAxisLabel(c),
+    panels: [{ yLabel: 'Temperature T (°C)', series, points }],
+    width: size.width,
+    height: size.height,
+  };
+  return withPointLabels(spec, labels);
+}
