@@ -2,13 +2,14 @@
  * map-<model>.svg/png: one shortcut's drift over the map, in %, on a diverging colour map centred on zero (ColorBrewer
  * RdBu: blue below, red above the reference), the +/- tolerance contours drawn and labelled, the case's own point
  * marked, invalid points grey, axes in the user's units (log where asked), and iso-lines of Bi and mL where they
- * help (iso-lines.ts).
+ * help (iso-lines.ts), under the case's mark.
  *
  * Colour range: +/- the largest |drift| on the map, but at least twice and at most five times the tolerance, so the
  * tolerance band always reads as the pale middle of the map and a few wild points do not wash it out (the colour
  * saturates beyond the range; the colour bar shows the range).
  */
-import { mapChart, type MapChartResult, type MapPoint as ChartPoint } from '../images/index.js';
+import { mapChart, type MapChartResult } from '../images/index.js';
+import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { appendToSvg, biotCandidates, isoLinesSvg, mLCandidates } from './iso-lines.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapModelId } from './types.js';
@@ -19,14 +20,6 @@ export function axisLabel(axis: MapAxis): string {
 
 export function percentText(fraction: number): string {
   return `${Number((fraction * 100).toPrecision(3))} %`;
-}
-
-/** The case's own point, when it lies on the map. */
-export function casePointMark(run: MapRun): ChartPoint[] {
-  const { x, y } = run.casePoint;
-  const on = (v: number, axis: MapAxis): boolean =>
-    Number.isFinite(v) && v >= (axis.values[0] as number) && v <= (axis.values[axis.values.length - 1] as number);
-  return on(x, run.x) && on(y, run.y) ? [{ x, y, label: 'this case' }] : [];
 }
 
 /** Bi and mL at the grid points (NaN where a point has no result). */
@@ -68,6 +61,7 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
   const band = everywhere
     ? `within +/-${percentText(tolerance)} at every valid point (no tolerance contour)`
     : `contours: the tolerance, ok within +/-${percentText(tolerance)}`;
+  const marks = casePointMark(run);
   const chart = mapChart({
     title: `Drift of ${model} from ${reference}: ${run.caseName}`,
     subtitle: `drift = (${model} - ${reference}) / ${reference} on the heat rate; ${band}`,
@@ -84,7 +78,7 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
       { value: tolPercent, label: `+${percentText(tolerance)}`, colour: '#000000' },
       { value: -tolPercent, label: `-${percentText(tolerance)}`, colour: '#000000', dash: '8 5' },
     ],
-    points: casePointMark(run),
+    points: marks,
     ...(invalid > 0 ? { invalidNote: `grey: ${invalid} of ${run.summary.points} points where the case is invalid (see map.csv)` } : {}),
   });
   const { biot, mL } = dimensionlessFields(run);
@@ -92,5 +86,7 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
     { name: 'Bi', values: biot, candidates: biotCandidates, dash: '2 4' },
     { name: 'mL', values: mL, candidates: mLCandidates, dash: '7 4' },
   ]);
-  return { svg: appendToSvg(chart.svg, iso), chart, driftPercent };
+  // The mark again on top of the iso-lines, which may run through it.
+  const onTop = iso === '' ? '' : caseMarkSvg(marks, chart.x, chart.y);
+  return { svg: appendToSvg(chart.svg, iso + onTop), chart, driftPercent };
 }

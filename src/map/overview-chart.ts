@@ -13,11 +13,11 @@ import { drawAxes, xAxisMargin, yAxisMargin } from '../images/axes.js';
 import { fieldImage } from '../images/field-layer.js';
 import { drawHeader, type Rect } from '../images/layout.js';
 import { drawLegend, legendSize, type LegendEntry } from '../images/legend.js';
-import { markerElement } from '../images/markers.js';
 import { dashArray, okabeItoColours, type LineStyle } from '../images/series-styles.js';
-import { el, polylinePathData, svgDocument, textEl } from '../images/svg.js';
-import { defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/theme.js';
-import { axisLabel, casePointMark, percentText } from './model-chart.js';
+import { el, polylinePathData, svgDocument } from '../images/svg.js';
+import { defaultHeight, defaultWidth, gap, ink } from '../images/theme.js';
+import { caseMarkSvg, casePointMark } from './case-mark.js';
+import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapModelId } from './types.js';
 
@@ -30,10 +30,13 @@ export interface OverviewChart {
 
 const styles: readonly LineStyle[] = ['solid', 'dashed', 'dotted', 'dashdot', 'longdash', 'dashdotdot'];
 
-/** s = tolerance - |drift| of one shortcut at the grid points; -tolerance where it has no value. */
+/**
+ * s = tolerance - |drift| of one model at the grid points; where it has no value, a large negative number, so that
+ * the outline passes through the last point with a value (where the grey of the invalid cells begins).
+ */
 export function safetyMargin(run: MapRun, model: MapModelId): Float64Array {
   const tolerance = run.job.check.tolerance;
-  const s = new Float64Array(run.points.length).fill(-tolerance);
+  const s = new Float64Array(run.points.length).fill(-1e6);
   for (const p of run.points) {
     if (isPointError(p)) continue;
     const m = p.models.find((r) => r.model === model);
@@ -50,7 +53,7 @@ export function safeRegionPath(s: Float64Array, px: Float64Array, py: Float64Arr
   const nj = ny + 2;
   const sx = new Float64Array(ni * nj);
   const sy = new Float64Array(ni * nj);
-  const v = new Float64Array(ni * nj).fill(-1);
+  const v = new Float64Array(ni * nj).fill(-1e6);
   for (let j = 0; j < nj; j++) {
     const jj = Math.min(Math.max(j - 1, 0), ny - 1);
     for (let i = 0; i < ni; i++) {
@@ -133,14 +136,7 @@ export function overviewChart(run: MapRun): OverviewChart {
     layers.push(el('path', { d, fill: entry.colour, 'fill-opacity': 0.07, 'fill-rule': 'evenodd', stroke: 'none' }));
     layers.push(el('path', { d, fill: 'none', stroke: entry.colour, 'stroke-width': 2.5, 'stroke-dasharray': entry.dash, 'stroke-linejoin': 'round' }));
   });
-  for (const p of casePointMark(run)) {
-    const cx = project(xAxis.scale, p.x);
-    const cy = project(yAxis.scale, p.y);
-    layers.push(markerElement('circle', cx, cy, 14, '#000000', true), markerElement('circle', cx, cy, 6, '#ffffff', true));
-    const attrs = { x: cx + 12, y: cy - 10, 'font-size': fontSize.annotation, 'font-weight': 'bold' };
-    layers.push(textEl(p.label ?? '', { ...attrs, fill: 'none', stroke: ink.halo, 'stroke-width': 3, 'stroke-linejoin': 'round' }));
-    layers.push(textEl(p.label ?? '', { ...attrs, fill: ink.text }));
-  }
+  layers.push(caseMarkSvg(casePointMark(run), xAxis.scale, yAxis.scale));
   const body: string[] = [
     ...header.elements,
     el('defs', {}, el('clipPath', { id: 'overview-clip' }, el('rect', { x: plot.x, y: plot.y, width: plot.width, height: plot.height }))),
