@@ -1,0 +1,78 @@
+/**
+ * What the nonlinear fd-1d does when Newton's method alone is not enough: continuation in the
+ * nonlinearity (Allgower & Georg 1990, Numerical Continuation Methods [from memory]) and, when that
+ * fails too, a SolverError (exit code 3 of the output contract) whose message says what to change.
+ * Step limits are forced small here to reach these paths on ordinary cases; the inputs are invented.
+ */
+import { describe, expect, test } from 'vitest';
+import { SolverError } from '../../src/errors.js';
+import { solveNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { AMBIENT_DEGC, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
+
+// Boiling-like law n = 2 on a long plate fin (mL ~ 14): from the whole fin at the base temperature,
+// plain Newton needs 10 steps on this grid.
+const boiling = nonlinearCase({
+  profile: plateFin.profile(2),
+  k: constantK(200),
+  h: { kind: 'power', base: 10, exponent: 2 },
+  tip: { kind: 'adiabatic' },
+  base_degC: AMBIENT_DEGC + 60,
+});
+
+function solverError(run: () => unknown): SolverError {
+  try {
+    run();
+  } catch (error) {
+    if (error instanceof SolverError) return error;
+    throw error;
+  }
+  throw new Error('expected a SolverError');
+}
+
+describe('continuation', () => {
+  test('with at most 6 Newton steps per attempt, continuation reaches the same solution', () => {
+    const free = solveNonlinearFin1D(boiling, { nodes: 2001, nested: false });
+    expect(free.newton.iterations).toBeGreaterThan(6);
+    expect(free.newton.continuationStages).toBe(0);
+    const capped = solveNonlinearFin1D(boiling, { nodes: 2001, nested: false, maxIterations: 6 });
+    expect(capped.newton.continuationStages).toBeGreaterThan(0);
+    // Both converged to a heat-rate change <= 1e-12: they agree to a few 1e-12.
+    expect(Math.abs(relative(capped.heatRate, free.heatRate))).toBeLessThan(1e-11);
+    expect(capped.newton.residual).toBeLessThanOrEqual(1e-12);
+  });
+});
+
+describe('solver failure: SolverError saying what to change', () => {
+  test('power law, radiation and k(T) at one Newton step per attempt', () => {
+    const c = nonlinearCase({
+      profile: plateFin.profile(0.3),
+      k: { kind: 'table', T_degC: Float64Array.from([0, 200]), k: Float64Array.from([210, 170]) },
+      h: { kind: 'power', base: 10, exponent: 2 },
+      tip: { kind: 'adiabatic' },
+      base_degC: AMBIENT_DEGC + 60,
+      emissivity: 0.9,
+    });
+    const error = solverError(() => solveNonlinearFin1D(c, { nodes: 201, nested: false, maxIterations: 1 }));
+    expect(error.exitCode).toBe(3);
+    expect(error.message).toMatch(/did not converge on 201 nodes/);
+    expect(error.message).toMatch(/relative residual \d\.\d\de[-+]\d+/);
+    expect(error.message).toMatch(/lower the exponent of the power-law h \(now 2\)/);
+    expect(error.message).toMatch(/give a smaller emissivity \(now 0\.9\)/);
+    expect(error.message).toMatch(/smoother conductivity table \(k runs from 170 to 210 W\/\(m\*K\)\)/);
+  });
+
+  test('negative exponent on a fin that reaches the fluid temperature: no silent answer', () => {
+    // n = -1/2: the exact solution reaches θ = 0 at mL = sqrt(2 (n + 2)) / (-n) = 3.46 (sheet §6a,
+    // Sen & Trinh 1986 profile), where h = base (θ/θ_b)^n is infinite; this fin is mL = 14 long.
+    const c = nonlinearCase({
+      profile: plateFin.profile(2),
+      k: constantK(200),
+      h: { kind: 'power', base: 10, exponent: -0.5 },
+      tip: { kind: 'adiabatic' },
+      base_degC: AMBIENT_DEGC + 60,
+    });
+    const error = solverError(() => solveNonlinearFin1D(c, { nodes: 401 }));
+    expect(error.exitCode).toBe(3);
+    expect(error.message).toMatch(/use an exponent closer to 0 or a shorter fin \(now -0\.5/);
+  });
+});
