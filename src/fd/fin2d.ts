@@ -14,7 +14,7 @@ import { assembleConduction2D } from './assemble2d.js';
 import { buildSystem2D, coefficientAt, discretizeBoundaries, lumpedIntegral } from './assemble2dBoundary.js';
 import { fin2dProblem, type Fin2DProblem } from './fin2dCase.js';
 import { heatRates2D } from './fin2dHeat.js';
-import { autoSolver2D } from './sparse/autoSolver.js';
+import { prepareSolver2D, type SolverMethod } from './sparse/autoSolver.js';
 import type { Solver2D } from './sparse/stencil9.js';
 
 /**
@@ -30,8 +30,10 @@ export interface Fin2DOptions {
   nx: number;
   /** Grid nodes across the half-thickness (or radius) (>= 2). */
   ny: number;
-  /** Linear solver; default: chosen by grid shape (banded Cholesky or multigrid-preconditioned CG). */
+  /** Linear solver; default: `method`. */
   solver?: Solver2D;
+  /** Built-in solver when `solver` is not given: chosen by grid shape by default ('auto'). */
+  method?: SolverMethod | 'auto';
   /** Largest/smallest cell length along the fin, smallest at the base (default DEFAULT_GRADING.base; 1 = uniform). */
   baseGrading?: number;
   /** Largest/smallest cell height across, smallest at the face (default DEFAULT_GRADING.face; 1 = uniform). */
@@ -80,6 +82,8 @@ export interface Fin2DResult {
   biot: number;
   /** True when an infinite fin was cut and closed by its exact slowest mode (see fin2dCase.ts). */
   truncatedInfinite: boolean;
+  /** The linear solver that ran ('custom' when the caller passed one). */
+  solver: SolverMethod | 'custom';
 }
 
 export function solveFin2D(c: Case, opts: Fin2DOptions): Fin2DResult {
@@ -96,7 +100,14 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   const K = assembleConduction2D(grid, problem.k);
   const terms = discretizeBoundaries(grid, problem.conditions);
   const system = buildSystem2D(K, terms);
-  const field = (opts.solver ?? autoSolver2D)(system);
+  let method: SolverMethod | 'custom' = 'custom';
+  let field: Float64Array;
+  if (opts.solver !== undefined) field = opts.solver(system);
+  else {
+    const prepared = prepareSolver2D(system, opts.method ?? 'auto');
+    method = prepared.method;
+    field = prepared.solve(system);
+  }
   const rates = heatRates2D(K, terms, field);
   const depth = grid.depth;
   const heatRate = rates.base * depth;
@@ -143,6 +154,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     surface: line(ny - 1),
     biot: (hBase * problem.section.halfSize(0)) / problem.k,
     truncatedInfinite: problem.truncatedInfinite,
+    solver: method,
   };
 }
 

@@ -40,18 +40,30 @@ export interface Fin2DProblem {
 /** Half-thicknesses (radii) kept before the cut of an infinite fin. */
 export const INFINITE_CUT_HALF_SIZES = 20;
 
+/**
+ * Why the 2-D model cannot solve this case, or null when it can (for `--reference auto`: fd-2d whenever
+ * the case allows it).
+ */
+export function fin2dUnsupported(c: Case): string | null {
+  const { convection, material } = c;
+  if (material.k.kind !== 'constant') return 'temperature-dependent conductivity is not modelled in 2-D';
+  if (convection.h.kind === 'power') return 'the power-law h (theta-dependent) is not modelled in 2-D';
+  if (convection.emissivity > 0) return 'radiation from the faces is not modelled in 2-D';
+  if (convection.tip.kind === 'infinite') {
+    const kind = c.fin.profile.kind;
+    if ((kind !== 'rectangular' && kind !== 'pin') || convection.h.kind !== 'uniform') {
+      return 'an infinite tip needs a uniform fin (rectangular or pin) with a uniform h';
+    }
+  }
+  return null;
+}
+
 export function fin2dProblem(c: Case): Fin2DProblem {
+  const unsupported = fin2dUnsupported(c);
+  if (unsupported !== null) throw new UsageError(`fd-2d: ${unsupported}; use the 1-D model`);
   const { convection, material, base } = c;
-  if (material.k.kind !== 'constant') {
-    throw new UsageError('fd-2d: temperature-dependent conductivity is not modelled in 2-D; use the 1-D model');
-  }
+  if (material.k.kind !== 'constant' || convection.h.kind === 'power') throw new Error('fin2dProblem: unreachable');
   const k = material.k.k;
-  if (convection.h.kind === 'power') {
-    throw new UsageError('fd-2d: the power-law h (theta-dependent) is not modelled in 2-D; use the 1-D model');
-  }
-  if (convection.emissivity > 0) {
-    throw new UsageError('fd-2d: radiation from the faces is not modelled in 2-D; use the 1-D model');
-  }
   const h: LinearH = convection.h;
   const thetaBase = base.T_degC - convection.ambient_degC;
   const baseCondition: BoundaryCondition2D =
@@ -75,10 +87,7 @@ export function fin2dProblem(c: Case): Fin2DProblem {
       tip = { kind: 'fixed', theta: t.T_degC - convection.ambient_degC };
       break;
     case 'infinite': {
-      const kind = c.fin.profile.kind;
-      if ((kind !== 'rectangular' && kind !== 'pin') || h.kind !== 'uniform') {
-        throw new UsageError('fd-2d: an infinite tip needs a uniform fin (rectangular or pin) with a uniform h');
-      }
+      if (h.kind !== 'uniform') throw new Error('fin2dProblem: unreachable (checked by fin2dUnsupported)');
       const b = section.halfSize(0);
       const lambda1 = section.kind === 'pin' ? firstPinEigenvalue((h.h * b) / k) : firstPlateEigenvalue((h.h * b) / k);
       const cut = INFINITE_CUT_HALF_SIZES * b;

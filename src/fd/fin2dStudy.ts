@@ -14,6 +14,7 @@ import type { Case } from '../case/types.js';
 import { fin2dProblem, type Fin2DProblem } from './fin2dCase.js';
 import { DEFAULT_GRADING, solveFin2DProblem, type Fin2DResult } from './fin2d.js';
 import { richardsonGci, type RefinementStudy } from './refinement.js';
+import type { SolverMethod } from './sparse/autoSolver.js';
 import type { Solver2D } from './sparse/stencil9.js';
 
 export interface Fin2DStudyOptions {
@@ -27,6 +28,7 @@ export interface Fin2DStudyOptions {
   baseGrading?: number;
   faceGrading?: number;
   solver?: Solver2D;
+  method?: SolverMethod | 'auto';
 }
 
 export interface Fin2DGridValue {
@@ -74,6 +76,7 @@ export function studyFin2DProblem(problem: Fin2DProblem, opts: Fin2DStudyOptions
       baseGrading: opts.baseGrading ?? DEFAULT_GRADING.base,
       faceGrading: opts.faceGrading ?? DEFAULT_GRADING.face,
       ...(opts.solver ? { solver: opts.solver } : {}),
+      ...(opts.method ? { method: opts.method } : {}),
     });
     results.push(r);
     values.push({ nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance });

@@ -89,6 +89,9 @@ export function sectionOf(profile: Profile): Section2D {
       const halfSize = (s: number): number => interpolate(x, size, s) / 2;
       const breakpoints = Array.from(x);
       const sharpTip = (size[n - 1] as number) === 0;
+      for (let k = 0; k < n - 1; k++) {
+        if (!((size[k] as number) > 0)) throw new RangeError(`sectionOf: tabulated size must be > 0 before the tip (point ${k})`);
+      }
       if (profile.shape === 'pin') return { kind: 'pin', length: L, baseX: 0, halfSize, breakpoints, sharpTip, tipClustering: 1, depth: twoPi };
       if (profile.width === undefined) throw new RangeError('sectionOf: a tabulated straight fin needs a width');
       return { kind: 'planar', length: L, baseX: 0, halfSize, breakpoints, sharpTip, tipClustering: 1, depth: 2 * profile.width };

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { Profile, TipCondition } from '../../src/case/types.js';
+import type { Case, Profile, TipCondition } from '../../src/case/types.js';
+import { UsageError } from '../../src/errors.js';
 import { solveFin2D } from '../../src/fd/fin2d.js';
+import { fin2dUnsupported } from '../../src/fd/fin2dCase.js';
 import { fieldViews } from '../../src/fd/fin2dField.js';
 import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { BASE, finCase, THETA_B } from './cases.js';
@@ -142,5 +144,24 @@ describe('the 2-D field for images', () => {
     expect(v.y.get(20, 6)).toBeCloseTo(0.001, 15);
     expect(v.theta.get(20, 0) + 25).toBeCloseTo(r.tipTemperature_degC, 12);
     expect(v.theta.get(0, 3)).toBeCloseTo(THETA_B, 12); // base: fixed temperature
+  });
+});
+
+describe('what the 2-D model does not solve', () => {
+  const base = finCase({ kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, 200, { kind: 'uniform', h: 50 }, { kind: 'adiabatic' });
+  it.each([
+    ['temperature-dependent k', { ...base, material: { name: 'custom', k: { kind: 'table', T_degC: Float64Array.of(20, 200), k: Float64Array.of(200, 190) }, source: 'test' } }],
+    ['power-law h', { ...base, convection: { ...base.convection, h: { kind: 'power', base: 10, exponent: 0.25 } } }],
+    ['radiation', { ...base, convection: { ...base.convection, emissivity: 0.9 } }],
+    ['infinite tip on a tapered fin', { ...base, fin: { ...base.fin, profile: { kind: 'triangular', length: 0.02, baseThickness: 0.002, width: 0.05 } }, convection: { ...base.convection, tip: { kind: 'infinite' } } }],
+  ] as [string, Case][])('%s: says why, and solveFin2D refuses with a usage error', (_, c) => {
+    expect(fin2dUnsupported(c)).toMatch(/2-D|infinite/);
+    expect(() => solveFin2D(c, { nx: 11, ny: 5 })).toThrow(UsageError);
+  });
+
+  it('a supported case reports the solver that ran', () => {
+    expect(fin2dUnsupported(base)).toBeNull();
+    expect(solveFin2D(base, { nx: 101, ny: 9 }).solver).toBe('banded-cholesky');
+    expect(solveFin2D(base, { nx: 101, ny: 9, method: 'mg-pcg' }).solver).toBe('mg-pcg');
   });
 });
