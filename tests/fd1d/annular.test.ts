@@ -60,6 +60,16 @@ describe.each(CONVECTIVE_TIP)('annular, convective rim, h = $h, r2 = $r2 (sheet 
       k: row.k, h: { kind: 'uniform', h: row.h }, tip: { kind: 'convective', h: null }, thetaBase,
     }),
   );
+  test('observed order 2 from four grids', () => {
+    const cells = [50, 100, 200, 400];
+    const fin = linearCase({
+      profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
+      k: row.k, h: { kind: 'uniform', h: row.h }, tip: { kind: 'convective', h: null }, thetaBase,
+    });
+    const errors = cells.map((n) => solveFin1D(fin, { nodes: n + 1 }).heatRate / (row.qPerK * thetaBase) - 1);
+    // Formal order 2; ±0.1 for a fitted slope in the asymptotic range.
+    expect(Math.abs(fitObservedOrder(cells.map((n) => (row.r2 - row.r1) / n), errors).order - 2)).toBeLessThan(0.1);
+  });
   test('heat rate and efficiency', () => {
     // 1e-6: default-grid accuracy target; the extrapolated value within 3e-9 (10-digit table values).
     expect(Math.abs(run.result.heatRate / (row.qPerK * thetaBase) - 1)).toBeLessThan(1e-6);

@@ -11,7 +11,8 @@
  *   table number], with β = h_tip/(mk): q = M θ_b (sinh mL + β cosh mL)/(cosh mL + β sinh mL).
  */
 import { describe, expect, test } from 'vitest';
-import { studyFin1D } from '../../src/fd/fin1d.js';
+import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
+import { fitObservedOrder } from '../../src/fd/refinement.js';
 import { baseBoundary, tipBoundary } from '../../src/fd/boundary.js';
 import { AMBIENT_DEGC, linearCase } from './support/cases.js';
 
@@ -42,6 +43,13 @@ describe.each([1e-4, 1.5e-4, 1e-3])('contact resistance R\'\' = %d m^2 K/W (seri
     expect(Math.abs((run.result.theta[0] as number) / rootExcess - 1)).toBeLessThan(1e-6);
     // Efficiency stays referred to the wall temperature: η = q / (h P L θ_b) (definitions of the contract).
     expect(Math.abs(run.result.efficiency / (exact / (H * PERIMETER * LENGTH * THETA_BASE)) - 1)).toBeLessThan(1e-6);
+  });
+  test('observed order 2 from four grids', () => {
+    const fin = linearCase({ profile, k: K, h: { kind: 'uniform', h: H }, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE, contactResistance: resistance });
+    const cells = [50, 100, 200, 400];
+    const errors = cells.map((n) => solveFin1D(fin, { nodes: n + 1 }).heatRate / exact - 1);
+    // Formal order 2; ±0.1 for a fitted slope in the asymptotic range.
+    expect(Math.abs(fitObservedOrder(cells.map((n) => LENGTH / n), errors).order - 2)).toBeLessThan(0.1);
   });
 });
 

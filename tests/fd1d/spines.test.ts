@@ -88,6 +88,10 @@ describe('observed order of the heat rate (default grading)', () => {
     const eta = CONE[M_L.indexOf(mL)] as number;
     expect(Math.abs(order((nodes) => solveFin1D(fin, { nodes }).efficiency, eta) - 2)).toBeLessThan(0.1);
   });
+  test('truncated cone τ = 0.5, mL = 1', () => {
+    const fin = caseFor({ kind: 'conical-pin', length: L, baseDiameter: BASE_DIAMETER, tipDiameter: BASE_DIAMETER / 2 }, 1);
+    expect(Math.abs(order((nodes) => solveFin1D(fin, { nodes }).efficiency, 0.7958160834) - 2)).toBeLessThan(0.1);
+  });
   test.each([0.25, 1, 3])('concave parabolic spine, mL = %d', (mL) => {
     const eta = CONCAVE_SPINE[M_L.indexOf(mL)] as number;
     expect(Math.abs(order((nodes) => solveFinProblem1D(parabolicSpine(2, mL), { nodes }).efficiency, eta) - 2)).toBeLessThan(0.1);
