@@ -20,8 +20,8 @@
  *   the interval's mean conductivity, not k at the mean temperature), stays a single flux per face
  *   (conservative: the energy balance holds to round-off), keeps the scheme second order, and makes
  *   the conduction operator linear in U, so the Newton matrix is the linear fin matrix scaled by
- *   columns (nonlinear-newton.ts). For k linear in T it gives the heat rate of the exact solution
- *   of Aziz & Enamul-Huq (1975, J. Heat Transfer 97 [from memory]) to second order in Δx.
+ *   columns (nonlinear-newton.ts). For k linear in T (the fin of Aziz & Enamul-Huq 1975, J. Heat
+ *   Transfer 97 [from memory]) the heat rate converges at order 2 to the first-integral solution.
  * - face losses lumped at the nodes over each control volume, as in the linear scheme
  *   (nonlinear-losses.ts); boundary conditions in nonlinear-boundary.ts (exact continuation for the
  *   infinite tip).
@@ -30,12 +30,16 @@
  * residual <= 1e-12 and the heat-rate change <= 1e-12 (or its round-off floor on very fine grids).
  * A fine grid starts from the linear interpolation of the solution on a grid 8 times coarser
  * (nested iteration), which cuts the Newton steps on the fine grid to about three.
- * For a linear case (n = 0, ε = 0, constant k) the first Newton step from θ = 0 is the linear
- * solver's own system, so the result is the linear solver's, bit for bit in θ and the heat rate.
+ * For a linear case (n = 0, ε = 0, constant k) the first Newton step from the base temperature is
+ * the linear solver's own drop system, so the result is the linear solver's to round-off (bit for
+ * bit with an adiabatic or fixed-temperature tip and no contact resistance).
  * A case that does not converge raises SolverError (exit code 3) saying what to change; never a
  * silent answer.
  *
- * Efficiency and effectiveness: nonlinear1d-heat.ts. Refinement study: Celik et al. 2008 (refinement.ts).
+ * Efficiency (nonlinear1d-heat.ts): Q / Q_ideal, Q_ideal = the heat of the same fin with every cooled
+ * surface (the tip too when convective) at the base temperature, with the h and the radiation the base
+ * temperature gives there. Effectiveness: Q / (heat of the bare base area at the base temperature,
+ * convection and radiation). Refinement study: Celik et al. 2008 (refinement.ts).
  */
 import type { Case } from '../case/types.js';
 import { buildMesh1D } from '../mesh/grid1d.js';
