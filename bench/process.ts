@@ -22,6 +22,7 @@ const CPU_REPORTER = 'data:text/javascript,process.on("exit",()=>{const u=proces
 
 interface CliRun {
   status: number | null;
+  stdout: string;
   stderr: string;
   /** The child's CPU time, ms (null when it did not report). */
   cpuMs: number | null;
@@ -33,12 +34,19 @@ function runCli(args: readonly string[]): CliRun {
   const match = /\nbench-cpu-us (\d+)\n/.exec(r.stderr);
   return {
     status: r.status,
+    stdout: r.stdout,
     stderr: r.stderr.replace(/\nbench-cpu-us \d+\n/, ''),
     cpuMs: match ? Number(match[1]) / 1000 : null,
   };
 }
 
-async function timeCli(label: string, args: readonly string[], target: string, limitMs: number): Promise<BenchRow> {
+/** "reference fd-1d" from the check report's "Reference (fd-1d): ..." line, when there is one. */
+function referenceModel(stdout: string): string {
+  const match = /Reference \((fd-[^)]+)\)/.exec(stdout);
+  return match ? `; reference model used: ${match[1]}` : '';
+}
+
+async function timeCli(label: string, args: readonly string[], target: string, limitMs: number, probe: CliRun): Promise<BenchRow> {
   const cpu: number[] = [];
   const t = await timeTask(
     label,
@@ -59,7 +67,7 @@ async function timeCli(label: string, args: readonly string[], target: string, l
     measured: formatMs(t.medianMs),
     cpu: cpuText(childCpu),
     verdict: atMost(t.medianMs, limitMs),
-    note: `${t.samples} child processes (spawnSync), min ${formatMs(t.minMs)}, max ${formatMs(t.maxMs)}; CPU = the child's own (user + system)`,
+    note: `${t.samples} child processes (spawnSync), min ${formatMs(t.minMs)}, max ${formatMs(t.maxMs)}; CPU = the child's own (user + system)${referenceModel(probe.stdout)}`,
   };
 }
 
@@ -70,7 +78,7 @@ export async function benchProcess(): Promise<BenchRow[]> {
   if (first.status !== 0) {
     rows.push(skipped(AREA, `fincheck check ${DEMO_CASE}`, '<= 0.5 s', `exit ${first.status}: ${first.stderr.trim()}`));
   } else {
-    rows.push(await timeCli(`fincheck check ${DEMO_CASE} (whole process)`, check, '<= 0.5 s', 500));
+    rows.push(await timeCli(`fincheck check ${DEMO_CASE} (whole process)`, check, '<= 0.5 s', 500, first));
   }
 
   const check2d = ['check', DEMO_CASE, '--reference', '2d'];
@@ -80,7 +88,7 @@ export async function benchProcess(): Promise<BenchRow[]> {
     const message = probe.stderr.trim().split('\n')[0] ?? '';
     rows.push(skipped(AREA, item2d, '<= 1.5 s', `not wired yet: exit ${probe.status}, "${message}"`));
   } else {
-    rows.push(await timeCli(item2d, check2d, '<= 1.5 s', 1500));
+    rows.push(await timeCli(item2d, check2d, '<= 1.5 s', 1500, probe));
   }
   return rows;
 }
