@@ -6,7 +6,8 @@
  * Convergence test: |r|_1 <= tolerance x (sum |rhs| over the coupled rows), the scale of the heat flows,
  * so that the energy balance of the result (which is the sum of the residual over the free nodes) is at
  * that level too. The recursive residual of CG drifts from the true one; the true residual (difference
- * form when the system carries its row sums) is checked at the end, and CG restarted on it if needed.
+ * form when the system carries its row sums) is checked at the end, and CG restarted on it while that
+ * helps (a restart that does not halve it has met round-off).
  */
 import { SolverError } from '../../errors.js';
 import { buildMultigrid, type Multigrid } from './multigrid.js';
@@ -25,9 +26,20 @@ export interface PcgReport {
   levels: { nodesX: number; nodesY: number }[];
 }
 
-const DEFAULT_TOLERANCE = 1e-13;
+/**
+ * 1e-12: the energy balance of fin solutions was measured at up to ~30x the relative residual (thin plate,
+ * 2001 x 51: 2.6e-10 at 1e-11, 2.8e-11 at 1e-12), so 1e-12 keeps it well below 1e-9 (11 iterations
+ * instead of 14 for 1e-13).
+ */
+const DEFAULT_TOLERANCE = 1e-12;
 const DEFAULT_MAX_ITERATIONS = 100;
 const RESTARTS = 3;
+/**
+ * A residual still above this after the restarts is a failure. Between the tolerance and this bound the
+ * solve is accepted when the restarts stagnate: the round-off floor of grids whose couplings differ by
+ * ~1e6 (cusped tips), about 1e-10, which the result's energy balance then reports.
+ */
+const FAILURE = 1e-7;
 
 export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigrid = buildMultigrid(system.matrix)): { x: Float64Array; report: PcgReport } {
   const tolerance = opts.tolerance ?? DEFAULT_TOLERANCE;
@@ -45,9 +57,10 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
   };
   let iterations = 0;
   let relative = norm1(r) / scale;
-  for (let restart = 0; restart <= RESTARTS && relative > tolerance; restart++) {
-    // CG on A d = r (r the true residual), x += d.
-    const d = new Float64Array(n);
+  let previous = Infinity;
+  for (let restart = 0; restart <= RESTARTS && relative > tolerance && relative < 0.5 * previous; restart++) {
+    previous = relative;
+    // CG on A d = r (r the true residual), accumulating d into x.
     mg.apply(r, z);
     p.set(z);
     let rz = dot(r, z);
@@ -56,7 +69,7 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
       const alpha = rz / dot(p, q);
       let size = 0;
       for (let k = 0; k < n; k++) {
-        d[k] = (d[k] as number) + alpha * (p[k] as number);
+        x[k] = (x[k] as number) + alpha * (p[k] as number);
         const rk = (r[k] as number) - alpha * (q[k] as number);
         r[k] = rk;
         size += Math.abs(rk);
@@ -69,12 +82,11 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
       rz = rzNext;
       for (let k = 0; k < n; k++) p[k] = (z[k] as number) + beta * (p[k] as number);
     }
-    for (let k = 0; k < n; k++) x[k] = (x[k] as number) + (d[k] as number);
     residual(system, x, r);
     relative = norm1(r) / scale;
   }
   const report = { iterations, relativeResidual: relative, levels: mg.levels };
-  if (!(relative <= 100 * tolerance)) {
+  if (!(relative <= FAILURE)) {
     throw new SolverError(
       `multigrid-preconditioned CG did not converge: relative residual ${relative.toExponential(2)} after ${iterations} iterations ` +
         `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid; try another grid (e.g. fewer nodes across) or the direct solver`,
