@@ -1,6 +1,7 @@
 /**
  * Timing of the tridiagonal solvers and of the fd-1d study (not a test: run with
- * `npx tsx tests/fd1d/bench-tridiagonal.ts`). Prints medians of repeated runs.
+ * `npx tsx tests/fd1d/bench-tridiagonal.ts`). Prints medians of repeated runs: wall time and CPU
+ * time of this process (the CPU time excludes waiting when other processes share the cores).
  *
  * Systems: the assembled fin system (R1 fin of the reference sheet §1a, drop form) with 1e6 nodes,
  * and 1e4 solves of a 1000-node system, into preallocated arrays (the `...Into` variants).
@@ -24,6 +25,19 @@ function finSystem(nodes: number): RowSumSystem {
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[values.length >> 1] as number;
 
+/** Wall and CPU milliseconds of one call. */
+function timed(run: () => void): { wall: number; cpu: number } {
+  const cpu = process.cpuUsage();
+  const start = performance.now();
+  run();
+  const wall = performance.now() - start;
+  const used = process.cpuUsage(cpu);
+  return { wall, cpu: (used.user + used.system) / 1000 };
+}
+
+const report = (runs: { wall: number; cpu: number }[], digits: number) =>
+  `median ${median(runs.map((r) => r.wall)).toFixed(digits)} ms (CPU ${median(runs.map((r) => r.cpu)).toFixed(digits)} ms)`;
+
 type Into = (system: TridiagonalSystem, solution: Float64Array, work: Float64Array) => Float64Array;
 const SOLVERS: [string, Into][] = [
   ['thomasInto (one-sided)', thomasInto],
@@ -40,19 +54,13 @@ const smallWork = new Float64Array(1000);
 
 for (const [name, solve] of SOLVERS) {
   for (let warm = 0; warm < 5; warm++) solve(big, solution, work);
-  const times: number[] = [];
-  for (let run = 0; run < 31; run++) {
-    const start = performance.now();
-    solve(big, solution, work);
-    times.push(performance.now() - start);
-  }
-  const batches: number[] = [];
-  for (let run = 0; run < 7; run++) {
-    const start = performance.now();
-    for (let k = 0; k < 10_000; k++) solve(small, smallSolution, smallWork);
-    batches.push(performance.now() - start);
-  }
-  console.log(`${name.padEnd(44)} 1e6 nodes: median ${median(times).toFixed(2)} ms | 1e4 x 1000 nodes: median ${median(batches).toFixed(1)} ms`);
+  const singles = Array.from({ length: 31 }, () => timed(() => solve(big, solution, work)));
+  const batches = Array.from({ length: 7 }, () =>
+    timed(() => {
+      for (let k = 0; k < 10_000; k++) solve(small, smallSolution, smallWork);
+    }),
+  );
+  console.log(`${name.padEnd(44)} 1e6 nodes: ${report(singles, 2)} | 1e4 x 1000 nodes: ${report(batches, 1)}`);
 }
 
 const fin = linearCase({
@@ -60,10 +68,5 @@ const fin = linearCase({
   k: 180, h: { kind: 'uniform', h: 40 }, tip: { kind: 'convective', h: null }, thetaBase: 60,
 });
 for (let warm = 0; warm < 20; warm++) studyFin1D(fin);
-const studies: number[] = [];
-for (let run = 0; run < 51; run++) {
-  const start = performance.now();
-  studyFin1D(fin);
-  studies.push(performance.now() - start);
-}
-console.log(`studyFin1D (default grids 1001/2001/4001 nodes): median ${median(studies).toFixed(2)} ms`);
+const studies = Array.from({ length: 51 }, () => timed(() => studyFin1D(fin)));
+console.log(`studyFin1D (default grids 2001/4001/8001 nodes): ${report(studies, 2)}`);

@@ -7,7 +7,8 @@ import type { Fin1DStudy } from '../../../src/fd/fin1d.js';
 
 /**
  * Tolerances:
- * - finest grid within 1e-6: the default study's accuracy target (4000 cells, second order);
+ * - finest grid within 1e-6: the brief's accuracy target for the default grids (8000 cells; smooth
+ *   fins reach 1e-7, the graded parabolic profiles ~1e-7 at mL = 3);
  * - the GCI of Celik et al. (2008) must bound the true relative error of the finest grid, up to the
  *   table's rounding (values to 10 decimals: 5e-11 absolute);
  * - the extrapolated efficiency within 3e-9: the tables give 10 significant digits (<= 5e-10
