@@ -6,8 +6,10 @@
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';
 
+/** A fraction in %, without a minus sign on a value that rounds to zero. */
 function pct(fraction: number): string {
-  return `${(100 * fraction).toFixed(Math.abs(fraction) < 0.1 ? 2 : 1)} %`;
+  const text = (100 * fraction).toFixed(Math.abs(fraction) < 0.1 ? 2 : 1);
+  return `${/^-0\.0*$/.test(text) ? text.slice(1) : text} %`;
 }
 
 function value(v: number, axis: MapAxis): string {
@@ -47,7 +49,7 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     lines.push('');
     const where = `${run.x.key} = ${value(own.x, run.x)}, ${run.y.key} = ${value(own.y, run.y)}`;
     lines.push(`This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot.toPrecision(3)}, mL = ${own.mL.toPrecision(3)}`);
-    for (const m of own.models) lines.push(`  ${pad(m.model, 14)}drift ${pad(pct(m.drift), 10)}${m.verdict}`);
+    for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(pct(m.drift), 10)}${m.verdict}`);
   }
   if (summary.errors > 0) {
     lines.push('');

@@ -1,6 +1,6 @@
 /**
  * Small parts of the map: the solving order (every point once, consecutive points grid neighbours), the choice of
- * Bi / mL iso-line levels, all-or-nothing file writing. (CSV quoting is checked on a real error cell in
+ * Bi / mL iso-line levels, all-or-nothing file writing, the progress bar. (CSV quoting is checked on a real error cell in
  * map-vs-check.test.ts.)
  */
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { biotCandidates, isoLevels, mLCandidates } from '../../src/map/iso-lines.js';
 import { serpentineSchedule } from '../../src/map/schedule.js';
+import { progressBar } from '../../src/map/progress.js';
 import { StagedFiles } from '../../src/map/staged-files.js';
 import { tmp } from './support.js';
 
@@ -73,5 +74,23 @@ describe('staged files', () => {
     second.stage('new.csv', 'new');
     second.discard();
     expect(readdirSync(dir)).toEqual(['old.csv']);
+  });
+});
+
+describe('progress bar', () => {
+  it('writes nothing when stderr is not a terminal', () => {
+    let written = '';
+    const bar = progressBar((t) => (written += t), false, 100);
+    bar.update(50);
+    bar.finish();
+    expect(written).toBe('');
+  });
+  it('on a terminal: one redrawn line with the share done, cleared at the end', () => {
+    let written = '';
+    const bar = progressBar((t) => (written += t), true, 4);
+    bar.update(4);
+    expect(written).toMatch(/^\rmap \[#{28}\] 100 % {2}4\/4 points\u001b\[K$/);
+    bar.finish();
+    expect(written.endsWith('\r\u001b[2K')).toBe(true);
   });
 });
