@@ -6,6 +6,8 @@ import { registerSolve } from './commands/solve.js';
 import { registerMaterials } from './commands/materials.js';
 import { registerSchema } from './commands/schema.js';
 import { registerDemo } from './commands/demo.js';
+import { registerPlot } from './commands/plot.js';
+import { registerReport } from './commands/report.js';
 import { registerMap } from './commands/map.js';
 import { VERSION } from '../src/version.js';
 
@@ -24,7 +26,7 @@ export function buildProgram(io: Io, setExit: SetExit): Command {
     .exitOverride()
     .showHelpAfterError('(run with --help for usage and examples)')
     .configureOutput({ writeOut: (s) => io.out(s), writeErr: (s) => io.err(s) });
-  for (const register of [registerCheck, registerSolve, registerMaterials, registerSchema, registerDemo, registerMap]) {
+  for (const register of [registerCheck, registerSolve, registerMaterials, registerSchema, registerPlot, registerReport, registerDemo, registerMap]) {
     const cmd = register(program, io, setExit);
     cmd.exitOverride().configureOutput({ writeOut: (s) => io.out(s), writeErr: (s) => io.err(s) });
   }

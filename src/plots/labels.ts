@@ -23,7 +23,7 @@ export function sig(x: number, digits = 4): string {
   if (x === 0) return '0';
   const a = Math.abs(x);
   const text = a >= 1e5 || a < 1e-3 ? x.toExponential(digits - 1) : x.toPrecision(digits);
-  return text.replace('-', MINUS);
+  return text.startsWith('-') ? `${MINUS}${text.slice(1)}` : text;
 }
 
 /** A relative error estimate as "2.3e-9" (one significant figure more than needed is noise). */

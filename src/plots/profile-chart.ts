@@ -7,6 +7,7 @@
 import type { Case } from '../case/types.js';
 import type { ModelProfiles } from '../compare/model-profiles.js';
 import type { CheckReport } from '../compare/types.js';
+import type { Fin1DStudy } from '../fd/fin1d.js';
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
 import { withPointLabels, type PointLabel } from './point-labels.js';
@@ -22,6 +23,8 @@ export interface CheckPlotInput {
   case: Case;
   report: CheckReport;
   profiles: ModelProfiles;
+  /** The fd-1d refinement study behind the check. */
+  oneD: Fin1DStudy;
   /** The fd-2d study when it is the check's reference (the heat map reuses it). */
   twoD: Fin2DStudy | null;
 }

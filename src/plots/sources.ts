@@ -43,5 +43,5 @@ export function fieldStudy(c: Case): Fin2DStudy {
 export async function checkPlotInput(c: Case, opts: CheckOptions): Promise<CheckPlotInput> {
   const { report, oneD, twoD } = await runCheck(c, opts);
   if (!isLinearFinCase(c)) throw new UsageError('plots: this build draws linear fins only');
-  return { case: c, report, profiles: modelProfiles(c, report, oneD, twoD), twoD };
+  return { case: c, report, profiles: modelProfiles(c, report, oneD, twoD), oneD, twoD };
 }

@@ -1,0 +1,119 @@
+/**
+ * `fincheck report CASE --out DIR`: the check as one self-contained HTML file (images inline, A4 print
+ * styles) and a Markdown file with the PNG charts beside it. Options are validated before anything is
+ * computed; the files are written all together or not at all.
+ */
+import { existsSync, statSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import type { Command } from 'commander';
+import { loadCase } from '../../src/case/parse.js';
+import type { Case } from '../../src/case/types.js';
+import type { CheckReport } from '../../src/compare/types.js';
+import { UsageError } from '../../src/errors.js';
+import { makeReport, REPORT_FILES } from '../../src/report/make-report.js';
+import { reportDate } from '../../src/report/report-date.js';
+import { writeFilesAtomically, type OutputFile } from '../../src/report/write-files.js';
+import { VERSION } from '../../src/version.js';
+import type { Io } from '../io.js';
+import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import { dpiOption } from './plot.js';
+
+export interface ReportRequest {
+  caseFile: string;
+  outDir: string;
+  tolerance: number;
+  reference: 'auto' | '1d' | '2d';
+  dpi: number;
+  date: string;
+}
+
+/** --out DIR: a folder (created when missing), not an existing file. */
+export function parseOutDir(value: string | undefined): string {
+  if (value === undefined || value.trim() === '') throw new UsageError('--out: a folder for the report files is required');
+  const dir = resolve(value);
+  if (existsSync(dir) && !statSync(dir).isDirectory()) throw new UsageError(`--out: ${value} is a file; give a folder`);
+  return dir;
+}
+
+export interface WrittenReport {
+  case: Case;
+  check: CheckReport;
+  html: string;
+  markdown: string;
+  images: string[];
+  heatmapUnavailable: string | null;
+  worstVerdict: 'ok' | 'marginal' | 'unsafe';
+}
+
+/** Computes the report and writes it into `outDir` (also what `fincheck demo` uses). */
+export async function writeReport(request: ReportRequest): Promise<WrittenReport> {
+  const c = loadCase(request.caseFile);
+  const content = await makeReport(c, {
+    tolerance: request.tolerance,
+    reference: request.reference,
+    dpi: request.dpi,
+    caseFile: request.caseFile,
+    version: VERSION,
+    date: request.date,
+  });
+  const html = join(request.outDir, REPORT_FILES.html);
+  const markdown = join(request.outDir, REPORT_FILES.markdown);
+  const images = content.figures.map((f) => join(request.outDir, f.file));
+  const files: OutputFile[] = [
+    ...content.figures.map((f, k) => ({ path: images[k] as string, bytes: f.png })),
+    { path: markdown, bytes: content.markdown },
+    { path: html, bytes: content.html },
+  ];
+  writeFilesAtomically(files, [request.outDir]);
+  const verdicts = content.check.report.models.map((m) => m.verdict);
+  const worstVerdict = verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
+  return { case: c, check: content.check.report, html, markdown, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
+}
+
+interface ReportCliOptions {
+  out?: string;
+  tolerance: string;
+  reference: string;
+  dpi: string;
+  date?: string;
+  json?: boolean;
+}
+
+export function registerReport(program: Command, io: Io): Command {
+  return program
+    .command('report')
+    .argument('<case>', 'case file (YAML or JSON)')
+    .description('write the check as a self-contained HTML report (prints to A4) and a Markdown report with PNG charts')
+    .option('--out <dir>', 'folder for report.html, report.md and the PNG charts (created if missing)')
+    .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
+    .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
+    .option('--dpi <dpi>', 'resolution of the PNG charts (96: 1200 x 750 px)', '96')
+    .option('--date <yyyy-mm-dd>', 'date printed in the report (default: SOURCE_DATE_EPOCH when set, else today)')
+    .option('--json', 'print one JSON document listing the files written')
+    .addHelpText(
+      'after',
+      `
+Examples:
+  fincheck report demo/inverter-plate-fin.yaml --out report/
+  fincheck report my-fin.yaml --out out/my-fin --tolerance 5% --dpi 200
+  SOURCE_DATE_EPOCH=1735689600 fincheck report my-fin.yaml --out out/   # same input, same bytes`,
+    )
+    .action(async (file: string, o: ReportCliOptions) => {
+      const outDir = parseOutDir(o.out);
+      const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
+      const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
+      const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
+      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
+      const written = await writeReport({ caseFile: file, outDir, tolerance, reference, dpi, date });
+      if (o.json) {
+        const { html, markdown, images, heatmapUnavailable, worstVerdict } = written;
+        io.out(`${JSON.stringify({ case: written.case.name, file, date, html, markdown, images, heatmapUnavailable, worstVerdict }, null, 2)}\n`);
+        return;
+      }
+      io.out(`wrote the report of ${file} (${date}):\n`);
+      io.out(`  ${written.html}   (self-contained HTML, prints to A4)\n`);
+      io.out(`  ${written.markdown}   (Markdown; the PNG charts beside it)\n`);
+      for (const image of written.images) io.out(`  ${image}\n`);
+      if (written.heatmapUnavailable) io.out(`  no temperature field: ${written.heatmapUnavailable}\n`);
+    });
+}

@@ -1,0 +1,65 @@
+/** The report's figures: the PNG of each chart with a caption naming its models, units and errors. */
+import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import { alongAxisLabel, referenceWords, relativeError, sig } from '../plots/labels.js';
+import type { CheckPlotInput } from '../plots/profile-chart.js';
+import type { PlotKind } from '../plots/sources.js';
+import { REMAINING_FRACTION } from '../plots/flux-chart.js';
+import type { Block, Section } from './document.js';
+
+export interface ReportFigure {
+  kind: PlotKind;
+  /** File name beside the Markdown report, e.g. profile.png. */
+  file: string;
+  png: Buffer;
+  width_px: number;
+  height_px: number;
+}
+
+/** File name of each chart beside the reports. */
+export const FIGURE_FILES: Record<PlotKind, string> = { profile: 'profile.png', flux: 'flux.png', heatmap: 'heatmap.png' };
+
+function twoDWords(study: Fin2DStudy): string {
+  const g = study.finest.grid;
+  return `fd-2d on ${g.nodesX} × ${g.nodesY} nodes, Q = ${sig(study.heatRate_W, 5)} W${g.section === 'planar' ? ' (section with insulated side edges)' : ''}, estimated discretisation error of Q ${relativeError(study.discretizationError)} (GCI, ${study.grids.length} grids)`;
+}
+
+function caption(kind: PlotKind, check: CheckPlotInput, field: Fin2DStudy | null): string {
+  const ref = check.report.reference;
+  const along = alongAxisLabel(check.case).replace(/ \(mm\)$/, '');
+  const omitted = check.profiles.omitted.map((o) => ` ${o.model} is not drawn: ${o.reason}.`).join('');
+  switch (kind) {
+    case 'profile':
+      return `Temperature T (°C) against ${along.toLowerCase()} (mm) for every model. Reference ${referenceWords(ref)}.${ref.model === 'fd-2d' ? ' fd-2d is drawn on its mid-plane (solid black) and its cooled face (grey long dashes).' : ''} The shortcuts are closed forms on the equivalent uniform fin, exact for their own assumptions; the legend gives each model's Q (W), drift and verdict.${omitted}`;
+    case 'flux':
+      return `Heat flowing along the fin Q (W, top) and heat lost per unit length q′ = h P θ (W/m, bottom) against ${along.toLowerCase()} (mm). The dotted line marks where ${Math.round(100 * (1 - REMAINING_FRACTION))} % of the reference's heat has left the fin: beyond it the fin carries little. fd-1d's Q(x) is the scheme's own interface flux; fd-2d's is its base heat rate minus the face losses summed along the face.${omitted}`;
+    case 'heatmap':
+      return `Temperature T (°C) in the fin's section, both halves, on its true outline (a thin section is stretched across its thickness by the factor the axis states); isotherms labelled in °C. ${field ? twoDWords(field) : ''}.`;
+    default: {
+      const never: never = kind;
+      return never;
+    }
+  }
+}
+
+const TITLES: Record<PlotKind, string> = {
+  profile: 'Temperature along the fin',
+  flux: 'Heat flow along the fin and heat lost per unit length',
+  heatmap: 'Temperature field in the fin section (fd-2d)',
+};
+
+export function figureSection(check: CheckPlotInput, figures: readonly ReportFigure[], heatmapUnavailable: string | null): Section {
+  const blocks: Block[] = [];
+  figures.forEach((f, k) => {
+    blocks.push({
+      kind: 'figure',
+      file: f.file,
+      alt: `${TITLES[f.kind]}: ${check.case.name}`,
+      caption: `Figure ${k + 1}. ${caption(f.kind, check, check.twoD)}`,
+      png: f.png,
+      width_px: f.width_px,
+      height_px: f.height_px,
+    });
+  });
+  if (heatmapUnavailable !== null) blocks.push({ kind: 'paragraph', text: `No temperature field is shown: ${heatmapUnavailable}.` });
+  return { id: 'plots', title: 'Plots', blocks };
+}

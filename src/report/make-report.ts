@@ -1,0 +1,66 @@
+/**
+ * Everything `fincheck report` writes, computed in memory: the check with every model's profile, the
+ * fd-2d field (the check's own study when fd-2d is its reference), three PNG charts, and the HTML and
+ * Markdown documents. Nothing touches the disk here (write-files.ts does, all or nothing).
+ */
+import type { Case } from '../case/types.js';
+import type { CheckOptions } from '../compare/check.js';
+import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import { svgToPng } from '../images/index.js';
+import { plotSvg } from '../plots/draw.js';
+import type { ChartSize, CheckPlotInput } from '../plots/profile-chart.js';
+import { checkPlotInput, fieldStudy, heatmapAvailability, type PlotKind } from '../plots/sources.js';
+import { buildReport } from './build-report.js';
+import type { ReportDocument } from './document.js';
+import { FIGURE_FILES, type ReportFigure } from './figures.js';
+import { reportHtml } from './html.js';
+import { reportMarkdown } from './markdown.js';
+
+/** File names in the output folder. */
+export const REPORT_FILES = { html: 'report.html', markdown: 'report.md' } as const;
+
+/** Chart size in the report: the default canvas, which fills the A4 text width at about 170 dpi. */
+export const REPORT_CHART: ChartSize = { width: 1200, height: 750 };
+
+export interface ReportOptions extends CheckOptions {
+  caseFile: string;
+  version: string;
+  date: string;
+  /** PNG resolution (96 = 1200 x 750 px). */
+  dpi: number;
+}
+
+export interface ReportContent {
+  check: CheckPlotInput;
+  figures: ReportFigure[];
+  heatmapUnavailable: string | null;
+  document: ReportDocument;
+  html: string;
+  markdown: string;
+}
+
+function field(c: Case, check: CheckPlotInput): { study: Fin2DStudy | null; unavailable: string | null } {
+  if (check.twoD) return { study: check.twoD, unavailable: null };
+  const available = heatmapAvailability(c);
+  return available.ok ? { study: fieldStudy(c), unavailable: null } : { study: null, unavailable: available.reason };
+}
+
+export async function makeReport(c: Case, opts: ReportOptions): Promise<ReportContent> {
+  const check = await checkPlotInput(c, { tolerance: opts.tolerance, reference: opts.reference });
+  const { study, unavailable } = field(c, check);
+  const kinds: PlotKind[] = study ? ['profile', 'flux', 'heatmap'] : ['profile', 'flux'];
+  const scale = opts.dpi / 96;
+  const figures: ReportFigure[] = [];
+  for (const kind of kinds) {
+    const svg = plotSvg(kind, { case: c, check, field: study }, REPORT_CHART, scale);
+    figures.push({
+      kind,
+      file: FIGURE_FILES[kind],
+      png: await svgToPng(svg, { dpi: opts.dpi }),
+      width_px: REPORT_CHART.width,
+      height_px: REPORT_CHART.height,
+    });
+  }
+  const document = buildReport({ check, caseFile: opts.caseFile, figures, heatmapUnavailable: unavailable, version: opts.version, date: opts.date });
+  return { check, figures, heatmapUnavailable: unavailable, document, html: reportHtml(document), markdown: reportMarkdown(document) };
+}

@@ -1,0 +1,49 @@
+/**
+ * All-or-nothing file output: every file is written in full under a temporary name in its own folder,
+ * then renamed over its final name (a rename within one file system replaces the file at once). If a
+ * write fails, the temporary files are removed and no final file is touched; nothing half-written is
+ * left behind.
+ */
+import { mkdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { basename, dirname, join } from 'node:path';
+import { UsageError } from '../errors.js';
+
+export interface OutputFile {
+  path: string;
+  bytes: Buffer | string;
+}
+
+/** Temporary name beside the final one (same folder, hence same file system). */
+function temporaryName(path: string, index: number): string {
+  return join(dirname(path), `.${basename(path)}.${process.pid}.${index}.tmp`);
+}
+
+/** Writes every file (creating the folders given in `folders` first), or none of them. */
+export function writeFilesAtomically(files: readonly OutputFile[], folders: readonly string[] = []): void {
+  try {
+    for (const folder of folders) mkdirSync(folder, { recursive: true });
+  } catch (e) {
+    throw asUsageError(e);
+  }
+  const written: string[] = [];
+  try {
+    files.forEach((f, k) => {
+      const tmp = temporaryName(f.path, k);
+      written.push(tmp);
+      writeFileSync(tmp, f.bytes);
+    });
+  } catch (e) {
+    for (const tmp of written) rmSync(tmp, { force: true });
+    throw asUsageError(e);
+  }
+  files.forEach((f, k) => renameSync(temporaryName(f.path, k), f.path));
+}
+
+/** File-system refusals (no such folder, no permission, read-only, disk full) are the user's to fix: exit 2. */
+function asUsageError(e: unknown): unknown {
+  const code = typeof e === 'object' && e !== null && 'code' in e ? String((e as { code: unknown }).code) : '';
+  if (['ENOENT', 'ENOTDIR', 'EISDIR', 'EACCES', 'EPERM', 'EROFS', 'ENOSPC', 'EEXIST'].includes(code)) {
+    return new UsageError(`cannot write the output: ${e instanceof Error ? e.message : String(e)}`);
+  }
+  return e;
+}
