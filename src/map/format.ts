@@ -33,8 +33,12 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
   const lines: string[] = [];
   lines.push(`Map of ${run.caseName}`);
   lines.push(axisLine('x', run.x), axisLine('y', run.y));
+  const references =
+    summary.references.length > 1
+      ? summary.references.map((r) => `${r.model} at ${r.points} points`).join(', ')
+      : run.casePoint.reference.model;
   lines.push(
-    `  reference ${run.casePoint.reference.model}; tolerance ${pct(tolerance)} (ok), ${pct(2 * tolerance)} (marginal); ` +
+    `  reference ${references}; tolerance ${pct(tolerance)} (ok), ${pct(2 * tolerance)} (marginal); ` +
       `${summary.points} points, ${summary.solved} solved${summary.errors > 0 ? `, ${summary.errors} invalid` : ''}`,
   );
   lines.push('');

@@ -3,7 +3,8 @@
  * key, unit and values, and one entry per point, x fastest (index = j * NX + i). A point where the case became
  * invalid carries `error` instead of results. Added to the contract's keys: each axis's `log`, the shortcuts
  * mapped, the case's own point, the summary counts and (per point) `mL`, the reference's model, efficiency and
- * discretisation error, each shortcut's heat rate and efficiency.
+ * discretisation error, each shortcut's heat rate and efficiency. `reference` is the case's own point's reference;
+ * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
  */
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapPoint } from './types.js';
@@ -35,6 +36,7 @@ export function mapJson(run: MapRun) {
       solved: summary.solved,
       errors: summary.errors,
       errorGroups: summary.errorGroups,
+      references: summary.references,
       models: summary.models.map((m) => ({ ...m, minDrift: finiteOrNull(m.minDrift), maxDrift: finiteOrNull(m.maxDrift) })),
     },
     points: run.points.map(pointJson),

@@ -29,6 +29,8 @@ export interface MapSummary {
   errors: number;
   errorGroups: ErrorGroup[];
   models: ModelCounts[];
+  /** Points per reference model (`--reference auto` keeps fd-1d where the 2-D model does not cover the case). */
+  references: { model: string; points: number }[];
 }
 
 /** The message without the values in it (the value given, the numbers in what is accepted). */
@@ -40,6 +42,7 @@ export function summariseMap(points: readonly MapPoint[], models: readonly MapMo
   const counts: ModelCounts[] = models.map((model) => ({ model, ok: 0, marginal: 0, unsafe: 0, missing: 0, minDrift: Infinity, maxDrift: -Infinity }));
   const groups = new Map<string, ErrorGroup>();
   let errors = 0;
+  const references = new Map<string, number>();
   for (const p of points) {
     if (isPointError(p)) {
       errors++;
@@ -49,6 +52,7 @@ export function summariseMap(points: readonly MapPoint[], models: readonly MapMo
       else groups.set(key, { example: p.error, count: 1 });
       continue;
     }
+    references.set(p.reference.model, (references.get(p.reference.model) ?? 0) + 1);
     for (const c of counts) {
       const m = p.models.find((r) => r.model === c.model);
       if (!m) {
@@ -66,5 +70,6 @@ export function summariseMap(points: readonly MapPoint[], models: readonly MapMo
     errors,
     errorGroups: [...groups.values()].sort((a, b) => b.count - a.count),
     models: counts,
+    references: [...references].map(([model, n]) => ({ model, points: n })),
   };
 }

@@ -21,7 +21,7 @@ interface MapJson {
   x: { key: string; unit: string; values: number[] };
   y: { key: string; unit: string; values: number[] };
   models: string[];
-  summary: { points: number; solved: number; errors: number; errorGroups: { example: string; count: number }[] };
+  summary: { points: number; solved: number; errors: number; errorGroups: { example: string; count: number }[]; references: { model: string; points: number }[] };
   points: ({ x: number; y: number; error: string } | {
     x: number;
     y: number;
@@ -65,6 +65,7 @@ describe('map points equal fincheck check on the same parameters', () => {
     // Log spacing: the middle value is the geometric mean, sqrt(20 * 400), to the 12 digits values are kept to.
     expect(map.y.values[1]).toBeCloseTo(Math.sqrt(8000), 9);
     expect(map.points).toHaveLength(12);
+    expect(map.summary.references).toEqual([{ model: 'fd-1d', points: 12 }]);
     for (let j = 0; j < 3; j++) {
       for (let i = 0; i < 4; i++) {
         const p = map.points[j * 4 + i];
@@ -118,7 +119,7 @@ describe('map points equal fincheck check on the same parameters', () => {
     // tip 0.5/1.5/2.5 mm against base 1/2/3 mm: tip > base at (1.5, 1), (2.5, 1) and (2.5, 2).
     const invalid = map.points.filter((p) => 'error' in p).map((p) => [p.x, p.y]);
     expect(invalid).toEqual([[1.5, 1], [2.5, 1], [2.5, 2]]);
-    expect(map.summary).toMatchObject({ points: 9, solved: 6, errors: 3 });
+    expect(map.summary).toMatchObject({ points: 9, solved: 6, errors: 3, references: [{ model: 'fd-1d', points: 6 }] });
     expect(map.summary.errorGroups).toHaveLength(1);
     expect(map.summary.errorGroups[0]?.count).toBe(3);
     for (const p of map.points) {
