@@ -150,7 +150,8 @@ function shortcutProfile(
   basis: string,
   ambient_degC: number,
 ): ModelProfile {
-  const theta0 = eq.thetaBase - heatRate_W * eq.contactResistance;
+  // Without a contact resistance the base sits at theta_b whatever the table says.
+  const theta0 = eq.contactResistance > 0 ? eq.thetaBase - heatRate_W * eq.contactResistance : eq.thetaBase;
   const input: UniformFinInput = { h: eq.h, k: eq.k, P: fin.P, A: eq.A, L: fin.length, thetaBase: theta0, tip: fin.tip };
   const n = SHORTCUT_POINTS;
   const x = new Float64Array(n);
@@ -267,6 +268,10 @@ export function modelProfiles(c: LinearFinCase, report: CheckReport, oneD: Fin1D
     const fin = shortcutFin(m.model, c, eq);
     if (!fin.ok) {
       omitted.push({ model: m.model, reason: fin.reason });
+      continue;
+    }
+    if (eq.contactResistance > 0 && !Number.isFinite(m.heatRate_W)) {
+      omitted.push({ model: m.model, reason: 'its heat rate in the check is not a finite number, so its base temperature behind the contact resistance is unknown' });
       continue;
     }
     profiles.push(shortcutProfile(m.model, fin, eq, m.heatRate_W, m.basis, c.convection.ambient_degC));
