@@ -69,7 +69,7 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
     .argument('<case>', 'case file (YAML or JSON)')
     .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point)')
     .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm')
-    .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. convection.h=10:1000 W/(m^2*K)')
+    .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. "convection.h=10:1000 W/(m^2*K)"')
     .option('--steps <NXxNY>', 'grid points along x and y', '41x41')
     .option('--log-x', 'space the x values geometrically and draw a log axis')
     .option('--log-y', 'space the y values geometrically and draw a log axis')
@@ -79,7 +79,7 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
     .option('--jobs <n>', 'worker threads (default: all cores; 1 runs in this process)')
     .option('--out <dir>', 'folder for map.csv, map.json and the images (default ./fincheck-map-<case>)')
     .option('--format <png|svg>', 'image format', 'png')
-    .option('--json', 'print the map as one JSON document (outputs.md) instead of the summary')
+    .option('--json', 'print the map as one JSON document (the content of map.json) instead of the summary')
     .addHelpText(
       'after',
       `
