@@ -110,6 +110,20 @@ describe('map points equal fincheck check on the same parameters', () => {
     }
   });
 
+  it('material.k over a built-in material: each point is the case with material: { k: value }', async () => {
+    const named = caseFile('named.yaml', taperedFin('3 mm', '1 mm'));
+    const r = await cli('map', named, '--x', 'material.k=50:200 W/(m*K)', '--y', 'convection.h=20:80', '--steps', '2x2', '--reference', '1d', '--jobs', '1', '--json', '--out', join(tmp, 'named-out'));
+    expect(r.code, r.stderr).toBe(0);
+    const map = JSON.parse(r.stdout) as MapJson;
+    for (const p of map.points) {
+      if ('error' in p) throw new Error(p.error);
+      const text = taperedFin('3 mm', '1 mm').replace('material: aluminium-6063', `material: { k: ${p.x} W/(m*K) }`).replace('h: 60', `h: ${p.y}`);
+      const check = await checkJson(`named-${p.x}-${p.y}.yaml`, text);
+      expect(p.reference.heatRate_W).toBe(check.reference.heatRate_W);
+      expect(p.models.map((m) => m.drift)).toEqual(check.models.map((m) => m.drift));
+    }
+  });
+
   it('a point where the case becomes invalid (tip thicker than base) is a marked cell, counted; the others equal check', async () => {
     const file = caseFile('taper.yaml', taperedFin('3 mm', '1 mm'));
     const out = join(tmp, 'taper-out');
