@@ -2,24 +2,26 @@
  * `fincheck check`: the reference solution, every applicable shortcut with its drift and verdict,
  * the assumption ledger, the design flags and the cautions (outputs.md).
  *
- * Pipeline: case -> 1-D geometry -> equivalent uniform fin -> fd-1d refinement study -> reference
- * (fd-2d study where the case allows and --reference is auto or 2d, else fd-1d) -> shortcuts ->
- * ledger -> flags.
+ * Pipeline (linear fins): case -> 1-D geometry -> equivalent uniform fin -> fd-1d refinement study ->
+ * reference (fd-2d study where the case allows and --reference is auto or 2d, else fd-1d) -> shortcuts
+ * -> ledger -> flags. Nonlinear fins (power-law h, radiation, k over temperature): check-nonlinear.ts.
  */
 import type { Case } from '../case/types.js';
-import { UsageError } from '../errors.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import { initBessel } from '../analytic/bessel.js';
 import { studyFin1D, type Fin1DStudy } from '../fd/fin1d.js';
+import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
-import { equivalentUniformFin } from './equivalent.js';
+import { nonlinearCheck } from './check-nonlinear.js';
+import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { designFlags } from './flags.js';
 import { assumptionLedger } from './ledger.js';
+import { modelRows, shortcutInputs } from './model-rows.js';
 import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
-import { verdictOf, type CheckReport, type ModelResult, type ReferenceResult } from './types.js';
+import type { CheckReport, Flag, ReferenceResult } from './types.js';
+import type { FinGeometry1D } from '../mesh/types.js';
 
 export interface CheckOptions {
   /** Relative drift accepted as `ok` (0.02 = 2 %). */
@@ -38,15 +40,14 @@ export interface CheckOutcome {
 }
 
 export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcome> {
-  const linear = requireLinear(c);
   await initBessel();
-  const geometry = finGeometry(linear);
-  const eq = equivalentUniformFin(linear, geometry);
-  const oneD = studyFin1D(linear);
+  return isLinearFinCase(c) ? linearCheck(c, opts) : nonlinearCheck(c, opts);
+}
+
+/** The fd-1d study as a reference. */
+export function reference1D(oneD: Fin1DStudy, extraNote = ''): ReferenceResult {
   const ref = oneD.result;
-  const idealHeatRate = ref.idealHeatRate;
-  const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
-  const reference1d: ReferenceResult = {
+  return {
     model: 'fd-1d',
     heatRate_W: ref.heatRate,
     efficiency: ref.efficiency,
@@ -56,71 +57,66 @@ export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcom
     observedOrder: oneD.study.observedOrder,
     grid: { nodes: ref.mesh.nodes },
     tipTemperature_degC: ref.tipTemperature_degC,
-    note: `1-D finite volumes, ${oneD.study.sizes.length} grids; ${oneD.study.note}`,
+    note: `1-D finite volumes, ${oneD.study.sizes.length} grids; ${oneD.study.note}${extraNote}`,
   };
-  const twoD = opts.reference === '1d' ? null : reference2D(linear, oneD, idealHeatRate, effectivenessScale, opts.reference === '2d');
-  const reference = twoD ? twoD.reference : reference1d;
+}
 
-  const { values, notApplicable } = evaluateShortcuts(linear, eq);
-  const shortcutAccuracy = 'closed form: exact for its own assumptions (round-off); its error here is the drift';
-  const rows: (Omit<ModelResult, 'drift' | 'verdict' | 'efficiency' | 'effectiveness'>)[] = values.map((v) => ({ ...v, accuracy: shortcutAccuracy }));
-  if (twoD) {
-    rows.push({
-      model: 'fd-1d',
-      heatRate_W: ref.heatRate,
-      formulaEfficiency: null,
-      m_per_m: null,
-      length_m: null,
-      basis: '1-D finite volumes: actual profile, h, tip and edges; uniform temperature across the thickness',
-      accuracy: `estimated discretisation error ${oneD.study.gci.toExponential(1)} (GCI)`,
-    });
-  }
-  const models: ModelResult[] = rows.map((v) => {
-    const drift = (v.heatRate_W - reference.heatRate_W) / reference.heatRate_W;
-    return {
-      model: v.model,
-      heatRate_W: v.heatRate_W,
-      efficiency: v.heatRate_W / idealHeatRate,
-      effectiveness: v.heatRate_W / effectivenessScale,
-      drift,
-      verdict: verdictOf(drift, opts.tolerance),
-      formulaEfficiency: v.formulaEfficiency,
-      m_per_m: v.m_per_m,
-      length_m: v.length_m,
-      basis: v.basis,
-      accuracy: v.accuracy,
-    };
-  });
-
-  const assumptions = opts.ledger === false ? [] : assumptionLedger(linear, geometry, eq, ref.heatRate);
-  if (twoD) assumptions.unshift(twoD.oneDRow);
-  const mL = Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length;
-  const flags = designFlags({
+/** Flags from the equivalent uniform fin of the shortcuts and the reference. */
+export function checkFlags(
+  geometry: FinGeometry1D,
+  eq: EquivalentUniformFin,
+  reference: ReferenceResult,
+  tolerance: number,
+  converged: boolean,
+  measuredOneDDrift: number | null,
+): Flag[] {
+  return designFlags({
     family: geometry.shape,
     biot: (eq.hBase * geometry.size(0)) / 2 / eq.k,
-    mL,
+    mL: Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length,
     effectiveness: reference.effectiveness,
     hAoverkP: (eq.hBase * geometry.baseArea) / (eq.k * geometry.perimeter(0)),
-    tolerance: opts.tolerance,
+    tolerance,
     discretizationError: reference.discretizationError,
-    converged: twoD ? twoD.study.heatRate.converged || twoD.study.discretizationError < opts.tolerance / 100 : oneD.study.converged,
+    converged,
     energyBalance: reference.energyBalance,
-    measuredOneDDrift: twoD ? twoD.oneDRow.drift : null,
+    measuredOneDDrift,
   });
+}
+
+function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
+  const geometry = finGeometry(c);
+  const eq = equivalentUniformFin(c, geometry);
+  const oneD = studyFin1D(c);
+  const ref = oneD.result;
+  const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
+  const twoD = opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, opts.reference === '2d');
+  const reference = twoD ? twoD.reference : reference1D(oneD);
+
+  const { values, notApplicable } = evaluateShortcuts(c, eq);
+  const inputs = shortcutInputs(values);
+  const fd1d = twoD
+    ? [
+        {
+          model: 'fd-1d' as const,
+          heatRate_W: ref.heatRate,
+          formulaEfficiency: null,
+          m_per_m: null,
+          length_m: null,
+          basis: '1-D finite volumes: actual profile, h, tip and edges; uniform temperature across the thickness',
+          accuracy: `estimated discretisation error ${oneD.study.gci.toExponential(1)} (GCI)`,
+        },
+      ]
+    : [];
+  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+
+  const assumptions = opts.ledger === false ? [] : assumptionLedger(c, geometry, eq);
+  if (twoD) assumptions.unshift(twoD.oneDRow);
+  const converged = twoD ? twoD.study.heatRate.converged || twoD.study.discretizationError < opts.tolerance / 100 : oneD.study.converged;
+  const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
   return {
     report: { case: c.name, tolerance: opts.tolerance, reference, models, notApplicable, assumptions, flags, cautions: [...CAUTIONS] },
     oneD,
     twoD: twoD ? twoD.study : null,
   };
-}
-
-function requireLinear(c: Case): LinearFinCase {
-  if (isLinearFinCase(c)) return c;
-  const what =
-    c.convection.h.kind === 'power'
-      ? 'convection.h with law: power'
-      : c.material.k.kind === 'table'
-        ? 'material.k as a table over temperature'
-        : 'convection.emissivity > 0';
-  throw new UsageError(`${what} makes the fin nonlinear; this build solves linear fins only (uniform, linear or tabulated h; constant k; no radiation)`);
 }

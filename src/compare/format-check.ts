@@ -27,13 +27,24 @@ export function formatCheck(c: Case, r: CheckReport): string {
   out.push(`  ${ref.note}`);
   out.push('');
   out.push(`Shortcuts against the reference (tolerance +/-${(100 * r.tolerance).toFixed(1)} %):`);
-  const head = `  ${pad('model', 16)}${lpad('Q [W]', 12)}${lpad('efficiency', 12)}${lpad('drift', 11)}  verdict`;
+  const label = (m: CheckReport['models'][number]): string => (m.guess ? `${m.model} (${m.guess} h)` : m.model);
+  const w = Math.max(16, ...r.models.map((m) => label(m).length + 2));
+  const head = `  ${pad('model', w)}${lpad('Q [W]', 12)}${lpad('efficiency', 12)}${lpad('drift', 11)}  verdict`;
   out.push(head);
   out.push(`  ${'-'.repeat(head.length - 2)}`);
   for (const m of r.models) {
-    out.push(`  ${pad(m.model, 16)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency.toFixed(4), 12)}${lpad(pct(m.drift), 11)}  ${m.verdict}`);
+    out.push(`  ${pad(label(m), w)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency.toFixed(4), 12)}${lpad(pct(m.drift), 11)}  ${m.verdict}`);
   }
-  for (const m of r.models) out.push(`    ${pad(m.model, 14)} ${m.basis}`);
+  const seen = new Set<string>();
+  for (const m of r.models) {
+    if (seen.has(m.model)) continue;
+    seen.add(m.model);
+    out.push(`    ${pad(m.model, 14)} ${m.basis}`);
+  }
+  const guesses = new Map(r.models.filter((m) => m.guess && m.guessValues).map((m) => [m.guess, m.guessValues]));
+  for (const [g, v] of guesses) {
+    if (v) out.push(`    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(v.h_W_per_m2K, 4)} W/(m^2*K), k = ${sig(v.k_W_per_mK, 4)} W/(m*K)`);
+  }
   for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);
   out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature)');
   out.push('');
@@ -42,7 +53,8 @@ export function formatCheck(c: Case, r: CheckReport): string {
     const methods = [...new Set(r.assumptions.map((a) => a.method))];
     const w = Math.max(...r.assumptions.map((a) => a.assumption.length)) + 2;
     for (const a of r.assumptions) {
-      out.push(`  ${pad(a.assumption, w)}${lpad(pct(a.drift), 10)} [${methods.indexOf(a.method) + 1}]  made by ${a.madeBy.join(', ')}`);
+      const by = a.madeBy.length > 0 ? `  made by ${a.madeBy.join(', ')}` : '';
+      out.push(`  ${pad(a.assumption, w)}${lpad(pct(a.drift), 10)} [${methods.indexOf(a.method) + 1}]${by}`);
     }
     methods.forEach((m, i) => out.push(`    [${i + 1}] ${m}`));
     out.push('');

@@ -9,16 +9,32 @@
 import type { Case, HDistribution, Profile } from '../case/types.js';
 import { uniformFin } from '../analytic/uniform-fin.js';
 import { solveFin1D } from '../fd/fin1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
+import { isLinearFinCase } from '../fd/linear-case.js';
 import type { FinGeometry1D } from '../mesh/types.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { AssumptionRow, ModelId } from './types.js';
 
 export const LEDGER_NODES = 4001;
 
-export function assumptionLedger(c: LinearFinCase, geometry: FinGeometry1D, eq: EquivalentUniformFin, actualHeatRate: number): AssumptionRow[] {
+/** fd-1d heat rate of a linear case on the ledger grid. */
+export function linearLedgerSolve(variant: Case): number {
+  if (!isLinearFinCase(variant)) throw new Error('linearLedgerSolve: the variant is not linear');
+  return solveFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
+}
+
+/**
+ * Rows for the geometric and boundary assumptions. `solve` is the fd-1d heat rate of a variant case on
+ * one fixed grid (linear or nonlinear solver); `eq` the equivalent uniform fin the shortcuts used.
+ */
+export function assumptionLedger(
+  c: Case,
+  geometry: FinGeometry1D,
+  eq: EquivalentUniformFin,
+  solve: (variant: Case) => number = linearLedgerSolve,
+): AssumptionRow[] {
   const rows: AssumptionRow[] = [];
-  const solve = (variant: LinearFinCase): number => solveFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
+  // The fin as given, on the same grid as every variant (so discretisation errors cancel).
+  const actualHeatRate = solve(c);
   const sameGrid = 'fd-1d with and without the assumption, same grid';
   const drift = (q: number): number => (q - actualHeatRate) / actualHeatRate;
   const tip = c.convection.tip;
@@ -82,9 +98,9 @@ export function assumptionLedger(c: LinearFinCase, geometry: FinGeometry1D, eq: 
       });
     }
   }
-  if (c.convection.h.kind !== 'uniform') {
+  if (c.convection.h.kind !== 'uniform' && c.convection.h.kind !== 'power') {
     const h: HDistribution = { kind: 'uniform', h: eq.h };
-    const variant = { ...c, convection: { ...c.convection, h } } as LinearFinCase;
+    const variant: Case = { ...c, convection: { ...c.convection, h } };
     const keepTip = tip.kind === 'convective' && tip.h === null ? withTip(variant, { kind: 'convective', h: eq.hTip }) : variant;
     rows.push({
       assumption: 'uniform h (area-weighted mean)',
@@ -96,8 +112,8 @@ export function assumptionLedger(c: LinearFinCase, geometry: FinGeometry1D, eq: 
   return rows;
 }
 
-function withTip(c: LinearFinCase, tip: Case['convection']['tip']): LinearFinCase {
-  return { ...c, convection: { ...c.convection, tip } } as LinearFinCase;
+function withTip(c: Case, tip: Case['convection']['tip']): Case {
+  return { ...c, convection: { ...c.convection, tip } };
 }
 
 /** The uniform profile of the same length and mean section, or null where there is none. */

@@ -40,6 +40,10 @@ export interface ModelResult {
   basis: string;
   /** How accurate the number is as a solution of its own model. */
   accuracy: string;
+  /** Nonlinear fins: which single h and k the shortcut was given ('base' or 'mean'); absent otherwise. */
+  guess?: 'base' | 'mean';
+  /** The single h (W/(m^2*K)) and k (W/(m*K)) of that guess. */
+  guessValues?: { h_W_per_m2K: number; k_W_per_mK: number; description: string };
 }
 
 export interface NotApplicable {

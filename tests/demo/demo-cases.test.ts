@@ -49,6 +49,13 @@ describe('each scenario shows what it is for', () => {
     expect(Math.abs(q('closed-form') / q('fd-1d') - 1)).toBeLessThan(1e-6);
     expect(r.assumptions.map((a) => a.assumption)).toContain('radial fin treated as straight (mean radius)');
   });
+  it('enclosure fin in still air: two constant-h guesses, a constant-h row and a no-radiation row', async () => {
+    const r = await check('enclosure-fin-natural-convection.yaml');
+    expect(new Set(r.models.map((m) => m.guess))).toEqual(new Set(['base', 'mean']));
+    const rows = r.assumptions.map((a) => a.assumption).join(' | ');
+    expect(rows).toMatch(/constant h/);
+    expect(rows).toMatch(/no radiation/);
+  });
   it('thick polymer fin in coolant: the Biot flag warns', async () => {
     const r = await check('polymer-fin-liquid-cooled.yaml');
     const flag = r.flags.find((f) => f.flag === 'thick-fin');

@@ -1,0 +1,42 @@
+/** Turns model heat rates into the rows of the check table: efficiency, effectiveness, drift, verdict. */
+import type { ShortcutValue } from './shortcuts.js';
+import { verdictOf, type ModelResult, type ReferenceResult } from './types.js';
+
+export const SHORTCUT_ACCURACY = 'closed form: exact for its own assumptions (round-off); its error here is the drift';
+
+export type ModelInput = ShortcutValue & { accuracy: string; guess?: 'base' | 'mean'; guessValues?: ModelResult['guessValues'] };
+
+export function shortcutInputs(values: ShortcutValue[], guess?: { guess: 'base' | 'mean'; guessValues: NonNullable<ModelResult['guessValues']> }): ModelInput[] {
+  return values.map((v) => ({ ...v, accuracy: SHORTCUT_ACCURACY, ...(guess ?? {}) }));
+}
+
+/**
+ * idealHeatRate: Q with every cooled surface at the base temperature (efficiency denominator), W;
+ * effectivenessScale: bare-base heat at the base temperature, W.
+ */
+export function modelRows(
+  inputs: (Omit<ModelInput, 'model'> & { model: ModelResult['model'] })[],
+  reference: ReferenceResult,
+  idealHeatRate: number,
+  effectivenessScale: number,
+  tolerance: number,
+): ModelResult[] {
+  return inputs.map((v) => {
+    const drift = (v.heatRate_W - reference.heatRate_W) / reference.heatRate_W;
+    return {
+      model: v.model,
+      heatRate_W: v.heatRate_W,
+      efficiency: v.heatRate_W / idealHeatRate,
+      effectiveness: v.heatRate_W / effectivenessScale,
+      drift,
+      verdict: verdictOf(drift, tolerance),
+      formulaEfficiency: v.formulaEfficiency,
+      m_per_m: v.m_per_m,
+      length_m: v.length_m,
+      basis: v.basis,
+      accuracy: v.accuracy,
+      ...(v.guess ? { guess: v.guess } : {}),
+      ...(v.guessValues ? { guessValues: v.guessValues } : {}),
+    };
+  });
+}

@@ -1,0 +1,83 @@
+/**
+ * `check` on nonlinear fins: the Newton reference against the first-integral closed forms, and the two
+ * constant-h guesses of the shortcuts.
+ */
+import { describe, expect, it } from 'vitest';
+import { parseCaseObject } from '../../src/case/parse.js';
+import { runCheck } from '../../src/compare/check.js';
+
+// Plate fin with insulated edges and an adiabatic tip: P = 2w, A = wt, m^2 = h_b P/(kA) = 2 h_b/(kt).
+// k = 200, t = 2 mm, h_b = 10 give m = sqrt(50); L = 1/m makes mL = 1.
+const m = Math.sqrt(50);
+const w = 0.1;
+const M = Math.sqrt(10 * 2 * w * 200 * w * 0.002) * 50; // sqrt(h_b P k A) theta_b, W
+
+function powerLawCase(exponent: number) {
+  return parseCaseObject({
+    name: `power law n = ${exponent}`,
+    fin: { profile: 'rectangular', length: 1 / m, thickness: 0.002, width: w, edges: 'insulated' },
+    material: { k: 200 },
+    convection: { ambient: 20, h: { law: 'power', base: 10, exponent }, tip: 'adiabatic' },
+    base: { temperature: 70 },
+  });
+}
+
+describe('power-law h, adiabatic tip, mL = 1', () => {
+  // Q = q / (sqrt(h_b P k A) theta_b) from the first integral of the fin equation with h = h_b (theta/theta_b)^n:
+  // Sen & Trinh 1986, J. Heat Transfer 108, 457 (from memory); values evaluated by quadrature with mpmath
+  // in the shared reference scripts (nonlinear.py), given to 10 digits.
+  it.each([
+    [0.25, 0.7283030125],
+    [1 / 3, 0.7183075317],
+    [2, 0.5834585319],
+  ])('n = %s: the reference matches Q = %s to 1e-6, and the base-h shortcut gives tanh(1)', async (n, Q) => {
+    const { report } = await runCheck(powerLawCase(n), { tolerance: 0.02, reference: 'auto' });
+    expect(report.reference.model).toBe('fd-1d');
+    // Finest grid error ~1e-8 (GCI); 1e-6 is the acceptance level of the nonlinear issue.
+    expect(Math.abs(report.reference.heatRate_W / (Q * M) - 1)).toBeLessThan(1e-6);
+    // h at the base temperature is h_b: the shortcut is the linear fin, q = M tanh(mL) (Incropera Table 3.4 case B).
+    const base = report.models.find((x) => x.model === 'tanh-L' && x.guess === 'base')!;
+    expect(base.heatRate_W / (Math.tanh(1) * M)).toBeCloseTo(1, 10);
+    expect(base.drift).toBeCloseTo(Math.tanh(1) / Q - 1, 6);
+    // The ledger's constant-h row is the same comparison made with fd-1d on one grid.
+    const row = report.assumptions.find((a) => a.assumption.startsWith('constant h'))!;
+    expect(row.drift).toBeCloseTo(Math.tanh(1) / Q - 1, 6);
+    // The mean-h guess lies between: h falls along the fin, so the mean is below h_b.
+    const mean = report.models.find((x) => x.model === 'tanh-L' && x.guess === 'mean')!;
+    expect(mean.guessValues!.h_W_per_m2K).toBeLessThan(10);
+    expect(Math.abs(mean.drift)).toBeLessThan(Math.abs(base.drift));
+  });
+});
+
+describe('radiation and tabulated conductivity', () => {
+  it('radiation is reported with its view-factor assumption and a no-radiation ledger row', async () => {
+    const c = parseCaseObject({
+      name: 'radiating',
+      fin: { profile: 'rectangular', length: 0.05, thickness: 0.002, width: w, edges: 'insulated' },
+      material: { k: 180 },
+      convection: { ambient: 20, h: 5, emissivity: 0.9, tip: 'adiabatic' },
+      base: { temperature: 120 },
+    });
+    const { report } = await runCheck(c, { tolerance: 0.02, reference: 'auto' });
+    expect(report.reference.note).toMatch(/view factor 1/);
+    expect(report.cautions.join(' ')).toMatch(/see only the surroundings/);
+    const row = report.assumptions.find((a) => a.assumption === 'no radiation')!;
+    expect(row.drift).toBeLessThan(-0.2); // at 120 degC radiation is comparable to h = 5 convection
+  });
+  it('--reference 2d on a nonlinear fin is a usage error naming the reason', async () => {
+    await expect(runCheck(powerLawCase(0.25), { tolerance: 0.02, reference: '2d' })).rejects.toThrow(/2-D model does not solve nonlinear fins/);
+  });
+  it('k over temperature: a constant-k row, and a table that is flat recovers the linear answer exactly', async () => {
+    const flat = parseCaseObject({
+      name: 'flat table',
+      fin: { profile: 'rectangular', length: 1 / m, thickness: 0.002, width: w, edges: 'insulated' },
+      material: { k: { points: [[0, 200], [200, 200]] } },
+      convection: { ambient: 20, h: 10, tip: 'adiabatic' },
+      base: { temperature: 70 },
+    });
+    const { report } = await runCheck(flat, { tolerance: 0.02, reference: '1d' });
+    // Uniform fin, adiabatic tip: q = M tanh(mL) (Incropera et al., Table 3.4 case B; from memory).
+    expect(Math.abs(report.reference.heatRate_W / (M * Math.tanh(1)) - 1)).toBeLessThan(1e-6);
+    expect(report.assumptions.find((a) => a.assumption.startsWith('constant k'))!.drift).toBeCloseTo(0, 12);
+  });
+});
