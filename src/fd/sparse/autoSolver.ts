@@ -4,7 +4,7 @@
  *
  * Cost models (multiply-adds; N nodes, w = short side + 1):
  *   banded Cholesky   ~ N w^2 / 2 to factor, 2 N w per solve, N (w + 1) doubles of storage;
- *   MG-preconditioned CG ~ CG_WORK_PER_NODE x N (about 12-14 iterations of ~60 operations per node,
+ *   MG-preconditioned CG ~ CG_WORK_PER_NODE x N (about 6-9 iterations of ~100 operations per node,
  *   measured on the fin grids of tests/fd2d), storage ~ 25 N doubles.
  * The banded factor is used while it is the cheaper of the two and its storage stays below
  * MAX_BANDED_BYTES; the short direction is numbered fastest (the matrix is transposed when the grid has

@@ -76,30 +76,45 @@ export function galerkinAlongX(a: FullStencil, t: Transfer1D): FullStencil {
   return out;
 }
 
-/** P^T A P with P acting along y only. */
+/** P^T A P with P acting along y only (column by column, contiguous in memory). */
 export function galerkinAlongY(a: FullStencil, t: Transfer1D): FullStencil {
   const { nodesX: nx, nodesY: ny, c } = a;
   const nyc = t.coarse;
   const out = emptyFullStencil(nx, nyc);
   const oc = out.c;
   const { p0, w0, p1, w1 } = t;
-  for (let k = 0; k < 9; k++) {
-    const di = Math.floor(k / 3) - 1;
-    const dj = (k % 3) - 1;
-    const coef = c[k] as Float64Array;
-    for (let j = 0; j < ny; j++) {
-      const j2 = j + dj;
-      if (j2 < 0 || j2 >= ny) continue;
-      for (let pa = 0; pa < 2; pa++) {
-        const J = pa === 0 ? (p0[j] as number) : (p1[j] as number);
-        if (J < 0) continue;
-        const wa = pa === 0 ? (w0[j] as number) : (w1[j] as number);
-        for (let pb = 0; pb < 2; pb++) {
-          const J2 = pb === 0 ? (p0[j2] as number) : (p1[j2] as number);
-          if (J2 < 0) continue;
-          const w = wa * (pb === 0 ? (w0[j2] as number) : (w1[j2] as number));
-          const target = oc[3 * (di + 1) + (J2 - J + 1)] as Float64Array;
-          for (let i = 0; i < nx; i++) target[i * nyc + J] = (target[i * nyc + J] as number) + w * (coef[i * ny + j] as number);
+  for (let i = 0; i < nx; i++) {
+    const fs = i * ny;
+    const cs = i * nyc;
+    for (let k = 0; k < 9; k++) {
+      const diOffset = 3 * (Math.floor(k / 3));
+      const dj = (k % 3) - 1;
+      const coef = c[k] as Float64Array;
+      for (let j = 0; j < ny; j++) {
+        const v = coef[fs + j] as number;
+        if (v === 0) continue;
+        const j2 = j + dj;
+        const Ja = p0[j] as number;
+        const wa = w0[j] as number;
+        const Jb = p1[j] as number;
+        const wb = w1[j] as number;
+        const J2a = p0[j2] as number;
+        const w2a = w0[j2] as number;
+        const J2b = p1[j2] as number;
+        const w2b = w1[j2] as number;
+        let target = oc[diOffset + (J2a - Ja + 1)] as Float64Array;
+        target[cs + Ja] = (target[cs + Ja] as number) + wa * w2a * v;
+        if (J2b >= 0) {
+          target = oc[diOffset + (J2b - Ja + 1)] as Float64Array;
+          target[cs + Ja] = (target[cs + Ja] as number) + wa * w2b * v;
+        }
+        if (Jb >= 0) {
+          target = oc[diOffset + (J2a - Jb + 1)] as Float64Array;
+          target[cs + Jb] = (target[cs + Jb] as number) + wb * w2a * v;
+          if (J2b >= 0) {
+            target = oc[diOffset + (J2b - Jb + 1)] as Float64Array;
+            target[cs + Jb] = (target[cs + Jb] as number) + wb * w2b * v;
+          }
         }
       }
     }

@@ -1,12 +1,13 @@
 /**
- * Line Gauss-Seidel across the thin direction: each grid column (fixed i, all j) is solved exactly,
- * with the neighbouring columns at their latest values.
+ * Zebra line Gauss-Seidel across the thin direction: each grid column (fixed i, all j) is solved
+ * exactly, with the neighbouring columns at their latest values; even columns first, then odd (or the
+ * reverse).
  *
  * For column i: T_i x_i = b_i - (west, north-west, south-west couplings) x_{i-1}
  *                              - (east, north-east, south-east couplings) x_{i+1},
  * T_i tridiagonal (the couplings within the column). The thin direction carries the strongest couplings
- * on elongated cells, and a line solve removes all error along it; sweeping the columns forward then
- * backward makes the smoother symmetric, as a conjugate-gradient preconditioner needs. The tridiagonal
+ * on elongated cells, and a line solve removes all error along it; reversing the colour order after the
+ * coarse-grid correction makes the smoother symmetric, as a conjugate-gradient preconditioner needs. The tridiagonal
  * factors (Thomas algorithm) are computed once per matrix. Trottenberg, Oosterlee & Schuller,
  * "Multigrid" (Academic Press, 2001), section 5.1 on line relaxation for anisotropic problems [from memory].
  */
@@ -40,11 +41,15 @@ export function factorLines(a: FullStencil): LineFactors {
   return { inversePivot, upper };
 }
 
-/** One sweep over the columns (forward: i = 0..nx-1; backward: reverse), updating x in place. */
-export function lineGaussSeidel(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, forward: boolean): void {
+/**
+ * Zebra sweep: the columns of one parity, then the other (evenFirst: even then odd; else odd then even).
+ * Even-then-odd before the coarse-grid correction and odd-then-even after it keep the cycle symmetric.
+ */
+export function zebraLineGaussSeidel(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, evenFirst: boolean): void {
   const nx = a.nodesX;
-  if (forward) for (let i = 0; i < nx; i++) solveColumn(a, lines, b, x, work, i);
-  else for (let i = nx - 1; i >= 0; i--) solveColumn(a, lines, b, x, work, i);
+  const first = evenFirst ? 0 : 1;
+  for (let i = first; i < nx; i += 2) solveColumn(a, lines, b, x, work, i);
+  for (let i = 1 - first; i < nx; i += 2) solveColumn(a, lines, b, x, work, i);
 }
 
 function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, i: number): void {

@@ -1,11 +1,12 @@
 /**
  * Geometric multigrid V-cycle on the structured grid, used as the preconditioner of conjugate gradients.
  *
- * One V(1,1) cycle from a zero guess: forward line Gauss-Seidel across the thin direction, residual,
- * restriction (P^T), the same on the Galerkin coarse operator P^T A P, prolongation (P), backward line
- * Gauss-Seidel; an exact banded Cholesky solve on the coarsest grid. Forward-then-backward smoothing,
- * R = P^T and Galerkin coarse operators make the cycle a symmetric positive definite operator, as CG
- * requires (Tatebe 1993, "The multigrid preconditioned conjugate gradient method", NASA CP-3224 [from memory]).
+ * One V(1,1) cycle from a zero guess: zebra line Gauss-Seidel across the thin direction (even columns,
+ * then odd), residual, restriction (P^T), the same on the Galerkin coarse operator P^T A P, prolongation
+ * (P), zebra again in the reverse colour order; an exact banded Cholesky solve on the coarsest grid.
+ * Zebra instead of lexicographic line relaxation: 6-9 instead of 10-11 CG iterations on the fin grids of
+ * tests/fd2d. Reversed colour order after the correction, R = P^T and Galerkin coarse operators make the
+ * cycle a symmetric positive definite operator, as CG requires (Tatebe 1993, "The multigrid preconditioned conjugate gradient method", NASA CP-3224 [from memory]).
  * Coarsening: always along x (the long direction); along y too while the couplings across (y) are at
  * least half as strong as those along (x). Where the x couplings dominate (cells shorter than high), y-line
  * relaxation cannot smooth along y, and semicoarsening along x alone keeps the cycle robust (line
@@ -14,7 +15,7 @@
 import { factorBandedCholesky, type BandedFactor } from './bandedCholesky.js';
 import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, type Transfer1D } from './coarsen.js';
 import { toFullStencil, toStencil9, type FullStencil } from './fullStencil.js';
-import { factorLines, lineGaussSeidel, type LineFactors } from './lineSmoother.js';
+import { factorLines, zebraLineGaussSeidel, type LineFactors } from './lineSmoother.js';
 import type { Stencil9 } from './stencil9.js';
 
 export interface MultigridLevel {
@@ -92,13 +93,13 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
     }
     const { a: al, lines, r, work } = level;
     x.fill(0);
-    lineGaussSeidel(al, lines, b, x, work, true);
-    residualAfterForwardSweep(al, x, r);
+    zebraLineGaussSeidel(al, lines, b, x, work, true);
+    residualAfterZebra(al, x, r);
     const next = levels[l + 1] as Level;
     restrict(r, next.b, level.tx as Transfer1D, level.ty as Transfer1D);
     cycle(l + 1, next.b, next.x);
     prolongAdd(next.x, x, level.tx as Transfer1D, level.ty as Transfer1D);
-    lineGaussSeidel(al, lines, b, x, work, false);
+    zebraLineGaussSeidel(al, lines, b, x, work, false);
   };
 
   return {
@@ -110,27 +111,37 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
 }
 
 /**
- * r = b - A x right after a forward line sweep from x = 0: each column was solved exactly with its east
- * neighbour still at zero, so only the east couplings times the (now updated) east column remain:
- * r_p = -(E_p x_E + NE_p x_NE + SE_p x_SE).
+ * r = b - A x right after a zebra sweep (even columns, then odd) from x = 0: the odd columns were solved
+ * last, exactly, so their residual is zero; each even column was solved with its odd neighbours still at
+ * zero, so its residual is minus its couplings to them times their new values.
  */
-function residualAfterForwardSweep(a: FullStencil, x: Float64Array, r: Float64Array): void {
+function residualAfterZebra(a: FullStencil, x: Float64Array, r: Float64Array): void {
   const { nodesX: nx, nodesY: ny, c } = a;
-  const se = c[6];
-  const e = c[7];
-  const ne = c[8];
-  for (let i = 0; i + 1 < nx; i++) {
+  const [sw, w, nw, , , , se, e, ne] = c;
+  for (let i = 0; i < nx; i++) {
     const start = i * ny;
+    if (i % 2 === 1) {
+      r.fill(0, start, start + ny);
+      continue;
+    }
     for (let j = 0; j < ny; j++) {
       const p = start + j;
-      const q = p + ny;
-      let v = (e[p] as number) * (x[q] as number);
-      if (j > 0) v += (se[p] as number) * (x[q - 1] as number);
-      if (j + 1 < ny) v += (ne[p] as number) * (x[q + 1] as number);
+      let v = 0;
+      if (i > 0) {
+        const q = p - ny;
+        v += (w[p] as number) * (x[q] as number);
+        if (j > 0) v += (sw[p] as number) * (x[q - 1] as number);
+        if (j + 1 < ny) v += (nw[p] as number) * (x[q + 1] as number);
+      }
+      if (i + 1 < nx) {
+        const q = p + ny;
+        v += (e[p] as number) * (x[q] as number);
+        if (j > 0) v += (se[p] as number) * (x[q - 1] as number);
+        if (j + 1 < ny) v += (ne[p] as number) * (x[q + 1] as number);
+      }
       r[p] = -v;
     }
   }
-  r.fill(0, (nx - 1) * ny);
 }
 
 /** Fraction of the nodes whose y couplings are below FULL_COARSENING_RATIO x their x couplings. */
