@@ -93,8 +93,9 @@ describe.each([
     const { x, report } = solveMgPcg(system, {}, mg);
     const qd = heatRates2D(K, terms, direct);
     const qm = heatRates2D(K, terms, x);
-    // Both solve to ~1e-13 relative residual; the heat rates agree far below the discretisation error.
-    expect(Math.abs(qm.base / qd.base - 1)).toBeLessThan(1e-10);
+    // CG stops at a relative residual of 1e-12 and the heat rate follows at up to ~30x that (measured
+    // 1.2e-10 on the thin plate); 1e-9 is still four orders below the discretisation error (~1e-5).
+    expect(Math.abs(qm.base / qd.base - 1)).toBeLessThan(1e-9);
     expect(qm.energyBalance).toBeLessThan(1e-9);
     expect(qd.energyBalance).toBeLessThan(1e-9);
     // 6-9 iterations measured on these shapes (zebra line relaxation): a guard against losing the multigrid efficiency.
