@@ -101,8 +101,6 @@ describe('the tolerance contour over Bi and mL', () => {
       expect(Math.abs(found.biot - 0.0864)).toBeLessThan(found.spacing);
     },
   };
-  // Needs `--reference 2d` in runCheck (src/compare/check.ts), which is being wired in now. When it lands, replace
-  // this line by: it(twoD.name, twoD.check);
-  // (Run against the uncommitted 2-D wiring of 2 Dec it passed: Bi = 0.0867 at the crossing, row spacing 0.0125.)
-  it.todo(twoD.name);
+  // Runs since runCheck takes `--reference 2d` (commit fc57219); observed Bi = 0.0867 at the crossing, row spacing 0.0125.
+  it(twoD.name, twoD.check);
 });
