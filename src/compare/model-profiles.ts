@@ -21,6 +21,12 @@
  * conservative scheme's own flux, Patankar 1980, ch. 4 [from memory]) and at the tip (surface heat
  * minus the face losses); q' = h(x) P(x) theta(x) at the nodes.
  *
+ * Nonlinear fins (power-law h, radiation, k over temperature): fd-1d is the Newton solution; Q at the
+ * interfaces uses k at the interface's mean temperature, and q' is the drop of Q across each control
+ * volume over its length (the scheme's balance). The shortcuts are drawn as a hand calculation makes
+ * them, with h and k at the base temperature (linear-surrogate.ts); the table also has the fin-averaged
+ * guess.
+ *
  * fd-2d (finest grid of its study, both halves, side edges insulated): temperature on the mid-plane
  * (pins: the axis) and on the cooled face. Face loss of the segment between face nodes a and b:
  * h theta ds times the depth (planar: 2 w; pins: 2 pi r_face; annular: 2 x 2 pi r), with theta and h at
@@ -33,7 +39,9 @@ import { hAt, hAtNodes } from '../fd/convection1d.js';
 import { convectiveConductance, interfaceConductance } from '../fd/conductance1d.js';
 import type { Fin1DStudy } from '../fd/fin1d.js';
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
+import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
+import type { Case } from '../case/types.js';
+import { conductivityAt, linearSurrogate } from './linear-surrogate.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import type { CheckReport, ModelId, ShortcutId } from './types.js';
@@ -76,6 +84,8 @@ export interface ModelProfiles {
   length_m: number;
   /** x of the base in the plotted coordinate: 0, or r1 for annular fins (plots show the radius). */
   baseX_m: number;
+  /** A remark on how the lines were drawn (nonlinear fins), or null. */
+  note: string | null;
 }
 
 /** Points at which the shortcut profiles are evaluated (smooth closed forms: 241 points draw them exactly). */
@@ -216,6 +226,37 @@ function oneDProfile(c: LinearFinCase, oneD: Fin1DStudy): ModelProfile {
   };
 }
 
+/** fd-1d of any fin (also nonlinear): Q from the interface conduction with k(T), q' from the drop of Q across each CV. */
+function oneDProfileGeneric(c: Case, oneD: Fin1DStudy): ModelProfile {
+  const r = oneD.result;
+  const mesh = r.mesh;
+  const n = mesh.nodes;
+  const ambient = c.convection.ambient_degC;
+  const T = r.theta.map((theta) => theta + ambient);
+  const flowX = new Float64Array(n);
+  const flow = new Float64Array(n);
+  flow[0] = r.heatRate;
+  for (let i = 0; i + 1 < n; i++) {
+    const k = conductivityAt(c.material.k, 0.5 * ((T[i] as number) + (T[i + 1] as number)));
+    flowX[i + 1] = 0.5 * ((mesh.x[i] as number) + (mesh.x[i + 1] as number));
+    flow[i + 1] = ((k * (mesh.interfaceArea[i] as number)) / (mesh.dx[i] as number)) * ((r.theta[i] as number) - (r.theta[i + 1] as number));
+  }
+  // CV i runs from flowX[i] (the base for i = 0) to flowX[i + 1]; the last node's half cell is left out.
+  const lossX = mesh.x.slice(0, n - 1);
+  const loss = new Float64Array(n - 1);
+  for (let i = 0; i + 1 < n; i++) loss[i] = ((flow[i] as number) - (flow[i + 1] as number)) / ((flowX[i + 1] as number) - (flowX[i] as number));
+  return {
+    model: 'fd-1d',
+    temperature: { x_m: mesh.x, values: T },
+    faceTemperature: null,
+    loss: { x_m: lossX, values: loss },
+    flow: { x_m: flowX, values: flow },
+    tipTemperature_degC: r.tipTemperature_degC,
+    heatRate_W: r.heatRate,
+    basis: `1-D finite volumes on ${n} nodes${isLinearFinCase(c) ? '' : ', nonlinear (Newton)'}`,
+  };
+}
+
 function twoDProfile(c: LinearFinCase, study: Fin2DStudy): ModelProfile {
   const r = study.finest;
   const baseX = r.grid.baseX;
@@ -256,16 +297,19 @@ function twoDProfile(c: LinearFinCase, study: Fin2DStudy): ModelProfile {
  * Profiles of the numerical solutions (fd-2d first when given, then fd-1d) and of every shortcut in
  * `report` (same case, same check).
  */
-export function modelProfiles(c: LinearFinCase, report: CheckReport, oneD: Fin1DStudy, twoD: Fin2DStudy | null = null): ModelProfiles {
-  const geometry = finGeometry(c);
-  const eq = equivalentUniformFin(c, geometry);
+export function modelProfiles(c: Case, report: CheckReport, oneD: Fin1DStudy, twoD: Fin2DStudy | null = null): ModelProfiles {
+  const linear = isLinearFinCase(c) ? c : null;
+  // A nonlinear fin's shortcuts take one h and k: the hand calculation's, at the base temperature.
+  const surrogate = linear ?? linearSurrogate(c, 'base', oneD.result);
+  const geometry = finGeometry(surrogate);
+  const eq = equivalentUniformFin(surrogate, geometry);
   const profiles: ModelProfile[] = [];
-  if (twoD) profiles.push(twoDProfile(c, twoD));
-  profiles.push(oneDProfile(c, oneD));
+  if (twoD && linear) profiles.push(twoDProfile(linear, twoD));
+  profiles.push(linear ? oneDProfile(linear, oneD) : oneDProfileGeneric(c, oneD));
   const omitted: OmittedProfile[] = [];
   for (const m of report.models) {
-    if (m.model === 'fd-1d') continue;
-    const fin = shortcutFin(m.model, c, eq);
+    if (m.model === 'fd-1d' || (m.guess !== undefined && m.guess !== 'base')) continue;
+    const fin = shortcutFin(m.model, surrogate, eq);
     if (!fin.ok) {
       omitted.push({ model: m.model, reason: fin.reason });
       continue;
@@ -277,5 +321,6 @@ export function modelProfiles(c: LinearFinCase, report: CheckReport, oneD: Fin1D
     profiles.push(shortcutProfile(m.model, fin, eq, m.heatRate_W, m.basis, c.convection.ambient_degC));
   }
   const p = c.fin.profile;
-  return { profiles, omitted, length_m: eq.length, baseX_m: p.kind === 'annular' ? p.innerRadius : 0 };
+  const note = linear ? null : 'Nonlinear fin: the shortcuts are drawn with h and k at the base temperature; the check table also gives them with h and k averaged over the solved fin.';
+  return { profiles, omitted, length_m: eq.length, baseX_m: p.kind === 'annular' ? p.innerRadius : 0, note };
 }

@@ -33,7 +33,8 @@ export interface CheckPlotInput {
 export function legendNote(input: CheckPlotInput, model: string, withHeatRate = true): string {
   const { report } = input;
   if (model === report.reference.model) return withHeatRate ? `Q ${sig(report.reference.heatRate_W)} W` : 'reference';
-  const row = report.models.find((m) => m.model === model);
+  // Nonlinear fins list each shortcut twice (two guesses of h and k); the lines show the base guess.
+  const row = report.models.find((m) => m.model === model && (m.guess === undefined || m.guess === 'base'));
   if (!row) return '';
   const drift = `drift ${signedPercent(row.drift)} (${row.verdict})`;
   return withHeatRate ? `Q ${sig(row.heatRate_W)} W, ${drift}` : drift;
@@ -49,6 +50,7 @@ export function checkSubtitle(input: CheckPlotInput): string[] {
   if (report.reference.model === 'fd-2d' && !isPin(input.case) && input.case.fin.profile.kind !== 'annular' && input.case.fin.edges === 'cooled') {
     lines.push("fd-2d lines are the section with insulated side edges; the reference Q adds the edges' cooling from fd-1d.");
   }
+  if (profiles.note !== null) lines.push(profiles.note);
   if (profiles.omitted.length > 0) lines.push(profiles.omitted.map((o) => `${o.model} not drawn: ${o.reason}.`).join(' '));
   return lines;
 }

@@ -8,7 +8,6 @@ import { modelProfiles } from '../compare/model-profiles.js';
 import { UsageError } from '../errors.js';
 import { fin2dProblem } from '../fd/fin2dCase.js';
 import { studyFin2DProblem, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
 export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;
@@ -42,6 +41,5 @@ export function fieldStudy(c: Case): Fin2DStudy {
 /** The check and every model's profile (throws the check's UsageError for a nonlinear case). */
 export async function checkPlotInput(c: Case, opts: CheckOptions): Promise<CheckPlotInput> {
   const { report, oneD, twoD } = await runCheck(c, opts);
-  if (!isLinearFinCase(c)) throw new UsageError('plots: this build draws linear fins only');
   return { case: c, report, profiles: modelProfiles(c, report, oneD, twoD), oneD, twoD };
 }

@@ -26,6 +26,12 @@ export interface ReportInputs {
 
 const efficiency = (x: number): string => x.toFixed(4);
 
+/** A model's name in the tables; nonlinear fins list each shortcut with the h and k it was given. */
+function modelName(m: ModelResult): string {
+  if (m.guess === undefined) return m.model;
+  return `${m.model} (${m.guess === 'base' ? 'h, k at the base' : 'h, k fin mean'})`;
+}
+
 function summary(r: CheckReport): Block[] {
   const ref = r.reference;
   const counts = { ok: 0, marginal: 0, unsafe: 0 };
@@ -36,7 +42,7 @@ function summary(r: CheckReport): Block[] {
     `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
     `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`,
   ];
-  if (worst) items.push(`Largest drift: ${worst.model}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
+  if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
   const warnings = r.flags.filter((f) => f.severity !== 'info');
   items.push(warnings.length > 0 ? `Flags: ${warnings.map((f) => f.flag).join(', ')} (see Flags).` : 'No warning flags.');
   return [{ kind: 'callout', title: tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
@@ -64,7 +70,7 @@ function referenceFacts(r: CheckReport): Block {
 
 function checkTable(r: CheckReport): Block[] {
   const row = (m: ModelResult): { cells: string[]; tone: Tone } => ({
-    cells: [m.model, sig(m.heatRate_W, 5), efficiency(m.efficiency), signedPercent(m.drift), m.verdict, prettyUnits(m.accuracy)],
+    cells: [modelName(m), sig(m.heatRate_W, 5), efficiency(m.efficiency), signedPercent(m.drift), m.verdict, prettyUnits(m.accuracy)],
     tone: m.verdict,
   });
   const blocks: Block[] = [
@@ -86,7 +92,7 @@ function checkTable(r: CheckReport): Block[] {
         'Efficiency of every row = Q / (Q with the whole cooled surface at the base temperature), so the rows compare.',
       ],
     },
-    { kind: 'list', items: r.models.map((m) => `${m.model}: ${prettyUnits(m.basis)}${m.formulaEfficiency !== null ? `; formula efficiency ${efficiency(m.formulaEfficiency)}` : ''}${m.m_per_m !== null ? `; m = ${sig(m.m_per_m)} 1/m` : ''}${m.length_m !== null ? `, length ${sig(m.length_m * 1000)} mm` : ''}.`) },
+    { kind: 'list', items: r.models.map((m) => `${modelName(m)}: ${prettyUnits(m.basis)}${m.guessValues ? `; ${m.guessValues.description}: h = ${sig(m.guessValues.h_W_per_m2K)} W/(m²·K), k = ${sig(m.guessValues.k_W_per_mK)} W/(m·K)` : ''}${m.formulaEfficiency !== null ? `; formula efficiency ${efficiency(m.formulaEfficiency)}` : ''}${m.m_per_m !== null ? `; m = ${sig(m.m_per_m)} 1/m` : ''}${m.length_m !== null ? `, length ${sig(m.length_m * 1000)} mm` : ''}.`) },
   ];
   if (r.notApplicable.length > 0) {
     blocks.push({ kind: 'paragraph', text: 'Not applicable to this case:' });

@@ -148,6 +148,30 @@ base: { temperature: 110 degC }
   });
 });
 
+describe('fd-1d profile of a nonlinear fin (power-law h)', () => {
+  it("q' from the drop of Q across each control volume equals the local law h(theta) P theta", async () => {
+    const natural = parseCaseText(
+      `name: natural
+fin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm, edges: cooled }
+material: { k: 180 W/(m*K) }
+convection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: convective }
+base: { temperature: 80 degC }
+`,
+      'natural.yaml',
+    );
+    const { profiles } = await checkPlotInput(natural, { tolerance: 0.02, reference: '1d', ledger: false });
+    const p = profileOf(profiles.profiles, 'fd-1d');
+    // The fin equation's loss term (h = 12 (theta/60)^0.25 W/(m^2 K), P = 2 (w + t) = 0.104 m), evaluated
+    // at interior nodes; the CV balance gives it to second order in the cell (8000 cells: ~1e-8), so 1e-6.
+    for (const i of [100, 2000, 4000, 6000, 7900]) {
+      const theta = (p.temperature.values[i] as number) - 20;
+      const law = 12 * (theta / 60) ** 0.25 * 0.104 * theta;
+      expect(Math.abs((p.loss.values[i] as number) / law - 1)).toBeLessThan(1e-6);
+    }
+    expect(profiles.note).toContain('base temperature');
+  });
+});
+
 describe('helpers', () => {
   it('positionOfRemainingFlow interpolates where a tenth of the flow is left', () => {
     const x = Float64Array.from({ length: 11 }, (_, i) => i / 10);
