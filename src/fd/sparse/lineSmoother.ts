@@ -55,56 +55,39 @@ export function zebraLineGaussSeidel(a: FullStencil, lines: LineFactors, b: Floa
 function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, i: number): void {
   const { nodesX: nx, nodesY: ny, c } = a;
   const start = i * ny;
-  const end = start + ny;
+  const last = start + ny - 1;
   const { inversePivot, upper } = lines;
-  const south = c[3];
-  // Right-hand side of the column: b minus the couplings to the west and east columns.
-  for (let j = 0; j < ny; j++) work[j] = b[start + j] as number;
-  if (i > 0) subtractNeighbourColumn(work, c[1], c[2], c[0], x, start, ny, -ny);
-  if (i + 1 < nx) subtractNeighbourColumn(work, c[7], c[8], c[6], x, start, ny, ny);
-  // Thomas: d'_j = (rhs_j - S_j d'_{j-1}) / pivot_j, then x_j = d'_j - c'_j x_{j+1}.
+  const [sw, w, nw, south, , , se, e, ne] = c;
+  // Forward elimination with the right-hand side built on the fly (one pass):
+  // rhs_j = b_j - (couplings to the west and east columns) x, d'_j = (rhs_j - S_j d'_{j-1}) / pivot_j.
+  // The first and last rows are peeled: their couplings beyond the grid's edge are zero and not read.
+  const westOf = i > 0 ? -ny : 0;
+  const eastOf = i + 1 < nx ? ny : 0;
+  const hasWest = westOf !== 0;
+  const hasEast = eastOf !== 0;
   let prev = 0;
-  for (let j = 0; j < ny; j++) {
-    const p = start + j;
-    prev = ((work[j] as number) - (south[p] as number) * prev) * (inversePivot[p] as number);
-    work[j] = prev;
+  for (let p = start; p <= last; p++) {
+    let rhs = b[p] as number;
+    if (hasWest) {
+      const q = p - ny;
+      rhs -= (w[p] as number) * (x[q] as number);
+      if (p > start) rhs -= (sw[p] as number) * (x[q - 1] as number);
+      if (p < last) rhs -= (nw[p] as number) * (x[q + 1] as number);
+    }
+    if (hasEast) {
+      const q = p + ny;
+      rhs -= (e[p] as number) * (x[q] as number);
+      if (p > start) rhs -= (se[p] as number) * (x[q - 1] as number);
+      if (p < last) rhs -= (ne[p] as number) * (x[q + 1] as number);
+    }
+    prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
+    work[p - start] = prev;
   }
+  // Back substitution: x_j = d'_j - c'_j x_{j+1}.
   let next = prev;
-  x[end - 1] = next;
-  for (let j = ny - 2; j >= 0; j--) {
-    next = (work[j] as number) - (upper[start + j] as number) * next;
-    x[start + j] = next;
+  x[last] = next;
+  for (let p = last - 1; p >= start; p--) {
+    next = (work[p - start] as number) - (upper[p] as number) * next;
+    x[p] = next;
   }
-}
-
-/**
- * work_j -= same_j x[q] + up_j x[q + 1] + down_j x[q - 1], q = start + j + shift: the couplings of the
- * column starting at `start` to the neighbouring column (coefficients pointing outside the grid are zero;
- * the first and last rows are peeled so that no index leaves the array).
- */
-function subtractNeighbourColumn(
-  work: Float64Array,
-  same: Float64Array,
-  up: Float64Array,
-  down: Float64Array,
-  x: Float64Array,
-  start: number,
-  ny: number,
-  shift: number,
-): void {
-  const q0 = start + shift;
-  if (ny === 1) {
-    work[0] = (work[0] as number) - (same[start] as number) * (x[q0] as number);
-    return;
-  }
-  work[0] = (work[0] as number) - (same[start] as number) * (x[q0] as number) - (up[start] as number) * (x[q0 + 1] as number);
-  for (let j = 1; j < ny - 1; j++) {
-    const p = start + j;
-    const q = q0 + j;
-    work[j] =
-      (work[j] as number) - (same[p] as number) * (x[q] as number) - (up[p] as number) * (x[q + 1] as number) - (down[p] as number) * (x[q - 1] as number);
-  }
-  const p = start + ny - 1;
-  const q = q0 + ny - 1;
-  work[ny - 1] = (work[ny - 1] as number) - (same[p] as number) * (x[q] as number) - (down[p] as number) * (x[q - 1] as number);
 }
