@@ -43,15 +43,16 @@ export function legendNote(input: CheckPlotInput, model: string, withHeatRate = 
 /** Subtitle lines shared by the profile and flux charts. */
 export function checkSubtitle(input: CheckPlotInput): string[] {
   const { report, profiles } = input;
+  // At most three lines (the chart header's limit): reference; shortcuts and what is not drawn; one remark.
+  const omitted = profiles.omitted.length > 0 ? ` Not drawn (no temperature profile): ${profiles.omitted.map((o) => o.model).join(', ')}.` : '';
   const lines = [
-    `Reference: ${referenceWords(report.reference)}.`,
-    `Shortcuts on the equivalent uniform fin; drift = (Q − Q_ref)/Q_ref; verdict at a tolerance of ±${(100 * report.tolerance).toFixed(1)} %.`,
+    `Reference: ${referenceWords(report.reference)}; verdicts at a tolerance of ±${(100 * report.tolerance).toFixed(1)} %.`,
+    `Shortcuts on the equivalent uniform fin; drift = (Q − Q_ref)/Q_ref.${omitted}`,
   ];
-  if (report.reference.model === 'fd-2d' && !isPin(input.case) && input.case.fin.profile.kind !== 'annular' && input.case.fin.edges === 'cooled') {
-    lines.push("fd-2d lines are the section with insulated side edges; the reference Q adds the edges' cooling from fd-1d.");
-  }
   if (profiles.note !== null) lines.push(profiles.note);
-  if (profiles.omitted.length > 0) lines.push(profiles.omitted.map((o) => `${o.model} not drawn: ${o.reason}.`).join(' '));
+  else if (report.reference.model === 'fd-2d' && !isPin(input.case) && input.case.fin.profile.kind !== 'annular' && input.case.fin.edges === 'cooled') {
+    lines.push("fd-2d lines: the section with insulated side edges; the reference Q adds the edges' cooling from fd-1d.");
+  }
   return lines;
 }
 
