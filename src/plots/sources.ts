@@ -25,7 +25,7 @@ export function heatmapAvailability(c: Case): HeatmapAvailability {
     return { ok: true };
   } catch (e) {
     if (e instanceof UsageError || e instanceof RangeError) {
-      return { ok: false, reason: `the 2-D model does not cover this ${c.fin.profile.kind} fin: ${e.message.replace(/^fd-2d: /, '')}` };
+      return { ok: false, reason: `the 2-D model does not cover this ${c.fin.profile.kind} fin: ${e.message.replace(/^fd-2d: /, '').replace(/; use the 1-D model$/, '')}` };
     }
     throw e;
   }

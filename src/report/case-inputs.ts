@@ -58,7 +58,7 @@ export function caseInputRows(c: Case): TableRow[] {
   const k = c.material.k;
   rows.push(['Material', c.material.name, prettyUnits(c.material.source)]);
   rows.push(['Conductivity k', k.kind === 'constant' ? `${num(k.k)} W/(m·K)` : `table of ${k.k.length} points, ${num(Math.min(...k.k))} to ${num(Math.max(...k.k))} W/(m·K)`, '']);
-  rows.push(['Convection h', prettyUnits(describeH(c.convection.h)), 'faces (and side edges when cooled)']);
+  rows.push(['Convection h', prettyUnits(describeH(c.convection.h)), '']);
   rows.push(['Tip', prettyUnits(describeTip(c.convection.tip)), '']);
   rows.push(['Ambient (fluid) temperature', `${num(c.convection.ambient_degC)} °C`, '']);
   if (c.convection.emissivity > 0) rows.push(['Emissivity', num(c.convection.emissivity), `surroundings at ${num(c.convection.surroundings_degC)} °C`]);
