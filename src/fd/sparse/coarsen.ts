@@ -12,6 +12,8 @@ import { emptyFullStencil, type FullStencil } from './fullStencil.js';
 
 /** Parents of each fine index along one direction: p0 with weight w0, and p1 with w1 (p1 = -1: none). */
 export interface Transfer1D {
+  /** 'linear': coarse = even fine nodes and the last; 'identity': not coarsened. */
+  readonly kind: 'linear' | 'identity';
   readonly fine: number;
   readonly coarse: number;
   readonly p0: Int32Array;
@@ -37,11 +39,11 @@ export function linearTransfer(fine: number): Transfer1D {
       w1[f] = 0.5;
     }
   }
-  return { fine, coarse, p0, w0, p1, w1 };
+  return { kind: 'linear', fine, coarse, p0, w0, p1, w1 };
 }
 
 export function identityTransfer(n: number): Transfer1D {
-  return { fine: n, coarse: n, p0: Int32Array.from({ length: n }, (_, f) => f), w0: new Float64Array(n).fill(1), p1: new Int32Array(n).fill(-1), w1: new Float64Array(n) };
+  return { kind: 'identity', fine: n, coarse: n, p0: Int32Array.from({ length: n }, (_, f) => f), w0: new Float64Array(n).fill(1), p1: new Int32Array(n).fill(-1), w1: new Float64Array(n) };
 }
 
 /** P^T A P with P acting along x only (t: the transfer along x). */
@@ -127,6 +129,7 @@ export function restrict(fine: Float64Array, coarse: Float64Array, tx: Transfer1
   coarse.fill(0);
   const nyf = ty.fine;
   const nyc = ty.coarse;
+  const linearY = ty.kind === 'linear';
   for (let i = 0; i < tx.fine; i++) {
     for (let pa = 0; pa < 2; pa++) {
       const I = pa === 0 ? (tx.p0[i] as number) : (tx.p1[i] as number);
@@ -134,13 +137,21 @@ export function restrict(fine: Float64Array, coarse: Float64Array, tx: Transfer1
       const wx = pa === 0 ? (tx.w0[i] as number) : (tx.w1[i] as number);
       const fs = i * nyf;
       const cs = I * nyc;
-      for (let j = 0; j < nyf; j++) {
-        const v = wx * (fine[fs + j] as number);
-        const J0 = ty.p0[j] as number;
-        coarse[cs + J0] = (coarse[cs + J0] as number) + (ty.w0[j] as number) * v;
-        const J1 = ty.p1[j] as number;
-        if (J1 >= 0) coarse[cs + J1] = (coarse[cs + J1] as number) + (ty.w1[j] as number) * v;
+      if (!linearY) {
+        for (let j = 0; j < nyf; j++) coarse[cs + j] = (coarse[cs + j] as number) + wx * (fine[fs + j] as number);
+        continue;
       }
+      // Fine j even -> coarse j/2 (weight 1); j odd inside -> half to each neighbour; the last -> the last.
+      let j = 0;
+      for (; j + 2 < nyf; j += 2) {
+        const half = 0.5 * wx * (fine[fs + j + 1] as number);
+        const cj = cs + (j >> 1);
+        coarse[cj] = (coarse[cj] as number) + wx * (fine[fs + j] as number) + half;
+        coarse[cj + 1] = (coarse[cj + 1] as number) + half;
+      }
+      const cj = cs + (j >> 1);
+      coarse[cj] = (coarse[cj] as number) + wx * (fine[fs + j] as number);
+      if (j + 1 < nyf) coarse[cj + 1] = (coarse[cj + 1] as number) + wx * (fine[fs + j + 1] as number);
     }
   }
 }
@@ -149,6 +160,7 @@ export function restrict(fine: Float64Array, coarse: Float64Array, tx: Transfer1
 export function prolongAdd(coarse: Float64Array, fine: Float64Array, tx: Transfer1D, ty: Transfer1D): void {
   const nyf = ty.fine;
   const nyc = ty.coarse;
+  const linearY = ty.kind === 'linear';
   for (let i = 0; i < tx.fine; i++) {
     for (let pa = 0; pa < 2; pa++) {
       const I = pa === 0 ? (tx.p0[i] as number) : (tx.p1[i] as number);
@@ -156,12 +168,21 @@ export function prolongAdd(coarse: Float64Array, fine: Float64Array, tx: Transfe
       const wx = pa === 0 ? (tx.w0[i] as number) : (tx.w1[i] as number);
       const fs = i * nyf;
       const cs = I * nyc;
-      for (let j = 0; j < nyf; j++) {
-        const J1 = ty.p1[j] as number;
-        let v = (ty.w0[j] as number) * (coarse[cs + (ty.p0[j] as number)] as number);
-        if (J1 >= 0) v += (ty.w1[j] as number) * (coarse[cs + J1] as number);
-        fine[fs + j] = (fine[fs + j] as number) + wx * v;
+      if (!linearY) {
+        for (let j = 0; j < nyf; j++) fine[fs + j] = (fine[fs + j] as number) + wx * (coarse[cs + j] as number);
+        continue;
       }
+      let j = 0;
+      for (; j + 2 < nyf; j += 2) {
+        const cj = cs + (j >> 1);
+        const a = coarse[cj] as number;
+        const b = coarse[cj + 1] as number;
+        fine[fs + j] = (fine[fs + j] as number) + wx * a;
+        fine[fs + j + 1] = (fine[fs + j + 1] as number) + 0.5 * wx * (a + b);
+      }
+      const cj = cs + (j >> 1);
+      fine[fs + j] = (fine[fs + j] as number) + wx * (coarse[cj] as number);
+      if (j + 1 < nyf) fine[fs + j + 1] = (fine[fs + j + 1] as number) + wx * (coarse[cj + 1] as number);
     }
   }
 }
