@@ -61,6 +61,7 @@ export function heatmapChartSpec(c: Case, study: Fin2DStudy, size: ChartSize, ra
   const subtitle = [
     `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError)} (GCI, ${study.grids.length} grids).`,
     `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; tip centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
+    r.truncatedInfinite ? 'Infinite fin: the section is cut where the field has decayed and closed by its exact slowest mode.' : '',
   ].filter((s) => s !== '');
   return {
     title: `Temperature in the fin section: ${c.name}`,
