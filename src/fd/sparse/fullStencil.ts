@@ -23,25 +23,21 @@ export function emptyFullStencil(nodesX: number, nodesY: number): FullStencil {
 
 export function toFullStencil(a: Stencil9): FullStencil {
   const { nodesX: nx, nodesY: ny, diag, east, north, northEast, southEast } = a;
+  const n = nx * ny;
   const f = emptyFullStencil(nx, ny);
-  const [sw, w, nw, s, centre, n, se, e, ne] = f.c;
+  const [sw, w, nw, s, centre, nn, se, e, ne] = f.c;
+  // Block copies: the symmetric form keeps every coupling that would point outside the grid at zero
+  // (stencil9.ts), so the shifted copies below put zeros exactly where the full form needs them.
   centre.set(diag);
-  for (let i = 0; i < nx; i++) {
-    for (let j = 0; j < ny; j++) {
-      const p = i * ny + j;
-      if (j + 1 < ny) n[p] = north[p] as number;
-      if (j > 0) s[p] = north[p - 1] as number;
-      if (i + 1 < nx) {
-        e[p] = east[p] as number;
-        if (j + 1 < ny) ne[p] = northEast[p] as number;
-        if (j > 0) se[p] = southEast[p] as number;
-      }
-      if (i > 0) {
-        w[p] = east[p - ny] as number;
-        if (j > 0) sw[p] = northEast[p - ny - 1] as number;
-        if (j + 1 < ny) nw[p] = southEast[p - ny + 1] as number;
-      }
-    }
+  nn.set(north);
+  e.set(east);
+  ne.set(northEast);
+  se.set(southEast);
+  s.set(north.subarray(0, n - 1), 1); // S(p) = N(p - 1)
+  if (n > ny) {
+    w.set(east.subarray(0, n - ny), ny); // W(p) = E(p - ny)
+    nw.set(southEast.subarray(1, n - ny + 1), ny); // NW(p) = SE(p - ny + 1)
+    if (n > ny + 1) sw.set(northEast.subarray(0, n - ny - 1), ny + 1); // SW(p) = NE(p - ny - 1)
   }
   return f;
 }
