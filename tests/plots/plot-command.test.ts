@@ -2,10 +2,10 @@
  * `fincheck plot` driven with real argv in-process: files, sizes, formats, JSON, and the refusals
  * (exit 2, a message naming the option or the profile, nothing written). The demo case is invented data.
  */
-import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readPngDpi } from '../../src/images/index.js';
 import { cli } from '../cli/run.js';
 import { decodePng, svgTexts, wellFormednessError } from '../images/helpers.js';
@@ -16,6 +16,10 @@ let dir: string;
 
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'fincheck-plot-'));
+});
+
+afterAll(() => {
+  rmSync(dir, { recursive: true, force: true });
 });
 
 /** A fresh empty folder for one test. */

@@ -4,7 +4,7 @@
  * text width = 680 CSS px at 96 px/in) has nothing wider than the page. Skipped, with that reason in its
  * name, only where no Chromium is installed (.ci/run installs it).
  */
-import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -61,6 +61,7 @@ describe('HTML report in headless Chromium', () => {
       expect(readFileSync(join(out, 'report.html'), 'utf8').length).toBeGreaterThan(0);
     } finally {
       await browser.close();
+      rmSync(out, { recursive: true, force: true });
     }
   });
 });

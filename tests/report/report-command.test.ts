@@ -4,10 +4,10 @@
  * date), the same bytes for the same input and date, and the refusals (exit 2, nothing written).
  * The demo case is invented data; nothing here checks its numbers against a published value.
  */
-import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import { CAUTIONS } from '../../src/compare/cautions.js';
 import { VERSION } from '../../src/version.js';
 import { cli } from '../cli/run.js';
@@ -29,6 +29,10 @@ beforeAll(async () => {
   stdout = r.stdout;
   html = readFileSync(join(out, 'report.html'), 'utf8');
   markdown = readFileSync(join(out, 'report.md'), 'utf8');
+});
+
+afterAll(() => {
+  rmSync(root, { recursive: true, force: true });
 });
 
 /** expect(haystack).toContain(needle) without printing a 600 kB report when it fails. */
