@@ -60,12 +60,16 @@ export function closedForm(c: LinearFinCase, eq: EquivalentUniformFin): ClosedFo
             ? { kind: 'temperature', thetaTip: tip.T_degC - c.convection.ambient_degC }
             : { kind: tip.kind };
       const at = (theta0: number): number => uniformFin({ h, k, P, A, L, thetaBase: theta0, tip: uTip }).heatRate;
-      const r = uniformFin({ h, k, P, A, L, thetaBase: 1, tip: uTip });
-      const offset = tip.kind === 'temperature' ? at(0) : 0;
+      const r = uniformFin({ h, k, P, A, L, thetaBase: eq.thetaBase, tip: uTip });
+      // Affine in theta0 (the prescribed tip excess makes an offset): two evaluations at nonzero excesses,
+      // since the tip-to-base ratio is undefined at theta0 = 0.
+      const q1 = at(eq.thetaBase);
+      const slope = (at(2 * eq.thetaBase) - q1) / eq.thetaBase;
+      const offset = tip.kind === 'temperature' ? q1 - slope * eq.thetaBase : 0;
       return {
         ok: true,
         value: {
-          slope: at(1) - offset,
+          slope,
           offset,
           formulaEfficiency: r.efficiency,
           m: r.m,

@@ -74,6 +74,17 @@ describe('fincheck check --json', () => {
   });
 });
 
+describe('fincheck check, prescribed tip temperature', () => {
+  it('R1 with the tip held at 35 degC (theta_L = 15 K): closed form 29.76665185 W, fd-1d within 1e-6', async () => {
+    // Incropera et al., Table 3.4 case C (from memory for the table number); value computed with mpmath.
+    const tipC = caseFile('r1-tip.yaml', (await import('node:fs')).readFileSync(R1, 'utf8').replace('tip: convective', 'tip: { temperature: 35 degC }'));
+    const j = JSON.parse((await cli('check', tipC, '--json', '--reference', '1d')).stdout);
+    const cf = j.models.find((m: { model: string }) => m.model === 'closed-form');
+    expect(Math.abs(cf.heatRate_W / 29.76665185 - 1)).toBeLessThan(1e-9);
+    expect(Math.abs(j.reference.heatRate_W / 29.76665185 - 1)).toBeLessThan(1e-6);
+  });
+});
+
 describe('fincheck check with the 2-D reference', () => {
   // Plate fin with Bi = h b / k = 0.1 and mL = 1 (b = t/2 = 1 mm, L = b / sqrt(Bi)), insulated edges, convective
   // tip with the face h. Exact 2-D eigen-series (separation of variables for the rectangular fin, cf. Lau &
