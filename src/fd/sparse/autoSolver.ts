@@ -4,8 +4,8 @@
  *
  * Cost models (multiply-adds; N nodes, w = short side + 1):
  *   banded Cholesky   ~ N w^2 / 2 to factor, 2 N w per solve, N (w + 1) doubles of storage;
- *   MG-preconditioned CG ~ CG_WORK_PER_NODE x N (about 6-9 iterations of ~100 operations per node,
- *   measured on the fin grids of tests/fd2d), storage ~ 25 N doubles.
+ *   MG-preconditioned CG ~ CG_WORK_PER_NODE x N in the same units (6-9 iterations on the fin grids of
+ *   tests/fd2d), storage ~ 30 N doubles.
  * The banded factor is used while it is the cheaper of the two and its storage stays below
  * MAX_BANDED_BYTES; the short direction is numbered fastest (the matrix is transposed when the grid has
  * fewer nodes along than across).
@@ -23,8 +23,13 @@ export interface PreparedSolver2D {
   solve(system: System2D): Float64Array;
 }
 
-/** Operations per node of a full MG-PCG solve (~13 iterations x ~75), in banded multiply-add units. */
-const CG_WORK_PER_NODE = Number(process.env.CGW ?? 1000);
+/**
+ * Cost of a full MG-PCG solve per node, in units of one banded multiply-add. Measured on thin plate-fin
+ * grids (CPU time, same machine): MG-PCG ~0.9 us per node, the banded factor ~1.7 ns per multiply-add;
+ * the two met at 2000 x 30 nodes (w^2/2 = 481): 50 ms each. Banded wins below (2000 x 20: 20 ms against
+ * 94 ms), MG above (2000 x 50: 86 ms against 194 ms; 500 x 80: 32 ms against 181 ms).
+ */
+const CG_WORK_PER_NODE = 500;
 const MAX_BANDED_BYTES = 256 * 1024 * 1024;
 
 export function chooseSolverMethod(nodesX: number, nodesY: number): SolverMethod {
