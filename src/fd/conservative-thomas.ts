@@ -17,7 +17,8 @@
  *   s'_i = s_i - l_i s'_{i-1} / d'_{i-1},   d'_i = s'_i - u_i,   r'_i = r_i - l_i r'_{i-1} / d'_{i-1};
  * mirrored from the tip (rows n-1..p+1), the two sweeps meeting at row p (two-sided, as in
  * tridiagonal.ts: two independent chains of divisions run side by side). Back substitution:
- *   x_i = (r'_i - u_i x_{i+1}) / d'_i (top half),  x_j = (r'_j - l_j x_{j-1}) / d'_j (bottom half).
+ *   x_i = (r'_i - u_i x_{i+1}) / d'_i (top half),  x_j = (r'_j - l_j x_{j-1}) / d'_j (bottom half),
+ * with the factors u_i / d'_i and l_j / d'_j kept from the sweeps (one array read per back step).
  * Algebraically the same solution as Thomas for any nonsingular system without pivoting.
  */
 import type { TridiagonalSolver, TridiagonalSystem } from './tridiagonal.js';
@@ -72,48 +73,52 @@ export function conservativeThomasInto(system: TridiagonalSystem, solution: Floa
   const n = rowSum.length;
   if (n < 3) return conservativeThomasFromTipInto(system, solution, work);
   const x = solution; // r'_i / d'_i during the sweeps, then the solution
-  const inverse = work; // 1 / d'_i
+  const factor = work; // u_i / d'_i above row p, l_j / d'_j below: the back-substitution factors
   const p = n >> 1;
   const last = n - 1;
   let sumTop = rowSum[0] as number;
   let w = 1 / (sumTop - (upper[0] as number));
-  inverse[0] = w;
+  factor[0] = (upper[0] as number) * w;
   x[0] = (rhs[0] as number) * w;
   let ratioTop = sumTop * w; // s'_{i-1} / d'_{i-1}
   let sumBottom = rowSum[last] as number;
   let v = 1 / (sumBottom - (lower[last] as number));
-  inverse[last] = v;
+  factor[last] = (lower[last] as number) * v;
   x[last] = (rhs[last] as number) * v;
   let ratioBottom = sumBottom * v;
   let i = 1;
   let j = last - 1;
   for (; i < p && j > p; i++, j--) {
     const l = lower[i] as number;
+    const uTop = upper[i] as number;
     sumTop = (rowSum[i] as number) - l * ratioTop;
-    w = 1 / (sumTop - (upper[i] as number));
-    inverse[i] = w;
+    w = 1 / (sumTop - uTop);
+    factor[i] = uTop * w;
     ratioTop = sumTop * w;
     x[i] = ((rhs[i] as number) - l * (x[i - 1] as number)) * w;
     const u = upper[j] as number;
+    const lBottom = lower[j] as number;
     sumBottom = (rowSum[j] as number) - u * ratioBottom;
-    v = 1 / (sumBottom - (lower[j] as number));
-    inverse[j] = v;
+    v = 1 / (sumBottom - lBottom);
+    factor[j] = lBottom * v;
     ratioBottom = sumBottom * v;
     x[j] = ((rhs[j] as number) - u * (x[j + 1] as number)) * v;
   }
   for (; i < p; i++) {
     const l = lower[i] as number;
+    const uTop = upper[i] as number;
     sumTop = (rowSum[i] as number) - l * ratioTop;
-    w = 1 / (sumTop - (upper[i] as number));
-    inverse[i] = w;
+    w = 1 / (sumTop - uTop);
+    factor[i] = uTop * w;
     ratioTop = sumTop * w;
     x[i] = ((rhs[i] as number) - l * (x[i - 1] as number)) * w;
   }
   for (; j > p; j--) {
     const u = upper[j] as number;
+    const lBottom = lower[j] as number;
     sumBottom = (rowSum[j] as number) - u * ratioBottom;
-    v = 1 / (sumBottom - (lower[j] as number));
-    inverse[j] = v;
+    v = 1 / (sumBottom - lBottom);
+    factor[j] = lBottom * v;
     ratioBottom = sumBottom * v;
     x[j] = ((rhs[j] as number) - u * (x[j + 1] as number)) * v;
   }
@@ -125,13 +130,11 @@ export function conservativeThomasInto(system: TridiagonalSystem, solution: Floa
   let down = p - 1;
   let up = p + 1;
   for (; down >= 0 && up < n; down--, up++) {
-    x[down] = (x[down] as number) - (upper[down] as number) * (x[down + 1] as number) * (inverse[down] as number);
-    x[up] = (x[up] as number) - (lower[up] as number) * (x[up - 1] as number) * (inverse[up] as number);
+    x[down] = (x[down] as number) - (factor[down] as number) * (x[down + 1] as number);
+    x[up] = (x[up] as number) - (factor[up] as number) * (x[up - 1] as number);
   }
-  for (; down >= 0; down--) {
-    x[down] = (x[down] as number) - (upper[down] as number) * (x[down + 1] as number) * (inverse[down] as number);
-  }
-  for (; up < n; up++) x[up] = (x[up] as number) - (lower[up] as number) * (x[up - 1] as number) * (inverse[up] as number);
+  for (; down >= 0; down--) x[down] = (x[down] as number) - (factor[down] as number) * (x[down + 1] as number);
+  for (; up < n; up++) x[up] = (x[up] as number) - (factor[up] as number) * (x[up - 1] as number);
   return x;
 }
 
