@@ -9,6 +9,7 @@
  * fin (width x section for straight fins, 2 pi x section for pins and annular fins).
  */
 import type { Case } from '../case/types.js';
+import { UsageError } from '../errors.js';
 import { buildGrid2D, type Grid2D } from '../mesh/grid2d.js';
 import { assembleConduction2D } from './assemble2d.js';
 import { buildSystem2D, coefficientAt, discretizeBoundaries, lumpedIntegral } from './assemble2dBoundary.js';
@@ -90,7 +91,20 @@ export function solveFin2D(c: Case, opts: Fin2DOptions): Fin2DResult {
   return solveFin2DProblem(fin2dProblem(c), opts);
 }
 
+/**
+ * Largest grid accepted: ~500 bytes per node were measured (1000 x 1000 nodes: ~500 MB resident with the
+ * multigrid hierarchy), so 2e6 nodes stay near the 1 GB budget.
+ */
+export const MAX_NODES_2D = 2_000_000;
+
 export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fin2DResult {
+  const { nx, ny } = opts;
+  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
+    throw new UsageError(`--grid: nodes along and across must be whole numbers >= 2 (got ${nx} x ${ny})`);
+  }
+  if (nx * ny > MAX_NODES_2D) {
+    throw new UsageError(`--grid: ${nx} x ${ny} = ${nx * ny} nodes is more than the ${MAX_NODES_2D} that fit in about 1 GB`);
+  }
   const grid = buildGrid2D(problem.section, {
     nx: opts.nx,
     ny: opts.ny,
@@ -123,7 +137,6 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   const hBase = coefficientAt(problem.h, 0, problem.section.length);
   const effectiveness = rates.base / (hBase * baseArea * thetaBase);
 
-  const { nodesX: nx, nodesY: ny } = grid;
   const line = (j: number): Fin2DLine => {
     const x_m = new Float64Array(nx);
     const y_m = new Float64Array(nx);

@@ -165,3 +165,20 @@ describe('what the 2-D model does not solve', () => {
     expect(solveFin2D(base, { nx: 101, ny: 9, method: 'mg-pcg' }).solver).toBe('mg-pcg');
   });
 });
+
+describe('grid requests', () => {
+  const c = finCase({ kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, 200, { kind: 'uniform', h: 50 }, { kind: 'adiabatic' });
+  it.each([
+    [1, 5],
+    [10, 1.5],
+    [3000, 1000],
+  ])('%s x %s nodes is refused as a usage error', (nx, ny) => {
+    expect(() => solveFin2D(c, { nx, ny })).toThrow(UsageError);
+  });
+
+  it('the smallest grid (2 x 2 nodes) still conserves heat', () => {
+    const r = solveFin2D(c, { nx: 2, ny: 2 });
+    expect(r.energyBalance).toBeLessThan(1e-12);
+    expect(r.heatRate_W).toBeGreaterThan(0);
+  });
+});
