@@ -36,7 +36,8 @@ function timed(run: () => void): { wall: number; cpu: number } {
 }
 
 const report = (runs: { wall: number; cpu: number }[], digits: number) =>
-  `median ${median(runs.map((r) => r.wall)).toFixed(digits)} ms (CPU ${median(runs.map((r) => r.cpu)).toFixed(digits)} ms)`;
+  `median ${median(runs.map((r) => r.wall)).toFixed(digits)} ms (CPU ${median(runs.map((r) => r.cpu)).toFixed(digits)} ms, ` +
+  `fastest ${Math.min(...runs.map((r) => r.wall)).toFixed(digits)} ms)`;
 
 type Into = (system: TridiagonalSystem, solution: Float64Array, work: Float64Array) => Float64Array;
 const SOLVERS: [string, Into][] = [
