@@ -48,11 +48,22 @@ export function factorLines(a: FullStencil): LineFactors {
 export function zebraLineGaussSeidel(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, evenFirst: boolean): void {
   const nx = a.nodesX;
   const first = evenFirst ? 0 : 1;
-  for (let i = first; i < nx; i += 2) solveColumn(a, lines, b, x, work, i);
-  for (let i = 1 - first; i < nx; i += 2) solveColumn(a, lines, b, x, work, i);
+  for (let i = first; i < nx; i += 2) solveColumn(a, lines, b, x, work, i, true);
+  for (let i = 1 - first; i < nx; i += 2) solveColumn(a, lines, b, x, work, i, true);
 }
 
-function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, i: number): void {
+/**
+ * The pre-smoothing zebra sweep from x = 0 (even columns, then odd): the even columns see only zero
+ * neighbours, so they are solved from b alone and x needs no clearing (each odd column is written before
+ * it is read).
+ */
+export function zebraFromZero(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array): void {
+  const nx = a.nodesX;
+  for (let i = 0; i < nx; i += 2) solveColumn(a, lines, b, x, work, i, false);
+  for (let i = 1; i < nx; i += 2) solveColumn(a, lines, b, x, work, i, true);
+}
+
+function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Float64Array, work: Float64Array, i: number, neighbours: boolean): void {
   const { nodesX: nx, nodesY: ny, c } = a;
   const start = i * ny;
   const last = start + ny - 1;
@@ -61,10 +72,8 @@ function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Flo
   // Forward elimination with the right-hand side built on the fly (one pass):
   // rhs_j = b_j - (couplings to the west and east columns) x, d'_j = (rhs_j - S_j d'_{j-1}) / pivot_j.
   // The first and last rows are peeled: their couplings beyond the grid's edge are zero and not read.
-  const westOf = i > 0 ? -ny : 0;
-  const eastOf = i + 1 < nx ? ny : 0;
-  const hasWest = westOf !== 0;
-  const hasEast = eastOf !== 0;
+  const hasWest = neighbours && i > 0;
+  const hasEast = neighbours && i + 1 < nx;
   let prev = 0;
   for (let p = start; p <= last; p++) {
     let rhs = b[p] as number;

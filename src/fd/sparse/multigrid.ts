@@ -15,7 +15,7 @@
 import { factorBandedCholesky, type BandedFactor } from './bandedCholesky.js';
 import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, type Transfer1D } from './coarsen.js';
 import { toFullStencil, toStencil9, type FullStencil } from './fullStencil.js';
-import { factorLines, zebraLineGaussSeidel, type LineFactors } from './lineSmoother.js';
+import { factorLines, zebraFromZero, zebraLineGaussSeidel, type LineFactors } from './lineSmoother.js';
 import type { Stencil9 } from './stencil9.js';
 
 export interface MultigridLevel {
@@ -92,8 +92,7 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
       return;
     }
     const { a: al, lines, r, work } = level;
-    x.fill(0);
-    zebraLineGaussSeidel(al, lines, b, x, work, true);
+    zebraFromZero(al, lines, b, x, work);
     residualAfterZebra(al, x, r);
     const next = levels[l + 1] as Level;
     restrict(r, next.b, level.tx as Transfer1D, level.ty as Transfer1D);
