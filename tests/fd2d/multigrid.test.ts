@@ -34,8 +34,9 @@ describe('multigrid-preconditioned CG', () => {
     const { x } = solveMgPcg({ matrix: a, rhs, excess: a.excess });
     const ref = new CholeskyDecomposition(new Matrix(stencilToDense(a))).solve(Matrix.columnVector(Array.from(rhs))).getColumn(0);
     const scale = Math.max(...ref.map(Math.abs));
-    // CG stops at a relative residual of 1e-13; with condition numbers < 1e3 the error is < 1e-10.
-    ref.forEach((v, p) => expect(Math.abs((x[p] as number) - v)).toBeLessThan(1e-10 * scale));
+    // CG stops at a relative residual of 1e-12; with condition numbers < 1e3 the error is < 1e-9 relative,
+    // measured below 1e-10.
+    ref.forEach((v, p) => expect(Math.abs((x[p] as number) - v)).toBeLessThan(1e-9 * scale));
   });
 
   it('the V-cycle is a symmetric positive definite operator (required by CG)', () => {

@@ -14,7 +14,7 @@ import { buildMultigrid, type Multigrid } from './multigrid.js';
 import { applyDifferenceForm, applyStencil9, coupledRhsNorm1, residual, type Solver2D, type System2D } from './stencil9.js';
 
 export interface PcgOptions {
-  /** Relative residual target (default 1e-13). */
+  /** Relative residual target (default 1e-12). */
   tolerance?: number;
   /** Iterations per CG run (default 100). */
   maxIterations?: number;
