@@ -102,6 +102,10 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
     throw new UsageError(`--grid: nodes along and across must be whole numbers >= 2 (got ${nx} x ${ny})`);
   }
+  const segments = problem.section.breakpoints.length - 1;
+  if (nx - 1 < segments) {
+    throw new UsageError(`--grid: the profile has ${segments + 1} points, so it needs at least ${segments + 1} nodes along (got ${nx})`);
+  }
   if (nx * ny > MAX_NODES_2D) {
     throw new UsageError(`--grid: ${nx} x ${ny} = ${nx * ny} nodes is more than the ${MAX_NODES_2D} that fit in about 1 GB`);
   }
