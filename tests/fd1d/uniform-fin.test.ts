@@ -99,9 +99,9 @@ describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; sheet §1a values)
   const { result, study } = studyFin1D(fin);
 
   test('heat rate on the default study grids', () => {
-    // 1e-7: the design target of the default grids for smooth fins (DEFAULT_STUDY_NODES); the finest
-    // grid (8000 cells) is second order with an error ~8e-9 (mL)^2 / 4 <= 3e-8 for mL <= 3.7 (P2).
-    expect(Math.abs(relative(result.heatRate, expected.q))).toBeLessThan(1e-7);
+    // 1e-6: the acceptance level of fd-1d on the default grids (DEFAULT_STUDY_NODES); the finest grid
+    // (4000 cells) is second order with an error ~8e-9 (mL)^2 <= 1.1e-7 for mL <= 3.7 (P2).
+    expect(Math.abs(relative(result.heatRate, expected.q))).toBeLessThan(1e-6);
     // The GCI (Celik et al. 2008) must bound the true error of the finest grid, up to the rounding
     // of the table's 10 significant digits (half a unit in the last digit).
     const tableRounding = 0.5 * Math.pow(10, Math.floor(Math.log10(expected.q)) - 9) / expected.q;
