@@ -73,6 +73,10 @@ async function timeCli(label: string, args: readonly string[], target: string, l
 
 export async function benchProcess(): Promise<BenchRow[]> {
   const rows: BenchRow[] = [];
+  const check1d = ['check', DEMO_CASE, '--reference', '1d'];
+  const probe1d = runCli(check1d);
+  if (probe1d.status === 0) rows.push(await timeCli(`fincheck check ${DEMO_CASE} --reference 1d (whole process)`, check1d, '<= 0.5 s', 500, probe1d));
+  else rows.push(skipped(AREA, `fincheck check --reference 1d`, '<= 0.5 s', `exit ${probe1d.status}: ${probe1d.stderr.trim()}`));
   const check = ['check', DEMO_CASE];
   const first = runCli(check);
   if (first.status !== 0) {
@@ -91,4 +95,44 @@ export async function benchProcess(): Promise<BenchRow[]> {
     rows.push(await timeCli(item2d, check2d, '<= 1.5 s', 1500, probe));
   }
   return rows;
+}
+
+/** `fincheck report` and `fincheck map` as whole processes (files into a temporary folder, removed after). */
+export async function benchCommands(): Promise<BenchRow[]> {
+  const { mkdtempSync, rmSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const dir = mkdtempSync(join(tmpdir(), 'fincheck-bench-'));
+  const rows: BenchRow[] = [];
+  try {
+    const report = ['report', DEMO_CASE, '--out', join(dir, 'report')];
+    const probe = runCli(report);
+    if (probe.status === 0) rows.push(await timeCli(`fincheck report ${DEMO_CASE} (whole process)`, report, '<= 1 s', 1000, probe));
+    else rows.push(skipped(AREA, 'fincheck report', '<= 1 s', `exit ${probe.status}: ${probe.stderr.trim()}`));
+    const map = ['map', DEMO_CASE, '--x', 'fin.thickness=1mm:4mm', '--y', 'convection.h=10:200', '--steps', '41x41', '--reference', '1d', '--out', join(dir, 'map')];
+    const probeMap = runCli(map);
+    if (probeMap.status === 0) rows.push(await timeCli('fincheck map 41x41, 1-D reference, default jobs (whole process)', map, '<= 2 s', 2000, probeMap));
+    else rows.push(skipped(AREA, 'fincheck map 41x41 1-D', '<= 2 s', `exit ${probeMap.status}: ${probeMap.stderr.trim()}`));
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+  return rows;
+}
+
+/** The 41x41 map with the 2-D reference: one run (about a minute), only when asked: `npm run bench -- map2d`. */
+export async function benchMap2D(): Promise<BenchRow[]> {
+  const { mkdtempSync, rmSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const dir = mkdtempSync(join(tmpdir(), 'fincheck-bench-'));
+  try {
+    const args = ['map', DEMO_CASE, '--x', 'fin.thickness=1mm:4mm', '--y', 'convection.h=10:200', '--steps', '41x41', '--reference', '2d', '--out', join(dir, 'map')];
+    const t0 = performance.now();
+    const r = runCli(args);
+    const ms = performance.now() - t0;
+    if (r.status !== 0) return [skipped(AREA, 'fincheck map 41x41, 2-D reference', '<= 60 s', `exit ${r.status}: ${r.stderr.trim()}`)];
+    return [{ area: AREA, item: 'fincheck map 41x41, 2-D reference, default jobs (whole process)', target: '<= 60 s', measured: formatMs(ms), cpu: cpuText(r.cpuMs), verdict: atMost(ms, 60_000), note: 'one run (it takes about a minute); CPU = the child\'s own, main thread only (workers not counted)' }];
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
 }

@@ -3,6 +3,8 @@
  *
  * Areas (one file each, each returns rows): oned.ts (tridiagonal solves), twod.ts (2-D grid solves
  * against a general banded LU), images.ts (PNG charts), process.ts (whole `fincheck check` runs).
+ * nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
+ * (the 41x41 map with the 2-D reference, about a minute) runs only when named.
  * Run a subset by name: `npm run bench -- 1d images`. Nothing is written to disk: the table is printed.
  *
  * The machine is shared (2 cores, other developers' builds and tests): the load average is printed
@@ -13,7 +15,8 @@ import { cpus, loadavg } from 'node:os';
 import { benchImages } from './images.js';
 import { errored, type BenchRow } from './measure.js';
 import { benchOneD } from './oned.js';
-import { benchProcess } from './process.js';
+import { benchCommands, benchMap2D, benchProcess } from './process.js';
+import { benchNonlinear } from './nonlinear.js';
 import { benchTwoD } from './twod.js';
 
 const AREAS: Record<string, () => Promise<BenchRow[]>> = {
@@ -21,7 +24,13 @@ const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   '2d': benchTwoD,
   images: benchImages,
   process: benchProcess,
+  nonlinear: benchNonlinear,
+  commands: benchCommands,
+  map2d: benchMap2D,
 };
+
+/** Areas run when none is named: all but the minute-long 2-D map. */
+const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands'];
 
 function loadText(): string {
   return loadavg()
@@ -50,7 +59,7 @@ async function main(): Promise<void> {
   const asked = process.argv.slice(2);
   const unknown = asked.filter((a) => !(a in AREAS));
   if (unknown.length > 0) throw new Error(`bench: unknown area(s) ${unknown.join(', ')}; choose from ${Object.keys(AREAS).join(', ')}`);
-  const names = asked.length > 0 ? asked : Object.keys(AREAS);
+  const names = asked.length > 0 ? asked : DEFAULT_AREAS;
   const cpu = cpus()[0]?.model ?? 'unknown CPU';
   console.log(`fincheck bench: Node ${process.version}, ${cpus().length} x ${cpu}`);
   console.log(`load average (1/5/15 min) at start: ${loadText()}`);

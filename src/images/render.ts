@@ -52,14 +52,14 @@ export async function svgToPng(svg: string, options: RenderOptions = {}): Promis
   if (options.width !== undefined && !(Number.isInteger(options.width) && options.width > 0)) {
     throw new RangeError(`render: width must be a positive integer, got ${options.width}`);
   }
-  const { Resvg } = await loadResvg();
-  const resvg = new Resvg(svg, {
+  const { renderAsync } = await loadResvg();
+  // renderAsync rasterises on libuv's thread pool: several charts render in parallel (map outputs).
+  const rendered = await renderAsync(svg, {
     font: { loadSystemFonts: false, fontFiles: fontFiles(), defaultFontFamily: fontFamily },
     fitTo: options.width !== undefined ? { mode: 'width', value: options.width } : { mode: 'zoom', value: dpi / 96 },
     logLevel: 'off',
   });
-  const png = resvg.render().asPng();
-  return setPngDpi(png, dpi);
+  return setPngDpi(rendered.asPng(), dpi);
 }
 
 export type ChartFormat = 'png' | 'svg';

@@ -28,9 +28,14 @@ export async function renderMapFiles(run: MapRun, format: ChartFormat, shouldSto
     ...run.job.check.models.map((model) => ({ name: `map-${model}.${format}`, svg: () => modelChart(run, model).svg })),
     { name: `overview.${format}`, svg: () => overviewChart(run).svg },
   ];
+  // Build each SVG on this thread, rasterise them all at once (resvg renders on the thread pool).
+  const pending: Promise<OutputFile>[] = [];
   for (const chart of charts) {
     if (shouldStop()) throw new OutputsInterrupted('interrupted while drawing the charts');
-    files.push({ name: chart.name, data: await chartBytes(chart.svg(), format) });
+    const svg = chart.svg();
+    pending.push(chartBytes(svg, format).then((data) => ({ name: chart.name, data })));
   }
+  files.push(...(await Promise.all(pending)));
+  if (shouldStop()) throw new OutputsInterrupted('interrupted while drawing the charts');
   return files;
 }

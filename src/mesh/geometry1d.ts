@@ -203,6 +203,15 @@ export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinG
 
 /** The 1-D geometry of a case's fin, for every profile of the case-file contract. */
 export function finGeometry(c: Case): FinGeometry1D {
+  return { ...profileGeometry(c), key: geometryKey(c) };
+}
+
+/** Identifies a case's A(x) and P(x): the profile with its dimensions (typed arrays as lists) and the edges. */
+function geometryKey(c: Case): string {
+  return JSON.stringify([c.fin.profile, c.fin.edges], (_k, v: unknown) => (v instanceof Float64Array ? Array.from(v) : v));
+}
+
+function profileGeometry(c: Case): FinGeometry1D {
   const p = c.fin.profile;
   const edges = c.fin.edges;
   const straight = (length: number, baseSize: number, tipSize: number, exponent: TaperExponent, width: number) =>

@@ -134,7 +134,26 @@ export function gridNodes(geometry: FinGeometry1D, spec: Grid1DSpec): { x: Float
 }
 
 /** The vertex-centred mesh of a geometry: node positions, interface areas and CV surfaces. */
+/**
+ * Recently built meshes by geometry key and grid spec. A map of checks over h or k (or any key that
+ * leaves the profile alone) rebuilds the same meshes at every point; a mesh is read-only plain data, so
+ * one copy serves them all. 128 entries cover the three study grids of a 41-point row of profiles.
+ */
+const MESH_CACHE_SIZE = 128;
+const meshCache = new Map<string, Mesh1D>();
+
 export function buildMesh1D(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
+  if (geometry.key === undefined) return buildMesh1DUncached(geometry, spec);
+  const key = `${geometry.key}|${spec.cells}|${JSON.stringify(spec.grading ?? null)}|${spec.breakpoints ? Array.from(spec.breakpoints).join(',') : ''}|${spec.refine ?? 1}`;
+  const hit = meshCache.get(key);
+  if (hit) return hit;
+  const mesh = buildMesh1DUncached(geometry, spec);
+  if (meshCache.size >= MESH_CACHE_SIZE) meshCache.delete(meshCache.keys().next().value as string);
+  meshCache.set(key, mesh);
+  return mesh;
+}
+
+function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
   const { x, cellSize } = gridNodes(geometry, spec);
   const n = x.length;
   const dx = new Float64Array(n - 1);

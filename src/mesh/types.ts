@@ -40,6 +40,11 @@ export interface FinGeometry1D {
    * unit of g (with g = h: W/K). Exact to round-off for every profile of the contract.
    */
   readonly perimeterIntegral: (a: number, b: number, gA: number, gB: number) => number;
+  /**
+   * A string that identifies A(x) and P(x) completely (profile kind, dimensions, edges), when the
+   * geometry came from a case: equal keys give equal meshes, so buildMesh1D may reuse one.
+   */
+  readonly key?: string;
 }
 
 /** Which end of the fin a graded grid refines. */
