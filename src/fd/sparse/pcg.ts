@@ -57,9 +57,11 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
   const z = new Float64Array(n);
   const p = new Float64Array(n);
   const q = new Float64Array(n);
-  const multiply = (v: Float64Array, out: Float64Array): void => {
-    if (system.excess === undefined) applyStencil9(system.matrix, v, out);
-    else applyDifferenceForm(system.matrix, system.excess, v, out);
+  /** out = A v; returns v . out. */
+  const multiply = (v: Float64Array, out: Float64Array): number => {
+    if (system.excess !== undefined) return applyDifferenceForm(system.matrix, system.excess, v, out);
+    applyStencil9(system.matrix, v, out);
+    return dot(v, out);
   };
   let iterations = 0;
   let relative = norm1(r) / scale;
@@ -71,8 +73,7 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
     p.set(z);
     let rz = dot(r, z);
     for (let it = 0; it < maxIterations; it++) {
-      multiply(p, q);
-      const alpha = rz / dot(p, q);
+      const alpha = rz / multiply(p, q);
       let size = 0;
       for (let k = 0; k < n; k++) {
         x[k] = (x[k] as number) + alpha * (p[k] as number);

@@ -106,22 +106,30 @@ export function applyStencil9(a: Stencil9, x: Float64Array, out: Float64Array): 
 /**
  * out = sum_{q != p} A_pq (x_q - x_p) + excess_p x_p: A x for a matrix whose row sums are `excess`
  * (zero for a conduction operator K), without the cancellation of the diagonal against the couplings.
+ * Returns x . (A x), which conjugate gradients needs and costs nothing extra here.
  */
-export function applyDifferenceForm(a: Stencil9, excess: Float64Array | null, x: Float64Array, out: Float64Array): Float64Array {
+export function applyDifferenceForm(a: Stencil9, excess: Float64Array | null, x: Float64Array, out: Float64Array): number {
   const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = a;
+  let energy = 0;
   for (let i = 0; i < nx; i++) {
     const start = i * ny;
     if (i === 0 || i === nx - 1 || ny < 3) {
-      for (let j = 0; j < ny; j++) out[start + j] = differenceRowChecked(a, excess, x, i, j);
+      for (let j = 0; j < ny; j++) {
+        const v = differenceRowChecked(a, excess, x, i, j);
+        out[start + j] = v;
+        energy += v * (x[start + j] as number);
+      }
       continue;
     }
-    out[start] = differenceRowChecked(a, excess, x, i, 0);
+    const first = differenceRowChecked(a, excess, x, i, 0);
+    out[start] = first;
+    energy += first * (x[start] as number);
     // Interior rows: every neighbour exists.
     for (let p = start + 1; p < start + ny - 1; p++) {
       const xp = x[p] as number;
       const pw = p - ny;
       const pe = p + ny;
-      out[p] =
+      const v =
         (excess === null ? 0 : (excess[p] as number) * xp) +
         (north[p] as number) * ((x[p + 1] as number) - xp) +
         (north[p - 1] as number) * ((x[p - 1] as number) - xp) +
@@ -131,10 +139,14 @@ export function applyDifferenceForm(a: Stencil9, excess: Float64Array | null, x:
         (east[pw] as number) * ((x[pw] as number) - xp) +
         (northEast[pw - 1] as number) * ((x[pw - 1] as number) - xp) +
         (southEast[pw + 1] as number) * ((x[pw + 1] as number) - xp);
+      out[p] = v;
+      energy += v * xp;
     }
-    out[start + ny - 1] = differenceRowChecked(a, excess, x, i, ny - 1);
+    const lastRow = differenceRowChecked(a, excess, x, i, ny - 1);
+    out[start + ny - 1] = lastRow;
+    energy += lastRow * (x[start + ny - 1] as number);
   }
-  return out;
+  return energy;
 }
 
 function differenceRowChecked(a: Stencil9, excess: Float64Array | null, x: Float64Array, i: number, j: number): number {
