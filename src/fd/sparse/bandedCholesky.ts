@@ -25,6 +25,11 @@ export interface BandedCholesky extends BandedFactor {
   readonly pivotRatio: number;
 }
 
+/** Bytes the factor of a grid with these node counts needs (for the automatic solver choice). */
+export function bandedCholeskyBytes(nodesX: number, nodesY: number): number {
+  return nodesX * nodesY * (nodesY + 3) * 8;
+}
+
 export function factorBandedCholesky(a: Stencil9): BandedCholesky {
   const ny = a.nodesY;
   const n = a.nodesX * ny;
