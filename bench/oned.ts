@@ -81,11 +81,11 @@ export async function benchOneD(): Promise<BenchRow[]> {
         const s = await timeTask(label, () => solve(system, solution, work), budget(nodes));
         rows.push({
           area: AREA,
-          item: `tridiagonal solve alone, ${n} nodes, ${label}`,
-          target: '<= 10 ms',
+          item: `tridiagonal solve alone, ${n} nodes, ${label} (alternative, for comparison)`,
+          target: '-',
           measured: formatMs(s.medianMs),
-      cpu: cpuText(s.cpuMedianMs),
-          verdict: atMost(s.medianMs, 10),
+          cpu: cpuText(s.cpuMedianMs),
+          verdict: 'info',
           note: `${spread(s)}; ${(s.medianMs / C_THOMAS_1E6_MS).toFixed(2)}x the C Thomas (8.1 ms)`,
         });
       }
