@@ -20,9 +20,10 @@ import type { Solver2D } from './sparse/stencil9.js';
 
 /**
  * Grading ratios used by default: cells 8x smaller at the base than at the tip, and at the face than on
- * the mid-plane. Chosen by measurement over the plate-fin series of references.md section 4 (Bi 0.01-2,
- * mL 0.5-4): the worst extrapolated error fell from 2.5e-5 (ratios 4) and 1.2e-4 (one direction only)
- * to 1.2e-5, and the observed order rose from 1.76-1.98 to 1.85-1.99, for the same node counts.
+ * the mid-plane. Chosen by measurement against the plate-fin 2-D series (computed reference values,
+ * script fin2d_series.py; Bi 0.01-2, mL 0.5-4): the worst extrapolated error fell from 2.5e-5
+ * (ratios 4) and 1.2e-4 (one direction only) to 1.2e-5, and the observed order rose from 1.76-1.98 to
+ * 1.85-1.99, for the same node counts.
  */
 export const DEFAULT_GRADING = { base: 8, face: 8 } as const;
 
@@ -99,16 +100,7 @@ export const MAX_NODES_2D = 2_000_000;
 
 export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fin2DResult {
   const { nx, ny } = opts;
-  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
-    throw new UsageError(`--grid: nodes along and across must be whole numbers >= 2 (got ${nx} x ${ny})`);
-  }
-  const segments = problem.section.breakpoints.length - 1;
-  if (nx - 1 < segments) {
-    throw new UsageError(`--grid: the profile has ${segments + 1} points, so it needs at least ${segments + 1} nodes along (got ${nx})`);
-  }
-  if (nx * ny > MAX_NODES_2D) {
-    throw new UsageError(`--grid: ${nx} x ${ny} = ${nx * ny} nodes is more than the ${MAX_NODES_2D} that fit in about 1 GB`);
-  }
+  checkGrid2D(problem, nx, ny);
   const grid = buildGrid2D(problem.section, {
     nx: opts.nx,
     ny: opts.ny,
@@ -141,18 +133,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   const hBase = coefficientAt(problem.h, 0, problem.section.length);
   const effectiveness = rates.base / (hBase * baseArea * thetaBase);
 
-  const line = (j: number): Fin2DLine => {
-    const x_m = new Float64Array(nx);
-    const y_m = new Float64Array(nx);
-    const T_degC = new Float64Array(nx);
-    for (let i = 0; i < nx; i++) {
-      const p = i * ny + j;
-      x_m[i] = grid.x[p] as number;
-      y_m[i] = grid.y[p] as number;
-      T_degC[i] = (field[p] as number) + ambient_degC;
-    }
-    return { x_m, y_m, T_degC };
-  };
+  const line = (j: number): Fin2DLine => gridLine(grid, field, ambient_degC, j);
   return {
     model: 'fd-2d',
     grid,
@@ -176,6 +157,35 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
 }
 
 function sum(a: Float64Array): number {
+/** A usage error unless the grid has whole numbers >= 2 of nodes, one per profile point, and fits in memory. */
+export function checkGrid2D(problem: Fin2DProblem, nx: number, ny: number): void {
+  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
+    throw new UsageError(`--grid: nodes along and across must be whole numbers >= 2 (got ${nx} x ${ny})`);
+  }
+  const segments = problem.section.breakpoints.length - 1;
+  if (nx - 1 < segments) {
+    throw new UsageError(`--grid: the profile has ${segments + 1} points, so it needs at least ${segments + 1} nodes along (got ${nx})`);
+  }
+  if (nx * ny > MAX_NODES_2D) {
+    throw new UsageError(`--grid: ${nx} x ${ny} = ${nx * ny} nodes is more than the ${MAX_NODES_2D} that fit in about 1 GB`);
+  }
+}
+
+/** The nodes j (0: mid-plane or axis, ny - 1: the face) of every column, base to tip, in degC. */
+export function gridLine(grid: Grid2D, field: Float64Array, ambient_degC: number, j: number): Fin2DLine {
+  const { nodesX: nx, nodesY: ny } = grid;
+  const x_m = new Float64Array(nx);
+  const y_m = new Float64Array(nx);
+  const T_degC = new Float64Array(nx);
+  for (let i = 0; i < nx; i++) {
+    const p = i * ny + j;
+    x_m[i] = grid.x[p] as number;
+    y_m[i] = grid.y[p] as number;
+    T_degC[i] = (field[p] as number) + ambient_degC;
+  }
+  return { x_m, y_m, T_degC };
+}
+
   let s = 0;
   for (const v of a) s += v;
   return s;

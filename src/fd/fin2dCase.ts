@@ -14,9 +14,10 @@
  * L_cut = 20 half-thicknesses (radii) and closed by the exact condition of the slowest 2-D mode,
  * -k d(theta)/dx = (k lambda1 / b) theta, where theta ~ cos(lambda1 y/b) exp(-lambda1 x/b) and
  *   planar: lambda1 tan(lambda1) = Bi,   pin: lambda1 J1(lambda1) = Bi J0(lambda1),   Bi = h b / k
- * (separation of variables; the eigenvalue equations of references.md section 4 and 4d). The next mode
- * decays faster by at least exp(-(lambda2 - lambda1) L_cut / b) <= exp(-1.43 * 20) ~ 4e-13 at the cut,
- * so the cut changes the heat rate by less than that.
+ * (separation of variables, as in the 2-D series of scripts fin2d_series.py and pin2d_series.py; an exact
+ * 2-D series for the rectangular fin is published in Moitsheki & Rowjee 2011, Math. Probl. Eng.
+ * 826819). The next mode decays faster by at least exp(-(lambda2 - lambda1) L_cut / b)
+ * <= exp(-1.43 * 20) ~ 4e-13 at the cut, so the cut changes the heat rate by less than that.
  */
 import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';

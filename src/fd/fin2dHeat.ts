@@ -28,22 +28,45 @@ export interface HeatRates2D {
 }
 
 export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): HeatRates2D {
+  // Boundary exchange G (theta - thetaFar) of every node of each non-fixed boundary.
+  const exchangeOf = (side: SideTerms): Float64Array | null =>
+    side.kind === 'fixed'
+      ? null
+      : Float64Array.from(side.nodes, (p, e) => (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta));
+  return heatRatesFromExchange(K, terms, theta, { base: exchangeOf(terms.base), face: exchangeOf(terms.face), tip: exchangeOf(terms.tip) });
+}
+
+/**
+ * The same balances for any boundary law: `exchange[side][e]` is the heat leaving the fin through node e
+ * of that boundary (W per unit depth; null for a fixed boundary), and `potential` the field the conduction
+ * operator K acts on (theta itself, or the Kirchhoff potential of a temperature-dependent k; only its
+ * differences are used).
+ */
+export function heatRatesFromExchange(
+  K: Stencil9,
+  terms: BoundaryTerms2D,
+  potential: Float64Array,
+  exchangeBySide: Record<'base' | 'face' | 'tip', Float64Array | null>,
+): HeatRates2D {
   const ny = K.nodesY;
+  const n = potential.length;
   const sides: SideTerms[] = [terms.base, terms.face, terms.tip];
   // Boundary exchange of every node with its non-fixed boundaries.
-  const exchange = new Float64Array(theta.length);
+  const exchange = new Float64Array(n);
   for (const side of sides) {
-    if (side.kind === 'fixed') continue;
+    const values = exchangeBySide[side.name as 'base' | 'face' | 'tip'];
+    if (side.kind === 'fixed' || values === null) continue;
     side.nodes.forEach((p, e) => {
-      exchange[p] = (exchange[p] as number) + (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta);
+      exchange[p] = (exchange[p] as number) + (values[e] as number);
     });
   }
-  const claimed = new Uint8Array(theta.length);
-  const inSide = new Uint8Array(theta.length);
+  const claimed = new Uint8Array(n);
+  const inSide = new Uint8Array(n);
   const heatIn = (side: SideTerms): number => {
     let q = 0;
     inSide.fill(0);
     for (const p of side.nodes) inSide[p] = 1;
+    const values = exchangeBySide[side.name as 'base' | 'face' | 'tip'];
     side.nodes.forEach((p, e) => {
       if (side.kind === 'fixed') {
         if (claimed[p] === 1) return; // a corner shared by two fixed boundaries counts once
@@ -52,19 +75,19 @@ export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64A
         // nodes of the boundary cancel in pairs and are left out, so no round-off of them remains.
         const i = Math.floor(p / ny);
         const j = p - i * ny;
-        const tp = theta[p] as number;
+        const tp = potential[p] as number;
         let conducted = 0;
         for (let di = -1; di <= 1; di++) {
           for (let dj = -1; dj <= 1; dj++) {
             if (di === 0 && dj === 0) continue;
             const c = couplingOf(K, i, j, di, dj);
             const nb = p + di * ny + dj;
-            if (c !== 0 && inSide[nb] === 0) conducted += c * ((theta[nb] as number) - tp);
+            if (c !== 0 && inSide[nb] === 0) conducted += c * ((potential[nb] as number) - tp);
           }
         }
         q += conducted + (exchange[p] as number);
-      } else {
-        q += (side.conductance[e] as number) * (side.farTheta - (theta[p] as number));
+      } else if (values !== null) {
+        q += -(values[e] as number);
       }
     });
     return q;

@@ -8,8 +8,8 @@
  * Observed order: the scheme is second order, but the flux has a logarithmic singularity at the base
  * corner, where the fixed base temperature meets the cooled face (incompatible Dirichlet and Robin data);
  * its weight grows with Bi. Measured with the default grading: 1.85-1.99 on plate fins (Bi 0.01-2), 1.92-
- * 1.96 on thick sloped fins (Bi = 1), 1.99-2.02 in the thin limit; on uniform grids 1.6-1.9 (references.md
- * section 4 found 1.7-1.85 with an independent uniform-grid solver).
+ * 1.96 on thick sloped fins (Bi = 1), 1.99-2.02 in the thin limit; on uniform grids 1.6-1.9 (the independent
+ * uniform-grid finite-volume check in script fin2d_series.py found 1.7-1.85).
  */
 import type { Case } from '../case/types.js';
 import { fin2dProblem, type Fin2DProblem } from './fin2dCase.js';
@@ -82,6 +82,15 @@ export function studyFin2DProblem(problem: Fin2DProblem, opts: Fin2DStudyOptions
     results.push(r);
     values.push({ nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance });
   }
+  return summariseStudy2D(results, values);
+}
+
+/**
+ * The study of solved grids: `results` and their `values` (nx, ny, size, heat rate...) coarsest first
+ * (`values` is reversed in place, finest first). Richardson extrapolation and GCI of the heat rate and
+ * the efficiency.
+ */
+export function summariseStudy2D(results: Fin2DResult[], values: Fin2DGridValue[]): Fin2DStudy {
   values.reverse();
   const finest = results[results.length - 1] as Fin2DResult;
   const heatRate = richardsonGci(values.map((v) => ({ size: v.size, value: v.heatRate_W })));
@@ -129,7 +138,8 @@ export function gridFamily2D(problem: Fin2DProblem, opts: Fin2DStudyOptions = {}
   return out;
 }
 
-function maxCoefficient(problem: Fin2DProblem): number {
+/** Largest h on the faces, W/(m^2*K) (sizes the grids). */
+export function maxCoefficient(problem: Fin2DProblem): number {
   const h = problem.h;
   switch (h.kind) {
     case 'uniform':

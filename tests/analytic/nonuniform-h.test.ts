@@ -21,7 +21,8 @@ function inputFor(n: number, mL: number): PowerLawHInput {
 
 // NU1 (h = h_b (1 - x/L)^n) and NU2 (h = h_t (x/L)^n), adiabatic tip: computed reference values
 // (mpmath, script nonuniform_h.py, checked with scipy solve_bvp to 1e-10), closed forms derived there
-// by separation of variables (Bessel form of y'' = c^2 x^n y). Last column: the uniform-h shortcut with
+// by separation of variables (Bessel form of y'' = c^2 x^n y); earlier variable-h fin analyses: Han & Lefkowitz
+// 1960, ASME paper 60-WA-130 (from memory). Last column: the uniform-h shortcut with
 // the mean hbar = h_ref/(n+1), tanh(mbar L)/(mbar L). Tolerance `tenDigits`: 10 digits printed.
 const rows: [number, number, number, number, number, number, number][] = [
   // n, mL, NU1 Q, NU1 eta, NU2 Q, NU2 eta, shortcut eta
@@ -31,7 +32,7 @@ const rows: [number, number, number, number, number, number, number][] = [
   [2, 1, 0.3183662467, 0.9550987402, 0.274911956, 0.8247358679, 0.90194274],
   [2, 2, 0.5643600411, 0.8465400616, 0.3642646963, 0.5463970445, 0.7095391947],
   [0.5, 1, 0.5744190677, 0.8616286015, 0.5166714929, 0.7750072393, 0.8244474437],
-  // rows of the script's full output (out/nonuniform_h.txt) not repeated in the sheet's table
+  // further rows of the same computation (full output of nonuniform_h.py, out/nonuniform_h.txt)
   [2, 0.5, 0.1647121441, 0.9882728644, 0.1582089898, 0.9492539391, 0.9731179367],
   [0.5, 0.5, 0.3201214382, 0.9603643147, 0.3102593726, 0.9307781178, 0.947914102],
   [0.5, 2, 0.8425063499, 0.6318797624, 0.6454889158, 0.4841166869, 0.5673548913],
@@ -66,8 +67,9 @@ describe('consistency', () => {
     expectRelClose(finHRisingFromBase(input).Q, Math.tanh(mL), 1e-13, 'NU2');
   });
   // NU1 with n = 1 has nu = 1/3 and z = 2mL/3: its eta at mL equals the convex-parabolic straight fin
-  // (Gardner 1945, from memory) at mL/2 -- the sheet's NU1 column repeats Table 2a's convex parabola
-  // (0.9757571602 at 0.25, 0.9110890522 at 0.5, 0.7325766848 at 1). Same ratio function: 1e-14.
+  // (Gardner 1945, from memory) at mL/2 -- the NU1 values above (nonuniform_h.py) repeat the convex-parabola
+  // values computed by profiles.py (0.9757571602 at 0.25, 0.9110890522 at 0.5, 0.7325766848 at 1).
+  // Same ratio function: 1e-14.
   it.each([0.5, 1, 2, 7])('NU1 (n = 1) at mL equals the convex parabola at mL/2, mL = %d', (mL) => {
     const nu1 = finHFallingToTip(inputFor(1, mL)).efficiency;
     const m = mL / 2 / 0.02;

@@ -17,13 +17,16 @@ beforeAll(async () => {
   await initBessel();
 });
 
-// Example of the sheet: h = 40, k = 180, A_p = 6e-5 m^2, thetaBase = 1 K (q' in W/(m K)).
+// Check example (invented inputs for computed reference values, script optimum.py):
+// h = 40, k = 180, A_p = 6e-5 m^2, thetaBase = 1 K (q' in W/(m K)).
 const example: OptimumStraightInput = { h: 40, k: 180, profileArea: 6e-5, thetaBase: 1 };
 
-// Optimum mL and eta: computed reference values (mpmath findroot, script optimum.py), conditions of
-// Schmidt 1926 (rectangular; Z. VDI 70) and the derived ones for the other profiles. The sheet prints
-// 12 significant digits for most (tolerance 1e-11: half a unit in the 12th digit is <= 5e-12 relative),
-// 10 for the convex parabola's eta (1e-9).
+// Optimum mL and eta: computed reference values (mpmath findroot, script optimum.py) of the optimum
+// conditions of Schmidt, E., 1926, "Die Wärmeübertragung durch Rippen", Z. VDI 70 (rectangular; the concave
+// parabola is Schmidt's least-material profile) and the conditions derived in optimum.py for the other
+// profiles; commonly quoted 1.419/0.627 (rectangle) and 1.309/0.594 (triangle), e.g. Kraus, Aziz & Welty
+// 2001 (from memory). The script prints 12 significant digits for most (tolerance 1e-11: half a unit in
+// the 12th digit is <= 5e-12 relative), 10 for the convex parabola's eta (1e-9).
 describe.each([
   // name, function, mL, tol, eta, tol, mean thickness / base thickness of the profile
   ['rectangular (Schmidt 1926): sinh 2z = 6z', optimumRectangularFin, 1.41922319002, 1e-11, 0.626706754378, 1e-11, 1],

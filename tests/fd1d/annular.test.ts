@@ -2,13 +2,14 @@
  * fd-1d against the closed forms of the annular fin of uniform thickness (x = r - r1, A = 2πrt,
  * P = 4πr, m^2 = 2h/(kt)).
  *
- * Values: project reference sheet §2a, computed reference values (mpmath script profiles.py, checked
- * against scipy solve_bvp to 1e-15):
+ * Values: computed reference values (mpmath script profiles.py, checked against scipy solve_bvp to
+ * 1e-15) of these closed forms:
  * - adiabatic tip at r2c, η = 2r1/(m(r2c^2 - r1^2)) [K1(mr1)I1(mr2c) - I1(mr1)K1(mr2c)] /
  *   [I0(mr1)K1(mr2c) + K0(mr1)I1(mr2c)]: Gardner, K. A., 1945, Trans. ASME 67, 621-631 [from memory];
- *   Incropera et al., Table 3.5 [from memory];
- * - convective tip on the rim (−k θ'(r2) = h θ(r2)), exact I0/K0 solution: sheet §2a second table
- *   (profiles.py `annular_convtip`), η referred to 2π(r2^2 - r1^2) + 2π r2 t.
+ *   Incropera et al., Table 3.5 [from memory]; Shabany, Heat Transfer: Thermal Management of
+ *   Electronics, CRC 2009, eq. 7.53 (with r2c = r2 + t/2);
+ * - convective tip on the rim (−k θ'(r2) = h θ(r2)): the exact I0/K0 solution derived in profiles.py
+ *   (`annular_convtip`; same Bessel form as Gardner 1945), η referred to 2π(r2^2 - r1^2) + 2π r2 t.
  */
 import { describe, expect, test } from 'vitest';
 import { fitObservedOrder } from '../../src/fd/refinement.js';
@@ -20,7 +21,7 @@ const INNER_RADIUS = 0.01;
 const THICKNESS = 0.001;
 const K = 200;
 
-// Sheet §2a annular table: rows r2c/r1, columns m(r2c - r1) = 0.25, 0.5, 1, 2, 3.
+// Annular η, adiabatic tip at r2c (profiles.py; Gardner 1945): rows r2c/r1, columns m(r2c - r1) = 0.25, 0.5, 1, 2, 3.
 const COLUMNS = [0.25, 0.5, 1, 2, 3];
 const TABLE: { ratio: number; etas: number[] }[] = [
   { ratio: 1.5, etas: [0.9751575958, 0.9085273102, 0.722130839, 0.4302401816, 0.2865969404] },
@@ -41,18 +42,18 @@ function annularCase(ratio: number, mLc: number) {
 
 const ROWS = TABLE.flatMap(({ ratio, etas }) => COLUMNS.map((mLc, j) => ({ ratio, mLc, eta: etas[j] as number })));
 
-describe.each(ROWS)('annular r2c/r1 = $ratio, m(r2c - r1) = $mLc (sheet §2a; Gardner 1945)', ({ ratio, mLc, eta }) => {
+describe.each(ROWS)('annular r2c/r1 = $ratio, m(r2c - r1) = $mLc (Gardner 1945; profiles.py)', ({ ratio, mLc, eta }) => {
   test('efficiency', () => expectEfficiency(studyFin1D(annularCase(ratio, mLc)), eta));
 });
 
-// Sheet §2a, annular fin with a convective rim: (h, k, t, r1, r2) -> exact q/θ_b (W/K) and η.
+// Annular fin with a convective rim, invented inputs (h, k, t, r1, r2) -> exact q/θ_b (W/K) and η (profiles.py).
 const CONVECTIVE_TIP = [
   { h: 50, k: 200, t: 0.001, r1: 0.01, r2: 0.025, qPerK: 0.1624477838, eta: 0.9401588283 },
   { h: 40, k: 180, t: 0.002, r1: 0.0125, r2: 0.04, qPerK: 0.3457422159, eta: 0.9028151387 },
   { h: 150, k: 400, t: 0.0005, r1: 0.005, r2: 0.015, qPerK: 0.1792628383, eta: 0.9166447175 },
 ];
 
-describe.each(CONVECTIVE_TIP)('annular, convective rim, h = $h, r2 = $r2 (sheet §2a, exact I0/K0 solution)', (row) => {
+describe.each(CONVECTIVE_TIP)('annular, convective rim, h = $h, r2 = $r2 (exact I0/K0 solution; profiles.py)', (row) => {
   const thetaBase = 50;
   const run = studyFin1D(
     linearCase({

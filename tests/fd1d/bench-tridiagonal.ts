@@ -3,7 +3,8 @@
  * `npx tsx tests/fd1d/bench-tridiagonal.ts`). Prints medians of repeated runs: wall time and CPU
  * time of this process (the CPU time excludes waiting when other processes share the cores).
  *
- * Systems: the assembled fin system (R1 fin of the reference sheet §1a, drop form) with 1e6 nodes,
+ * Systems: the assembled fin system (check case R1, invented inputs: k = 180, h = 40, t = 2 mm,
+ * w = 50 mm, L = 30 mm; drop form) with 1e6 nodes,
  * and 1e4 solves of a 1000-node system, into preallocated arrays (the `...Into` variants).
  */
 import { assembleFin1D } from '../../src/fd/assemble1d.js';

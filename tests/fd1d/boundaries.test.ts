@@ -16,7 +16,7 @@ import { fitObservedOrder } from '../../src/fd/refinement.js';
 import { baseBoundary, tipBoundary } from '../../src/fd/boundary.js';
 import { AMBIENT_DEGC, linearCase } from './support/cases.js';
 
-// Inputs of the sheet's R1 fin (aluminium plate, cooled edges): k = 180, h = 40, t = 2 mm, w = 50 mm, L = 30 mm.
+// Check case R1 (invented inputs; aluminium plate, cooled edges): k = 180, h = 40, t = 2 mm, w = 50 mm, L = 30 mm.
 const K = 180;
 const H = 40;
 const THICKNESS = 0.002;

@@ -1,6 +1,6 @@
 /**
- * The exact discrete oracle of the project reference sheet §8 (computed reference values, script
- * gci.py): the three-point scheme θ_{i-1} - (2 + (mL/N)^2) θ_i + θ_{i+1} = 0, θ_0 = θ_b, adiabatic tip
+ * An exact discrete oracle (computed reference values, script gci.py; derived by us, no published
+ * source): the three-point scheme θ_{i-1} - (2 + (mL/N)^2) θ_i + θ_{i+1} = 0, θ_0 = θ_b, adiabatic tip
  * by a ghost node, base heat from the half-cell balance Q_h = [(θ_0 - θ_1) N + (mL)^2 θ_0/(2N)]/(mL)
  * = q/(sqrt(hPkA) θ_b). Its exact solution is θ_i/θ_b = cosh(μ(N - i))/cosh(μN), cosh μ = 1 + (mL/N)^2/2
  * (the linear recurrence with constant coefficients; e.g. Richtmyer & Morton, Difference Methods for
@@ -38,7 +38,7 @@ function exactDiscrete(mL: number, N: number): { theta: Float64Array; Qh: number
   return { theta, Qh: (drop * N + (mL * mL) / (2 * N)) / mL };
 }
 
-// Sheet §8 table: Q_h for N = 10, 20, 40.
+// Q_h for N = 10, 20, 40: computed reference values (gci.py).
 const TABLE = [
   { mL: 0.5, Qh: [0.462220583231, 0.462143018406, 0.462123622838] },
   { mL: 1, Qh: [0.762370487823, 0.761788364791, 0.761642716041] },
@@ -47,7 +47,7 @@ const TABLE = [
 ];
 const ROWS = TABLE.flatMap(({ mL, Qh }) => [10, 20, 40].map((N, j) => ({ mL, N, Qh: Qh[j] as number })));
 
-describe.each(ROWS)('mL = $mL, N = $N (sheet §8 exact discrete oracle)', ({ mL, N, Qh }) => {
+describe.each(ROWS)('mL = $mL, N = $N (exact discrete oracle; computed reference value, gci.py)', ({ mL, N, Qh }) => {
   const { fin, scale } = uniformFin(mL);
   const result = solveFin1D(fin, { nodes: N + 1 });
   test('base heat rate equals the tabulated Q_h', () => {

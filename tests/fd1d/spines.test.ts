@@ -2,8 +2,8 @@
  * fd-1d against the closed-form efficiencies of spines (pins) of variable profile, adiabatic tip,
  * m^2 = 4h/(k D_b), η referred to the area 2π∫r dx (faces' slope neglected).
  *
- * Values: project reference sheet §2a, computed reference values (mpmath script profiles.py, checked
- * against an independent finite-volume solution), closed forms: cylinder tanh(mL)/(mL) and cone
+ * Values: computed reference values (mpmath script profiles.py, checked against an independent
+ * finite-volume solution) of these closed forms: cylinder tanh(mL)/(mL) and cone
  * 2 I2(2mL)/(mL I1(2mL)) (Incropera et al., Fundamentals of Heat and Mass Transfer, Table 3.5 [from
  * memory]); concave parabolic spine 2/(sqrt(1 + (4/9)(mL)^2) + 1) (Incropera Table 3.5 [from memory]);
  * convex parabolic spine 3 I1(4mL/3)/(2 mL I0(4mL/3)) (Kraus, Aziz & Welty 2001, Extended Surface Heat
@@ -25,7 +25,7 @@ const K = 120;
 const M_L = [0.25, 0.5, 1, 1.5, 2, 3];
 const hFor = (mL: number): number => (mL * mL * K * BASE_DIAMETER) / (4 * L * L);
 
-// Sheet §2a spine table, columns mL = 0.25, 0.5, 1, 1.5, 2, 3.
+// Spine η, computed reference values (profiles.py; closed forms of the header), columns mL = 0.25, 0.5, 1, 1.5, 2, 3.
 const CYLINDER = [0.9796746496, 0.9242343145, 0.761594156, 0.6034321691, 0.48201379, 0.3316849179];
 const CONE = [0.9897434262, 0.9607748955, 0.8662548534, 0.7572315324, 0.6580472674, 0.5084840505];
 const CONCAVE_SPINE = [0.9931503636, 0.973665961, 0.9083269132, 0.8284271247, 0.75, 0.6180339887];
@@ -48,24 +48,24 @@ function parabolicSpine(exponent: TaperExponent, mL: number): FinProblem1D {
 
 const rows = (etas: number[]) => M_L.map((mL, j) => ({ mL, eta: etas[j] as number }));
 
-describe.each(rows(CYLINDER))('cylinder, mL = $mL (sheet §2a; tanh(mL)/(mL))', ({ mL, eta }) => {
+describe.each(rows(CYLINDER))('cylinder, mL = $mL (Incropera Table 3.5: tanh(mL)/(mL); profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFin1D(caseFor({ kind: 'pin', length: L, diameter: BASE_DIAMETER }, mL)), eta));
 });
 
-describe.each(rows(CONE))('cone, mL = $mL (sheet §2a; 2 I2(2mL)/(mL I1(2mL)))', ({ mL, eta }) => {
+describe.each(rows(CONE))('cone, mL = $mL (Incropera Table 3.5: 2 I2(2mL)/(mL I1(2mL)); profiles.py)', ({ mL, eta }) => {
   test('efficiency', () =>
     expectEfficiency(studyFin1D(caseFor({ kind: 'conical-pin', length: L, baseDiameter: BASE_DIAMETER, tipDiameter: 0 }, mL)), eta));
 });
 
-describe.each(rows(CONCAVE_SPINE))('concave parabolic spine, mL = $mL (sheet §2a)', ({ mL, eta }) => {
+describe.each(rows(CONCAVE_SPINE))('concave parabolic spine, mL = $mL (Incropera Table 3.5; profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFinProblem1D(parabolicSpine(2, mL)), eta));
 });
 
-describe.each(rows(CONVEX_SPINE))('convex parabolic spine, mL = $mL (sheet §2a)', ({ mL, eta }) => {
+describe.each(rows(CONVEX_SPINE))('convex parabolic spine, mL = $mL (Kraus, Aziz & Welty 2001; profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFinProblem1D(parabolicSpine(0.5, mL)), eta));
 });
 
-// Sheet §2a truncated cone, τ = r_tip / R_b, adiabatic tip, columns mL = 0.5, 1, 2.
+// Truncated cone η (closed form derived in profiles.py), τ = r_tip / R_b, adiabatic tip, columns mL = 0.5, 1, 2.
 const TRUNCATED: { tau: number; etas: [number, number, number] }[] = [
   { tau: 0.25, etas: [0.9460674754, 0.8236812131, 0.586118201] },
   { tau: 0.5, etas: [0.9363294797, 0.7958160834, 0.5392202292] },
@@ -73,7 +73,7 @@ const TRUNCATED: { tau: number; etas: [number, number, number] }[] = [
 ];
 const TRUNCATED_ROWS = TRUNCATED.flatMap(({ tau, etas }) => [0.5, 1, 2].map((mL, j) => ({ tau, mL, eta: etas[j] as number })));
 
-describe.each(TRUNCATED_ROWS)('truncated cone τ = $tau, mL = $mL (sheet §2a)', ({ tau, mL, eta }) => {
+describe.each(TRUNCATED_ROWS)('truncated cone τ = $tau, mL = $mL (closed form derived in profiles.py)', ({ tau, mL, eta }) => {
   test('efficiency', () =>
     expectEfficiency(studyFin1D(caseFor({ kind: 'conical-pin', length: L, baseDiameter: BASE_DIAMETER, tipDiameter: tau * BASE_DIAMETER }, mL)), eta));
 });

@@ -2,11 +2,12 @@
  * fd-1d against the closed-form efficiencies of straight fins of variable profile (adiabatic tip,
  * per unit width: insulated edges, P = 2w, m^2 = 2h/(k t_b), η referred to 2wL).
  *
- * Values: project reference sheet §2a, computed reference values (mpmath script profiles.py, each
- * checked against an independent finite-volume solution), closed forms of Gardner, K. A., 1945,
+ * Values: computed reference values (mpmath script profiles.py, each checked against an independent
+ * finite-volume solution) of the closed forms of Gardner, K. A., 1945,
  * "Efficiency of extended surface", Trans. ASME 67, 621-631 [from memory], as tabulated in Incropera
  * et al., Fundamentals of Heat and Mass Transfer, Table 3.5 [from memory]:
- *   rectangular tanh(mL)/(mL); triangular I1(2mL)/(mL I0(2mL)); concave parabolic
+ *   rectangular tanh(mL)/(mL); triangular I1(2mL)/(mL I0(2mL)) (also Shabany, Heat Transfer: Thermal
+ *   Management of Electronics, CRC 2009, eq. 7.52); concave parabolic
  *   2/(sqrt(4(mL)^2 + 1) + 1); convex parabolic I_{2/3}(4mL/3)/(mL I_{-1/3}(4mL/3)); trapezoidal
  *   (closed form with I0, I1, K0, K1; Kraus, Aziz & Welty 2001, Extended Surface Heat Transfer [from memory]).
  */
@@ -39,7 +40,7 @@ function profileOf(kind: StraightKind): Profile {
   }
 }
 
-// Sheet §2a, straight fins, columns mL = 0.25, 0.5, 1, 1.5, 2, 3.
+// Straight-fin η, computed reference values (profiles.py; Gardner 1945 closed forms), columns mL = 0.25, 0.5, 1, 1.5, 2, 3.
 const TABLE: Record<StraightKind, number[]> = {
   rectangular: [0.9796746496, 0.9242343145, 0.761594156, 0.6034321691, 0.48201379, 0.3316849179],
   triangular: [0.9699984503, 0.8927799318, 0.697774658, 0.539990196, 0.4317613055, 0.3041197681],
@@ -54,11 +55,12 @@ const ROWS = (Object.keys(TABLE) as StraightKind[]).flatMap((kind) =>
   M_L.map((mL, j) => ({ kind, mL, eta: (TABLE[kind] as number[])[j] as number })),
 );
 
-describe.each(ROWS)('$kind, mL = $mL (sheet §2a; Gardner 1945 closed form)', ({ kind, mL, eta }) => {
+describe.each(ROWS)('$kind, mL = $mL (Gardner 1945 closed form; profiles.py)', ({ kind, mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFin1D(finFor(profileOf(kind), mL)), eta));
 });
 
-// Sheet §2a trapezoidal table, adiabatic tip, τ = t_tip / t_b, columns mL = 0.5, 1, 2.
+// Trapezoidal η (profiles.py; closed form as in Kraus, Aziz & Welty 2001), adiabatic tip, τ = t_tip / t_b,
+// columns mL = 0.5, 1, 2.
 const TRAPEZOID: { tau: number; etas: [number, number, number] }[] = [
   { tau: 0.25, etas: [0.905795408, 0.721468559, 0.4469203561] },
   { tau: 0.5, etas: [0.9136914315, 0.737799079, 0.4598840083] },
@@ -66,7 +68,7 @@ const TRAPEZOID: { tau: number; etas: [number, number, number] }[] = [
 ];
 const TRAPEZOID_ROWS = TRAPEZOID.flatMap(({ tau, etas }) => [0.5, 1, 2].map((mL, j) => ({ tau, mL, eta: etas[j] as number })));
 
-describe.each(TRAPEZOID_ROWS)('trapezoidal τ = $tau, mL = $mL (sheet §2a; closed form with I0, I1, K0, K1)', ({ tau, mL, eta }) => {
+describe.each(TRAPEZOID_ROWS)('trapezoidal τ = $tau, mL = $mL (Kraus, Aziz & Welty 2001; profiles.py)', ({ tau, mL, eta }) => {
   test('efficiency', () => {
     const profile: Profile = { kind: 'trapezoidal', length: L, baseThickness: BASE_THICKNESS, tipThickness: tau * BASE_THICKNESS, width: WIDTH };
     expectEfficiency(studyFin1D(finFor(profile, mL)), eta);

@@ -1,10 +1,11 @@
 /**
  * fd-1d against the closed forms of the uniform fin, all four tips.
  *
- * Reference values: check cases R1, R2, P1, P2 of the project reference sheet §1a, computed reference
- * values (mpmath script uniform_fin.py, checked with scipy solve_bvp), closed forms of Incropera,
- * DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer (6th/7th ed.), Table 3.4 [from
- * memory for the table number]: A convective tip, B adiabatic, C prescribed tip temperature, D infinite.
+ * Reference values: check cases R1, R2, P1, P2 (invented inputs), computed reference values (mpmath
+ * script uniform_fin.py, checked with scipy solve_bvp), closed forms of Incropera, DeWitt, Bergman &
+ * Lavine, Fundamentals of Heat and Mass Transfer (6th/7th ed.), Table 3.4 [from memory for the table
+ * number]: A convective tip, B adiabatic, C prescribed tip temperature, D infinite. Fin efficiency:
+ * Harper & Brown 1922; fin effectiveness: Gardner 1945.
  */
 import { describe, expect, test } from 'vitest';
 import type { Profile, TipCondition } from '../../src/case/types.js';
@@ -19,13 +20,13 @@ interface UniformCase {
   k: number;
   h: number;
   thetaBase: number;
-  /** Fin parameter m = sqrt(hP/(kA)), 1/m (sheet §1a). */
+  /** Fin parameter m = sqrt(hP/(kA)), 1/m (computed by uniform_fin.py). */
   m: number;
   /** Heat rate q (W; W per metre of width for R2), η_f, ε_f, θ(L), θ(L/2) for tips A, B, C, D. */
   rows: Record<'A' | 'B' | 'C' | 'D', { q: number; eta: number | null; eps: number; thetaTip: number; thetaMid: number }>;
 }
 
-// Sheet §1a inputs: R1 aluminium plate fin (cooled edges, P = 2(w + t)); R2 per metre of width
+// Check-case inputs (invented): R1 aluminium plate fin (cooled edges, P = 2(w + t)); R2 per metre of width
 // (P = 2 m: insulated edges); P1 copper pin; P2 stainless pin. Tip C: θ_L = θ_b / 4.
 const CASES: UniformCase[] = [
   {
@@ -93,7 +94,7 @@ function tipOf(tip: 'A' | 'B' | 'C' | 'D', thetaBase: number): TipCondition {
 
 const ROWS = CASES.flatMap((c) => (['A', 'B', 'C', 'D'] as const).map((tip) => ({ c, tip, name: `${c.id} tip ${tip}` })));
 
-describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; sheet §1a values)', ({ c, tip }) => {
+describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; computed reference values, uniform_fin.py)', ({ c, tip }) => {
   const expected = c.rows[tip];
   const fin = linearCase({ profile: c.profile, edges: c.edges, k: c.k, h: { kind: 'uniform', h: c.h }, tip: tipOf(tip, c.thetaBase), thetaBase: c.thetaBase });
   const { result, study } = studyFin1D(fin);
@@ -117,7 +118,7 @@ describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; sheet §1a values)
   test('temperatures, efficiency and effectiveness', () => {
     const n = result.mesh.nodes;
     const mid = (n - 1) / 2;
-    // Tip D: the sheet's θ(L) = 0 is the far end of the infinite fin; the truncated fin with the exact
+    // Tip D: the tabulated θ(L) = 0 is the far end of the infinite fin; the truncated fin with the exact
     // continuation has θ(L) = θ_b exp(-mL) (Table 3.4 case D, θ/θ_b = exp(-mx)).
     const thetaTip = tip === 'D' ? c.thetaBase * Math.exp(-c.m * result.mesh.length) : expected.thetaTip;
     expect(result.mesh.x[mid]).toBeCloseTo((result.mesh.length as number) / 2, 15);

@@ -1,6 +1,6 @@
 /**
  * fd-1d with a non-uniform convection coefficient against the closed-form oracles NU1 and NU2 of
- * the project reference sheet §2 (uniform fin, adiabatic tip, ν = 1/(n + 2)):
+ * a uniform fin with an adiabatic tip (ν = 1/(n + 2)), derived by separation of variables:
  *   NU1, h = h_b (1 - x/L)^n, m^2 = h_b P/(kA):  q = kAmθ_b I_{1-ν}(2νmL) / I_{-ν}(2νmL);
  *   NU2, h = h_t (x/L)^n,     m^2 = h_t P/(kA):  q = (kAθ_b/L)(νmL)^{2ν} Γ(1-ν)/Γ(1+ν) I_{1-ν}(2νmL) / I_{ν-1}(2νmL);
  * η referred to the mean h = h_ref/(n + 1). Table values: computed reference values (scipy/mpmath
@@ -37,7 +37,7 @@ function closedFormQ(oracle: 'NU1' | 'NU2', mL: number): number {
   return (Math.pow(nu * mL, 2 * nu) / mL) * (gamma(1 - nu) / gamma(1 + nu)) * (besselI(1 - nu, z) / besselI(nu - 1, z));
 }
 
-// Sheet §2 NU table, n = 1: Q and η.
+// NU1/NU2, n = 1: Q and η, computed reference values (script nonuniform_h.py; see the header).
 const TABLE = [
   { oracle: 'NU1', mL: 0.5, Q: 0.2439392901, eta: 0.9757571602 },
   { oracle: 'NU1', mL: 1, Q: 0.4555445261, eta: 0.9110890522 },
@@ -53,7 +53,7 @@ const hOf = (oracle: 'NU1' | 'NU2', mL: number): HDistribution =>
 /** kAmθ_b for the fin of parameter mL: the scale of Q. */
 const scaleFor = (mL: number): number => K * T * (mL / L) * THETA_BASE;
 
-describe.each(TABLE)('$oracle, n = 1, mL = $mL (sheet §2 NU table)', ({ oracle, mL, Q, eta }) => {
+describe.each(TABLE)('$oracle, n = 1, mL = $mL (computed reference value, nonuniform_h.py)', ({ oracle, mL, Q, eta }) => {
   test('heat rate and efficiency', () => {
     const run = studyFin1D(finWith(hOf(oracle, mL)));
     expect(Math.abs(run.result.heatRate / (Q * scaleFor(mL)) - 1)).toBeLessThan(1e-6); // default-grid target

@@ -9,7 +9,7 @@
  *   adiabatic tip Q = sqrt(1 - u_t^2 + (2/3) B (1 - u_t^3)), m0 L = ∫_{u_t}^1 (1 + B u) du / sqrt(G(u) - G(u_t)),
  *   G(u) = u^2 + (2/3) B u^3.
  * The numbers are computed reference values (mpmath, script nonlinear.py, checked with scipy solve_bvp)
- * of the project reference sheet §6b, printed to 10 significant digits (infinite Q to 12).
+ * of these closed forms, printed to 10 significant digits (infinite Q to 12).
  * The case gives k as a table over temperature; a two-point table [[T_amb, k0], [T_b, k0 (1 + B)]] is
  * exactly k0 (1 + β θ) over the fin's range. A four-point table on the same line, with points inside
  * the range, checks the piecewise Kirchhoff integration across table points.
@@ -40,7 +40,7 @@ const TABLES: { id: string; points: number[] }[] = [
   { id: 'four points on the same line', points: [AMBIENT_DEGC - 10, AMBIENT_DEGC + 17, AMBIENT_DEGC + 41, AMBIENT_DEGC + 90] },
 ];
 
-/** Sheet §6b: B, m0 L, u_t, Q. */
+/** Computed reference values (nonlinear.py): B, m0 L, u_t, Q. */
 const TABLE: [number, number, number, number][] = [
   [-0.2, 0.5, 0.8638786532, 0.4542471239],
   [-0.2, 1, 0.6041527753, 0.7287442891],
@@ -57,7 +57,7 @@ const ROWS = TABLES.flatMap(({ id, points }) =>
   TABLE.map(([B, m0L, tipRatio, Q]) => ({ points, B, m0L, tipRatio, Q, name: `${id}, B = ${B}, m0 L = ${m0L}` })),
 );
 
-describe.each(ROWS)('k = k0 (1 + β θ), adiabatic tip: $name (Aziz & Enamul-Huq 1975; sheet §6b)', ({ points, B, m0L, tipRatio, Q }) => {
+describe.each(ROWS)('k = k0 (1 + β θ), adiabatic tip: $name (Aziz & Enamul-Huq 1975; nonlinear.py)', ({ points, B, m0L, tipRatio, Q }) => {
   test('heat rate, extrapolation, tip temperature, energy balance', () => {
     const c = nonlinearCase({
       profile: plateFin.profile(m0L / M0),
@@ -81,14 +81,14 @@ describe.each(ROWS)('k = k0 (1 + β θ), adiabatic tip: $name (Aziz & Enamul-Huq
   });
 });
 
-/** Sheet §6b: infinite fin Q = sqrt(1 + 2B/3), 12 digits. */
+/** Infinite fin Q = sqrt(1 + 2B/3), 12 digits (nonlinear.py). */
 const INFINITE: [number, number][] = [
   [-0.2, 0.930949336251],
   [0.2, 1.06458129484],
   [0.5, 1.15470053838],
 ];
 
-describe.each(INFINITE)('k = k0 (1 + β θ), infinite fin, B = %d (Aziz & Enamul-Huq 1975; sheet §6b)', (B, Q) => {
+describe.each(INFINITE)('k = k0 (1 + β θ), infinite fin, B = %d (Aziz & Enamul-Huq 1975; nonlinear.py)', (B, Q) => {
   test('fin cut at m0 L = 1 with the exact continuation', () => {
     const c = nonlinearCase({
       profile: plateFin.profile(1 / M0),

@@ -62,8 +62,8 @@ describe('solver failure: SolverError saying what to change', () => {
   });
 
   test('negative exponent on a fin that reaches the fluid temperature: no silent answer', () => {
-    // n = -1/2: the exact solution reaches θ = 0 at mL = sqrt(2 (n + 2)) / (-n) = 3.46 (sheet §6a,
-    // Sen & Trinh 1986 profile), where h = base (θ/θ_b)^n is infinite; this fin is mL = 14 long.
+    // n = -1/2: the exact solution reaches θ = 0 at mL = sqrt(2 (n + 2)) / (-n) = 3.46 (closed-form
+    // infinite-fin profile of Sen & Trinh 1986, from memory), where h = base (θ/θ_b)^n is infinite; this fin is mL = 14 long.
     const c = nonlinearCase({
       profile: plateFin.profile(2),
       k: constantK(200),

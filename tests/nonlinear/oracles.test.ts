@@ -5,7 +5,7 @@
  * 457-459; power-law h), Aziz & Enamul-Huq 1975 (J. Heat Transfer 97, 300-301; k linear in T) and
  * the classic radiating fin (Bartas & Sellers 1960, J. Heat Transfer 82, 73) [all from memory] by
  * adaptive Gauss-Kronrod quadrature and Brent root finding to ~1e-13, and are themselves checked
- * against the reference sheet's §6 tables (tests/analytic/nonlinear.test.ts).
+ * against the computed reference values of nonlinear.py (mpmath; tests/analytic/nonlinear.test.ts).
  */
 import { describe, expect, test } from 'vitest';
 import {

@@ -1,7 +1,7 @@
 /**
  * Observed order of accuracy of the nonlinear fd-1d heat rate: the least-squares slope of
  * log|error| against log(cell size) over four grids (fitObservedOrder), against the first-integral
- * oracles of the reference sheet §6 (computed reference values, mpmath script nonlinear.py):
+ * oracles (computed reference values, mpmath script nonlinear.py) for these problems:
  * power-law h (Sen & Trinh 1986, J. Heat Transfer 108 [from memory]), k linear in T (Aziz &
  * Enamul-Huq 1975, J. Heat Transfer 97 [from memory]), radiation (Bartas & Sellers 1960, J. Heat
  * Transfer 82 [from memory]); and on a tapered fin with every nonlinearity at once, where no closed
@@ -23,17 +23,17 @@ const K_SCALE = Math.sqrt(25 * plateFin.P * 100 * plateFin.A) * 50;
 
 const ORACLES: { id: string; c: Case; q: number }[] = [
   {
-    id: 'power-law h, n = 1/3, mL = 1, adiabatic tip (sheet §6a: Q = 0.7183075317)',
+    id: 'power-law h, n = 1/3, mL = 1, adiabatic tip (Sen & Trinh 1986; nonlinear.py: Q = 0.7183075317)',
     c: nonlinearCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 1 / 3 }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + 60 }),
     q: 0.7183075317 * POWER_SCALE,
   },
   {
-    id: 'power-law h, n = 2, infinite fin cut at mL = 1 (sheet §6a: Q = 0.707106781187)',
+    id: 'power-law h, n = 2, infinite fin cut at mL = 1 (Sen & Trinh 1986; nonlinear.py: Q = 0.707106781187)',
     c: nonlinearCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 2 }, tip: { kind: 'infinite' }, base_degC: AMBIENT_DEGC + 60 }),
     q: 0.707106781187 * POWER_SCALE,
   },
   {
-    id: 'k = k0 (1 + β θ), B = 0.5, m0 L = 2 (sheet §6b: Q = 1.097974842)',
+    id: 'k = k0 (1 + β θ), B = 0.5, m0 L = 2 (Aziz & Enamul-Huq 1975; nonlinear.py: Q = 1.097974842)',
     c: nonlinearCase({
       profile: plateFin.profile(2 / Math.sqrt(250)),
       k: { kind: 'table', T_degC: Float64Array.from([AMBIENT_DEGC, AMBIENT_DEGC + 50]), k: Float64Array.from([100, 150]) },
@@ -44,7 +44,7 @@ const ORACLES: { id: string; c: Case; q: number }[] = [
     q: 1.097974842 * K_SCALE,
   },
   {
-    id: 'radiation, T_b = 600 K, T_s = 300 K, L = 0.2 m (sheet §6c: q\' = 919.229832 W/m)',
+    id: 'radiation, T_b = 600 K, T_s = 300 K, L = 0.2 m (Bartas & Sellers 1960; nonlinear.py: q\' = 919.229832 W/m)',
     c: nonlinearCase({
       profile: plateFin.profile(0.2),
       k: constantK(180),

@@ -8,8 +8,8 @@
  *   infinite fin Q = q / (sqrt(h_b P k A) θ_b) = sqrt(2/(n+2)), θ/θ_b = [1 + n m x / sqrt(2(n+2))]^(-2/n);
  *   adiabatic tip: Q = sqrt(2/(n+2)) sqrt(1 - u_t^(n+2)), mL = sqrt((n+2)/2) ∫_{u_t}^1 du / sqrt(u^(n+2) - u_t^(n+2)).
  * The numbers are computed reference values (mpmath quadrature and root finding, script nonlinear.py,
- * each checked with scipy solve_bvp to <= 1e-10) of the project reference sheet §6a, printed to 10
- * significant digits (the infinite-fin Q to 12).
+ * each checked with scipy solve_bvp to <= 1e-10) of these closed forms, printed to 10 significant
+ * digits (the infinite-fin Q to 12).
  * The infinite fin is solved as a fin cut at mL = 1 with the `infinite` tip, which continues the fin
  * exactly (the same first integral: Q_tip = sqrt(2 A P ∫_0^θ q k dθ)), so no truncation remainder.
  */
@@ -35,7 +35,7 @@ function powerLawCase(fin: UniformFin, k: number, hBase: number, n: number, mL: 
   });
 }
 
-/** Sheet §6a table: n, mL, u_t, Q, η = Q/mL. */
+/** Computed reference values (nonlinear.py): n, mL, u_t, Q, η = Q/mL. */
 const TABLE: [number, number, number, number, number][] = [
   [0.25, 0.5, 0.88927927, 0.4541608241, 0.9083216481],
   [0.25, 1, 0.6678978468, 0.7283030125, 0.7283030125],
@@ -52,7 +52,7 @@ const ROWS = FINS.flatMap(({ fin, k, hBase }) =>
   TABLE.map(([n, mL, tipRatio, Q, eta]) => ({ fin, k, hBase, n, mL, tipRatio, Q, eta, name: `${fin.id}, n = ${n.toFixed(3)}, mL = ${mL}` })),
 );
 
-describe.each(ROWS)('power-law h, adiabatic tip: $name (Sen & Trinh 1986; sheet §6a)', ({ fin, k, hBase, n, mL, tipRatio, Q, eta }) => {
+describe.each(ROWS)('power-law h, adiabatic tip: $name (Sen & Trinh 1986; nonlinear.py)', ({ fin, k, hBase, n, mL, tipRatio, Q, eta }) => {
   const c = powerLawCase(fin, k, hBase, n, mL, 'adiabatic');
   const { result, study, iterations } = studyNonlinearFin1D(c);
   const scale = Math.sqrt(hBase * fin.P * k * fin.A) * THETA_B;
@@ -88,7 +88,7 @@ describe.each(ROWS)('power-law h, adiabatic tip: $name (Sen & Trinh 1986; sheet 
   });
 });
 
-/** Sheet §6a: Q = sqrt(2/(n+2)) printed to 12 digits. */
+/** Q = sqrt(2/(n+2)) printed to 12 digits (nonlinear.py). */
 const INFINITE: [number, number][] = [
   [0.25, 0.942809041582],
   [1 / 3, 0.925820099773],
@@ -96,7 +96,7 @@ const INFINITE: [number, number][] = [
 ];
 const INFINITE_ROWS = FINS.flatMap(({ fin, k, hBase }) => INFINITE.map(([n, Q]) => ({ fin, k, hBase, n, Q, name: `${fin.id}, n = ${n.toFixed(3)}` })));
 
-describe.each(INFINITE_ROWS)('power-law h, infinite fin: $name (Sen & Trinh 1986; sheet §6a)', ({ fin, k, hBase, n, Q }) => {
+describe.each(INFINITE_ROWS)('power-law h, infinite fin: $name (Sen & Trinh 1986; nonlinear.py)', ({ fin, k, hBase, n, Q }) => {
   test('fin cut at mL = 1 with the exact continuation: heat rate and effectiveness', () => {
     const { result, study } = studyNonlinearFin1D(powerLawCase(fin, k, hBase, n, 1, 'infinite'));
     const q = Q * Math.sqrt(hBase * fin.P * k * fin.A) * THETA_B;
@@ -112,7 +112,7 @@ describe.each(INFINITE_ROWS)('power-law h, infinite fin: $name (Sen & Trinh 1986
   });
 });
 
-describe('power-law h, infinite fin profile, n = 1/4 (Sen & Trinh 1986; sheet §6a profile check)', () => {
+describe('power-law h, infinite fin profile, n = 1/4 (Sen & Trinh 1986 closed-form profile; nonlinear.py)', () => {
   test('θ/θ_b = 0.4101363273 at mx = 1 and 0.0245725306 at mx = 5', () => {
     // Cut at mL = 5 with the infinite tip; 4000 uniform cells put a node at mx = 1 (node 800).
     const result = solveNonlinearFin1D(powerLawCase(plateFin, 200, 10, 0.25, 5, 'infinite'), { nodes: 4001 });

@@ -5,18 +5,17 @@
  * Sources: the radiating fin k A T'' = σ ε P (T^4 - T_s^4) with no fin-base view factor, the problem of
  * the classic radiating-fin analyses of Bartas, J. G. & Sellers, W. H., 1960, J. Heat Transfer 82, 73,
  * and Mackay, D. B., 1963, Design of Space Powerplants (both from memory). Reference numbers: computed
- * reference values (mpmath quadrature, script nonlinear.py of the project reference sheet §6c) of the
- * first integral:
+ * reference values (mpmath quadrature, script nonlinear.py) of the first integral:
  *   infinite fin   q = sqrt(2 σ ε P k A [(T_b^5 - T_s^5)/5 - T_s^4 (T_b - T_s)]);
  *   adiabatic tip  T_s replaced by the tip temperature T_t inside the bracket, L from a quadrature.
- * Sheet example: aluminium plate per metre of width, t = 2 mm (A = 0.002 m^2, P = 2 m), k = 180 W/(m K),
+ * Check example (invented inputs): aluminium plate per metre of width, t = 2 mm (A = 0.002 m^2, P = 2 m), k = 180 W/(m K),
  * ε = 0.9, σ = 5.670374419e-8 W/(m^2 K^4); values printed to 10 significant digits.
  */
 import { describe, expect, test } from 'vitest';
 import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
 import { KELVIN, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
 
-/** Sheet §6c: T_b, T_s (K), q'_inf, then for L = 0.05 and 0.2 m: T_tip (K), q' (W/m). */
+/** Computed reference values (nonlinear.py): T_b, T_s (K), q'_inf, then for L = 0.05 and 0.2 m: T_tip (K), q' (W/m). */
 const TABLE: { Tb: number; Ts: number; infinite: number; rows: { L: number; tip: number; q: number }[] }[] = [
   { Tb: 400, Ts: 0, infinite: 387.9478463, rows: [{ L: 0.05, tip: 391.5497438, q: 123.4494703 }, { L: 0.2, tip: 325.919814, q: 310.5687159 }] },
   { Tb: 400, Ts: 250, infinite: 305.1081619, rows: [{ L: 0.05, tip: 392.8412605, q: 104.590532 }, { L: 0.2, tip: 338.570427, q: 259.7736084 }] },
@@ -44,7 +43,7 @@ const ROWS = TABLE.flatMap(({ Tb, Ts, infinite, rows }) => [
   ...rows.map(({ L, tip, q }) => ({ Tb, Ts, L, tip: 'adiabatic' as const, q, T: tip, name: `T_b = ${Tb} K, T_s = ${Ts} K, L = ${L} m` })),
 ]);
 
-describe.each(ROWS)('radiating fin: $name (Bartas & Sellers 1960; sheet §6c)', ({ Tb, Ts, L, tip, q, T }) => {
+describe.each(ROWS)('radiating fin: $name (Bartas & Sellers 1960; nonlinear.py)', ({ Tb, Ts, L, tip, q, T }) => {
   test('heat rate, extrapolation, tip temperature, energy balance', () => {
     const { result, study } = studyNonlinearFin1D(radiatingCase(Tb, Ts, L, tip));
     const error = Math.abs(relative(result.heatRate, q));

@@ -1,7 +1,8 @@
 /**
  * Builders of normalised cases for the nonlinear fd-1d tests (SI units, degC), and the uniform fins
- * of the reference sheet's §6 oracles: a straight fin per metre of width with insulated edges
- * (A = t * 1 m, P = 2 m) and a pin. Inputs are invented; the oracles are dimensionless.
+ * of the first-integral oracles (computed reference values, nonlinear.py; closed forms of Sen & Trinh 1986,
+ * Aziz & Enamul-Huq 1975): a straight fin per metre of width with insulated edges (A = t * 1 m, P = 2 m)
+ * and a pin. Inputs are invented; the oracles are dimensionless.
  */
 import type { Case, Conductivity, HDistribution, Profile, TipCondition } from '../../../src/case/types.js';
 
