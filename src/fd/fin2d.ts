@@ -156,7 +156,6 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   };
 }
 
-function sum(a: Float64Array): number {
 /** A usage error unless the grid has whole numbers >= 2 of nodes, one per profile point, and fits in memory. */
 export function checkGrid2D(problem: Fin2DProblem, nx: number, ny: number): void {
   if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
@@ -186,6 +185,7 @@ export function gridLine(grid: Grid2D, field: Float64Array, ambient_degC: number
   return { x_m, y_m, T_degC };
 }
 
+function sum(a: Float64Array): number {
   let s = 0;
   for (const v of a) s += v;
   return s;
