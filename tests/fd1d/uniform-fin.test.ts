@@ -111,7 +111,7 @@ describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; computed reference
     // (5e-10 relative) plus the h^3 remainder; 2e-9 leaves room for both.
     expect(Math.abs(relative(study.extrapolated, expected.q))).toBeLessThan(2e-9);
     expect(study.observedOrder).not.toBeNull();
-    // Asymptotic range: observed order within 0.1 of the formal order 2 (common practice, cf. scikit-fem's convergence tests).
+    // Asymptotic range: observed order within 0.1 of the formal order 2 (common practice, no source; the acceptance band of the project).
     expect(Math.abs((study.observedOrder as number) - 2)).toBeLessThan(0.1);
   });
 

@@ -3,7 +3,7 @@ import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { finCase, THETA_B } from './cases.js';
 
 describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D series', () => {
-  // Computed reference values (scipy script pin2d_series.py, references.md section 4d): separation of
+  // Computed reference values (scipy script pin2d_series.py): separation of
   // variables in (x, r), eigenvalues lambda J1(lambda) = Bi J0(lambda), Bi = h R / k, eta_2D = q/(h 2 pi R L theta_b),
   // mL = sqrt(2 Bi) L / R. Same method as the plate-fin series (Moitsheki & Rowjee 2011 for the planar case).
   it.each([
@@ -32,7 +32,7 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
     [0.1, 1.068],
     [1, 7.919],
   ])('infinite pin, Bi = %s: exact slowest-mode closure against the tabulated 1-D error (%s %%)', (bi, errPercent) => {
-    // Computed reference values (pin2d_series.py, references.md section 4d, "infinite fin" column):
+    // Computed reference values (pin2d_series.py, infinite-fin limit):
     // q_1D / q_2D - 1, with q_1D = sqrt(h P k A) theta_b (Incropera et al., Table 3.4 case D [from memory]).
     const R = 1e-3;
     const k = 200;
@@ -48,9 +48,9 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
 
 describe('annular fin, axisymmetric (r, z), against the 1-D closed form in the thin limit', () => {
   // 1-D closed form: Gardner (1945), Trans. ASME 67, 621-631, as in Incropera et al. Table 3.5 [from memory];
-  // computed reference values (profiles.py, references.md section 2a), adiabatic tip at r2c, m^2 = 2h/(kt).
+  // computed reference values (profiles.py; Gardner 1945, from memory), adiabatic tip at r2c, m^2 = 2h/(kt).
   // In 2-D the fin is a disc of radius r2c with an adiabatic rim; the 1-D model neglects conduction across
-  // the thickness, an error that vanishes linearly in Bi = h (t/2)/k (references.md section 4c: Bi/6 to Bi/3).
+  // the thickness, an error that vanishes linearly in Bi = h (t/2)/k (small-Bi expansion of the exact series: Bi/6 to Bi/3).
   it.each([
     [2, 1, 0.6915397721],
     [3, 0.5, 0.8753268674],
@@ -83,7 +83,7 @@ describe('annular fin, axisymmetric (r, z), against the 1-D closed form in the t
     [40, 180, 0.002, 0.0125, 0.04, 0.3457422159],
   ])('convective rim: h = %s, k = %s, t = %s: within 1e-4 of the exact 1-D heat rate at Bi ~ 1e-4', (h, k, t, r1, r2, qPerK) => {
     // Exact 1-D annular fin with a convective rim -k theta'(r2) = h theta(r2) (I0/K0 solution): computed
-    // reference values (profiles.py annular_convtip, references.md section 2), Gardner's (1945) equation
+    // reference values (profiles.py annular_convtip), Gardner's (1945) equation
     // with the rim condition. Bi = h t/(2k) = 1.25e-4 and 2.2e-4: the 2-D drop is about Bi/3 = 4e-5 to 7e-5.
     const s = studyFin2D(finCase({ kind: 'annular', innerRadius: r1, outerRadius: r2, thickness: t }, k, { kind: 'uniform', h }, { kind: 'convective', h: null }));
     const dev = s.extrapolatedHeatRate_W / (qPerK * THETA_B) - 1;

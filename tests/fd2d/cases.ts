@@ -1,6 +1,6 @@
 /**
  * Normalised cases for the 2-D solver tests (SI, degC). Plate fins are set up from the dimensionless
- * groups of the exact series (references.md section 4): Bi = h b / k with b the half-thickness, and
+ * groups of the exact separation-of-variables series (fin2d_series.py): Bi = h b / k with b the half-thickness, and
  * mL = sqrt(Bi) L / b (the 1-D fin parameter m = sqrt(h / (k b))).
  */
 import type { Case, HDistribution, Profile, TipCondition } from '../../src/case/types.js';

@@ -7,11 +7,11 @@ import { fieldViews } from '../../src/fd/fin2dField.js';
 import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { BASE, finCase, THETA_B } from './cases.js';
 
-// Case R2 of references.md section 1a: unit-width aluminium plate, k = 237, h = 40, t = 1 mm, L = 25 mm.
+// Check case R2 (invented inputs; Incropera et al., Table 3.4, from memory): unit-width aluminium plate, k = 237, h = 40, t = 1 mm, L = 25 mm.
 // Computed reference values (scipy/mpmath script uniform_fin.py) of the 1-D closed forms of Incropera,
 // DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, Table 3.4 [from memory]; per unit
 // theta_b: q/theta_b in W/(m K). Bi = h (t/2)/k = 8.4e-5, so the 2-D heat rate lies below the 1-D one by
-// about Bi/6 to Bi/3 (references.md section 4c): 1.4e-5 to 2.8e-5.
+// about Bi/6 to Bi/3 (small-Bi expansion of the exact 2-D series): 1.4e-5 to 2.8e-5.
 const R2 = { k: 237, h: 40, t: 0.001, L: 0.025, thetaB: 50 };
 const r2Case = (tip: TipCondition, contactResistance = 0) =>
   finCase({ kind: 'rectangular', length: R2.L, thickness: R2.t, width: 1 }, R2.k, { kind: 'uniform', h: R2.h }, tip, contactResistance);
@@ -58,7 +58,7 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
   });
 
   it('h falling linearly from h_b at the base to 0 at the tip (thin plate, adiabatic tip)', () => {
-    // NU1 of references.md section 2, n = 1, mL = 1 (m^2 = h_b P/(kA)): q/(k A m theta_b) = 0.4555445261.
+    // NU1 (h falling linearly to the tip; separation of variables, nonuniform_h.py), n = 1, mL = 1 (m^2 = h_b P/(kA)): q/(k A m theta_b) = 0.4555445261.
     // Computed reference value (scipy script nonuniform_h.py), closed form by the Bessel form of
     // y'' = c^2 x^n y (variable-h fins: Han & Lefkowitz 1960 [from memory]). Bi = 1e-4 at the base.
     const b = 1e-4;

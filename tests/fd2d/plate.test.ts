@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { plateCase, THETA_B } from './cases.js';
 
-// Reference values: computed reference values (scipy/mpmath script fin2d_series.py, references.md
-// section 4a/4b), closed form by separation of variables of the 2-D plate fin: eigenvalues
+// Reference values: computed reference values (scipy/mpmath script fin2d_series.py, adiabatic and
+// convective tips), closed form by separation of variables of the 2-D plate fin: eigenvalues
 // lambda tan(lambda) = Bi, q' = 2 k theta_b sum w_n G_n; exact 2-D series solutions of this fin are
 // published by Moitsheki & Rowjee (2011), Math. Probl. Eng. 2011, 826819, and compared with the 1-D model
 // by Campo (2019), Int. J. Heat Technol. 37(1), 197-202. The table gives eta_2D to 9 digits; the heat rate
@@ -40,8 +40,8 @@ describe.each([
     expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(1e-4);
     // The GCI must cover the finest grid's true error (Celik et al. 2008: the purpose of Fs = 1.25).
     expect(Math.abs(s.heatRate_W / exact - 1)).toBeLessThan(s.discretizationError);
-    // Observed order: formally 2, reduced by the base corner's log singularity (references.md section 4
-    // reports 1.7-1.85 with uniform grids); the default grading lifts it to 1.85-1.99.
+    // Observed order: formally 2, reduced by the base corner's log singularity (an independent FV check
+    // in fin2d_series.py shows 1.7-1.85 on uniform grids); the default grading lifts it to 1.85-1.99.
     expect(s.heatRate.observedOrder).toBeGreaterThan(1.7);
     expect(s.heatRate.observedOrder).toBeLessThan(2.1);
     // Conservative scheme, direct solve: heat in = heat out to round-off (requirement 1e-9).
@@ -50,7 +50,7 @@ describe.each([
 });
 
 describe('plate fin, infinite tip (exact slowest-mode closure at the cut)', () => {
-  // Computed reference values (fin2d_series.py, references.md section 4c): S_inf = q' / (2 k theta_b)
+  // Computed reference values (fin2d_series.py, infinite plate fin): S_inf = q' / (2 k theta_b)
   // of the infinitely long plate, same separation-of-variables series as above.
   it.each([
     [0.01, 0.0998411443],

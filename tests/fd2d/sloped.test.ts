@@ -6,7 +6,7 @@ import { finCase, THETA_B } from './cases.js';
 const k = 200;
 const b = 1e-3; // base half-thickness or base radius, m
 
-// 1-D closed forms of references.md section 2 (computed reference values of the scipy/mpmath script
+// 1-D closed forms of Gardner 1945 and Kraus, Aziz & Welty 2001 (from memory; computed reference values of the scipy/mpmath script
 // profiles.py): straight fins per unit width with P = 2 and m^2 = h/(k b) (b = half base thickness),
 // heat rate eta h 2L theta_b; spines with m^2 = 2h/(k R), heat rate eta h A theta_b with the area of the ODE
 // (cone pi D_b L / 2, truncated cone pi R_b L (1 + tau)). Sources of the closed forms: Gardner (1945),
@@ -59,7 +59,7 @@ describe('sloped faces, thick fins (Bi = 1 at the base, convective tip)', () => 
     const s3 = studyFin2D(c);
     const s4 = studyFin2D(c, { levels: 4 });
     // The base corner (fixed temperature meets a cooled face) has a log-singular flux: order below 2.
-    // Measured 1.92-1.96 with the default grading (about 1.7 on uniform grids, as references.md section 4).
+    // Measured 1.92-1.96 with the default grading (about 1.7 on uniform grids, as an independent FV check of the series found).
     expect(s3.heatRate.observedOrder).toBeGreaterThan(1.8);
     expect(s3.heatRate.observedOrder).toBeLessThan(2.05);
     // Asymptotic range (Roache): GCI32 ~ r^p GCI21.

@@ -1,6 +1,6 @@
 /**
  * Temperature and heat-flow profiles of every model (src/compare/model-profiles.ts) against the closed
- * forms of the uniform fin. Check values: case R1 of /work/shared/references.md section 1a (k = 180,
+ * forms of the uniform fin. Check values: check case R1 (invented inputs; closed forms of Incropera et al., Table 3.4, from memory; k = 180,
  * h = 40, t = 2 mm, w = 50 mm, cooled edges, L = 30 mm, theta_b = 60 K): computed reference values
  * (scipy/mpmath script uniform_fin.py), closed forms of Incropera, DeWitt, Bergman & Lavine,
  * Fundamentals of Heat and Mass Transfer, Table 3.4 (table number from memory).

@@ -5,7 +5,7 @@ describe('richardsonGci (Celik et al. 2008 procedure)', () => {
   it('reproduces the worked example attributed to Celik et al. 2008 (J. Fluids Eng. 130(7) 078001, Table 1)', () => {
     // Inputs N = 18000, 8000, 4500 cells in 2-D, phi = 6.063, 5.972, 5.863. Published outcome
     // (p ~ 1.53, phi_ext ~ 6.1685, GCI_fine ~ 2.2 %) as checked by the pyGCS test suite (tests/test_GCI.py);
-    // the digits below are the same procedure evaluated in mpmath (shared refcalc script gci.py).
+    // the digits below are the same procedure evaluated in mpmath (script gci.py).
     const results = [18000, 8000, 4500].map((n, i) => ({ size: n ** -0.5, value: [6.063, 5.972, 5.863][i] as number }));
     const s = richardsonGci(results);
     // 1e-6 relative: the reference values are quoted to 7 significant figures.
@@ -27,7 +27,7 @@ describe('richardsonGci (Celik et al. 2008 procedure)', () => {
       return ((th(0) - th(1)) / d + ((mL ** 2 * d) / 2) * th(0)) / mL;
     };
     const s = richardsonGci([40, 20, 10].map((n) => ({ size: 1 / n, value: q(1, n) })));
-    // Reference values from the same procedure in mpmath (refcalc gci.py): p = 1.99883078, GCI = 7.9765e-5.
+    // Reference values from the same procedure in mpmath (gci.py): p = 1.99883078, GCI = 7.9765e-5.
     expect(s.observedOrder).toBeCloseTo(1.99883078, 6);
     expect(s.gci).toBeCloseTo(7.9765e-5, 8);
     const trueError = Math.abs(q(1, 40) - Math.tanh(1)) / Math.tanh(1);
