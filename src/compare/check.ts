@@ -17,7 +17,7 @@ import { nonlinearCheck } from './check-nonlinear.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { designFlags } from './flags.js';
 import { assumptionLedger } from './ledger.js';
-import { modelRows, shortcutInputs } from './model-rows.js';
+import { madeByReported, modelRows, shortcutInputs } from './model-rows.js';
 import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
 import type { CheckReport, Flag, ReferenceResult } from './types.js';
@@ -115,7 +115,16 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
   const converged = twoD ? twoD.study.heatRate.converged || twoD.study.discretizationError < opts.tolerance / 100 : oneD.study.converged;
   const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
   return {
-    report: { case: c.name, tolerance: opts.tolerance, reference, models, notApplicable, assumptions, flags, cautions: [...CAUTIONS] },
+    report: {
+      case: c.name,
+      tolerance: opts.tolerance,
+      reference,
+      models,
+      notApplicable,
+      assumptions: madeByReported(assumptions, models),
+      flags,
+      cautions: [...CAUTIONS],
+    },
     oneD,
     twoD: twoD ? twoD.study : null,
   };

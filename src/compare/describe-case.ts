@@ -66,7 +66,9 @@ export function describeTip(t: TipCondition): string {
 export function describeCase(c: Case): string[] {
   const k = c.material.k;
   const kText = k.kind === 'constant' ? `k = ${num(k.k)} W/(m*K)` : `k tabulated over temperature`;
-  const edges = c.fin.profile.kind === 'pin' || c.fin.profile.kind === 'conical-pin' || c.fin.profile.kind === 'annular' ? '' : `, ${c.fin.edges} edges`;
+  const p = c.fin.profile;
+  const straight = !(p.kind === 'pin' || p.kind === 'conical-pin' || p.kind === 'annular' || (p.kind === 'tabulated' && p.shape === 'pin'));
+  const edges = straight ? `, ${c.fin.edges} edges` : '';
   const contact = c.base.contactResistance > 0 ? `, contact resistance ${c.base.contactResistance.toExponential(2)} m^2*K/W` : '';
   return [
     `${describeProfile(c.fin.profile)}${edges}`,

@@ -1,6 +1,6 @@
 /** Turns model heat rates into the rows of the check table: efficiency, effectiveness, drift, verdict. */
 import type { ShortcutValue } from './shortcuts.js';
-import { verdictOf, type ModelResult, type ReferenceResult } from './types.js';
+import { verdictOf, type AssumptionRow, type ModelResult, type ReferenceResult } from './types.js';
 
 export const SHORTCUT_ACCURACY = 'closed form: exact for its own assumptions (round-off); its error here is the drift';
 
@@ -39,4 +39,10 @@ export function modelRows(
       ...(v.guessValues ? { guessValues: v.guessValues } : {}),
     };
   });
+}
+
+/** Ledger rows name only the models the check actually reports (a not-applicable shortcut makes no assumption here). */
+export function madeByReported(rows: AssumptionRow[], models: ModelResult[]): AssumptionRow[] {
+  const present = new Set<string>(models.map((m) => m.model));
+  return rows.map((r) => ({ ...r, madeBy: r.madeBy.filter((id) => present.has(id)) }));
 }
