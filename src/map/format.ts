@@ -3,6 +3,7 @@
  * is ok / marginal / unsafe and its drift range, the case's own point, the points without results grouped by
  * cause, and the files written.
  */
+import { isPointError } from './types.js';
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';
 
@@ -61,6 +62,12 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     for (const g of summary.errorGroups.slice(0, 5)) lines.push(`  ${g.count} x ${g.example}`);
     if (summary.errorGroups.length > 5) lines.push(`  ... and ${summary.errorGroups.length - 5} other kinds of problem`);
   }
+  let worstError = 0;
+  for (const p of run.points) if (!isPointError(p)) worstError = Math.max(worstError, p.reference.discretizationError);
+  lines.push('');
+  lines.push(`Reference accuracy: estimated discretisation error of Q (GCI) at most ${worstError.toExponential(1)} (relative) over the map.`);
+  lines.push('Cautions: estimates of the stated model, to be confirmed by test; h is usually the largest uncertainty;');
+  lines.push('  follow the applicable codes, standards and licensed practice (overheated electronics fail, hot surfaces burn).');
   if (files.length > 0) {
     lines.push('');
     lines.push('Files:');

@@ -6,6 +6,7 @@
  * discretisation error, each shortcut's heat rate and efficiency. `reference` is the case's own point's reference;
  * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
  */
+import { CAUTIONS } from '../compare/cautions.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapPoint } from './types.js';
 
@@ -39,6 +40,7 @@ export function mapJson(run: MapRun) {
       references: summary.references,
       models: summary.models.map((m) => ({ ...m, minDrift: finiteOrNull(m.minDrift), maxDrift: finiteOrNull(m.maxDrift) })),
     },
+    cautions: [...CAUTIONS],
     points: run.points.map(pointJson),
   };
 }
