@@ -24,10 +24,11 @@
  * with the Armijo condition (c = 1e-4, halving; Dennis & Schnabel 1983, Numerical Methods for
  * Unconstrained Optimization and Nonlinear Equations, §6.3 [from memory]), non-finite trial states and
  * negative absolute temperatures rejected, full steps near round-off. Converged when the relative
- * residual max_p |R_p| / max_p s_p <= 1e-10 (s_p the sum of the magnitudes of the terms of row p: each
- * coupling's flow |K_pq (D_q - D_p)| and each exchange) and the base heat rate changed by <= 1e-10
- * relative in the last step (or its round-off floor, 16 ε_mach sum of the base rows' s_p). That driver
- * is written for its tridiagonal state and solve, so it is mirrored here rather than shared.
+ * residual max_p (|R_p| - f_p) / max_p s_p <= 1e-10 (s_p the sum of the magnitudes of the terms of row p:
+ * each coupling's flow |K_pq (D_q - D_p)| and each exchange; f_p the row's round-off floor,
+ * RESIDUAL_FLOOR_FACTOR) and the base heat rate changed by <= 1e-10 relative in the last step (or its
+ * round-off floor, 16 ε_mach sum of the base rows' s_p). That driver is written for its tridiagonal state
+ * and solve, so it is mirrored here rather than shared.
  */
 import { buildSystem2D, type BoundaryTerms2D, type SideTerms } from './assemble2dBoundary.js';
 import { heatRatesFromExchange, type HeatRates2D } from './fin2dHeat.js';
@@ -51,6 +52,13 @@ const MAX_HALVINGS = 40;
 /** Below this relative residual the full step is taken (the line search cannot see a decrease there). */
 const ROUND_OFF_REGIME = 1e-8;
 const HEAT_RATE_FLOOR_FACTOR = 16 * Number.EPSILON;
+/**
+ * A row's residual below 16 ε_mach sum_q |K_pq| (|D_p| + |D_q|) is round-off of its potentials (each D
+ * carries ~ε |D|, multiplied by every coupling). Only the part above counts: on ordinary grids it is ~1e-13
+ * of the heat flows and changes nothing, but next to a cusped tip (parabolic profiles, cells ~1e6 times
+ * longer than high) couplings of 1e8 W/K make it ~1e-7 of them, which no iteration can go below.
+ */
+const RESIDUAL_FLOOR_FACTOR = 16 * Number.EPSILON;
 
 export interface Newton2DOutcome {
   readonly converged: boolean;
@@ -77,6 +85,8 @@ interface State {
   readonly ratio: Float64Array;
   readonly residual: Float64Array;
   readonly scale: Float64Array;
+  /** Round-off scale of each row: sum_q |K_pq| (|D_p| + |D_q|), W per depth. */
+  readonly floor: Float64Array;
   /** Per side: exchange and its slope de/dθ at the side's nodes. */
   readonly exchange: Record<SideName, Float64Array>;
   readonly slope: Record<SideName, Float64Array>;
@@ -100,6 +110,7 @@ function createState(setup: Newton2DSetup): State {
     ratio: new Float64Array(n),
     residual: new Float64Array(n),
     scale: new Float64Array(n),
+    floor: new Float64Array(n),
     exchange: perSide(),
     slope: perSide(),
     sideTheta: perSide(),
@@ -146,12 +157,12 @@ function sideExchange(setup: Newton2DSetup, side: SideTerms, s: State): void {
 /** Fills a state from its drops: θ, D, κ, exchanges, residual, row scales and norms. */
 function evaluate(setup: Newton2DSetup, s: State): void {
   const { K, terms, fixed } = setup.ops;
-  const { drop, theta, potential: D, residual: R, scale } = s;
+  const { drop, theta, potential: D, residual: R, scale, floor } = s;
   const n = drop.length;
   const thetaBase = setup.thetaBase;
   for (let p = 0; p < n; p++) theta[p] = thetaBase - (drop[p] as number);
   setup.kirchhoff.evaluate(drop, D, s.ratio);
-  conductionInto(K, D, R, scale);
+  conductionInto(K, D, R, scale, floor);
   for (const name of SIDE_NAMES) {
     const side = terms[name];
     sideExchange(setup, side, s);
@@ -171,7 +182,7 @@ function evaluate(setup: Newton2DSetup, s: State): void {
     const r = R[p] as number;
     if (!Number.isFinite(r)) valid = false;
     norm2 += r * r;
-    maxResidual = Math.max(maxResidual, Math.abs(r));
+    maxResidual = Math.max(maxResidual, Math.abs(r) - RESIDUAL_FLOOR_FACTOR * (floor[p] as number));
     maxScale = Math.max(maxScale, scale[p] as number);
   }
   const law = setup.faceLaw;
@@ -184,22 +195,28 @@ function evaluate(setup: Newton2DSetup, s: State): void {
 }
 
 /**
- * out_p = sum_q K_pq (D_p - D_q) (heat conducted out of node p's control volume, W per depth) and
- * scale_p = sum_q |K_pq (D_q - D_p)|, one pass over the upper half of the stencil (each flow once, added
- * to both of its nodes with opposite signs).
+ * out_p = sum_q K_pq (D_p - D_q) (heat conducted out of node p's control volume, W per depth),
+ * scale_p = sum_q |K_pq (D_q - D_p)| and floor_p = sum_q |K_pq| (|D_p| + |D_q|), one pass over the upper
+ * half of the stencil (each flow once, added to both of its nodes with opposite signs).
  */
-function conductionInto(K: Stencil9, D: Float64Array, out: Float64Array, scale: Float64Array): void {
+function conductionInto(K: Stencil9, D: Float64Array, out: Float64Array, scale: Float64Array, floor: Float64Array): void {
   const { nodesX: nx, nodesY: ny, east, north, northEast, southEast } = K;
   out.fill(0);
   scale.fill(0);
+  floor.fill(0);
   const flow = (p: number, q: number, c: number): void => {
     if (c === 0) return;
-    const f = c * ((D[p] as number) - (D[q] as number));
+    const dp = D[p] as number;
+    const dq = D[q] as number;
+    const f = c * (dp - dq);
     out[p] = (out[p] as number) + f;
     out[q] = (out[q] as number) - f;
     const a = Math.abs(f);
     scale[p] = (scale[p] as number) + a;
     scale[q] = (scale[q] as number) + a;
+    const m = Math.abs(c) * (Math.abs(dp) + Math.abs(dq));
+    floor[p] = (floor[p] as number) + m;
+    floor[q] = (floor[q] as number) + m;
   };
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
