@@ -5,3 +5,6 @@ export const CAUTIONS: readonly string[] = [
   'Overheated electronics fail and hot surfaces burn: follow the applicable codes, standards and licensed engineering practice for temperature limits and guarding.',
   'The numerical reference solves the stated idealisation (steady conduction, the given h and k); the discretisation error quoted is the error of that model, not of the real part.',
 ];
+
+/** The one-line form printed on every chart (charts travel alone into design notes). */
+export const CHART_CAUTION = 'Estimates of an idealised fin: confirm by test; h is usually the largest uncertainty; follow applicable codes and practice.';

@@ -24,7 +24,7 @@ export interface Header {
  * Title (one line, bold) and subtitle (cautions, model notes; wrapped, at most `maxSubtitleLines`
  * lines, the last one ending in "…" when cut) across the top of a `width` px canvas.
  */
-export function drawHeader(title: string, subtitle: string | readonly string[] | undefined, width: number, maxSubtitleLines = 3): Header {
+export function drawHeader(title: string, subtitle: string | readonly string[] | undefined, width: number, maxSubtitleLines = 4): Header {
   const elements: string[] = [];
   let y = gap.outer;
   const usable = width - 2 * gap.outer;

@@ -8,6 +8,7 @@
  * tolerance band always reads as the pale middle of the map and a few wild points do not wash it out (the colour
  * saturates beyond the range; the colour bar shows the range).
  */
+import { CHART_CAUTION } from '../compare/cautions.js';
 import { mapChart, type MapChartResult } from '../images/index.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { appendToSvg, biotCandidates, isoLinesSvg, mLCandidates } from './iso-lines.js';
@@ -64,7 +65,7 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
   const marks = casePointMark(run);
   const chart = mapChart({
     title: `Drift of ${model} from ${reference}: ${run.caseName}`,
-    subtitle: `drift = (${model} - ${reference}) / ${reference} on the heat rate; ${band}`,
+    subtitle: [`drift = (${model} - ${reference}) / ${reference} on the heat rate; ${band}`, CHART_CAUTION],
     xLabel: axisLabel(run.x),
     yLabel: axisLabel(run.y),
     valueLabel: `Drift of ${model} (%)`,

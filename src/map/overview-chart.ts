@@ -8,6 +8,7 @@
  * "unsafe" nodes placed on the plot's edges, so every region closes along the edge of the map and can be filled
  * (even-odd rule for holes). Invalid points and points where the shortcut does not apply count as unsafe.
  */
+import { CHART_CAUTION } from '../compare/cautions.js';
 import { contourLines, getColormap, makeAxis, project, type Axis } from '../images/index.js';
 import { drawAxes, xAxisMargin, yAxisMargin } from '../images/axes.js';
 import { fieldImage } from '../images/field-layer.js';
@@ -95,8 +96,11 @@ export function overviewChart(run: MapRun): OverviewChart {
   const invalid = run.summary.errors;
   const header = drawHeader(
     `Where each shortcut holds: ${run.caseName}`,
-    `outlined and shaded: |drift| <= ${percentText(tolerance)} against ${run.casePoint.reference.model} (verdict ok); darker where more shortcuts hold` +
-      (invalid > 0 ? `; grey: ${invalid} points where the case is invalid` : ''),
+    [
+      `outlined and shaded: |drift| <= ${percentText(tolerance)} against ${run.casePoint.reference.model} (verdict ok); darker where more shortcuts hold` +
+        (invalid > 0 ? `; grey: ${invalid} points where the case is invalid` : ''),
+      CHART_CAUTION,
+    ],
     width,
   );
   const top = header.bottom + 8;

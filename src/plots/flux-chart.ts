@@ -58,7 +58,8 @@ export function fluxChartSpec(input: CheckPlotInput, size: ChartSize): LineChart
       loss.push({ label, x: [xMm, xMm], y: [0, peak(reference.loss.values)], note: where, colour: '#555555', style: 'dotted', marker: 'none' });
     } else {
       const tip = reference.flow.values[reference.flow.values.length - 1] as number;
-      subtitle.push(`Less than ${pct} % of Q leaves before the tip: the tip still passes ${((100 * tip) / (reference.flow.values[0] as number)).toFixed(1)} % of Q (${reference.model}).`);
+      // Before the caution line, which stays last.
+      subtitle.splice(subtitle.length - 1, 0, `Less than ${pct} % of Q leaves before the tip: the tip still passes ${((100 * tip) / (reference.flow.values[0] as number)).toFixed(1)} % of Q (${reference.model}).`);
     }
   }
   return {

@@ -5,6 +5,7 @@
  * readable with colour-vision deficiencies and in grey), labelled isotherms, base and tip marked.
  * Coordinates in mm: x along the fin (annular fins: the radius r), y across it.
  */
+import { CHART_CAUTION } from '../compare/cautions.js';
 import type { Case } from '../case/types.js';
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import type { FieldChartSpec } from '../images/index.js';
@@ -62,6 +63,7 @@ export function heatmapChartSpec(c: Case, study: Fin2DStudy, size: ChartSize, ra
     `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError)} (GCI, ${study.grids.length} grids).`,
     `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; tip centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
     r.truncatedInfinite ? 'Infinite fin: the section is cut where the field has decayed and closed by its exact slowest mode.' : '',
+    CHART_CAUTION,
   ].filter((s) => s !== '');
   return {
     title: `Temperature in the fin section: ${c.name}`,

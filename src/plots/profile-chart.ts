@@ -4,6 +4,7 @@
  * marker (images/series-styles.ts), its heat rate, drift and verdict in the legend; the reference's tip
  * temperature is marked. Axes in mm and °C.
  */
+import { CHART_CAUTION } from '../compare/cautions.js';
 import type { Case } from '../case/types.js';
 import type { ModelProfiles } from '../compare/model-profiles.js';
 import type { CheckReport } from '../compare/types.js';
@@ -43,7 +44,8 @@ export function legendNote(input: CheckPlotInput, model: string, withHeatRate = 
 /** Subtitle lines shared by the profile and flux charts. */
 export function checkSubtitle(input: CheckPlotInput): string[] {
   const { report, profiles } = input;
-  // At most three lines (the chart header's limit): reference; shortcuts and what is not drawn; one remark.
+  // At most four lines (the chart header's limit): reference; shortcuts and what is not drawn; one remark;
+  // the caution (last, so it is never the line cut).
   const omitted = profiles.omitted.length > 0 ? ` Not drawn (no temperature profile): ${profiles.omitted.map((o) => o.model).join(', ')}.` : '';
   const lines = [
     `Reference: ${referenceWords(report.reference)}; verdicts at a tolerance of ±${(100 * report.tolerance).toFixed(1)} %.`,
@@ -53,6 +55,7 @@ export function checkSubtitle(input: CheckPlotInput): string[] {
   else if (report.reference.model === 'fd-2d' && !isPin(input.case) && input.case.fin.profile.kind !== 'annular' && input.case.fin.edges === 'cooled') {
     lines.push("fd-2d lines: the section with insulated side edges; the reference Q adds the edges' cooling from fd-1d.");
   }
+  lines.push(CHART_CAUTION);
   return lines;
 }
 
