@@ -30,11 +30,13 @@
  * round-off floor, 16 ε_mach sum of the base rows' s_p). That driver is written for its tridiagonal state
  * and solve, so it is mirrored here rather than shared.
  */
+import { SolverError } from '../errors.js';
 import { buildSystem2D, type BoundaryTerms2D, type SideTerms } from './assemble2dBoundary.js';
 import { heatRatesFromExchange, type HeatRates2D } from './fin2dHeat.js';
 import { cvLosses } from './nonlinear-losses.js';
 import { SIDE_NAMES, type Newton2DSetup, type SideName } from './nonlinear2d-setup.js';
-import { prepareSolver2D, type SolverMethod } from './sparse/autoSolver.js';
+import { chooseSolverMethod, MAX_BANDED_BYTES, prepareSolver2D, type SolverMethod } from './sparse/autoSolver.js';
+import { bandedCholeskyBytes } from './sparse/bandedCholesky.js';
 import type { Stencil9, System2D } from './sparse/stencil9.js';
 
 export interface Newton2DOptions {
@@ -281,6 +283,24 @@ function step(setup: Newton2DSetup, from: Float64Array, delta: Float64Array, lam
   }
 }
 
+/**
+ * One Newton system by the requested linear solver. With the automatic choice, an MG-PCG solve that fails
+ * is repeated by the banded factor when it fits in memory: near convergence the right-hand side of a grid
+ * with a cusped tip is the round-off of its ~1e8 W/K couplings (paired, summing to nothing), which MG-PCG
+ * cannot reduce by its relative target; the direct solve has no such target.
+ */
+function solveStep(system: System2D, requested: SolverMethod | 'auto'): { w: Float64Array; method: SolverMethod } {
+  const { nodesX: nx, nodesY: ny } = system.matrix;
+  const method = requested === 'auto' ? chooseSolverMethod(nx, ny) : requested;
+  try {
+    return { w: prepareSolver2D(system, method).solve(system), method };
+  } catch (e) {
+    const fits = bandedCholeskyBytes(Math.max(nx, ny), Math.min(nx, ny)) <= MAX_BANDED_BYTES;
+    if (!(e instanceof SolverError) || requested !== 'auto' || method !== 'mg-pcg' || !fits) throw e;
+    return { w: prepareSolver2D(system, 'banded-cholesky').solve(system), method: 'banded-cholesky' };
+  }
+}
+
 /** Damped Newton from the drops `initial` (not modified; fixed nodes are reset). Never throws on non-convergence. */
 export function newtonSolve2D(setup: Newton2DSetup, initial: Float64Array, opts: Newton2DOptions = {}): Newton2DOutcome {
   const maxIterations = opts.maxIterations ?? NEWTON_2D_MAX_ITERATIONS;
@@ -312,9 +332,9 @@ export function newtonSolve2D(setup: Newton2DSetup, initial: Float64Array, opts:
   if (!current.valid) return outcome(false, 0, 'the starting temperatures give a non-finite residual');
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     const system = newtonSystem(setup, current);
-    const prepared = prepareSolver2D(system, opts.method ?? 'auto');
-    method = prepared.method;
-    const w = prepared.solve(system);
+    const solved = solveStep(system, opts.method ?? 'auto');
+    method = solved.method;
+    const w = solved.w;
     for (let p = 0; p < w.length; p++) delta[p] = -(w[p] as number) / (current.ratio[p] as number);
     let lambda = 1;
     const fullStepOnly = current.relative <= ROUND_OFF_REGIME;

@@ -30,7 +30,7 @@ export interface PreparedSolver2D {
  * 94 ms), MG above (2000 x 50: 86 ms against 194 ms; 500 x 80: 32 ms against 181 ms).
  */
 const CG_WORK_PER_NODE = 500;
-const MAX_BANDED_BYTES = 256 * 1024 * 1024;
+export const MAX_BANDED_BYTES = 256 * 1024 * 1024;
 
 export function chooseSolverMethod(nodesX: number, nodesY: number): SolverMethod {
   const short = Math.min(nodesX, nodesY);
