@@ -175,10 +175,10 @@ function advice(problem: NonlinearFin2DProblem): string {
 
 function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2DOutcome, reached: number): SolverError {
   const progress = reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '';
+  const reason = outcome.failure ?? 'unknown reason';
+  const steps = reason.startsWith('no convergence') ? '' : ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})`;
   return new SolverError(
-    `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${outcome.failure ?? 'unknown reason'}` +
-      ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})${progress}. ` +
-      `To get a solution: ${advice(problem)}.`,
+    `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${reason}${steps}${progress}. To get a solution: ${advice(problem)}.`,
   );
 }
 
