@@ -2,16 +2,23 @@
  * `fincheck check` for nonlinear fins: h that grows with the temperature excess (power law), grey
  * radiation from the faces, conductivity that depends on temperature.
  *
- * Reference: fd-1d solved by Newton's method on the same finite-volume grids (refinement study as for
- * linear fins). The shortcuts need one h and one k: they are evaluated twice, with h and k at the base
- * temperature and with h and k averaged over the solved fin (linear-surrogate.ts). The ledger adds one
- * row per nonlinearity, each re-solving the fin with that one effect removed: constant h (at the base
+ * Reference: as for linear fins (reference2d.ts), fd-2d across the thickness where the 2-D model covers the
+ * case and --reference is auto or 2d, solved by Newton's method on the three grids of the 2-D study
+ * (nonlinear2d*.ts); the straight fin's cooled side edges are added from fd-1d, the ledger's
+ * "one-dimensional conduction" row compares fd-1d and fd-2d on the same idealisation, fd-1d is listed as a
+ * model. Else (--reference 1d, or a case the 2-D model does not cover: a nonlinear infinite tip) fd-1d
+ * solved by Newton's method on the 1-D grids (refinement study as for linear fins).
+ * The shortcuts need one h and one k: they are evaluated twice, with h and k at the base temperature and
+ * with h and k averaged over the fin solved by fd-1d (linear-surrogate.ts). The ledger adds one row per
+ * nonlinearity, each re-solving the fin with fd-1d with that one effect removed: constant h (at the base
  * temperature), constant k (at the base temperature), no radiation.
  * Radiation: the fin sees only its surroundings (view factor 1, no exchange with the base or neighbours).
  */
 import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
 import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
+import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
+import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
@@ -19,21 +26,42 @@ import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js
 import { assumptionLedger, LEDGER_NODES } from './ledger.js';
 import { conductivityAt, GUESS_LABEL, linearSurrogate, type HGuess } from './linear-surrogate.js';
 import { modelRows, shortcutInputs, type ModelInput } from './model-rows.js';
+import { reference2DWith, type Reference2D, type Reference2DModels } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
 import type { AssumptionRow, ModelId, NotApplicable } from './types.js';
 
 export const RADIATION_VIEW_NOTE = 'radiation: grey faces that see only the surroundings (view factor 1; no exchange with the base or other fins)';
 
+/** The Newton solvers behind a nonlinear fd-2d reference. */
+function nonlinearModels(radiationNote: string): Reference2DModels<Case> {
+  return {
+    study2D: (c) => studyNonlinearFin2D(c),
+    heatRate1D: (variant, nodes) => solveNonlinearFin1D(variant, { nodes }).heatRate,
+    note: (study) => {
+      const steps = (study as NonlinearFin2DStudy).iterations.join('/');
+      return `; nonlinear, Newton converged (residual <= 1e-10; ${steps} steps, coarsest to finest grid)${radiationNote}`;
+    },
+  };
+}
+
 export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
-  if (opts.reference === '2d') {
-    throw new UsageError('--reference 2d: the 2-D model does not solve nonlinear fins (power-law h, radiation, k over temperature); use --reference 1d or auto');
-  }
   const geometry = finGeometry(c);
   const study = studyNonlinearFin1D(c);
   const ref = study.result;
-  const finestSteps = study.iterations[study.iterations.length - 1] ?? 0;
   const radiationNote = c.convection.emissivity > 0 ? `; ${RADIATION_VIEW_NOTE}` : '';
-  const reference = reference1D(study, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid); the 2-D model does not cover nonlinear fins${radiationNote}`);
+  const effectivenessScale = ref.heatRate / ref.effectiveness;
+  let twoD: Reference2D | null = null;
+  let outside2D = '';
+  if (opts.reference !== '1d') {
+    const unsupported = nonlinear2dUnsupported(c);
+    if (unsupported === null) twoD = reference2DWith(c, study, ref.idealHeatRate, effectivenessScale, true, nonlinearModels(radiationNote));
+    else if (opts.reference === '2d') throw new UsageError(`--reference 2d: ${unsupported}; use --reference 1d or auto`);
+    else outside2D = `; the 2-D model does not cover this fin (${unsupported})`;
+  }
+  const finestSteps = study.iterations[study.iterations.length - 1] ?? 0;
+  const reference = twoD
+    ? twoD.reference
+    : reference1D(study, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${radiationNote}`);
 
   const inputs: ModelInput[] = [];
   let notApplicable: NotApplicable[] = [];
@@ -50,17 +78,31 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
     }
   }
   const eq = eqBase as EquivalentUniformFin;
-  const effectivenessScale = ref.heatRate / ref.effectiveness;
-  const models = modelRows(inputs, reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+  const fd1d = twoD
+    ? [
+        {
+          model: 'fd-1d' as const,
+          heatRate_W: ref.heatRate,
+          formulaEfficiency: null,
+          m_per_m: null,
+          length_m: null,
+          basis: '1-D finite volumes, Newton: actual profile, h(theta), k(T), radiation, tip and edges; uniform temperature across the thickness',
+          accuracy: `estimated discretisation error ${study.study.gci.toExponential(1)} (GCI)`,
+        },
+      ]
+    : [];
+  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
 
   const solve = (variant: Case): number => solveNonlinearFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
   const assumptions = opts.ledger === false ? [] : [...nonlinearRows(c, solve), ...assumptionLedger(c, geometry, eq, solve)];
-  const flags = checkFlags(geometry, eq, reference, opts.tolerance, study.study.converged, null);
+  if (twoD) assumptions.unshift(twoD.oneDRow);
+  const converged = twoD ? twoD.study.heatRate.converged || twoD.study.discretizationError < opts.tolerance / 100 : study.study.converged;
+  const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
   const cautions = c.convection.emissivity > 0 ? [...CAUTIONS, `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`] : [...CAUTIONS];
   return {
     report: { case: c.name, tolerance: opts.tolerance, reference, models, notApplicable, assumptions, flags, cautions },
     oneD: study,
-    twoD: null,
+    twoD: twoD ? twoD.study : null,
   };
 }
 

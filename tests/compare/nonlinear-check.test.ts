@@ -1,6 +1,6 @@
 /**
- * `check` on nonlinear fins: the Newton reference against the first-integral closed forms, and the two
- * constant-h guesses of the shortcuts.
+ * `check` on nonlinear fins: the Newton reference against the first-integral closed forms, the two
+ * constant-h guesses of the shortcuts, and the fd-2d reference (Newton across the thickness).
  */
 import { describe, expect, it } from 'vitest';
 import { parseCaseObject } from '../../src/case/parse.js';
@@ -30,8 +30,8 @@ describe('power-law h, adiabatic tip, mL = 1', () => {
     [0.25, 0.7283030125],
     [1 / 3, 0.7183075317],
     [2, 0.5834585319],
-  ])('n = %s: the reference matches Q = %s to 1e-6, and the base-h shortcut gives tanh(1)', async (n, Q) => {
-    const { report } = await runCheck(powerLawCase(n), { tolerance: 0.02, reference: 'auto' });
+  ])('n = %s: the fd-1d reference matches Q = %s to 1e-6, and the base-h shortcut gives tanh(1)', async (n, Q) => {
+    const { report } = await runCheck(powerLawCase(n), { tolerance: 0.02, reference: '1d' });
     expect(report.reference.model).toBe('fd-1d');
     // Finest grid error ~1e-8 (GCI); 1e-6 is the acceptance level of the nonlinear issue.
     expect(Math.abs(report.reference.heatRate_W / (Q * M) - 1)).toBeLessThan(1e-6);
@@ -64,9 +64,6 @@ describe('radiation and tabulated conductivity', () => {
     const row = report.assumptions.find((a) => a.assumption === 'no radiation')!;
     expect(row.drift).toBeLessThan(-0.2); // at 120 degC radiation is comparable to h = 5 convection
   });
-  it('--reference 2d on a nonlinear fin is a usage error naming the reason', async () => {
-    await expect(runCheck(powerLawCase(0.25), { tolerance: 0.02, reference: '2d' })).rejects.toThrow(/2-D model does not solve nonlinear fins/);
-  });
   it('k over temperature: a constant-k row, and a table that is flat recovers the linear answer exactly', async () => {
     const flat = parseCaseObject({
       name: 'flat table',
@@ -79,5 +76,59 @@ describe('radiation and tabulated conductivity', () => {
     // Uniform fin, adiabatic tip: q = M tanh(mL) (Incropera et al., Table 3.4 case B; from memory).
     expect(Math.abs(report.reference.heatRate_W / (M * Math.tanh(1)) - 1)).toBeLessThan(1e-6);
     expect(report.assumptions.find((a) => a.assumption.startsWith('constant k'))!.drift).toBeCloseTo(0, 12);
+  });
+});
+
+describe('fd-2d reference for nonlinear fins (Newton across the thickness)', () => {
+  it.each(['auto', '2d'] as const)('--reference %s: fd-2d is the reference, fd-1d a model, the 1-D conduction row their drift', async (reference) => {
+    const { report, twoD } = await runCheck(powerLawCase(0.25), { tolerance: 0.02, reference });
+    expect(report.reference.model).toBe('fd-2d');
+    expect(report.reference.note).toMatch(/nonlinear, Newton converged/);
+    expect(twoD).not.toBeNull();
+    // Bi = h_b (t/2)/k = 5e-5: the 2-D fin is within ~Bi of the 1-D first integral (Sen & Trinh 1986,
+    // Q = 0.7283030125 at n = 1/4, mL = 1, as above), and the 2-D grids resolve it to ~1e-6 (GCI).
+    expect(Math.abs(report.reference.heatRate_W / (0.7283030125 * M) - 1)).toBeLessThan(1e-4);
+    expect(report.reference.discretizationError).toBeLessThan(1e-5);
+    expect(report.reference.energyBalance).toBeLessThan(1e-9);
+    const fd1d = report.models.find((x) => x.model === 'fd-1d')!;
+    const row = report.assumptions[0]!;
+    expect(row.assumption).toMatch(/^one-dimensional conduction/);
+    expect(row.madeBy).toContain('fd-1d');
+    // Insulated edges: no edge correction, so the fd-1d row's drift is the ledger's 1-D conduction drift.
+    expect(fd1d.drift).toBeCloseTo(row.drift, 12);
+    // The 1-D model neglects the drop across the thickness, so it over-predicts (slightly, at this Bi).
+    expect(row.drift).toBeGreaterThan(0);
+    expect(row.drift).toBeLessThan(1e-4);
+  });
+  it('a thick fin: the thick-fin flag states the drift the 2-D solution measures; cooled edges are added from fd-1d', async () => {
+    // Bi = h_b (t/2)/k = 2000 * 0.005 / 20 = 0.5.
+    const c = parseCaseObject({
+      name: 'thick boiling fin',
+      fin: { profile: 'rectangular', length: 0.02, thickness: 0.01, width: 0.05, edges: 'cooled' },
+      material: { k: 20 },
+      convection: { ambient: 100, h: { law: 'power', base: 2000, exponent: 2 }, tip: 'convective' },
+      base: { temperature: 120 },
+    });
+    const { report } = await runCheck(c, { tolerance: 0.02, reference: 'auto' });
+    expect(report.reference.model).toBe('fd-2d');
+    expect(report.reference.note).toMatch(/side edges' cooling added from fd-1d/);
+    const row = report.assumptions.find((a) => a.assumption.startsWith('one-dimensional conduction'))!;
+    // At Bi = 0.5 the 1-D model over-predicts by several per cent (linear plate fins: references.md section 4c).
+    expect(row.drift).toBeGreaterThan(0.02);
+    const flag = report.flags.find((f) => f.flag === 'thick-fin')!;
+    expect(flag.message).toContain(`over-predicting by ${(100 * row.drift).toFixed(1)} %`);
+  });
+  it('a nonlinear infinite tip is outside the 2-D model: auto keeps fd-1d and says why, 2d is a usage error', async () => {
+    const c = parseCaseObject({
+      name: 'long fin',
+      fin: { profile: 'rectangular', length: 0.2, thickness: 0.002, width: w, edges: 'insulated' },
+      material: { k: 200 },
+      convection: { ambient: 20, h: { law: 'power', base: 10, exponent: 0.25 }, tip: 'infinite' },
+      base: { temperature: 70 },
+    });
+    const { report } = await runCheck(c, { tolerance: 0.02, reference: 'auto' });
+    expect(report.reference.model).toBe('fd-1d');
+    expect(report.reference.note).toMatch(/2-D model does not cover this fin \(an infinite tip of a nonlinear fin/);
+    await expect(runCheck(c, { tolerance: 0.02, reference: '2d' })).rejects.toThrow(/--reference 2d: an infinite tip of a nonlinear fin is not modelled in 2-D/);
   });
 });
