@@ -116,22 +116,22 @@ describe('fincheck plot refuses bad requests with exit 2 and writes nothing', ()
     expect(readdirSync(out)).toEqual(['natural.yaml']);
   });
 
-  it('--reference 2d on a nonlinear fin: the check’s own refusal passes through', async () => {
+  it('--reference 2d on a nonlinear fin outside the 2-D model (infinite tip): the check’s own refusal passes through', async () => {
     const out = folder('nonlinear');
     const file = caseFile(
       out,
       'natural.yaml',
-      'name: natural convection\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: convective }\nbase: { temperature: 80 degC }\n',
+      'name: natural convection\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: infinite }\nbase: { temperature: 80 degC }\n',
     );
     const r = await cli('plot', file, '--out', join(out, 'p.png'), '--reference', '2d');
     expect(r.code).toBe(2);
-    expect(r.stderr).toContain('--reference 2d: the 2-D model does not solve nonlinear fins');
+    expect(r.stderr).toContain('--reference 2d: an infinite tip of a nonlinear fin is not modelled in 2-D');
     expect(readdirSync(out)).toEqual(['natural.yaml']);
   });
 });
 
 describe('nonlinear fins', () => {
-  it('profile and flux charts of a power-law h fin (fd-1d Newton and the shortcuts at the base h)', async () => {
+  it('profile and flux charts of a power-law h fin (fd-2d Newton reference, fd-1d and the shortcuts at the base h)', async () => {
     const out = folder('nonlinear-ok');
     const file = caseFile(
       out,
@@ -141,7 +141,7 @@ describe('nonlinear fins', () => {
     const r = await cli('plot', file, '--out', join(out, 'p.svg'), '--json');
     expect(r.code).toBe(0);
     const doc = JSON.parse(r.stdout) as { models: string[]; reference: string };
-    expect(doc.reference).toBe('fd-1d');
+    expect(doc.reference).toBe('fd-2d');
     expect(doc.models).toEqual(expect.arrayContaining(['fd-1d', 'tanh-L', 'convective-tip']));
     const texts = svgTexts(readFileSync(join(out, 'p.svg'), 'utf8'));
     expect(texts.some((t) => t.includes('h and k at the base temperature'))).toBe(true);

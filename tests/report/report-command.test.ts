@@ -122,9 +122,9 @@ describe('fincheck report refuses bad requests with exit 2 and writes nothing', 
     expect(readFileSync(file, 'utf8')).toBe('x');
   });
 
-  it('a check that refuses (2-D reference for a nonlinear fin): its message, and no folder', async () => {
+  it('a check that refuses (2-D reference for a nonlinear fin with an infinite tip): its message, and no folder', async () => {
     const caseFile = join(root, 'natural.yaml');
-    writeFileSync(caseFile, 'name: natural\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: convective }\nbase: { temperature: 80 degC }\n');
+    writeFileSync(caseFile, 'name: natural\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: infinite }\nbase: { temperature: 80 degC }\n');
     const dir = join(root, 'nonlinear');
     const r = await cli('report', caseFile, '--out', dir, '--reference', '2d');
     expect(r.code).toBe(2);
