@@ -90,8 +90,8 @@ describe.each([
     // Gap ~ c Bi: slope 1 on log-log axes; the O(Bi^2) remainder lowers it slightly (measured 0.96-0.98).
     expect(Math.abs(logSlope(BIOT, gaps) - 1)).toBeLessThan(0.1);
     // Linear extrapolation of the gap to Bi = 0 from Bi = 0.01 and 0.005 leaves the O(Bi^2) remainder
-    // (measured 2e-5 to 1.1e-4, the largest for n = 2) plus the extrapolated discretisation error (~1e-7): the 2-D model meets the
-    // 1-D oracle in the limit.
+    // (measured 2e-5 to 1.1e-4, the largest for n = 2) plus the extrapolated discretisation error (~1e-7):
+    // the 2-D model meets the 1-D oracle in the limit.
     const atZero = 2 * (gaps[2] as number) - (gaps[1] as number);
     expect(Math.abs(atZero)).toBeLessThan(2e-4);
   });
