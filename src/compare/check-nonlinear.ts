@@ -25,7 +25,7 @@ import { checkFlags, reference1D, type CheckOptions, type CheckOutcome } from '.
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { assumptionLedger, LEDGER_NODES } from './ledger.js';
 import { conductivityAt, GUESS_LABEL, linearSurrogate, type HGuess } from './linear-surrogate.js';
-import { modelRows, shortcutInputs, type ModelInput } from './model-rows.js';
+import { madeByReported, modelRows, shortcutInputs, type ModelInput } from './model-rows.js';
 import { reference2DWith, type Reference2D, type Reference2DModels } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
 import type { AssumptionRow, ModelId, NotApplicable } from './types.js';
@@ -100,7 +100,7 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
   const cautions = c.convection.emissivity > 0 ? [...CAUTIONS, `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`] : [...CAUTIONS];
   return {
-    report: { case: c.name, tolerance: opts.tolerance, reference, models, notApplicable, assumptions, flags, cautions },
+    report: { case: c.name, tolerance: opts.tolerance, reference, models, notApplicable, assumptions: madeByReported(assumptions, models), flags, cautions },
     oneD: study,
     twoD: twoD ? twoD.study : null,
   };
