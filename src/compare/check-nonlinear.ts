@@ -21,7 +21,7 @@ import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
 import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
-import { checkFlags, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
+import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { assumptionLedger, LEDGER_NODES } from './ledger.js';
 import { conductivityAt, GUESS_LABEL, linearSurrogate, type HGuess } from './linear-surrogate.js';
@@ -100,7 +100,7 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
   const cautions = c.convection.emissivity > 0 ? [...CAUTIONS, `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`] : [...CAUTIONS];
   return {
-    report: { case: c.name, tolerance: opts.tolerance, reference, models, notApplicable, assumptions: madeByReported(assumptions, models), flags, cautions },
+    report: { case: c.name, tolerance: opts.tolerance, ...dimensionless(geometry, eq), reference, models, notApplicable, assumptions: madeByReported(assumptions, models), flags, cautions },
     oneD: study,
     twoD: twoD ? twoD.study : null,
   };

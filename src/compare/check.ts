@@ -61,6 +61,18 @@ export function reference1D(oneD: Fin1DStudy, extraNote = ''): ReferenceResult {
   };
 }
 
+/**
+ * Bi = h_b (s_b/2)/k across the thickness at the base (s_b: base thickness, or diameter for pins) and mL
+ * of the equivalent uniform fin (mean section and perimeter, area-weighted mean h): where the fin sits on
+ * the textbook's charts. Dimensionless.
+ */
+export function dimensionless(geometry: FinGeometry1D, eq: EquivalentUniformFin): { biot: number; mL: number } {
+  return {
+    biot: (eq.hBase * geometry.size(0)) / 2 / eq.k,
+    mL: Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length,
+  };
+}
+
 /** Flags from the equivalent uniform fin of the shortcuts and the reference. */
 export function checkFlags(
   geometry: FinGeometry1D,
@@ -72,8 +84,7 @@ export function checkFlags(
 ): Flag[] {
   return designFlags({
     family: geometry.shape,
-    biot: (eq.hBase * geometry.size(0)) / 2 / eq.k,
-    mL: Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length,
+    ...dimensionless(geometry, eq),
     effectiveness: reference.effectiveness,
     hAoverkP: (eq.hBase * geometry.baseArea) / (eq.k * geometry.perimeter(0)),
     tolerance,
@@ -118,6 +129,7 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
     report: {
       case: c.name,
       tolerance: opts.tolerance,
+      ...dimensionless(geometry, eq),
       reference,
       models,
       notApplicable,

@@ -73,6 +73,10 @@ export interface Flag {
 export interface CheckReport {
   case: string;
   tolerance: number;
+  /** Biot number h_b (t/2)/k across the thickness at the base (pins h_b (D/2)/k); nonlinear fins: h and k at the base temperature. */
+  biot: number;
+  /** mL of the equivalent uniform fin the shortcuts use (nonlinear fins: the base-temperature guess). */
+  mL: number;
   reference: ReferenceResult;
   models: ModelResult[];
   notApplicable: NotApplicable[];

@@ -42,6 +42,9 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     `  reference ${references}; tolerance ${pct(tolerance)} (ok), ${pct(2 * tolerance)} (marginal); ` +
       `${summary.points} points, ${summary.solved} solved${summary.errors > 0 ? `, ${summary.errors} invalid` : ''}`,
   );
+  if (run.job.check.guess === 'base') {
+    lines.push('  nonlinear fin: the shortcuts use h and k at the base temperature (check also shows the fin-averaged guess)');
+  }
   lines.push('');
   lines.push(`${pad('shortcut', 16)}${pad('ok', 10)}${pad('marginal', 10)}${pad('unsafe', 10)}drift over the map`);
   for (const m of summary.models) {

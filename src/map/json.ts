@@ -31,6 +31,7 @@ export function mapJson(run: MapRun) {
     x: axisJson(run.x),
     y: axisJson(run.y),
     models: run.job.check.models,
+    shortcutGuess: run.job.check.guess,
     casePoint: { ...casePoint, x: finiteOrNull(casePoint.x), y: finiteOrNull(casePoint.y) },
     summary: {
       points: summary.points,

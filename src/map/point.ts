@@ -9,8 +9,6 @@ import { basename, extname } from 'node:path';
 import { runCheck } from '../compare/check.js';
 import type { CheckReport } from '../compare/types.js';
 import { InputError, SolverError, UsageError } from '../errors.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import { biotAndML } from './dimensionless.js';
 import { substituteAxis } from './substitute.js';
 import type { MapJob, MapModelId, MapPoint, PointModel, PointResult } from './types.js';
 
@@ -37,12 +35,13 @@ function pointMessage(err: unknown): string | undefined {
 }
 
 /** The map's numbers of one point from `fincheck check`'s report on its case (the ledger is not needed). */
-export function pointFromReport(index: number, x: number, y: number, c: Case, report: CheckReport, wanted: readonly MapModelId[]): PointResult {
-  if (!isLinearFinCase(c)) throw new Error('runCheck accepted a nonlinear case');
-  const { biot, mL } = biotAndML(c);
+export function pointFromReport(index: number, x: number, y: number, report: CheckReport, wanted: readonly MapModelId[]): PointResult {
+  const { biot, mL } = report;
   const models: PointModel[] = [];
   for (const id of wanted) {
-    const m = report.models.find((r) => r.model === id);
+    // Nonlinear fins list each shortcut twice (h and k at the base temperature, and averaged over the
+    // fin); the map shows the first, the base-temperature guess, and says so in its notes.
+    const m = report.models.find((r) => r.model === id && (r.guess === undefined || r.guess === 'base'));
     if (m) {
       models.push({ model: m.model, heatRate_W: m.heatRate_W, efficiency: m.efficiency, drift: m.drift, verdict: m.verdict });
     }
@@ -65,7 +64,7 @@ export async function evaluatePoint(context: PointContext, index: number, x: num
     const raw = substituteAxis(substituteAxis(context.raw, job.x, x), job.y, y);
     const c = parseCaseObject(raw, context.locate, context.parseOptions);
     const { report } = await runCheck(c, { tolerance: job.check.tolerance, reference: job.check.reference, ledger: false });
-    return pointFromReport(index, x, y, c, report, job.check.models);
+    return pointFromReport(index, x, y, report, job.check.models);
   } catch (err) {
     const error = pointMessage(err);
     if (error === undefined) throw err;

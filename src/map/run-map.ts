@@ -53,7 +53,8 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
   if (x.key === y.key) throw new UsageError(`--x and --y both sweep ${x.key}; give two different keys`);
 
   const { report } = await runCheck(c, { tolerance: request.tolerance, reference: request.reference, ledger: false });
-  const applicable: MapModelId[] = report.models.map((m) => m.model);
+  // Unique ids: a nonlinear fin lists each shortcut once per single-h guess; the map shows the base-temperature guess.
+  const applicable: MapModelId[] = [...new Set(report.models.map((m) => m.model))];
   for (const id of request.models ?? []) {
     if (applicable.includes(id)) continue;
     const reason =
@@ -63,7 +64,8 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
     throw new UsageError(`--models: ${id} does not apply to this case (${reason}); these do: ${applicable.join(', ')}`);
   }
   const models = request.models ? [...new Set(request.models)] : applicable;
-  const check: PointCheckOptions = { tolerance: request.tolerance, reference: request.reference, models };
+  const guess = report.models.some((m) => m.guess !== undefined) ? 'base' : null;
+  const check: PointCheckOptions = { tolerance: request.tolerance, reference: request.reference, models, guess };
   const job: MapJob = {
     caseText: request.caseText,
     fileName: request.fileName,
@@ -71,7 +73,7 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
     y: { path: y.path, unit: y.unit },
     check,
   };
-  const casePoint = pointFromReport(-1, x.caseValue ?? Number.NaN, y.caseValue ?? Number.NaN, c, report, models);
+  const casePoint = pointFromReport(-1, x.caseValue ?? Number.NaN, y.caseValue ?? Number.NaN, report, models);
   return { caseName: c.name, x, y, job, casePoint, notApplicable: report.notApplicable };
 }
 

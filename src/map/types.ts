@@ -39,6 +39,8 @@ export interface PointCheckOptions {
   reference: 'auto' | '1d' | '2d';
   /** Models to report, in this order. */
   models: readonly MapModelId[];
+  /** Nonlinear fins: the shortcuts shown use h and k at the base temperature ('base'); null for linear fins. */
+  guess: 'base' | null;
 }
 
 /** Everything a point needs besides its two values: the case text (re-read in each worker) and the axes. */

@@ -155,3 +155,26 @@ describe('map points equal fincheck check on the same parameters', () => {
     expect(existsSync(join(out, 'overview.png'))).toBe(true);
   });
 });
+
+describe('nonlinear fins on a map', () => {
+  it('power-law h: each point shows the base-temperature guess, the same numbers as check', async () => {
+    const text = (length: string, base: string) => `name: map natural convection
+fin: { profile: rectangular, length: ${length}, thickness: 3 mm, width: 100 mm }
+material: { k: 200 }
+convection: { ambient: 25 degC, h: { law: power, base: ${base}, exponent: 0.25 }, tip: adiabatic }
+base: { temperature: 75 degC }
+`;
+    const file = caseFile('natural.yaml', text('40 mm', '6'));
+    const r = await cli('map', file, '--x', 'fin.length=20:60 mm', '--y', 'convection.h.base=4:8', '--steps', '2x2', '--reference', '1d', '--jobs', '1', '--json', '--out', join(tmp, 'natural-out'));
+    expect(r.code, r.stderr).toBe(0);
+    const map = JSON.parse(r.stdout) as MapJson & { shortcutGuess: string | null };
+    expect(map.shortcutGuess).toBe('base');
+    expect(new Set(map.models).size).toBe(map.models.length);
+    const p = map.points[3]!;
+    if ('error' in p) throw new Error(p.error);
+    const check = (await checkJson('natural-60.yaml', text('60 mm', '8'))) as CheckJson & { models: { guess?: string }[] };
+    expect(p.reference.heatRate_W).toBe(check.reference.heatRate_W);
+    const tanhL = check.models.find((m) => m.model === 'tanh-L' && m.guess === 'base')!;
+    expect(p.models.find((m) => m.model === 'tanh-L')!.drift).toBe(tanhL.drift);
+  });
+});
