@@ -9,6 +9,7 @@
  * s = 0 (linear), then s increased by Δs = 1/4, each stage started from the previous solution; a
  * stage that fails halves Δs, one that succeeds doubles it (up to 1/2); below Δs = 2^-12 it gives up.
  */
+import { continueFromLinear } from './continuation.js';
 import { SolverError } from '../errors.js';
 import type { Mesh1D } from '../mesh/types.js';
 import { interfaceConductance, convectiveConductance } from './conductance1d.js';
@@ -58,10 +59,6 @@ export interface MeshSolve {
   readonly heatRateChange: number;
 }
 
-const FIRST_STEP = 0.25;
-const LARGEST_STEP = 0.5;
-const SMALLEST_STEP = 2 ** -12;
-
 /**
  * Solves the problem on a mesh from the drops `initial` (d = θ_b - θ, K; default 0: the whole fin at
  * the base temperature); throws SolverError when it cannot.
@@ -78,34 +75,14 @@ export function solveNonlinearOnMesh(
   if (direct.converged) return summary(setup, direct, direct.iterations, direct.halvings, 0);
   if (setup.linear) throw failure(problem, mesh, direct, 0);
 
-  let total = direct.iterations;
-  let halvings = direct.halvings;
-  let stages = 0;
   const kRef = setup.kirchhoff.kRef;
-  let s = 0;
-  let reached = newtonSolve(newtonSetup(scaleNonlinearity(problem, 0, kRef), mesh), new Float64Array(mesh.nodes), opts);
-  total += reached.iterations;
-  if (!reached.converged) throw failure(problem, mesh, direct, 0);
-  let ds = FIRST_STEP;
-  let last: NewtonOutcome = reached;
-  while (s < 1) {
-    const target = Math.min(1, s + ds);
-    const stageSetup = target === 1 ? setup : newtonSetup(scaleNonlinearity(problem, target, kRef), mesh);
-    const attempt = newtonSolve(stageSetup, reached.drop, opts);
-    stages++;
-    total += attempt.iterations;
-    halvings += attempt.halvings;
-    last = attempt;
-    if (attempt.converged) {
-      s = target;
-      reached = attempt;
-      ds = Math.min(2 * ds, LARGEST_STEP);
-    } else {
-      ds *= 0.5;
-      if (ds < SMALLEST_STEP) throw failure(problem, mesh, attempt, s);
-    }
-  }
-  return summary(setup, last, total, halvings, stages);
+  const c = continueFromLinear<Float64Array, NewtonOutcome>(
+    direct,
+    (target, from) =>
+      newtonSolve(target === 1 ? setup : newtonSetup(scaleNonlinearity(problem, target, kRef), mesh), from ?? new Float64Array(mesh.nodes), opts),
+    (attempt, reached) => failure(problem, mesh, attempt, reached),
+  );
+  return summary(setup, c.outcome, c.totalIterations, c.halvings, c.stages);
 }
 
 function summary(setup: NewtonSetup, outcome: NewtonOutcome, total: number, halvings: number, stages: number): MeshSolve {

@@ -19,6 +19,7 @@
  * temperature everywhere. A linear case (n = 0, ε = 0, constant k) is solved by the first step from the
  * base temperature, which is the linear solver's system: the result is fd-2d's (fin2d.ts) to round-off.
  */
+import { continueFromLinear } from './continuation.js';
 import type { Case } from '../case/types.js';
 import { SolverError } from '../errors.js';
 import { buildGrid2D, type Grid2D } from '../mesh/grid2d.js';
@@ -47,9 +48,6 @@ export interface NonlinearFin2DResult extends Fin2DResult {
 
 /** Grids with more nodes than this start from the grid with half the cells (when the counts allow). */
 const NESTED_MIN_NODES = 2000;
-const FIRST_STEP = 0.25;
-const LARGEST_STEP = 0.5;
-const SMALLEST_STEP = 2 ** -12;
 
 export function solveNonlinearFin2D(c: Case, opts: NonlinearFin2DOptions): NonlinearFin2DResult {
   return solveNonlinearFin2DProblem(nonlinearFin2DProblem(c), opts);
@@ -129,34 +127,14 @@ function solveOnGrid(problem: NonlinearFin2DProblem, ops: GridOperators2D, setup
   const direct = newtonSolve2D(setup, initial, opts);
   if (direct.converged) return { outcome: direct, totalIterations: direct.iterations, halvings: direct.halvings, continuationStages: 0 };
   if (setup.linear) throw failure(problem, ops.grid, direct, 0);
-  let total = direct.iterations;
-  let halvings = direct.halvings;
-  let stages = 0;
   const kRef = setup.kirchhoff.kRef;
   const stage = (s: number): Newton2DSetup => (s === 1 ? setup : newton2DSetup(problem, scaleNonlinearity(problem.physics, s, kRef), ops));
-  let reached = newtonSolve2D(stage(0), new Float64Array(initial.length), opts);
-  total += reached.iterations;
-  if (!reached.converged) throw failure(problem, ops.grid, direct, 0);
-  let s = 0;
-  let ds = FIRST_STEP;
-  let last = reached;
-  while (s < 1) {
-    const target = Math.min(1, s + ds);
-    const attempt = newtonSolve2D(stage(target), reached.drop, opts);
-    stages++;
-    total += attempt.iterations;
-    halvings += attempt.halvings;
-    last = attempt;
-    if (attempt.converged) {
-      s = target;
-      reached = attempt;
-      ds = Math.min(2 * ds, LARGEST_STEP);
-    } else {
-      ds *= 0.5;
-      if (ds < SMALLEST_STEP) throw failure(problem, ops.grid, attempt, s);
-    }
-  }
-  return { outcome: last, totalIterations: total, halvings, continuationStages: stages };
+  const c = continueFromLinear<Float64Array, Newton2DOutcome>(
+    direct,
+    (target, from) => newtonSolve2D(stage(target), from ?? new Float64Array(initial.length), opts),
+    (attempt, reached) => failure(problem, ops.grid, attempt, reached),
+  );
+  return { outcome: c.outcome, totalIterations: c.totalIterations, halvings: c.halvings, continuationStages: c.stages };
 }
 
 /** What makes the problem nonlinear, as advice on what to change. */
