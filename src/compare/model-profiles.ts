@@ -29,10 +29,15 @@
  *
  * fd-2d (finest grid of its study, both halves, side edges insulated): temperature on the mid-plane
  * (pins: the axis) and on the cooled face. Face loss of the segment between face nodes a and b:
- * h theta ds times the depth (planar: 2 w; pins: 2 pi r_face; annular: 2 x 2 pi r), with theta and h at
- * the segment's middle and ds the chord (sloped faces at their true length); q' = that / dx at the
- * segment's middle, Q(x) = Q_base - the sum of the segment losses up to x (trapezoidal rule, second order,
- * like the solver). At the tip Q(L) matches the solver's tip heat rate to that order.
+ * q(theta) ds times the depth (planar: 2 w; pins: 2 pi r_face; annular: 2 x 2 pi r), with theta and the
+ * position part of h at the segment's middle and ds the chord (sloped faces at their true length); q is
+ * the face law the solver uses (nonlinear-losses.ts, faceFlux), W/m^2:
+ *   q(theta) = h_x |theta/theta_b|^n theta + eps sigma (T^4 - T_s^4),
+ * which is h theta for a linear fin (n = 0, eps = 0). q' = the segment loss / dx at the segment's
+ * middle, Q(x) = Q_base - the sum of the segment losses up to x (trapezoidal rule, second order, like the
+ * solver's lumped face losses). At the tip Q(L) matches the solver's tip heat rate to that order. Q(x)
+ * comes from the losses, not from k(T) grad T, so a conductivity over temperature needs no extra step:
+ * the solver's temperatures already carry it (Kirchhoff transform, nonlinear2d-setup.ts).
  */
 import { uniformFin, uniformFinExcess, type UniformFinInput, type UniformTip } from '../analytic/uniform-fin.js';
 import { hAt, hAtNodes } from '../fd/convection1d.js';
@@ -41,6 +46,8 @@ import type { Fin1DStudy } from '../fd/fin1d.js';
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
 import type { Case } from '../case/types.js';
+import { faceFlux, faceLaw } from '../fd/nonlinear-losses.js';
+import { nonlinearFinProblem1D } from '../fd/nonlinear-problem.js';
 import { conductivityAt, linearSurrogate } from './linear-surrogate.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
@@ -257,13 +264,21 @@ function oneDProfileGeneric(c: Case, oneD: Fin1DStudy): ModelProfile {
   };
 }
 
-function twoDProfile(c: LinearFinCase, study: Fin2DStudy): ModelProfile {
+/** Heat flux leaving the face at distance x from the base (m) and excess theta (K), W/m^2 (header). */
+function faceFluxAlong(c: Case, length: number): (x: number, theta: number) => number {
+  const problem = nonlinearFinProblem1D(c);
+  const law = faceLaw(problem);
+  return (x, theta) => faceFlux(law, hAt(problem.h, x, length), theta);
+}
+
+function twoDProfile(c: Case, study: Fin2DStudy): ModelProfile {
   const r = study.finest;
   const baseX = r.grid.baseX;
   const shift = (a: Float64Array): Float64Array => a.map((v) => v - baseX);
   const face = r.surface;
   const n = face.x_m.length;
   const L = (face.x_m[n - 1] as number) - baseX;
+  const flux = faceFluxAlong(c, L);
   const lossX = new Float64Array(n - 1);
   const loss = new Float64Array(n - 1);
   const flow = new Float64Array(n);
@@ -276,7 +291,7 @@ function twoDProfile(c: LinearFinCase, study: Fin2DStudy): ModelProfile {
     const xm = 0.5 * (xa + xb);
     const theta = 0.5 * ((face.T_degC[i] as number) + (face.T_degC[i + 1] as number)) - r.ambient_degC;
     const perDepth = r.grid.section === 'planar' ? 1 : r.grid.section === 'pin' ? 0.5 * (ya + yb) : xm;
-    const segment = hAt(c.convection.h, xm - baseX, L) * theta * r.grid.depth * perDepth * Math.hypot(xb - xa, yb - ya);
+    const segment = flux(xm - baseX, theta) * r.grid.depth * perDepth * Math.hypot(xb - xa, yb - ya);
     lossX[i] = xm - baseX;
     loss[i] = segment / (xb - xa);
     flow[i + 1] = (flow[i] as number) - segment;
@@ -289,7 +304,7 @@ function twoDProfile(c: LinearFinCase, study: Fin2DStudy): ModelProfile {
     flow: { x_m: shift(face.x_m), values: flow },
     tipTemperature_degC: r.tipTemperature_degC,
     heatRate_W: r.heatRate_W,
-    basis: `2-D finite volumes on ${r.grid.nodesX} x ${r.grid.nodesY} nodes (${r.grid.section === 'planar' ? 'longitudinal section, side edges insulated' : 'axisymmetric section'})`,
+    basis: `2-D finite volumes on ${r.grid.nodesX} x ${r.grid.nodesY} nodes (${r.grid.section === 'planar' ? 'longitudinal section, side edges insulated' : 'axisymmetric section'})${isLinearFinCase(c) ? '' : ', nonlinear (Newton)'}`,
   };
 }
 
@@ -304,7 +319,7 @@ export function modelProfiles(c: Case, report: CheckReport, oneD: Fin1DStudy, tw
   const geometry = finGeometry(surrogate);
   const eq = equivalentUniformFin(surrogate, geometry);
   const profiles: ModelProfile[] = [];
-  if (twoD && linear) profiles.push(twoDProfile(linear, twoD));
+  if (twoD) profiles.push(twoDProfile(c, twoD));
   profiles.push(linear ? oneDProfile(linear, oneD) : oneDProfileGeneric(c, oneD));
   const omitted: OmittedProfile[] = [];
   for (const m of report.models) {
@@ -321,6 +336,6 @@ export function modelProfiles(c: Case, report: CheckReport, oneD: Fin1DStudy, tw
     profiles.push(shortcutProfile(m.model, fin, eq, m.heatRate_W, m.basis, c.convection.ambient_degC));
   }
   const p = c.fin.profile;
-  const note = linear ? null : 'Nonlinear fin: the shortcuts are drawn with h and k at the base temperature; the check table also gives them with h and k averaged over the solved fin.';
+  const note = linear ? null : 'Nonlinear fin: shortcuts drawn with h and k at the base temperature (the table also has fin-averaged h and k).';
   return { profiles, omitted, length_m: eq.length, baseX_m: p.kind === 'annular' ? p.innerRadius : 0, note };
 }
