@@ -24,7 +24,8 @@ Examples:
   fincheck solve demo/inverter-plate-fin.yaml
   fincheck solve demo/motor-housing-tapered-fin.yaml --nodes 200 --json
   fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d
-  fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d --grid 400x40 --json`,
+  fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d --grid 400x40 --json
+  fincheck solve demo/enclosure-fin-natural-convection.yaml --model 2d   # nonlinear: Newton on each grid`,
     )
     .action((file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean }) => {
       const model = parseOption('--model', modelOption, o.model, '1d or 2d');
@@ -70,6 +71,10 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
   if (r.efficiency !== null) lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
   lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
+  if (r.newton) {
+    const grids = r.newton.stepsPerGrid.length > 1 ? ` (${r.newton.stepsPerGrid.join('/')} steps, coarsest to finest grid)` : ` (${r.newton.stepsPerGrid[0] ?? 0} steps with the coarser grids that seeded it)`;
+    lines.push(`  nonlinear      Newton converged${grids}, relative residual ${r.newton.finest.residual.toExponential(1)}`);
+  }
   lines.push('', '  x [mm]   centre T [degC]   surface T [degC]');
   const n = r.centreline.length;
   const want = Math.min(11, n);

@@ -3,11 +3,13 @@
  * curved faces as they are), both halves: the solver meshes one half (mid-plane or axis to the face)
  * and the field is mirrored about the symmetry line. Colour bar in °C (viridis: perceptually uniform,
  * readable with colour-vision deficiencies and in grey), labelled isotherms, base and tip marked.
- * Coordinates in mm: x along the fin (annular fins: the radius r), y across it.
+ * Coordinates in mm: x along the fin (annular fins: the radius r), y across it. Nonlinear fins: the same
+ * chart of the Newton study (nonlinear2d-study.ts), its steps per grid in the header.
  */
 import { CHART_CAUTION } from '../compare/cautions.js';
 import type { Case } from '../case/types.js';
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import type { NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
 import type { FieldChartSpec } from '../images/index.js';
 import { relativeError, sig } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
@@ -54,15 +56,22 @@ function axisWords(c: Case): { x: string; y: string; symmetry: string; tip: stri
   return { x: 'Distance from the base x (mm)', y: 'Across the thickness y (mm)', symmetry: 'mid-plane', tip: 'tip', base: 'base' };
 }
 
+/** Newton steps per grid (coarsest first) of a nonlinear fin's study; null for a linear fin. */
+function newtonSteps(study: Fin2DStudy): number[] | null {
+  return 'iterations' in study ? (study as NonlinearFin2DStudy).iterations : null;
+}
+
 export function heatmapChartSpec(c: Case, study: Fin2DStudy, size: ChartSize, rasterScale = 1): FieldChartSpec {
   const field = mirroredField(study);
   const words = axisWords(c);
   const r = study.finest;
   const planar = r.grid.section === 'planar';
+  const steps = newtonSteps(study);
   const subtitle = [
     `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError)} (GCI, ${study.grids.length} grids).`,
     `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; tip centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
     r.truncatedInfinite ? 'Infinite fin: the section is cut where the field has decayed and closed by its exact slowest mode.' : '',
+    steps ? `Nonlinear fin: Newton's method on every grid (${steps.join('/')} steps, coarsest to finest; relative residual ≤ 1e-10).` : '',
     CHART_CAUTION,
   ].filter((s) => s !== '');
   return {

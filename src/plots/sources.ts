@@ -1,6 +1,7 @@
 /**
  * What the charts are drawn from: the check (reference, shortcuts, their profiles) for `profile` and
- * `flux`, and the fd-2d refinement study for `heatmap`. Each is computed only when a chart needs it.
+ * `flux`, and the fd-2d refinement study for `heatmap` (nonlinear fins: the Newton study of
+ * nonlinear2d-study.ts on the same grid family). Each is computed only when a chart needs it.
  */
 import type { Case } from '../case/types.js';
 import { runCheck, type CheckOptions } from '../compare/check.js';
@@ -8,6 +9,9 @@ import { modelProfiles } from '../compare/model-profiles.js';
 import { UsageError } from '../errors.js';
 import { fin2dProblem } from '../fd/fin2dCase.js';
 import { studyFin2DProblem, type Fin2DStudy } from '../fd/fin2dStudy.js';
+import { isLinearFinCase } from '../fd/linear-case.js';
+import { nonlinearFin2DProblem } from '../fd/nonlinear2d-problem.js';
+import { studyNonlinearFin2DProblem } from '../fd/nonlinear2d-study.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
 export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;
@@ -17,11 +21,12 @@ export type HeatmapAvailability = { ok: true } | { ok: false; reason: string };
 
 /**
  * Whether the 2-D model covers this case, without solving it. The reason names the profile and
- * what the 2-D model lacks (e.g. an infinite tip on a tapered fin).
+ * what the 2-D model lacks (e.g. an infinite tip on a tapered fin, or on any nonlinear fin).
  */
 export function heatmapAvailability(c: Case): HeatmapAvailability {
   try {
-    fin2dProblem(c);
+    if (isLinearFinCase(c)) fin2dProblem(c);
+    else nonlinearFin2DProblem(c);
     return { ok: true };
   } catch (e) {
     if (e instanceof UsageError || e instanceof RangeError) {
@@ -35,10 +40,10 @@ export function heatmapAvailability(c: Case): HeatmapAvailability {
 export function fieldStudy(c: Case): Fin2DStudy {
   const available = heatmapAvailability(c);
   if (!available.ok) throw new UsageError(`--kind heatmap: ${available.reason}`);
-  return studyFin2DProblem(fin2dProblem(c));
+  return isLinearFinCase(c) ? studyFin2DProblem(fin2dProblem(c)) : studyNonlinearFin2DProblem(nonlinearFin2DProblem(c));
 }
 
-/** The check and every model's profile (throws the check's UsageError for a nonlinear case). */
+/** The check and every model's profile (throws the check's UsageError, e.g. --reference 2d where the 2-D model does not apply). */
 export async function checkPlotInput(c: Case, opts: CheckOptions): Promise<CheckPlotInput> {
   const { report, oneD, twoD } = await runCheck(c, opts);
   return { case: c, report, profiles: modelProfiles(c, report, oneD, twoD), oneD, twoD };

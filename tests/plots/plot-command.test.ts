@@ -103,16 +103,16 @@ describe('fincheck plot refuses bad requests with exit 2 and writes nothing', ()
     expect(r.stderr).toContain('--out: a file name ending in .png or .svg is required');
   });
 
-  it('a heat map of a fin the 2-D model does not cover names the profile', async () => {
+  it('a heat map of a fin the 2-D model does not cover (a nonlinear infinite tip) names the profile and the reason', async () => {
     const out = folder('uncovered');
     const file = caseFile(
       out,
       'natural.yaml',
-      'name: natural convection\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: convective }\nbase: { temperature: 80 degC }\n',
+      'name: natural convection\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: infinite }\nbase: { temperature: 80 degC }\n',
     );
     const r = await cli('plot', file, '--kind', 'heatmap', '--out', join(out, 'h.png'));
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/--kind heatmap: the 2-D model does not cover this rectangular fin: the power-law h/);
+    expect(r.stderr).toMatch(/--kind heatmap: the 2-D model does not cover this rectangular fin: an infinite tip of a nonlinear fin is not modelled in 2-D/);
     expect(readdirSync(out)).toEqual(['natural.yaml']);
   });
 
