@@ -146,24 +146,30 @@ export function solveFin1D(c: LinearFinCase, opts: Fin1DOptions): Fin1DResult {
 }
 
 /**
+ * The grids of a refinement study, coarsest first: node counts (>= 3 grids; default DEFAULT_STUDY_NODES),
+ * each given as the coarsest grid refined by an integer factor where the cell counts allow (nested
+ * grids share nodes), else as its own node count.
+ */
+export function studyGrids(nodeCounts: readonly number[] | undefined, where: string): { nodes: number; refine: number }[] {
+  const nodes = [...(nodeCounts ?? DEFAULT_STUDY_NODES)].map((n) => Math.max(2, Math.round(n))).sort((a, b) => a - b);
+  if (nodes.length < 3) throw new RangeError(`${where}: needs at least 3 grids, got ${nodes.length}`);
+  const coarsestCells = (nodes[0] as number) - 1;
+  return nodes.map((n) => {
+    const cells = n - 1;
+    const nested = cells % coarsestCells === 0;
+    return { nodes: nested ? coarsestCells + 1 : n, refine: nested ? cells / coarsestCells : 1 };
+  });
+}
+
+/**
  * Refinement study of a 1-D fin problem: solves on every grid of `nodes` (nested when the cell
  * counts are integer multiples of the coarsest) and estimates the discretisation error of the
  * finest heat rate.
  */
 export function studyFinProblem1D(problem: FinProblem1D, opts: Fin1DStudyOptions = {}): Fin1DStudy {
-  const nodes = [...(opts.nodes ?? DEFAULT_STUDY_NODES)].map((n) => Math.max(2, Math.round(n))).sort((a, b) => a - b);
-  if (nodes.length < 3) throw new RangeError(`studyFin1D: needs at least 3 grids, got ${nodes.length}`);
-  const coarsestCells = (nodes[0] as number) - 1;
-  const results = nodes.map((n) => {
-    const cells = n - 1;
-    const nested = cells % coarsestCells === 0;
-    return solveFinProblem1D(problem, {
-      nodes: nested ? coarsestCells + 1 : n,
-      refine: nested ? cells / coarsestCells : 1,
-      grading: opts.grading ?? 'auto',
-      ...(opts.solver ? { solver: opts.solver } : {}),
-    });
-  });
+  const results = studyGrids(opts.nodes, 'studyFin1D').map((g) =>
+    solveFinProblem1D(problem, { ...g, grading: opts.grading ?? 'auto', ...(opts.solver ? { solver: opts.solver } : {}) }),
+  );
   const study = richardsonGci(results.map((r) => ({ size: r.mesh.cellSize, value: r.heatRate })));
   return { result: results[results.length - 1] as Fin1DResult, study };
 }

@@ -44,7 +44,7 @@
 import type { Case } from '../case/types.js';
 import { buildMesh1D } from '../mesh/grid1d.js';
 import type { Grading, Mesh1D } from '../mesh/types.js';
-import { DEFAULT_STUDY_NODES, autoGrading, type Fin1DResult } from './fin1d.js';
+import { autoGrading, studyGrids, type Fin1DResult } from './fin1d.js';
 import { hBreakpoints } from './convection1d.js';
 import type { NewtonOptions } from './nonlinear-newton.js';
 import { isLinearProblem, nonlinearFinProblem1D, type NonlinearFinProblem1D } from './nonlinear-problem.js';
@@ -197,21 +197,10 @@ export function solveNonlinearFin1D(c: Case, opts: NonlinearFin1DOptions): Nonli
  * and estimates the discretisation error of the finest heat rate.
  */
 export function studyNonlinearFinProblem1D(problem: NonlinearFinProblem1D, opts: NonlinearFin1DStudyOptions = {}): NonlinearFin1DStudy {
-  const nodes = [...(opts.nodes ?? DEFAULT_STUDY_NODES)].map((n) => Math.max(2, Math.round(n))).sort((a, b) => a - b);
-  if (nodes.length < 3) throw new RangeError(`studyNonlinearFin1D: needs at least 3 grids, got ${nodes.length}`);
-  const coarsestCells = (nodes[0] as number) - 1;
   const results: NonlinearFin1DResult[] = [];
-  for (const n of nodes) {
-    const cells = n - 1;
-    const nested = cells % coarsestCells === 0;
-    const previous = results[results.length - 1];
-    results.push(
-      solveNonlinearFinProblem1D(
-        problem,
-        { ...opts, nodes: nested ? coarsestCells + 1 : n, refine: nested ? cells / coarsestCells : 1, grading: opts.grading ?? 'auto' },
-        previous,
-      ),
-    );
+  for (const g of studyGrids(opts.nodes, 'studyNonlinearFin1D')) {
+    // Each grid starts from the previous (coarser) grid's solution.
+    results.push(solveNonlinearFinProblem1D(problem, { ...opts, ...g, grading: opts.grading ?? 'auto' }, results[results.length - 1]));
   }
   const study = richardsonGci(results.map((r) => ({ size: r.mesh.cellSize, value: r.heatRate })));
   return {
