@@ -17,6 +17,7 @@
  * eliminated symmetrically (their columns moved to the right-hand side), which keeps A symmetric
  * positive definite.
  */
+import { hAt } from './convection1d.js';
 import type { HDistribution } from '../case/types.js';
 import { boundaryNodes, radiusAt, type BoundaryName, type Grid2D } from '../mesh/grid2d.js';
 import { applyStencil9, couplingOf, type Stencil9, type System2D } from './sparse/stencil9.js';
@@ -69,7 +70,7 @@ function sideTerms(grid: Grid2D, name: 'base' | 'face' | 'tip', condition: Bound
       return { name, kind: condition.kind, nodes, conductance: new Float64Array(nodes.length), farTheta: condition.theta };
     case 'convective': {
       const h = condition.h;
-      const conductance = lumpedIntegral(grid, nodes, (xAt) => coefficientAt(h, xAt - grid.baseX, length));
+      const conductance = lumpedIntegral(grid, nodes, (xAt) => hAt(h, xAt - grid.baseX, length));
       return { name, kind: condition.kind, nodes, conductance, farTheta: 0 };
     }
     case 'contact': {
@@ -84,32 +85,6 @@ function sideTerms(grid: Grid2D, name: 'base' | 'face' | 'tip', condition: Bound
   }
 }
 
-/** h (W/(m^2*K)) at distance s from the base of a fin of the given length. */
-export function coefficientAt(h: LinearH, s: number, length: number): number {
-  switch (h.kind) {
-    case 'uniform':
-      return h.h;
-    case 'linear':
-      return h.base + ((h.tip - h.base) * s) / length;
-    case 'points': {
-      const xs = h.x;
-      const n = xs.length;
-      if (s <= (xs[0] as number)) return h.h[0] as number;
-      if (s >= (xs[n - 1] as number)) return h.h[n - 1] as number;
-      let k = 1;
-      while ((xs[k] as number) < s) k++;
-      const x0 = xs[k - 1] as number;
-      const x1 = xs[k] as number;
-      const h0 = h.h[k - 1] as number;
-      const h1 = h.h[k] as number;
-      return h0 + ((h1 - h0) * (s - x0)) / (x1 - x0);
-    }
-    default: {
-      const never: never = h;
-      throw new Error(`coefficientAt: unknown distribution ${JSON.stringify(never)}`);
-    }
-  }
-}
 
 /**
  * Per boundary node: integral of c(x) r ds over the half-edges next to it (Simpson on each half-edge).

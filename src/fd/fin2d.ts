@@ -12,7 +12,8 @@ import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
 import { buildGrid2D, type Grid2D } from '../mesh/grid2d.js';
 import { assembleConduction2D } from './assemble2d.js';
-import { buildSystem2D, coefficientAt, discretizeBoundaries, lumpedIntegral } from './assemble2dBoundary.js';
+import { buildSystem2D, discretizeBoundaries, lumpedIntegral } from './assemble2dBoundary.js';
+import { hAt } from './convection1d.js';
 import { fin2dProblem, type Fin2DProblem } from './fin2dCase.js';
 import { heatRates2D } from './fin2dHeat.js';
 import { prepareSolver2D, type SolverMethod } from './sparse/autoSolver.js';
@@ -130,7 +131,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   }
   const efficiency = problem.truncatedInfinite ? null : (rates.base / ideal);
   const baseArea = sum(lumpedIntegral(grid, terms.base.nodes, () => 1));
-  const hBase = coefficientAt(problem.h, 0, problem.section.length);
+  const hBase = hAt(problem.h, 0, problem.section.length);
   const effectiveness = rates.base / (hBase * baseArea * thetaBase);
 
   const line = (j: number): Fin2DLine => gridLine(grid, field, ambient_degC, j);

@@ -10,7 +10,8 @@
  *   ε_f = Q / (A_b [h_x(0) θ_b + ε σ (T_b^4 - T_s^4)]),   A_b = the lumped base area.
  * Without radiation and with n = 0 both are the linear solver's expressions, evaluated in its order.
  */
-import { coefficientAt, lumpedIntegral } from './assemble2dBoundary.js';
+import { lumpedIntegral } from './assemble2dBoundary.js';
+import { hAt } from './convection1d.js';
 import { cvLosses, radiationGap } from './nonlinear-losses.js';
 import type { NonlinearFin2DProblem } from './nonlinear2d-problem.js';
 import type { Newton2DSetup } from './nonlinear2d-setup.js';
@@ -35,7 +36,7 @@ export function idealHeatRate2D(problem: NonlinearFin2DProblem, setup: Newton2DS
 
 /** Heat flux the bare base would lose at θ_b, W/m^2: h_x(0) θ_b + ε σ (T_b^4 - T_s^4). */
 export function bareBaseFlux(problem: NonlinearFin2DProblem, setup: Newton2DSetup): number {
-  const hBase = coefficientAt(problem.linear.h, 0, problem.linear.section.length);
+  const hBase = hAt(problem.linear.h, 0, problem.linear.section.length);
   const law = setup.faceLaw;
   const thetaBase = setup.thetaBase;
   return law.radiative === 0 ? hBase * thetaBase : hBase * thetaBase + law.radiative * radiationGap(law, thetaBase);
@@ -43,7 +44,7 @@ export function bareBaseFlux(problem: NonlinearFin2DProblem, setup: Newton2DSetu
 
 /** h at the base with radiation as an equivalent coefficient on θ_b, W/(m^2 K) (h_x(0) exactly without radiation). */
 export function baseCoefficient(problem: NonlinearFin2DProblem, setup: Newton2DSetup): number {
-  const hBase = coefficientAt(problem.linear.h, 0, problem.linear.section.length);
+  const hBase = hAt(problem.linear.h, 0, problem.linear.section.length);
   return setup.faceLaw.radiative === 0 ? hBase : bareBaseFlux(problem, setup) / setup.thetaBase;
 }
 
@@ -54,7 +55,7 @@ export function effectiveness2D(problem: NonlinearFin2DProblem, setup: Newton2DS
   for (const a of lumpedIntegral(grid, terms.base.nodes, () => 1)) baseArea += a;
   const law = setup.faceLaw;
   if (law.radiative === 0) {
-    const hBase = coefficientAt(problem.linear.h, 0, problem.linear.section.length);
+    const hBase = hAt(problem.linear.h, 0, problem.linear.section.length);
     return heatRate / (hBase * baseArea * setup.thetaBase);
   }
   const bare = baseArea * bareBaseFlux(problem, setup);
