@@ -4,9 +4,9 @@
  * (discretizationError null).
  */
 import type { Case } from '../case/types.js';
-import { UsageError } from '../errors.js';
 import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/fin1d.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
 
 export interface ProfilePoint {
   x_m: number;
@@ -34,12 +34,15 @@ export interface SolveReport {
 const MAX_PROFILE_POINTS = 401;
 
 export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; result: Fin1DResult } {
-  if (!isLinearFinCase(c)) {
-    throw new UsageError('this case is nonlinear (power-law h, k over temperature or radiation); this build solves linear fins only');
-  }
   const single = opts.nodes !== undefined;
-  const study = single ? null : studyFin1D(c);
-  const result = study ? study.result : solveFin1D(c, { nodes: opts.nodes as number });
+  // Linear fins: one tridiagonal solve per grid; nonlinear fins (power-law h, radiation, k(T)): Newton.
+  const linear = isLinearFinCase(c);
+  const study = single ? null : linear ? studyFin1D(c) : studyNonlinearFin1D(c);
+  const result: Fin1DResult = study
+    ? study.result
+    : linear
+      ? solveFin1D(c, { nodes: opts.nodes as number })
+      : solveNonlinearFin1D(c, { nodes: opts.nodes as number });
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;

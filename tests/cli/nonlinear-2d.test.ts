@@ -119,3 +119,18 @@ describe('fincheck plot --kind heatmap on a nonlinear fin', () => {
     expect(decodePng(readFileSync(join(out, 'field.png')))).toMatchObject({ width: 1200, height: 750 });
   });
 });
+
+describe('fincheck solve (1-D) on a nonlinear fin', () => {
+  it('runs the Newton study and agrees with check --reference 1d exactly', async () => {
+    const file = 'demo/enclosure-fin-natural-convection.yaml';
+    const s = JSON.parse((await cli('solve', file, '--json')).stdout);
+    const c = JSON.parse((await cli('check', file, '--json', '--reference', '1d')).stdout);
+    expect(s.model).toBe('fd-1d');
+    // Same study, same grids, same solver: the same double.
+    expect(s.heatRate_W).toBe(c.reference.heatRate_W);
+    expect(s.discretizationError).toBe(c.reference.discretizationError);
+    const single = await cli('solve', file, '--nodes', '501', '--json');
+    expect(single.code).toBe(0);
+    expect(JSON.parse(single.stdout).discretizationError).toBeNull();
+  });
+});
