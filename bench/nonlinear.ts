@@ -40,7 +40,7 @@ export async function benchNonlinear(): Promise<BenchRow[]> {
       measured: `${ratio.toFixed(1)}x (${formatMs(t.medianMs)} vs ${formatMs(t0.medianMs)})`,
       cpu: cpuText(t.cpuMedianMs),
       verdict: ratio <= 10 ? 'pass' : 'FAIL',
-      note: `medians of ${t.samples} and ${t0.samples} runs; the nonlinear solve starts from coarse seeding grids (nested) as in a refinement study`,
+      note: `medians of ${t.samples} and ${t0.samples} runs; the nonlinear solve starts from coarser starting grids (nested) as in a refinement study`,
     });
   }
   return rows;

@@ -19,7 +19,7 @@ import type { ProfilePoint } from './solve.js';
 
 /** Newton's method on the grids of a nonlinear fin. */
 export interface Solve2DNewton {
-  /** Newton steps spent on each grid, coarsest first (every attempt and continuation stage; a single grid also counts the coarser grids that seeded it). */
+  /** Newton steps spent on each grid, coarsest first (every attempt and continuation stage; a single grid also counts the coarser grids it started from). */
   stepsPerGrid: number[];
   /** The finest (or only) grid: steps, line-search halvings, continuation stages, final relative residual and heat-rate change. */
   finest: NewtonReport;
@@ -62,7 +62,7 @@ function solveNonlinear(c: Case, grid: { nx: number; ny: number } | undefined): 
   if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
   if (grid) {
     const result: NonlinearFin2DResult = solveNonlinearFin2D(c, grid);
-    const steps = result.newton.totalIterations + result.newton.seedIterations;
+    const steps = result.newton.totalIterations + result.newton.coarseGridIterations;
     return { study: null, result, newton: { stepsPerGrid: [steps], finest: result.newton } };
   }
   const study = studyNonlinearFin2D(c);

@@ -67,8 +67,8 @@ export interface NewtonReport {
   readonly iterations: number;
   /** Newton steps on this grid over every attempt and stage. */
   readonly totalIterations: number;
-  /** Newton steps spent on the coarser grids that seeded this one. */
-  readonly seedIterations: number;
+  /** Newton steps spent on the coarser grids that started this one. */
+  readonly coarseGridIterations: number;
   /** Step-length halvings of the line search. */
   readonly halvings: number;
   /** Continuation stages (0: plain Newton converged). */
@@ -133,7 +133,7 @@ function dropsOf(problem: NonlinearFinProblem1D, theta: Float64Array): Float64Ar
   return theta.map((t) => reference - t);
 }
 
-function finish(problem: NonlinearFinProblem1D, solved: MeshSolve, seedIterations: number): NonlinearFin1DResult {
+function finish(problem: NonlinearFinProblem1D, solved: MeshSolve, coarseGridIterations: number): NonlinearFin1DResult {
   const { setup, theta, drop } = solved;
   const mesh = setup.mesh;
   const rates = nonlinearHeatRates(setup, drop);
@@ -152,7 +152,7 @@ function finish(problem: NonlinearFinProblem1D, solved: MeshSolve, seedIteration
     newton: {
       iterations: solved.iterations,
       totalIterations: solved.totalIterations,
-      seedIterations,
+      coarseGridIterations,
       halvings: solved.halvings,
       continuationStages: solved.continuationStages,
       residual: solved.residual,
@@ -162,28 +162,28 @@ function finish(problem: NonlinearFinProblem1D, solved: MeshSolve, seedIteration
 }
 
 /**
- * Solves a nonlinear problem with `nodes` nodes (`refine`: nested refinement factor), from `seed`
+ * Solves a nonlinear problem with `nodes` nodes (`refine`: nested refinement factor), from `start`
  * (a solution on a coarser mesh of the same fin) or, with `nested`, from a grid 8 times coarser.
  */
 export function solveNonlinearFinProblem1D(
   problem: NonlinearFinProblem1D,
   opts: NonlinearFin1DOptions & { readonly refine?: number },
-  seed?: NonlinearFin1DResult,
+  start?: NonlinearFin1DResult,
 ): NonlinearFin1DResult {
   const cells = Math.max(1, Math.round(opts.nodes) - 1);
   const refine = opts.refine ?? 1;
   const mesh = meshOf(problem, cells, refine, opts.grading);
   let initial: Float64Array | undefined;
-  let seedIterations = 0;
+  let coarseGridIterations = 0;
   const linear = isLinearProblem(problem);
-  if (seed !== undefined && !linear) {
-    initial = dropsOf(problem, interpolateOnto(seed.mesh, seed.theta, mesh));
+  if (start !== undefined && !linear) {
+    initial = dropsOf(problem, interpolateOnto(start.mesh, start.theta, mesh));
   } else if ((opts.nested ?? true) && !linear && cells * refine > NESTED_MIN_CELLS) {
     const coarse = solveNonlinearFinProblem1D(problem, { ...opts, nodes: Math.ceil((cells * refine) / NESTED_RATIO) + 1, refine: 1 });
     initial = dropsOf(problem, interpolateOnto(coarse.mesh, coarse.theta, mesh));
-    seedIterations = coarse.newton.totalIterations + coarse.newton.seedIterations;
+    coarseGridIterations = coarse.newton.totalIterations + coarse.newton.coarseGridIterations;
   }
-  return finish(problem, solveNonlinearOnMesh(problem, mesh, opts, initial), seedIterations);
+  return finish(problem, solveNonlinearOnMesh(problem, mesh, opts, initial), coarseGridIterations);
 }
 
 /** The fd-1d solution of any case (linear or not) on one grid of `nodes` nodes. */
@@ -206,7 +206,7 @@ export function studyNonlinearFinProblem1D(problem: NonlinearFinProblem1D, opts:
   return {
     result: results[results.length - 1] as NonlinearFin1DResult,
     study,
-    iterations: results.map((r) => r.newton.totalIterations + r.newton.seedIterations),
+    iterations: results.map((r) => r.newton.totalIterations + r.newton.coarseGridIterations),
   };
 }
 

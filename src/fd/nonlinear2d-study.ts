@@ -53,7 +53,7 @@ export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
   return {
     ...study,
     finest: results[results.length - 1] as NonlinearFin2DResult,
-    iterations: results.map((r) => r.newton.totalIterations + r.newton.seedIterations),
+    iterations: results.map((r) => r.newton.totalIterations + r.newton.coarseGridIterations),
   };
 }
 

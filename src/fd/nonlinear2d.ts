@@ -54,10 +54,10 @@ export function solveNonlinearFin2D(c: Case, opts: NonlinearFin2DOptions): Nonli
 }
 
 /**
- * Solves on an nx x ny grid, from `seed` (a solution of the same problem on a coarser grid of the same
+ * Solves on an nx x ny grid, from `start` (a solution of the same problem on a coarser grid of the same
  * family, interpolated) or, with `nested`, from the grid with half the cells.
  */
-export function solveNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts: NonlinearFin2DOptions, seed?: NonlinearFin2DResult): NonlinearFin2DResult {
+export function solveNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts: NonlinearFin2DOptions, start?: NonlinearFin2DResult): NonlinearFin2DResult {
   const { nx, ny } = opts;
   checkGrid2D(problem.linear, nx, ny);
   const grid = buildGrid2D(problem.linear.section, {
@@ -69,17 +69,17 @@ export function solveNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
   const ops = gridOperators2D(problem, grid);
   const setup = newton2DSetup(problem, problem.physics, ops);
   let initial: Float64Array = new Float64Array(nx * ny);
-  let seedIterations = 0;
+  let coarseGridIterations = 0;
   const segments = problem.linear.section.breakpoints.length - 1;
-  if (!setup.linear && seed !== undefined) {
-    initial = dropsOf(setup, interpolateField(seed.grid, seed.field, grid));
+  if (!setup.linear && start !== undefined) {
+    initial = dropsOf(setup, interpolateField(start.grid, start.field, grid));
   } else if (!setup.linear && (opts.nested ?? true) && nx * ny > NESTED_MIN_NODES && (nx - 1) % 2 === 0 && (ny - 1) % 2 === 0 && (nx - 1) / 2 >= segments) {
     const coarse = solveNonlinearFin2DProblem(problem, { ...opts, nx: (nx - 1) / 2 + 1, ny: (ny - 1) / 2 + 1 });
     initial = dropsOf(setup, interpolateField(coarse.grid, coarse.field, grid));
-    seedIterations = coarse.newton.totalIterations + coarse.newton.seedIterations;
+    coarseGridIterations = coarse.newton.totalIterations + coarse.newton.coarseGridIterations;
   }
   const solved = solveOnGrid(problem, ops, setup, initial, opts);
-  return finish(problem, setup, solved, seedIterations);
+  return finish(problem, setup, solved, coarseGridIterations);
 }
 
 /** Drops θ_b - θ of an excess-temperature field, K. */
@@ -160,7 +160,7 @@ function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2D
   );
 }
 
-function finish(problem: NonlinearFin2DProblem, setup: Newton2DSetup, solved: GridSolve, seedIterations: number): NonlinearFin2DResult {
+function finish(problem: NonlinearFin2DProblem, setup: Newton2DSetup, solved: GridSolve, coarseGridIterations: number): NonlinearFin2DResult {
   const { outcome } = solved;
   const { grid } = setup.ops;
   const { nodesX: nx, nodesY: ny, depth } = grid;
@@ -190,7 +190,7 @@ function finish(problem: NonlinearFin2DProblem, setup: Newton2DSetup, solved: Gr
     newton: {
       iterations: outcome.iterations,
       totalIterations: solved.totalIterations,
-      seedIterations,
+      coarseGridIterations,
       halvings: solved.halvings,
       continuationStages: solved.continuationStages,
       residual: outcome.residual,

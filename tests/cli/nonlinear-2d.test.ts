@@ -34,7 +34,7 @@ function insulatedDemo(): string {
 
 interface NewtonJson {
   stepsPerGrid: number[];
-  finest: { iterations: number; seedIterations: number; residual: number; heatRateChange: number };
+  finest: { iterations: number; coarseGridIterations: number; residual: number; heatRateChange: number };
 }
 
 interface Solve2DJson {
@@ -84,7 +84,7 @@ describe('fincheck solve --model 2d on a nonlinear fin (power-law h, radiation)'
     expect(j.grid).toEqual({ nx, ny });
     expect(j.discretizationError).toBeNull();
     expect(j.newton?.stepsPerGrid).toHaveLength(1);
-    expect(j.newton?.finest.seedIterations).toBeGreaterThan(0);
+    expect(j.newton?.finest.coarseGridIterations).toBeGreaterThan(0);
     // Same grid, same equations, different starting fields: both stop at a relative residual <= 1e-10 and
     // a heat-rate change <= 1e-10, so 1e-8 of Q is a safe bound that a wrong problem would break.
     expect(Math.abs(j.heatRate_W / study.heatRate_W - 1)).toBeLessThan(1e-8);

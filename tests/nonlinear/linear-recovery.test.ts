@@ -49,9 +49,9 @@ describe('linear fins through the nonlinear solver (fast-check: every profile, h
     expectSameFigure(linear.efficiency, nonlinear.efficiency, tolerance);
     expectSameFigure(linear.effectiveness, nonlinear.effectiveness, tolerance);
     expect(nonlinear.idealHeatRate).toBe(linear.idealHeatRate);
-    // One Newton step solves a linear problem; no seeding, no line search, no continuation.
+    // One Newton step solves a linear problem; no coarse-grid start, no line search, no continuation.
     expect(nonlinear.newton.iterations).toBe(1);
-    expect(nonlinear.newton.seedIterations).toBe(0);
+    expect(nonlinear.newton.coarseGridIterations).toBe(0);
     expect(nonlinear.newton.halvings).toBe(0);
   });
 });

@@ -80,7 +80,7 @@ describe.each(ROWS)('power-law h, adiabatic tip: $name (Sen & Trinh 1986; nonlin
     expect(result.energyBalance).toBeLessThan(1e-12);
     // Each grid starts from the previous one's solution (error O(h^2)), so quadratic convergence needs
     // at most 3 steps plus the one that confirms the heat rate; the coarsest grid starts from its own
-    // seeds. Both convergence criteria were met.
+    // coarser grids. Both convergence criteria were met.
     expect(iterations[2]).toBeLessThanOrEqual(4);
     expect(result.newton.residual).toBeLessThanOrEqual(1e-12);
     expect(result.newton.heatRateChange).toBeLessThanOrEqual(1e-12);

@@ -57,7 +57,7 @@ function compare(label: string, runLinear: () => void, runNonlinear: () => void,
 
 for (const [nx, ny, runs] of [[185, 33, 15], [1025, 33, 9], [369, 129, 7]] as const) {
   const r = solveNonlinearFin2D(nonlinear, { nx, ny });
-  const steps = `${r.newton.iterations} steps + ${r.newton.seedIterations} on coarser grids, ${r.solver}`;
+  const steps = `${r.newton.iterations} steps + ${r.newton.coarseGridIterations} on coarser grids, ${r.solver}`;
   compare(`${nx} x ${ny}`, () => void solveFin2D(linear, { nx, ny }), () => void solveNonlinearFin2D(nonlinear, { nx, ny }), runs);
   console.log(`${''.padEnd(22)} nonlinear: ${steps}`);
 }
