@@ -39,14 +39,16 @@ export function formatCheck(c: Case, r: CheckReport): string {
   for (const m of r.models) {
     if (seen.has(m.model)) continue;
     seen.add(m.model);
-    out.push(`    ${pad(m.model, 14)} ${m.basis}`);
+    out.push(`    ${pad(m.model, 14)} ${m.basis}${m.model === 'fd-1d' ? `; ${m.accuracy}` : ''}`);
   }
   const guesses = new Map(r.models.filter((m) => m.guess && m.guessValues).map((m) => [m.guess, m.guessValues]));
   for (const [g, v] of guesses) {
     if (v) out.push(`    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(v.h_W_per_m2K, 4)} W/(m^2*K), k = ${sig(v.k_W_per_mK, 4)} W/(m*K)`);
   }
   for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);
-  out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature)');
+  out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature;');
+  out.push(`   the shortcuts are closed forms, exact for their own assumptions, so their error for this fin is the drift,`);
+  out.push(`   known to about the reference's discretisation error, ${ref.discretizationError.toExponential(1)})`);
   out.push('');
   if (r.assumptions.length > 0) {
     out.push('Where the drift comes from (one assumption at a time):');
