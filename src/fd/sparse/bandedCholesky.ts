@@ -2,7 +2,7 @@
  * Banded Cholesky factorisation A = L L^T of a symmetric positive definite 9-point system.
  *
  * With the short (thickness) direction numbered fastest, every coupling lies within w = nodesY + 1 of the
- * diagonal, and so does all the fill-in: L is stored as a dense band, row by row,
+ * diagonal (w = nodesY for a 5-point operator, without diagonal couplings), and so does all the fill-in: L is stored as a dense band, row by row,
  * L(p, q) at band[p * (w + 1) + q - p + w] for p - w <= q <= p.
  * Cost: factor ~ N w^2 / 2 multiply-adds, each solve ~ 2 N w, storage N (w + 1) doubles.
  * Row-oriented (Crout-like) elimination, as in Golub & Van Loan, "Matrix Computations" (4th ed., 2013),
@@ -33,7 +33,7 @@ export function bandedCholeskyBytes(nodesX: number, nodesY: number): number {
 export function factorBandedCholesky(a: Stencil9): BandedCholesky {
   const ny = a.nodesY;
   const n = a.nodesX * ny;
-  const w = ny + 1;
+  const w = hasDiagonalCouplings(a) ? ny + 1 : ny;
   const rowLength = w + 1;
   const band = new Float64Array(n * rowLength);
   const invDiag = new Float64Array(n);
@@ -247,6 +247,13 @@ function norm1(v: Float64Array): number {
   return s;
 }
 
+/** false for a 5-point operator: its band can be one narrower (w = nodesY). */
+function hasDiagonalCouplings(a: Stencil9): boolean {
+  const { northEast, southEast } = a;
+  for (let p = 0; p < northEast.length; p++) if (northEast[p] !== 0 || southEast[p] !== 0) return true;
+  return false;
+}
+
 /** Copies the lower half of the stencil into the band rows (diagonal included). */
 function fillLowerBand(a: Stencil9, band: Float64Array, w: number): void {
   const { nodesX: nx, nodesY: ny, diag, east, north, northEast, southEast } = a;
@@ -259,7 +266,7 @@ function fillLowerBand(a: Stencil9, band: Float64Array, w: number): void {
       if (j > 0) band[rowP + p - 1] = north[p - 1] as number;
       if (i > 0) {
         band[rowP + p - ny] = east[p - ny] as number;
-        if (j > 0) band[rowP + p - ny - 1] = northEast[p - ny - 1] as number;
+        if (j > 0 && w > ny) band[rowP + p - ny - 1] = northEast[p - ny - 1] as number;
         if (j + 1 < ny) band[rowP + p - ny + 1] = southEast[p - ny + 1] as number;
       }
     }

@@ -57,6 +57,7 @@ export function galerkinAlongX(a: FullStencil, t: Transfer1D): FullStencil {
       const i2 = i + di;
       if (i2 < 0 || i2 >= nx) continue;
       for (let dj = -1; dj <= 1; dj++) {
+        if (!a.diagonals && di !== 0 && dj !== 0) continue; // zero diagonal couplings
         const coef = c[3 * (di + 1) + (dj + 1)] as Float64Array;
         for (let pa = 0; pa < 2; pa++) {
           const I = pa === 0 ? (p0[i] as number) : (p1[i] as number);
@@ -89,6 +90,7 @@ export function galerkinAlongY(a: FullStencil, t: Transfer1D): FullStencil {
     const fs = i * ny;
     const cs = i * nyc;
     for (let k = 0; k < 9; k++) {
+      if (!a.diagonals && k !== 1 && k !== 3 && k !== 4 && k !== 5 && k !== 7) continue; // zero diagonal couplings
       const diOffset = 3 * (Math.floor(k / 3));
       const dj = (k % 3) - 1;
       const coef = c[k] as Float64Array;

@@ -75,7 +75,16 @@ function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Flo
   const hasWest = neighbours && i > 0;
   const hasEast = neighbours && i + 1 < nx;
   let prev = 0;
-  for (let p = start; p <= last; p++) {
+  if (!a.diagonals) {
+    // 5-point rows: only the west and east neighbours (the diagonal arrays are zero and not read).
+    const ws = hasWest ? 1 : 0;
+    const es = hasEast ? 1 : 0;
+    for (let p = start; p <= last; p++) {
+      const rhs = (b[p] as number) - ws * (w[p] as number) * (x[p - ws * ny] as number) - es * (e[p] as number) * (x[p + es * ny] as number);
+      prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
+      work[p - start] = prev;
+    }
+  } else for (let p = start; p <= last; p++) {
     let rhs = b[p] as number;
     if (hasWest) {
       const q = p - ny;

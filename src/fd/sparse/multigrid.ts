@@ -123,6 +123,16 @@ function residualAfterZebra(a: FullStencil, x: Float64Array, r: Float64Array): v
       r.fill(0, start, start + ny);
       continue;
     }
+    if (!a.diagonals) {
+      // 5-point rows: west and east neighbours only.
+      for (let p = start; p < start + ny; p++) {
+        let v = 0;
+        if (i > 0) v += (w[p] as number) * (x[p - ny] as number);
+        if (i + 1 < nx) v += (e[p] as number) * (x[p + ny] as number);
+        r[p] = -v;
+      }
+      continue;
+    }
     for (let j = 0; j < ny; j++) {
       const p = start + j;
       let v = 0;
