@@ -46,13 +46,23 @@ export function identityTransfer(n: number): Transfer1D {
   return { kind: 'identity', fine: n, coarse: n, p0: Int32Array.from({ length: n }, (_, f) => f), w0: new Float64Array(n).fill(1), p1: new Int32Array(n).fill(-1), w1: new Float64Array(n) };
 }
 
-/** P^T A P with P acting along x only (t: the transfer along x). */
+/**
+ * P^T A P with P acting along x only (t: the transfer along x). Coarse columns 1 <= I with 2I + 2 < nx
+ * have the regular children 2I - 1, 2I, 2I + 1 (weights 1/2, 1, 1/2) and are gathered in one pass each
+ * (galerkinColumnX); the columns at the two ends, whose children differ, are scattered fine column by
+ * fine column.
+ */
 export function galerkinAlongX(a: FullStencil, t: Transfer1D): FullStencil {
   const { nodesX: nx, nodesY: ny, c } = a;
   const out = emptyFullStencil(t.coarse, ny);
   const oc = out.c;
   const { p0, w0, p1, w1 } = t;
+  const regular = (I: number): boolean => t.kind === 'linear' && I >= 1 && 2 * I + 2 < nx;
+  for (let I = 1; regular(I); I++) {
+    for (let dj = -1; dj <= 1; dj++) galerkinColumnX(a, out, I, dj);
+  }
   for (let i = 0; i < nx; i++) {
+    if (regular(p0[i] as number) && (p1[i] as number) < 0) continue; // all its targets are gathered
     for (let di = -1; di <= 1; di++) {
       const i2 = i + di;
       if (i2 < 0 || i2 >= nx) continue;
@@ -61,7 +71,7 @@ export function galerkinAlongX(a: FullStencil, t: Transfer1D): FullStencil {
         const coef = c[3 * (di + 1) + (dj + 1)] as Float64Array;
         for (let pa = 0; pa < 2; pa++) {
           const I = pa === 0 ? (p0[i] as number) : (p1[i] as number);
-          if (I < 0) continue;
+          if (I < 0 || regular(I)) continue;
           const wa = pa === 0 ? (w0[i] as number) : (w1[i] as number);
           for (let pb = 0; pb < 2; pb++) {
             const I2 = pb === 0 ? (p0[i2] as number) : (p1[i2] as number);
@@ -77,6 +87,46 @@ export function galerkinAlongX(a: FullStencil, t: Transfer1D): FullStencil {
     }
   }
   return out;
+}
+
+/**
+ * The coarse couplings (dI = -1, 0, 1; dj) of a regular coarse column I, from fine columns a = 2I - 1,
+ * b = 2I, c = 2I + 1 (A-, A0, A+: fine couplings to the west, same and east column, all with this dj):
+ *   T0 = A0(a)/4 + A+(a)/2 + A-(b)/2 + A0(b) + A+(b)/2 + A-(c)/2 + A0(c)/4,
+ *   T+ = A+(b)/2 + A0(c)/4 + A+(c)/2,     T- = A-(b)/2 + A0(a)/4 + A-(a)/2.
+ */
+function galerkinColumnX(a: FullStencil, out: FullStencil, I: number, dj: number): void {
+  const ny = a.nodesY;
+  const am = a.c[dj + 1] as Float64Array;
+  const az = a.c[4 + dj] as Float64Array;
+  const ap = a.c[7 + dj] as Float64Array;
+  const tm = out.c[dj + 1] as Float64Array;
+  const tz = out.c[4 + dj] as Float64Array;
+  const tp = out.c[7 + dj] as Float64Array;
+  const fa = (2 * I - 1) * ny;
+  const fb = fa + ny;
+  const fc = fb + ny;
+  const o = I * ny;
+  if (!a.diagonals && dj !== 0) {
+    // 5-point fine operator: only the couplings within a column (A0) carry this dj.
+    for (let j = 0; j < ny; j++) {
+      const za = 0.25 * (az[fa + j] as number);
+      const zc = 0.25 * (az[fc + j] as number);
+      tz[o + j] = za + (az[fb + j] as number) + zc;
+      tp[o + j] = zc;
+      tm[o + j] = za;
+    }
+    return;
+  }
+  for (let j = 0; j < ny; j++) {
+    const za = 0.25 * (az[fa + j] as number);
+    const zc = 0.25 * (az[fc + j] as number);
+    const pb = 0.5 * (ap[fb + j] as number);
+    const mb = 0.5 * (am[fb + j] as number);
+    tz[o + j] = za + 0.5 * (ap[fa + j] as number) + mb + (az[fb + j] as number) + pb + 0.5 * (am[fc + j] as number) + zc;
+    tp[o + j] = pb + zc + 0.5 * (ap[fc + j] as number);
+    tm[o + j] = mb + za + 0.5 * (am[fa + j] as number);
+  }
 }
 
 /** P^T A P with P acting along y only (column by column, contiguous in memory). */
@@ -155,6 +205,38 @@ export function restrict(fine: Float64Array, coarse: Float64Array, tx: Transfer1
       coarse[cj] = (coarse[cj] as number) + wx * (fine[fs + j] as number);
       if (j + 1 < nyf) coarse[cj + 1] = (coarse[cj + 1] as number) + wx * (fine[fs + j + 1] as number);
     }
+  }
+}
+
+/**
+ * coarse = P^T fine for a fine vector that is zero on the odd columns (the residual right after a zebra
+ * sweep, odd columns last), with tx linear: each coarse column I is then the y-restriction of fine
+ * column 2I alone (weight 1); the odd columns are not read (they need not even be cleared). The last
+ * coarse column of an even-sized grid has only the odd last fine column as child, so it is zero.
+ */
+export function restrictEvenColumns(fine: Float64Array, coarse: Float64Array, tx: Transfer1D, ty: Transfer1D): void {
+  if (tx.kind !== 'linear') throw new Error('restrictEvenColumns: needs a linear transfer along x');
+  const nyf = ty.fine;
+  const nyc = ty.coarse;
+  const linearY = ty.kind === 'linear';
+  coarse.fill(0, (tx.coarse - 1) * nyc);
+  for (let i = 0; i < tx.fine; i += 2) {
+    const fs = i * nyf;
+    const cs = (i >> 1) * nyc;
+    if (!linearY) {
+      coarse.set(fine.subarray(fs, fs + nyf), cs);
+      continue;
+    }
+    let j = 0;
+    let carry = 0;
+    for (; j + 2 < nyf; j += 2) {
+      const half = 0.5 * (fine[fs + j + 1] as number);
+      coarse[cs + (j >> 1)] = carry + (fine[fs + j] as number) + half;
+      carry = half;
+    }
+    const cj = cs + (j >> 1);
+    coarse[cj] = carry + (fine[fs + j] as number);
+    if (j + 1 < nyf) coarse[cj + 1] = fine[fs + j + 1] as number;
   }
 }
 

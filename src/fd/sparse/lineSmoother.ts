@@ -84,6 +84,19 @@ function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Flo
       prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
       work[p - start] = prev;
     }
+  } else if (hasWest && hasEast && i >= 2 && i + 2 < nx) {
+    // Columns away from the grid's ends: x[q +- 1] exists for every row (the couplings beyond the top and
+    // bottom edges are zero), so the loop runs without branches.
+    for (let p = start; p <= last; p++) {
+      const q = p - ny;
+      const t = p + ny;
+      const rhs =
+        (b[p] as number) -
+        (w[p] as number) * (x[q] as number) - (sw[p] as number) * (x[q - 1] as number) - (nw[p] as number) * (x[q + 1] as number) -
+        (e[p] as number) * (x[t] as number) - (se[p] as number) * (x[t - 1] as number) - (ne[p] as number) * (x[t + 1] as number);
+      prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
+      work[p - start] = prev;
+    }
   } else for (let p = start; p <= last; p++) {
     let rhs = b[p] as number;
     if (hasWest) {

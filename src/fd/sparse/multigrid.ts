@@ -13,7 +13,7 @@
  * relaxation + semicoarsening: Trottenberg, Oosterlee & Schuller 2001, section 5.1 [from memory]).
  */
 import { factorBandedCholesky, type BandedFactor } from './bandedCholesky.js';
-import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, type Transfer1D } from './coarsen.js';
+import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, restrictEvenColumns, type Transfer1D } from './coarsen.js';
 import { toFullStencil, toStencil9, type FullStencil } from './fullStencil.js';
 import { factorLines, zebraFromZero, zebraLineGaussSeidel, type LineFactors } from './lineSmoother.js';
 import type { Stencil9 } from './stencil9.js';
@@ -93,9 +93,11 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
     }
     const { a: al, lines, r, work } = level;
     zebraFromZero(al, lines, b, x, work);
-    residualAfterZebra(al, x, r);
+    const tx = level.tx as Transfer1D;
+    residualAfterZebra(al, x, r, tx.kind === 'linear');
     const next = levels[l + 1] as Level;
-    restrict(r, next.b, level.tx as Transfer1D, level.ty as Transfer1D);
+    if (tx.kind === 'linear') restrictEvenColumns(r, next.b, tx, level.ty as Transfer1D);
+    else restrict(r, next.b, tx, level.ty as Transfer1D);
     cycle(l + 1, next.b, next.x);
     prolongAdd(next.x, x, level.tx as Transfer1D, level.ty as Transfer1D);
     zebraLineGaussSeidel(al, lines, b, x, work, false);
@@ -114,13 +116,14 @@ export function buildMultigrid(matrix: Stencil9): Multigrid {
  * last, exactly, so their residual is zero; each even column was solved with its odd neighbours still at
  * zero, so its residual is minus its couplings to them times their new values.
  */
-function residualAfterZebra(a: FullStencil, x: Float64Array, r: Float64Array): void {
+function residualAfterZebra(a: FullStencil, x: Float64Array, r: Float64Array, evenOnly: boolean): void {
   const { nodesX: nx, nodesY: ny, c } = a;
   const [sw, w, nw, , , , se, e, ne] = c;
   for (let i = 0; i < nx; i++) {
     const start = i * ny;
     if (i % 2 === 1) {
-      r.fill(0, start, start + ny);
+      // Zero residual; written only when the restriction reads odd columns (no coarsening along x).
+      if (!evenOnly) r.fill(0, start, start + ny);
       continue;
     }
     if (!a.diagonals) {
