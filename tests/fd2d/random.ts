@@ -3,9 +3,9 @@ import { addCoupling, emptyStencil9, type Stencil9 } from '../../src/fd/sparse/s
 
 /**
  * A random symmetric 9-point conduction-like matrix (negative couplings, positive row sums `excess`),
- * hence positive definite; seeded and repeatable.
+ * hence positive definite; seeded and repeatable. fivePoint: without diagonal couplings (a 5-point matrix).
  */
-export function randomSpdStencil(nx: number, ny: number, seed: number): Stencil9 & { excess: Float64Array } {
+export function randomSpdStencil(nx: number, ny: number, seed: number, fivePoint = false): Stencil9 & { excess: Float64Array } {
   let state = seed;
   const rand = (): number => {
     state = (state * 1103515245 + 12345) % 2147483648;
@@ -17,6 +17,7 @@ export function randomSpdStencil(nx: number, ny: number, seed: number): Stencil9
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
       for (const [di, dj] of offsets) {
+        if (fivePoint && di !== 0 && dj !== 0) continue; // no diagonal couplings (rectangular cells)
         if (i + di >= nx || j + dj < 0 || j + dj >= ny) continue;
         const v = -rand();
         addCoupling(a, i, j, di, dj, v);

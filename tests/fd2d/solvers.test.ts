@@ -28,6 +28,23 @@ describe('banded Cholesky (thin direction fastest)', () => {
     for (let p = 0; p < x.length; p++) expect(Math.abs((x[p] as number) - (ref[p] as number))).toBeLessThan(1e-12 * scale);
   });
 
+  it.each([
+    [2, 2],
+    [7, 3],
+    [3, 9],
+    [25, 6],
+  ])('matches a dense Cholesky solve (ml-matrix) on a random SPD 5-point matrix (band one narrower), %i x %i nodes', (nx, ny) => {
+    const a = randomSpdStencil(nx, ny, 31 * nx + ny, true);
+    const rhs = Float64Array.from({ length: nx * ny }, (_, p) => Math.cos(p + 2));
+    const f = factorBandedCholesky(a);
+    expect(f.bandwidth).toBe(ny);
+    const x = f.solve(rhs);
+    const ref = denseSolve(a, rhs);
+    // As above: both backward stable, condition number < 1e3, so 1e-12 relative is round-off.
+    const scale = Math.max(...ref.map(Math.abs));
+    for (let p = 0; p < x.length; p++) expect(Math.abs((x[p] as number) - (ref[p] as number))).toBeLessThan(1e-12 * scale);
+  });
+
   it('factors once and solves many right-hand sides (the factor is not altered by a solve)', () => {
     const a = randomSpdStencil(30, 5, 3);
     const f = factorBandedCholesky(a);
