@@ -7,7 +7,8 @@
  * Coefficients pointing outside the grid are zero. Conversion to and from the symmetric form of
  * stencil9.ts is exact. A 5-point operator (no diagonal couplings: rectangular cells, as on the fine grid
  * of a rectangular section) shares one zero array among its four diagonal directions and says so
- * (`diagonals: false`), so that kernels can skip them: 4 of 9 arrays less to allocate, copy and stream.
+ * (`diagonals: false`), so that kernels can skip them: 4 of 9 arrays less to allocate, copy and stream;
+ * its centre, north and east arrays are the operator's own, not copies (no kernel writes a stencil).
  */
 import { emptyStencil9, type Stencil9 } from './stencil9.js';
 
@@ -35,7 +36,8 @@ export function toFullStencil(a: Stencil9): FullStencil {
   const n = nx * ny;
   if (allZero(northEast) && allZero(southEast)) {
     const zero = new Float64Array(n);
-    const [w, s, centre, nn, e] = [new Float64Array(n), new Float64Array(n), Float64Array.from(diag), Float64Array.from(north), Float64Array.from(east)];
+    // The centre, north and east arrays are the operator's own (read only here: no copies).
+    const [w, s, centre, nn, e] = [new Float64Array(n), new Float64Array(n), diag, north, east];
     s.set(north.subarray(0, n - 1), 1);
     if (n > ny) w.set(east.subarray(0, n - ny), ny);
     return { nodesX: nx, nodesY: ny, diagonals: false, c: [zero, w, zero, s, centre, nn, zero, e, zero] };
