@@ -1,10 +1,9 @@
 /** `fincheck map CASE --x KEY=FROM:TO --y KEY=FROM:TO`: where each shortcut holds, over two case parameters. */
 import type { Command } from 'commander';
-import { readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import { loadCase } from '../../src/case/parse.js';
+import { readCaseFile } from '../../src/case/parse.js';
 import type { MapModelId } from '../../src/map/types.js';
 import { formatMapSummary } from '../../src/map/format.js';
 import { mapJsonText } from '../../src/map/json.js';
@@ -102,8 +101,8 @@ Examples:
       const format = parseOption('--format', formatOption, o.format, 'png or svg');
       const outDir = o.out ?? defaultOutDir(file);
 
-      loadCase(file);
-      const caseText = readFileSync(file, 'utf8');
+      // prepareMap parses and validates the text (InputError with positions, as check reports them).
+      const caseText = readCaseFile(file);
       const prepared = await prepareMap({
         caseText,
         fileName: file,

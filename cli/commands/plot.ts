@@ -11,7 +11,7 @@ import { loadCase } from '../../src/case/parse.js';
 import { UsageError } from '../../src/errors.js';
 import { chartBytes, type ChartFormat } from '../../src/images/index.js';
 import { plotSvg, type PlotSources } from '../../src/plots/draw.js';
-import { checkPlotInput, fieldStudy, heatmapAvailability, PLOT_KINDS, type PlotKind } from '../../src/plots/sources.js';
+import { checkPlotInput, fieldStudy, PLOT_KINDS, type PlotKind } from '../../src/plots/sources.js';
 import { writeFilesAtomically } from '../../src/report/write-files.js';
 import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
@@ -102,10 +102,6 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const c = loadCase(file);
-      if (kind === 'heatmap') {
-        const available = heatmapAvailability(c);
-        if (!available.ok) throw new UsageError(`--kind heatmap: ${available.reason}`);
-      }
 
       const sources: PlotSources =
         kind === 'heatmap'

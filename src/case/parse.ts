@@ -61,16 +61,19 @@ export function parseCaseText(text: string, fileName: string): Case {
   return parsed;
 }
 
-/** Reads and parses a case file. A missing or unreadable file is an InputError too. */
-export function loadCase(path: string): Case {
-  let text: string;
+/** The text of a case file; a missing or unreadable file is an InputError (exit 2). */
+export function readCaseFile(path: string): string {
   try {
-    text = readFileSync(path, 'utf8');
+    return readFileSync(path, 'utf8');
   } catch (err) {
     const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (err as Error).message;
     throw new InputError([{ path: '(file)', value: JSON.stringify(path), accepted: `a readable case file (${reason})` }]);
   }
-  return parseCaseText(text, path);
+}
+
+/** Reads and parses a case file. A missing or unreadable file is an InputError too. */
+export function loadCase(path: string): Case {
+  return parseCaseText(readCaseFile(path), path);
 }
 
 /** Issues in file order (those without a position keep their order, after the located ones). */
