@@ -36,7 +36,7 @@ export function exitProblems(run: Run, strict: boolean, options: readonly string
 }
 
 /** A key path of the case (fin.thickness, convection.h.points[1][0]), a file problem, or an option. */
-const namesAKey = /(^|[\s:(])((name|fin|material|convection|base|units)(\.[A-Za-z]+|\[\d+\])*|\(top level\)|\(file\)|\(syntax\)|--[a-z][a-z-]*)\b/;
+const namesAKey = /(^|[\s:(])((name|fin|material|convection|base|units)(\.[A-Za-z]+|\[\d+\])*|\(top level\)|\(file\)|\(syntax\)|--[a-z][a-z-]*)(?![A-Za-z])/;
 
 /** Exit 2: "fincheck:" first, and a key path (`keyPath` when the test knows which key is wrong). */
 export function refusalProblems(stderr: string, keyPath?: string): string[] {

@@ -4,11 +4,14 @@
  * for finding every failure class at once (the properties stop at the first).
  *
  *   npx tsx tests/fuzz/tools/survey.ts [count] [seed] [commands: check,solve,solve2d]
+ *   SURVEY_MODE=extreme ...   (extreme magnitudes, support/extremes.ts, instead of valid cases)
+ *   SURVEY_OUT=DIR ...        (where the example case files go; default /tmp/fuzz-survey)
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fc } from '@fast-check/vitest';
 import { validCase } from '../support/cases.js';
+import { extremeCase } from '../support/extremes.js';
 import { checkJsonProblems, documentedRefusal, exitProblems, parseJson, solveJsonProblems } from '../support/contract.js';
 import { caseText, cleanUp, runOn, type Run } from '../support/drive.js';
 import { commandOptions } from '../support/options.js';
@@ -41,7 +44,9 @@ function record(problem: string, run: Run): void {
   }
 }
 
-const cases = fc.sample(validCase, { numRuns: count, seed });
+const mode = process.env['SURVEY_MODE'] ?? 'valid';
+const cases: { doc: Record<string, unknown>; format: 'yaml' | 'json'; facts: import('../support/cases.js').CaseFacts; what?: string }[] =
+  mode === 'extreme' ? fc.sample(extremeCase, { numRuns: count, seed }) : fc.sample(validCase, { numRuns: count, seed });
 const started = Date.now();
 const times: Record<string, number[]> = {};
 for (const [i, c] of cases.entries()) {
@@ -50,9 +55,13 @@ for (const [i, c] of cases.entries()) {
     const t0 = Date.now();
     const run = await runOn(caseText(c.doc, c.format), c.format, command === 'solve2d' ? 'solve' : command, argv);
     (times[command] ??= []).push(Date.now() - t0);
+    void 0;
     const problems = exitProblems(run, false, await commandOptions(command === 'solve2d' ? 'solve' : command));
     if (run.code === 2 && !documentedRefusal(command as "solve2d", c.facts, run.stderr)) problems.push(`valid case refused: ${run.stderr.split('\n')[0]?.slice(0, 100) ?? ''}`);
     if (run.code === 3) problems.push(`solver failure: ${run.stderr.slice(0, 90)}`);
+    if (run.code === 70) problems.push(`internal error: ${run.stderr.split('\n')[0]?.slice(40, 140) ?? ''}`);
+    const ms = Date.now() - t0;
+    if (ms > 10_000) problems.push(`slow: ${Math.round(ms / 1000)} s`);
     if (run.code === 0) {
       const parsed = parseJson(run.stdout);
       problems.push(...parsed.problems);
@@ -64,7 +73,7 @@ for (const [i, c] of cases.entries()) {
         );
       }
     }
-    for (const p of problems) record(`[${command}] ${p}`, run);
+    for (const p of problems) record(`[${command}] ${p}${c.what ? ` {${c.what.replace(/=.*$/, '')}}` : ''}`, run);
   }
   if ((i + 1) % 20 === 0) console.error(`${i + 1}/${count} cases, ${((Date.now() - started) / 1000).toFixed(0)} s`);
 }
