@@ -52,7 +52,7 @@ export function refusalProblems(stderr: string, keyPath?: string): string[] {
 }
 
 /** Words of advice: a solver failure says what to change. */
-const advice = /\b(try|use|increase|decrease|reduce|lower|raise|give|set|change|check|refine|coarsen|shorten|choose|pass|add|remove|run)\b/i;
+const advice = /\b(try|use|increase|decrease|reduce|lower|raise|give|set|change|refine|coarsen|shorten|choose|pass|add|remove|run)\b/i;
 
 export function solverFailureProblems(stderr: string, options: readonly string[]): string[] {
   const problems: string[] = [];
@@ -170,19 +170,26 @@ function efficiencyProblems(eta: number | undefined, where: string, facts: CaseF
 }
 
 /** The temperatures any solution must stay between (maximum principle; radiation pulls toward the surroundings). */
-function temperatureBounds(facts: CaseFacts): [number, number] {
+/**
+ * `slack`, as a fraction of the range: 1e-6 for the 1-D scheme (three-point, positive coefficients: an
+ * M-matrix, so the discrete maximum principle holds to round-off); 1e-2 for a single coarse 2-D grid, whose
+ * 9-point stencil on skewed boundary-fitted cells is not an M-matrix and may overshoot slightly (measured:
+ * 0.1 % on a 41x9 grid of a profile whose thickness jumps tenfold within 1 mm; none on the study's grids).
+ */
+function temperatureBounds(facts: CaseFacts, slack = 1e-6): [number, number] {
   const ts = [facts.baseC, facts.ambientC];
   if (facts.tipC !== undefined) ts.push(facts.tipC);
   if (facts.radiates) ts.push(facts.surroundingsC);
   const lo = Math.min(...ts);
   const hi = Math.max(...ts);
-  const pad = 1e-6 * (hi - lo) + 1e-9; // round-off of the solve and of the unit conversions (6 significant digits were written)
-  return [lo - pad - 1e-3, hi + pad + 1e-3];
+  // 1e-3 K: the case's temperatures were written to 6 significant digits in several units.
+  const pad = slack * (hi - lo) + 1e-3;
+  return [lo - pad, hi + pad];
 }
 
-function temperatureProblems(t: number | undefined, where: string, facts: CaseFacts): string[] {
+function temperatureProblems(t: number | undefined, where: string, facts: CaseFacts, slack = 1e-6): string[] {
   if (t === undefined) return [];
-  const [lo, hi] = temperatureBounds(facts);
+  const [lo, hi] = temperatureBounds(facts, slack);
   return t >= lo && t <= hi ? [] : [`${where} = ${t} degC: outside [${lo}, ${hi}] (ambient, base, tip, surroundings)`];
 }
 
@@ -287,8 +294,9 @@ export function solveJsonProblems(json: Json, facts: CaseFacts, expected: { mode
   // Conservative schemes: heat in = heat out to round-off (README "How accurate"); nonlinear solves stop at a
   // relative residual of 1e-10 (2-D) or 1e-12 (1-D), far below 1e-6.
   if (balance !== undefined && !(balance >= 0 && balance <= 1e-6)) problems.push(`energyBalance = ${balance}: not small`);
-  problems.push(...temperatureProblems(finite(json, 'baseTemperature_degC', '', problems), 'baseTemperature_degC', facts));
-  problems.push(...temperatureProblems(finite(json, 'tipTemperature_degC', '', problems), 'tipTemperature_degC', facts));
+  const slack = expected.model === 'fd-2d' && expected.single ? 1e-2 : 1e-6;
+  problems.push(...temperatureProblems(finite(json, 'baseTemperature_degC', '', problems), 'baseTemperature_degC', facts, slack));
+  problems.push(...temperatureProblems(finite(json, 'tipTemperature_degC', '', problems), 'tipTemperature_degC', facts, slack));
   const lines = expected.model === 'fd-1d' ? ['profile'] : ['centreline', 'surface'];
   for (const line of lines) {
     const points = json[line];
@@ -301,9 +309,9 @@ export function solveJsonProblems(json: Json, facts: CaseFacts, expected: { mode
       if (!isObject(p)) continue;
       const x = p['x_m'] ?? p['r_m'];
       const t = p['T_degC'];
-      if (typeof x !== 'number' || typeof t !== 'number' || temperatureProblems(t, 'T', facts).length > 0) bad += 1;
+      if (typeof x !== 'number' || typeof t !== 'number' || temperatureProblems(t, 'T', facts, slack).length > 0) bad += 1;
     }
-    if (bad > 0) problems.push(`${line}: ${bad} of ${points.length} points without a finite position or with T outside the bounds ${temperatureBounds(facts).join('..')}`);
+    if (bad > 0) problems.push(`${line}: ${bad} of ${points.length} points without a finite position or with T outside the bounds ${temperatureBounds(facts, slack).join('..')}`);
   }
   return problems;
 }
