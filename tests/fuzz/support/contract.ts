@@ -89,12 +89,16 @@ export interface NullRule {
   reason: string;
 }
 
-/** Every null in `json` must match a rule; returns the paths of those that do not. */
+/** Free-text notes (`note`, `efficiencyNote`, ...) are null when there is nothing to say: not numbers. */
+const noteKey = /(^|\.)([A-Za-z]*Note|note)$/;
+
+/** Every null in `json` must match a rule (or be a note); returns the paths of those that do not. */
 export function strayNulls(json: Json, rules: readonly NullRule[]): string[] {
   const problems: string[] = [];
   const walk = (node: Json, path: string, holder: { [key: string]: Json } | undefined): void => {
     if (node === null) {
       const pattern = path.replace(/\[\d+\]/g, '[i]');
+      if (noteKey.test(pattern)) return;
       const ok = rules.some((r) => r.path.test(pattern) && (r.when === undefined || (holder !== undefined && r.when(holder))));
       if (!ok) problems.push(`${path} is null (NaN, Infinity or a missing number)`);
       return;
@@ -249,6 +253,17 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
     }
   }
 
+  // README "check": a verdict only on a resolved reference (GCI at most a tenth of the tolerance); an
+  // unresolved reference gives every row the verdict `unresolved`.
+  const resolved = ref['resolved'];
+  if ('resolved' in ref && typeof resolved !== 'boolean') problems.push(`reference.resolved ${JSON.stringify(resolved)} is not true or false`);
+  if (resolved === true && refError !== undefined && tolerance !== undefined && refError > tolerance / 10) {
+    problems.push(`reference.resolved but its discretizationError ${refError} exceeds a tenth of the tolerance`);
+  }
+  // README "check": a shortcut's efficiency may exceed 1 when its equivalent fin has more surface than the
+  // actual one, and reference.efficiencyNote then names it.
+  const efficiencyNote = typeof ref['efficiencyNote'] === 'string' ? ref['efficiencyNote'] : '';
+
   const models = Array.isArray(json['models']) ? json['models'] : [];
   if (models.length === 0) problems.push('no models');
   for (const [i, row] of models.entries()) {
@@ -260,11 +275,17 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
     const id = row['model'];
     if (typeof id !== 'string' || !(modelIds as readonly string[]).includes(id)) problems.push(`${where}.model ${JSON.stringify(id)} is not a documented model id`);
     finite(row, 'heatRate_W', where, problems);
-    problems.push(...efficiencyProblems(finite(row, 'efficiency', where, problems, facts.tip === 'infinite'), `${where} (${String(id)})`, facts, 1e-9 + (refError ?? 0) * 4));
+    const eta = finite(row, 'efficiency', where, problems, facts.tip === 'infinite');
+    const named = typeof id === 'string' && !id.startsWith('fd-') && new RegExp(`(^|[\\s,])${id}[\\s,]`).test(efficiencyNote) && /above 1/.test(efficiencyNote);
+    if (!named) problems.push(...efficiencyProblems(eta, `${where} (${String(id)})`, facts, 1e-9 + (refError ?? 0) * 4));
     const drift = finite(row, 'drift', where, problems);
     const verdict = row['verdict'];
     if (typeof verdict !== 'string' || !(verdicts as readonly string[]).includes(verdict)) {
       problems.push(`${where}.verdict ${JSON.stringify(verdict)} is not one of ${verdicts.join(', ')}`);
+    } else if (resolved === false && verdict !== 'unresolved') {
+      problems.push(`${where}.verdict ${verdict} on an unresolved reference`);
+    } else if (resolved === true && verdict === 'unresolved') {
+      problems.push(`${where}.verdict unresolved on a resolved reference`);
     } else if (verdict !== 'unresolved' && drift !== undefined && tolerance !== undefined && verdict !== tolerated(drift, tolerance)) {
       problems.push(`${where}.verdict ${verdict} but drift ${drift} at tolerance ${tolerance} is ${tolerated(drift, tolerance)}`);
     }
