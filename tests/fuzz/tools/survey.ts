@@ -51,6 +51,8 @@ const started = Date.now();
 const times: Record<string, number[]> = {};
 for (const [i, c] of cases.entries()) {
   for (const command of commands) {
+    // Which case runs now, so a run that hangs can be found (case files: tools/dump by index).
+    writeFileSync(join(outDir, 'running.txt'), `case ${i} ${command}\n${caseText(c.doc, c.format)}`);
     const argv = command === 'check' ? ['--json', '--reference', i % 2 ? '1d' : 'auto'] : command === 'solve' ? ['--json'] : ['--json', '--model', '2d', '--grid', '41x9'];
     const t0 = Date.now();
     const run = await runOn(caseText(c.doc, c.format), c.format, command === 'solve2d' ? 'solve' : command, argv);
