@@ -29,7 +29,7 @@ export function modelRows(
       efficiency: v.heatRate_W / idealHeatRate,
       effectiveness: v.heatRate_W / effectivenessScale,
       drift,
-      verdict: verdictOf(drift, tolerance),
+      verdict: verdictOf(drift, tolerance, reference.resolved),
       formulaEfficiency: v.formulaEfficiency,
       m_per_m: v.m_per_m,
       length_m: v.length_m,

@@ -16,7 +16,7 @@ import { UsageError } from '../errors.js';
 import { solveFin1D, type Fin1DStudy } from '../fd/fin1d.js';
 import type { LinearFinCase } from '../fd/linear-case.js';
 import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import type { AssumptionRow, ReferenceResult } from './types.js';
+import type { AssumptionRow, UnjudgedReference } from './types.js';
 
 /** The solvers behind a 2-D reference. */
 export interface Reference2DModels<C extends Case> {
@@ -34,7 +34,7 @@ const LINEAR_MODELS: Reference2DModels<LinearFinCase> = {
 };
 
 export interface Reference2D {
-  reference: ReferenceResult;
+  reference: UnjudgedReference;
   study: Fin2DStudy;
   /** The ledger row "one-dimensional conduction". */
   oneDRow: AssumptionRow;
@@ -74,7 +74,7 @@ export function reference2DWith<C extends Case>(
   const order = study.heatRate.observedOrder;
   const section = finest.grid.section === 'planar' ? 'longitudinal section x width' : 'axisymmetric section';
   const edgeNote = cooledEdges ? `; side edges' cooling added from fd-1d (${pct(edgeFactor - 1)})` : '';
-  const reference: ReferenceResult = {
+  const reference: UnjudgedReference = {
     model: 'fd-2d',
     heatRate_W: heatRate,
     efficiency: heatRate / idealHeatRate,

@@ -65,6 +65,8 @@ export interface PointReference {
   heatRate_W: number;
   efficiency: number;
   discretizationError: number;
+  /** True when discretizationError <= tolerance / 10; else the point's verdicts are `unresolved`. */
+  resolved: boolean;
 }
 
 /** A grid point where the check ran. */

@@ -34,18 +34,20 @@ function modelName(m: ModelResult): string {
 
 function summary(r: CheckReport): Block[] {
   const ref = r.reference;
-  const counts = { ok: 0, marginal: 0, unsafe: 0 };
+  const counts = { ok: 0, marginal: 0, unsafe: 0, unresolved: 0 };
   for (const m of r.models) counts[m.verdict]++;
   const worst = [...r.models].sort((a, b) => Math.abs(b.drift) - Math.abs(a.drift))[0];
-  const tone: Tone = counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
+  const tone: Tone = !ref.resolved ? 'warning' : counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
   const items = [
     `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
-    `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`,
+    ref.resolved
+      ? `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`
+      : `The reference is not resolved (estimated discretisation error above a tenth of the tolerance, ${relativeError(ref.resolution.target)}): no verdicts are given (${counts.unresolved} models unresolved).`,
   ];
   if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
   const warnings = r.flags.filter((f) => f.severity !== 'info');
   items.push(warnings.length > 0 ? `Flags: ${warnings.map((f) => f.flag).join(', ')} (see Flags).` : 'No warning flags.');
-  return [{ kind: 'callout', title: tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
+  return [{ kind: 'callout', title: tone === 'warning' ? 'Result: reference not resolved, no verdicts' : tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
 }
 
 function referenceFacts(r: CheckReport): Block {
@@ -71,7 +73,7 @@ function referenceFacts(r: CheckReport): Block {
 function checkTable(r: CheckReport): Block[] {
   const row = (m: ModelResult): { cells: string[]; tone: Tone } => ({
     cells: [modelName(m), sig(m.heatRate_W, 5), efficiency(m.efficiency), signedPercent(m.drift), m.verdict, prettyUnits(m.accuracy)],
-    tone: m.verdict,
+    tone: m.verdict === 'unresolved' ? 'warning' : m.verdict,
   });
   const blocks: Block[] = [
     referenceFacts(r),

@@ -11,7 +11,7 @@ import { cli } from '../cli/run.js';
 import { caseFile, tmp } from './support.js';
 
 interface CheckJson {
-  reference: { model: string; heatRate_W: number; efficiency: number; discretizationError: number };
+  reference: { model: string; heatRate_W: number; efficiency: number; discretizationError: number; resolved: boolean };
   models: { model: string; heatRate_W: number; efficiency: number; drift: number; verdict: string }[];
 }
 
@@ -105,6 +105,7 @@ describe('map points equal fincheck check on the same parameters', () => {
         heatRate_W: check.reference.heatRate_W,
         efficiency: check.reference.efficiency,
         discretizationError: check.reference.discretizationError,
+        resolved: check.reference.resolved,
       });
       expect(p.models.map((m) => [m.model, m.drift, m.verdict])).toEqual(check.models.map((m) => [m.model, m.drift, m.verdict]));
     }
