@@ -81,6 +81,9 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
     if (guess === 'base') {
       notApplicable = na;
       eqBase = eq;
+    } else {
+      // A shortcut the fin-averaged guess cannot take (while the base guess could) says why too.
+      for (const n of na) if (!notApplicable.some((b) => b.model === n.model)) notApplicable.push({ model: n.model, reason: `fin-averaged guess: ${n.reason}` });
     }
   }
   const eq = eqBase as EquivalentUniformFin;

@@ -51,3 +51,51 @@ base: { temperature: 85 degC }
     expect(JSON.parse(r.stdout).reference.heatRate_W).toBeGreaterThan(0);
   });
 });
+
+describe('shortcuts that do not apply are left out with the reason, not crashed on (item 2)', () => {
+  it('surroundings hotter than the base: the single h is negative, every shortcut is notApplicable, exit 0', async () => {
+    const file = caseFile(
+      'hot.yaml',
+      `name: hot surroundings
+fin: { profile: rectangular, length: 40 mm, thickness: 2 mm, width: 50 mm }
+material: { k: 200 }
+convection: { ambient: 25 degC, h: 5, emissivity: 0.9, surroundings: 400 degC, tip: convective }
+base: { temperature: 85 degC }
+`,
+    );
+    const r = await cli('check', file, '--json', '--reference', '1d');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.stdout);
+    // The fin gains heat from the surroundings and gives it to the base: Q < 0, but a finite number.
+    expect(Number.isFinite(j.reference.heatRate_W)).toBe(true);
+    expect(j.models).toEqual([]);
+    const ids = j.notApplicable.map((n: { model: string }) => n.model).sort();
+    expect(ids).toEqual(['closed-form', 'convective-tip', 'tanh-L', 'tanh-Lc', 'tanh-Lc-thin']);
+    for (const n of j.notApplicable) expect(n.reason).toMatch(/h > 0/);
+    const text = await cli('check', file, '--reference', '1d');
+    expect(text.code).toBe(0);
+    expect(text.stdout).toMatch(/tanh-L\s+not applicable: the single h of this fin is -\d+/);
+  });
+
+  it('h ~ theta^-1/2 on a fin that reaches the ambient: finite reference, the fin-averaged guess left out with the reason', async () => {
+    const file = caseFile(
+      'negexp.yaml',
+      `name: negative exponent
+fin: { profile: pin, length: 300 mm, diameter: 2 mm }
+material: { k: 15 }
+convection: { ambient: 25 degC, h: { law: power, base: 20, exponent: -0.5 }, tip: adiabatic }
+base: { temperature: 85 degC }
+`,
+    );
+    const r = await cli('check', file, '--json', '--reference', '1d');
+    expect(r.code).toBe(0);
+    const j = JSON.parse(r.stdout);
+    expect(j.reference.heatRate_W).toBeGreaterThan(0);
+    for (const m of j.models) {
+      expect(Number.isFinite(m.heatRate_W)).toBe(true);
+      expect(Number.isFinite(m.drift)).toBe(true);
+    }
+    expect(j.models.some((m: { guess?: string }) => m.guess === 'mean')).toBe(false);
+    expect(j.notApplicable.some((n: { reason: string }) => /fin-averaged guess: no finite single h/.test(n.reason))).toBe(true);
+  });
+});
