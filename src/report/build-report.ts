@@ -32,6 +32,20 @@ function modelName(m: ModelResult): string {
   return `${m.model} (${m.guess === 'base' ? 'h, k at the base' : 'h, k fin mean'})`;
 }
 
+/**
+ * One exact sentence about the flags: the warnings (and errors) by name, and how many notes (info flags)
+ * are listed below, e.g. "No warnings; 2 notes (long-fin, low-biot) listed under Flags."
+ */
+export function flagSummary(flags: readonly Flag[]): string {
+  const count = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
+  const warnings = flags.filter((f) => f.severity !== 'info');
+  const notes = flags.filter((f) => f.severity === 'info');
+  const names = (list: readonly Flag[]): string => list.map((f) => f.flag).join(', ');
+  const warned = warnings.length > 0 ? `${count(warnings.length, 'warning', 'warnings')} (${names(warnings)})` : 'No warnings';
+  const noted = notes.length > 0 ? `${count(notes.length, 'note', 'notes')} (${names(notes)})` : 'no notes';
+  return flags.length > 0 ? `${warned}; ${noted}; see Flags.` : `${warned}; ${noted}.`;
+}
+
 function summary(r: CheckReport): Block[] {
   const ref = r.reference;
   const counts = { ok: 0, marginal: 0, unsafe: 0, unresolved: 0 };
@@ -45,8 +59,7 @@ function summary(r: CheckReport): Block[] {
       : `The reference is not resolved (estimated discretisation error above a tenth of the tolerance, ${relativeError(ref.resolution.target)}): no verdicts are given (${counts.unresolved} models unresolved).`,
   ];
   if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
-  const warnings = r.flags.filter((f) => f.severity !== 'info');
-  items.push(warnings.length > 0 ? `Flags: ${warnings.map((f) => f.flag).join(', ')} (see Flags).` : 'No warning flags.');
+  items.push(flagSummary(r.flags));
   return [{ kind: 'callout', title: tone === 'warning' ? 'Result: reference not resolved, no verdicts' : tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
 }
 

@@ -99,3 +99,55 @@ base: { temperature: 85 degC }
     expect(j.notApplicable.some((n: { reason: string }) => /fin-averaged guess: no finite single h/.test(n.reason))).toBe(true);
   });
 });
+
+describe('the text table and header (items 9 and 10)', () => {
+  // Plate fin with insulated edges: A/P = t/2, m = sqrt(2h/(kt)), Lc = L + t/2; the corrected-length
+  // efficiency tanh(mLc)/(mLc) (Harper & Brown 1922, NACA Report 158; Incropera et al. 2007, eq. 3.89).
+  const plate = caseFile(
+    'plate.yaml',
+    `name: plate fin
+fin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm, edges: insulated }
+material: { k: 180 }
+convection: { ambient: 20 degC, h: 40, tip: convective }
+base: { temperature: 80 degC }
+`,
+  );
+
+  it('shows the textbook formula efficiency beside the common-definition efficiency', async () => {
+    const r = await cli('check', plate, '--reference', '1d');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/efficiency\s+formula eff\.\s+drift/);
+    const m = Math.sqrt((2 * 40) / (180 * 0.002));
+    const mLc = m * (0.03 + 0.001);
+    const formula = (Math.tanh(mLc) / mLc).toFixed(4);
+    const row = r.stdout.split('\n').find((l) => /^\s+tanh-Lc\s+\d/.test(l));
+    expect(row).toBeDefined();
+    const cells = (row as string).trim().split(/\s+/);
+    // model, Q, efficiency, formula eff., drift, %, verdict
+    expect(cells[3]).toBe(formula);
+    const j = JSON.parse((await cli('check', plate, '--json', '--reference', '1d')).stdout);
+    const lc = j.models.find((x: { model: string }) => x.model === 'tanh-Lc');
+    expect(lc.formulaEfficiency.toFixed(4)).toBe(formula);
+  });
+
+  it('names emissivity and surroundings of a radiating fin in the check and solve headers', async () => {
+    const file = caseFile(
+      'radiating.yaml',
+      `name: radiating fin
+fin: { profile: rectangular, length: 40 mm, thickness: 2 mm, width: 50 mm }
+material: { k: 200 }
+convection: { ambient: 25 degC, h: 5, emissivity: 0.85, surroundings: 10 degC, tip: convective }
+base: { temperature: 85 degC }
+`,
+    );
+    for (const command of ['check', 'solve']) {
+      const r = await cli(command, file, ...(command === 'check' ? ['--reference', '1d'] : []));
+      expect(r.code).toBe(0);
+      const header = r.stdout.split('\n').slice(0, 6).join('\n');
+      expect(header).toContain('emissivity 0.85');
+      expect(header).toContain('surroundings 10 degC');
+    }
+    const plain = await cli('check', plate, '--reference', '1d');
+    expect(plain.stdout).not.toContain('emissivity');
+  });
+});
