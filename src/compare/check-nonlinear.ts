@@ -22,6 +22,7 @@ import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
 import { finProblem1D } from '../fd/problem1d.js';
 import { decayGradingOf, resolveStudy1D } from '../fd/resolve-study1d.js';
@@ -40,6 +41,8 @@ function nonlinearModels(radiationNote: string): Reference2DModels<Case> {
   return {
     study2D: (c) => studyNonlinearFin2D(c),
     heatRate1D: (variant, nodes) => solveNonlinearFin1D(variant, { nodes }).heatRate,
+    // Q_ideal does not depend on the grid (exact integrals of the geometry): the coarsest grid gives it.
+    idealHeatRate1D: (variant) => solveNonlinearFin1D(variant, { nodes: 3 }).idealHeatRate,
     note: (study) => {
       const steps = (study as NonlinearFin2DStudy).iterations.join('/');
       return `; nonlinear, Newton converged (residual <= 1e-10; ${steps} steps, coarsest to finest grid)${radiationNote}`;
@@ -65,9 +68,10 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   }
   const { twoD, fallback } = choose2DReference(candidate, opts.reference === '2d', target);
   const finestSteps = study.iterations[study.iterations.length - 1] ?? 0;
+  const basis = twoD ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE) : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
   const reference = twoD
-    ? judgedReference(twoD.reference, resolution2D(twoD.study, target))
-    : reference1D(study, resolution, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${fallback}${radiationNote}`);
+    ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis)
+    : reference1D(study, resolution, basis, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${fallback}${radiationNote}`);
 
   const inputs: ModelInput[] = [];
   let notApplicable: NotApplicable[] = [];
@@ -100,7 +104,7 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+  const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
 
   const solve = (variant: Case): number => solveNonlinearFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
   const assumptions = opts.ledger === false ? [] : [...nonlinearRows(c, solve), ...assumptionLedger(c, geometry, eq, solve)];

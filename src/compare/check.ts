@@ -22,6 +22,7 @@ import { assumptionLedger } from './ledger.js';
 import { madeByReported, modelRows, shortcutInputs } from './model-rows.js';
 import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, type EfficiencyBasis } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution1D, resolution2D, resolutionTarget } from './resolved-reference.js';
 import type { CheckReport, Flag, ReferenceResult } from './types.js';
 import type { FinGeometry1D } from '../mesh/types.js';
@@ -50,13 +51,12 @@ export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcom
 }
 
 /** The fd-1d study as a reference, judged against the resolution it reached. */
-export function reference1D(oneD: Fin1DStudy, resolution: Resolution, extraNote = ''): ReferenceResult {
+export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
   const ref = oneD.result;
   const grids = resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
   return judgedReference({
     model: 'fd-1d',
     heatRate_W: ref.heatRate,
-    efficiency: ref.efficiency,
     effectiveness: ref.effectiveness,
     discretizationError: oneD.study.gci,
     energyBalance: ref.energyBalance,
@@ -64,7 +64,7 @@ export function reference1D(oneD: Fin1DStudy, resolution: Resolution, extraNote 
     grid: { nodes: ref.mesh.nodes },
     tipTemperature_degC: ref.tipTemperature_degC,
     note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
-  }, resolution1D(resolution));
+  }, resolution1D(resolution), basis);
 }
 
 /**
@@ -110,7 +110,10 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
   const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
   const required = opts.reference === '2d';
   const { twoD, fallback } = choose2DReference(opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, required), required, target);
-  const reference = twoD ? judgedReference(twoD.reference, resolution2D(twoD.study, target)) : reference1D(oneD, resolution, fallback);
+  const basis = twoD
+    ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE)
+    : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
+  const reference = twoD ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis) : reference1D(oneD, resolution, basis, fallback);
 
   const { values, notApplicable } = evaluateShortcuts(c, eq);
   const inputs = shortcutInputs(values);
@@ -127,7 +130,7 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+  const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
 
   const assumptions = opts.ledger === false ? [] : assumptionLedger(c, geometry, eq);
   if (twoD) assumptions.unshift(twoD.oneDRow);

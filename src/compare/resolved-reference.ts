@@ -11,6 +11,7 @@
  */
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import type { Resolution } from '../fd/resolve-study1d.js';
+import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
 import type { ReferenceResolution, ReferenceResult, UnjudgedReference } from './types.js';
 
 /** The share of the tolerance the reference's discretisation error may use. */
@@ -34,13 +35,16 @@ export function resolution2D(study: Fin2DStudy, target: number): ReferenceResolu
   };
 }
 
-/** The reference with its resolution: resolved when its GCI is at most the target (a NaN GCI is not). */
-export function judgedReference(ref: UnjudgedReference, resolution: ReferenceResolution): ReferenceResult {
+/**
+ * The reference with its resolution (resolved when its GCI is at most the target; a NaN GCI is not) and its
+ * efficiency on the check's one surface (efficiency-basis.ts).
+ */
+export function judgedReference(ref: UnjudgedReference, resolution: ReferenceResolution, basis: EfficiencyBasis): ReferenceResult {
   const resolved = ref.discretizationError <= resolution.target;
   const words = resolved
     ? ''
     : `; NOT RESOLVED: estimated error ${ref.discretizationError.toExponential(1)} > ${resolution.target.toExponential(1)} (a tenth of the tolerance) after ${resolution.refinements} refinements (${resolution.budget}): verdicts are 'unresolved'`;
-  return { ...ref, note: `${ref.note}${words}`, resolved, resolution };
+  return { ...ref, efficiency: efficiencyOf(ref.heatRate_W, basis), efficiencyNote: basis.note, note: `${ref.note}${words}`, resolved, resolution };
 }
 
 /**

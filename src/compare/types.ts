@@ -29,7 +29,10 @@ export interface ReferenceResolution {
 export interface ReferenceResult {
   model: 'fd-1d' | 'fd-2d';
   heatRate_W: number;
-  efficiency: number;
+  /** Q / Q_ideal on the reference model's own surface (efficiency-basis.ts); null for an infinite tip (see efficiencyNote). */
+  efficiency: number | null;
+  /** Why the efficiency is null (infinite tip) or may exceed 1 (prescribed tip temperature); null otherwise. */
+  efficiencyNote: string | null;
   effectiveness: number;
   /** Estimated relative discretisation error of heatRate_W (GCI of the finest grid). */
   discretizationError: number;
@@ -45,13 +48,16 @@ export interface ReferenceResult {
 }
 
 /** A reference before its resolution is judged (resolved-reference.ts adds it). */
-export type UnjudgedReference = Omit<ReferenceResult, 'resolved' | 'resolution'>;
+export type UnjudgedReference = Omit<ReferenceResult, 'resolved' | 'resolution' | 'efficiency' | 'efficiencyNote'>;
 
 export interface ModelResult {
   model: ShortcutId | 'fd-1d';
   heatRate_W: number;
-  /** Q / Q_ideal of the actual fin (case-format.md definition), so every row is comparable. */
-  efficiency: number;
+  /**
+   * Q / Q_ideal of the actual fin (case-format.md definition) with the reference's Q_ideal, so every row is
+   * comparable; null for an infinite tip (reference.efficiencyNote says why).
+   */
+  efficiency: number | null;
   effectiveness: number;
   drift: number;
   verdict: Verdict;

@@ -24,7 +24,7 @@ export interface ReportInputs {
   date: string;
 }
 
-const efficiency = (x: number): string => x.toFixed(4);
+const efficiency = (x: number | null): string => (x === null ? 'n/a' : x.toFixed(4));
 
 /** A model's name in the tables; nonlinear fins list each shortcut with the h and k it was given. */
 function modelName(m: ModelResult): string {
@@ -71,7 +71,7 @@ function referenceFacts(r: CheckReport): Block {
     caption: `Reference model ${ref.model}`,
     items: [
       ['Heat rate Q', `${sig(ref.heatRate_W, 6)} W (whole fin)`],
-      ['Efficiency', `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)`],
+      ['Efficiency', `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)${ref.efficiencyNote !== null ? `; ${ref.efficiencyNote}` : ''}`],
       ['Effectiveness', `${sig(ref.effectiveness)} (Q over the bare base area's heat rate)`],
       ['Tip temperature', `${ref.tipTemperature_degC.toFixed(2)} °C${ref.model === 'fd-2d' ? ' (centre of the tip)' : ''}`],
       ['Estimated discretisation error of Q', `${relativeError(ref.discretizationError)} relative = ±${sig(ref.discretizationError * ref.heatRate_W, 2)} W (GCI, Celik et al. 2008)`],
