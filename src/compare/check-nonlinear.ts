@@ -22,7 +22,7 @@ import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
-import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE } from './efficiency-basis.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
 import { finProblem1D } from '../fd/problem1d.js';
 import { decayGradingOf, resolveStudy1D } from '../fd/resolve-study1d.js';
@@ -105,6 +105,7 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
       ]
     : [];
   const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
+  reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
   const solve = (variant: Case): number => solveNonlinearFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
   const assumptions = opts.ledger === false ? [] : [...nonlinearRows(c, solve), ...assumptionLedger(c, geometry, eq, solve)];

@@ -22,7 +22,7 @@ import { assumptionLedger } from './ledger.js';
 import { madeByReported, modelRows, shortcutInputs } from './model-rows.js';
 import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
-import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, type EfficiencyBasis } from './efficiency-basis.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote, type EfficiencyBasis } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution1D, resolution2D, resolutionTarget } from './resolved-reference.js';
 import type { CheckReport, Flag, ReferenceResult } from './types.js';
 import type { FinGeometry1D } from '../mesh/types.js';
@@ -131,6 +131,7 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
       ]
     : [];
   const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
+  reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
   const assumptions = opts.ledger === false ? [] : assumptionLedger(c, geometry, eq);
   if (twoD) assumptions.unshift(twoD.oneDRow);

@@ -49,3 +49,21 @@ export function efficiencyBasis(c: Case, idealHeatRate: number | null, surface: 
 export function efficiencyOf(heatRate: number, basis: EfficiencyBasis): number | null {
   return basis.idealHeatRate === null ? null : heatRate / basis.idealHeatRate;
 }
+
+/**
+ * Shortcut rows above 1 on an ordinary fin: the shortcut's equivalent uniform fin (mean section, a corrected
+ * length or a convecting tip of the mean thickness) has more cooled surface than this fin, e.g. a stubby
+ * tapered fin whose sharp tip has no area. Returns the note to add, or null.
+ */
+export function overUnityNote(rows: readonly { model: string; efficiency: number | null }[]): string | null {
+  const over = [...new Set(rows.filter((r) => r.efficiency !== null && r.efficiency > 1).map((r) => r.model))];
+  if (over.length === 0) return null;
+  return `${over.join(', ')} above 1: the equivalent uniform fin of ${over.length === 1 ? 'that shortcut' : 'those shortcuts'} (mean section, corrected length or convecting tip) has more cooled surface than this fin, so its heat rate exceeds this fin's ideal one`;
+}
+
+/** The reference's efficiency note with the over-unity note of the rows added. */
+export function withRowsNote(note: string | null, rows: readonly { model: string; efficiency: number | null }[]): string | null {
+  const extra = overUnityNote(rows);
+  if (extra === null) return note;
+  return note === null ? extra : `${note}; ${extra}`;
+}

@@ -4,7 +4,7 @@
  *
  * fd-2d solves the longitudinal section (straight fins, times the width: insulated side edges) or the
  * axisymmetric section (pins, annular fins). Where a straight fin's side edges are cooled, the reference
- * adds their effect measured by fd-1d on one grid (Q_1D,cooled / Q_1D,insulated), a correction of order
+ * adds the edges' heat measured by fd-1d on one grid (Q_1D,cooled - Q_1D,insulated), a correction of order
  * t/w; the note says how large it is. The one-dimensional conduction drift compares fd-1d with fd-2d on
  * the same idealisation (insulated edges in both): (Q_1D - Q_2D) / Q_2D.
  * Nonlinear fins (check-nonlinear.ts) use the same construction with their own solvers (Newton in 1-D and
@@ -78,8 +78,12 @@ export function reference2DWith<C extends Case>(
   const ref1d = oneD.result;
   const cooledEdges = ref1d.mesh.baseArea > 0 && c.fin.edges === 'cooled' && isStraight(c);
   const insulated1d = cooledEdges ? models.heatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }, ref1d.mesh.nodes) : ref1d.heatRate;
-  const edgeFactor = ref1d.heatRate / insulated1d;
-  const heatRate = study.heatRate_W * edgeFactor;
+  // The edges' own heat, added (not a ratio applied to the 2-D heat: on a stubby tapered fin the thin-fin
+  // faces are a small part of the true sloped faces, and the ratio Q_1D,cooled / Q_1D,insulated (+40 % for
+  // a 2 mm long, 40 mm thick triangle) multiplied the much larger 2-D face heat by it).
+  const edgeHeat = ref1d.heatRate - insulated1d;
+  const heatRate = study.heatRate_W + edgeHeat;
+  const edgeFactor = heatRate / study.heatRate_W;
   const finest = study.finest;
   const grids = study.grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
   const order = study.heatRate.observedOrder;
