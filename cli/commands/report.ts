@@ -47,7 +47,7 @@ export interface WrittenReport {
   markdown: string;
   images: string[];
   heatmapUnavailable: string | null;
-  worstVerdict: 'ok' | 'marginal' | 'unsafe';
+  worstVerdict: 'ok' | 'marginal' | 'unsafe' | 'unresolved';
 }
 
 /** Computes the report and writes it into `outDir` (also what `fincheck demo` uses). */
@@ -73,7 +73,7 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
   request.beforeWrite?.();
   writeFilesAtomically(files, [request.outDir]);
   const verdicts = content.check.report.models.map((m) => m.verdict);
-  const worstVerdict = verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
+  const worstVerdict = verdicts.includes('unresolved') ? 'unresolved' : verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
   return { case: c, check: content.check.report, html, markdown, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
 }
 

@@ -49,7 +49,7 @@ function formatSolve(r: SolveReport, description: string[]): string {
   const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nodes} nodes`);
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
-  lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
+  lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
   lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   lines.push('', '  x [mm]     T [degC]');
