@@ -16,7 +16,7 @@ export function registerSolve(program: Command, io: Io): Command {
     .option('--model <m>', '1d (finite volumes along the fin) or 2d (across the thickness too)', '1d')
     .option('--nodes <n>', '1-D: solve once on exactly n nodes (no refinement study, discretisation error null)')
     .option('--grid <NXxNY>', '2-D: solve once on exactly NX x NY nodes (no refinement study)')
-    .option('--json', 'print one JSON document (outputs.md) with the temperature profile')
+    .option('--json', 'print one JSON document with the temperature profile (its keys: README, "JSON output")')
     .addHelpText(
       'after',
       `
@@ -49,7 +49,7 @@ function formatSolve(r: SolveReport, description: string[]): string {
   const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nodes} nodes`);
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
-  lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
+  lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
   lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   lines.push('', '  x [mm]     T [degC]');

@@ -22,6 +22,10 @@ import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './efficiency-basis.js';
+import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
+import { finProblem1D } from '../fd/problem1d.js';
+import { decayGradingOf, resolveStudy1D } from '../fd/resolve-study1d.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { assumptionLedger, LEDGER_NODES } from './ledger.js';
 import { conductivityAt, GUESS_LABEL, linearSurrogate, type HGuess } from './linear-surrogate.js';
@@ -37,6 +41,8 @@ function nonlinearModels(radiationNote: string): Reference2DModels<Case> {
   return {
     study2D: (c) => studyNonlinearFin2D(c),
     heatRate1D: (variant, nodes) => solveNonlinearFin1D(variant, { nodes }).heatRate,
+    // Q_ideal does not depend on the grid (exact integrals of the geometry): the coarsest grid gives it.
+    idealHeatRate1D: (variant) => solveNonlinearFin1D(variant, { nodes: 3 }).idealHeatRate,
     note: (study) => {
       const steps = (study as NonlinearFin2DStudy).iterations.join('/');
       return `; nonlinear, Newton converged (residual <= 1e-10; ${steps} steps, coarsest to finest grid)${radiationNote}`;
@@ -46,22 +52,26 @@ function nonlinearModels(radiationNote: string): Reference2DModels<Case> {
 
 export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   const geometry = finGeometry(c);
-  const study = studyNonlinearFin1D(c);
+  const target = resolutionTarget(opts.tolerance);
+  const grading = decayGradingOf(finProblem1D(linearSurrogate(c, 'base', null)));
+  const { study, resolution } = resolveStudy1D((nodes, g) => studyNonlinearFin1D(c, { nodes, grading: g }), grading, target, opts.resolutionBudget);
   const ref = study.result;
   const radiationNote = c.convection.emissivity > 0 ? `; ${RADIATION_VIEW_NOTE}` : '';
   const effectivenessScale = ref.heatRate / ref.effectiveness;
-  let twoD: Reference2D | null = null;
+  let candidate: Reference2D | null = null;
   let outside2D = '';
   if (opts.reference !== '1d') {
     const unsupported = nonlinear2dUnsupported(c);
-    if (unsupported === null) twoD = reference2DWith(c, study, ref.idealHeatRate, effectivenessScale, true, nonlinearModels(radiationNote));
+    if (unsupported === null) candidate = reference2DWith(c, study, ref.idealHeatRate, effectivenessScale, true, nonlinearModels(radiationNote));
     else if (opts.reference === '2d') throw new UsageError(`--reference 2d: ${unsupported}; use --reference 1d or auto`);
     else outside2D = `; the 2-D model does not cover this fin (${unsupported})`;
   }
+  const { twoD, fallback } = choose2DReference(candidate, opts.reference === '2d', target);
   const finestSteps = study.iterations[study.iterations.length - 1] ?? 0;
+  const basis = twoD ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE) : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
   const reference = twoD
-    ? twoD.reference
-    : reference1D(study, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${radiationNote}`);
+    ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis)
+    : reference1D(study, resolution, basis, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${fallback}${radiationNote}`);
 
   const inputs: ModelInput[] = [];
   let notApplicable: NotApplicable[] = [];
@@ -75,6 +85,9 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
     if (guess === 'base') {
       notApplicable = na;
       eqBase = eq;
+    } else {
+      // A shortcut the fin-averaged guess cannot take (while the base guess could) says why too.
+      for (const n of na) if (!notApplicable.some((b) => b.model === n.model)) notApplicable.push({ model: n.model, reason: `fin-averaged guess: ${n.reason}` });
     }
   }
   const eq = eqBase as EquivalentUniformFin;
@@ -91,7 +104,8 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+  const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
+  reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
   const solve = (variant: Case): number => solveNonlinearFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
   const assumptions = opts.ledger === false ? [] : [...nonlinearRows(c, solve), ...assumptionLedger(c, geometry, eq, solve)];

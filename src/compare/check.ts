@@ -8,7 +8,9 @@
  */
 import type { Case } from '../case/types.js';
 import { initBessel } from '../analytic/bessel.js';
-import { studyFin1D, type Fin1DStudy } from '../fd/fin1d.js';
+import type { Fin1DStudy } from '../fd/fin1d.js';
+import { finProblem1D } from '../fd/problem1d.js';
+import { resolveFinProblem1D, type Resolution, type ResolutionBudget } from '../fd/resolve-study1d.js';
 import type { Fin2DStudy } from '../fd/fin2dStudy.js';
 import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
 import { finGeometry } from '../mesh/geometry1d.js';
@@ -20,6 +22,8 @@ import { assumptionLedger } from './ledger.js';
 import { madeByReported, modelRows, shortcutInputs } from './model-rows.js';
 import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote, type EfficiencyBasis } from './efficiency-basis.js';
+import { choose2DReference, judgedReference, resolution1D, resolution2D, resolutionTarget } from './resolved-reference.js';
 import type { CheckReport, Flag, ReferenceResult } from './types.js';
 import type { FinGeometry1D } from '../mesh/types.js';
 
@@ -29,6 +33,8 @@ export interface CheckOptions {
   reference: 'auto' | '1d' | '2d';
   /** Compute the assumption ledger (default true); maps skip it, their points need only drifts. */
   ledger?: boolean;
+  /** How far the fd-1d reference may be refined to reach tolerance / 10 (default DEFAULT_RESOLUTION_BUDGET). */
+  resolutionBudget?: ResolutionBudget;
 }
 
 export interface CheckOutcome {
@@ -44,21 +50,21 @@ export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcom
   return isLinearFinCase(c) ? linearCheck(c, opts) : nonlinearCheck(c, opts);
 }
 
-/** The fd-1d study as a reference. */
-export function reference1D(oneD: Fin1DStudy, extraNote = ''): ReferenceResult {
+/** The fd-1d study as a reference, judged against the resolution it reached. */
+export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
   const ref = oneD.result;
-  return {
+  const grids = resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
+  return judgedReference({
     model: 'fd-1d',
     heatRate_W: ref.heatRate,
-    efficiency: ref.efficiency,
     effectiveness: ref.effectiveness,
     discretizationError: oneD.study.gci,
     energyBalance: ref.energyBalance,
     observedOrder: oneD.study.observedOrder,
     grid: { nodes: ref.mesh.nodes },
     tipTemperature_degC: ref.tipTemperature_degC,
-    note: `1-D finite volumes, ${oneD.study.sizes.length} grids; ${oneD.study.note}${extraNote}`,
-  };
+    note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
+  }, resolution1D(resolution), basis);
 }
 
 /**
@@ -98,11 +104,16 @@ export function checkFlags(
 function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
   const geometry = finGeometry(c);
   const eq = equivalentUniformFin(c, geometry);
-  const oneD = studyFin1D(c);
+  const target = resolutionTarget(opts.tolerance);
+  const { study: oneD, resolution } = resolveFinProblem1D(finProblem1D(c), target, opts.resolutionBudget);
   const ref = oneD.result;
   const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
-  const twoD = opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, opts.reference === '2d');
-  const reference = twoD ? twoD.reference : reference1D(oneD);
+  const required = opts.reference === '2d';
+  const { twoD, fallback } = choose2DReference(opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, required), required, target);
+  const basis = twoD
+    ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE)
+    : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
+  const reference = twoD ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis) : reference1D(oneD, resolution, basis, fallback);
 
   const { values, notApplicable } = evaluateShortcuts(c, eq);
   const inputs = shortcutInputs(values);
@@ -119,7 +130,8 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+  const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
+  reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
   const assumptions = opts.ledger === false ? [] : assumptionLedger(c, geometry, eq);
   if (twoD) assumptions.unshift(twoD.oneDRow);

@@ -8,6 +8,7 @@
  */
 import type { Case, HDistribution, Profile } from '../case/types.js';
 import { uniformFin } from '../analytic/uniform-fin.js';
+import { unusableEquivalent } from './shortcuts.js';
 import { solveFin1D } from '../fd/fin1d.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
 import type { FinGeometry1D } from '../mesh/types.js';
@@ -52,7 +53,9 @@ export function assumptionLedger(
       method: sameGrid,
     });
   }
-  if (tip.kind === 'convective') {
+  // Rows measured with closed forms need a single finite h > 0 (shortcuts.ts, unusableEquivalent).
+  const closedFormsApply = unusableEquivalent(eq) === null;
+  if (tip.kind === 'convective' && closedFormsApply) {
     const common = { h: eq.h, k: eq.k, P: eq.P, A: eq.A, thetaBase: 1 } as const;
     const exact = uniformFin({ ...common, L: eq.length, tip: { kind: 'convective', hTip: eq.hTip } }).heatRate;
     const lc = uniformFin({ ...common, L: eq.length + eq.A / eq.P, tip: { kind: 'adiabatic' } }).heatRate;
@@ -63,7 +66,7 @@ export function assumptionLedger(
       method: 'closed forms on the equivalent uniform fin (adiabatic at Lc vs exact convective tip)',
     });
   }
-  if (geometry.shape === 'annular') {
+  if (geometry.shape === 'annular' && closedFormsApply) {
     const uTip = tip.kind === 'convective' ? ({ kind: 'convective', hTip: eq.hTip } as const) : ({ kind: 'adiabatic' } as const);
     const straight = uniformFin({ h: eq.h, k: eq.k, P: eq.P, A: eq.A, L: eq.length, thetaBase: eq.thetaBase, tip: uTip }).heatRate;
     const withResistance = eq.contactResistance > 0 ? eq.thetaBase / (eq.contactResistance + eq.thetaBase / straight) : straight;

@@ -4,7 +4,7 @@
  *
  * fd-2d solves the longitudinal section (straight fins, times the width: insulated side edges) or the
  * axisymmetric section (pins, annular fins). Where a straight fin's side edges are cooled, the reference
- * adds their effect measured by fd-1d on one grid (Q_1D,cooled / Q_1D,insulated), a correction of order
+ * adds the edges' heat measured by fd-1d on one grid (Q_1D,cooled - Q_1D,insulated), a correction of order
  * t/w; the note says how large it is. The one-dimensional conduction drift compares fd-1d with fd-2d on
  * the same idealisation (insulated edges in both): (Q_1D - Q_2D) / Q_2D.
  * Nonlinear fins (check-nonlinear.ts) use the same construction with their own solvers (Newton in 1-D and
@@ -15,8 +15,11 @@ import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
 import { solveFin1D, type Fin1DStudy } from '../fd/fin1d.js';
 import type { LinearFinCase } from '../fd/linear-case.js';
+import { tipBoundary } from '../fd/boundary.js';
+import { idealHeatRate } from '../fd/heat-rate1d.js';
+import { finGeometry } from '../mesh/geometry1d.js';
 import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import type { AssumptionRow, ReferenceResult } from './types.js';
+import type { AssumptionRow, UnjudgedReference } from './types.js';
 
 /** The solvers behind a 2-D reference. */
 export interface Reference2DModels<C extends Case> {
@@ -24,6 +27,8 @@ export interface Reference2DModels<C extends Case> {
   study2D: (c: C) => Fin2DStudy;
   /** fd-1d heat rate of a variant of the case on `nodes` nodes, W. */
   heatRate1D: (variant: C, nodes: number) => number;
+  /** fd-1d Q_ideal of a variant of the case (every cooled surface at the base temperature), W. */
+  idealHeatRate1D: (variant: C) => number;
   /** Words appended to the reference note. */
   note?: (study: Fin2DStudy) => string;
 }
@@ -31,21 +36,27 @@ export interface Reference2DModels<C extends Case> {
 const LINEAR_MODELS: Reference2DModels<LinearFinCase> = {
   study2D: (c) => studyFin2D(c),
   heatRate1D: (variant, nodes) => solveFin1D(variant, { nodes }).heatRate,
+  idealHeatRate1D: (variant) => idealHeatRate(finGeometry(variant), variant.convection.h, tipBoundary(variant), variant.base.T_degC - variant.convection.ambient_degC),
 };
 
 export interface Reference2D {
-  reference: ReferenceResult;
+  reference: UnjudgedReference;
   study: Fin2DStudy;
   /** The ledger row "one-dimensional conduction". */
   oneDRow: AssumptionRow;
+  /**
+   * Q_ideal of the surface the 2-D model cools (true sloped faces; plus the side edges from fd-1d when
+   * they are cooled), W; null for an infinite tip (efficiency-basis.ts).
+   */
+  idealHeatRate: number | null;
 }
 
 /**
  * fd-2d reference, or null when the case is outside the 2-D model and `required` is false
  * (then `check --reference auto` keeps fd-1d).
  */
-export function reference2D(c: LinearFinCase, oneD: Fin1DStudy, idealHeatRate: number, effectivenessScale: number, required: boolean): Reference2D | null {
-  return reference2DWith(c, oneD, idealHeatRate, effectivenessScale, required, LINEAR_MODELS);
+export function reference2D(c: LinearFinCase, oneD: Fin1DStudy, ideal1D: number, effectivenessScale: number, required: boolean): Reference2D | null {
+  return reference2DWith(c, oneD, ideal1D, effectivenessScale, required, LINEAR_MODELS);
 }
 
 /** reference2D with the given solvers (any case they accept). */
@@ -67,17 +78,23 @@ export function reference2DWith<C extends Case>(
   const ref1d = oneD.result;
   const cooledEdges = ref1d.mesh.baseArea > 0 && c.fin.edges === 'cooled' && isStraight(c);
   const insulated1d = cooledEdges ? models.heatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }, ref1d.mesh.nodes) : ref1d.heatRate;
-  const edgeFactor = ref1d.heatRate / insulated1d;
-  const heatRate = study.heatRate_W * edgeFactor;
+  // The edges' own heat, added (not a ratio applied to the 2-D heat: on a stubby tapered fin the thin-fin
+  // faces are a small part of the true sloped faces, and the ratio Q_1D,cooled / Q_1D,insulated (+40 % for
+  // a 2 mm long, 40 mm thick triangle) multiplied the much larger 2-D face heat by it).
+  const edgeHeat = ref1d.heatRate - insulated1d;
+  const heatRate = study.heatRate_W + edgeHeat;
+  const edgeFactor = heatRate / study.heatRate_W;
   const finest = study.finest;
   const grids = study.grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
   const order = study.heatRate.observedOrder;
   const section = finest.grid.section === 'planar' ? 'longitudinal section x width' : 'axisymmetric section';
   const edgeNote = cooledEdges ? `; side edges' cooling added from fd-1d (${pct(edgeFactor - 1)})` : '';
-  const reference: ReferenceResult = {
+  const sectionIdeal = finest.efficiency === null ? null : finest.heatRate_W / finest.efficiency;
+  const edgesIdeal = cooledEdges ? idealHeatRate - models.idealHeatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }) : 0;
+  const ideal2D = sectionIdeal === null ? null : sectionIdeal + edgesIdeal;
+  const reference: UnjudgedReference = {
     model: 'fd-2d',
     heatRate_W: heatRate,
-    efficiency: heatRate / idealHeatRate,
     effectiveness: heatRate / effectivenessScale,
     // The edge factor's own error is fd-1d's (GCI ~1e-8), added to the 2-D GCI.
     discretizationError: study.discretizationError + (cooledEdges ? oneD.study.gci : 0),
@@ -93,7 +110,7 @@ export function reference2DWith<C extends Case>(
     madeBy: ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'],
     method: 'fd-1d vs fd-2d on the same idealisation (side edges insulated in both)',
   };
-  return { reference, study, oneDRow };
+  return { reference, study, oneDRow, idealHeatRate: ideal2D };
 }
 
 function isStraight(c: Case): boolean {

@@ -3,6 +3,7 @@
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
+import { INFINITE_TIP_NOTE, tipTemperatureNote } from './efficiency-basis.js';
 import type { Case } from '../case/types.js';
 import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/fin1d.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
@@ -18,7 +19,10 @@ export interface SolveReport {
   model: 'fd-1d';
   grid: { nodes: number };
   heatRate_W: number;
-  efficiency: number;
+  /** Q / Q_ideal; null for an infinite tip (no finite surface, see efficiencyNote). */
+  efficiency: number | null;
+  /** Why the efficiency is null or may exceed 1; null otherwise (efficiency-basis.ts). */
+  efficiencyNote: string | null;
   effectiveness: number;
   baseTemperature_degC: number;
   tipTemperature_degC: number;
@@ -56,7 +60,8 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
       model: 'fd-1d',
       grid: { nodes: n },
       heatRate_W: result.heatRate,
-      efficiency: result.efficiency,
+      efficiency: c.convection.tip.kind === 'infinite' ? null : result.efficiency,
+      efficiencyNote: c.convection.tip.kind === 'infinite' ? INFINITE_TIP_NOTE : tipTemperatureNote(c),
       effectiveness: result.effectiveness,
       baseTemperature_degC: (result.theta[0] as number) + ambient,
       tipTemperature_degC: result.tipTemperature_degC,
