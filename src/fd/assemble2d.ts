@@ -122,7 +122,7 @@ interface TriangleCouplings {
 
 const NONE: TriangleCouplings = { k01: 0, k12: 0, k20: 0 };
 
-/** Couplings of triangle (p0, p1, p2); all zero for the degenerate triangles of a collapsed tip. */
+/** Couplings of triangle (p0, p1, p2); all zero for the zero-area triangles of a collapsed tip. */
 function triangleCouplings(
   x: Float64Array,
   y: Float64Array,
@@ -147,8 +147,11 @@ function triangleCouplings(
   const ex2 = x1 - x0;
   const ey2 = y1 - y0;
   const area = 0.5 * Math.abs(ex2 * -ey1 - ey2 * -ex1);
-  const scale = Math.max(ex0 * ex0 + ey0 * ey0, ex1 * ex1 + ey1 * ey1, ex2 * ex2 + ey2 * ey2);
-  if (area <= 1e-14 * scale) return NONE;
+  // Only the collapsed tip has coincident vertices (exactly: then the cross product is exactly 0). A relative
+  // threshold (area <= 1e-14 x longest edge^2) also dropped the real cells next to a cusp, which are that
+  // thin (1e-26 m high and 1e-12 m long on a 5273 x 33 grid of a long concave fin): their nodes were
+  // left without any coupling and the matrix singular.
+  if (!(area > 0)) return NONE;
   const r = radiusAt(section, (x0 + x1 + x2) / 3, (y0 + y1 + y2) / 3);
   // grad phi_a = (ey_a, -ex_a) / (2 |T|) rotated: the along-fin gradient comes from the y-components of the
   // edges, the across gradient from their x-components.
