@@ -7,6 +7,8 @@ import type { Io } from '../io.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
 import { runSolve2D, type Solve2DReport } from '../../src/compare/solve2d.js';
 import { UsageError } from '../../src/errors.js';
+import { grid2dIssue } from '../../src/fd/fin2d.js';
+import { sectionOf } from '../../src/mesh/grid2dSection.js';
 
 export function registerSolve(program: Command, io: Io): Command {
   return program
@@ -34,6 +36,8 @@ Examples:
       if (model === '1d' && grid !== undefined) throw new UsageError('--grid goes with --model 2d; use --nodes N for the 1-D model');
       if (model === '2d' && nodes !== undefined) throw new UsageError('--nodes goes with --model 1d; use --grid NXxNY for the 2-D model');
       const c = loadCase(file);
+      const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);
+      if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
         const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
         io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
