@@ -9,13 +9,17 @@
 import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
 import { solveFin2D, type Fin2DLine, type Fin2DResult } from '../fd/fin2d.js';
+import { solveFin1D, studyFin1D } from '../fd/fin1d.js';
 import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
 import type { NewtonReport } from '../fd/nonlinear1d.js';
 import { solveNonlinearFin2D, type NonlinearFin2DResult } from '../fd/nonlinear2d.js';
+import type { LinearFinCase } from '../fd/linear-case.js';
 import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
 import { studyNonlinearFin2D } from '../fd/nonlinear2d-study.js';
-import type { ProfilePoint } from './solve.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
+import { isStraight, sideEdgeCorrection, type SideEdgeCorrection } from './reference2d.js';
+import { isRadial, type ProfilePoint } from './solve.js';
 
 /** Newton's method on the grids of a nonlinear fin. */
 export interface Solve2DNewton {
@@ -29,7 +33,17 @@ export interface Solve2DReport {
   case: string;
   model: 'fd-2d';
   grid: { nx: number; ny: number };
+  /**
+   * Heat rate of the whole fin, W: the 2-D section times the width (pins, annular fins: the whole
+   * axisymmetric fin), plus the side edges' cooling measured by fd-1d when the case cools a straight fin's
+   * edges: the number `check` reports for its fd-2d reference.
+   */
   heatRate_W: number;
+  /** The 2-D section times the width, side edges insulated (= heatRate_W unless edgesHeatRate_W != 0), W. */
+  sectionHeatRate_W: number;
+  /** heatRate_W - sectionHeatRate_W: the cooled side edges (fd-1d ratio, see reference2d.ts); 0 otherwise, W. */
+  edgesHeatRate_W: number;
+  /** Whole fin (as heatRate_W): Q / Q with every cooled surface at the base temperature. */
   efficiency: number | null;
   effectiveness: number;
   baseTemperature_degC: number;
@@ -39,7 +53,7 @@ export interface Solve2DReport {
   observedOrder: number | null;
   /** Nonlinear fins only (null for a linear fin). */
   newton: Solve2DNewton | null;
-  /** Mid-plane (straight, annular) or axis (pins), base to tip; x_m is the radius for annular fins. */
+  /** Mid-plane (straight, annular) or axis (pins), base to tip; annular fins give the radius r_m instead of x_m. */
   centreline: ProfilePoint[];
   /** The cooled face, base to tip. */
   surface: ProfilePoint[];
@@ -69,22 +83,47 @@ function solveNonlinear(c: Case, grid: { nx: number; ny: number } | undefined): 
   return { study, result: study.finest, newton: { stepsPerGrid: study.iterations, finest: study.finest.newton } };
 }
 
+/**
+ * The side edges' correction exactly as check computes it (same fd-1d study, same grid), or null when the
+ * fin has no cooled side edges.
+ */
+function edgeCorrection(c: Case): { edges: SideEdgeCorrection; idealHeatRate_W: number } | null {
+  if (c.fin.edges !== 'cooled' || !isStraight(c)) return null;
+  if (isLinearFinCase(c)) {
+    const oneD = studyFin1D(c);
+    const edges = sideEdgeCorrection<LinearFinCase>(c, oneD, (variant, nodes) => solveFin1D(variant, { nodes }).heatRate);
+    return { edges, idealHeatRate_W: oneD.result.idealHeatRate };
+  }
+  const oneD = studyNonlinearFin1D(c);
+  const edges = sideEdgeCorrection(c, oneD, (variant, nodes) => solveNonlinearFin1D(variant, { nodes }).heatRate);
+  return { edges, idealHeatRate_W: oneD.result.idealHeatRate };
+}
+
 export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): { report: Solve2DReport; result: Fin2DResult } {
   const { study, result, newton } = isLinearFinCase(c) ? solveLinear(c, opts.grid) : solveNonlinear(c, opts.grid);
-  const line = (l: Fin2DLine): ProfilePoint[] => Array.from(l.x_m, (x, i) => ({ x_m: x, T_degC: l.T_degC[i] as number }));
+  const radial = isRadial(c);
+  // Annular fins: the 2-D grid's x is the radius already (from r1 to r2).
+  const line = (l: Fin2DLine): ProfilePoint[] =>
+    Array.from(l.x_m, (x, i) => (radial ? { r_m: x, T_degC: l.T_degC[i] as number } : { x_m: x, T_degC: l.T_degC[i] as number }));
+  const correction = edgeCorrection(c);
+  const factor = correction ? correction.edges.factor : 1;
+  const heatRate = result.heatRate_W * factor;
+  const errors2D = study ? study.discretizationError : null;
   return {
     result,
     report: {
       case: c.name,
       model: 'fd-2d',
       grid: { nx: result.grid.nodesX, ny: result.grid.nodesY },
-      heatRate_W: result.heatRate_W,
-      efficiency: result.efficiency,
-      effectiveness: result.effectiveness,
+      heatRate_W: heatRate,
+      sectionHeatRate_W: result.heatRate_W,
+      edgesHeatRate_W: heatRate - result.heatRate_W,
+      efficiency: correction ? heatRate / correction.idealHeatRate_W : result.efficiency,
+      effectiveness: result.effectiveness * factor,
       baseTemperature_degC: result.baseTemperature_degC,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: study ? study.discretizationError : null,
+      discretizationError: errors2D === null ? null : errors2D + (correction ? correction.edges.discretizationError : 0),
       observedOrder: study ? study.heatRate.observedOrder : null,
       newton,
       centreline: line(result.centreline),
