@@ -5,7 +5,7 @@ import { pointPosition, runSolve, type SolveReport } from '../../src/compare/sol
 import { describeCase } from '../../src/compare/describe-case.js';
 import type { Io } from '../io.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
-import { runSolve2D, type Solve2DReport } from '../../src/compare/solve2d.js';
+import { runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/solve2d.js';
 import { UsageError } from '../../src/errors.js';
 import { grid2dIssue } from '../../src/fd/fin2d.js';
 import { sectionOf } from '../../src/mesh/grid2dSection.js';
@@ -39,6 +39,8 @@ Examples:
       const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);
       if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
+        const unsupported = solve2dUnsupported(c);
+        if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
         const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
         io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;

@@ -1,7 +1,8 @@
 /**
- * `fincheck solve --model 2d`: the fd-2d solution of the case: a refinement study by default, or exactly
- * one grid with `--grid NXxNY` (discretizationError null). Centre-line and surface temperatures along the
- * fin instead of a 1-D profile.
+ * The fd-2d solution of the case (the 2-D mode of `fincheck solve`): a refinement study by default, or
+ * exactly one grid of NX x NY nodes given by the caller (discretizationError null). Centre-line and surface
+ * temperatures along the fin instead of a 1-D profile. The heat rate is the whole fin's, as check's fd-2d
+ * reference: the section's, times the cooled side edges' factor from fd-1d (sideEdgeCorrection).
  * Nonlinear fins (power-law h, grey radiation, k over temperature) are solved by Newton's method on the
  * same grids (nonlinear2d.ts, nonlinear2d-study.ts); the report then carries the Newton step counts.
  * Where the 2-D model does not apply (fin2dUnsupported, nonlinear2dUnsupported) the UsageError names why.
@@ -12,6 +13,7 @@ import { solveFin2D, type Fin2DLine, type Fin2DResult } from '../fd/fin2d.js';
 import { solveFin1D, studyFin1D } from '../fd/fin1d.js';
 import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
+import { fin2dUnsupported } from '../fd/fin2dCase.js';
 import type { NewtonReport } from '../fd/nonlinear1d.js';
 import { solveNonlinearFin2D, type NonlinearFin2DResult } from '../fd/nonlinear2d.js';
 import type { LinearFinCase } from '../fd/linear-case.js';
@@ -73,7 +75,7 @@ function solveLinear(c: Case, grid: { nx: number; ny: number } | undefined): Sol
 
 function solveNonlinear(c: Case, grid: { nx: number; ny: number } | undefined): Solved2D {
   const unsupported = nonlinear2dUnsupported(c);
-  if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
+  if (unsupported !== null) throw new UsageError(`fd-2d: ${unsupported}; the 1-D model solves this fin`);
   if (grid) {
     const result: NonlinearFin2DResult = solveNonlinearFin2D(c, grid);
     const steps = result.newton.totalIterations + result.newton.coarseGridIterations;
@@ -97,6 +99,11 @@ function edgeCorrection(c: Case): { edges: SideEdgeCorrection; idealHeatRate_W: 
   const oneD = studyNonlinearFin1D(c);
   const edges = sideEdgeCorrection(c, oneD, (variant, nodes) => solveNonlinearFin1D(variant, { nodes }).heatRate);
   return { edges, idealHeatRate_W: oneD.result.idealHeatRate };
+}
+
+/** Why the 2-D model cannot solve this case (linear or nonlinear), or null when it can. */
+export function solve2dUnsupported(c: Case): string | null {
+  return isLinearFinCase(c) ? fin2dUnsupported(c) : nonlinear2dUnsupported(c);
 }
 
 export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): { report: Solve2DReport; result: Fin2DResult } {
