@@ -3,7 +3,6 @@ import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import { readCaseFile } from '../../src/case/parse.js';
 import type { MapModelId } from '../../src/map/types.js';
 import { formatMapSummary } from '../../src/map/format.js';
 import { mapJsonText } from '../../src/map/json.js';
@@ -12,6 +11,8 @@ import { MapInterrupted } from '../../src/map/pool.js';
 import { progressBar } from '../../src/map/progress.js';
 import { prepareMap, runMap } from '../../src/map/run-map.js';
 import { StagedFiles } from '../../src/map/staged-files.js';
+import { asUsageError } from '../../src/report/write-files.js';
+import { printWarnings, readCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import type { SetExit } from '../program.js';
@@ -65,7 +66,7 @@ function defaultOutDir(file: string): string {
 export function registerMap(program: Command, io: Io, setExit: SetExit): Command {
   return program
     .command('map')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point)')
     .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm')
     .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. "convection.h=10:1000 W/(m^2*K)"')
@@ -102,10 +103,10 @@ Examples:
       const outDir = o.out ?? defaultOutDir(file);
 
       // prepareMap parses and validates the text (InputError with positions, as check reports them).
-      const caseText = readCaseFile(file);
+      const { text: caseText, fileName } = await readCaseInput(file, io);
       const prepared = await prepareMap({
         caseText,
-        fileName: file,
+        fileName,
         x: o.x,
         y: o.y,
         logX: o.logX === true,
@@ -150,7 +151,7 @@ Examples:
           setExit(130);
           return;
         }
-        throw err;
+        throw asUsageError(err);
       } finally {
         process.off('SIGINT', onInterrupt);
       }

@@ -6,7 +6,6 @@
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/parse.js';
 import type { Case } from '../../src/case/types.js';
 import type { CheckReport } from '../../src/compare/types.js';
 import { UsageError } from '../../src/errors.js';
@@ -14,11 +13,15 @@ import { makeReport, REPORT_FILES } from '../../src/report/make-report.js';
 import { reportDate } from '../../src/report/report-date.js';
 import { writeFilesAtomically, type OutputFile } from '../../src/report/write-files.js';
 import { VERSION } from '../../src/version.js';
+import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import { dpiOption } from './plot.js';
 
 export interface ReportRequest {
+  /** The case, read and parsed by the caller. */
+  case: Case;
+  /** Its file name as given (`stdin` for standard input), shown in the report. */
   caseFile: string;
   outDir: string;
   tolerance: number;
@@ -47,7 +50,7 @@ export interface WrittenReport {
 
 /** Computes the report and writes it into `outDir` (also what `fincheck demo` uses). */
 export async function writeReport(request: ReportRequest): Promise<WrittenReport> {
-  const c = loadCase(request.caseFile);
+  const c = request.case;
   const content = await makeReport(c, {
     tolerance: request.tolerance,
     reference: request.reference,
@@ -82,7 +85,7 @@ interface ReportCliOptions {
 export function registerReport(program: Command, io: Io): Command {
   return program
     .command('report')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('write the check as a self-contained HTML report (prints to A4) and a Markdown report with PNG charts')
     .option('--out <dir>', 'folder for report.html, report.md and the PNG charts (created if missing)')
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
@@ -104,7 +107,8 @@ Examples:
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
       const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
-      const written = await writeReport({ caseFile: file, outDir, tolerance, reference, dpi, date });
+      const c = await loadCaseInput(file, io);
+      const written = await writeReport({ case: c, caseFile: file === '-' ? 'stdin' : file, outDir, tolerance, reference, dpi, date });
       if (o.json) {
         const { html, markdown, images, heatmapUnavailable, worstVerdict } = written;
         io.out(`${JSON.stringify({ case: written.case.name, file, date, html, markdown, images, heatmapUnavailable, worstVerdict }, null, 2)}\n`);

@@ -1,5 +1,5 @@
 /** The case layer's public API: reading, units, validation and the built-in materials. */
-export { loadCase, parseCaseObject, parseCaseText, readCaseFile, type ParseOptions } from './parse.js';
+export { loadCase, maxCaseBytes, parseCaseObject, parseCaseText, readCaseFile, readCaseStream, type ParseOptions } from './parse.js';
 export { caseJsonSchema, caseSchema, profileNames, type ValidatedCase } from './schema.js';
 export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './keyPath.js';
 export type { Locate, SourcePosition } from './issues.js';

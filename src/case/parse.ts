@@ -3,13 +3,13 @@
  * Every problem found is collected and thrown together as one InputError (exit code 2); nothing is computed
  * for a case with an error.
  */
-import { readFileSync } from 'node:fs';
 import { basename, extname } from 'node:path';
 import { InputError, type InputIssue } from '../errors.js';
 import { checkCase } from './checks.js';
 import { readDocument } from './document.js';
 import { fromZodIssues, toInputIssues, type Locate } from './issues.js';
 import { toCase } from './normalise.js';
+import { readCaseFile } from './read-input.js';
 import { caseSchema } from './schema.js';
 import type { Case } from './types.js';
 
@@ -61,15 +61,7 @@ export function parseCaseText(text: string, fileName: string): Case {
   return parsed;
 }
 
-/** The text of a case file; a missing or unreadable file is an InputError (exit 2). */
-export function readCaseFile(path: string): string {
-  try {
-    return readFileSync(path, 'utf8');
-  } catch (err) {
-    const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (err as Error).message;
-    throw new InputError([{ path: '(file)', value: JSON.stringify(path), accepted: `a readable case file (${reason})` }]);
-  }
-}
+export { readCaseFile, readCaseStream, maxCaseBytes } from './read-input.js';
 
 /** Reads and parses a case file. A missing or unreadable file is an InputError too. */
 export function loadCase(path: string): Case {

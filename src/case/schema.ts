@@ -8,13 +8,19 @@
  */
 import { z } from 'zod';
 import {
-  aboveAbsoluteZero,
+  coefficientRange,
+  conductivityRange,
+  contactResistanceRange,
+  exponentRange,
+  finPosition,
+  finSize,
+  finSizeOrZero,
   fraction,
   mapping,
-  nonNegative,
   pairs,
-  positive,
+  positiveCoefficient,
   quantity,
+  temperatureRange,
   word,
   type Range,
 } from './fields.js';
@@ -23,7 +29,7 @@ import { findMaterial, materialNames, similarMaterialNames } from './materials.j
 
 // ---- fin -------------------------------------------------------------------------------------------------
 
-const finLength = (description: string, whenMissing: string, range: Range = positive) =>
+const finLength = (description: string, whenMissing: string, range: Range = finSize) =>
   quantity('length', { range, description: `${description}, m`, whenMissing });
 
 const edges = word(
@@ -64,7 +70,7 @@ const trapezoidal = mapping(
     profile: z.literal('trapezoidal'),
     length: finLength('Length from the base (x = 0) to the tip', trapezoidalNeeds),
     baseThickness: finLength('Thickness at the base', trapezoidalNeeds),
-    tipThickness: finLength('Thickness at the tip, at most baseThickness (0 makes a triangle)', trapezoidalNeeds, nonNegative),
+    tipThickness: finLength('Thickness at the tip, at most baseThickness (0 makes a triangle)', trapezoidalNeeds, finSizeOrZero),
     width: finLength('Width along the base', trapezoidalNeeds),
     edges: edges.optional(),
   },
@@ -94,7 +100,7 @@ const conicalPin = mapping(
     profile: z.literal('conical-pin'),
     length: finLength('Length from the base (x = 0) to the tip', conicalNeeds),
     baseDiameter: finLength('Diameter at the base', conicalNeeds),
-    tipDiameter: finLength('Diameter at the tip, at most baseDiameter (0 makes a sharp cone)', conicalNeeds, nonNegative),
+    tipDiameter: finLength('Diameter at the tip, at most baseDiameter (0 makes a sharp cone)', conicalNeeds, finSizeOrZero),
   },
   'a conical-pin fin',
   'Spine whose diameter tapers linearly from base to tip',
@@ -118,8 +124,8 @@ const tabulated = mapping(
     profile: z.literal('tabulated'),
     shape: word(['straight', 'pin'], 'Whether the points give the thickness of a straight fin or the diameter of a pin'),
     points: pairs(
-      quantity('length', { range: nonNegative, description: 'Position x from the base, m', whenMissing: tabulatedNeeds }),
-      quantity('length', { range: nonNegative, description: 'Thickness (straight) or diameter (pin) at x, m' }),
+      quantity('length', { range: finPosition, description: 'Position x from the base, m', whenMissing: tabulatedNeeds }),
+      quantity('length', { range: finSizeOrZero, description: 'Thickness (straight) or diameter (pin) at x, m' }),
       '[x, thickness or diameter]',
       2,
       'The profile, linear between points: x strictly increasing from 0 at the base; the size at the base > 0, ' +
@@ -172,7 +178,7 @@ const finSchema = z
 
 // ---- material --------------------------------------------------------------------------------------------
 
-const conductivity = (description: string) => quantity('conductivity', { range: positive, description });
+const conductivity = (description: string) => quantity('conductivity', { range: conductivityRange, description });
 
 const materialName = z
   .string()
@@ -194,7 +200,7 @@ const materialName = z
 const conductivityTable = mapping(
   {
     points: pairs(
-      quantity('temperature', { range: aboveAbsoluteZero, description: 'Temperature, degC' }),
+      quantity('temperature', { range: temperatureRange, description: 'Temperature, degC' }),
       conductivity('Thermal conductivity at that temperature, W/(m*K)'),
       '[temperature, conductivity]',
       2,
@@ -225,7 +231,7 @@ const materialSchema = z
 
 // ---- convection ------------------------------------------------------------------------------------------
 
-const coefficient = (description: string, range: Range = nonNegative) =>
+const coefficient = (description: string, range: Range = coefficientRange) =>
   quantity('heatTransferCoefficient', { range, description: `${description}, W/(m^2*K)` });
 
 const hLinear = mapping(
@@ -237,7 +243,7 @@ const hLinear = mapping(
 const hPoints = mapping(
   {
     points: pairs(
-      quantity('length', { range: nonNegative, description: 'Position x from the base, m' }),
+      quantity('length', { range: finPosition, description: 'Position x from the base, m' }),
       coefficient('h at x'),
       '[x, h]',
       2,
@@ -251,11 +257,11 @@ const hPoints = mapping(
 const hPower = mapping(
   {
     law: z.literal('power').describe('h = base * (theta / theta_base)^exponent, theta = T - ambient'),
-    base: coefficient('h at the base temperature', positive),
+    base: coefficient('h at the base temperature', positiveCoefficient),
     exponent: quantity('dimensionless', {
-      range: { test: (v) => v > -1, text: '> -1' },
+      range: exponentRange,
       description: 'Exponent of the excess temperature: 1/4 laminar natural convection, 1/3 turbulent, about 2 ' +
-        'nucleate boiling; > -1 so that the heat flux h * theta vanishes with theta',
+        'nucleate boiling; > -1 so that the heat flux h * theta vanishes with theta, at most 5',
     }),
   },
   'a power-law h',
@@ -276,7 +282,7 @@ const tipSchema = z
       word(['adiabatic', 'convective', 'infinite'], 'adiabatic: no heat leaves the tip; convective: the local face h; infinite: a fin so long the tip is at ambient (uniform profiles only)'),
       mapping({ convective: coefficient('The tip face\u2019s own coefficient') }, 'a convective tip', 'Tip with its own h'),
       mapping(
-        { temperature: quantity('temperature', { range: aboveAbsoluteZero, description: 'Tip temperature, degC' }) },
+        { temperature: quantity('temperature', { range: temperatureRange, description: 'Tip temperature, degC' }) },
         'a tip at a set temperature',
         'Tip held at a temperature',
       ),
@@ -287,12 +293,12 @@ const tipSchema = z
 
 const convectionSchema = mapping(
   {
-    ambient: quantity('temperature', { range: aboveAbsoluteZero, description: 'Temperature of the surrounding fluid, degC' }),
+    ambient: quantity('temperature', { range: temperatureRange, description: 'Temperature of the surrounding fluid, degC' }),
     h: hSchema,
     tip: tipSchema.optional(),
     emissivity: quantity('dimensionless', { range: fraction, description: 'Grey-body emissivity of the faces (default 0: no radiation)' }).optional(),
     surroundings: quantity('temperature', {
-      range: aboveAbsoluteZero,
+      range: temperatureRange,
       description: 'Temperature of the radiating surroundings, degC (default: ambient)',
     }).optional(),
   },
@@ -305,12 +311,12 @@ const convectionSchema = mapping(
 const baseSchema = mapping(
   {
     temperature: quantity('temperature', {
-      range: aboveAbsoluteZero,
+      range: temperatureRange,
       description: 'Temperature of the wall the fin stands on, degC',
       whenMissing: 'the base temperature is required',
     }),
     contactResistance: quantity('contactResistance', {
-      range: nonNegative,
+      range: contactResistanceRange,
       description: 'Contact resistance between wall and fin per unit of base area, m^2*K/W (default 0)',
     }).optional(),
   },

@@ -20,6 +20,7 @@ import {
   type KeyPath,
   type QuantityKind,
 } from '../case/index.js';
+import { rangeText } from '../case/fields.js';
 import { UsageError } from '../errors.js';
 import { axisKeyInfo, mappableKeyExamples, type AxisKeyInfo } from './axis-keys.js';
 import { axisValues } from './spacing.js';
@@ -128,7 +129,7 @@ export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAx
     const si = parseQuantity(rawAxisValue(substitution, end), info.kind);
     if (!si.ok) throw new UsageError(`${option}: ${key}: ${si.problem}`);
     if (!info.range.test(si.value)) {
-      throw new UsageError(`${option}: ${key} = ${end}${unit ? ` ${unit}` : ''} is outside its range: ${kindName} ${info.range.text}`);
+      throw new UsageError(`${option}: ${key} = ${end}${unit ? ` ${unit}` : ''} is outside its range: ${kindName} ${rangeText(info.range)}`);
     }
   }
   if (request.log && !(lo > 0)) {
