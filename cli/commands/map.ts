@@ -28,7 +28,7 @@ const stepsOption = z
     const nx = m ? Number(m[1]) : Number.NaN;
     const ny = m ? Number(m[2] ?? m[1]) : Number.NaN;
     if (!(nx >= 2 && ny >= 2 && nx <= 1000 && ny <= 1000)) {
-      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, each from 2 to 1000' });
+      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, or N for N x N, each from 2 to 1000' });
       return z.NEVER;
     }
     return [nx, ny];
@@ -70,7 +70,7 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
     .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point)')
     .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm')
     .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. "convection.h=10:1000 W/(m^2*K)"')
-    .option('--steps <NXxNY>', 'grid points along x and y', '41x41')
+    .option('--steps <NXxNY>', 'grid points along x and y: NXxNY, or N for N x N (9 is 9x9)', '41x41')
     .option('--log-x', 'space the x values geometrically and draw a log axis')
     .option('--log-y', 'space the y values geometrically and draw a log axis')
     .option('--models <ids>', `models to map, comma-separated (${modelIds.join(', ')}); default every shortcut that applies, and fd-1d beside a 2-D reference`)
@@ -116,6 +116,7 @@ Examples:
         reference,
         ...(models ? { models } : {}),
       });
+      printWarnings(prepared.warnings, io);
 
       // Default: all cores for 2-D references; in this process for a 1-D reference, whose points take
       // about a millisecond each, so that starting and warming up workers (module load, JIT) costs more

@@ -106,13 +106,16 @@ export interface QuantityOptions {
   description: string;
   /** Added to the message when the key is missing, e.g. "a rectangular fin needs length, thickness and width". */
   whenMissing?: string;
+  /** The unit of a bare number when it is not the SI one (lengths, from the case's `units: { length: mm }`). */
+  bareUnit?: string;
 }
 
 /**
  * A quantity key: a bare number (SI, temperatures degC) or a string with a unit; the output is the SI number.
  */
 export function quantity(kind: QuantityKind, options: QuantityOptions) {
-  const accepted = describeQuantity(kind, options.range.text) + (options.range.limit ? `, ${options.range.limit}` : '');
+  const bareUnit = options.bareUnit ?? quantityKinds[kind].bareUnit;
+  const accepted = describeQuantity(kind, options.range.text, bareUnit) + (options.range.limit ? `, ${options.range.limit}` : '');
   return z
     .unknown()
     .transform((given, ctx) => {
@@ -124,13 +127,13 @@ export function quantity(kind: QuantityKind, options: QuantityOptions) {
         ctx.issues.push({ code: 'custom', input: given, message: accepted });
         return z.NEVER;
       }
-      const result = parseQuantity(given, kind);
+      const result = parseQuantity(typeof given === 'number' && Number.isFinite(given) && options.bareUnit ? `${given} ${options.bareUnit}` : given, kind);
       if (!result.ok) {
         ctx.issues.push({ code: 'custom', input: given, message: `${accepted} (${result.problem})`, continue: true });
         return z.NEVER;
       }
       if (!options.range.test(result.value)) {
-        const si = kind === 'dimensionless' || typeof given === 'number' ? '' : ` (that is ${formatSI(result.value, kind)})`;
+        const si = kind === 'dimensionless' || (typeof given === 'number' && !options.bareUnit) ? '' : ` (that is ${formatSI(result.value, kind)})`;
         ctx.issues.push({ code: 'custom', input: given, message: `${accepted}${si}`, continue: true });
         return z.NEVER;
       }

@@ -10,7 +10,11 @@ import { readDocument } from './document.js';
 import { fromZodIssues, toInputIssues, type Locate } from './issues.js';
 import { toCase } from './normalise.js';
 import { readCaseFile } from './read-input.js';
-import { caseSchema } from './schema.js';
+import { caseName } from './case-name.js';
+import { getByKeyPath } from './keyPath.js';
+import { dimensionWarnings } from './plausibility.js';
+import { caseSchemaFor } from './schema.js';
+import { isLengthUnit, type LengthUnit } from './units.js';
 import type { Case } from './types.js';
 
 export interface ParseOptions {
@@ -26,12 +30,29 @@ export interface ParseOptions {
  * Throws InputError listing every issue.
  */
 export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
-  const result = caseSchema.safeParse(raw);
+  const lengthUnit = bareLengthUnit(raw);
+  const result = caseSchemaFor(lengthUnit).safeParse(raw);
   const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
   if (pending.length > 0 || !result.success) {
     throw new InputError(sortByPosition(toInputIssues(pending, raw, locate)), options.file);
   }
-  return toCase(result.data, options.defaultName ?? 'unnamed case');
+  const defaultName = options.defaultName ?? 'unnamed case';
+  const c = toCase(result.data, defaultName);
+  const nameWarning = caseName(result.data.name, defaultName).warning;
+  const warnings = [
+    ...(nameWarning ? [nameWarning] : []),
+    ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined),
+  ];
+  return { ...c, warnings };
+}
+
+/**
+ * The unit of bare lengths chosen by the case (`units: { length: mm }`), else m. An invalid `units` is reported
+ * by the schema (which then reads bare lengths in m).
+ */
+export function bareLengthUnit(raw: unknown): LengthUnit {
+  const unit = getByKeyPath(raw, ['units', 'length']);
+  return isLengthUnit(unit) ? unit : 'm';
 }
 
 /** Parses case text, YAML or JSON (by the file name's extension, else by content). Throws InputError. */

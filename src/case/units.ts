@@ -58,12 +58,20 @@ export const quantityKinds: Record<QuantityKind, KindInfo> = {
 };
 
 /** "a length such as "2 mm", "0.125 in" or a bare number in m" (the range, if any, is added by the caller). */
-export function describeQuantity(kind: QuantityKind, range = ''): string {
+export function describeQuantity(kind: QuantityKind, range = '', bareUnit = quantityKinds[kind].bareUnit): string {
   const info = quantityKinds[kind];
   const noun = range ? `${info.noun} ${range}` : info.noun;
   if (kind === 'dimensionless') return `${noun} such as ${info.examples.join(' or ')}`;
   const examples = info.examples.map((e) => `"${e}"`).join(', ');
-  return `${noun} such as ${examples} or a bare number in ${info.bareUnit}`;
+  return `${noun} such as ${examples} or a bare number in ${bareUnit}`;
+}
+
+/** Units a case may choose for its bare lengths (`units: { length: mm }`); m is the default. */
+export const lengthUnits = ['m', 'cm', 'mm', 'um', 'in'] as const;
+export type LengthUnit = (typeof lengthUnits)[number];
+
+export function isLengthUnit(value: unknown): value is LengthUnit {
+  return typeof value === 'string' && (lengthUnits as readonly string[]).includes(value);
 }
 
 /**

@@ -42,6 +42,7 @@ export function mapJson(run: MapRun) {
       models: summary.models.map((m) => ({ ...m, minDrift: finiteOrNull(m.minDrift), maxDrift: finiteOrNull(m.maxDrift) })),
     },
     cautions: [...CAUTIONS],
+    warnings: run.warnings,
     points: run.points.map(pointJson),
   };
 }
