@@ -121,7 +121,7 @@ export function toInputIssues(pending: readonly PendingIssue[], raw: unknown, lo
     const issue: InputIssue = {
       path: formatKeyPath(path) || '(top level)',
       value: displayValue(raw, path, position),
-      accepted,
+      accepted: escapeControl(accepted),
     };
     if (position) {
       issue.line = position.line;

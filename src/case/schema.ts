@@ -339,6 +339,10 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
         .union([z.string(), z.number().transform(String)], { error: () => 'free text' })
         .optional()
         .describe('Free text shown in every output (default: the file name without extension)'),
+      fin: finSchema,
+      material: materialSchema,
+      convection: convectionSchema,
+      base: baseSchema,
       units: mapping(
         {
           length: word(
@@ -349,10 +353,6 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
         'units',
         'Units of bare numbers in this case; default SI (m)',
       ).optional(),
-      fin: finSchema,
-      material: materialSchema,
-      convection: convectionSchema,
-      base: baseSchema,
     },
     'a case',
     'A fincheck case (format 1): one fin and its surroundings. A bare number is SI (m, W/(m*K), W/(m^2*K), ' +
