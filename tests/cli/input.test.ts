@@ -186,3 +186,15 @@ describe('help and map options', () => {
     expect(r.stderr).toContain('EACCES');
   });
 });
+
+describe('material sources in design-note outputs', () => {
+  it('check shows the table or "typical; confirm with the supplier\'s data sheet", never "from memory"', async () => {
+    const alloy = await cliWithStdin(plateText.replace('material: { k: 180 }', 'material: aluminium-6063'), 'check', '-', '--reference', '1d');
+    expect(alloy.stdout).toContain("aluminium-6063, k = 209 W/(m*K) (typical of aluminium 6063-T5");
+    expect(alloy.stdout).toContain("confirm with the supplier's data sheet");
+    const pure = await cliWithStdin(plateText.replace('material: { k: 180 }', 'material: copper-pure'), 'check', '-', '--reference', '1d');
+    expect(pure.stdout).toMatch(/copper-pure, k = 401 W\/\(m\*K\) \(Incropera, DeWitt, Bergman & Lavine 2007, .*Table A\.1, 300 K\)/);
+    const list = await cli('materials');
+    for (const r of [alloy, pure, list]) expect(r.stdout).not.toMatch(/from memory|\(checked/);
+  });
+});
