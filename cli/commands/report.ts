@@ -8,6 +8,7 @@ import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import type { Case } from '../../src/case/types.js';
 import type { CheckReport } from '../../src/compare/types.js';
+import { cleanFreeText } from '../../src/case/clip-text.js';
 import { UsageError } from '../../src/errors.js';
 import { makeReport, REPORT_FILES } from '../../src/report/make-report.js';
 import { reportDate } from '../../src/report/report-date.js';
@@ -108,7 +109,7 @@ Examples:
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
       const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
       const c = await loadCaseInput(file, io);
-      const written = await writeReport({ case: c, caseFile: file === '-' ? 'stdin' : file, outDir, tolerance, reference, dpi, date });
+      const written = await writeReport({ case: c, caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text, outDir, tolerance, reference, dpi, date });
       if (o.json) {
         const { html, markdown, images, heatmapUnavailable, worstVerdict } = written;
         io.out(`${JSON.stringify({ case: written.case.name, file, date, html, markdown, images, heatmapUnavailable, worstVerdict }, null, 2)}\n`);
