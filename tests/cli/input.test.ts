@@ -148,6 +148,13 @@ describe('error lines', () => {
     }
   });
 
+  it('an option value is echoed clipped: a 5000-character --tolerance gives one short line', async () => {
+    const r = await cli('check', plate, '--tolerance', 'x'.repeat(5000));
+    expect(r.code).toBe(2);
+    expect(r.stderr.length).toBeLessThan(400);
+    expect(r.stderr).toContain('(5,000 characters in all)');
+  });
+
   it('control characters of the name never reach the output', async () => {
     const r = await cliWithStdin(plateText.replace('name: stdin plate', 'name: "bell\\a \\e[2J clear"'), 'solve', '-', '--nodes', '20');
     expect(r.code).toBe(0);
