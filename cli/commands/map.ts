@@ -28,7 +28,7 @@ const stepsOption = z
     const nx = m ? Number(m[1]) : Number.NaN;
     const ny = m ? Number(m[2] ?? m[1]) : Number.NaN;
     if (!(nx >= 2 && ny >= 2 && nx <= 1000 && ny <= 1000)) {
-      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, or N for N x N, each from 2 to 1000' });
+      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, each from 2 to 1000 (or N for N x N)' });
       return z.NEVER;
     }
     return [nx, ny];
