@@ -45,15 +45,28 @@ function reportError(e: unknown, io: Io, command: string): number {
     return 2;
   }
   if (e instanceof InputError || e instanceof UsageError) {
-    io.err(`fincheck: ${e.message}\n`);
+    io.err(errorLines(e.message));
     return 2;
   }
   if (e instanceof SolverError) {
     const advice = e.remedy === undefined ? '' : `; ${remedyAdvice(e.remedy, command)}`;
-    io.err(`fincheck: solver failure: ${e.message}${advice}\n`);
+    io.err(errorLines(`solver failure: ${e.message}${advice}`));
     return 3;
   }
   const msg = e instanceof Error ? (e.stack ?? e.message) : String(e);
-  io.err(`fincheck: internal error (please report): ${msg}\n`);
+  io.err(errorLines(`internal error (please report): ${msg}`));
   return 70;
+}
+
+/** Most lines of one error shown (a case can have thousands of issues; the first ones say what to fix). */
+const maxErrorLines = 60;
+/** Longest error line shown, characters (echoed values are clipped where they are made; this is the backstop). */
+const maxLineChars = 2000;
+
+/** Every line starts with "fincheck: "; the message is bounded in lines and in line length. */
+function errorLines(message: string): string {
+  const lines = message.split('\n');
+  const shown = lines.slice(0, maxErrorLines).map((line) => (line.length > maxLineChars ? `${line.slice(0, maxLineChars)}...` : line));
+  if (lines.length > maxErrorLines) shown.push(`... and ${(lines.length - maxErrorLines).toLocaleString('en-US')} more lines`);
+  return shown.map((line) => `fincheck: ${line}\n`).join('');
 }

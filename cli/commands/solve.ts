@@ -1,8 +1,8 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/parse.js';
 import { pointPosition, runSolve, type SolveReport } from '../../src/compare/solve.js';
 import { describeCase } from '../../src/compare/describe-case.js';
+import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
 import { runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/solve2d.js';
@@ -13,7 +13,7 @@ import { sectionOf } from '../../src/mesh/grid2dSection.js';
 export function registerSolve(program: Command, io: Io): Command {
   return program
     .command('solve')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('solve the fin with finite volumes; by default a refinement study gives the discretisation error')
     .option('--model <m>', '1d (finite volumes along the fin) or 2d (across the thickness too)', '1d')
     .option('--nodes <n>', '1-D: solve once on exactly n nodes (no refinement study, discretisation error null)')
@@ -29,24 +29,25 @@ Examples:
   fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d --grid 400x40 --json
   fincheck solve demo/enclosure-fin-natural-convection.yaml --model 2d   # nonlinear: Newton on each grid`,
     )
-    .action((file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean }) => {
+    .action(async (file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean }) => {
       const model = parseOption('--model', modelOption, o.model, '1d or 2d');
       const nodes = o.nodes === undefined ? undefined : parseOption('--nodes', nodesOption, o.nodes, 'a whole number of nodes from 3 to 10000000');
       const grid = o.grid === undefined ? undefined : parseOption('--grid', gridOption, o.grid, 'NXxNY with whole numbers from 2 to 20000, e.g. 400x40');
       if (model === '1d' && grid !== undefined) throw new UsageError('--grid goes with --model 2d; use --nodes N for the 1-D model');
       if (model === '2d' && nodes !== undefined) throw new UsageError('--nodes goes with --model 1d; use --grid NXxNY for the 2-D model');
-      const c = loadCase(file);
+      const c = await loadCaseInput(file, io);
+      const warnings = c.warnings ?? [];
       const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);
       if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
         const unsupported = solve2dUnsupported(c);
         if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
         const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
-        io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
+        io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;
       }
       const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
-      io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve(report, describeCase(c)));
+      io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
 }
 
