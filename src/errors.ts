@@ -32,9 +32,21 @@ export class UsageError extends Error {
   override name = 'UsageError';
 }
 
+/**
+ * What the user can change after a solver failure, in the problem's words; the CLI turns it into the
+ * option of the command that ran ('another-2d-grid': the 2-D system of this grid could not be solved).
+ */
+export type SolverRemedy = 'another-2d-grid';
+
 export class SolverError extends Error {
   readonly exitCode = 3;
   override name = 'SolverError';
+  constructor(
+    message: string,
+    readonly remedy?: SolverRemedy,
+  ) {
+    super(message);
+  }
 }
 
 export function formatIssues(issues: InputIssue[], file?: string): string {

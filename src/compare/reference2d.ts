@@ -75,14 +75,9 @@ export function reference2DWith<C extends Case>(
     if (!required && e instanceof UsageError) return null;
     throw e;
   }
-  const ref1d = oneD.result;
-  const cooledEdges = ref1d.mesh.baseArea > 0 && c.fin.edges === 'cooled' && isStraight(c);
-  const insulated1d = cooledEdges ? models.heatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }, ref1d.mesh.nodes) : ref1d.heatRate;
-  // The edges' own heat, added (not a ratio applied to the 2-D heat: on a stubby tapered fin the thin-fin
-  // faces are a small part of the true sloped faces, and the ratio Q_1D,cooled / Q_1D,insulated (+40 % for
-  // a 2 mm long, 40 mm thick triangle) multiplied the much larger 2-D face heat by it).
-  const edgeHeat = ref1d.heatRate - insulated1d;
-  const heatRate = study.heatRate_W + edgeHeat;
+  const edges = sideEdgeCorrection(c, oneD, models.heatRate1D);
+  const { cooledEdges, insulatedHeatRate1D_W: insulated1d } = edges;
+  const heatRate = study.heatRate_W + edges.edgeHeatRate_W;
   const edgeFactor = heatRate / study.heatRate_W;
   const finest = study.finest;
   const grids = study.grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
@@ -97,7 +92,7 @@ export function reference2DWith<C extends Case>(
     heatRate_W: heatRate,
     effectiveness: heatRate / effectivenessScale,
     // The edge factor's own error is fd-1d's (GCI ~1e-8), added to the 2-D GCI.
-    discretizationError: study.discretizationError + (cooledEdges ? oneD.study.gci : 0),
+    discretizationError: study.discretizationError + edges.discretizationError,
     energyBalance: study.energyBalance,
     observedOrder: order,
     grid: { nx: finest.grid.nodesX, ny: finest.grid.nodesY },
@@ -113,7 +108,35 @@ export function reference2DWith<C extends Case>(
   return { reference, study, oneDRow, idealHeatRate: ideal2D };
 }
 
-function isStraight(c: Case): boolean {
+/**
+ * The side edges of a straight fin, which fd-2d (a section times the width) sees insulated: when the case
+ * cools them, fd-1d measures their own heat on one grid, Q_1D(cooled) - Q_1D(insulated), and the whole-fin
+ * 2-D heat rate is the section's plus that heat (0 otherwise). Added, not applied as the ratio
+ * Q_1D(cooled) / Q_1D(insulated): on a stubby tapered fin the thin-fin faces are a small part of the true
+ * sloped faces, and the ratio (+40 % for a 2 mm long, 40 mm thick triangle) would scale the much larger
+ * 2-D face heat. Used by check's reference and by `solve` with the 2-D model, so both print the same
+ * whole-fin heat rate.
+ */
+export interface SideEdgeCorrection {
+  /** A straight fin whose side edges the case cools. */
+  cooledEdges: boolean;
+  /** Q_1D(cooled) - Q_1D(insulated), W (0 when the edges are insulated or the fin is not straight). */
+  edgeHeatRate_W: number;
+  /** fd-1d heat rate with the edges insulated (the fd-1d heat rate itself when not cooledEdges), W. */
+  insulatedHeatRate1D_W: number;
+  /** Error the edges' heat adds: fd-1d's GCI when cooledEdges, else 0. */
+  discretizationError: number;
+}
+
+export function sideEdgeCorrection<C extends Case>(c: C, oneD: Fin1DStudy, heatRate1D: (variant: C, nodes: number) => number): SideEdgeCorrection {
+  const ref1d = oneD.result;
+  const cooledEdges = ref1d.mesh.baseArea > 0 && c.fin.edges === 'cooled' && isStraight(c);
+  const insulated = cooledEdges ? heatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }, ref1d.mesh.nodes) : ref1d.heatRate;
+  return { cooledEdges, edgeHeatRate_W: ref1d.heatRate - insulated, insulatedHeatRate1D_W: insulated, discretizationError: cooledEdges ? oneD.study.gci : 0 };
+}
+
+/** Whether the fin is straight (has side edges): not a pin, conical pin, annular fin or tabulated pin. */
+export function isStraight(c: Case): boolean {
   const p = c.fin.profile;
   return p.kind !== 'pin' && p.kind !== 'conical-pin' && p.kind !== 'annular' && !(p.kind === 'tabulated' && p.shape === 'pin');
 }

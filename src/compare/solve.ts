@@ -9,9 +9,20 @@ import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/fin1d.js';
 import { isLinearFinCase } from '../fd/linear-case.js';
 import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
 
-export interface ProfilePoint {
-  x_m: number;
-  T_degC: number;
+/**
+ * One point of a temperature profile: x_m, the distance along the fin from the base (m), or for annular
+ * (radial) fins r_m, the radius (m, from the inner radius r1 at the base to the outer radius r2).
+ */
+export type ProfilePoint = { x_m: number; T_degC: number } | { r_m: number; T_degC: number };
+
+/** Annular fins are described by the radius: profiles give r_m from r1 to r2 instead of x_m. */
+export function isRadial(c: Case): boolean {
+  return c.fin.profile.kind === 'annular';
+}
+
+/** The position of a point: x_m or r_m (m). */
+export function pointPosition(p: ProfilePoint): number {
+  return 'r_m' in p ? p.r_m : p.x_m;
 }
 
 export interface SolveReport {
@@ -50,9 +61,16 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;
+  // Annular fins: the 1-D mesh measures from the base, so the radius is r1 + x.
+  const r1 = c.fin.profile.kind === 'annular' ? c.fin.profile.innerRadius : 0;
+  const point = (i: number): ProfilePoint => {
+    const T_degC = (result.theta[i] as number) + ambient;
+    const x = result.mesh.x[i] as number;
+    return isRadial(c) ? { r_m: r1 + x, T_degC } : { x_m: x, T_degC };
+  };
   const profile: ProfilePoint[] = [];
-  for (let i = 0; i < n; i += stride) profile.push({ x_m: result.mesh.x[i] as number, T_degC: (result.theta[i] as number) + ambient });
-  if ((n - 1) % stride !== 0) profile.push({ x_m: result.mesh.x[n - 1] as number, T_degC: (result.theta[n - 1] as number) + ambient });
+  for (let i = 0; i < n; i += stride) profile.push(point(i));
+  if ((n - 1) % stride !== 0) profile.push(point(n - 1));
   return {
     result,
     report: {

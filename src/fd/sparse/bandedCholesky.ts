@@ -133,7 +133,8 @@ function finishRow(a: Stencil9, band: Float64Array, invDiag: Float64Array, w: nu
   }
   if (!(d > 0)) {
     throw new SolverError(
-      `banded Cholesky: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${p}); check the boundary conditions`,
+      `banded Cholesky: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${p})`,
+      'another-2d-grid',
     );
   }
   const root = Math.sqrt(d);

@@ -108,7 +108,8 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
   if (!(relative <= FAILURE)) {
     throw new SolverError(
       `multigrid-preconditioned CG did not converge: relative residual ${relative.toExponential(2)} after ${iterations} iterations ` +
-        `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid; try another grid (e.g. fewer nodes across) or the direct solver`,
+        `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid`,
+      'another-2d-grid',
     );
   }
   return { x, report };
