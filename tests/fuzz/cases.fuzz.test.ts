@@ -3,6 +3,8 @@
  * in its header what went wrong and which runs showed it (`# argv: ...`); every run must keep the same
  * contract as the random cases (support/judge.ts). A file with `# refusal: KEY` is a bad input: exit 2
  * naming KEY. `# exit: 0` says the case must be solved: a solver failure (exit 3) on it is the bug.
+ * `# known: WHY` marks a counterexample not fixed yet: the test then requires that it still fails (so the
+ * marker is removed, and the case guards the fix, as soon as it is fixed) and skips it when WHY says it hangs.
  */
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -26,8 +28,11 @@ function header(text: string, key: string): string[] {
 describe('fuzz counterexamples (tests/fuzz/cases)', () => {
   it('has cases', () => expect(files.length).toBeGreaterThan(0));
 
-  it.each(files)('%s', async (file) => {
+  const hangs = (file: string) => /hangs/.test(header(readFileSync(join(folder, file), 'utf8'), 'known')[0] ?? '');
+  it.skip.each(files.filter(hangs))('%s (known to hang: skipped)', () => {});
+  it.each(files.filter((f) => !hangs(f)))('%s', async (file) => {
     const text = readFileSync(join(folder, file), 'utf8');
+    const known = header(text, 'known')[0];
     const format = file.endsWith('.json') ? 'json' : 'yaml';
     const refusal = header(text, 'refusal')[0];
     const exit = header(text, 'exit')[0];
@@ -45,6 +50,7 @@ describe('fuzz counterexamples (tests/fuzz/cases)', () => {
       if (exit !== undefined && String(run.code) !== exit) problems.push(`exit ${run.code}, expected ${exit}`);
       if (problems.length > 0) failures.push(`${problems.join('\n')}\n${describeRun(run)}`);
     }
-    expect(failures.join('\n\n')).toBe('');
+    if (known !== undefined) expect(failures.length, `fixed? remove "# known: ${known}" from ${file}`).toBeGreaterThan(0);
+    else expect(failures.join('\n\n')).toBe('');
   }, 300_000);
 });
