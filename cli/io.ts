@@ -6,6 +6,9 @@ export interface Io {
   errIsTTY: boolean;
 }
 
+/** A command reports a non-zero outcome (e.g. exit 1 for --strict) through this; errors are thrown. */
+export type SetExit = (code: number) => void;
+
 export function processIo(): Io {
   return {
     out: (t) => void process.stdout.write(t),

@@ -3,18 +3,10 @@ import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import { readCaseFile } from '../../src/case/parse.js';
-import type { MapModelId } from '../../src/map/types.js';
-import { formatMapSummary } from '../../src/map/format.js';
-import { mapJsonText } from '../../src/map/json.js';
-import { OutputsInterrupted, renderMapFiles } from '../../src/map/outputs.js';
-import { MapInterrupted } from '../../src/map/pool.js';
-import { progressBar } from '../../src/map/progress.js';
-import { prepareMap, runMap } from '../../src/map/run-map.js';
-import { StagedFiles } from '../../src/map/staged-files.js';
-import type { Io } from '../io.js';
+import { readCaseFile } from '../../src/case/index.js';
+import { type MapModelId, formatMapSummary, mapJsonText, OutputsInterrupted, renderMapFiles, MapInterrupted, progressBar, prepareMap, runMap, StagedFiles } from '../../src/map/index.js';
+import type { Io, SetExit } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
-import type { SetExit } from '../program.js';
 
 const modelIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'] as const satisfies readonly MapModelId[];
 

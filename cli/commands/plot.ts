@@ -7,12 +7,11 @@ import { existsSync, statSync } from 'node:fs';
 import { dirname, extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { z } from 'zod';
-import { loadCase } from '../../src/case/parse.js';
+import { loadCase } from '../../src/case/index.js';
 import { UsageError } from '../../src/errors.js';
 import { chartBytes, type ChartFormat } from '../../src/images/index.js';
-import { plotSvg, type PlotSources } from '../../src/plots/draw.js';
-import { checkPlotInput, fieldStudy, PLOT_KINDS, type PlotKind } from '../../src/plots/sources.js';
-import { writeFilesAtomically } from '../../src/report/write-files.js';
+import { plotSvg, type PlotSources, checkPlotInput, fieldStudy, PLOT_KINDS, type PlotKind } from '../../src/plots/index.js';
+import { writeFilesAtomically } from '../../src/report/index.js';
 import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 

@@ -22,3 +22,5 @@ export {
 } from './units.js';
 export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
+export { aboveAbsoluteZero, fraction, nonNegative, positive } from './fields.js';
+export type { Range } from './fields.js';

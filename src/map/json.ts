@@ -6,7 +6,7 @@
  * discretisation error, each shortcut's heat rate and efficiency. `reference` is the case's own point's reference;
  * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
  */
-import { CAUTIONS } from '../compare/cautions.js';
+import { CAUTIONS } from '../compare/index.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapPoint } from './types.js';
 

@@ -8,15 +8,8 @@
  * "unsafe" nodes placed on the plot's edges, so every region closes along the edge of the map and can be filled
  * (even-odd rule for holes). Invalid points and points where the shortcut does not apply count as unsafe.
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
-import { contourLines, getColormap, makeAxis, project, type Axis } from '../images/index.js';
-import { drawAxes, xAxisMargin, yAxisMargin } from '../images/axes.js';
-import { fieldImage } from '../images/field-layer.js';
-import { drawHeader, type Rect } from '../images/layout.js';
-import { drawLegend, legendSize, type LegendEntry } from '../images/legend.js';
-import { dashArray, okabeItoColours, type LineStyle } from '../images/series-styles.js';
-import { el, polylinePathData, svgDocument } from '../images/svg.js';
-import { defaultHeight, defaultWidth, gap, ink } from '../images/theme.js';
+import { CHART_CAUTION } from '../compare/index.js';
+import { contourLines, getColormap, makeAxis, project, type Axis, drawAxes, xAxisMargin, yAxisMargin, fieldImage, drawHeader, type Rect, drawLegend, legendSize, type LegendEntry, dashArray, okabeItoColours, type LineStyle, el, polylinePathData, svgDocument, defaultHeight, defaultWidth, gap, ink } from '../images/index.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';
