@@ -11,11 +11,11 @@ const noFlagNames = [
   'error',
   {
     selector: `Literal[value=${flagPattern}]`,
-    message: 'Only cli/ knows the command-line flags: throw a domain error in the problem\'s words and let cli/ name the flag.',
+    message: "Only cli/ knows the command-line flags: throw a domain error in the problem's words and let cli/ name the flag.",
   },
   {
     selector: `TemplateElement[value.raw=${flagPattern}]`,
-    message: 'Only cli/ knows the command-line flags: throw a domain error in the problem\'s words and let cli/ name the flag.',
+    message: "Only cli/ knows the command-line flags: throw a domain error in the problem's words and let cli/ name the flag.",
   },
 ];
 
@@ -29,10 +29,7 @@ export default tseslint.config(
     rules: {
       'fincheck/no-import-cycle': 'error',
       // A name starting with _ is unused on purpose (a skipped tuple element, a destructured-away key).
-      '@typescript-eslint/no-unused-vars': [
-        'error',
-        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
-      ],
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
     },
   },
   {

@@ -1,18 +1,40 @@
+/**
+ * How much of the tree each candidate prettier setting would change: files that differ and changed lines (lines
+ * of a file that no longer appear in its formatted text). Used to choose .prettierrc.json: the setting that
+ * changes the fewest files is the one closest to the style the code was written in.
+ *
+ *   node scripts/measure-format.mjs '[{"printWidth":120,"singleQuote":true},{"printWidth":155,"singleQuote":true}]'
+ */
 import * as prettier from 'prettier';
 import { readFileSync } from 'node:fs';
 import { execSync } from 'node:child_process';
-const files = execSync("git ls-files '*.ts' '*.mjs' '*.js' '*.json'", { encoding: 'utf8' }).split('\n').filter((f) => f && !f.includes('package-lock'));
+
+const files = execSync("git ls-files '*.ts' '*.js' '*.mjs' '*.json'", { encoding: 'utf8' })
+  .split('\n')
+  .filter((f) => f && f !== 'package-lock.json');
 const texts = files.map((f) => [f, readFileSync(f, 'utf8')]);
-function lineDiff(a, b) { // count lines of a not in b (multiset) as a rough changed-line count
-  const m = new Map(); for (const l of b.split('\n')) m.set(l, (m.get(l) ?? 0) + 1);
-  let d = 0; for (const l of a.split('\n')) { const c = m.get(l); if (c) m.set(l, c - 1); else d++; } return d;
-}
-const combos = JSON.parse(process.argv[2]);
-for (const opts of combos) {
-  let nf = 0, nl = 0;
-  for (const [f, t] of texts) {
-    const out = await prettier.format(t, { ...opts, filepath: f });
-    if (out !== t) { nf++; nl += lineDiff(t, out); }
+
+function changedLines(before, after) {
+  const left = new Map();
+  for (const line of after.split('\n')) left.set(line, (left.get(line) ?? 0) + 1);
+  let changed = 0;
+  for (const line of before.split('\n')) {
+    const n = left.get(line);
+    if (n) left.set(line, n - 1);
+    else changed++;
   }
-  console.log(JSON.stringify(opts), 'files', nf, 'lines', nl);
+  return changed;
+}
+
+for (const options of JSON.parse(process.argv[2] ?? '[{}]')) {
+  let filesChanged = 0;
+  let linesChanged = 0;
+  for (const [file, text] of texts) {
+    const formatted = await prettier.format(text, { ...options, filepath: file });
+    if (formatted !== text) {
+      filesChanged++;
+      linesChanged += changedLines(text, formatted);
+    }
+  }
+  console.log(`${JSON.stringify(options)}: ${filesChanged} of ${files.length} files, ${linesChanged} lines`);
 }

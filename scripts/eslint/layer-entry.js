@@ -28,12 +28,10 @@ export function layerOf(relative) {
 export const layerEntry = {
   meta: {
     type: 'problem',
-    docs: { description: "Import another layer only through its entry (index.ts)." },
+    docs: { description: 'Import another layer only through its entry (index.ts).' },
     schema: [],
     messages: {
-      deep:
-        "'{{specifier}}' reaches into layer {{layer}} around its entry: import it from {{entry}} " +
-        '(export it there if the other layers need it).',
+      deep: "'{{specifier}}' reaches into layer {{layer}} around its entry: import it from {{entry}} " + '(export it there if the other layers need it).',
     },
   },
   create(context) {
