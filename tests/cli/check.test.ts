@@ -90,7 +90,7 @@ describe('fincheck check with the 2-D reference', () => {
   // tip with the face h. Exact 2-D eigen-series (separation of variables for the rectangular fin, cf. Lau &
   // Tan 1973, J. Heat Transfer 95, 549; from memory): eta_2D = 0.648851377 on the area 2L + 2b; exact 1-D
   // convective tip eta = 0.659934986 (Incropera et al., Table 3.4 case A; from memory); values computed with
-  // mpmath in the shared reference scripts (fin2d_series.py).
+  // mpmath in tests/reference/fin2d_series.py.
   const L = 0.001 / Math.sqrt(0.1);
   const plate = caseFile(
     'plate-bi01.yaml',

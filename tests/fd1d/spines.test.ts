@@ -16,8 +16,8 @@ import { fitObservedOrder } from '../../src/fd/refinement.js';
 import { solveFin1D, solveFinProblem1D, studyFin1D, studyFinProblem1D } from '../../src/fd/fin1d.js';
 import type { FinProblem1D } from '../../src/fd/problem1d.js';
 import { taperedGeometry, type TaperExponent } from '../../src/mesh/geometry1d.js';
-import { linearCase } from './support/cases.js';
 import { expectEfficiency } from './support/efficiency-check.js';
+import { linearFinCase } from '../support/fin-case.js';
 
 const L = 0.04;
 const BASE_DIAMETER = 0.006;
@@ -32,7 +32,7 @@ const CONCAVE_SPINE = [0.9931503636, 0.973665961, 0.9083269132, 0.8284271247, 0.
 const CONVEX_SPINE = [0.9863634934, 0.9482677238, 0.828228124, 0.697774658, 0.5864792074, 0.4317613055];
 
 const caseFor = (profile: Profile, mL: number) =>
-  linearCase({ profile, k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 40 });
+  linearFinCase({ edges: 'cooled', profile, k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 40 });
 
 /** A parabolic spine, D = D_b (1 - x/L)^e, as a 1-D problem. */
 function parabolicSpine(exponent: TaperExponent, mL: number): FinProblem1D {

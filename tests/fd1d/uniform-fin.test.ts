@@ -11,7 +11,7 @@ import { describe, expect, test } from 'vitest';
 import type { Profile, TipCondition } from '../../src/case/types.js';
 import { fitObservedOrder } from '../../src/fd/refinement.js';
 import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
-import { AMBIENT_DEGC, linearCase, relative } from './support/cases.js';
+import { AMBIENT_DEGC, linearFinCase, relative } from '../support/fin-case.js';
 
 interface UniformCase {
   id: string;
@@ -96,7 +96,7 @@ const ROWS = CASES.flatMap((c) => (['A', 'B', 'C', 'D'] as const).map((tip) => (
 
 describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; computed reference values, uniform_fin.py)', ({ c, tip }) => {
   const expected = c.rows[tip];
-  const fin = linearCase({ profile: c.profile, edges: c.edges, k: c.k, h: { kind: 'uniform', h: c.h }, tip: tipOf(tip, c.thetaBase), thetaBase: c.thetaBase });
+  const fin = linearFinCase({ profile: c.profile, edges: c.edges, k: c.k, h: { kind: 'uniform', h: c.h }, tip: tipOf(tip, c.thetaBase), thetaBase: c.thetaBase });
   const { result, study } = studyFin1D(fin);
 
   test('heat rate on the default study grids', () => {

@@ -7,11 +7,12 @@
 import { describe, expect, test } from 'vitest';
 import { SolverError } from '../../src/errors.js';
 import { solveNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
-import { AMBIENT_DEGC, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
+import { plateFin } from './support/cases.js';
+import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 
 // Boiling-like law n = 2 on a long plate fin (mL ~ 14): from the whole fin at the base temperature,
 // plain Newton needs 10 steps on this grid.
-const boiling = nonlinearCase({
+const boiling = finCase({
   profile: plateFin.profile(2),
   k: constantK(200),
   h: { kind: 'power', base: 10, exponent: 2 },
@@ -44,7 +45,7 @@ describe('continuation', () => {
 
 describe('solver failure: SolverError saying what to change', () => {
   test('power law, radiation and k(T) at one Newton step per attempt', () => {
-    const c = nonlinearCase({
+    const c = finCase({
       profile: plateFin.profile(0.3),
       k: { kind: 'table', T_degC: Float64Array.from([0, 200]), k: Float64Array.from([210, 170]) },
       h: { kind: 'power', base: 10, exponent: 2 },
@@ -64,7 +65,7 @@ describe('solver failure: SolverError saying what to change', () => {
   test('negative exponent on a fin that reaches the fluid temperature: no silent answer', () => {
     // n = -1/2: the exact solution reaches θ = 0 at mL = sqrt(2 (n + 2)) / (-n) = 3.46 (closed-form
     // infinite-fin profile of Sen & Trinh 1986, from memory), where h = base (θ/θ_b)^n is infinite; this fin is mL = 14 long.
-    const c = nonlinearCase({
+    const c = finCase({
       profile: plateFin.profile(2),
       k: constantK(200),
       h: { kind: 'power', base: 10, exponent: -0.5 },
