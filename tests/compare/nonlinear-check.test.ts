@@ -35,7 +35,7 @@ describe('power-law h, adiabatic tip, mL = 1', () => {
     expect(report.reference.model).toBe('fd-1d');
     // Finest grid error ~1e-8 (GCI); 1e-6 is the acceptance level of the nonlinear issue.
     expect(Math.abs(report.reference.heatRate_W / (Q * M) - 1)).toBeLessThan(1e-6);
-    // h at the base temperature is h_b: the shortcut is the linear fin, q = M tanh(mL) (Incropera Table 3.4 case B).
+    // h at the base temperature is h_b: the shortcut is the linear fin, q = M tanh(mL) (Incropera et al. 2007, Table 3.4 case B).
     const base = report.models.find((x) => x.model === 'tanh-L' && x.guess === 'base')!;
     expect(base.heatRate_W / (Math.tanh(1) * M)).toBeCloseTo(1, 10);
     expect(base.drift).toBeCloseTo(Math.tanh(1) / Q - 1, 6);
@@ -73,7 +73,7 @@ describe('radiation and tabulated conductivity', () => {
       base: { temperature: 70 },
     });
     const { report } = await runCheck(flat, { tolerance: 0.02, reference: '1d' });
-    // Uniform fin, adiabatic tip: q = M tanh(mL) (Incropera et al., Table 3.4 case B; from memory).
+    // Uniform fin, adiabatic tip: q = M tanh(mL) (Incropera et al. 2007, Table 3.4 case B; from memory).
     expect(Math.abs(report.reference.heatRate_W / (M * Math.tanh(1)) - 1)).toBeLessThan(1e-6);
     expect(report.assumptions.find((a) => a.assumption.startsWith('constant k'))!.drift).toBeCloseTo(0, 12);
   });

@@ -6,7 +6,7 @@
  * 1e-15) of these closed forms:
  * - adiabatic tip at r2c, η = 2r1/(m(r2c^2 - r1^2)) [K1(mr1)I1(mr2c) - I1(mr1)K1(mr2c)] /
  *   [I0(mr1)K1(mr2c) + K0(mr1)I1(mr2c)]: Gardner, K. A., 1945, Trans. ASME 67, 621-631 [from memory];
- *   Incropera et al., Table 3.5 [from memory]; Shabany, Heat Transfer: Thermal Management of
+ *   Incropera et al. 2007, Table 3.5 [from memory]; Shabany, Heat Transfer: Thermal Management of
  *   Electronics, CRC 2009, eq. 7.53 (with r2c = r2 + t/2);
  * - convective tip on the rim (−k θ'(r2) = h θ(r2)): the exact I0/K0 solution derived in profiles.py
  *   (`annular_convtip`; same Bessel form as Gardner 1945), η referred to 2π(r2^2 - r1^2) + 2π r2 t.

@@ -7,7 +7,7 @@
  *   1/(M tanh mL) for the adiabatic tip, contact resistance R''/A_b: Incropera et al., Fundamentals of
  *   Heat and Mass Transfer, §3.1.4 and §3.6.4 [from memory for the sections]):
  *   q = θ_b / (R''/A_b + 1/(M tanh mL));
- * - convective tip with coefficient h_tip: Incropera et al., Table 3.4 case A [from memory for the
+ * - convective tip with coefficient h_tip: Incropera et al. 2007, Table 3.4 case A [from memory for the
  *   table number], with β = h_tip/(mk): q = M θ_b (sinh mL + β cosh mL)/(cosh mL + β sinh mL).
  */
 import { describe, expect, test } from 'vitest';

@@ -4,8 +4,8 @@
  *
  * Values: computed reference values (mpmath script profiles.py, checked against an independent
  * finite-volume solution) of these closed forms: cylinder tanh(mL)/(mL) and cone
- * 2 I2(2mL)/(mL I1(2mL)) (Incropera et al., Fundamentals of Heat and Mass Transfer, Table 3.5 [from
- * memory]); concave parabolic spine 2/(sqrt(1 + (4/9)(mL)^2) + 1) (Incropera Table 3.5 [from memory]);
+ * 2 I2(2mL)/(mL I1(2mL)) (Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer (6th ed.), Table 3.5 [from
+ * memory]); concave parabolic spine 2/(sqrt(1 + (4/9)(mL)^2) + 1) (Incropera et al. 2007, Table 3.5 [from memory]);
  * convex parabolic spine 3 I1(4mL/3)/(2 mL I0(4mL/3)) (Kraus, Aziz & Welty 2001, Extended Surface Heat
  * Transfer [from memory]); truncated cone: closed form with I1, I2, K1, K2 derived in profiles.py.
  * The parabolic spines are not profiles of the case format; they are built with taperedGeometry.
@@ -48,16 +48,16 @@ function parabolicSpine(exponent: TaperExponent, mL: number): FinProblem1D {
 
 const rows = (etas: number[]) => M_L.map((mL, j) => ({ mL, eta: etas[j] as number }));
 
-describe.each(rows(CYLINDER))('cylinder, mL = $mL (Incropera Table 3.5: tanh(mL)/(mL); profiles.py)', ({ mL, eta }) => {
+describe.each(rows(CYLINDER))('cylinder, mL = $mL (Incropera et al. 2007, Table 3.5: tanh(mL)/(mL); profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFin1D(caseFor({ kind: 'pin', length: L, diameter: BASE_DIAMETER }, mL)), eta));
 });
 
-describe.each(rows(CONE))('cone, mL = $mL (Incropera Table 3.5: 2 I2(2mL)/(mL I1(2mL)); profiles.py)', ({ mL, eta }) => {
+describe.each(rows(CONE))('cone, mL = $mL (Incropera et al. 2007, Table 3.5: 2 I2(2mL)/(mL I1(2mL)); profiles.py)', ({ mL, eta }) => {
   test('efficiency', () =>
     expectEfficiency(studyFin1D(caseFor({ kind: 'conical-pin', length: L, baseDiameter: BASE_DIAMETER, tipDiameter: 0 }, mL)), eta));
 });
 
-describe.each(rows(CONCAVE_SPINE))('concave parabolic spine, mL = $mL (Incropera Table 3.5; profiles.py)', ({ mL, eta }) => {
+describe.each(rows(CONCAVE_SPINE))('concave parabolic spine, mL = $mL (Incropera et al. 2007, Table 3.5; profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFinProblem1D(parabolicSpine(2, mL)), eta));
 });
 

@@ -34,7 +34,7 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
     [1, 7.919],
   ])('infinite pin, Bi = %s: exact slowest-mode closure against the tabulated 1-D error (%s %%)', (bi, errPercent) => {
     // Computed reference values (pin2d_series.py, infinite-fin limit):
-    // q_1D / q_2D - 1, with q_1D = sqrt(h P k A) theta_b (Incropera et al., Table 3.4 case D [from memory]).
+    // q_1D / q_2D - 1, with q_1D = sqrt(h P k A) theta_b (Incropera et al. 2007, Table 3.4 case D [from memory]).
     const R = 1e-3;
     const k = 200;
     const h = (bi * k) / R;
@@ -48,7 +48,7 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
 });
 
 describe('annular fin, axisymmetric (r, z), against the 1-D closed form in the thin limit', () => {
-  // 1-D closed form: Gardner (1945), Trans. ASME 67, 621-631, as in Incropera et al. Table 3.5 [from memory];
+  // 1-D closed form: Gardner (1945), Trans. ASME 67, 621-631, as in Incropera et al. 2007, Table 3.5 [from memory];
   // computed reference values (profiles.py; Gardner 1945, from memory), adiabatic tip at r2c, m^2 = 2h/(kt).
   // In 2-D the fin is a disc of radius r2c with an adiabatic rim; the 1-D model neglects conduction across
   // the thickness, an error that vanishes linearly in Bi = h (t/2)/k (small-Bi expansion of the exact series: Bi/6 to Bi/3).

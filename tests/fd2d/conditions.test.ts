@@ -8,7 +8,7 @@ import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { BASE, THETA_B, TEMPERATURES_2D } from './cases.js';
 import { finCase } from '../support/fin-case.js';
 
-// Check case R2 (invented inputs; Incropera et al., Table 3.4, from memory): unit-width aluminium plate, k = 237, h = 40, t = 1 mm, L = 25 mm.
+// Check case R2 (invented inputs; Incropera et al. 2007, Table 3.4, from memory): unit-width aluminium plate, k = 237, h = 40, t = 1 mm, L = 25 mm.
 // Computed reference values (scipy/mpmath script uniform_fin.py) of the 1-D closed forms of Incropera,
 // DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, Table 3.4 [from memory]; per unit
 // theta_b: q/theta_b in W/(m K). Bi = h (t/2)/k = 8.4e-5, so the 2-D heat rate lies below the 1-D one by
@@ -46,7 +46,7 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
 
   it('contact resistance at the base: in series with the fin in the thin limit', () => {
     // A contact resistance R'' over the base area A_b adds R''/A_b in series with the fin's resistance
-    // theta_b/q_fin (series thermal resistances, Incropera et al. section 3.1 and the contact-resistance
+    // theta_b/q_fin (series thermal resistances, Incropera et al. 2007, section 3.1 and the contact-resistance
     // factor of section 3.6 [from memory]). Exact in 1-D; in 2-D the base flux is uniform to O(Bi).
     const rc = 2e-4;
     const s = studyFin2D(r2Case({ kind: 'adiabatic' }, rc));
