@@ -4,7 +4,21 @@ import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
 import { readCaseFile } from '../../src/case/index.js';
-import { type MapModelId, formatMapSummary, mapJsonText, OutputsInterrupted, renderMapFiles, MapInterrupted, progressBar, prepareMap, runMap, StagedFiles } from '../../src/map/index.js';
+import {
+  type MapModelId,
+  formatMapSummary,
+  OutputsInterrupted,
+  renderMapFiles,
+  MapInterrupted,
+  progressBar,
+  prepareMap,
+  runMap,
+  MANIFEST_NAME,
+  removeFiles,
+  staleFiles,
+  StagedFiles,
+} from '../../src/map/index.js';
+import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
 import type { Io, SetExit } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 
@@ -77,7 +91,9 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
 KEY is a key path of the case file; FROM and TO take units like the case file (a bare number is SI,
 a bare temperature degC; a unit on one end applies to both: 1:3 mm). Points where the case becomes
 invalid (a tip thicker than the base, say) are marked in the outputs and counted in the summary.
-Files are written under temporary names and renamed when all are complete; Ctrl-C leaves none.
+Files are written under temporary names and renamed when all are complete; Ctrl-C or SIGTERM leaves
+none (exit 130 or 143). A re-run into the same folder removes the files an earlier map wrote there
+and this one does not (map.json lists them); other files in the folder are never touched.
 
 Examples:
   fincheck map demo/inverter-plate-fin.yaml --x fin.thickness=0.5:5mm --y convection.h=10:500 --log-y
@@ -112,9 +128,7 @@ Examples:
       // about a millisecond each, so that starting and warming up workers (module load, JIT) costs more
       // than they save (41x41, 2 cores: 1.95 s in-process, 2.2 s on two workers).
       const jobs = askedJobs ?? (prepared.casePoint.reference.model === 'fd-1d' ? 1 : availableParallelism());
-      const controller = new AbortController();
-      const onInterrupt = (): void => controller.abort();
-      process.on('SIGINT', onInterrupt);
+      const interrupt = listenForInterrupt();
       const total = steps[0] * steps[1];
       const progress = progressBar((t) => io.err(t), io.errIsTTY, total);
       const staged = new StagedFiles(outDir);
@@ -122,29 +136,35 @@ Examples:
       try {
         const run = await runMap(prepared, {
           jobs,
-          signal: controller.signal,
+          signal: interrupt.signal,
           onPoint: (n) => {
             done = n;
             progress.update(n);
           },
         });
         progress.finish();
-        const files = await renderMapFiles(run, format, () => controller.signal.aborted);
-        if (controller.signal.aborted) throw new OutputsInterrupted('interrupted while writing');
+        const files = await renderMapFiles(run, format, () => interrupt.signal.aborted);
+        interrupt.check();
+        // Staging, committing and pruning are synchronous: a signal that arrives meanwhile waits until they end.
+        // Files an earlier map listed in this folder's map.json and this one does not write go (never others).
+        const stale = staleFiles(outDir, files.map((f) => f.name));
         for (const f of files) staged.stage(f.name, f.data);
         const written = staged.commit();
-        io.out(o.json ? mapJsonText(run) : formatMapSummary(run, written));
+        removeFiles(outDir, stale);
+        const json = files.find((f) => f.name === MANIFEST_NAME)?.data;
+        io.out(o.json && typeof json === 'string' ? json : formatMapSummary(run, written));
       } catch (err) {
         progress.finish();
         staged.discard();
-        if (err instanceof MapInterrupted || err instanceof OutputsInterrupted) {
+        const by = interrupt.received();
+        if (by !== null && (err instanceof MapInterrupted || err instanceof OutputsInterrupted || err instanceof Interrupted)) {
           io.err(`fincheck: interrupted after ${done} of ${total} points; no files were written\n`);
-          setExit(130);
+          setExit(interruptExitCode(by));
           return;
         }
         throw err;
       } finally {
-        process.off('SIGINT', onInterrupt);
+        interrupt.dispose();
       }
     });
 }

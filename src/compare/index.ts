@@ -11,3 +11,4 @@ export type { ModelProfile, ModelProfiles } from './model-profiles.js';
 export type { SolveReport } from './solve.js';
 export type { Solve2DReport } from './solve2d.js';
 export type { CheckReport, Flag, ModelId, ModelResult, NotApplicable, ReferenceResult, ShortcutId, Verdict } from './types.js';
+export { signedPercentText } from './percent-text.js';

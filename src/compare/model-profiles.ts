@@ -282,7 +282,7 @@ function twoDProfile(c: Case, study: Fin2DStudy): ModelProfile {
   const lossX = new Float64Array(n - 1);
   const loss = new Float64Array(n - 1);
   const flow = new Float64Array(n);
-  flow[0] = r.heatRate_W;
+  const segments = new Float64Array(n - 1);
   for (let i = 0; i + 1 < n; i++) {
     const xa = face.x_m[i] as number;
     const xb = face.x_m[i + 1] as number;
@@ -294,8 +294,17 @@ function twoDProfile(c: Case, study: Fin2DStudy): ModelProfile {
     const segment = flux(xm - baseX, theta) * r.grid.depth * perDepth * Math.hypot(xb - xa, yb - ya);
     lossX[i] = xm - baseX;
     loss[i] = segment / (xb - xa);
-    flow[i + 1] = (flow[i] as number) - segment;
+    segments[i] = segment;
   }
+  // Q(x) = tip loss + face losses beyond x, summed from the tip: the solver's own tip and face heat rates
+  // fix the ends (an adiabatic tip passes exactly 0, and Q(0) is the face plus tip loss, the base heat rate
+  // to the energy balance). Summing down from the base instead left the quadrature's O(h^2) mismatch at the
+  // tip, a stray negative Q (-4e-4 W on a 118 W annular fin) that pulled the chart's axis below zero.
+  let quadrature = 0;
+  for (const s of segments) quadrature += s;
+  const toSolverFaceLoss = quadrature !== 0 ? r.faceHeatRate_W / quadrature : 1;
+  flow[n - 1] = r.tipHeatRate_W;
+  for (let i = n - 2; i >= 0; i--) flow[i] = (flow[i + 1] as number) + (segments[i] as number) * toSolverFaceLoss;
   return {
     model: 'fd-2d',
     temperature: { x_m: shift(r.centreline.x_m), values: r.centreline.T_degC },

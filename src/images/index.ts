@@ -45,6 +45,7 @@ export { drawLegend, legendSize } from './legend.js';
 export { markerElement } from './markers.js';
 export { dashArray, defaultSeriesStyle, okabeItoColours } from './series-styles.js';
 export { el, fmt, polylinePathData, svgDocument, textEl } from './svg.js';
-export { textWidth } from './text-metrics.js';
+export { textWidth, truncateToWidth } from './text-metrics.js';
 export { fontSize, gap, ink } from './theme.js';
 export type { LegendEntry } from './legend.js';
+export { prettyUnit } from './unit-text.js';

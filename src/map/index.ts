@@ -7,3 +7,4 @@ export { progressBar } from './progress.js';
 export { prepareMap, runMap } from './run-map.js';
 export { StagedFiles } from './staged-files.js';
 export type { MapModelId } from './types.js';
+export { MANIFEST_NAME, removeFiles, staleFiles } from './manifest.js';
