@@ -3,8 +3,7 @@
  * size cap as a file). Warnings about the case (src/case: implausible dimensions, a shortened name) go to stderr
  * here, once, whatever the output format; commands with --json also put them in their document.
  */
-import { parseCaseText, readCaseFile, readCaseStream } from '../src/case/parse.js';
-import type { Case, CaseWarning } from '../src/case/types.js';
+import { parseCaseText, readCaseFile, readCaseStream, type Case, type CaseWarning } from '../src/case/index.js';
 import type { Io } from './io.js';
 
 /** How standard input is named in messages ("stdin:5:14: fin.thickness: ...") and as the default case name. */

@@ -3,7 +3,7 @@
  * names the option, the value and what is accepted (exit 2).
  */
 import { z } from 'zod';
-import { clip, quoted } from '../src/case/clip-text.js';
+import { clip, quoted } from '../src/case/index.js';
 import { UsageError } from '../src/errors.js';
 
 /** "2%", "2 %", "0.02": a relative tolerance in (0, 1). */

@@ -1,11 +1,9 @@
 /** `fincheck check CASE`: the reference solution against every applicable shortcut. */
 import type { Command } from 'commander';
-import { runCheck } from '../../src/compare/check.js';
-import { formatCheck } from '../../src/compare/format-check.js';
+import { runCheck, formatCheck } from '../../src/compare/index.js';
 import { loadCaseInput } from '../case-input.js';
-import type { Io } from '../io.js';
+import type { Io, SetExit } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
-import type { SetExit } from '../program.js';
 
 export function registerCheck(program: Command, io: Io, setExit: SetExit): Command {
   return program

@@ -3,20 +3,25 @@ import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import type { MapModelId } from '../../src/map/types.js';
-import { formatMapSummary } from '../../src/map/format.js';
-import { OutputsInterrupted, renderMapFiles } from '../../src/map/outputs.js';
-import { MapInterrupted } from '../../src/map/pool.js';
-import { progressBar } from '../../src/map/progress.js';
-import { prepareMap, runMap } from '../../src/map/run-map.js';
-import { MANIFEST_NAME, removeFiles, staleFiles } from '../../src/map/manifest.js';
-import { StagedFiles } from '../../src/map/staged-files.js';
-import { asUsageError } from '../../src/report/write-files.js';
+import {
+  type MapModelId,
+  formatMapSummary,
+  OutputsInterrupted,
+  renderMapFiles,
+  MapInterrupted,
+  progressBar,
+  prepareMap,
+  runMap,
+  MANIFEST_NAME,
+  removeFiles,
+  staleFiles,
+  StagedFiles,
+} from '../../src/map/index.js';
+import { asUsageError } from '../../src/report/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
-import type { Io } from '../io.js';
+import type { Io, SetExit } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
-import type { SetExit } from '../program.js';
 
 const modelIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'] as const satisfies readonly MapModelId[];
 

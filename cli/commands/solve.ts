@@ -1,14 +1,12 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { pointPosition, runSolve, type SolveReport } from '../../src/compare/solve.js';
-import { describeCase } from '../../src/compare/describe-case.js';
+import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/index.js';
 import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
-import { runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/solve2d.js';
 import { UsageError } from '../../src/errors.js';
-import { grid2dIssue } from '../../src/fd/fin2d.js';
-import { sectionOf } from '../../src/mesh/grid2dSection.js';
+import { grid2dIssue } from '../../src/fd/index.js';
+import { sectionOf } from '../../src/mesh/index.js';
 
 export function registerSolve(program: Command, io: Io): Command {
   return program

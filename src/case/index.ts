@@ -27,3 +27,5 @@ export {
 } from './units.js';
 export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
+export { aboveAbsoluteZero, coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, fraction, nonNegative, positive, rangeText, temperatureRange } from './fields.js';
+export type { Range } from './fields.js';

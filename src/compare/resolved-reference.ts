@@ -31,7 +31,8 @@ export function resolution2D(study: Fin2DStudy, target: number): ReferenceResolu
     refinements: 0,
     grids: study.grids.map((g) => `${g.nx}x${g.ny}`).reverse(),
     grading: 'the 2-D study grids',
-    budget: 'the fd-2d study grids (not refined further; an unresolved fd-2d study hands the reference to fd-1d under --reference auto)',
+    budget:
+      'the fd-2d study grids (not refined further; an unresolved fd-2d study hands the reference to fd-1d when the reference model is chosen automatically)',
   };
 }
 

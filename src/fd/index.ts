@@ -31,3 +31,12 @@ export {
   autoGrading,
   DEFAULT_STUDY_NODES,
 } from './fin1d.js';
+// The 2-D models and the refinement study, as plots and report use them.
+export { fin2dProblem } from './fin2dCase.js';
+export { grid2dIssue } from './fin2d.js';
+export { studyFin2DProblem } from './fin2dStudy.js';
+export { nonlinearFin2DProblem } from './nonlinear2d-problem.js';
+export { studyNonlinearFin2DProblem } from './nonlinear2d-study.js';
+export type { Fin2DStudy } from './fin2dStudy.js';
+export type { NonlinearFin2DStudy } from './nonlinear2d-study.js';
+export type { RefinementStudy } from './refinement.js';

@@ -37,3 +37,15 @@ export type { LineStyle } from './series-styles.js';
 export type { MarkerShape } from './markers.js';
 export type { Rect } from './layout.js';
 export { defaultWidth, defaultHeight } from './theme.js';
+// Building blocks for the charts that other layers draw themselves (plots, map).
+export { drawAxes, xAxisMargin, yAxisMargin } from './axes.js';
+export { fieldImage } from './field-layer.js';
+export { drawHeader } from './layout.js';
+export { drawLegend, legendSize } from './legend.js';
+export { markerElement } from './markers.js';
+export { dashArray, defaultSeriesStyle, okabeItoColours } from './series-styles.js';
+export { el, fmt, polylinePathData, svgDocument, textEl } from './svg.js';
+export { textWidth, truncateToWidth } from './text-metrics.js';
+export { fontSize, gap, ink } from './theme.js';
+export type { LegendEntry } from './legend.js';
+export { prettyUnit } from './unit-text.js';

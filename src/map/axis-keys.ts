@@ -15,8 +15,8 @@ import {
   fraction,
   temperatureRange,
   type Range,
-} from '../case/fields.js';
-import type { QuantityKind } from '../case/index.js';
+  type QuantityKind,
+} from '../case/index.js';
 
 export interface AxisKeyInfo {
   kind: QuantityKind;

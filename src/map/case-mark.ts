@@ -3,10 +3,7 @@
  * map chart of src/images draws its marked points, so that it can be drawn again on top of overlays (iso-lines)
  * and on the overview chart.
  */
-import { project, type MapPoint as ChartPoint, type Scale } from '../images/index.js';
-import { markerElement } from '../images/markers.js';
-import { textEl } from '../images/svg.js';
-import { fontSize, ink } from '../images/theme.js';
+import { project, type MapPoint as ChartPoint, type Scale, markerElement, textEl, fontSize, ink } from '../images/index.js';
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';
 

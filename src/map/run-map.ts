@@ -5,8 +5,7 @@
  */
 import { bareLengthUnit, dimensionWarning, parseCaseText, parseQuantity, readDocument, type CaseWarning } from '../case/index.js';
 import { rawAxisValue } from './substitute.js';
-import { runCheck } from '../compare/check.js';
-import type { NotApplicable } from '../compare/types.js';
+import { runCheck, type NotApplicable } from '../compare/index.js';
 import { UsageError } from '../errors.js';
 import { parseMapAxis } from './axis.js';
 import { solvePoints } from './pool.js';

@@ -3,3 +3,4 @@ export type { FinGeometry1D, FinShape1D, Grading, GradingEnd, Grid1DSpec, Mesh1D
 export type { TaperExponent, TaperSpec } from './geometry1d.js';
 export { finGeometry, taperedGeometry, annularGeometry, tabulatedGeometry } from './geometry1d.js';
 export { buildMesh1D, gridNodes, mergeBreakpoints, allocateCells } from './grid1d.js';
+export { sectionOf } from './grid2dSection.js';

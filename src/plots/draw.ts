@@ -1,11 +1,11 @@
 /** One chart of a kind as SVG text, from the sources it needs (sources.ts). */
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import type { Fin2DStudy } from '../fd/index.js';
 import { fieldChart, lineChart } from '../images/index.js';
 import { fluxChartSpec } from './flux-chart.js';
 import { heatmapChartSpec } from './heatmap-chart.js';
 import { profileChartSpec, type ChartSize, type CheckPlotInput } from './profile-chart.js';
 import type { PlotKind } from './sources.js';
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 
 export interface PlotSources {
   case: Case;

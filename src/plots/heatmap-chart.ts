@@ -6,10 +6,9 @@
  * Coordinates in mm: x along the fin (annular fins: the radius r), y across it. Nonlinear fins: the same
  * chart of the Newton study (nonlinear2d-study.ts), its steps per grid in the header.
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
-import type { Case } from '../case/types.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import type { NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
+import { CHART_CAUTION } from '../compare/index.js';
+import type { Case } from '../case/index.js';
+import type { Fin2DStudy, NonlinearFin2DStudy } from '../fd/index.js';
 import type { FieldChartSpec } from '../images/index.js';
 import { alongAxisTitle, relativeError, sig } from './labels.js';
 import type { ChartSize } from './profile-chart.js';

@@ -4,12 +4,9 @@
  * marker (images/series-styles.ts), its heat rate, drift and verdict in the legend; the reference's tip
  * temperature is marked. Axes in mm and °C.
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
-import type { Case } from '../case/types.js';
-import type { ModelProfiles } from '../compare/model-profiles.js';
-import type { CheckReport } from '../compare/types.js';
-import type { Fin1DStudy } from '../fd/fin1d.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import { CHART_CAUTION, type ModelProfiles, type CheckReport } from '../compare/index.js';
+import type { Case } from '../case/index.js';
+import type { Fin1DStudy, Fin2DStudy } from '../fd/index.js';
 import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
 import { withPointLabels, type PointLabel } from './point-labels.js';
 import { alongAxisTitle, faceLabel, isPin, lineLabel, modelStyle, referenceWords, sig, signedPercent, thinSeries, toMillimetres } from './labels.js';

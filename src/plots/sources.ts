@@ -3,15 +3,10 @@
  * `flux`, and the fd-2d refinement study for `heatmap` (nonlinear fins: the Newton study of
  * nonlinear2d-study.ts on the same grid family). Each is computed only when a chart needs it.
  */
-import type { Case } from '../case/types.js';
-import { runCheck, type CheckOptions } from '../compare/check.js';
-import { modelProfiles } from '../compare/model-profiles.js';
+import type { Case } from '../case/index.js';
+import { runCheck, type CheckOptions, modelProfiles } from '../compare/index.js';
 import { UsageError } from '../errors.js';
-import { fin2dProblem } from '../fd/fin2dCase.js';
-import { studyFin2DProblem, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import { nonlinearFin2DProblem } from '../fd/nonlinear2d-problem.js';
-import { studyNonlinearFin2DProblem } from '../fd/nonlinear2d-study.js';
+import { fin2dProblem, studyFin2DProblem, type Fin2DStudy, isLinearFinCase, nonlinearFin2DProblem, studyNonlinearFin2DProblem } from '../fd/index.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
 export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;

@@ -23,7 +23,12 @@ async function expectRefusal(b: BadCase, command: string, options: string[]): Pr
   if (problems.length > 0) throw new Error(`${problems.join('\n')}\n(${b.what})\n${describeRun(run)}`);
 }
 
-const command = fc.constantFrom<[string, string[]]>(['check', ['--json', '--reference', '1d']], ['check', []], ['solve', ['--json']], ['solve', ['--model', '2d', '--grid', '21x5']]);
+const command = fc.constantFrom<[string, string[]]>(
+  ['check', ['--json', '--reference', '1d']],
+  ['check', []],
+  ['solve', ['--json']],
+  ['solve', ['--model', '2d', '--grid', '21x5']],
+);
 
 describe('fuzz: refusals of bad case files', () => {
   const RUNS = 150;

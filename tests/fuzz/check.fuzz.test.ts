@@ -66,7 +66,7 @@ describe('fuzz: fincheck check on random valid cases', () => {
           // A valid case is refused only where the format documents a refusal; the generator makes none.
           if (run.code === 2) problems.push('a valid case was refused (exit 2)');
           const unknown = unknownProblems(problems, c.facts);
-  if (unknown.length > 0) throw new Error(`${unknown.join('\n')}\n${describeRun(run)}`);
+          if (unknown.length > 0) throw new Error(`${unknown.join('\n')}\n${describeRun(run)}`);
         }),
         fuzzParameters(RUNS, 1),
       );

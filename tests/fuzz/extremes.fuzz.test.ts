@@ -47,10 +47,14 @@ async function property(e: ExtremeCase, command: Command): Promise<void> {
 
 describe('fuzz: extreme magnitudes', () => {
   const RUNS = 60;
-  it('refused naming a key, solved with sane numbers, or a solver failure with advice; never a crash', async () => {
-    await fc.assert(
-      fc.asyncProperty(extremeCase, fc.constantFrom<Command>('check-1d', 'check-1d', 'check-auto', 'solve', 'solve2d'), property),
-      fuzzParameters(RUNS, 6),
-    );
-  }, timeoutFor(RUNS, 300));
+  it(
+    'refused naming a key, solved with sane numbers, or a solver failure with advice; never a crash',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(extremeCase, fc.constantFrom<Command>('check-1d', 'check-1d', 'check-auto', 'solve', 'solve2d'), property),
+        fuzzParameters(RUNS, 6),
+      );
+    },
+    timeoutFor(RUNS, 300),
+  );
 });

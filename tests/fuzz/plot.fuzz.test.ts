@@ -35,7 +35,8 @@ async function property(c: FuzzCase, o: PlotOptions): Promise<void> {
     else {
       const bytes = readFileSync(file);
       if (o.format === 'png' && !bytes.subarray(0, 8).equals(PNG_SIGNATURE)) problems.push('the .png file is not a PNG');
-      if (o.format === 'svg' && !/^<svg[\s\S]*<\/svg>\s*$/.test(bytes.toString('utf8').replace(/^<\?xml[^>]*>\s*/, ''))) problems.push('the .svg file is not one SVG document');
+      if (o.format === 'svg' && !/^<svg[\s\S]*<\/svg>\s*$/.test(bytes.toString('utf8').replace(/^<\?xml[^>]*>\s*/, '')))
+        problems.push('the .svg file is not one SVG document');
       if (o.format === 'svg' && /NaN|undefined|Infinity/.test(bytes.toString('utf8'))) problems.push('the SVG contains NaN, undefined or Infinity');
     }
     if (written.length !== 1) problems.push(`exit 0 left ${written.join(', ')} in the output folder`);
@@ -49,14 +50,21 @@ async function property(c: FuzzCase, o: PlotOptions): Promise<void> {
 
 describe('fuzz: fincheck plot on random valid cases', () => {
   const RUNS = 6;
-  it('writes one complete chart, or nothing with a documented exit code', async () => {
-    await fc.assert(
-      fc.asyncProperty(
-        validCase,
-        fc.record({ kind: fc.constantFrom('profile' as const, 'flux' as const, 'heatmap' as const), format: fc.constantFrom('png' as const, 'svg' as const) }),
-        property,
-      ),
-      fuzzParameters(RUNS, 7),
-    );
-  }, timeoutFor(RUNS, 1500));
+  it(
+    'writes one complete chart, or nothing with a documented exit code',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(
+          validCase,
+          fc.record({
+            kind: fc.constantFrom('profile' as const, 'flux' as const, 'heatmap' as const),
+            format: fc.constantFrom('png' as const, 'svg' as const),
+          }),
+          property,
+        ),
+        fuzzParameters(RUNS, 7),
+      );
+    },
+    timeoutFor(RUNS, 1500),
+  );
 });

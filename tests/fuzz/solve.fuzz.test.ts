@@ -54,19 +54,28 @@ async function property(c: FuzzCase, o: SolveOptions): Promise<void> {
       }
     } else problems.push(...textProblems(run.stdout));
   }
-  if (run.code === 2 && !documentedRefusal(o.model === '2d' ? 'solve2d' : 'solve', c.facts, run.stderr)) problems.push('a valid case was refused (exit 2)');
+  if (run.code === 2 && !documentedRefusal(o.model === '2d' ? 'solve2d' : 'solve', c.facts, run.stderr))
+    problems.push('a valid case was refused (exit 2)');
   const unknown = unknownProblems(problems, c.facts);
   if (unknown.length > 0) throw new Error(`${unknown.join('\n')}\n${describeRun(run)}`);
 }
 
 describe('fuzz: fincheck solve on random valid cases', () => {
   const RUNS_1D = 30;
-  it('1-D (refinement study or --nodes): exit codes, messages and the JSON contract', async () => {
-    await fc.assert(fc.asyncProperty(validCase, oneD, property), fuzzParameters(RUNS_1D, 4));
-  }, timeoutFor(RUNS_1D, 200));
+  it(
+    '1-D (refinement study or --nodes): exit codes, messages and the JSON contract',
+    async () => {
+      await fc.assert(fc.asyncProperty(validCase, oneD, property), fuzzParameters(RUNS_1D, 4));
+    },
+    timeoutFor(RUNS_1D, 200),
+  );
 
   const RUNS_2D = 30;
-  it('--model 2d on a coarse --grid: exit codes, messages and the JSON contract', async () => {
-    await fc.assert(fc.asyncProperty(validCase, twoD, property), fuzzParameters(RUNS_2D, 5));
-  }, timeoutFor(RUNS_2D, 200));
+  it(
+    '--model 2d on a coarse --grid: exit codes, messages and the JSON contract',
+    async () => {
+      await fc.assert(fc.asyncProperty(validCase, twoD, property), fuzzParameters(RUNS_2D, 5));
+    },
+    timeoutFor(RUNS_2D, 200),
+  );
 });

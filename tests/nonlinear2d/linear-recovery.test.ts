@@ -17,7 +17,7 @@ import { solveFin2D } from '../../src/fd/fin2d.js';
 import { studyFin2D } from '../../src/fd/fin2dStudy.js';
 import { solveNonlinearFin2D } from '../../src/fd/nonlinear2d.js';
 import { studyNonlinearFin2D } from '../../src/fd/nonlinear2d-study.js';
-import { AMBIENT_DEGC, constantK, finCase } from './support.js';
+import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const HEAT_RATE_ALLOWANCE = 2e-11;
 const FIELD_ALLOWANCE = 1e-11;

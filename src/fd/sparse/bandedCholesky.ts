@@ -132,10 +132,7 @@ function finishRow(a: Stencil9, band: Float64Array, invDiag: Float64Array, w: nu
     d -= l * l;
   }
   if (!(d > 0)) {
-    throw new SolverError(
-      `banded Cholesky: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${p})`,
-      'another-2d-grid',
-    );
+    throw new SolverError(`banded Cholesky: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${p})`, 'another-2d-grid');
   }
   const root = Math.sqrt(d);
   band[rowP + p] = root;

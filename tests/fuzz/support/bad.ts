@@ -68,9 +68,31 @@ const quantityMutation = (q: QuantityPath): fc.Arbitrary<{ value: unknown; what:
 
 /** Required keys whose absence must be named (case-format.md). */
 function requiredPaths(doc: Doc): KeyPath[] {
-  const out: KeyPath[] = [['fin'], ['material'], ['convection'], ['base'], ['convection', 'ambient'], ['convection', 'h'], ['base', 'temperature'], ['fin', 'profile']];
+  const out: KeyPath[] = [
+    ['fin'],
+    ['material'],
+    ['convection'],
+    ['base'],
+    ['convection', 'ambient'],
+    ['convection', 'h'],
+    ['base', 'temperature'],
+    ['fin', 'profile'],
+  ];
   const fin = doc['fin'] as Doc;
-  for (const key of ['length', 'thickness', 'width', 'diameter', 'baseThickness', 'tipThickness', 'baseDiameter', 'tipDiameter', 'innerRadius', 'outerRadius', 'points', 'shape']) {
+  for (const key of [
+    'length',
+    'thickness',
+    'width',
+    'diameter',
+    'baseThickness',
+    'tipThickness',
+    'baseDiameter',
+    'tipDiameter',
+    'innerRadius',
+    'outerRadius',
+    'points',
+    'shape',
+  ]) {
     if (key in fin) out.push(['fin', key]);
   }
   return out;
@@ -83,9 +105,24 @@ function crossKeyMutations(c: FuzzCase): { doc: Doc; path: string; what: string 
   const doc = c.doc;
   const fin = doc['fin'] as Doc;
   const out: { doc: Doc; path: string; what: string }[] = [];
-  if (fin['profile'] === 'trapezoidal') out.push({ doc: setAt(setAt(doc, ['fin', 'baseThickness'], '2 mm'), ['fin', 'tipThickness'], '3 mm'), path: 'fin.tipThickness', what: 'a tip thicker than the base' });
-  if (fin['profile'] === 'conical-pin') out.push({ doc: setAt(setAt(doc, ['fin', 'baseDiameter'], '4 mm'), ['fin', 'tipDiameter'], '6 mm'), path: 'fin.tipDiameter', what: 'a tip wider than the base' });
-  if (fin['profile'] === 'annular') out.push({ doc: setAt(setAt(doc, ['fin', 'innerRadius'], '20 mm'), ['fin', 'outerRadius'], '15 mm'), path: 'fin.outerRadius', what: 'outer radius inside the inner' });
+  if (fin['profile'] === 'trapezoidal')
+    out.push({
+      doc: setAt(setAt(doc, ['fin', 'baseThickness'], '2 mm'), ['fin', 'tipThickness'], '3 mm'),
+      path: 'fin.tipThickness',
+      what: 'a tip thicker than the base',
+    });
+  if (fin['profile'] === 'conical-pin')
+    out.push({
+      doc: setAt(setAt(doc, ['fin', 'baseDiameter'], '4 mm'), ['fin', 'tipDiameter'], '6 mm'),
+      path: 'fin.tipDiameter',
+      what: 'a tip wider than the base',
+    });
+  if (fin['profile'] === 'annular')
+    out.push({
+      doc: setAt(setAt(doc, ['fin', 'innerRadius'], '20 mm'), ['fin', 'outerRadius'], '15 mm'),
+      path: 'fin.outerRadius',
+      what: 'outer radius inside the inner',
+    });
   if (fin['profile'] === 'tabulated') {
     const points = fin['points'] as unknown[][];
     if (points.length >= 3) {
@@ -104,15 +141,24 @@ function crossKeyMutations(c: FuzzCase): { doc: Doc; path: string; what: string 
   const h = (doc['convection'] as Doc)['h'];
   if (typeof h === 'object' && h !== null && 'points' in h) {
     const points = (h as { points: unknown[][] }).points;
-    out.push({ doc: setAt(doc, ['convection', 'h', 'points', points.length - 1, 0], '10 m'), path: `convection.h.points[${points.length - 1}][0]`, what: 'h given beyond the tip' });
+    out.push({
+      doc: setAt(doc, ['convection', 'h', 'points', points.length - 1, 0], '10 m'),
+      path: `convection.h.points[${points.length - 1}][0]`,
+      what: 'h given beyond the tip',
+    });
   }
   const convection = doc['convection'] as Doc;
   out.push({ doc: setAt(doc, ['base', 'temperature'], convection['ambient']), path: 'base.temperature', what: 'base at the fluid temperature' });
-  out.push({ doc: setAt(setAt(setAt(doc, ['convection', 'h'], 0), ['convection', 'emissivity'], undefined), ['convection', 'surroundings'], undefined), path: 'convection.h', what: 'no h and no radiation' });
+  out.push({
+    doc: setAt(setAt(setAt(doc, ['convection', 'h'], 0), ['convection', 'emissivity'], undefined), ['convection', 'surroundings'], undefined),
+    path: 'convection.h',
+    what: 'no h and no radiation',
+  });
   out.push({ doc: setAt(doc, ['fin', 'profile'], 'rectangle'), path: 'fin', what: 'an unknown profile' });
   out.push({ doc: setAt(doc, ['convection', 'tip'], 'convection'), path: 'convection.tip', what: 'an unknown tip word' });
   out.push({ doc: setAt(doc, ['material'], 'unobtainium-7075'), path: 'material', what: 'an unknown material' });
-  if ((fin['profile'] === 'tabulated') && fin['shape'] === 'pin') out.push({ doc: setAt(doc, ['fin', 'width'], '10 mm'), path: 'fin.width', what: 'a width on a tabulated pin' });
+  if (fin['profile'] === 'tabulated' && fin['shape'] === 'pin')
+    out.push({ doc: setAt(doc, ['fin', 'width'], '10 mm'), path: 'fin.width', what: 'a width on a tabulated pin' });
   return out;
 }
 
@@ -149,9 +195,15 @@ export const badCaseFromValid: fc.Arbitrary<BadCase> = validCase.chain((c) => {
     })),
     fc
       .tuple(fc.constantFrom(...mappings.filter((p) => p.length > 0)), fc.constantFrom<unknown>('text', [1, 2, 3], true))
-      .map(([path, value]) => ({ text: caseText(setAt(c.doc, path, value), c.format), format: c.format, what: `a mapping replaced by ${JSON.stringify(value)}`, path: formatKeyPath(path) })),
+      .map(([path, value]) => ({
+        text: caseText(setAt(c.doc, path, value), c.format),
+        format: c.format,
+        what: `a mapping replaced by ${JSON.stringify(value)}`,
+        path: formatKeyPath(path),
+      })),
   ];
-  if (cross.length > 0) options.push(fc.constantFrom(...cross).map((m) => ({ text: caseText(m.doc, c.format), format: c.format, what: m.what, path: m.path })));
+  if (cross.length > 0)
+    options.push(fc.constantFrom(...cross).map((m) => ({ text: caseText(m.doc, c.format), format: c.format, what: m.what, path: m.path })));
   return fc.oneof(...options);
 });
 

@@ -110,14 +110,12 @@ const finThickness = len(0.0002, 0.01);
 const finWidth = len(0.005, 0.3);
 const pinDiameter = len(0.0005, 0.02);
 
-const rectangular: fc.Arbitrary<FinPart> = fc
-  .tuple(finLength, finThickness, finWidth, edges)
-  .map(([L, t, w, e]) => ({
-    fin: withEdges({ profile: 'rectangular', length: L.q, thickness: t.q, width: w.q }, e),
-    profile: 'rectangular',
-    straight: true,
-    extent: L.m,
-  }));
+const rectangular: fc.Arbitrary<FinPart> = fc.tuple(finLength, finThickness, finWidth, edges).map(([L, t, w, e]) => ({
+  fin: withEdges({ profile: 'rectangular', length: L.q, thickness: t.q, width: w.q }, e),
+  profile: 'rectangular',
+  straight: true,
+  extent: L.m,
+}));
 
 const pin: fc.Arbitrary<FinPart> = fc.tuple(finLength, pinDiameter).map(([L, d]) => ({
   fin: { profile: 'pin', length: L.q, diameter: d.q },
@@ -126,14 +124,12 @@ const pin: fc.Arbitrary<FinPart> = fc.tuple(finLength, pinDiameter).map(([L, d])
   extent: L.m,
 }));
 
-const trapezoidal: fc.Arbitrary<FinPart> = fc
-  .tuple(finLength, finThickness, taper, finWidth, edges)
-  .map(([L, tb, tau, w, e]) => ({
-    fin: withEdges({ profile: 'trapezoidal', length: L.q, baseThickness: tb.q, tipThickness: tipSize(tb, tau), width: w.q }, e),
-    profile: 'trapezoidal',
-    straight: true,
-    extent: L.m,
-  }));
+const trapezoidal: fc.Arbitrary<FinPart> = fc.tuple(finLength, finThickness, taper, finWidth, edges).map(([L, tb, tau, w, e]) => ({
+  fin: withEdges({ profile: 'trapezoidal', length: L.q, baseThickness: tb.q, tipThickness: tipSize(tb, tau), width: w.q }, e),
+  profile: 'trapezoidal',
+  straight: true,
+  extent: L.m,
+}));
 
 const tapered = (profile: 'triangular' | 'parabolic-concave' | 'parabolic-convex'): fc.Arbitrary<FinPart> =>
   fc.tuple(finLength, finThickness, finWidth, edges).map(([L, tb, w, e]) => ({
@@ -206,9 +202,7 @@ export const finArbitrary: fc.Arbitrary<FinPart> = fc.oneof(
 /** Material: a built-in name, a k with units, or a k(T) table (nonlinear). */
 const materialArbitrary: fc.Arbitrary<{ material: unknown; kTable: boolean }> = fc.oneof(
   fc.constantFrom(...materialNames).map((name) => ({ material: name, kTable: false })),
-  fc
-    .tuple(logUniform(0.2, 430), fc.constantFrom(...conductivityForms))
-    .map(([k, form]) => ({ material: { k: conductivity(k, form) }, kTable: false })),
+  fc.tuple(logUniform(0.2, 430), fc.constantFrom(...conductivityForms)).map(([k, form]) => ({ material: { k: conductivity(k, form) }, kTable: false })),
   // k(T) as materials have it: a base k and each point within a factor of 2 of it (metals and polymers change
   // by tens of percent over a fin's range). A table whose k jumps 2000-fold within a few kelvin is valid too,
   // but not a material, and hangs the nonlinear solvers today: drawn only on request (wildConductivityTable).
@@ -252,12 +246,10 @@ function wildConductivityTable(): fc.Arbitrary<{ material: unknown; kTable: bool
 const hArbitrary = (extent: number): fc.Arbitrary<{ h: unknown; kind: HKind }> =>
   fc.oneof(
     fc.tuple(logUniform(1, 5000), coefficientForm).map(([h, f]) => ({ h: coefficient(h, f), kind: 'uniform' as const })),
-    fc
-      .tuple(logUniform(1, 800), logUniform(1, 800), fc.constantFrom('both', 'base0', 'tip0'), coefficientForm)
-      .map(([b, t, zero, f]) => ({
-        h: { base: coefficient(zero === 'base0' ? 0 : b, f), tip: coefficient(zero === 'tip0' ? 0 : t, f) },
-        kind: 'linear' as const,
-      })),
+    fc.tuple(logUniform(1, 800), logUniform(1, 800), fc.constantFrom('both', 'base0', 'tip0'), coefficientForm).map(([b, t, zero, f]) => ({
+      h: { base: coefficient(zero === 'base0' ? 0 : b, f), tip: coefficient(zero === 'tip0' ? 0 : t, f) },
+      kind: 'linear' as const,
+    })),
     fc
       .record({
         xs: fc.uniqueArray(uniform(0, 1), { minLength: 2, maxLength: 5, comparator: (a, b) => sig(a * extent) === sig(b * extent) }),

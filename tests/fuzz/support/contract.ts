@@ -36,7 +36,8 @@ export function exitProblems(run: Run, strict: boolean, options: readonly string
 }
 
 /** A key path of the case (fin.thickness, convection.h.points[1][0]), a file problem, or an option. */
-const namesAKey = /(^|[\s:(])((name|fin|material|convection|base|units)(\.[A-Za-z]+|\[\d+\])*|\(top level\)|\(file\)|\(syntax\)|--[a-z][a-z-]*)(?![A-Za-z])/;
+const namesAKey =
+  /(^|[\s:(])((name|fin|material|convection|base|units)(\.[A-Za-z]+|\[\d+\])*|\(top level\)|\(file\)|\(syntax\)|--[a-z][a-z-]*)(?![A-Za-z])/;
 
 /** Exit 2: "fincheck:" first, and a key path (`keyPath` when the test knows which key is wrong). */
 export function refusalProblems(stderr: string, keyPath?: string): string[] {
@@ -118,7 +119,8 @@ export function checkNullRules(facts: CaseFacts): NullRule[] {
     {
       path: /^models\[i\]\.(formulaEfficiency|m_per_m|length_m)$/,
       when: isNumericModel,
-      reason: 'a numerical model has no formula efficiency, fin parameter or formula length (README: formulaEfficiency is the shortcut\u2019s own formula value)',
+      reason:
+        'a numerical model has no formula efficiency, fin parameter or formula length (README: formulaEfficiency is the shortcut\u2019s own formula value)',
     },
   ];
   rules.push({
@@ -139,7 +141,10 @@ export function checkNullRules(facts: CaseFacts): NullRule[] {
 export function solveNullRules(facts: CaseFacts, single: boolean): NullRule[] {
   const rules: NullRule[] = [];
   if (single) {
-    rules.push({ path: /^(discretizationError|observedOrder)$/, reason: 'one grid: no refinement study (outputs.md: --nodes/--grid give discretizationError null)' });
+    rules.push({
+      path: /^(discretizationError|observedOrder)$/,
+      reason: 'one grid: no refinement study (outputs.md: --nodes/--grid give discretizationError null)',
+    });
   }
   rules.push({
     path: /^observedOrder$/,
@@ -209,7 +214,8 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
   }
   if (typeof json['case'] !== 'string') problems.push('case is not a string');
   const tolerance = finite(json, 'tolerance', '', problems);
-  if (tolerance !== undefined && Math.abs(tolerance - expected.tolerance) > 1e-12) problems.push(`tolerance ${tolerance}, asked for ${expected.tolerance}`);
+  if (tolerance !== undefined && Math.abs(tolerance - expected.tolerance) > 1e-12)
+    problems.push(`tolerance ${tolerance}, asked for ${expected.tolerance}`);
   if ('biot' in json) {
     const biot = finite(json, 'biot', '', problems);
     if (biot !== undefined && !(biot >= 0)) problems.push(`biot = ${biot} < 0`);
@@ -226,14 +232,17 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
     problems.push(`reference.heatRate_W = ${q} has the wrong sign for base ${facts.baseC} degC, ambient ${facts.ambientC} degC`);
   }
   const refError = finite(ref, 'discretizationError', 'reference', problems);
-  problems.push(...efficiencyProblems(finite(ref, 'efficiency', 'reference', problems, facts.tip === 'infinite'), 'reference', facts, 1e-9 + (refError ?? 0) * 4));
+  problems.push(
+    ...efficiencyProblems(finite(ref, 'efficiency', 'reference', problems, facts.tip === 'infinite'), 'reference', facts, 1e-9 + (refError ?? 0) * 4),
+  );
   finite(ref, 'effectiveness', 'reference', problems);
   const balance = finite(ref, 'energyBalance', 'reference', problems);
 
   const flags = Array.isArray(json['flags']) ? json['flags'].filter(isObject) : [];
   const flagNames = flags.map((f) => f['flag']);
   for (const f of flags) {
-    if (typeof f['flag'] !== 'string' || typeof f['message'] !== 'string') problems.push(`flag without a name or message: ${JSON.stringify(f).slice(0, 120)}`);
+    if (typeof f['flag'] !== 'string' || typeof f['message'] !== 'string')
+      problems.push(`flag without a name or message: ${JSON.stringify(f).slice(0, 120)}`);
     if (f['value'] !== undefined && f['value'] !== null && (typeof f['value'] !== 'number' || !Number.isFinite(f['value']))) {
       problems.push(`flag ${String(f['flag'])} value ${JSON.stringify(f['value'])}`);
     }
@@ -242,7 +251,8 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
   // so anything beyond 1e-6 is a bug whatever the flags say.
   if (balance !== undefined) {
     if (!(balance >= 0)) problems.push(`reference.energyBalance = ${balance} < 0`);
-    if (balance > 1e-8 && !flagNames.includes('energy-balance')) problems.push(`reference.energyBalance = ${balance} > 1e-8 without the energy-balance flag`);
+    if (balance > 1e-8 && !flagNames.includes('energy-balance'))
+      problems.push(`reference.energyBalance = ${balance} > 1e-8 without the energy-balance flag`);
     if (balance > 1e-6) problems.push(`reference.energyBalance = ${balance}: not small`);
   }
   // README "Flags": grid-not-converged when the GCI exceeds a tenth of the tolerance.
@@ -275,10 +285,12 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
       continue;
     }
     const id = row['model'];
-    if (typeof id !== 'string' || !(modelIds as readonly string[]).includes(id)) problems.push(`${where}.model ${JSON.stringify(id)} is not a documented model id`);
+    if (typeof id !== 'string' || !(modelIds as readonly string[]).includes(id))
+      problems.push(`${where}.model ${JSON.stringify(id)} is not a documented model id`);
     finite(row, 'heatRate_W', where, problems);
     const eta = finite(row, 'efficiency', where, problems, facts.tip === 'infinite');
-    const named = typeof id === 'string' && !id.startsWith('fd-') && new RegExp(`(^|[\\s,])${id}[\\s,]`).test(efficiencyNote) && /above 1/.test(efficiencyNote);
+    const named =
+      typeof id === 'string' && !id.startsWith('fd-') && new RegExp(`(^|[\\s,])${id}[\\s,]`).test(efficiencyNote) && /above 1/.test(efficiencyNote);
     if (!named) problems.push(...efficiencyProblems(eta, `${where} (${String(id)})`, facts, 1e-9 + (refError ?? 0) * 4));
     const drift = finite(row, 'drift', where, problems);
     const verdict = row['verdict'];
@@ -334,7 +346,10 @@ export function solveJsonProblems(json: Json, facts: CaseFacts, expected: { mode
       const t = p['T_degC'];
       if (typeof x !== 'number' || typeof t !== 'number' || temperatureProblems(t, 'T', facts, slack).length > 0) bad += 1;
     }
-    if (bad > 0) problems.push(`${line}: ${bad} of ${points.length} points without a finite position or with T outside the bounds ${temperatureBounds(facts, slack).join('..')}`);
+    if (bad > 0)
+      problems.push(
+        `${line}: ${bad} of ${points.length} points without a finite position or with T outside the bounds ${temperatureBounds(facts, slack).join('..')}`,
+      );
   }
   return problems;
 }

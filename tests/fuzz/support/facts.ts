@@ -10,9 +10,11 @@ export function factsOf(c: Case): CaseFacts {
   const h: HKind = c.convection.h.kind;
   const radiates = c.convection.emissivity > 0;
   const kTable = c.material.k.kind === 'table';
-  const straight = p.kind === 'tabulated' ? p.shape === 'straight' : ['rectangular', 'trapezoidal', 'triangular', 'parabolic-concave', 'parabolic-convex'].includes(p.kind);
-  const extent =
-    p.kind === 'annular' ? p.outerRadius - p.innerRadius : p.kind === 'tabulated' ? (p.x[p.x.length - 1] ?? 0) : p.length;
+  const straight =
+    p.kind === 'tabulated'
+      ? p.shape === 'straight'
+      : ['rectangular', 'trapezoidal', 'triangular', 'parabolic-concave', 'parabolic-convex'].includes(p.kind);
+  const extent = p.kind === 'annular' ? p.outerRadius - p.innerRadius : p.kind === 'tabulated' ? (p.x[p.x.length - 1] ?? 0) : p.length;
   return {
     profile,
     straight,

@@ -27,7 +27,8 @@ export async function judge(run: Run, command: string, options: readonly string[
     if (command === 'check') {
       const reference = optionValue(options, '--reference') === '1d' ? '1d' : 'auto';
       const toleranceText = optionValue(options, '--tolerance');
-      const tolerance = toleranceText === undefined ? 0.02 : toleranceText.endsWith('%') ? Number(toleranceText.slice(0, -1)) / 100 : Number(toleranceText);
+      const tolerance =
+        toleranceText === undefined ? 0.02 : toleranceText.endsWith('%') ? Number(toleranceText.slice(0, -1)) / 100 : Number(toleranceText);
       problems.push(...checkJsonProblems(parsed.json, facts, { reference, tolerance }));
     } else {
       const single = options.includes('--nodes') || options.includes('--grid');

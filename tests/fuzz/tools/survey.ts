@@ -53,13 +53,19 @@ for (const [i, c] of cases.entries()) {
   for (const command of commands) {
     // Which case runs now, so a run that hangs can be found (case files: tools/dump by index).
     writeFileSync(join(outDir, 'running.txt'), `case ${i} ${command}\n${caseText(c.doc, c.format)}`);
-    const argv = command === 'check' ? ['--json', '--reference', i % 2 ? '1d' : 'auto'] : command === 'solve' ? ['--json'] : ['--json', '--model', '2d', '--grid', '41x9'];
+    const argv =
+      command === 'check'
+        ? ['--json', '--reference', i % 2 ? '1d' : 'auto']
+        : command === 'solve'
+          ? ['--json']
+          : ['--json', '--model', '2d', '--grid', '41x9'];
     const t0 = Date.now();
     const run = await runOn(caseText(c.doc, c.format), c.format, command === 'solve2d' ? 'solve' : command, argv);
     (times[command] ??= []).push(Date.now() - t0);
     void 0;
     const problems = exitProblems(run, false, await commandOptions(command === 'solve2d' ? 'solve' : command));
-    if (run.code === 2 && !documentedRefusal(command as "solve2d", c.facts, run.stderr)) problems.push(`valid case refused: ${run.stderr.split('\n')[0]?.slice(0, 100) ?? ''}`);
+    if (run.code === 2 && !documentedRefusal(command as 'solve2d', c.facts, run.stderr))
+      problems.push(`valid case refused: ${run.stderr.split('\n')[0]?.slice(0, 100) ?? ''}`);
     if (run.code === 3) problems.push(`solver failure: ${run.stderr.slice(0, 90)}`);
     if (run.code === 70) problems.push(`internal error: ${run.stderr.split('\n')[0]?.slice(40, 140) ?? ''}`);
     const ms = Date.now() - t0;
@@ -84,7 +90,9 @@ cleanUp();
 console.log(`seed ${seed}, ${count} cases, ${((Date.now() - started) / 1000).toFixed(1)} s`);
 for (const [command, ts] of Object.entries(times)) {
   const sorted = [...ts].sort((a, b) => a - b);
-  console.log(`${command}: median ${sorted[Math.floor(sorted.length / 2)]} ms, max ${sorted[sorted.length - 1]} ms, total ${(ts.reduce((a, b) => a + b, 0) / 1000).toFixed(1)} s`);
+  console.log(
+    `${command}: median ${sorted[Math.floor(sorted.length / 2)]} ms, max ${sorted[sorted.length - 1]} ms, total ${(ts.reduce((a, b) => a + b, 0) / 1000).toFixed(1)} s`,
+  );
 }
 let n = 0;
 for (const [key, { count: k, example, problem }] of [...classes.entries()].sort((a, b) => b[1].count - a[1].count)) {

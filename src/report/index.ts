@@ -1,0 +1,5 @@
+/** The report layer's public API: what the other layers import. */
+export { REPORT_FILES, makeReport } from './make-report.js';
+export { reportDate } from './report-date.js';
+export { asUsageError, writeFilesAtomically } from './write-files.js';
+export type { OutputFile } from './write-files.js';
