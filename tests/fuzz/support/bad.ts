@@ -193,14 +193,12 @@ export const badCaseFromValid: fc.Arbitrary<BadCase> = validCase.chain((c) => {
       // Without its profile a fin cannot say which keys it needs: the refusal names the fin.
       path: formatKeyPath(path) === 'fin.profile' ? 'fin' : formatKeyPath(path),
     })),
-    fc
-      .tuple(fc.constantFrom(...mappings.filter((p) => p.length > 0)), fc.constantFrom<unknown>('text', [1, 2, 3], true))
-      .map(([path, value]) => ({
-        text: caseText(setAt(c.doc, path, value), c.format),
-        format: c.format,
-        what: `a mapping replaced by ${JSON.stringify(value)}`,
-        path: formatKeyPath(path),
-      })),
+    fc.tuple(fc.constantFrom(...mappings.filter((p) => p.length > 0)), fc.constantFrom<unknown>('text', [1, 2, 3], true)).map(([path, value]) => ({
+      text: caseText(setAt(c.doc, path, value), c.format),
+      format: c.format,
+      what: `a mapping replaced by ${JSON.stringify(value)}`,
+      path: formatKeyPath(path),
+    })),
   ];
   if (cross.length > 0)
     options.push(fc.constantFrom(...cross).map((m) => ({ text: caseText(m.doc, c.format), format: c.format, what: m.what, path: m.path })));
