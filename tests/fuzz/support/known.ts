@@ -31,10 +31,6 @@ const known: KnownClass[] = [
     file: 'surroundings-hotter-negative-efficiency.yaml',
     matches: (p, f) => f.radiates && /efficiency = -/.test(p),
   },
-  {
-    file: 'tiny-contact-resistance.yaml',
-    matches: (p) => /advises --(grid|model|nodes|reference)/.test(p),
-  },
 ];
 
 /** The violations that are not known classes. */
