@@ -128,6 +128,12 @@ export function checkNullRules(facts: CaseFacts): NullRule[] {
     when: (ref) => typeof ref['discretizationError'] === 'number',
     reason: 'README "JSON output": null when the grids show no order (round-off differences or a sign change); the GCI is still given',
   });
+  if (facts.tip === 'temperature') {
+    rules.push({
+      path: /^models\[i\]\.formulaEfficiency$/,
+      reason: 'README "check": a prescribed tip temperature has a textbook heat rate but no formula efficiency (Incropera et al. 2007, Table 3.4, case C)',
+    });
+  }
   if (facts.tip === 'infinite') {
     rules.push({
       path: /^(reference|models\[i\])\.(efficiency|formulaEfficiency)$/,
