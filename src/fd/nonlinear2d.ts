@@ -147,7 +147,6 @@ function advice(problem: NonlinearFin2DProblem): string {
   const k = physics.conductivity;
   if (k.kind === 'table') items.push(`give a smoother conductivity table (k runs from ${Math.min(...k.k)} to ${Math.max(...k.k)} W/(m*K))`);
   if (items.length === 0) return 'this case is linear and should never fail to converge: please report it, with the case file';
-  items.push('or change the grid (--grid), or use the 1-D model (--reference 1d, --model 1d)');
   return items.join(', ');
 }
 
@@ -156,7 +155,9 @@ function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2D
   const reason = outcome.failure ?? 'unknown reason';
   const steps = reason.startsWith('no convergence') ? '' : ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})`;
   return new SolverError(
-    `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${reason}${steps}${progress}. To get a solution: ${advice(problem)}.`,
+    `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${reason}${steps}${progress}. To get a solution: ${advice(problem)}`,
+    // Another grid or the 1-D model: the CLI names the option of the command that ran (src/ names none).
+    'another-2d-grid',
   );
 }
 
