@@ -6,7 +6,7 @@
  * keys are issues; the raw value is still returned for what could be read.
  */
 import { LineCounter, isMap, isPair, isScalar, isSeq, parseDocument, type Node, type Pair } from 'yaml';
-import type { KeyPath } from './keyPath.js';
+import type { KeyPath } from './key-path.js';
 import type { Locate, PendingIssue, SourcePosition } from './issues.js';
 
 export type SourceFormat = 'yaml' | 'json';

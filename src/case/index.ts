@@ -1,7 +1,7 @@
 /** The case layer's public API: reading, units, validation and the built-in materials. */
 export { loadCase, parseCaseObject, parseCaseText, readCaseFile, type ParseOptions } from './parse.js';
 export { caseJsonSchema, caseSchema, profileNames, type ValidatedCase } from './schema.js';
-export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './keyPath.js';
+export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './key-path.js';
 export type { Locate, SourcePosition } from './issues.js';
 export { readDocument, detectFormat, type ReadDocument, type SourceFormat } from './document.js';
 export {

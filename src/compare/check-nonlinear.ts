@@ -16,9 +16,9 @@
  */
 import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
-import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
-import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/one-d/nonlinear-solve.js';
+import { nonlinear2dUnsupported } from '../fd/two-d/nonlinear-problem.js';
+import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/two-d/nonlinear-study.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';

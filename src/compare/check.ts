@@ -8,9 +8,9 @@
  */
 import type { Case } from '../case/types.js';
 import { initBessel } from '../analytic/bessel.js';
-import { studyFin1D, type Fin1DStudy } from '../fd/fin1d.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
+import { studyFin1D, type Fin1DStudy } from '../fd/one-d/linear-solve.js';
+import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
+import { isLinearFinCase, type LinearFinCase } from '../fd/problem/linear-case.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { CAUTIONS } from './cautions.js';
 import { nonlinearCheck } from './check-nonlinear.js';

@@ -12,7 +12,7 @@
  * Returns the base heat rate as an affine function of the base excess, so a contact resistance can be
  * put in series exactly: q(theta0) = slope * theta0 + offset (offset != 0 only for a prescribed tip).
  */
-import type { LinearFinCase } from '../fd/linear-case.js';
+import type { LinearFinCase } from '../fd/problem/linear-case.js';
 import { annularFin, annularFinConvectiveTip } from '../analytic/annular.js';
 import { conicalSpine, truncatedConicalSpine } from '../analytic/spine-profiles.js';
 import {

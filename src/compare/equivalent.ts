@@ -6,8 +6,8 @@
  * Units: m, m^2, W/(m^2*K), W/(m*K), K.
  */
 import type { Case } from '../case/types.js';
-import { hAt, idealConvectiveConductance } from '../fd/convection1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
+import { hAt, idealConvectiveConductance } from '../fd/problem/convection.js';
+import type { LinearFinCase } from '../fd/problem/linear-case.js';
 import type { FinGeometry1D } from '../mesh/types.js';
 
 export interface EquivalentUniformFin {

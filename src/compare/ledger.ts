@@ -8,8 +8,8 @@
  */
 import type { Case, HDistribution, Profile } from '../case/types.js';
 import { uniformFin } from '../analytic/uniform-fin.js';
-import { solveFin1D } from '../fd/fin1d.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
+import { solveFin1D } from '../fd/one-d/linear-solve.js';
+import { isLinearFinCase } from '../fd/problem/linear-case.js';
 import type { FinGeometry1D } from '../mesh/types.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { AssumptionRow, ModelId } from './types.js';

@@ -11,9 +11,9 @@
  * beyond the ends (as the solver). Units: W/(m^2*K), W/(m*K), K.
  */
 import type { Case, Conductivity, HDistribution } from '../case/types.js';
-import type { Fin1DResult } from '../fd/fin1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
-import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../fd/nonlinear-problem.js';
+import type { Fin1DResult } from '../fd/one-d/linear-solve.js';
+import type { LinearFinCase } from '../fd/problem/linear-case.js';
+import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../fd/problem/fin-problem.js';
 
 export type HGuess = 'base' | 'mean';
 

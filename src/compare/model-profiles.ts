@@ -40,14 +40,14 @@
  * the solver's temperatures already carry it (Kirchhoff transform, nonlinear2d-setup.ts).
  */
 import { uniformFin, uniformFinExcess, type UniformFinInput, type UniformTip } from '../analytic/uniform-fin.js';
-import { hAt, hAtNodes } from '../fd/convection1d.js';
-import { convectiveConductance, interfaceConductance } from '../fd/conductance1d.js';
-import type { Fin1DStudy } from '../fd/fin1d.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
+import { hAt, hAtNodes } from '../fd/problem/convection.js';
+import { convectiveConductance, interfaceConductance } from '../fd/one-d/conductance.js';
+import type { Fin1DStudy } from '../fd/one-d/linear-solve.js';
+import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
+import { isLinearFinCase, type LinearFinCase } from '../fd/problem/linear-case.js';
 import type { Case } from '../case/types.js';
-import { faceFlux, faceLaw } from '../fd/nonlinear-losses.js';
-import { nonlinearFinProblem1D } from '../fd/nonlinear-problem.js';
+import { faceFlux, faceLaw } from '../fd/problem/surface-law.js';
+import { nonlinearFinProblem1D } from '../fd/problem/fin-problem.js';
 import { conductivityAt, linearSurrogate } from './linear-surrogate.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';

@@ -13,9 +13,9 @@
  */
 import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
-import { solveFin1D, type Fin1DStudy } from '../fd/fin1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
-import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
+import { solveFin1D, type Fin1DStudy } from '../fd/one-d/linear-solve.js';
+import type { LinearFinCase } from '../fd/problem/linear-case.js';
+import { studyFin2D, type Fin2DStudy } from '../fd/two-d/linear-study.js';
 import type { AssumptionRow, ReferenceResult } from './types.js';
 
 /** The solvers behind a 2-D reference. */

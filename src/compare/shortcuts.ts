@@ -11,7 +11,7 @@
  * Units: W, K, m.
  */
 import { uniformFin } from '../analytic/uniform-fin.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
+import type { LinearFinCase } from '../fd/problem/linear-case.js';
 import { closedForm, type AffineHeatRate } from './closed-form.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { NotApplicable, ShortcutId } from './types.js';

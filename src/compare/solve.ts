@@ -4,9 +4,9 @@
  * (discretizationError null).
  */
 import type { Case } from '../case/types.js';
-import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/fin1d.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
+import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/one-d/linear-solve.js';
+import { isLinearFinCase } from '../fd/problem/linear-case.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/one-d/nonlinear-solve.js';
 
 export interface ProfilePoint {
   x_m: number;

@@ -8,13 +8,13 @@
  */
 import type { Case } from '../case/types.js';
 import { UsageError } from '../errors.js';
-import { solveFin2D, type Fin2DLine, type Fin2DResult } from '../fd/fin2d.js';
-import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import type { NewtonReport } from '../fd/nonlinear1d.js';
-import { solveNonlinearFin2D, type NonlinearFin2DResult } from '../fd/nonlinear2d.js';
-import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
-import { studyNonlinearFin2D } from '../fd/nonlinear2d-study.js';
+import { solveFin2D, type Fin2DLine, type Fin2DResult } from '../fd/two-d/linear-solve.js';
+import { studyFin2D, type Fin2DStudy } from '../fd/two-d/linear-study.js';
+import { isLinearFinCase } from '../fd/problem/linear-case.js';
+import type { NewtonReport } from '../fd/one-d/nonlinear-solve.js';
+import { solveNonlinearFin2D, type NonlinearFin2DResult } from '../fd/two-d/nonlinear-solve.js';
+import { nonlinear2dUnsupported } from '../fd/two-d/nonlinear-problem.js';
+import { studyNonlinearFin2D } from '../fd/two-d/nonlinear-study.js';
 import type { ProfilePoint } from './solve.js';
 
 /** Newton's method on the grids of a nonlinear fin. */

@@ -15,7 +15,7 @@
  * Named boundaries: base (i = 0), tip (i = last), face (j = last), symmetry (j = 0: mid-plane or axis).
  * The arrays follow the ndarray convention: shape [nodesX, nodesY], stride [nodesY, 1], offset 0.
  */
-import type { Section2D, SectionKind } from './grid2dSection.js';
+import type { Section2D, SectionKind } from './grid2d-section.js';
 
 export type BoundaryName = 'base' | 'tip' | 'face' | 'symmetry';
 

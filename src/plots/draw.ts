@@ -1,5 +1,5 @@
 /** One chart of a kind as SVG text, from the sources it needs (sources.ts). */
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
 import { fieldChart, lineChart } from '../images/index.js';
 import { fluxChartSpec } from './flux-chart.js';
 import { heatmapChartSpec } from './heatmap-chart.js';

@@ -8,8 +8,8 @@
  */
 import { CHART_CAUTION } from '../compare/cautions.js';
 import type { Case } from '../case/types.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import type { NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
+import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
+import type { NonlinearFin2DStudy } from '../fd/two-d/nonlinear-study.js';
 import type { FieldChartSpec } from '../images/index.js';
 import { relativeError, sig } from './labels.js';
 import type { ChartSize } from './profile-chart.js';

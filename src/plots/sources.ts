@@ -7,11 +7,11 @@ import type { Case } from '../case/types.js';
 import { runCheck, type CheckOptions } from '../compare/check.js';
 import { modelProfiles } from '../compare/model-profiles.js';
 import { UsageError } from '../errors.js';
-import { fin2dProblem } from '../fd/fin2dCase.js';
-import { studyFin2DProblem, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import { nonlinearFin2DProblem } from '../fd/nonlinear2d-problem.js';
-import { studyNonlinearFin2DProblem } from '../fd/nonlinear2d-study.js';
+import { fin2dProblem } from '../fd/two-d/problem.js';
+import { studyFin2DProblem, type Fin2DStudy } from '../fd/two-d/linear-study.js';
+import { isLinearFinCase } from '../fd/problem/linear-case.js';
+import { nonlinearFin2DProblem } from '../fd/two-d/nonlinear-problem.js';
+import { studyNonlinearFin2DProblem } from '../fd/two-d/nonlinear-study.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
 export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;

@@ -3,7 +3,7 @@
  * the observed order, and the Grid Convergence Index of the finest grid (Celik, Ghia, Roache, Freitas,
  * Coleman & Raad 2008, J. Fluids Eng. 130(7), 078001), the estimate quoted beside every number.
  */
-import type { RefinementStudy } from '../fd/refinement.js';
+import type { RefinementStudy } from '../fd/study/refinement.js';
 import { relativeError, sig } from '../plots/labels.js';
 import type { CheckPlotInput } from '../plots/profile-chart.js';
 import type { Block, Section } from './document.js';

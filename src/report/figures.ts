@@ -1,5 +1,5 @@
 /** The report's figures: the PNG of each chart with a caption naming its models, units and errors. */
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
 import { alongAxisLabel, referenceWords, relativeError, sig } from '../plots/labels.js';
 import type { CheckPlotInput } from '../plots/profile-chart.js';
 import type { PlotKind } from '../plots/sources.js';

@@ -5,7 +5,7 @@
  */
 import type { Case } from '../case/types.js';
 import type { CheckOptions } from '../compare/check.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
+import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
 import { svgToPng } from '../images/index.js';
 import { plotSvg } from '../plots/draw.js';
 import type { ChartSize, CheckPlotInput } from '../plots/profile-chart.js';

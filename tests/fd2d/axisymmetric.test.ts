@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { finCase, THETA_B } from './cases.js';
 
 describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D series', () => {

@@ -6,7 +6,7 @@
  */
 import { describe, expect, test } from 'vitest';
 import { SolverError } from '../../src/errors.js';
-import { solveNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { AMBIENT_DEGC, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
 
 // Boiling-like law n = 2 on a long plate fin (mL ~ 14): from the whole fin at the base temperature,

@@ -14,7 +14,7 @@ import {
   radiatingAdiabaticFin,
   radiatingInfiniteFin,
 } from '../../src/analytic/nonlinear.js';
-import { studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { AMBIENT_DEGC, KELVIN, constantK, nonlinearCase, pinFin, plateFin, relative, type UniformFin } from './support/cases.js';
 
 /**

@@ -13,8 +13,8 @@
  */
 import { describe, expect, test } from 'vitest';
 import type { Case } from '../../src/case/types.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { AMBIENT_DEGC, KELVIN, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
 
 const M = Math.sqrt(50); // plate fin with k = 200, h_b = 10: m^2 = h_b P / (k A) = 50 1/m^2

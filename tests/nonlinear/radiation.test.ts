@@ -12,7 +12,7 @@
  * ε = 0.9, σ = 5.670374419e-8 W/(m^2 K^4); values printed to 10 significant digits.
  */
 import { describe, expect, test } from 'vitest';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { KELVIN, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
 
 /** Computed reference values (nonlinear.py): T_b, T_s (K), q'_inf, then for L = 0.05 and 0.2 m: T_tip (K), q' (W/m). */

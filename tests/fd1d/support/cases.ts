@@ -3,7 +3,7 @@
  * cases or invented values; every builder returns a case narrowed to the linear solver's type.
  */
 import type { Case, HDistribution, Profile, TipCondition } from '../../../src/case/types.js';
-import { isLinearFinCase, type LinearFinCase } from '../../../src/fd/linear-case.js';
+import { isLinearFinCase, type LinearFinCase } from '../../../src/fd/problem/linear-case.js';
 
 export interface CaseInputs {
   profile: Profile;

@@ -1,0 +1,66 @@
+/**
+ * The nonlinear fin across its thickness as plain data: the 2-D section and boundary conditions of the
+ * linear model (fin2dCase.ts) for the position part of h and the reference conductivity, plus the laws
+ * that make the fin nonlinear, exactly as the 1-D solver states them (nonlinear-problem.ts).
+ *
+ * Equation in the section (θ = T - T_amb in K, k in W/(m K), r the radius of axisymmetric sections,
+ * 1 for the planar section of a straight fin):
+ *   div(k(T) r grad T) = 0,
+ * on the cooled faces (outward normal n, heat leaving positive)
+ *   -k dT/dn = q(θ) = h_x(s) |θ/θ_b|^n θ + ε σ (T^4 - T_s^4),
+ * h_x the position part of h along the fin (W/(m^2 K); the `base` of a power law), n its exponent, ε the
+ * grey emissivity, T_s the surroundings (K). A convective tip loses the same q with h_x(L) ('face' tip
+ * law), or with its own constant coefficient and the faces' radiation ('own-h'), as in 1-D
+ * (nonlinear-boundary.ts). Base: fixed temperature or a contact resistance; tip: adiabatic, convective or
+ * fixed temperature. Radiation: the fin sees only its surroundings (view factor 1).
+ *
+ * Not covered in 2-D: the infinite tip of a nonlinear fin (the linear model closes a cut fin with its
+ * slowest 2-D mode, which a nonlinear fin does not have); linear infinite fins are covered as in
+ * fin2dCase.ts.
+ */
+import type { Case } from '../../case/types.js';
+import { UsageError } from '../../errors.js';
+import { fin2dProblem, fin2dUnsupported, type Fin2DProblem } from './problem.js';
+import { isLinearFinCase, type LinearFinCase } from '../problem/linear-case.js';
+import { kirchhoffTransform } from '../problem/conductivity.js';
+import { nonlinearFinProblem1D, type NonlinearFinProblem1D } from '../problem/fin-problem.js';
+
+export interface NonlinearFin2DProblem {
+  /**
+   * Section, base, face and tip conditions of the position part of h (W/(m^2 K)) with k = k_ref, the
+   * conductivity at the base temperature (W/(m K)).
+   */
+  readonly linear: Fin2DProblem;
+  /** The nonlinear laws (exponent, emissivity and surroundings, k(T), base excess) of the fin. */
+  readonly physics: NonlinearFinProblem1D;
+  /** How a convective tip loses heat: the face law at x = L, or its own constant h plus radiation. */
+  readonly tipLaw: 'face' | 'own-h';
+}
+
+/** Why the nonlinear 2-D model cannot solve this case, or null when it can. */
+export function nonlinear2dUnsupported(c: Case): string | null {
+  if (isLinearFinCase(c)) return fin2dUnsupported(c);
+  if (c.convection.tip.kind === 'infinite') {
+    return 'an infinite tip of a nonlinear fin is not modelled in 2-D (the cut fin is closed by a linear mode)';
+  }
+  return null;
+}
+
+/** The problem of any case the 2-D model covers; UsageError naming the reason otherwise. */
+export function nonlinearFin2DProblem(c: Case): NonlinearFin2DProblem {
+  const unsupported = nonlinear2dUnsupported(c);
+  if (unsupported !== null) throw new UsageError(`fd-2d: ${unsupported}; use the 1-D model`);
+  const physics = nonlinearFinProblem1D(c);
+  const tip = c.convection.tip;
+  const tipLaw = tip.kind === 'convective' && tip.h === null ? 'face' : 'own-h';
+  if (isLinearFinCase(c)) return { linear: fin2dProblem(c), physics, tipLaw };
+  const kRef = kirchhoffTransform(physics.conductivity, physics.ambient_degC, physics.base.theta).kRef;
+  // The same fin with h reduced to its position part, k to k_ref, and no radiation: its 2-D problem
+  // carries the section and every condition the nonlinear laws then act on.
+  const positionPart: LinearFinCase = {
+    ...c,
+    material: { ...c.material, k: { kind: 'constant', k: kRef } },
+    convection: { ...c.convection, h: physics.h, emissivity: 0 },
+  };
+  return { linear: fin2dProblem(positionPart), physics, tipLaw };
+}

@@ -1,0 +1,68 @@
+/**
+ * fd-2d of a nonlinear fin with its discretisation error: the grid family of the linear study
+ * (fin2dStudy.ts, gridFamily2D: three grids refined by exactly 2 in both directions), each grid solved by
+ * Newton (nonlinear2d.ts) from the previous grid's solution (nested iteration: 2-4 steps on the finer
+ * grids), then Richardson extrapolation and the Grid Convergence Index of Celik et al. 2008, J. Fluids Eng.
+ * 130(7), 078001 (refinement.ts), exactly as for a linear fin.
+ * Grid sizing: the family resolves the decay length 1/m with m from the largest position part of h; a
+ * radiating fin adds its radiative tangent coefficient 4 ε σ T^3 at the hotter of the base and the
+ * surroundings, so a fin cooled mostly (or only) by radiation gets the cells its decay length needs.
+ * A linear case gets the linear study's grids exactly.
+ */
+import type { Case } from '../../case/types.js';
+import { DEFAULT_GRADING } from './linear-solve.js';
+import { gridFamily2D, maxCoefficient, summariseStudy2D, type Fin2DGridValue, type Fin2DStudy, type Fin2DStudyOptions } from './linear-study.js';
+import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../problem/fin-problem.js';
+import { solveNonlinearFin2DProblem, type NonlinearFin2DResult } from './nonlinear-solve.js';
+import type { Newton2DOptions } from './newton-system.js';
+import { nonlinearFin2DProblem, type NonlinearFin2DProblem } from './nonlinear-problem.js';
+
+export type NonlinearFin2DStudyOptions = Omit<Fin2DStudyOptions, 'solver' | 'method'> & Newton2DOptions;
+
+export interface NonlinearFin2DStudy extends Fin2DStudy {
+  readonly finest: NonlinearFin2DResult;
+  /** Newton steps on each grid (every attempt and continuation stage), coarsest first. */
+  readonly iterations: number[];
+}
+
+export function studyNonlinearFin2D(c: Case, opts: NonlinearFin2DStudyOptions = {}): NonlinearFin2DStudy {
+  return studyNonlinearFin2DProblem(nonlinearFin2DProblem(c), opts);
+}
+
+export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts: NonlinearFin2DStudyOptions = {}): NonlinearFin2DStudy {
+  const grids = gridFamily2D(sizingProblem(problem), opts);
+  const results: NonlinearFin2DResult[] = [];
+  const values: Fin2DGridValue[] = [];
+  for (const g of grids) {
+    const previous = results[results.length - 1];
+    const r = solveNonlinearFin2DProblem(
+      problem,
+      {
+        ...opts,
+        nx: g.nx,
+        ny: g.ny,
+        baseGrading: opts.baseGrading ?? DEFAULT_GRADING.base,
+        faceGrading: opts.faceGrading ?? DEFAULT_GRADING.face,
+      },
+      previous,
+    );
+    results.push(r);
+    values.push({ nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance });
+  }
+  const study = summariseStudy2D(results, values);
+  return {
+    ...study,
+    finest: results[results.length - 1] as NonlinearFin2DResult,
+    iterations: results.map((r) => r.newton.totalIterations + r.newton.coarseGridIterations),
+  };
+}
+
+/** The linear problem whose h sizes the grids (header). */
+function sizingProblem(problem: NonlinearFin2DProblem): NonlinearFin2DProblem['linear'] {
+  const { linear, physics } = problem;
+  const emissivity = physics.radiation.emissivity;
+  if (emissivity === 0) return linear;
+  const hottest = Math.max(linear.thetaBase + linear.ambient_degC + KELVIN_OFFSET, physics.radiation.surroundings_K);
+  const radiative = 4 * emissivity * STEFAN_BOLTZMANN * hottest ** 3;
+  return { ...linear, h: { kind: 'uniform', h: maxCoefficient(linear) + radiative } };
+}
