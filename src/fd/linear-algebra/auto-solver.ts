@@ -10,7 +10,8 @@
  * MAX_BANDED_BYTES; the short direction is numbered fastest (the matrix is transposed when the grid has
  * fewer nodes along than across).
  */
-import { factorBanded, solveWithRefinement, type BandedFactor } from './banded-cholesky.js';
+import type { BandedFactor } from './banded-factor.js';
+import { factorBanded, solveWithRefinement } from './banded-solve.js';
 import { buildMultigrid, type Multigrid } from './multigrid.js';
 import { solveMgPcg } from './pcg.js';
 import { transposeField, transposeStencil9, type Solver2D, type System2D } from './stencil9.js';

@@ -9,16 +9,8 @@
  * Algorithm 4.3.5 (band Cholesky) [from memory]. Factor once, solve as often as needed.
  */
 import { SolverError } from '../../errors.js';
-import { factorBandedLdltRowSums } from './banded-ldlt.js';
-import { coupledRhsNorm1, residual, type Solver2D, type Stencil9, type System2D } from './stencil9.js';
-
-/** A stored factorisation of a banded system: factor once, solve many times. */
-export interface BandedFactor {
-  readonly size: number;
-  readonly bandwidth: number;
-  /** Solves A x = rhs with the stored factor; writes into `out` when given (it may be `rhs`). */
-  solve(rhs: Float64Array, out?: Float64Array): Float64Array;
-}
+import type { BandedFactor } from './banded-factor.js';
+import type { Stencil9 } from './stencil9.js';
 
 export interface BandedCholesky extends BandedFactor {
   /** Smallest pivot^2 / A_pp: how much of the diagonal survived the elimination (1e-8 = 8 digits lost). */
@@ -30,7 +22,34 @@ export function bandedCholeskyBytes(nodesX: number, nodesY: number): number {
   return nodesX * nodesY * (nodesY + 3) * 8;
 }
 
+/** A Cholesky factor, or the pivot that showed the matrix is not positive definite. */
+export type CholeskyOutcome =
+  | { readonly ok: true; readonly factor: BandedCholesky }
+  | { readonly ok: false; readonly pivot: number; readonly unknown: number };
+
+/** The factor; a SolverError when the matrix is not positive definite. */
 export function factorBandedCholesky(a: Stencil9): BandedCholesky {
+  const outcome = tryFactorBandedCholesky(a);
+  if (!outcome.ok) throw notPositiveDefinite(outcome);
+  return outcome.factor;
+}
+
+/** The SolverError of a failed factorisation. */
+export function notPositiveDefinite(failure: { readonly pivot: number; readonly unknown: number }): SolverError {
+  return new SolverError(
+    `banded Cholesky: the 2-D system is not positive definite (pivot ${failure.pivot.toExponential(3)} at unknown ${failure.unknown}); check the boundary conditions`,
+  );
+}
+
+/** Failure record filled by finishRow (pivot and unknown of the first non-positive pivot). */
+interface PivotFailure {
+  pivot: number;
+  unknown: number;
+}
+
+/** The factor, or the first non-positive pivot (the matrix is then not positive definite). */
+export function tryFactorBandedCholesky(a: Stencil9): CholeskyOutcome {
+  const failure: PivotFailure = { pivot: Number.NaN, unknown: -1 };
   const ny = a.nodesY;
   const n = a.nodesX * ny;
   const w = hasDiagonalCouplings(a) ? ny + 1 : ny;
@@ -88,12 +107,15 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
       band[rowP + q + 1] = ((band[rowP + q + 1] as number) - pr - lpq * lrq) * (invDiag[q + 1] as number);
       band[rowS + q + 1] = ((band[rowS + q + 1] as number) - sr - lsq * lrq) * (invDiag[q + 1] as number);
     }
-    pivotRatio = Math.min(pivotRatio, finishRow(a, band, invDiag, w, p, q));
-    pivotRatio = Math.min(pivotRatio, finishRow(a, band, invDiag, w, p + 1, q));
+    pivotRatio = Math.min(pivotRatio, finishRow(a, band, invDiag, w, p, q, failure));
+    if (failure.unknown >= 0) return { ok: false, pivot: failure.pivot, unknown: failure.unknown };
+    pivotRatio = Math.min(pivotRatio, finishRow(a, band, invDiag, w, p + 1, q, failure));
+    if (failure.unknown >= 0) return { ok: false, pivot: failure.pivot, unknown: failure.unknown };
   }
-  if (p < n) pivotRatio = Math.min(pivotRatio, finishRow(a, band, invDiag, w, p, 0));
+  if (p < n) pivotRatio = Math.min(pivotRatio, finishRow(a, band, invDiag, w, p, 0, failure));
+  if (failure.unknown >= 0) return { ok: false, pivot: failure.pivot, unknown: failure.unknown };
 
-  return {
+  const factor: BandedCholesky = {
     size: n,
     bandwidth: w,
     pivotRatio,
@@ -104,13 +126,15 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
       return out;
     },
   };
+  return { ok: true, factor };
 }
 
 /**
  * Completes row p of L from column qStart (the columns before it are final) and its pivot; returns
- * pivot^2 / A_pp. Throws when the matrix is not positive definite.
+ * pivot^2 / A_pp. A non-positive pivot (the matrix is not positive definite) is recorded in `failure`
+ * and ends the row.
  */
-function finishRow(a: Stencil9, band: Float64Array, invDiag: Float64Array, w: number, p: number, qStart: number): number {
+function finishRow(a: Stencil9, band: Float64Array, invDiag: Float64Array, w: number, p: number, qStart: number, failure: PivotFailure): number {
   const rowLength = w + 1;
   const rowP = p * rowLength - p + w;
   const q0 = p > w ? p - w : 0;
@@ -132,9 +156,9 @@ function finishRow(a: Stencil9, band: Float64Array, invDiag: Float64Array, w: nu
     d -= l * l;
   }
   if (!(d > 0)) {
-    throw new SolverError(
-      `banded Cholesky: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${p}); check the boundary conditions`,
-    );
+    failure.pivot = d;
+    failure.unknown = p;
+    return Number.NaN;
   }
   const root = Math.sqrt(d);
   band[rowP + p] = root;
@@ -173,78 +197,6 @@ function triangularSolves(band: Float64Array, invDiag: Float64Array, n: number, 
     if (k === kEnd) s0 -= (band[at] as number) * (y[k] as number);
     y[p] = (s0 + s1) * (invDiag[p] as number);
   }
-}
-
-/**
- * Refinement target for |r|_1 relative to the coupled rows' |rhs|_1 (residual in difference form when the
- * system carries its row sums). On very elongated cells the couplings across the fin exceed those along
- * it by (dx/dy)^2, and round-off in the large ones shows in the small heat flows; iterative refinement
- * in working precision with an accurate residual removes it (Skeel 1980, Math. Comp. 35, 817-832 [from
- * memory]). The energy balance of a fin solution was measured at ~40x this relative residual (thin
- * annular fins, cell aspect up to 40: one unrefined solve gave 4.7e-11 and a balance of 1.9e-9), so
- * 1e-12 keeps balances near 4e-11 while typical grids (~3e-13) need no refinement step.
- */
-const REFINE_TOLERANCE = 1e-12;
-/**
- * A Cholesky factor whose pivots kept at least this fraction of their diagonal has not lost the small
- * heat flows: measured relative residuals <= 2.2e-12 (energy balance ~1e-10) on the fin grids, where the
- * grids that needed refinement had pivot ratios of 4e-4 and below. The residual check is then skipped
- * (it costs about a third of the solve on thin grids).
- */
-const HEALTHY_PIVOT_RATIO = 1e-2;
-const MAX_REFINEMENTS = 4;
-
-/**
- * Below this pivot ratio ordinary Cholesky has lost more than half the digits of some pivot (couplings of
- * very different sizes): the row-sum-preserving LDL^T is used instead (bandedLdlt.ts).
- */
-const CANCELLATION_LIMIT = 1e-8;
-
-/**
- * The factor of a 2-D system: Cholesky, or when it shows cancellation (or fails) and the system carries
- * its exact row sums, the row-sum-preserving LDL^T.
- */
-export function factorBanded(system: System2D): BandedFactor {
-  try {
-    const f = factorBandedCholesky(system.matrix);
-    if (f.pivotRatio >= CANCELLATION_LIMIT || system.excess === undefined) return f;
-  } catch (e) {
-    if (!(e instanceof SolverError) || system.excess === undefined) throw e;
-  }
-  return factorBandedLdltRowSums(system.matrix, system.excess);
-}
-
-/**
- * Solve with a stored factor, then refine while the residual is above round-off: until |r|_1 is below
- * REFINE_TOLERANCE times the right-hand side of the coupled rows (rows of fixed nodes are identities and
- * carry no heat flow), or stops falling by half (its evaluation has reached round-off), at most
- * MAX_REFINEMENTS steps.
- */
-export function solveWithRefinement(factor: BandedFactor, system: System2D): Float64Array {
-  const x = factor.solve(system.rhs);
-  if ('pivotRatio' in factor && (factor as BandedCholesky).pivotRatio >= HEALTHY_PIVOT_RATIO) return x;
-  const scale = coupledRhsNorm1(system);
-  const r: Float64Array = new Float64Array(x.length);
-  residual(system, x, r);
-  let size = norm1(r);
-  for (let step = 0; step < MAX_REFINEMENTS && size > REFINE_TOLERANCE * scale; step++) {
-    const dx = factor.solve(r);
-    for (let p = 0; p < x.length; p++) x[p] = (x[p] as number) + (dx[p] as number);
-    residual(system, x, r);
-    const next = norm1(r);
-    if (next > 0.5 * size) break;
-    size = next;
-  }
-  return x;
-}
-
-/** One-shot solver: factor, solve, refine if needed. */
-export const bandedCholeskySolver: Solver2D = (system: System2D) => solveWithRefinement(factorBanded(system), system);
-
-function norm1(v: Float64Array): number {
-  let s = 0;
-  for (let p = 0; p < v.length; p++) s += Math.abs(v[p] as number);
-  return s;
 }
 
 /** false for a 5-point operator: its band can be one narrower (w = nodesY). */

@@ -14,10 +14,10 @@
  * distributions for Markov chains", Oper. Res. 33, 1107-1116 [from memory], applied to a symmetric band.
  * Storage: the upper band of S row by row, U[i * (w + 1) + t] = S(i, i + t), t = 1..w, w = nodesY + 1.
  * Cost ~ N w^2 / 2 multiply-adds, as for Cholesky, but right-looking (writes the trailing band), so slower;
- * the solver uses it only when ordinary Cholesky shows cancellation (bandedCholesky.ts).
+ * the solver uses it only when ordinary Cholesky shows cancellation (banded-solve.ts).
  */
 import { SolverError } from '../../errors.js';
-import type { BandedFactor } from './banded-cholesky.js';
+import type { BandedFactor } from './banded-factor.js';
 import type { Stencil9 } from './stencil9.js';
 
 export function factorBandedLdltRowSums(a: Stencil9, rowSums: Float64Array): BandedFactor {

@@ -21,7 +21,7 @@
  * with the factors u_i / d'_i and l_j / d'_j kept from the sweeps (one array read per back step).
  * Algebraically the same solution as Thomas for any nonsingular system without pivoting.
  */
-import type { TridiagonalSolver, TridiagonalSystem } from './tridiagonal.js';
+import type { TridiagonalSolver, TridiagonalSystem } from './tridiagonal-system.js';
 
 /** Row sums diag + lower + upper of a system that does not carry them (rounded as stored). */
 function rowSumsOf(system: TridiagonalSystem): Float64Array {

@@ -12,7 +12,8 @@
  * relaxation cannot smooth along y, and semicoarsening along x alone keeps the cycle robust (line
  * relaxation + semicoarsening: Trottenberg, Oosterlee & Schuller 2001, section 5.1 [from memory]).
  */
-import { factorBandedCholesky, type BandedFactor } from './banded-cholesky.js';
+import { factorBandedCholesky } from './banded-cholesky.js';
+import type { BandedFactor } from './banded-factor.js';
 import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, restrictEvenColumns, type Transfer1D } from './coarsen.js';
 import { toFullStencil, toStencil9, type FullStencil } from './full-stencil.js';
 import { factorLines, zebraFromZero, zebraLineGaussSeidel, type LineFactors } from './line-smoother.js';

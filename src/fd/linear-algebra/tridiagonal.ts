@@ -22,36 +22,10 @@
  * conservative-thomas.ts (the default, `solveTridiagonal`): they keep that small part exactly.
  */
 import { conservativeThomas } from './conservative-thomas.js';
+import type { TridiagonalSolver, TridiagonalSystem } from './tridiagonal-system.js';
 
-export interface TridiagonalSystem {
-  readonly lower: Float64Array;
-  readonly diag: Float64Array;
-  readonly upper: Float64Array;
-  readonly rhs: Float64Array;
-  /**
-   * Optional row sums diag[i] + lower[i] + upper[i] (lower[0] and upper[n-1] taken as 0), formed
-   * from their parts before rounding. In a diagonally dominant M-matrix the diagonal in floating
-   * point has lost most digits of this small sum; the row-sum solvers use it instead.
-   */
-  readonly rowSum?: Float64Array;
-}
-
-/** A system that carries its row sums, as the fin assembly returns. */
-export type RowSumSystem = Required<TridiagonalSystem>;
-
-/** A direct solver: returns x with A x = rhs (a new array). */
-export type TridiagonalSolver = (system: TridiagonalSystem) => Float64Array;
-
-/** A zeroed system of n rows (with row sums). */
-export function createTridiagonalSystem(n: number): RowSumSystem {
-  return {
-    lower: new Float64Array(n),
-    diag: new Float64Array(n),
-    upper: new Float64Array(n),
-    rhs: new Float64Array(n),
-    rowSum: new Float64Array(n),
-  };
-}
+export type { RowSumSystem, TridiagonalSolver, TridiagonalSystem } from './tridiagonal-system.js';
+export { createTridiagonalSystem } from './tridiagonal-system.js';
 
 /**
  * One-sided Thomas solve into caller-provided arrays (no allocation).

@@ -21,7 +21,7 @@
 import type { Mesh1D } from '../../mesh/types.js';
 import { applyBaseBoundary, applyTipBoundary, type BaseBoundary, type TipBoundary } from './boundary.js';
 import { convectiveConductance, interfaceConductance } from './conductance.js';
-import { createTridiagonalSystem, type RowSumSystem } from '../linear-algebra/tridiagonal.js';
+import { createTridiagonalSystem, type RowSumSystem } from '../linear-algebra/tridiagonal-system.js';
 
 /**
  * Assembles the fin system on a mesh for conductivity k (W/(m*K)) and nodal h (W/(m^2*K)).

@@ -22,7 +22,7 @@
 import type { Case } from '../../case/types.js';
 import type { Mesh1D } from '../../mesh/types.js';
 import { convectiveConductance, interfaceConductance } from './conductance.js';
-import type { RowSumSystem } from '../linear-algebra/tridiagonal.js';
+import type { RowSumSystem } from '../linear-algebra/tridiagonal-system.js';
 
 /**
  * A solution as the heat rates read it: θ_i = reference - drop_i (K). Differences of θ come from the

@@ -13,7 +13,7 @@
  * constant θ_ref, up to the convective row sums) is the usual cure for cancellation, cf. Higham, N. J.,
  * Accuracy and Stability of Numerical Algorithms (2nd ed., 2002), §1.7 [from memory for the section].
  */
-import type { RowSumSystem } from '../linear-algebra/tridiagonal.js';
+import type { RowSumSystem } from '../linear-algebra/tridiagonal-system.js';
 
 /** The system for δ = reference - x, sharing lower, diag, upper and rowSum with `system`. */
 export function dropSystem(system: RowSumSystem, reference: number, rhs?: Float64Array): RowSumSystem {

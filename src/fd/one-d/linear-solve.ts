@@ -20,7 +20,7 @@ import type { LinearFinCase } from '../problem/linear-case.js';
 import { finProblem1D, type FinProblem1D } from './problem.js';
 import { richardsonGci, type RefinementStudy } from '../study/refinement.js';
 import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js';
-import { createTridiagonalSystem, type RowSumSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal.js';
+import { createTridiagonalSystem, type RowSumSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
 
 export interface Fin1DOptions {
   /** Number of nodes (cells + 1); more when breakpoints need at least one cell per segment. */

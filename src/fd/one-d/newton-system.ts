@@ -32,7 +32,7 @@ import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js
 import { tipLoss, type FlowAndSlope, type NonlinearBoundaries } from './newton-boundary.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
 import { cvLosses, type FaceLaw } from '../problem/surface-law.js';
-import { createTridiagonalSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal.js';
+import { createTridiagonalSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
 
 /** Everything about one mesh that the iteration does not change. */
 export interface NewtonSetup {
