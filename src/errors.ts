@@ -32,9 +32,44 @@ export class UsageError extends Error {
   override name = 'UsageError';
 }
 
+/**
+ * What a caller of the solver can change when a solve fails, besides the physics the message names.
+ * Library code states them in the problem's words; the command line maps each to its own options.
+ */
+export type SolverRemedy = 'change-grid' | 'use-1d-model';
+
 export class SolverError extends Error {
   readonly exitCode = 3;
   override name = 'SolverError';
+  constructor(
+    message: string,
+    /** What else may help (grid, model), for the command line to name its options. */
+    readonly remedies: readonly SolverRemedy[] = [],
+  ) {
+    super(message);
+  }
+}
+
+/**
+ * A model asked of a fin it does not cover (e.g. fd-2d on a nonlinear fin with an infinite tip).
+ * `reason` says why in the problem's words; ask first with modelApplies (src/fd) to avoid it.
+ */
+export class ModelNotApplicableError extends UsageError {
+  override name = 'ModelNotApplicableError';
+  constructor(
+    readonly model: 'fd-1d' | 'fd-2d',
+    readonly reason: string,
+  ) {
+    super(`${model}: ${reason}`);
+  }
+}
+
+/** A grid the model cannot use (too few or too many nodes); `reason` in the problem's words. */
+export class GridError extends UsageError {
+  override name = 'GridError';
+  constructor(readonly reason: string) {
+    super(`grid: ${reason}`);
+  }
 }
 
 export function formatIssues(issues: InputIssue[], file?: string): string {

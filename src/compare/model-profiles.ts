@@ -47,7 +47,7 @@ import type { Fin2DStudy } from '../fd/two-d/linear-study.js';
 import { isLinearFinCase, type LinearFinCase } from '../fd/problem/linear-case.js';
 import type { Case } from '../case/types.js';
 import { faceFlux, faceLaw } from '../fd/problem/surface-law.js';
-import { nonlinearFinProblem1D } from '../fd/problem/fin-problem.js';
+import { finProblem } from '../fd/problem/fin-problem.js';
 import { conductivityAt, linearSurrogate } from './linear-surrogate.js';
 import { finGeometry } from '../mesh/geometry1d.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
@@ -266,7 +266,7 @@ function oneDProfileGeneric(c: Case, oneD: Fin1DStudy): ModelProfile {
 
 /** Heat flux leaving the face at distance x from the base (m) and excess theta (K), W/m^2 (header). */
 function faceFluxAlong(c: Case, length: number): (x: number, theta: number) => number {
-  const problem = nonlinearFinProblem1D(c);
+  const problem = finProblem(c);
   const law = faceLaw(problem);
   return (x, theta) => faceFlux(law, hAt(problem.h, x, length), theta);
 }

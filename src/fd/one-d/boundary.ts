@@ -19,10 +19,13 @@
  *                Q_tip = sqrt(h_L P_L k A_L) θ_{n-1} (exact for a uniform fin: Incropera et al.,
  *                Fundamentals of Heat and Mass Transfer, Table 3.4 case D, q = sqrt(hPkA) θ_b).
  */
-import type { Case } from '../../case/types.js';
 import type { Mesh1D } from '../../mesh/types.js';
 import { convectiveConductance, interfaceConductance } from './conductance.js';
 import type { RowSumSystem } from '../linear-algebra/tridiagonal-system.js';
+import type { BaseBoundary, TipBoundary } from '../problem/conditions.js';
+
+export type { BaseBoundary, TipBoundary } from '../problem/conditions.js';
+export { baseBoundary, tipBoundary } from '../problem/conditions.js';
 
 /**
  * A solution as the heat rates read it: θ_i = reference - drop_i (K). Differences of θ come from the
@@ -36,47 +39,6 @@ export interface ExcessField {
 /** The field of a plain θ array (differences then carry the round-off of θ itself). */
 export function fieldFromTheta(theta: Float64Array): ExcessField {
   return { reference: 0, drop: theta.map((t) => -t) };
-}
-
-export type BaseBoundary =
-  /** Fixed base excess temperature θ_b, K. */
-  | { readonly kind: 'temperature'; readonly theta: number }
-  /** Wall at θ_b (K) behind a contact resistance per unit base area, m^2 K/W (> 0). */
-  | { readonly kind: 'contact'; readonly theta: number; readonly resistance: number };
-
-export type TipBoundary =
-  | { readonly kind: 'adiabatic' }
-  /** Tip coefficient in W/(m^2 K), or 'local' for the face coefficient at the tip. */
-  | { readonly kind: 'convective'; readonly h: number | 'local' }
-  /** Fixed tip excess temperature θ_L, K. */
-  | { readonly kind: 'temperature'; readonly theta: number }
-  | { readonly kind: 'infinite' };
-
-/** The base condition of a case: contact when a contact resistance is given, else temperature. */
-export function baseBoundary(c: Case): BaseBoundary {
-  const theta = c.base.T_degC - c.convection.ambient_degC;
-  return c.base.contactResistance > 0
-    ? { kind: 'contact', theta, resistance: c.base.contactResistance }
-    : { kind: 'temperature', theta };
-}
-
-/** The tip condition of a case. */
-export function tipBoundary(c: Case): TipBoundary {
-  const tip = c.convection.tip;
-  switch (tip.kind) {
-    case 'adiabatic':
-      return { kind: 'adiabatic' };
-    case 'convective':
-      return { kind: 'convective', h: tip.h ?? 'local' };
-    case 'temperature':
-      return { kind: 'temperature', theta: tip.T_degC - c.convection.ambient_degC };
-    case 'infinite':
-      return { kind: 'infinite' };
-    default: {
-      const never: never = tip;
-      throw new Error(`unknown tip condition ${JSON.stringify(never)}`);
-    }
-  }
 }
 
 /** Conductance C_b = A_b / R'' of a contact base, W/K. */

@@ -19,6 +19,7 @@ import { finEffectiveness, finHeatRates, idealHeatRate } from './heat-rate.js';
 import type { LinearFinCase } from '../problem/linear-case.js';
 import { finProblem1D, type FinProblem1D } from './problem.js';
 import { richardsonGci, type RefinementStudy } from '../study/refinement.js';
+import { solveGrids } from '../study/refinement-loop.js';
 import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js';
 import { createTridiagonalSystem, type RowSumSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
 
@@ -197,7 +198,7 @@ export function studyGrids(nodeCounts: readonly number[] | undefined, where: str
  * finest heat rate.
  */
 export function studyFinProblem1D(problem: FinProblem1D, opts: Fin1DStudyOptions = {}): Fin1DStudy {
-  const results = studyGrids(opts.nodes, 'studyFin1D').map((g) =>
+  const results = solveGrids(studyGrids(opts.nodes, 'studyFin1D'), (g) =>
     solveFinProblem1D(problem, { ...g, grading: opts.grading ?? 'auto', ...(opts.solver ? { solver: opts.solver } : {}) }),
   );
   const study = richardsonGci(results.map((r) => ({ size: r.mesh.cellSize, value: r.heatRate })));

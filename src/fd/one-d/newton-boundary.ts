@@ -31,7 +31,7 @@ import { contactConductance, type BaseBoundary, type TipBoundary } from './bound
 import { hAt } from '../problem/convection.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
 import { convectedExcess, equilibriumExcess, faceFlux, faceFluxSlope, radiationGap, type FaceLaw } from '../problem/surface-law.js';
-import type { NonlinearFinProblem1D } from '../problem/fin-problem.js';
+import type { FinProblem } from '../problem/fin-problem.js';
 
 export interface NonlinearBoundaries {
   readonly base: BaseBoundary;
@@ -54,7 +54,7 @@ export interface FlowAndSlope {
   slope: number;
 }
 
-export function nonlinearBoundaries(problem: NonlinearFinProblem1D, mesh: Mesh1D, law: FaceLaw, kirchhoff: KirchhoffTransform): NonlinearBoundaries {
+export function nonlinearBoundaries(problem: FinProblem, mesh: Mesh1D, law: FaceLaw, kirchhoff: KirchhoffTransform): NonlinearBoundaries {
   const hxTip = hAt(problem.h, mesh.length, mesh.length);
   return {
     base: problem.base,

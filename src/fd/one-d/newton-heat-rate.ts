@@ -28,7 +28,7 @@ import { idealHeatRate, type FinHeatRates1D } from './heat-rate.js';
 import { tipLoss } from './newton-boundary.js';
 import { cvLosses, radiationGap } from '../problem/surface-law.js';
 import type { NewtonSetup } from './newton-system.js';
-import type { NonlinearFinProblem1D } from '../problem/fin-problem.js';
+import type { FinProblem } from '../problem/fin-problem.js';
 
 /** Base and surface heat rates of a solution given by its drops d = θ_b - θ (K), and their energy balance. */
 export function nonlinearHeatRates(setup: NewtonSetup, drop: Float64Array): FinHeatRates1D {
@@ -63,7 +63,7 @@ function baseRadiation(setup: NewtonSetup, thetaBase: number): number {
 }
 
 /** Q_ideal, W (header). */
-export function nonlinearIdealHeatRate(problem: NonlinearFinProblem1D, setup: NewtonSetup): number {
+export function nonlinearIdealHeatRate(problem: FinProblem, setup: NewtonSetup): number {
   const geometry: FinGeometry1D = problem.geometry;
   const thetaBase = problem.base.theta;
   const convective = idealHeatRate(geometry, problem.h, problem.tip, thetaBase);
@@ -73,7 +73,7 @@ export function nonlinearIdealHeatRate(problem: NonlinearFinProblem1D, setup: Ne
 }
 
 /** Effectiveness ε_f (header); NaN when the bare base would lose no heat (T_b = T_s without convection). */
-export function nonlinearEffectiveness(heatRate: number, problem: NonlinearFinProblem1D, setup: NewtonSetup): number {
+export function nonlinearEffectiveness(heatRate: number, problem: FinProblem, setup: NewtonSetup): number {
   const geometry = problem.geometry;
   const thetaBase = problem.base.theta;
   const hx0 = hAt(problem.h, 0, geometry.length);

@@ -18,10 +18,10 @@ import { nonlinearBoundaries } from './newton-boundary.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { faceLaw } from '../problem/surface-law.js';
 import { newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup } from './newton-system.js';
-import { isLinearProblem, scaleNonlinearity, type NonlinearFinProblem1D } from '../problem/fin-problem.js';
+import { isLinearProblem, scaleNonlinearity, type FinProblem } from '../problem/fin-problem.js';
 
 /** The discrete operators of a problem on a mesh (nonlinear-newton.ts, NewtonSetup). */
-export function newtonSetup(problem: NonlinearFinProblem1D, mesh: Mesh1D): NewtonSetup {
+export function newtonSetup(problem: FinProblem, mesh: Mesh1D): NewtonSetup {
   const n = mesh.nodes;
   const kirchhoff = kirchhoffTransform(problem.conductivity, problem.ambient_degC, problem.base.theta);
   const K = new Float64Array(n - 1);
@@ -64,7 +64,7 @@ export interface MeshSolve {
  * the base temperature); throws SolverError when it cannot.
  */
 export function solveNonlinearOnMesh(
-  problem: NonlinearFinProblem1D,
+  problem: FinProblem,
   mesh: Mesh1D,
   opts: NewtonOptions = {},
   initial?: Float64Array,
@@ -100,7 +100,7 @@ function summary(setup: NewtonSetup, outcome: NewtonOutcome, total: number, halv
 }
 
 /** What makes the problem nonlinear, as advice on what to change. */
-function advice(problem: NonlinearFinProblem1D): string {
+function advice(problem: FinProblem): string {
   const items: string[] = [];
   if (problem.exponent > 0) items.push(`lower the exponent of the power-law h (now ${problem.exponent})`);
   if (problem.exponent < 0) {
@@ -114,15 +114,16 @@ function advice(problem: NonlinearFinProblem1D): string {
     items.push(`give a smoother conductivity table (k runs from ${lo} to ${hi} W/(m*K))`);
   }
   if (items.length === 0) return 'this case is linear and should never fail to converge: please report it, with the case file';
-  items.push('or change the number of nodes (--nodes)');
+  items.push('or change the number of nodes');
   return items.join(', ');
 }
 
-function failure(problem: NonlinearFinProblem1D, mesh: Mesh1D, outcome: NewtonOutcome, reached: number): SolverError {
+function failure(problem: FinProblem, mesh: Mesh1D, outcome: NewtonOutcome, reached: number): SolverError {
   const progress = reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '';
   return new SolverError(
     `fd-1d (nonlinear fin) did not converge on ${mesh.nodes} nodes: ${outcome.failure ?? 'unknown reason'}` +
       ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})${progress}. ` +
       `To get a solution: ${advice(problem)}.`,
+    isLinearProblem(problem) ? [] : ['change-grid'],
   );
 }

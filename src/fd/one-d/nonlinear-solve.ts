@@ -47,10 +47,12 @@ import type { Grading, Mesh1D } from '../../mesh/types.js';
 import { autoGrading, studyGrids, type Fin1DResult } from './linear-solve.js';
 import { hBreakpoints } from '../problem/convection.js';
 import type { NewtonOptions } from './newton-system.js';
-import { isLinearProblem, nonlinearFinProblem1D, type NonlinearFinProblem1D } from '../problem/fin-problem.js';
+import { isLinearProblem, finProblem, type FinProblem } from '../problem/fin-problem.js';
 import { nonlinearEffectiveness, nonlinearHeatRates, nonlinearIdealHeatRate } from './newton-heat-rate.js';
 import { solveNonlinearOnMesh, type MeshSolve } from './newton-solve.js';
+import type { NewtonReport } from '../newton/newton-report.js';
 import { richardsonGci, type RefinementStudy } from '../study/refinement.js';
+import { solveGrids } from '../study/refinement-loop.js';
 
 export interface NonlinearFin1DOptions extends NewtonOptions {
   /** Number of nodes (cells + 1); more when breakpoints need at least one cell per segment. */
@@ -61,22 +63,7 @@ export interface NonlinearFin1DOptions extends NewtonOptions {
   readonly nested?: boolean;
 }
 
-/** How the Newton iteration went on one grid. */
-export interface NewtonReport {
-  /** Newton steps on this grid (the last continuation stage, if any). */
-  readonly iterations: number;
-  /** Newton steps on this grid over every attempt and stage. */
-  readonly totalIterations: number;
-  /** Newton steps spent on the coarser grids that started this one. */
-  readonly coarseGridIterations: number;
-  /** Step-length halvings of the line search. */
-  readonly halvings: number;
-  /** Continuation stages (0: plain Newton converged). */
-  readonly continuationStages: number;
-  /** Final relative residual and relative heat-rate change of the last step. */
-  readonly residual: number;
-  readonly heatRateChange: number;
-}
+export type { NewtonReport } from '../newton/newton-report.js';
 
 export interface NonlinearFin1DResult extends Fin1DResult {
   readonly newton: NewtonReport;
@@ -101,7 +88,7 @@ export interface NonlinearFin1DStudy {
 const NESTED_MIN_CELLS = 64;
 const NESTED_RATIO = 8;
 
-function meshOf(problem: NonlinearFinProblem1D, cells: number, refine: number, grading: Grading | 'auto' | undefined): Mesh1D {
+function meshOf(problem: FinProblem, cells: number, refine: number, grading: Grading | 'auto' | undefined): Mesh1D {
   const geometry = problem.geometry;
   return buildMesh1D(geometry, {
     cells: Math.max(1, Math.round(cells)),
@@ -128,12 +115,12 @@ export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine
 }
 
 /** Drops d = θ_b - θ of an excess-temperature field, K. */
-function dropsOf(problem: NonlinearFinProblem1D, theta: Float64Array): Float64Array {
+function dropsOf(problem: FinProblem, theta: Float64Array): Float64Array {
   const reference = problem.base.theta;
   return theta.map((t) => reference - t);
 }
 
-function finish(problem: NonlinearFinProblem1D, solved: MeshSolve, coarseGridIterations: number): NonlinearFin1DResult {
+function finish(problem: FinProblem, solved: MeshSolve, coarseGridIterations: number): NonlinearFin1DResult {
   const { setup, theta, drop } = solved;
   const mesh = setup.mesh;
   const rates = nonlinearHeatRates(setup, drop);
@@ -165,10 +152,10 @@ function finish(problem: NonlinearFinProblem1D, solved: MeshSolve, coarseGridIte
  * Solves a nonlinear problem with `nodes` nodes (`refine`: nested refinement factor), from `start`
  * (a solution on a coarser mesh of the same fin) or, with `nested`, from a grid 8 times coarser.
  */
-export function solveNonlinearFinProblem1D(
-  problem: NonlinearFinProblem1D,
+export function solveNonlinearProblem1D(
+  problem: FinProblem,
   opts: NonlinearFin1DOptions & { readonly refine?: number },
-  start?: NonlinearFin1DResult,
+  start?: Fin1DResult,
 ): NonlinearFin1DResult {
   const cells = Math.max(1, Math.round(opts.nodes) - 1);
   const refine = opts.refine ?? 1;
@@ -179,7 +166,7 @@ export function solveNonlinearFinProblem1D(
   if (start !== undefined && !linear) {
     initial = dropsOf(problem, interpolateOnto(start.mesh, start.theta, mesh));
   } else if ((opts.nested ?? true) && !linear && cells * refine > NESTED_MIN_CELLS) {
-    const coarse = solveNonlinearFinProblem1D(problem, { ...opts, nodes: Math.ceil((cells * refine) / NESTED_RATIO) + 1, refine: 1 });
+    const coarse = solveNonlinearProblem1D(problem, { ...opts, nodes: Math.ceil((cells * refine) / NESTED_RATIO) + 1, refine: 1 });
     initial = dropsOf(problem, interpolateOnto(coarse.mesh, coarse.theta, mesh));
     coarseGridIterations = coarse.newton.totalIterations + coarse.newton.coarseGridIterations;
   }
@@ -188,7 +175,7 @@ export function solveNonlinearFinProblem1D(
 
 /** The fd-1d solution of any case (linear or not) on one grid of `nodes` nodes. */
 export function solveNonlinearFin1D(c: Case, opts: NonlinearFin1DOptions): NonlinearFin1DResult {
-  return solveNonlinearFinProblem1D(nonlinearFinProblem1D(c), opts);
+  return solveNonlinearProblem1D(finProblem(c), opts);
 }
 
 /**
@@ -196,12 +183,11 @@ export function solveNonlinearFin1D(c: Case, opts: NonlinearFin1DOptions): Nonli
  * counts are integer multiples of the coarsest; each grid starts from the previous grid's solution)
  * and estimates the discretisation error of the finest heat rate.
  */
-export function studyNonlinearFinProblem1D(problem: NonlinearFinProblem1D, opts: NonlinearFin1DStudyOptions = {}): NonlinearFin1DStudy {
-  const results: NonlinearFin1DResult[] = [];
-  for (const g of studyGrids(opts.nodes, 'studyNonlinearFin1D')) {
-    // Each grid starts from the previous (coarser) grid's solution.
-    results.push(solveNonlinearFinProblem1D(problem, { ...opts, ...g, grading: opts.grading ?? 'auto' }, results[results.length - 1]));
-  }
+export function studyNonlinearProblem1D(problem: FinProblem, opts: NonlinearFin1DStudyOptions = {}): NonlinearFin1DStudy {
+  // Each grid starts from the previous (coarser) grid's solution.
+  const results = solveGrids(studyGrids(opts.nodes, 'studyNonlinearFin1D'), (g, previous: NonlinearFin1DResult | undefined) =>
+    solveNonlinearProblem1D(problem, { ...opts, ...g, grading: opts.grading ?? 'auto' }, previous),
+  );
   const study = richardsonGci(results.map((r) => ({ size: r.mesh.cellSize, value: r.heatRate })));
   return {
     result: results[results.length - 1] as NonlinearFin1DResult,
@@ -212,5 +198,5 @@ export function studyNonlinearFinProblem1D(problem: NonlinearFinProblem1D, opts:
 
 /** Refinement study of any case (default grids DEFAULT_STUDY_NODES, as the linear study). */
 export function studyNonlinearFin1D(c: Case, opts: NonlinearFin1DStudyOptions = {}): NonlinearFin1DStudy {
-  return studyNonlinearFinProblem1D(nonlinearFinProblem1D(c), opts);
+  return studyNonlinearProblem1D(finProblem(c), opts);
 }

@@ -1,6 +1,14 @@
 /**
- * The nonlinear 1-D fin problem as plain data: what makes the fin equation nonlinear, split from what
- * the linear solver already knows (geometry, position-dependent h, base and tip conditions).
+ * The fin problem as plain data: the one problem every model of fd solves (1-D along the fin, 2-D across
+ * its thickness), linear or not. A linear fin is the special case n = 0, ε = 0, constant k.
+ *
+ * - geometry: the 1-D geometry A(x), P(x) (mesh/geometry1d.ts) and the case's profile, from which the
+ *   2-D section is built (mesh/grid2d-section.ts); the side edges of a straight fin, cooled or insulated;
+ * - conductivity law: a constant k, or k(T) from a table (conductivity.ts, Kirchhoff transform);
+ * - surface law (surface-law.ts): the position part h_x of h (uniform, linear or tabulated along x), the
+ *   exponent n of a power law in θ, grey radiation to the surroundings;
+ * - base: a fixed temperature, or a wall behind a contact resistance; tip: adiabatic, convective (the
+ *   face law or its own h), a fixed temperature, or infinitely long (one-d/boundary.ts).
  *
  * Equation (θ = T - T_amb in K, x from the base in m, T in K where absolute):
  *   d/dx(k(T) A(x) dT/dx) = P(x) [h_x(x) g(θ) θ + ε σ (T^4 - T_s^4)],   g(θ) = |θ/θ_b|^n,
@@ -10,10 +18,10 @@
  * W/(m^2 K^4) (CODATA 2018). |θ| keeps the law defined and odd when part of the fin is colder than the
  * fluid (the same power of the excess either way). k(T) in W/(m K): constant or a table over T.
  */
-import type { Case, Conductivity } from '../../case/types.js';
+import type { Case, Conductivity, Edges, Profile } from '../../case/types.js';
 import { finGeometry } from '../../mesh/geometry1d.js';
 import type { FinGeometry1D } from '../../mesh/types.js';
-import { baseBoundary, tipBoundary, type BaseBoundary, type TipBoundary } from '../one-d/boundary.js';
+import { baseBoundary, tipBoundary, type BaseBoundary, type TipBoundary } from './conditions.js';
 import type { LinearHDistribution } from './linear-case.js';
 
 /** Stefan-Boltzmann constant, W/(m^2 K^4) (CODATA 2018). */
@@ -28,8 +36,14 @@ export interface Radiation {
   readonly surroundings_K: number;
 }
 
-export interface NonlinearFinProblem1D {
+export interface FinProblem {
+  /** The case's name, for messages. */
+  readonly name: string;
   readonly geometry: FinGeometry1D;
+  /** The case's profile (the 2-D section is built from it). */
+  readonly profile: Profile;
+  /** Side edges of a straight fin (in `geometry` already; the 2-D section insulates them). */
+  readonly edges: Edges;
   readonly conductivity: Conductivity;
   /** Position part h_x of the convection coefficient, W/(m^2 K). */
   readonly h: LinearHDistribution;
@@ -42,11 +56,14 @@ export interface NonlinearFinProblem1D {
   readonly ambient_degC: number;
 }
 
-/** The nonlinear 1-D problem of any case (also valid, and then linear, for a linear case). */
-export function nonlinearFinProblem1D(c: Case): NonlinearFinProblem1D {
+/** The problem of a case. */
+export function finProblem(c: Case): FinProblem {
   const h = c.convection.h;
   return {
+    name: c.name,
     geometry: finGeometry(c),
+    profile: c.fin.profile,
+    edges: c.fin.edges,
     conductivity: c.material.k,
     h: h.kind === 'power' ? { kind: 'uniform', h: h.base } : h,
     exponent: h.kind === 'power' ? h.exponent : 0,
@@ -58,7 +75,7 @@ export function nonlinearFinProblem1D(c: Case): NonlinearFinProblem1D {
 }
 
 /** True when the problem is linear: n = 0, no radiation, constant k. */
-export function isLinearProblem(problem: NonlinearFinProblem1D): boolean {
+export function isLinearProblem(problem: FinProblem): boolean {
   return problem.exponent === 0 && problem.radiation.emissivity === 0 && problem.conductivity.kind === 'constant';
 }
 
@@ -67,7 +84,7 @@ export function isLinearProblem(problem: NonlinearFinProblem1D): boolean {
  * s ε, and k(T) = k_ref + s (k(T) - k_ref) with k_ref the conductivity at the ambient temperature.
  * s = 1 is the problem itself; s = 0 is linear.
  */
-export function scaleNonlinearity(problem: NonlinearFinProblem1D, s: number, kRef: number): NonlinearFinProblem1D {
+export function scaleNonlinearity(problem: FinProblem, s: number, kRef: number): FinProblem {
   if (s === 1) return problem;
   const k = problem.conductivity;
   const conductivity: Conductivity =

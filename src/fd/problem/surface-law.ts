@@ -15,7 +15,7 @@
  *   loss_i = G_i g(θ_i) θ_i + ε σ S_i (T_i^4 - T_s^4),   G_i = ∫_CV h_x P dx,   S_i = ∫_CV P dx,
  * so that with n = 0 and ε = 0 it is the linear scheme's G_i θ_i exactly. The derivative is diagonal.
  */
-import type { NonlinearFinProblem1D } from './fin-problem.js';
+import type { FinProblem } from './fin-problem.js';
 import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from './fin-problem.js';
 
 /** The face-flux law of a problem, with everything that does not depend on position. */
@@ -31,7 +31,7 @@ export interface FaceLaw {
   readonly surroundings_K: number;
 }
 
-export function faceLaw(problem: NonlinearFinProblem1D): FaceLaw {
+export function faceLaw(problem: FinProblem): FaceLaw {
   return {
     exponent: problem.exponent,
     inverseBaseExcess: 1 / Math.abs(problem.base.theta),

@@ -9,7 +9,7 @@
  * fin (width x section for straight fins, 2 pi x section for pins and annular fins).
  */
 import type { Case } from '../../case/types.js';
-import { UsageError } from '../../errors.js';
+import { GridError } from '../../errors.js';
 import { buildGrid2D, type Grid2D } from '../../mesh/grid2d.js';
 import { assembleConduction2D } from './assemble.js';
 import { buildSystem2D, discretizeBoundaries, lumpedIntegral } from './boundary.js';
@@ -157,17 +157,17 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   };
 }
 
-/** A usage error unless the grid has whole numbers >= 2 of nodes, one per profile point, and fits in memory. */
+/** A GridError unless the grid has whole numbers >= 2 of nodes, one per profile point, and fits in memory. */
 export function checkGrid2D(problem: Fin2DProblem, nx: number, ny: number): void {
   if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
-    throw new UsageError(`--grid: nodes along and across must be whole numbers >= 2 (got ${nx} x ${ny})`);
+    throw new GridError(`nodes along and across must be whole numbers >= 2 (got ${nx} x ${ny})`);
   }
   const segments = problem.section.breakpoints.length - 1;
   if (nx - 1 < segments) {
-    throw new UsageError(`--grid: the profile has ${segments + 1} points, so it needs at least ${segments + 1} nodes along (got ${nx})`);
+    throw new GridError(`the profile has ${segments + 1} points, so it needs at least ${segments + 1} nodes along (got ${nx})`);
   }
   if (nx * ny > MAX_NODES_2D) {
-    throw new UsageError(`--grid: ${nx} x ${ny} = ${nx * ny} nodes is more than the ${MAX_NODES_2D} that fit in about 1 GB`);
+    throw new GridError(`${nx} x ${ny} = ${nx * ny} nodes is more than the ${MAX_NODES_2D} that fit in about 1 GB`);
   }
 }
 

@@ -15,6 +15,7 @@ import type { Case } from '../../case/types.js';
 import { fin2dProblem, type Fin2DProblem } from './problem.js';
 import { DEFAULT_GRADING, solveFin2DProblem, type Fin2DResult } from './linear-solve.js';
 import { richardsonGci, type RefinementStudy } from '../study/refinement.js';
+import { solveGrids } from '../study/refinement-loop.js';
 import type { SolverMethod } from '../linear-algebra/auto-solver.js';
 import type { Solver2D } from '../linear-algebra/stencil9.js';
 
@@ -68,21 +69,25 @@ export function studyFin2D(c: Case, opts: Fin2DStudyOptions = {}): Fin2DStudy {
 
 export function studyFin2DProblem(problem: Fin2DProblem, opts: Fin2DStudyOptions = {}): Fin2DStudy {
   const grids = gridFamily2D(problem, opts);
-  const results: Fin2DResult[] = [];
-  const values: Fin2DGridValue[] = [];
-  for (const g of grids) {
-    const r = solveFin2DProblem(problem, {
+  const results = solveGrids(grids, (g) =>
+    solveFin2DProblem(problem, {
       nx: g.nx,
       ny: g.ny,
       baseGrading: opts.baseGrading ?? DEFAULT_GRADING.base,
       faceGrading: opts.faceGrading ?? DEFAULT_GRADING.face,
       ...(opts.solver ? { solver: opts.solver } : {}),
       ...(opts.method ? { method: opts.method } : {}),
-    });
-    results.push(r);
-    values.push({ nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance });
-  }
-  return summariseStudy2D(results, values);
+    }),
+  );
+  return summariseStudy2D(results, gridValues(grids, results));
+}
+
+/** The grid values (nodes, size, heat rate, efficiency, energy balance) of solved grids, coarsest first. */
+export function gridValues(grids: readonly { nx: number; ny: number; size: number }[], results: readonly Fin2DResult[]): Fin2DGridValue[] {
+  return results.map((r, k) => {
+    const g = grids[k] as { nx: number; ny: number; size: number };
+    return { nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance };
+  });
 }
 
 /**

@@ -20,7 +20,7 @@ import { discretizeBoundaries, lumpedIntegral, type BoundaryTerms2D } from './bo
 import type { KirchhoffTransform } from '../problem/conductivity.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { faceLaw, type FaceLaw } from '../problem/surface-law.js';
-import { isLinearProblem, type NonlinearFinProblem1D } from '../problem/fin-problem.js';
+import { isLinearProblem, type FinProblem } from '../problem/fin-problem.js';
 import type { NonlinearFin2DProblem } from './nonlinear-problem.js';
 import type { Stencil9 } from '../linear-algebra/stencil9.js';
 
@@ -81,7 +81,7 @@ export function gridOperators2D(problem: NonlinearFin2DProblem, grid: Grid2D): G
 }
 
 /** The laws of `physics` (the problem's own, or a continuation stage of it) on the grid operators. */
-export function newton2DSetup(problem: NonlinearFin2DProblem, physics: NonlinearFinProblem1D, ops: GridOperators2D): Newton2DSetup {
+export function newton2DSetup(problem: NonlinearFin2DProblem, physics: FinProblem, ops: GridOperators2D): Newton2DSetup {
   const law = faceLaw(physics);
   const kirchhoff = kirchhoffTransform(physics.conductivity, physics.ambient_degC, physics.base.theta);
   const sinkAcrossAmbient = law.radiative !== 0 && (law.surroundings_K - law.ambient_K) * physics.base.theta < 0;

@@ -19,11 +19,10 @@
  * fin2dCase.ts.
  */
 import type { Case } from '../../case/types.js';
-import { UsageError } from '../../errors.js';
-import { fin2dProblem, fin2dUnsupported, type Fin2DProblem } from './problem.js';
-import { isLinearFinCase, type LinearFinCase } from '../problem/linear-case.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
-import { nonlinearFinProblem1D, type NonlinearFinProblem1D } from '../problem/fin-problem.js';
+import { finProblem, type FinProblem } from '../problem/fin-problem.js';
+import { modelApplies, requireModel } from '../problem/model-applies.js';
+import { twoDProblem, type Fin2DProblem } from './problem.js';
 
 export interface NonlinearFin2DProblem {
   /**
@@ -32,35 +31,32 @@ export interface NonlinearFin2DProblem {
    */
   readonly linear: Fin2DProblem;
   /** The nonlinear laws (exponent, emissivity and surroundings, k(T), base excess) of the fin. */
-  readonly physics: NonlinearFinProblem1D;
+  readonly physics: FinProblem;
   /** How a convective tip loses heat: the face law at x = L, or its own constant h plus radiation. */
   readonly tipLaw: 'face' | 'own-h';
 }
 
-/** Why the nonlinear 2-D model cannot solve this case, or null when it can. */
+/** Why the 2-D model cannot solve this case, or null when it can (modelApplies). */
 export function nonlinear2dUnsupported(c: Case): string | null {
-  if (isLinearFinCase(c)) return fin2dUnsupported(c);
-  if (c.convection.tip.kind === 'infinite') {
-    return 'an infinite tip of a nonlinear fin is not modelled in 2-D (the cut fin is closed by a linear mode)';
-  }
-  return null;
+  const coverage = modelApplies(finProblem(c), '2d');
+  return coverage.ok ? null : coverage.reason;
 }
 
-/** The problem of any case the 2-D model covers; UsageError naming the reason otherwise. */
+/** The 2-D problem of any case the 2-D model covers; ModelNotApplicableError naming the reason otherwise. */
 export function nonlinearFin2DProblem(c: Case): NonlinearFin2DProblem {
-  const unsupported = nonlinear2dUnsupported(c);
-  if (unsupported !== null) throw new UsageError(`fd-2d: ${unsupported}; use the 1-D model`);
-  const physics = nonlinearFinProblem1D(c);
-  const tip = c.convection.tip;
-  const tipLaw = tip.kind === 'convective' && tip.h === null ? 'face' : 'own-h';
-  if (isLinearFinCase(c)) return { linear: fin2dProblem(c), physics, tipLaw };
-  const kRef = kirchhoffTransform(physics.conductivity, physics.ambient_degC, physics.base.theta).kRef;
-  // The same fin with h reduced to its position part, k to k_ref, and no radiation: its 2-D problem
-  // carries the section and every condition the nonlinear laws then act on.
-  const positionPart: LinearFinCase = {
-    ...c,
-    material: { ...c.material, k: { kind: 'constant', k: kRef } },
-    convection: { ...c.convection, h: physics.h, emissivity: 0 },
-  };
-  return { linear: fin2dProblem(positionPart), physics, tipLaw };
+  const problem = finProblem(c);
+  requireModel(problem, '2d');
+  return twoDFinProblem(problem);
+}
+
+/** The 2-D problem of a fin (the caller has asked modelApplies(problem, '2d')). */
+export function twoDFinProblem(physics: FinProblem): NonlinearFin2DProblem {
+  const tip = physics.tip;
+  const tipLaw = tip.kind === 'convective' && tip.h === 'local' ? 'face' : 'own-h';
+  // The same fin with h reduced to its position part, k to k_ref (the conductivity at the base
+  // temperature), and no radiation: its 2-D problem carries the section and every condition the
+  // nonlinear laws then act on. A linear fin is this problem itself.
+  const k = physics.conductivity;
+  const kRef = k.kind === 'constant' ? k.k : kirchhoffTransform(k, physics.ambient_degC, physics.base.theta).kRef;
+  return { linear: twoDProblem(physics, kRef), physics, tipLaw };
 }

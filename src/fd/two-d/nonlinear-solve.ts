@@ -24,8 +24,8 @@ import type { Case } from '../../case/types.js';
 import { SolverError } from '../../errors.js';
 import { buildGrid2D, type Grid2D } from '../../mesh/grid2d.js';
 import { checkGrid2D, DEFAULT_GRADING, gridLine, type Fin2DResult } from './linear-solve.js';
-import type { NewtonReport } from '../one-d/nonlinear-solve.js';
-import { scaleNonlinearity } from '../problem/fin-problem.js';
+import type { NewtonReport } from '../newton/newton-report.js';
+import { isLinearProblem, scaleNonlinearity } from '../problem/fin-problem.js';
 import { baseCoefficient, effectiveness2D, idealHeatRate2D } from './newton-heat-rate.js';
 import { newtonSolve2D, type Newton2DOptions, type Newton2DOutcome } from './newton-system.js';
 import { nonlinearFin2DProblem, type NonlinearFin2DProblem } from './nonlinear-problem.js';
@@ -57,7 +57,7 @@ export function solveNonlinearFin2D(c: Case, opts: NonlinearFin2DOptions): Nonli
  * Solves on an nx x ny grid, from `start` (a solution of the same problem on a coarser grid of the same
  * family, interpolated) or, with `nested`, from the grid with half the cells.
  */
-export function solveNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts: NonlinearFin2DOptions, start?: NonlinearFin2DResult): NonlinearFin2DResult {
+export function solveNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts: NonlinearFin2DOptions, start?: Fin2DResult): NonlinearFin2DResult {
   const { nx, ny } = opts;
   checkGrid2D(problem.linear, nx, ny);
   const grid = buildGrid2D(problem.linear.section, {
@@ -147,7 +147,7 @@ function advice(problem: NonlinearFin2DProblem): string {
   const k = physics.conductivity;
   if (k.kind === 'table') items.push(`give a smoother conductivity table (k runs from ${Math.min(...k.k)} to ${Math.max(...k.k)} W/(m*K))`);
   if (items.length === 0) return 'this case is linear and should never fail to converge: please report it, with the case file';
-  items.push('or change the grid (--grid), or use the 1-D model (--reference 1d, --model 1d)');
+  items.push('or change the grid, or use the 1-D model');
   return items.join(', ');
 }
 
@@ -157,6 +157,7 @@ function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2D
   const steps = reason.startsWith('no convergence') ? '' : ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})`;
   return new SolverError(
     `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${reason}${steps}${progress}. To get a solution: ${advice(problem)}.`,
+    isLinearProblem(problem.physics) ? [] : ['change-grid', 'use-1d-model'],
   );
 }
 

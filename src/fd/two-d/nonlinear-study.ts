@@ -11,7 +11,8 @@
  */
 import type { Case } from '../../case/types.js';
 import { DEFAULT_GRADING } from './linear-solve.js';
-import { gridFamily2D, maxCoefficient, summariseStudy2D, type Fin2DGridValue, type Fin2DStudy, type Fin2DStudyOptions } from './linear-study.js';
+import { gridFamily2D, gridValues, maxCoefficient, summariseStudy2D, type Fin2DStudy, type Fin2DStudyOptions } from './linear-study.js';
+import { solveGrids } from '../study/refinement-loop.js';
 import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../problem/fin-problem.js';
 import { solveNonlinearFin2DProblem, type NonlinearFin2DResult } from './nonlinear-solve.js';
 import type { Newton2DOptions } from './newton-system.js';
@@ -31,11 +32,8 @@ export function studyNonlinearFin2D(c: Case, opts: NonlinearFin2DStudyOptions = 
 
 export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts: NonlinearFin2DStudyOptions = {}): NonlinearFin2DStudy {
   const grids = gridFamily2D(sizingProblem(problem), opts);
-  const results: NonlinearFin2DResult[] = [];
-  const values: Fin2DGridValue[] = [];
-  for (const g of grids) {
-    const previous = results[results.length - 1];
-    const r = solveNonlinearFin2DProblem(
+  const results = solveGrids(grids, (g, previous: NonlinearFin2DResult | undefined) =>
+    solveNonlinearFin2DProblem(
       problem,
       {
         ...opts,
@@ -45,11 +43,9 @@ export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
         faceGrading: opts.faceGrading ?? DEFAULT_GRADING.face,
       },
       previous,
-    );
-    results.push(r);
-    values.push({ nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance });
-  }
-  const study = summariseStudy2D(results, values);
+    ),
+  );
+  const study = summariseStudy2D(results, gridValues(grids, results));
   return {
     ...study,
     finest: results[results.length - 1] as NonlinearFin2DResult,
@@ -58,7 +54,7 @@ export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
 }
 
 /** The linear problem whose h sizes the grids (header). */
-function sizingProblem(problem: NonlinearFin2DProblem): NonlinearFin2DProblem['linear'] {
+export function sizingProblem(problem: NonlinearFin2DProblem): NonlinearFin2DProblem['linear'] {
   const { linear, physics } = problem;
   const emissivity = physics.radiation.emissivity;
   if (emissivity === 0) return linear;

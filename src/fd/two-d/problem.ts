@@ -1,5 +1,5 @@
 /**
- * From a normalised case to the 2-D problem: the meshed section, the conductivity and the boundary
+ * From the fin problem (problem/fin-problem.ts) to the 2-D problem: the meshed section, the conductivity and the boundary
  * conditions (excess temperatures theta = T - T_inf, K).
  *
  * What the fd-2d model includes: conduction across the thickness (planar section for straight fins,
@@ -8,7 +8,8 @@
  * convective with its own or the local h, fixed temperature), the base temperature with or without a
  * contact resistance. Straight fins are solved per metre of width and multiplied by the width, so the
  * narrow side edges are insulated (`fin.edges` is not modelled: the 1-D model handles edges).
- * Not modelled in 2-D (an error says so): temperature-dependent conductivity, the power-law h, radiation.
+ * The nonlinear laws (k(T), the power-law h, radiation) act on top of this problem (nonlinear-problem.ts),
+ * which is built here for the position part of h and the reference conductivity.
  *
  * Infinite tip (uniform rectangular fins and pins, uniform h only): the section is cut at
  * L_cut = 20 half-thicknesses (radii) and closed by the exact condition of the slowest 2-D mode,
@@ -20,8 +21,10 @@
  * <= exp(-1.43 * 20) ~ 4e-13 at the cut, so the cut changes the heat rate by less than that.
  */
 import type { Case } from '../../case/types.js';
-import { UsageError } from '../../errors.js';
 import { sectionOf, type Section2D } from '../../mesh/grid2d-section.js';
+import { finProblem, type FinProblem } from '../problem/fin-problem.js';
+import { modelApplies, nonlinearity } from '../problem/model-applies.js';
+import { ModelNotApplicableError } from '../../errors.js';
 import type { BoundaryCondition2D, FinConditions2D, LinearH } from './boundary.js';
 
 export interface Fin2DProblem {
@@ -42,55 +45,58 @@ export interface Fin2DProblem {
 export const INFINITE_CUT_HALF_SIZES = 20;
 
 /**
- * Why the 2-D model cannot solve this case, or null when it can (for `--reference auto`: fd-2d whenever
- * the case allows it).
+ * Why the linear 2-D solver cannot solve this case, or null when it can: a nonlinearity (solved by
+ * Newton's method on top of the linear problem, nonlinear-problem.ts), or a fin fd-2d does not cover.
  */
 export function fin2dUnsupported(c: Case): string | null {
-  const { convection, material } = c;
-  if (material.k.kind !== 'constant') return 'temperature-dependent conductivity is not modelled in 2-D';
-  if (convection.h.kind === 'power') return 'the power-law h (theta-dependent) is not modelled in 2-D';
-  if (convection.emissivity > 0) return 'radiation from the faces is not modelled in 2-D';
-  if (convection.tip.kind === 'infinite') {
-    const kind = c.fin.profile.kind;
-    if ((kind !== 'rectangular' && kind !== 'pin') || convection.h.kind !== 'uniform') {
-      return 'an infinite tip needs a uniform fin (rectangular or pin) with a uniform h';
-    }
-  }
-  return null;
+  const problem = finProblem(c);
+  const nonlinear = nonlinearity(problem);
+  if (nonlinear !== null) return `${nonlinear} is not modelled by the linear 2-D solver`;
+  const coverage = modelApplies(problem, '2d');
+  return coverage.ok ? null : coverage.reason;
 }
 
+/** The 2-D problem of a linear case; a ModelNotApplicableError when the linear 2-D solver does not cover it. */
 export function fin2dProblem(c: Case): Fin2DProblem {
   const unsupported = fin2dUnsupported(c);
-  if (unsupported !== null) throw new UsageError(`fd-2d: ${unsupported}; use the 1-D model`);
-  const { convection, material, base } = c;
-  if (material.k.kind !== 'constant' || convection.h.kind === 'power') throw new Error('fin2dProblem: unreachable');
-  const k = material.k.k;
-  const h: LinearH = convection.h;
-  const thetaBase = base.T_degC - convection.ambient_degC;
+  if (unsupported !== null) throw new ModelNotApplicableError('fd-2d', unsupported);
+  const problem = finProblem(c);
+  return twoDProblem(problem, problem.conductivity.kind === 'constant' ? problem.conductivity.k : Number.NaN);
+}
+
+/**
+ * The 2-D problem of a fin with conductivity k (W/(m*K)) and the position part of its h: the linear fin
+ * itself, or the base of a nonlinear one (k = k_ref; the laws act on top, nonlinear-problem.ts). The
+ * caller has asked modelApplies(problem, '2d').
+ */
+export function twoDProblem(problem: FinProblem, k: number): Fin2DProblem {
+  const { base, h, ambient_degC } = problem;
+  const thetaBase = base.theta;
   const baseCondition: BoundaryCondition2D =
-    base.contactResistance > 0 ? { kind: 'contact', resistance: base.contactResistance, theta: thetaBase } : { kind: 'fixed', theta: thetaBase };
-  let section = sectionOf(c.fin.profile);
+    base.kind === 'contact' ? { kind: 'contact', resistance: base.resistance, theta: thetaBase } : { kind: 'fixed', theta: thetaBase };
+  let section = sectionOf(problem.profile);
   const face: BoundaryCondition2D = { kind: 'convective', h };
   const length = section.length;
   let tip: BoundaryCondition2D;
   let truncatedInfinite = false;
-  const t = convection.tip;
+  const t = problem.tip;
   switch (t.kind) {
     case 'adiabatic':
       tip = { kind: 'adiabatic' };
       break;
     case 'convective': {
-      const hTip = t.h ?? faceCoefficientAtTip(h, length);
+      const hTip = t.h === 'local' ? faceCoefficientAtTip(h, length) : t.h;
       tip = { kind: 'convective', h: { kind: 'uniform', h: hTip } };
       break;
     }
     case 'temperature':
-      tip = { kind: 'fixed', theta: t.T_degC - convection.ambient_degC };
+      tip = { kind: 'fixed', theta: t.theta };
       break;
     case 'infinite': {
-      if (h.kind !== 'uniform') throw new Error('fin2dProblem: unreachable (checked by fin2dUnsupported)');
+      // modelApplies: a uniform rectangular fin or pin with a uniform h.
+      const hUniform = h.kind === 'uniform' ? h.h : Number.NaN;
       const b = section.halfSize(0);
-      const lambda1 = section.kind === 'pin' ? firstPinEigenvalue((h.h * b) / k) : firstPlateEigenvalue((h.h * b) / k);
+      const lambda1 = section.kind === 'pin' ? firstPinEigenvalue((hUniform * b) / k) : firstPlateEigenvalue((hUniform * b) / k);
       const cut = INFINITE_CUT_HALF_SIZES * b;
       section = { ...section, length: cut, breakpoints: [0, cut] };
       tip = { kind: 'convective', h: { kind: 'uniform', h: (k * lambda1) / b } };
@@ -99,7 +105,7 @@ export function fin2dProblem(c: Case): Fin2DProblem {
     }
     default: {
       const never: never = t;
-      throw new Error(`fin2dProblem: unknown tip ${JSON.stringify(never)}`);
+      throw new Error(`twoDProblem: unknown tip ${JSON.stringify(never)}`);
     }
   }
   return {
@@ -107,7 +113,7 @@ export function fin2dProblem(c: Case): Fin2DProblem {
     k,
     conditions: { base: baseCondition, face, tip },
     thetaBase,
-    ambient_degC: convection.ambient_degC,
+    ambient_degC,
     h,
     truncatedInfinite,
   };
