@@ -4,6 +4,7 @@ import { loadCase } from '../../src/case/parse.js';
 import { runCheck } from '../../src/compare/check.js';
 import { formatCheck } from '../../src/compare/format-check.js';
 import type { Io } from '../io.js';
+import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import type { SetExit } from '../program.js';
 
@@ -28,6 +29,7 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const c = loadCase(file);
+      requireReference(c, reference);
       const { report } = await runCheck(c, { tolerance, reference });
       io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatCheck(c, report));
       if (o.strict && report.models.some((m) => m.verdict === 'unsafe')) setExit(1);

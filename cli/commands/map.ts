@@ -114,6 +114,7 @@ Examples:
         tolerance,
         reference,
         ...(models ? { models } : {}),
+        labels: { x: '--x', y: '--y', models: '--models', reference: '--reference' },
       });
 
       // Default: all cores for 2-D references; in this process for a 1-D reference, whose points take

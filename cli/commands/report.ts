@@ -15,6 +15,7 @@ import { reportDate } from '../../src/report/report-date.js';
 import { writeFilesAtomically, type OutputFile } from '../../src/report/write-files.js';
 import { VERSION } from '../../src/version.js';
 import type { Io } from '../io.js';
+import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import { dpiOption } from './plot.js';
 
@@ -48,6 +49,7 @@ export interface WrittenReport {
 /** Computes the report and writes it into `outDir` (also what `fincheck demo` uses). */
 export async function writeReport(request: ReportRequest): Promise<WrittenReport> {
   const c = loadCase(request.caseFile);
+  requireReference(c, request.reference);
   const content = await makeReport(c, {
     tolerance: request.tolerance,
     reference: request.reference,
@@ -103,7 +105,7 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
-      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
+      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
       const written = await writeReport({ caseFile: file, outDir, tolerance, reference, dpi, date });
       if (o.json) {
         const { html, markdown, images, heatmapUnavailable, worstVerdict } = written;

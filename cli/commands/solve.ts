@@ -4,6 +4,7 @@ import { loadCase } from '../../src/case/parse.js';
 import { runSolve, type SolveReport } from '../../src/compare/solve.js';
 import { describeCase } from '../../src/compare/describe-case.js';
 import type { Io } from '../io.js';
+import { requireModel2D } from '../model-coverage.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
 import { runSolve2D, type Solve2DReport } from '../../src/compare/solve2d.js';
 import { UsageError } from '../../src/errors.js';
@@ -27,7 +28,7 @@ Examples:
   fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d --grid 400x40 --json
   fincheck solve demo/enclosure-fin-natural-convection.yaml --model 2d   # nonlinear: Newton on each grid`,
     )
-    .action((file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean }) => {
+    .action(async (file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean }) => {
       const model = parseOption('--model', modelOption, o.model, '1d or 2d');
       const nodes = o.nodes === undefined ? undefined : parseOption('--nodes', nodesOption, o.nodes, 'a whole number of nodes from 3 to 10000000');
       const grid = o.grid === undefined ? undefined : parseOption('--grid', gridOption, o.grid, 'NXxNY with whole numbers from 2 to 20000, e.g. 400x40');
@@ -35,11 +36,12 @@ Examples:
       if (model === '2d' && nodes !== undefined) throw new UsageError('--nodes goes with --model 1d; use --grid NXxNY for the 2-D model');
       const c = loadCase(file);
       if (model === '2d') {
-        const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
+        requireModel2D(c);
+        const { report } = await runSolve2D(c, grid === undefined ? {} : { grid });
         io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;
       }
-      const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
+      const { report } = await runSolve(c, nodes === undefined ? {} : { nodes });
       io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
 }

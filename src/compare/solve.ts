@@ -1,12 +1,10 @@
 /**
- * `fincheck solve`: one model's solution of the case (outputs.md, `fincheck solve --json`).
+ * `fincheck solve`: one model's solution of the case (outputs.md, the JSON of `fincheck solve`).
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
 import type { Case } from '../case/types.js';
-import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/one-d/linear-solve.js';
-import { isLinearFinCase } from '../fd/problem/linear-case.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/one-d/nonlinear-solve.js';
+import { finProblem, solveFin, studyFin, type FinStudy1D } from '../fd/index.js';
 
 export interface ProfilePoint {
   x_m: number;
@@ -33,16 +31,13 @@ export interface SolveReport {
 /** At most this many profile points in the output; every k-th node, never interpolated. */
 const MAX_PROFILE_POINTS = 401;
 
-export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; result: Fin1DResult } {
+export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ report: SolveReport; study: FinStudy1D }> {
+  const problem = finProblem(c);
   const single = opts.nodes !== undefined;
-  // Linear fins: one tridiagonal solve per grid; nonlinear fins (power-law h, radiation, k(T)): Newton.
-  const linear = isLinearFinCase(c);
-  const study = single ? null : linear ? studyFin1D(c) : studyNonlinearFin1D(c);
-  const result: Fin1DResult = study
-    ? study.result
-    : linear
-      ? solveFin1D(c, { nodes: opts.nodes as number })
-      : solveNonlinearFin1D(c, { nodes: opts.nodes as number });
+  // The one study: a direct solve per grid for a linear fin, Newton's method for a nonlinear one.
+  const study = (single ? await solveFin(problem, { model: '1d', nodes: opts.nodes as number }) : await studyFin(problem, { model: '1d' })) as FinStudy1D;
+  const result = study.finest;
+  const refinement = study.refinement;
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;
@@ -50,7 +45,7 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
   for (let i = 0; i < n; i += stride) profile.push({ x_m: result.mesh.x[i] as number, T_degC: (result.theta[i] as number) + ambient });
   if ((n - 1) % stride !== 0) profile.push({ x_m: result.mesh.x[n - 1] as number, T_degC: (result.theta[n - 1] as number) + ambient });
   return {
-    result,
+    study,
     report: {
       case: c.name,
       model: 'fd-1d',
@@ -61,8 +56,8 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
       baseTemperature_degC: (result.theta[0] as number) + ambient,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: study ? study.study.gci : null,
-      observedOrder: study ? study.study.observedOrder : null,
+      discretizationError: study.discretizationError,
+      observedOrder: refinement === null ? null : refinement.observedOrder,
       profileStride: stride,
       profile,
     },

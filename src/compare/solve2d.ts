@@ -1,29 +1,16 @@
 /**
- * `fincheck solve --model 2d`: the fd-2d solution of the case: a refinement study by default, or exactly
- * one grid with `--grid NXxNY` (discretizationError null). Centre-line and surface temperatures along the
+ * `fincheck solve` with the 2-D model: the fd-2d solution of the case: a refinement study by default, or exactly
+ * one grid given by its node counts (discretizationError null). Centre-line and surface temperatures along the
  * fin instead of a 1-D profile.
- * Nonlinear fins (power-law h, grey radiation, k over temperature) are solved by Newton's method on the
- * same grids (nonlinear2d.ts, nonlinear2d-study.ts); the report then carries the Newton step counts.
- * Where the 2-D model does not apply (fin2dUnsupported, nonlinear2dUnsupported) the UsageError names why.
+ * The one study solves it (studyFin): nonlinear fins (power-law h, grey radiation, k over temperature) by
+ * Newton's method on the same grids; the report then carries the Newton step counts.
  */
 import type { Case } from '../case/types.js';
-import { UsageError } from '../errors.js';
-import { solveFin2D, type Fin2DLine, type Fin2DResult } from '../fd/two-d/linear-solve.js';
-import { studyFin2D, type Fin2DStudy } from '../fd/two-d/linear-study.js';
-import { isLinearFinCase } from '../fd/problem/linear-case.js';
-import type { NewtonReport } from '../fd/one-d/nonlinear-solve.js';
-import { solveNonlinearFin2D, type NonlinearFin2DResult } from '../fd/two-d/nonlinear-solve.js';
-import { nonlinear2dUnsupported } from '../fd/two-d/nonlinear-problem.js';
-import { studyNonlinearFin2D } from '../fd/two-d/nonlinear-study.js';
+import { finProblem, solveFin, studyFin, type Fin2DLine, type FinStudy2D, type NewtonStatistics } from '../fd/index.js';
 import type { ProfilePoint } from './solve.js';
 
-/** Newton's method on the grids of a nonlinear fin. */
-export interface Solve2DNewton {
-  /** Newton steps spent on each grid, coarsest first (every attempt and continuation stage; a single grid also counts the coarser grids it started from). */
-  stepsPerGrid: number[];
-  /** The finest (or only) grid: steps, line-search halvings, continuation stages, final relative residual and heat-rate change. */
-  finest: NewtonReport;
-}
+/** Newton's method on the grids of a nonlinear fin (stepsPerGrid coarsest first; finest: the finest or only grid). */
+export type Solve2DNewton = NewtonStatistics;
 
 export interface Solve2DReport {
   case: string;
@@ -45,35 +32,18 @@ export interface Solve2DReport {
   surface: ProfilePoint[];
 }
 
-interface Solved2D {
-  study: Fin2DStudy | null;
-  result: Fin2DResult;
-  newton: Solve2DNewton | null;
-}
-
-function solveLinear(c: Case, grid: { nx: number; ny: number } | undefined): Solved2D {
-  const study = grid ? null : studyFin2D(c);
-  const result = study ? study.finest : solveFin2D(c, grid as { nx: number; ny: number });
-  return { study, result, newton: null };
-}
-
-function solveNonlinear(c: Case, grid: { nx: number; ny: number } | undefined): Solved2D {
-  const unsupported = nonlinear2dUnsupported(c);
-  if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
-  if (grid) {
-    const result: NonlinearFin2DResult = solveNonlinearFin2D(c, grid);
-    const steps = result.newton.totalIterations + result.newton.coarseGridIterations;
-    return { study: null, result, newton: { stepsPerGrid: [steps], finest: result.newton } };
-  }
-  const study = studyNonlinearFin2D(c);
-  return { study, result: study.finest, newton: { stepsPerGrid: study.iterations, finest: study.finest.newton } };
-}
-
-export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): { report: Solve2DReport; result: Fin2DResult } {
-  const { study, result, newton } = isLinearFinCase(c) ? solveLinear(c, opts.grid) : solveNonlinear(c, opts.grid);
+/**
+ * The fd-2d study of a case (or one grid). The 2-D model must cover the fin: ask modelApplies first
+ * (ModelNotApplicableError otherwise).
+ */
+export async function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): Promise<{ report: Solve2DReport; study: FinStudy2D }> {
+  const problem = finProblem(c);
+  const study = (opts.grid ? await solveFin(problem, { model: '2d', ...opts.grid }) : await studyFin(problem, { model: '2d' })) as FinStudy2D;
+  const result = study.finest;
+  const newton = study.newton;
   const line = (l: Fin2DLine): ProfilePoint[] => Array.from(l.x_m, (x, i) => ({ x_m: x, T_degC: l.T_degC[i] as number }));
   return {
-    result,
+    study,
     report: {
       case: c.name,
       model: 'fd-2d',
@@ -84,8 +54,8 @@ export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } })
       baseTemperature_degC: result.baseTemperature_degC,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: study ? study.discretizationError : null,
-      observedOrder: study ? study.heatRate.observedOrder : null,
+      discretizationError: study.discretizationError,
+      observedOrder: study.refinement === null ? null : study.refinement.observedOrder,
       newton,
       centreline: line(result.centreline),
       surface: line(result.surface),

@@ -12,7 +12,8 @@
 export type { FinProblem, Radiation } from './problem/fin-problem.js';
 export { finProblem, isLinearProblem, KELVIN_OFFSET, STEFAN_BOLTZMANN } from './problem/fin-problem.js';
 export type { BaseBoundary, TipBoundary } from './problem/conditions.js';
-export type { LinearHDistribution } from './problem/linear-case.js';
+export type { LinearFinCase, LinearHDistribution } from './problem/linear-case.js';
+export { isLinearFinCase } from './problem/linear-case.js';
 export type { FinModel, ModelCoverage } from './problem/model-applies.js';
 export { modelApplies, modelId, nonlinearity, requireModel } from './problem/model-applies.js';
 export { hAt, idealConvectiveConductance } from './problem/convection.js';

@@ -5,7 +5,7 @@
  *   lineChart   temperature profiles, heat flow / loss panels (series, legend notes, point annotations)
  *   fieldChart  2-D field on a structured boundary-fitted grid: true outline, colour bar, labelled iso-lines
  *   mapChart    scalar over a regular (linear/log) parameter grid, diverging colours, labelled contour levels
- *   svgToPng    rasterise with the bundled DejaVu Sans; chartBytes for "--out FILE.png|FILE.svg"
+ *   svgToPng    rasterise with the bundled DejaVu Sans; chartBytes for a .png or .svg file
  */
 
 export { lineChart } from './line-chart.js';

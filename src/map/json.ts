@@ -1,5 +1,5 @@
 /**
- * The JSON document of `fincheck map --json` (outputs.md): case, reference, tolerance, the two axes with their
+ * The JSON document of `fincheck map` in JSON (outputs.md): case, reference, tolerance, the two axes with their
  * key, unit and values, and one entry per point, x fastest (index = j * NX + i). A point where the case became
  * invalid carries `error` instead of results. Added to the contract's keys: each axis's `log`, the shortcuts
  * mapped, the case's own point, the summary counts and (per point) `mL`, the reference's model, efficiency and

@@ -29,7 +29,7 @@ export interface MapSummary {
   errors: number;
   errorGroups: ErrorGroup[];
   models: ModelCounts[];
-  /** Points per reference model (`--reference auto` keeps fd-1d where the 2-D model does not cover the case). */
+  /** Points per reference model (an automatic reference keeps fd-1d where the 2-D model does not cover the case). */
   references: { model: string; points: number }[];
 }
 

@@ -7,7 +7,7 @@ import { solveFinProblem1D } from '../one-d/linear-solve.js';
 import type { FinProblem1D } from '../one-d/problem.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 import { DEFAULT_GRADING, solveFin2DProblem } from '../two-d/linear-solve.js';
-import type { GridSolvers } from './grid-solvers.js';
+import type { GridSolvers } from './grid-solver.js';
 
 /** The linear 1-D problem of a linear fin (constant k, h independent of temperature, no radiation). */
 export function linearProblem1D(problem: FinProblem): FinProblem1D {

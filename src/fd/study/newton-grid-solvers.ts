@@ -8,7 +8,7 @@ import { solveNonlinearProblem1D } from '../one-d/nonlinear-solve.js';
 import { isLinearProblem } from '../problem/fin-problem.js';
 import { DEFAULT_GRADING } from '../two-d/linear-solve.js';
 import { solveNonlinearFin2DProblem } from '../two-d/nonlinear-solve.js';
-import type { GridSolvers } from './grid-solvers.js';
+import type { GridSolvers } from './grid-solver.js';
 import { linearGridSolvers } from './linear-grid-solvers.js';
 
 export const newtonGridSolvers: GridSolvers = {
