@@ -8,29 +8,21 @@
  */
 import type { Case, HDistribution, Profile } from '../case/types.js';
 import { uniformFin } from '../analytic/uniform-fin.js';
-import { solveFin1D } from '../fd/one-d/linear-solve.js';
-import { isLinearFinCase } from '../fd/problem/linear-case.js';
 import type { FinGeometry1D } from '../mesh/types.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { AssumptionRow, ModelId } from './types.js';
 
 export const LEDGER_NODES = 4001;
 
-/** fd-1d heat rate of a linear case on the ledger grid. */
-export function linearLedgerSolve(variant: Case): number {
-  if (!isLinearFinCase(variant)) throw new Error('linearLedgerSolve: the variant is not linear');
-  return solveFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
-}
-
 /**
  * Rows for the geometric and boundary assumptions. `solve` is the fd-1d heat rate of a variant case on
- * one fixed grid (linear or nonlinear solver); `eq` the equivalent uniform fin the shortcuts used.
+ * one fixed grid (the one study's solve: direct for a linear fin, Newton for a nonlinear one); `eq` the equivalent uniform fin the shortcuts used.
  */
 export function assumptionLedger(
   c: Case,
   geometry: FinGeometry1D,
   eq: EquivalentUniformFin,
-  solve: (variant: Case) => number = linearLedgerSolve,
+  solve: (variant: Case) => number,
 ): AssumptionRow[] {
   const rows: AssumptionRow[] = [];
   // The fin as given, on the same grid as every variant (so discretisation errors cancel).

@@ -57,7 +57,19 @@ const FAILURE = 1e-7;
  */
 const UNIT_ROUNDOFF = 2 ** -53;
 
+/** MG-PCG; a SolverError when it does not reach its residual target (attemptMgPcg asks instead). */
 export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigrid = buildMultigrid(system.matrix)): { x: Float64Array; report: PcgReport } {
+  const attempt = attemptMgPcg(system, opts, mg);
+  if (attempt.failure !== null) throw new SolverError(attempt.failure);
+  return { x: attempt.x, report: attempt.report };
+}
+
+/** MG-PCG that reports whether it converged (failure: why not, null when it did) instead of throwing. */
+export function attemptMgPcg(
+  system: System2D,
+  opts: PcgOptions = {},
+  mg: Multigrid = buildMultigrid(system.matrix),
+): { x: Float64Array; report: PcgReport; failure: string | null } {
   const tolerance = opts.tolerance ?? DEFAULT_TOLERANCE;
   const maxIterations = opts.maxIterations ?? DEFAULT_MAX_ITERATIONS;
   const n = system.rhs.length;
@@ -105,13 +117,12 @@ export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigri
     if (relative > ACCEPT * tolerance) floor = (2 * UNIT_ROUNDOFF * roundingScale(system.matrix, x)) / scale;
   }
   const report = { iterations, relativeResidual: relative, levels: mg.levels };
-  if (!(relative <= FAILURE)) {
-    throw new SolverError(
-      `multigrid-preconditioned CG did not converge: relative residual ${relative.toExponential(2)} after ${iterations} iterations ` +
-        `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid; try another grid (e.g. fewer nodes across) or the direct solver`,
-    );
-  }
-  return { x, report };
+  const failure =
+    relative <= FAILURE
+      ? null
+      : `multigrid-preconditioned CG did not converge: relative residual ${relative.toExponential(2)} after ${iterations} iterations ` +
+        `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid; try another grid (e.g. fewer nodes across) or the direct solver`;
+  return { x, report, failure };
 }
 
 /** The MG-preconditioned CG as a Solver2D. */

@@ -30,13 +30,13 @@
  * round-off floor, 16 ε_mach sum of the base rows' s_p). That driver is written for its tridiagonal state
  * and solve, so it is mirrored here rather than shared.
  */
-import { SolverError } from '../../errors.js';
 import { buildSystem2D, type BoundaryTerms2D, type SideTerms } from './boundary.js';
 import { heatRatesFromExchange, type HeatRates2D } from './heat-rate.js';
 import { cvLosses } from '../problem/surface-law.js';
 import { SIDE_NAMES, type Newton2DSetup, type SideName } from './newton-setup.js';
 import { chooseSolverMethod, MAX_BANDED_BYTES, prepareSolver2D, type SolverMethod } from '../linear-algebra/auto-solver.js';
 import { bandedCholeskyBytes } from '../linear-algebra/banded-cholesky.js';
+import { attemptMgPcg } from '../linear-algebra/pcg.js';
 import type { Stencil9, System2D } from '../linear-algebra/stencil9.js';
 
 export interface Newton2DOptions {
@@ -295,13 +295,11 @@ function step(setup: Newton2DSetup, from: Float64Array, delta: Float64Array, lam
 function solveStep(system: System2D, requested: SolverMethod | 'auto'): { w: Float64Array; method: SolverMethod } {
   const { nodesX: nx, nodesY: ny } = system.matrix;
   const method = requested === 'auto' ? chooseSolverMethod(nx, ny) : requested;
-  try {
-    return { w: prepareSolver2D(system, method).solve(system), method };
-  } catch (e) {
-    const fits = bandedCholeskyBytes(Math.max(nx, ny), Math.min(nx, ny)) <= MAX_BANDED_BYTES;
-    if (!(e instanceof SolverError) || requested !== 'auto' || method !== 'mg-pcg' || !fits) throw e;
-    return { w: prepareSolver2D(system, 'banded-cholesky').solve(system), method: 'banded-cholesky' };
-  }
+  const fits = bandedCholeskyBytes(Math.max(nx, ny), Math.min(nx, ny)) <= MAX_BANDED_BYTES;
+  if (requested !== 'auto' || method !== 'mg-pcg' || !fits) return { w: prepareSolver2D(system, method).solve(system), method };
+  const attempt = attemptMgPcg(system);
+  if (attempt.failure === null) return { w: attempt.x, method };
+  return { w: prepareSolver2D(system, 'banded-cholesky').solve(system), method: 'banded-cholesky' };
 }
 
 /** Damped Newton from the drops `initial` (not modified; fixed nodes are reset). Never throws on non-convergence. */
