@@ -15,7 +15,7 @@ export function registerCheck(program: Command, io: Io, setExit: SetExit): Comma
     .description('solve the fin and show how far each textbook shortcut drifts from the solution, and why')
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
-    .option('--json', 'print one JSON document (outputs.md) instead of the table')
+    .option('--json', 'print one JSON document instead of the table (its keys: README, "JSON output")')
     .option('--strict', 'exit with code 1 when any shortcut is unsafe')
     .addHelpText(
       'after',

@@ -6,12 +6,13 @@ import { z } from 'zod';
 import { readCaseFile } from '../../src/case/parse.js';
 import type { MapModelId } from '../../src/map/types.js';
 import { formatMapSummary } from '../../src/map/format.js';
-import { mapJsonText } from '../../src/map/json.js';
 import { OutputsInterrupted, renderMapFiles } from '../../src/map/outputs.js';
 import { MapInterrupted } from '../../src/map/pool.js';
 import { progressBar } from '../../src/map/progress.js';
 import { prepareMap, runMap } from '../../src/map/run-map.js';
+import { MANIFEST_NAME, removeFiles, staleFiles } from '../../src/map/manifest.js';
 import { StagedFiles } from '../../src/map/staged-files.js';
+import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
 import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import type { SetExit } from '../program.js';
@@ -85,7 +86,9 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
 KEY is a key path of the case file; FROM and TO take units like the case file (a bare number is SI,
 a bare temperature degC; a unit on one end applies to both: 1:3 mm). Points where the case becomes
 invalid (a tip thicker than the base, say) are marked in the outputs and counted in the summary.
-Files are written under temporary names and renamed when all are complete; Ctrl-C leaves none.
+Files are written under temporary names and renamed when all are complete; Ctrl-C or SIGTERM leaves
+none (exit 130 or 143). A re-run into the same folder removes the files an earlier map wrote there
+and this one does not (map.json lists them); other files in the folder are never touched.
 
 Examples:
   fincheck map demo/inverter-plate-fin.yaml --x fin.thickness=0.5:5mm --y convection.h=10:500 --log-y
@@ -121,9 +124,7 @@ Examples:
       // about a millisecond each, so that starting and warming up workers (module load, JIT) costs more
       // than they save (41x41, 2 cores: 1.95 s in-process, 2.2 s on two workers).
       const jobs = askedJobs ?? (prepared.casePoint.reference.model === 'fd-1d' ? 1 : availableParallelism());
-      const controller = new AbortController();
-      const onInterrupt = (): void => controller.abort();
-      process.on('SIGINT', onInterrupt);
+      const interrupt = listenForInterrupt();
       const total = steps[0] * steps[1];
       const progress = progressBar((t) => io.err(t), io.errIsTTY, total);
       const staged = new StagedFiles(outDir);
@@ -131,29 +132,35 @@ Examples:
       try {
         const run = await runMap(prepared, {
           jobs,
-          signal: controller.signal,
+          signal: interrupt.signal,
           onPoint: (n) => {
             done = n;
             progress.update(n);
           },
         });
         progress.finish();
-        const files = await renderMapFiles(run, format, () => controller.signal.aborted);
-        if (controller.signal.aborted) throw new OutputsInterrupted('interrupted while writing');
+        const files = await renderMapFiles(run, format, () => interrupt.signal.aborted);
+        interrupt.check();
+        // Staging, committing and pruning are synchronous: a signal that arrives meanwhile waits until they end.
+        // Files an earlier map listed in this folder's map.json and this one does not write go (never others).
+        const stale = staleFiles(outDir, files.map((f) => f.name));
         for (const f of files) staged.stage(f.name, f.data);
         const written = staged.commit();
-        io.out(o.json ? mapJsonText(run) : formatMapSummary(run, written));
+        removeFiles(outDir, stale);
+        const json = files.find((f) => f.name === MANIFEST_NAME)?.data;
+        io.out(o.json && typeof json === 'string' ? json : formatMapSummary(run, written));
       } catch (err) {
         progress.finish();
         staged.discard();
-        if (err instanceof MapInterrupted || err instanceof OutputsInterrupted) {
+        const by = interrupt.received();
+        if (by !== null && (err instanceof MapInterrupted || err instanceof OutputsInterrupted || err instanceof Interrupted)) {
           io.err(`fincheck: interrupted after ${done} of ${total} points; no files were written\n`);
-          setExit(130);
+          setExit(interruptExitCode(by));
           return;
         }
         throw err;
       } finally {
-        process.off('SIGINT', onInterrupt);
+        interrupt.dispose();
       }
     });
 }

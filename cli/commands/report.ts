@@ -1,7 +1,8 @@
 /**
  * `fincheck report CASE --out DIR`: the check as one self-contained HTML file (images inline, A4 print
  * styles) and a Markdown file with the PNG charts beside it. Options are validated before anything is
- * computed; the files are written all together or not at all.
+ * computed; the files are written all together or not at all, and Ctrl-C or SIGTERM before they are written
+ * leaves nothing (exit 130 or 143).
  */
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
@@ -16,6 +17,8 @@ import { writeFilesAtomically, type OutputFile } from '../../src/report/write-fi
 import { VERSION } from '../../src/version.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
+import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
+import type { SetExit } from '../program.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import { dpiOption } from './plot.js';
 
@@ -26,6 +29,8 @@ export interface ReportRequest {
   reference: 'auto' | '1d' | '2d';
   dpi: number;
   date: string;
+  /** Asked between the charts and before anything is written: throws (Interrupted) to stop with nothing on disk. */
+  beforeWrite?: () => void;
 }
 
 /** --out DIR: a folder (created when missing), not an existing file. */
@@ -57,6 +62,7 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
     caseFile: request.caseFile,
     version: VERSION,
     date: request.date,
+    ...(request.beforeWrite ? { checkpoint: request.beforeWrite } : {}),
   });
   const html = join(request.outDir, REPORT_FILES.html);
   const markdown = join(request.outDir, REPORT_FILES.markdown);
@@ -66,6 +72,7 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
     { path: markdown, bytes: content.markdown },
     { path: html, bytes: content.html },
   ];
+  request.beforeWrite?.();
   writeFilesAtomically(files, [request.outDir]);
   const verdicts = content.check.report.models.map((m) => m.verdict);
   const worstVerdict = verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
@@ -81,7 +88,7 @@ interface ReportCliOptions {
   json?: boolean;
 }
 
-export function registerReport(program: Command, io: Io): Command {
+export function registerReport(program: Command, io: Io, setExit: SetExit): Command {
   return program
     .command('report')
     .argument('<case>', 'case file (YAML or JSON)')
@@ -106,7 +113,19 @@ Examples:
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
       const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
-      const written = await writeReport({ caseFile: file, outDir, tolerance, reference, dpi, date });
+      // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
+      const interrupt = listenForInterrupt();
+      let written: WrittenReport;
+      try {
+        written = await writeReport({ caseFile: file, outDir, tolerance, reference, dpi, date, beforeWrite: interrupt.check });
+      } catch (err) {
+        if (!(err instanceof Interrupted)) throw err;
+        io.err(`fincheck: interrupted (${err.by}); no report files were written\n`);
+        setExit(interruptExitCode(err.by));
+        return;
+      } finally {
+        interrupt.dispose();
+      }
       if (o.json) {
         const { html, markdown, images, heatmapUnavailable, worstVerdict } = written;
         io.out(`${JSON.stringify({ case: written.case.name, file, date, html, markdown, images, heatmapUnavailable, worstVerdict }, null, 2)}\n`);

@@ -17,7 +17,7 @@ export function registerSolve(program: Command, io: Io): Command {
     .option('--model <m>', '1d (finite volumes along the fin) or 2d (across the thickness too)', '1d')
     .option('--nodes <n>', '1-D: solve once on exactly n nodes (no refinement study, discretisation error null)')
     .option('--grid <NXxNY>', '2-D: solve once on exactly NX x NY nodes (no refinement study)')
-    .option('--json', 'print one JSON document (outputs.md) with the temperature profile')
+    .option('--json', 'print one JSON document with the temperature profile (its keys: README, "JSON output")')
     .addHelpText(
       'after',
       `

@@ -1,14 +1,11 @@
 /** Plain-text rendering of a check report for the terminal (the default output of `fincheck check`). */
 import type { Case } from '../case/types.js';
 import { describeCase } from './describe-case.js';
+import { signedPercentText } from './percent-text.js';
 import type { CheckReport, Flag } from './types.js';
 
-/** Signed percentage; drifts below 0.0005 % print as 0.000 % (no "-0.000"). */
-const pct = (x: number): string => {
-  const digits = Math.abs(x) < 0.001 ? 3 : 2;
-  const text = (100 * x).toFixed(digits);
-  return Number(text) === 0 ? `${(0).toFixed(digits)} %` : `${x > 0 ? '+' : ''}${text} %`;
-};
+/** Signed percentage, the same as `map` prints (percent-text.ts). */
+const pct = signedPercentText;
 const sig = (x: number, n = 5): string => (Math.abs(x) >= 1e5 || (Math.abs(x) < 1e-3 && x !== 0) ? x.toExponential(n - 1) : x.toPrecision(n));
 const pad = (s: string, n: number): string => (s.length >= n ? s : s + ' '.repeat(n - s.length));
 const lpad = (s: string, n: number): string => (s.length >= n ? s : ' '.repeat(n - s.length) + s);

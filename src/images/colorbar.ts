@@ -36,7 +36,7 @@ function gradientUri(map: Colormap): string {
   return rgbaToDataUri(image);
 }
 
-export function drawColourBar(map: Colormap, axis: Axis, bar: Rect, title: string, levels: readonly number[]): string {
+export function drawColourBar(map: Colormap, axis: Axis, bar: Rect, title: string | readonly string[], levels: readonly number[]): string {
   const out: string[] = [];
   out.push(
     el('image', {
@@ -71,17 +71,21 @@ export function drawColourBar(map: Colormap, axis: Axis, bar: Rect, title: strin
   });
   out.push(el('path', { d: ticks.join(''), stroke: ink.axis, 'stroke-width': stroke.axis, fill: 'none' }));
   const widest = Math.max(0, ...axis.labels.map((l) => textWidth(l, fontSize.tick)));
-  const tx = right + gap.tickLength + gap.tickLabel + widest + gap.axisLabel + capHeight(fontSize.axisLabel);
+  // One or two lines (the caller fits them to the bar's height), turned clockwise: the first line outermost.
+  const lines = typeof title === 'string' ? [title] : title;
   const ty = bar.y + bar.height / 2;
-  out.push(
-    textEl(title, {
-      x: tx,
-      y: ty,
-      'font-size': fontSize.axisLabel,
-      'text-anchor': 'middle',
-      fill: ink.text,
-      transform: `rotate(90 ${fmt(tx)} ${fmt(ty)})`,
-    }),
-  );
+  lines.forEach((line, k) => {
+    const tx = right + gap.tickLength + gap.tickLabel + widest + gap.axisLabel + capHeight(fontSize.axisLabel) + (lines.length - 1 - k) * (fontSize.axisLabel + 4);
+    out.push(
+      textEl(line, {
+        x: tx,
+        y: ty,
+        'font-size': fontSize.axisLabel,
+        'text-anchor': 'middle',
+        fill: ink.text,
+        transform: `rotate(90 ${fmt(tx)} ${fmt(ty)})`,
+      }),
+    );
+  });
   return el('g', {}, out);
 }

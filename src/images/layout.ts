@@ -5,7 +5,7 @@
 
 import { textEl } from './svg.js';
 import { fontSize, gap, ink } from './theme.js';
-import { wrapText } from './text-metrics.js';
+import { truncateToWidth, wrapText } from './text-metrics.js';
 
 export interface Rect {
   x: number;
@@ -31,11 +31,13 @@ export function drawHeader(title: string, subtitle: string | readonly string[] |
   if (title !== '') {
     y += fontSize.title;
     elements.push(
-      textEl(title, { x: width / 2, y, 'font-size': fontSize.title, 'font-weight': 'bold', 'text-anchor': 'middle', fill: ink.text }),
+      // A long title (a long case name) is cut with "…" at the canvas width instead of running off it.
+      textEl(truncateToWidth(title, fontSize.title * 1.08, usable), { x: width / 2, y, 'font-size': fontSize.title, 'font-weight': 'bold', 'text-anchor': 'middle', fill: ink.text }),
     );
   }
   const paragraphs = subtitle === undefined ? [] : typeof subtitle === 'string' ? [subtitle] : subtitle;
-  let lines = paragraphs.flatMap((p) => wrapText(p, fontSize.subtitle, usable));
+  // A word longer than the line (a long unbroken name) is cut too.
+  let lines = paragraphs.flatMap((p) => wrapText(p, fontSize.subtitle, usable)).map((l) => truncateToWidth(l, fontSize.subtitle, usable));
   if (lines.length > maxSubtitleLines) {
     lines = lines.slice(0, maxSubtitleLines);
     lines[maxSubtitleLines - 1] = `${lines[maxSubtitleLines - 1] ?? ''} …`;

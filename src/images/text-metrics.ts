@@ -69,3 +69,33 @@ export function wrapText(text: string, fontSize: number, maxWidth: number): stri
   }
   return lines;
 }
+
+/**
+ * `text` cut to at most `maxWidth` px, ending in "…" when cut. Linear in the length of the text (a
+ * 100,000-character case name costs one pass), so a chart title can never run off the canvas.
+ */
+export function truncateToWidth(text: string, fontSize: number, maxWidth: number): string {
+  if (textWidth(text, fontSize) <= maxWidth) return text;
+  const room = maxWidth - textWidth('…', fontSize);
+  let used = 0;
+  let out = '';
+  for (const ch of text) {
+    const w = ((widthByChar.get(ch) ?? fallbackAdvance) / unitsPerEm) * fontSize;
+    if (used + w > room) break;
+    used += w;
+    out += ch;
+  }
+  return `${out.trimEnd()}…`;
+}
+
+/**
+ * `text` on at most `maxLines` lines of at most `maxWidth` px: one line when it fits, else word-wrapped;
+ * what still does not fit is cut with "…" at the end of the last line.
+ */
+export function fitLines(text: string, fontSize: number, maxWidth: number, maxLines = 2): string[] {
+  if (textWidth(text, fontSize) <= maxWidth) return [text];
+  const wrapped = wrapText(text, fontSize, maxWidth);
+  const lines = wrapped.slice(0, maxLines);
+  if (wrapped.length > maxLines) lines[maxLines - 1] = `${lines[maxLines - 1] ?? ''} ${wrapped.slice(maxLines).join(' ')}`;
+  return lines.map((line) => truncateToWidth(line, fontSize, maxWidth));
+}

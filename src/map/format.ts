@@ -1,8 +1,9 @@
 /**
  * The readable summary `fincheck map` prints: the axes, the reference, per shortcut the share of the map where it
  * is ok / marginal / unsafe and its drift range, the case's own point, the points without results grouped by
- * cause, and the files written.
+ * cause, and the files written. Drifts carry their sign as `check` prints them (percent-text.ts).
  */
+import { signedPercentText } from '../compare/percent-text.js';
 import { isPointError } from './types.js';
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';
@@ -49,7 +50,7 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
   lines.push(`${pad('shortcut', 16)}${pad('ok', 10)}${pad('marginal', 10)}${pad('unsafe', 10)}drift over the map`);
   for (const m of summary.models) {
     const share = (n: number): string => pct(n / summary.points);
-    const range = Number.isFinite(m.minDrift) ? `${pct(m.minDrift)} .. ${pct(m.maxDrift)}` : 'no value';
+    const range = Number.isFinite(m.minDrift) ? `${signedPercentText(m.minDrift)} .. ${signedPercentText(m.maxDrift)}` : 'no value';
     lines.push(`${pad(m.model, 16)}${pad(share(m.ok), 10)}${pad(share(m.marginal), 10)}${pad(share(m.unsafe), 10)}${range}`);
   }
   const own = run.casePoint;
@@ -57,7 +58,7 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     lines.push('');
     const where = `${run.x.key} = ${value(own.x, run.x)}, ${run.y.key} = ${value(own.y, run.y)}`;
     lines.push(`This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot.toPrecision(3)}, mL = ${own.mL.toPrecision(3)}`);
-    for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(pct(m.drift), 10)}${m.verdict}`);
+    for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(signedPercentText(m.drift), 10)}${m.verdict}`);
   }
   if (summary.errors > 0) {
     lines.push('');

@@ -5,6 +5,7 @@
  * mapped, the case's own point, the summary counts and (per point) `mL`, the reference's model, efficiency and
  * discretisation error, each shortcut's heat rate and efficiency. `reference` is the case's own point's reference;
  * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
+ * `files` (in map.json and --json alike) lists the files the map wrote into its folder (manifest.ts).
  */
 import { CAUTIONS } from '../compare/cautions.js';
 import type { MapRun } from './run-map.js';
@@ -21,7 +22,8 @@ function pointJson(p: MapPoint) {
 
 const finiteOrNull = (v: number): number | null => (Number.isFinite(v) ? v : null);
 
-export function mapJson(run: MapRun) {
+/** `files`: the names this map writes into its folder (map.json lists them so that a re-run can tell its own). */
+export function mapJson(run: MapRun, files?: readonly string[]) {
   const { summary } = run;
   const { index: _index, ...casePoint } = run.casePoint;
   return {
@@ -43,9 +45,10 @@ export function mapJson(run: MapRun) {
     },
     cautions: [...CAUTIONS],
     points: run.points.map(pointJson),
+    ...(files ? { files: [...files] } : {}),
   };
 }
 
-export function mapJsonText(run: MapRun): string {
-  return `${JSON.stringify(mapJson(run), null, 2)}\n`;
+export function mapJsonText(run: MapRun, files?: readonly string[]): string {
+  return `${JSON.stringify(mapJson(run, files), null, 2)}\n`;
 }

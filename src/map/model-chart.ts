@@ -10,13 +10,15 @@
  */
 import { CHART_CAUTION } from '../compare/cautions.js';
 import { mapChart, type MapChartResult } from '../images/index.js';
+import { axisTitle } from './axis-title.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { appendToSvg, biotCandidates, isoLinesSvg, mLCandidates } from './iso-lines.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapModelId } from './types.js';
 
+/** The axis title of a map chart: words and a unit set for print (axis-title.ts). */
 export function axisLabel(axis: MapAxis): string {
-  return axis.displayUnit === '' ? axis.key : `${axis.key} (${axis.displayUnit})`;
+  return axisTitle(axis);
 }
 
 export function percentText(fraction: number): string {
@@ -60,12 +62,12 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
   const counts = run.summary.models.find((m) => m.model === model);
   const everywhere = counts !== undefined && counts.ok === run.summary.solved - counts.missing;
   const band = everywhere
-    ? `within +/-${percentText(tolerance)} at every valid point (no tolerance contour)`
-    : `contours: the tolerance, ok within +/-${percentText(tolerance)}`;
+    ? `within ±${percentText(tolerance)} at every valid point (no tolerance contour)`
+    : `contours: the tolerance, ok within ±${percentText(tolerance)}`;
   const marks = casePointMark(run);
   const chart = mapChart({
     title: `Drift of ${model} from ${reference}: ${run.caseName}`,
-    subtitle: [`drift = (${model} - ${reference}) / ${reference} on the heat rate; ${band}`, CHART_CAUTION],
+    subtitle: [`drift = (${model} − ${reference}) / ${reference} on the heat rate; ${band}`, CHART_CAUTION],
     xLabel: axisLabel(run.x),
     yLabel: axisLabel(run.y),
     valueLabel: `Drift of ${model} (%)`,
@@ -77,7 +79,7 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
     limit,
     levels: [
       { value: tolPercent, label: `+${percentText(tolerance)}`, colour: '#000000' },
-      { value: -tolPercent, label: `-${percentText(tolerance)}`, colour: '#000000', dash: '8 5' },
+      { value: -tolPercent, label: `−${percentText(tolerance)}`, colour: '#000000', dash: '8 5' },
     ],
     points: marks,
     ...(invalid > 0 ? { invalidNote: `grey: ${invalid} of ${run.summary.points} points where the case is invalid (see map.csv)` } : {}),

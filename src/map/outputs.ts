@@ -20,13 +20,15 @@ export class OutputsInterrupted extends Error {
 }
 
 export async function renderMapFiles(run: MapRun, format: ChartFormat, shouldStop: () => boolean = () => false): Promise<OutputFile[]> {
-  const files: OutputFile[] = [
-    { name: 'map.csv', data: mapCsv(run) },
-    { name: 'map.json', data: mapJsonText(run) },
-  ];
   const charts: { name: string; svg: () => string }[] = [
     ...run.job.check.models.map((model) => ({ name: `map-${model}.${format}`, svg: () => modelChart(run, model).svg })),
     { name: `overview.${format}`, svg: () => overviewChart(run).svg },
+  ];
+  // map.json lists every file of the set (itself included), so a later run into this folder knows what was ours.
+  const names = ['map.csv', 'map.json', ...charts.map((c) => c.name)];
+  const files: OutputFile[] = [
+    { name: 'map.csv', data: mapCsv(run) },
+    { name: 'map.json', data: mapJsonText(run, names) },
   ];
   // Build each SVG on this thread, rasterise them all at once (resvg renders on the thread pool).
   const pending: Promise<OutputFile>[] = [];

@@ -1,8 +1,10 @@
 /**
- * overview.svg/png: where each shortcut holds, all on one chart. For every shortcut the region where
- * |drift| <= tolerance (its verdict `ok`) is outlined and lightly filled in the shortcut's colour (Okabe & Ito
- * colours, distinct dashes), with a legend giving the share of the map where it is ok. Invalid points are grey
- * (as on the per-shortcut maps), the case's own point is marked, axes are in the user's units.
+ * overview.svg/png: where each shortcut holds, as small multiples: one small panel per shortcut, all on the same
+ * axes, in the order of the maps. In each panel the region where |drift| <= tolerance (its verdict `ok`) is filled
+ * light green and outlined, and the panel's title gives the share of the map where it is ok. One panel per shortcut, because regions drawn over each other on one chart turned muddy where the
+ * translucent fills overlapped and hid each other where outlines coincided (two shortcuts that agree). Invalid
+ * points are grey (as on the per-shortcut maps), the case's own point is marked in every panel, and the axis titles
+ * (words and units, axis-title.ts) are shared.
  *
  * Outline: the iso-line s = 0 of s = tolerance - |drift| by marching squares, on the grid padded with a ring of
  * "unsafe" nodes placed on the plot's edges, so every region closes along the edge of the map and can be filled
@@ -13,23 +15,45 @@ import { contourLines, getColormap, makeAxis, project, type Axis } from '../imag
 import { drawAxes, xAxisMargin, yAxisMargin } from '../images/axes.js';
 import { fieldImage } from '../images/field-layer.js';
 import { drawHeader, type Rect } from '../images/layout.js';
-import { drawLegend, legendSize, type LegendEntry } from '../images/legend.js';
-import { dashArray, okabeItoColours, type LineStyle } from '../images/series-styles.js';
-import { el, polylinePathData, svgDocument } from '../images/svg.js';
-import { defaultHeight, defaultWidth, gap, ink } from '../images/theme.js';
+import { el, fmt, polylinePathData, svgDocument, textEl } from '../images/svg.js';
+import { truncateToWidth } from '../images/text-metrics.js';
+import { defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/theme.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapModelId } from './types.js';
 
-export interface OverviewChart {
-  svg: string;
+export interface OverviewPanel {
+  model: MapModelId;
   plot: Rect;
   xAxis: Axis;
   yAxis: Axis;
 }
 
-const styles: readonly LineStyle[] = ['solid', 'dashed', 'dotted', 'dashdot', 'longdash', 'dashdotdot'];
+export interface OverviewChart {
+  svg: string;
+  /** One panel per shortcut, in the order of the models. */
+  panels: OverviewPanel[];
+  /** The first panel's plot and axes. */
+  plot: Rect;
+  xAxis: Axis;
+  yAxis: Axis;
+}
+
+/**
+ * The fill of the ok region: Okabe & Ito's bluish green, light. One tint in every panel (each panel is one
+ * shortcut), not the red or blue of the drift maps (which mean a drift below or above the reference), and never
+ * the grey of invalid points.
+ */
+const OK_FILL = '#009e73';
+const OK_FILL_OPACITY = 0.2;
+
+/** Columns of the panel grid for n panels on a landscape canvas: 1-3 in a row, 4 as 2 x 2, then 3 (4 from 7 on). */
+export function overviewColumns(n: number): number {
+  if (n <= 3) return Math.max(1, n);
+  if (n === 4) return 2;
+  return n <= 6 ? 3 : 4;
+}
 
 /**
  * s = tolerance - |drift| of one model at the grid points; where it has no value, a large negative number, so that
@@ -76,77 +100,101 @@ export function overviewChart(run: MapRun): OverviewChart {
   const tolerance = run.job.check.tolerance;
   const nx = run.x.values.length;
   const ny = run.y.values.length;
-  const entries: LegendEntry[] = models.map((model, k) => {
-    const counts = run.summary.models.find((m) => m.model === model);
-    const share = counts ? counts.ok / run.summary.points : 0;
-    const dash = dashArray(styles[k % styles.length] as LineStyle);
-    return {
-      label: model,
-      note: `ok on ${Math.round(100 * share)} %`,
-      colour: okabeItoColours[k % okabeItoColours.length] as string,
-      ...(dash !== undefined ? { dash } : {}),
-      lineWidth: 2.5,
-      marker: 'none',
-      markerFilled: false,
-      sample: 'line',
-    };
-  });
-  const legend = legendSize(entries, 1);
-
   const invalid = run.summary.errors;
   const header = drawHeader(
     `Where each shortcut holds: ${run.caseName}`,
     [
-      `outlined and shaded: |drift| <= ${percentText(tolerance)} against ${run.casePoint.reference.model} (verdict ok); darker where more shortcuts hold` +
+      `green, outlined: |drift| ≤ ${percentText(tolerance)} against ${run.casePoint.reference.model} (verdict ok); white: marginal or unsafe; one panel per shortcut, same axes` +
         (invalid > 0 ? `; grey: ${invalid} points where the case is invalid` : ''),
       CHART_CAUTION,
     ],
     width,
   );
-  const top = header.bottom + 8;
-  const bottom = height - gap.outer - xAxisMargin(true, true);
-  const right = width - gap.outer - legend.width - 16;
-  const xFirst = run.x.values[0] as number, xLast = run.x.values[nx - 1] as number;
-  const yFirst = run.y.values[0] as number, yLast = run.y.values[ny - 1] as number;
+
+  const cols = overviewColumns(models.length);
+  const rows = Math.max(1, Math.ceil(models.length / cols));
   const yKind = run.y.log ? 'log' : 'linear';
   const xKind = run.x.log ? 'log' : 'linear';
-  const yProbe = makeAxis(yKind, yFirst, yLast, bottom, top, 6, 'inside');
-  const left = gap.outer + yAxisMargin(yProbe, true) + 6;
-  const plot: Rect = { x: left, y: top, width: right - left, height: bottom - top };
-  const xAxis = makeAxis(xKind, xFirst, xLast, plot.x, plot.x + plot.width, Math.max(3, Math.min(11, Math.round(plot.width / 100))), 'inside');
-  const yAxis = makeAxis(yKind, yFirst, yLast, plot.y + plot.height, plot.y, Math.max(3, Math.min(9, Math.round(plot.height / 70))), 'inside');
+  const xFirst = run.x.values[0] as number, xLast = run.x.values[nx - 1] as number;
+  const yFirst = run.y.values[0] as number, yLast = run.y.values[ny - 1] as number;
+  const titleBand = fontSize.legend + 10;
+  // Shared titles: the y title left of the grid, the x title under it.
+  const top = header.bottom + 4;
+  const bottom = height - gap.outer - (fontSize.axisLabel + gap.axisLabel);
+  const left = gap.outer + fontSize.axisLabel + gap.axisLabel;
+  const right = width - gap.outer - 8;
+  const cellH = (bottom - top) / rows;
+  const cellW = (right - left) / cols;
+  const panelH = cellH - titleBand - xAxisMargin(true, false) - 6;
+  const yProbe = makeAxis(yKind, yFirst, yLast, panelH, 0, Math.max(2, Math.min(6, Math.round(panelH / 55))), 'inside');
+  const yMargin = yAxisMargin(yProbe, false) + 4;
+  const panelW = cellW - yMargin - 14;
 
-  const px = Float64Array.from(run.x.values, (v) => project(xAxis.scale, v));
-  const py = Float64Array.from(run.y.values, (v) => project(yAxis.scale, v));
-  const sx = new Float64Array(nx * ny);
-  const sy = new Float64Array(nx * ny);
-  const validity = new Float64Array(nx * ny);
-  for (let j = 0; j < ny; j++) {
-    for (let i = 0; i < nx; i++) {
-      sx[j * nx + i] = px[i] as number;
-      sy[j * nx + i] = py[j] as number;
-    }
-  }
-  for (const p of run.points) validity[p.index] = isPointError(p) ? Number.NaN : 0;
-
-  const layers: string[] = [
-    el('rect', { x: plot.x, y: plot.y, width: plot.width, height: plot.height, fill: ink.invalid }),
-    fieldImage({ ni: nx, nj: ny, offset: 0, strideI: 1, strideJ: nx }, sx, sy, validity, getColormap('rdbu'), -1, 1, 1),
-  ];
+  const px0 = (x0: number): Axis => makeAxis(xKind, xFirst, xLast, x0, x0 + panelW, Math.max(2, Math.min(6, Math.round(panelW / 90))), 'inside');
+  const body: string[] = [...header.elements];
+  const defs: string[] = [];
+  const panels: OverviewPanel[] = [];
+  const marks = casePointMark(run);
   models.forEach((model, k) => {
+    const row = Math.floor(k / cols);
+    const col = k % cols;
+    const plot: Rect = { x: left + col * cellW + yMargin, y: top + row * cellH + titleBand, width: panelW, height: panelH };
+    const xAxis = px0(plot.x);
+    const yAxis = makeAxis(yKind, yFirst, yLast, plot.y + plot.height, plot.y, Math.max(2, Math.min(6, Math.round(panelH / 55))), 'inside');
+    panels.push({ model, plot, xAxis, yAxis });
+    const px = Float64Array.from(run.x.values, (v) => project(xAxis.scale, v));
+    const py = Float64Array.from(run.y.values, (v) => project(yAxis.scale, v));
+    const sx = new Float64Array(nx * ny);
+    const sy = new Float64Array(nx * ny);
+    const validity = new Float64Array(nx * ny);
+    for (let j = 0; j < ny; j++) {
+      for (let i = 0; i < nx; i++) {
+        sx[j * nx + i] = px[i] as number;
+        sy[j * nx + i] = py[j] as number;
+      }
+    }
+    for (const p of run.points) validity[p.index] = isPointError(p) ? Number.NaN : 0;
+    const clipId = `overview-clip-${k}`;
+    defs.push(el('clipPath', { id: clipId }, el('rect', { x: plot.x, y: plot.y, width: plot.width, height: plot.height })));
+    const layers: string[] = [
+      el('rect', { x: plot.x, y: plot.y, width: plot.width, height: plot.height, fill: ink.invalid }),
+      fieldImage({ ni: nx, nj: ny, offset: 0, strideI: 1, strideJ: nx }, sx, sy, validity, getColormap('rdbu'), -1, 1, 1),
+    ];
     const d = safeRegionPath(safetyMargin(run, model), px, py);
-    if (d === '') return;
-    const entry = entries[k] as LegendEntry;
-    layers.push(el('path', { d, fill: entry.colour, 'fill-opacity': 0.07, 'fill-rule': 'evenodd', stroke: 'none' }));
-    layers.push(el('path', { d, fill: 'none', stroke: entry.colour, 'stroke-width': 2.5, 'stroke-dasharray': entry.dash, 'stroke-linejoin': 'round' }));
+    if (d !== '') {
+      layers.push(el('path', { d, fill: OK_FILL, 'fill-opacity': OK_FILL_OPACITY, 'fill-rule': 'evenodd', stroke: 'none' }));
+      layers.push(el('path', { d, fill: 'none', stroke: '#000000', 'stroke-width': 2, 'stroke-linejoin': 'round' }));
+    }
+    // "this case" written once, in the first panel; the others show the mark alone.
+    layers.push(caseMarkSvg(k === 0 ? marks : marks.map(({ x, y }) => ({ x, y })), xAxis.scale, yAxis.scale));
+    body.push(el('g', { 'clip-path': `url(#${clipId})` }, layers));
+    // x tick labels where no panel sits below.
+    const below = k + cols < models.length;
+    body.push(...drawAxes(plot, xAxis, yAxis, { grid: false, xTickLabels: !below }));
+    const counts = run.summary.models.find((m) => m.model === model);
+    const share = counts ? counts.ok / run.summary.points : 0;
+    const title = truncateToWidth(`${model}: ok on ${Math.round(100 * share)} %`, fontSize.legend * 1.08, plot.width);
+    body.push(textEl(title, { x: plot.x, y: plot.y - 8, 'font-size': fontSize.legend, 'font-weight': 'bold', fill: ink.text }));
   });
-  layers.push(caseMarkSvg(casePointMark(run), xAxis.scale, yAxis.scale));
-  const body: string[] = [
-    ...header.elements,
-    el('defs', {}, el('clipPath', { id: 'overview-clip' }, el('rect', { x: plot.x, y: plot.y, width: plot.width, height: plot.height }))),
-    el('g', { 'clip-path': 'url(#overview-clip)' }, layers),
-    ...drawAxes(plot, xAxis, yAxis, { xLabel: axisLabel(run.x), yLabel: axisLabel(run.y), grid: false, xTickLabels: true }),
-    drawLegend(entries, right + 16, plot.y, 1),
-  ];
-  return { svg: svgDocument(width, height, body), plot, xAxis, yAxis };
+
+  // Shared axis titles, centred on the grid of panels.
+  const gridLeft = left + yMargin;
+  const gridRight = left + (cols - 1) * cellW + yMargin + panelW;
+  const xTitleY = height - gap.outer - 2;
+  body.push(textEl(axisLabel(run.x), { x: (gridLeft + gridRight) / 2, y: xTitleY, 'font-size': fontSize.axisLabel, 'text-anchor': 'middle', fill: ink.text }));
+  const yTitleX = gap.outer + fontSize.axisLabel - 4;
+  const yTitleY = (top + bottom) / 2;
+  body.push(
+    textEl(truncateToWidth(axisLabel(run.y), fontSize.axisLabel, bottom - top), {
+      x: yTitleX,
+      y: yTitleY,
+      'font-size': fontSize.axisLabel,
+      'text-anchor': 'middle',
+      fill: ink.text,
+      transform: `rotate(-90 ${fmt(yTitleX)} ${fmt(yTitleY)})`,
+    }),
+  );
+  const first = panels[0];
+  if (!first) throw new RangeError('overview chart: a map has at least one shortcut');
+  return { svg: svgDocument(width, height, [el('defs', {}, defs), ...body]), panels, plot: first.plot, xAxis: first.xAxis, yAxis: first.yAxis };
 }

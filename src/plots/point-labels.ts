@@ -23,7 +23,7 @@ export interface PointLabel {
  * just above the point, 31 just below it (its top 8 px under the point); the others move further out
  * when lines crowd both sides.
  */
-const ANCHOR_OFFSETS_PX = [0, 31, -16, 47, -32, 63];
+const ANCHOR_OFFSETS_PX = [0, 31, -16, 47, -32, 63, -48, 79, -64, 95];
 
 interface Box {
   x0: number;
@@ -66,12 +66,19 @@ function linePoints(spec: LineChartSpec, k: number, g: PanelGeometry): { x: numb
   return { x: xs, y: ys };
 }
 
+/**
+ * Clearance (px) a label keeps from every line: half a series marker (11 px) and a line's half width,
+ * so a label that clears the line's centre does not still sit on its markers or its stroke.
+ */
+export const LABEL_CLEARANCE_PX = 7;
+
 function crossings(box: Box, pts: { x: number[]; y: number[] }, plot: PanelGeometry['plot']): number {
   let n = 0;
+  const c = LABEL_CLEARANCE_PX;
   for (let i = 0; i < pts.x.length; i++) {
     const x = pts.x[i] as number;
     const y = pts.y[i] as number;
-    if (x >= box.x0 && x <= box.x1 && y >= box.y0 && y <= box.y1) n++;
+    if (x >= box.x0 - c && x <= box.x1 + c && y >= box.y0 - c && y <= box.y1 + c) n++;
   }
   // Outside the plot counts as crossing everything: a label there would be clipped or hit the axis.
   if (box.y0 < plot.y || box.y1 > plot.y + plot.height) n += 1e6;

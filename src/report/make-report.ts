@@ -28,6 +28,8 @@ export interface ReportOptions extends CheckOptions {
   date: string;
   /** PNG resolution (96 = 1200 x 750 px). */
   dpi: number;
+  /** Called between the charts (the slow part); may throw to stop the report early (an interrupt). */
+  checkpoint?: () => void;
 }
 
 export interface ReportContent {
@@ -52,6 +54,7 @@ export async function makeReport(c: Case, opts: ReportOptions): Promise<ReportCo
   const scale = opts.dpi / 96;
   const figures: ReportFigure[] = [];
   for (const kind of kinds) {
+    opts.checkpoint?.();
     const svg = plotSvg(kind, { case: c, check, field: study }, REPORT_CHART, scale);
     figures.push({
       kind,

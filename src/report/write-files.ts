@@ -4,8 +4,8 @@
  * write fails, the temporary files are removed and no final file is touched; nothing half-written is
  * left behind.
  */
-import { mkdirSync, renameSync, rmSync, writeFileSync } from 'node:fs';
-import { basename, dirname, join } from 'node:path';
+import { mkdirSync, readdirSync, renameSync, rmdirSync, rmSync, writeFileSync } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
 import { UsageError } from '../errors.js';
 
 export interface OutputFile {
@@ -20,9 +20,24 @@ function temporaryName(path: string, index: number): string {
 
 /** Writes every file (creating the folders given in `folders` first), or none of them. */
 export function writeFilesAtomically(files: readonly OutputFile[], folders: readonly string[] = []): void {
+  // The first folder each mkdir created (undefined when it existed), so a failed write leaves no empty folder.
+  const created: { first: string; folder: string }[] = [];
+  const removeCreated = (): void => {
+    // From each folder up to the first one its mkdir made, every folder left empty goes.
+    for (const { first, folder } of created.reverse()) {
+      for (let dir = resolve(folder); readdirSync(dir).length === 0; dir = dirname(dir)) {
+        rmdirSync(dir);
+        if (dir === resolve(first)) break;
+      }
+    }
+  };
   try {
-    for (const folder of folders) mkdirSync(folder, { recursive: true });
+    for (const folder of folders) {
+      const first = mkdirSync(folder, { recursive: true });
+      if (first !== undefined) created.push({ first, folder });
+    }
   } catch (e) {
+    removeCreated();
     throw asUsageError(e);
   }
   const written: string[] = [];
@@ -34,6 +49,7 @@ export function writeFilesAtomically(files: readonly OutputFile[], folders: read
     });
   } catch (e) {
     for (const tmp of written) rmSync(tmp, { force: true });
+    removeCreated();
     throw asUsageError(e);
   }
   files.forEach((f, k) => renameSync(temporaryName(f.path, k), f.path));

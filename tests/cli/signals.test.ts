@@ -1,0 +1,87 @@
+/**
+ * The built command (dist/fincheck.js, `npm run build`) as a real child process, interrupted by a real signal:
+ * `report` by SIGINT and SIGTERM, `map` by SIGTERM in-process and on worker threads. Each ends with the shell's
+ * code for the signal (130 = 128 + SIGINT's 2, 143 = 128 + SIGTERM's 15), one line on stderr, nothing on stdout,
+ * and no output folder, temporary file or half-written file left. Inputs are invented.
+ */
+import { spawn } from 'node:child_process';
+import { existsSync, mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const bin = join(import.meta.dirname, '../../dist/fincheck.js');
+const tmp = mkdtempSync(join(tmpdir(), 'fincheck-signals-'));
+const pin = join(tmp, 'pin.yaml');
+writeFileSync(
+  pin,
+  `name: signal pin
+fin: { profile: pin, length: 30 mm, diameter: 4 mm }
+material: { k: 120 W/(m*K) }
+convection: { ambient: 25 degC, h: 80 W/(m^2*K), tip: convective }
+base: { temperature: 75 degC }
+`,
+);
+
+interface Ended {
+  code: number | null;
+  signal: NodeJS.Signals | null;
+  stdout: string;
+  stderr: string;
+}
+
+/** Starts the command, sends `signal` after `afterMs` and waits for the end. */
+async function interrupted(args: string[], signal: NodeJS.Signals, afterMs: number): Promise<Ended> {
+  const child = spawn(process.execPath, [bin, ...args], { stdio: ['ignore', 'pipe', 'pipe'] });
+  let stdout = '';
+  let stderr = '';
+  child.stdout.on('data', (d: Buffer) => (stdout += d.toString()));
+  child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+  const ended = new Promise<Ended>((resolve) => child.on('exit', (code, sig) => resolve({ code, signal: sig, stdout, stderr })));
+  await new Promise((resolve) => setTimeout(resolve, afterMs));
+  child.kill(signal);
+  const r = await ended;
+  return { ...r, stdout, stderr };
+}
+
+/** Every file under `dir` whose name marks it temporary. */
+function temporaryFiles(dir: string): string[] {
+  return existsSync(dir) ? readdirSync(dir, { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.tmp')) : [];
+}
+
+describe('interrupted report', () => {
+  // --dpi 400 renders three 5000 x 3125 px charts, seconds each: the signal lands while the report is computed (the
+  // command stops at the next chart).
+  // 3 s lets the process load and start listening (a signal before that kills it by the default action: signal set,
+  // no exit code, and the first expectation fails with its message).
+  it.each([
+    ['SIGINT', 130],
+    ['SIGTERM', 143],
+  ] as const)('%s: exit %i, a message, no folder and no temporary file', async (signal, code) => {
+    const out = join(tmp, `report-${signal}`, 'nested');
+    const r = await interrupted(['report', pin, '--out', out, '--dpi', '400', '--date', '2026-01-01'], signal, 3000);
+    expect(r.signal, `${signal} arrived before the report started listening for it`).toBeNull();
+    expect(r.code).toBe(code);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toBe(`fincheck: interrupted (${signal}); no report files were written\n`);
+    expect(existsSync(join(tmp, `report-${signal}`))).toBe(false);
+    expect(temporaryFiles(tmp)).toEqual([]);
+  });
+});
+
+describe('interrupted map', () => {
+  it.each([
+    ['1', '1d'],
+    ['2', '2d'],
+  ] as const)('SIGTERM with --jobs %s (%s reference): exit 143, a message, no folder', async (jobs, reference) => {
+    const out = join(tmp, `map-${jobs}`);
+    const args = ['map', pin, '--x', 'fin.diameter=2:8 mm', '--y', 'fin.length=10:60 mm', '--steps', '150x150', '--reference', reference, '--jobs', jobs, '--out', out];
+    const r = await interrupted(args, 'SIGTERM', 3000);
+    expect(r.signal, 'SIGTERM arrived before the map started listening for it').toBeNull();
+    expect(r.code).toBe(143);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/^fincheck: interrupted after \d+ of 22500 points; no files were written\n$/);
+    expect(existsSync(out)).toBe(false);
+    expect(temporaryFiles(tmp)).toEqual([]);
+  });
+});
