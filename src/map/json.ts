@@ -5,7 +5,7 @@
  * mapped, the case's own point, the summary counts and (per point) `mL`, the reference's model, efficiency and
  * discretisation error, each shortcut's heat rate and efficiency. `reference` is the case's own point's reference;
  * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
- * `files` (in map.json and --json alike) lists the files the map wrote into its folder (manifest.ts).
+ * `files` (in map.json and the JSON printed alike) lists the files the map wrote into its folder (manifest.ts).
  */
 import { CAUTIONS } from '../compare/cautions.js';
 import type { MapRun } from './run-map.js';
