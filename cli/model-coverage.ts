@@ -2,7 +2,7 @@
  * Asks the fd layer whether the 2-D model covers a fin before a command runs, and words a refusal with
  * the command's own options (the library below states the reason in the problem's words).
  */
-import type { Case } from '../src/case/types.js';
+import type { Case } from '../src/case/index.js';
 import { UsageError } from '../src/errors.js';
 import { finProblem, modelApplies } from '../src/fd/index.js';
 

@@ -1,8 +1,7 @@
 /** `fincheck check CASE`: the reference solution against every applicable shortcut. */
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/parse.js';
-import { runCheck } from '../../src/compare/check.js';
-import { formatCheck } from '../../src/compare/format-check.js';
+import { loadCase } from '../../src/case/index.js';
+import { runCheck, formatCheck } from '../../src/compare/index.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';

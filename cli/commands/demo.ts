@@ -6,9 +6,9 @@ import { existsSync } from 'node:fs';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Command } from 'commander';
-import { formatCheck } from '../../src/compare/format-check.js';
+import { formatCheck } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
-import { reportDate } from '../../src/report/report-date.js';
+import { reportDate } from '../../src/report/index.js';
 import type { Io } from '../io.js';
 import { parseOutDir, writeReport } from './report.js';
 

@@ -1,6 +1,6 @@
 /** `fincheck materials`: the built-in materials with k and the published source of each value. */
 import type { Command } from 'commander';
-import { builtInMaterials } from '../../src/case/materials.js';
+import { builtInMaterials } from '../../src/case/index.js';
 import type { Io } from '../io.js';
 
 export function registerMaterials(program: Command, io: Io): Command {

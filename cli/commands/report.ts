@@ -7,13 +7,10 @@
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/parse.js';
-import type { Case } from '../../src/case/types.js';
-import type { CheckReport } from '../../src/compare/types.js';
+import { loadCase, type Case } from '../../src/case/index.js';
+import type { CheckReport } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
-import { makeReport, REPORT_FILES } from '../../src/report/make-report.js';
-import { reportDate } from '../../src/report/report-date.js';
-import { writeFilesAtomically, type OutputFile } from '../../src/report/write-files.js';
+import { makeReport, REPORT_FILES, reportDate, writeFilesAtomically, type OutputFile } from '../../src/report/index.js';
 import { VERSION } from '../../src/version.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';

@@ -1,6 +1,6 @@
 /** `fincheck schema`: the JSON Schema of a case file. */
 import type { Command } from 'commander';
-import { caseJsonSchema } from '../../src/case/schema.js';
+import { caseJsonSchema } from '../../src/case/index.js';
 import type { Io } from '../io.js';
 
 export function registerSchema(program: Command, io: Io): Command {

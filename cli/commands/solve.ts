@@ -1,12 +1,10 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/parse.js';
-import { runSolve, type SolveReport } from '../../src/compare/solve.js';
-import { describeCase } from '../../src/compare/describe-case.js';
+import { loadCase } from '../../src/case/index.js';
+import { runSolve, type SolveReport, describeCase, runSolve2D, type Solve2DReport } from '../../src/compare/index.js';
 import type { Io } from '../io.js';
 import { requireModel2D } from '../model-coverage.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
-import { runSolve2D, type Solve2DReport } from '../../src/compare/solve2d.js';
 import { UsageError } from '../../src/errors.js';
 
 export function registerSolve(program: Command, io: Io): Command {

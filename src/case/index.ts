@@ -22,3 +22,6 @@ export {
 } from './units.js';
 export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
+export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
+export { aboveAbsoluteZero, fraction, nonNegative, positive } from './fields.js';
+export type { Range } from './fields.js';

@@ -11,8 +11,8 @@
  * nonlinearity (nonlinear-ledger.ts). Radiation: the fin sees only its surroundings (view factor 1, no
  * exchange with the base or neighbours).
  */
-import type { Case } from '../case/types.js';
-import { initBessel } from '../analytic/bessel.js';
+import type { Case } from '../case/index.js';
+import { initBessel } from '../analytic/index.js';
 import { ModelNotApplicableError } from '../errors.js';
 import {
   finProblem,
@@ -25,8 +25,7 @@ import {
   type FinStudy2D,
   type GridSolvers,
 } from '../fd/index.js';
-import { finGeometry } from '../mesh/geometry1d.js';
-import type { FinGeometry1D } from '../mesh/types.js';
+import { finGeometry, type FinGeometry1D } from '../mesh/index.js';
 import { cautionsFor, RADIATION_VIEW_NOTE } from './cautions.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { designFlags } from './flags.js';

@@ -10,7 +10,7 @@
  * Power-law h: h(theta) = h_b (theta/theta_b)^n. Conductivity tables: linear between points, constant
  * beyond the ends (as the solver). Units: W/(m^2*K), W/(m*K), K.
  */
-import type { Case, Conductivity, HDistribution } from '../case/types.js';
+import type { Case, Conductivity, HDistribution } from '../case/index.js';
 import { KELVIN_OFFSET, STEFAN_BOLTZMANN, type Fin1DResult } from '../fd/index.js';
 import { isLinearFinCase, type LinearFinCase } from '../fd/index.js';
 

@@ -22,10 +22,10 @@
  * temperature. Nonlinear fins: the shortcuts are drawn as a hand calculation makes them, with h and k at
  * the base temperature (linear-surrogate.ts); the table also has the fin-averaged guess.
  */
-import { uniformFin, uniformFinExcess, type UniformFinInput, type UniformTip } from '../analytic/uniform-fin.js';
-import type { Case } from '../case/types.js';
+import { uniformFin, uniformFinExcess, type UniformFinInput, type UniformTip } from '../analytic/index.js';
+import type { Case } from '../case/index.js';
 import { alongFin, type AlongFinSeries, type FinStudy, type FinStudy1D, type FinStudy2D, type LinearFinCase } from '../fd/index.js';
-import { finGeometry } from '../mesh/geometry1d.js';
+import { finGeometry } from '../mesh/index.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { guessesFor, shortcutCase } from './linear-surrogate.js';
 import type { CheckReport, ModelId, ShortcutId } from './types.js';

@@ -3,7 +3,7 @@
  * radiation): each re-solves the fin with fd-1d with that one effect removed, on the same grid, and
  * reports (Q_without - Q_actual) / Q_actual. A linear fin has none of these rows.
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import { conductivityAt } from './linear-surrogate.js';
 import type { AssumptionRow, ModelId } from './types.js';
 

@@ -11,7 +11,7 @@
  * them by Newton's method.
  * Units: W, K.
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D } from '../fd/index.js';
 import type { AssumptionRow, ReferenceResult } from './types.js';
 

@@ -3,7 +3,7 @@
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import { finProblem, solveFin, studyFin, type FinStudy1D } from '../fd/index.js';
 
 export interface ProfilePoint {

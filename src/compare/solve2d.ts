@@ -5,7 +5,7 @@
  * The one study solves it (studyFin): nonlinear fins (power-law h, grey radiation, k over temperature) by
  * Newton's method on the same grids; the report then carries the Newton step counts.
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import { finProblem, solveFin, studyFin, type Fin2DLine, type FinStudy2D, type NewtonStatistics } from '../fd/index.js';
 import type { ProfilePoint } from './solve.js';
 

@@ -4,7 +4,7 @@
  * refused before the run). Checks that relate two keys (a tip thicker than the base) depend on the other axis and
  * show per point instead.
  */
-import { aboveAbsoluteZero, fraction, nonNegative, positive, type Range } from '../case/fields.js';
+import { aboveAbsoluteZero, fraction, nonNegative, positive, type Range } from '../case/index.js';
 import type { QuantityKind } from '../case/index.js';
 
 export interface AxisKeyInfo {

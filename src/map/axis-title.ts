@@ -4,7 +4,7 @@
  * ("convection.h (W/(m^2*K))"). A key without an entry here (a table point such as fin.points[2][1]) keeps its key
  * path, so a title is never wrong, only plainer. map.csv, map.json and the text summary keep the key paths.
  */
-import { prettyUnit } from '../images/unit-text.js';
+import { prettyUnit } from '../images/index.js';
 import type { MapAxis } from './types.js';
 
 const titles: readonly { pattern: RegExp; title: string }[] = [

@@ -4,9 +4,7 @@
  * and on the overview chart.
  */
 import { project, type MapPoint as ChartPoint, type Scale } from '../images/index.js';
-import { markerElement } from '../images/markers.js';
-import { textEl } from '../images/svg.js';
-import { fontSize, ink } from '../images/theme.js';
+import { markerElement, textEl, fontSize, ink } from '../images/index.js';
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';
 

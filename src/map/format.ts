@@ -3,7 +3,7 @@
  * is ok / marginal / unsafe and its drift range, the case's own point, the points without results grouped by
  * cause, and the files written. Drifts carry their sign as `check` prints them (percent-text.ts).
  */
-import { signedPercentText } from '../compare/percent-text.js';
+import { signedPercentText } from '../compare/index.js';
 import { isPointError } from './types.js';
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';

@@ -9,9 +9,7 @@
  * (index = j * nx + i), NaN where a point has no result.
  */
 import { contourLines, placeLineLabel, project, type Scale } from '../images/index.js';
-import type { Rect } from '../images/layout.js';
-import { el, fmt, polylinePathData, textEl } from '../images/svg.js';
-import { textWidth } from '../images/text-metrics.js';
+import { type Rect, el, fmt, polylinePathData, textEl, textWidth } from '../images/index.js';
 
 export interface IsoField {
   /** Label prefix, e.g. "Bi" or "mL". */

@@ -7,7 +7,7 @@
  * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
  * `files` (in map.json and the JSON printed alike) lists the files the map wrote into its folder (manifest.ts).
  */
-import { CAUTIONS } from '../compare/cautions.js';
+import { CAUTIONS } from '../compare/index.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapPoint } from './types.js';
 

@@ -8,7 +8,7 @@
  * tolerance band always reads as the pale middle of the map and a few wild points do not wash it out (the colour
  * saturates beyond the range; the colour bar shows the range).
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
+import { CHART_CAUTION } from '../compare/index.js';
 import { mapChart, type MapChartResult } from '../images/index.js';
 import { axisTitle } from './axis-title.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';

@@ -10,14 +10,9 @@
  * "unsafe" nodes placed on the plot's edges, so every region closes along the edge of the map and can be filled
  * (even-odd rule for holes). Invalid points and points where the shortcut does not apply count as unsafe.
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
+import { CHART_CAUTION } from '../compare/index.js';
 import { contourLines, getColormap, makeAxis, project, type Axis } from '../images/index.js';
-import { drawAxes, xAxisMargin, yAxisMargin } from '../images/axes.js';
-import { fieldImage } from '../images/field-layer.js';
-import { drawHeader, type Rect } from '../images/layout.js';
-import { el, fmt, polylinePathData, svgDocument, textEl } from '../images/svg.js';
-import { truncateToWidth } from '../images/text-metrics.js';
-import { defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/theme.js';
+import { drawAxes, xAxisMargin, yAxisMargin, fieldImage, drawHeader, type Rect, el, fmt, polylinePathData, svgDocument, textEl, truncateToWidth, defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/index.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';

@@ -6,8 +6,7 @@
  */
 import { parseCaseObject, readDocument, type Case, type Locate, type ParseOptions } from '../case/index.js';
 import { basename, extname } from 'node:path';
-import { runCheck } from '../compare/check.js';
-import type { CheckReport } from '../compare/types.js';
+import { runCheck, type CheckReport } from '../compare/index.js';
 import { InputError, SolverError, UsageError } from '../errors.js';
 import { substituteAxis } from './substitute.js';
 import type { MapJob, MapModelId, MapPoint, PointModel, PointResult } from './types.js';

@@ -4,8 +4,7 @@
  * return plain data. Files and text are written by the caller (outputs.ts, format.ts).
  */
 import { parseCaseText, readDocument } from '../case/index.js';
-import { runCheck } from '../compare/check.js';
-import type { NotApplicable } from '../compare/types.js';
+import { runCheck, type NotApplicable } from '../compare/index.js';
 import { UsageError } from '../errors.js';
 import { finProblem, modelApplies } from '../fd/index.js';
 import { parseMapAxis } from './axis.js';

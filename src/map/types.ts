@@ -4,7 +4,7 @@
  * heat rates in W; drift = (shortcut - reference) / reference on the heat rate, as `fincheck check` reports it.
  */
 import type { KeyPath, QuantityKind } from '../case/index.js';
-import type { ModelId, ShortcutId, Verdict } from '../compare/types.js';
+import type { ModelId, ShortcutId, Verdict } from '../compare/index.js';
 
 /** What a map can show the drift of: the shortcuts, and the 1-D model when fd-2d is the reference. */
 export type MapModelId = ShortcutId | 'fd-1d';

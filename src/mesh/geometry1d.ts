@@ -16,7 +16,7 @@
  * degree <= 3 in x for every profile except the convex parabola, where the substitution
  * x = L(1 - s^2) makes g P dx a polynomial of degree 4 in s.
  */
-import type { Case, Edges, TabulatedProfile } from '../case/types.js';
+import type { Case, Edges, TabulatedProfile } from '../case/index.js';
 import { InputError } from '../errors.js';
 import type { FinGeometry1D } from './types.js';
 

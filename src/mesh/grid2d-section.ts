@@ -12,7 +12,7 @@
  * Lengths in m. `halfSize(s)` is the half-thickness (straight, annular) or the radius (pins) at the
  * distance s from the base, exactly as the case defines the profile; the grid puts its face nodes on it.
  */
-import type { Profile } from '../case/types.js';
+import type { Profile } from '../case/index.js';
 
 export type SectionKind = 'planar' | 'pin' | 'annular';
 

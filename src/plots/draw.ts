@@ -5,7 +5,7 @@ import { fluxChartSpec } from './flux-chart.js';
 import { heatmapChartSpec } from './heatmap-chart.js';
 import { profileChartSpec, type ChartSize, type CheckPlotInput } from './profile-chart.js';
 import type { PlotKind } from './sources.js';
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 
 export interface PlotSources {
   case: Case;

@@ -6,7 +6,7 @@
  * reference (or says how much the tip still passes when it never falls that far).
  */
 import type { LineChartSpec, LineSeries } from '../images/index.js';
-import type { ModelProfile } from '../compare/model-profiles.js';
+import type { ModelProfile } from '../compare/index.js';
 import { alongAxisLabel, lineLabel, modelStyle, thinSeries, toMillimetres } from './labels.js';
 import { checkSubtitle, legendNote, type ChartSize, type CheckPlotInput } from './profile-chart.js';
 

@@ -6,8 +6,8 @@
  * Coordinates in mm: x along the fin (annular fins: the radius r), y across it. Nonlinear fins: the same
  * chart of the Newton study (nonlinear2d-study.ts), its steps per grid in the header.
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
-import type { Case } from '../case/types.js';
+import { CHART_CAUTION } from '../compare/index.js';
+import type { Case } from '../case/index.js';
 import type { FinStudy2D } from '../fd/index.js';
 import type { FieldChartSpec } from '../images/index.js';
 import { relativeError, sig } from './labels.js';

@@ -2,10 +2,10 @@
  * Words and numbers on fincheck's charts: axis titles in the units engineers read (mm, °C, W, W/m),
  * model labels and legend notes, and the thinning of long node arrays into chart series.
  */
-import type { Case } from '../case/types.js';
-import type { ModelId, ReferenceResult } from '../compare/types.js';
+import type { Case } from '../case/index.js';
+import type { ModelId, ReferenceResult } from '../compare/index.js';
 import type { LineSeries } from '../images/index.js';
-import { defaultSeriesStyle } from '../images/series-styles.js';
+import { defaultSeriesStyle } from '../images/index.js';
 
 /** Typographic minus, so "−1.75 %" does not read as a hyphen. */
 const MINUS = '\u2212';

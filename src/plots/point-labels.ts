@@ -8,8 +8,7 @@
  * ranges of the first layout are kept, so the labels move nothing else.
  */
 import { lineChart, project, unproject, type LineChartSpec, type PanelGeometry, type PointAnnotation } from '../images/index.js';
-import { textWidth } from '../images/text-metrics.js';
-import { fontSize } from '../images/theme.js';
+import { textWidth, fontSize } from '../images/index.js';
 
 export interface PointLabel {
   panel: number;

@@ -4,10 +4,8 @@
  * marker (images/series-styles.ts), its heat rate, drift and verdict in the legend; the reference's tip
  * temperature is marked. Axes in mm and °C.
  */
-import { CHART_CAUTION } from '../compare/cautions.js';
-import type { Case } from '../case/types.js';
-import type { ModelProfiles } from '../compare/model-profiles.js';
-import type { CheckReport } from '../compare/types.js';
+import { CHART_CAUTION, type ModelProfiles, type CheckReport } from '../compare/index.js';
+import type { Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D } from '../fd/index.js';
 import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
 import { withPointLabels, type PointLabel } from './point-labels.js';

@@ -3,9 +3,8 @@
  * `flux`, and the fd-2d refinement study for `heatmap` (the one study, studyFin: Newton's method on the
  * same grid family for a nonlinear fin). Each is computed only when a chart needs it.
  */
-import type { Case } from '../case/types.js';
-import { runCheck, type CheckOptions } from '../compare/check.js';
-import { modelProfiles } from '../compare/model-profiles.js';
+import type { Case } from '../case/index.js';
+import { runCheck, type CheckOptions, modelProfiles } from '../compare/index.js';
 import { finProblem, modelApplies, studyFin, type FinStudy2D } from '../fd/index.js';
 import type { CheckPlotInput } from './profile-chart.js';
 

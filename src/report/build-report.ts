@@ -3,10 +3,9 @@
  * case, the result, the check table, the assumption ledger, the flags, the plots and the
  * discretisation error. Every number names its model, its unit and its error estimate.
  */
-import type { Case } from '../case/types.js';
-import type { CheckReport, Flag, ModelResult } from '../compare/types.js';
-import { relativeError, sig, signedPercent } from '../plots/labels.js';
-import type { CheckPlotInput } from '../plots/profile-chart.js';
+import type { Case } from '../case/index.js';
+import type { CheckReport, Flag, ModelResult } from '../compare/index.js';
+import { relativeError, sig, signedPercent, type CheckPlotInput } from '../plots/index.js';
 import { caseInputRows, prettyUnits } from './case-inputs.js';
 import { discretisationSection } from './discretisation.js';
 import type { Block, ReportDocument, Section, Tone } from './document.js';

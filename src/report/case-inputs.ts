@@ -2,8 +2,8 @@
  * The case's inputs as table rows (quantity, value with its unit, note): what the report states before
  * any result, in the units engineers read (mm, °C, W/(m²·K), W/(m·K), m²·K/W).
  */
-import type { Case, Profile } from '../case/types.js';
-import { describeH, describeTip } from '../compare/describe-case.js';
+import type { Case, Profile } from '../case/index.js';
+import { describeH, describeTip } from '../compare/index.js';
 import type { TableRow } from './document.js';
 
 const mm = (m: number): string => `${+(m * 1000).toPrecision(4)} mm`;

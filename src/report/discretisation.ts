@@ -4,8 +4,7 @@
  * Coleman & Raad 2008, J. Fluids Eng. 130(7), 078001), the estimate quoted beside every number.
  */
 import type { RefinementStudy } from '../fd/index.js';
-import { relativeError, sig } from '../plots/labels.js';
-import type { CheckPlotInput } from '../plots/profile-chart.js';
+import { relativeError, sig, type CheckPlotInput } from '../plots/index.js';
 import type { Block, Section } from './document.js';
 
 function studyTable(model: string, grids: string[], study: RefinementStudy): Block[] {

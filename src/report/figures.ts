@@ -1,9 +1,6 @@
 /** The report's figures: the PNG of each chart with a caption naming its models, units and errors. */
 import type { FinStudy2D } from '../fd/index.js';
-import { alongAxisLabel, referenceWords, relativeError, sig } from '../plots/labels.js';
-import type { CheckPlotInput } from '../plots/profile-chart.js';
-import type { PlotKind } from '../plots/sources.js';
-import { REMAINING_FRACTION } from '../plots/flux-chart.js';
+import { alongAxisLabel, referenceWords, relativeError, sig, type CheckPlotInput, type PlotKind, REMAINING_FRACTION } from '../plots/index.js';
 import type { Block, Section } from './document.js';
 
 export interface ReportFigure {

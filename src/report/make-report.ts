@@ -3,13 +3,11 @@
  * fd-2d field (the check's own study when fd-2d is its reference), three PNG charts, and the HTML and
  * Markdown documents. Nothing touches the disk here (write-files.ts does, all or nothing).
  */
-import type { Case } from '../case/types.js';
-import type { CheckOptions } from '../compare/check.js';
+import type { Case } from '../case/index.js';
+import type { CheckOptions } from '../compare/index.js';
 import type { FinStudy2D } from '../fd/index.js';
 import { svgToPng } from '../images/index.js';
-import { plotSvg } from '../plots/draw.js';
-import type { ChartSize, CheckPlotInput } from '../plots/profile-chart.js';
-import { checkPlotInput, fieldStudy, heatmapAvailability, type PlotKind } from '../plots/sources.js';
+import { plotSvg, type ChartSize, type CheckPlotInput, checkPlotInput, fieldStudy, heatmapAvailability, type PlotKind } from '../plots/index.js';
 import { buildReport } from './build-report.js';
 import type { ReportDocument } from './document.js';
 import { FIGURE_FILES, type ReportFigure } from './figures.js';

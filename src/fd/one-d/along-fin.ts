@@ -13,7 +13,7 @@
  * (problem/surface-law.ts: h_x g(θ) θ + ε σ (T^4 - T_s^4); h P θ for a linear fin).
  * Source of the scheme: Patankar, S. V., 1980, Numerical Heat Transfer and Fluid Flow, ch. 4 [from memory].
  */
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 import type { AlongFin } from '../study/along-fin.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { hAt } from '../problem/convection.js';

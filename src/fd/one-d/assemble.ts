@@ -18,7 +18,7 @@
  * The assembly takes nodal h values (h linear between nodes), so a nonlinear solver with h(θ) or
  * k(θ) can call it at every iteration with the current h and a constant (e.g. secant) conductivity.
  */
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 import { applyBaseBoundary, applyTipBoundary, type BaseBoundary, type TipBoundary } from './boundary.js';
 import { convectiveConductance, interfaceConductance } from './conductance.js';
 import { createTridiagonalSystem, type RowSumSystem } from '../linear-algebra/tridiagonal-system.js';

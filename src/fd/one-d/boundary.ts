@@ -19,7 +19,7 @@
  *                Q_tip = sqrt(h_L P_L k A_L) θ_{n-1} (exact for a uniform fin: Incropera et al.,
  *                Fundamentals of Heat and Mass Transfer, Table 3.4 case D, q = sqrt(hPkA) θ_b).
  */
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 import { convectiveConductance, interfaceConductance } from './conductance.js';
 import type { RowSumSystem } from '../linear-algebra/tridiagonal-system.js';
 import type { BaseBoundary, TipBoundary } from '../problem/conditions.js';

@@ -7,7 +7,7 @@
  * with the Simpson weights of the mesh (exact for h linear between nodes and P at most quadratic
  * within a cell). Source: Patankar, S. V., 1980, Numerical Heat Transfer and Fluid Flow, ch. 4 [from memory].
  */
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 
 /** K_i = k A_{i+1/2} / Δx_i, W/K, for conductivity k in W/(m*K). */
 export function interfaceConductance(mesh: Mesh1D, conductivity: number, i: number): number {

@@ -15,7 +15,7 @@
  * efficiency = Q / Q_ideal. Effectiveness (Gardner, K. A., 1945, Trans. ASME 67 [from memory]):
  * Q / (h(0) A_b θ_b), the heat rate of the bare base area the fin covers.
  */
-import type { FinGeometry1D, Mesh1D } from '../../mesh/types.js';
+import type { FinGeometry1D, Mesh1D } from '../../mesh/index.js';
 import { baseHeatRate, tipHeatLoss, type BaseBoundary, type ExcessField, type TipBoundary } from './boundary.js';
 import { convectiveConductance } from './conductance.js';
 import { hAt, idealConvectiveConductance } from '../problem/convection.js';

@@ -10,8 +10,7 @@
  * Refinement study: three or more nested grids of ratio 2, Richardson extrapolation and the GCI of
  * Celik et al. 2008, J. Fluids Eng. 130(7), 078001 (refinement.ts).
  */
-import { buildMesh1D } from '../../mesh/grid1d.js';
-import type { FinGeometry1D, Grading, Mesh1D } from '../../mesh/types.js';
+import { buildMesh1D, type FinGeometry1D, type Grading, type Mesh1D } from '../../mesh/index.js';
 import { assembleFin1D } from './assemble.js';
 import { hAtNodes, hBreakpoints } from '../problem/convection.js';
 import { dropSystem } from './drop-system.js';

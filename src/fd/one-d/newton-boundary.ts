@@ -26,7 +26,7 @@
  *                radiative part by a 3-point Gauss-Legendre rule, exact for the degree-5 polynomial
  *                (T^4 - T_s^4)(a + bθ) on each linear piece of k.
  */
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 import { contactConductance, type BaseBoundary, type TipBoundary } from './boundary.js';
 import { hAt } from '../problem/convection.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';

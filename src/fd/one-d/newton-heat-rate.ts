@@ -22,7 +22,7 @@
  * T_b is the wall temperature (behind any contact resistance). Without radiation and with n = 0 these
  * are the linear solver's definitions (heat-rate1d.ts), evaluated in the same order.
  */
-import type { FinGeometry1D } from '../../mesh/types.js';
+import type { FinGeometry1D } from '../../mesh/index.js';
 import { hAt } from '../problem/convection.js';
 import { idealHeatRate, type FinHeatRates1D } from './heat-rate.js';
 import { tipLoss } from './newton-boundary.js';

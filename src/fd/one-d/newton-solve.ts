@@ -11,7 +11,7 @@
  */
 import { continueFromLinear } from '../newton/continuation.js';
 import { SolverError } from '../../errors.js';
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 import { interfaceConductance, convectiveConductance } from './conductance.js';
 import { hAtNodes } from '../problem/convection.js';
 import { nonlinearBoundaries } from './newton-boundary.js';

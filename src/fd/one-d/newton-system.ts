@@ -18,21 +18,21 @@
  * (same matrix; the right-hand side θ_b G_i of its rows, formed in the same order except at a
  * convective or infinite tip), so it reproduces the linear solution to the last bit or so.
  *
- * Damping: backtracking line search on ||R||_2 (Armijo condition with c = 1e-4, halving the step;
- * Dennis & Schnabel 1983, Numerical Methods for Unconstrained Optimization and Nonlinear Equations,
- * §6.3 [from memory]); trial states with non-finite values or a negative absolute temperature are
- * rejected. Near round-off (relative residual <= 1e-10) the full step is taken.
+ * Damping and stopping: the shared driver (newton/damped-newton.ts: Armijo line search, full steps near
+ * round-off, here a relative residual <= 1e-10); trial states with non-finite values or a negative
+ * absolute temperature are rejected.
  * Convergence (both): relative residual max_i |R_i| / max_i s_i <= 1e-12, s_i the sum of the
  * magnitudes of the terms of row i (so 1e-12 is a thousand times the round-off floor whatever the
  * grid); and the heat-rate change between the last two iterates <= 1e-12 relative, or the heat
  * rate's round-off floor 16 ε_mach (|terms of Q_base|) / |Q| when that is larger. A linear problem
  * is solved by its first step (its heat rate cannot change beyond round-off), so it stops there. */
-import type { Mesh1D } from '../../mesh/types.js';
+import type { Mesh1D } from '../../mesh/index.js';
 import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js';
 import { tipLoss, type FlowAndSlope, type NonlinearBoundaries } from './newton-boundary.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
 import { cvLosses, type FaceLaw } from '../problem/surface-law.js';
 import { createTridiagonalSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
+import { dampedNewton, type NewtonModel } from '../newton/damped-newton.js';
 
 /** Everything about one mesh that the iteration does not change. */
 export interface NewtonSetup {
@@ -65,8 +65,6 @@ export interface NewtonOptions {
 export const DEFAULT_MAX_ITERATIONS = 50;
 export const DEFAULT_RESIDUAL_TOLERANCE = 1e-12;
 export const DEFAULT_HEAT_RATE_TOLERANCE = 1e-12;
-const ARMIJO = 1e-4;
-const MAX_HALVINGS = 40;
 const ROUND_OFF_REGIME = 1e-10;
 const HEAT_RATE_FLOOR_FACTOR = 16 * Number.EPSILON;
 
@@ -257,53 +255,48 @@ function step(setup: NewtonSetup, from: Float64Array, delta: Float64Array, lambd
   if (b.tip.kind === 'temperature') into[n - 1] = b.base.theta - b.tip.theta;
 }
 
+/** The 1-D fin as a model of the damped Newton driver (newton/damped-newton.ts). */
+function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | undefined): NewtonModel<State> {
+  const system = createTridiagonalSystem(n);
+  const w = new Float64Array(n);
+  const work = new Float64Array(n);
+  return {
+    linear: setup.linear,
+    roundOffRegime: ROUND_OFF_REGIME,
+    createState: () => createState(n),
+    start: (initial, into) => into.set(initial),
+    evaluate: (s) => evaluate(setup, s),
+    correction: (s, delta) => {
+      assembleNewton(setup, s, system);
+      const solution = solver ? solver(system) : conservativeThomasInto(system, w, work);
+      // Ĵ w = -R gives δθ = w / κ, so δd = -w / κ.
+      for (let i = 0; i < n; i++) delta[i] = -(solution[i] as number) / (s.ratio[i] as number);
+    },
+    step: (from, delta, lambda, into) => step(setup, from, delta, lambda, into),
+    heatRate: (s) => s.heatRate,
+    heatRateFloor: (s, heatRate) => s.heatRateFloor / Math.abs(heatRate),
+  };
+}
+
 /**
  * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified). Never throws on
  * non-convergence: see `failure`.
  */
 export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: NewtonOptions = {}): NewtonOutcome {
-  const n = initial.length;
-  const maxIterations = opts.maxIterations ?? DEFAULT_MAX_ITERATIONS;
-  const residualTolerance = opts.residualTolerance ?? DEFAULT_RESIDUAL_TOLERANCE;
-  const heatRateTolerance = opts.heatRateTolerance ?? DEFAULT_HEAT_RATE_TOLERANCE;
-  let current = createState(n);
-  let trial = createState(n);
-  const system = createTridiagonalSystem(n);
-  const w = new Float64Array(n);
-  const work = new Float64Array(n);
-  const delta = new Float64Array(n);
-  current.drop.set(initial);
-  evaluate(setup, current);
-  let halvings = 0;
-  let change = Infinity;
-  const outcome = (converged: boolean, iterations: number, failure: string | null): NewtonOutcome => ({
-    converged, drop: current.drop, theta: current.theta, iterations, halvings, residual: current.relative, heatRateChange: change, failure,
+  const run = dampedNewton(newtonModel(setup, initial.length, opts.solver), initial, {
+    maxIterations: opts.maxIterations ?? DEFAULT_MAX_ITERATIONS,
+    residualTolerance: opts.residualTolerance ?? DEFAULT_RESIDUAL_TOLERANCE,
+    heatRateTolerance: opts.heatRateTolerance ?? DEFAULT_HEAT_RATE_TOLERANCE,
   });
-  if (!current.valid) return outcome(false, 0, 'the starting temperatures give a non-finite residual');
-  for (let iteration = 1; iteration <= maxIterations; iteration++) {
-    assembleNewton(setup, current, system);
-    const solution = opts.solver ? opts.solver(system) : conservativeThomasInto(system, w, work);
-    // Ĵ w = -R gives δθ = w / κ, so δd = -w / κ.
-    for (let i = 0; i < n; i++) delta[i] = -(solution[i] as number) / (current.ratio[i] as number);
-    let lambda = 1;
-    const fullStepOnly = current.relative <= ROUND_OFF_REGIME;
-    for (;;) {
-      step(setup, current.drop, delta, lambda, trial.drop);
-      evaluate(setup, trial);
-      if (trial.valid && (fullStepOnly || trial.norm <= (1 - ARMIJO * lambda) * current.norm)) break;
-      if (fullStepOnly && !trial.valid) return outcome(false, iteration, 'the Newton step gave non-finite temperatures');
-      halvings++;
-      lambda *= 0.5;
-      if (lambda < 2 ** -MAX_HALVINGS) {
-        return outcome(false, iteration, `the line search could not reduce the residual (stalled at ${current.relative.toExponential(2)})`);
-      }
-    }
-    const previousHeatRate = current.heatRate;
-    [current, trial] = [trial, current];
-    const difference = Math.abs(current.heatRate - previousHeatRate);
-    change = difference === 0 ? 0 : difference / Math.abs(current.heatRate);
-    const heatRateLimit = Math.max(heatRateTolerance, current.heatRateFloor / Math.abs(current.heatRate));
-    if (current.relative <= residualTolerance && (setup.linear || change <= heatRateLimit)) return outcome(true, iteration, null);
-  }
-  return outcome(false, maxIterations, `no convergence in ${maxIterations} Newton steps (relative residual ${current.relative.toExponential(2)}, heat-rate change ${change.toExponential(2)})`);
+  const { state } = run;
+  return {
+    converged: run.converged,
+    drop: state.drop,
+    theta: state.theta,
+    iterations: run.iterations,
+    halvings: run.halvings,
+    residual: state.relative,
+    heatRateChange: run.heatRateChange,
+    failure: run.failure,
+  };
 }

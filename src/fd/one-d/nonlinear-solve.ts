@@ -41,9 +41,8 @@
  * temperature gives there. Effectiveness: Q / (heat of the bare base area at the base temperature,
  * convection and radiation). Refinement study: Celik et al. 2008 (refinement.ts).
  */
-import type { Case } from '../../case/types.js';
-import { buildMesh1D } from '../../mesh/grid1d.js';
-import type { Grading, Mesh1D } from '../../mesh/types.js';
+import type { Case } from '../../case/index.js';
+import { buildMesh1D, type Grading, type Mesh1D } from '../../mesh/index.js';
 import { autoGrading, studyGrids, type Fin1DResult } from './linear-solve.js';
 import { hBreakpoints } from '../problem/convection.js';
 import type { NewtonOptions } from './newton-system.js';

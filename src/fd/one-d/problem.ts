@@ -5,8 +5,7 @@
  *
  * Units: k in W/(m*K), h in W/(m^2*K), θ in K, ambient in degC.
  */
-import { finGeometry } from '../../mesh/geometry1d.js';
-import type { FinGeometry1D } from '../../mesh/types.js';
+import { finGeometry, type FinGeometry1D } from '../../mesh/index.js';
 import { baseBoundary, tipBoundary, type BaseBoundary, type TipBoundary } from './boundary.js';
 import type { LinearFinCase, LinearHDistribution } from '../problem/linear-case.js';
 

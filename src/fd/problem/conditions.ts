@@ -2,7 +2,7 @@
  * Base and tip conditions of a fin as data (the problem's words; each model discretises them in one
  * place: one-d/boundary.ts, two-d/boundary.ts). θ = T - T_amb in K; h in W/(m^2 K); R'' in m^2 K/W.
  */
-import type { Case } from '../../case/types.js';
+import type { Case } from '../../case/index.js';
 
 export type BaseBoundary =
   /** Fixed base excess temperature θ_b, K. */

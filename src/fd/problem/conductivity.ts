@@ -14,7 +14,7 @@
  * last table point before d, then to d), every piece formed from drops, never from differences of
  * large potentials. For a constant k, D = d and κ = 1 exactly (the linear scheme, bit for bit).
  */
-import type { Conductivity } from '../../case/types.js';
+import type { Conductivity } from '../../case/index.js';
 
 /** A piece of k over [from, to] in θ (K): k(θ) = k + slope (θ - from). */
 export interface ConductivityPiece {

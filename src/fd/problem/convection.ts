@@ -7,7 +7,7 @@
  * Ideal convective conductance (for the fin efficiency, Harper & Brown 1922 / Gardner 1945):
  * ∫_0^L h(x) P(x) dx, W/K, integrated exactly piece by piece with the geometry's perimeterIntegral.
  */
-import type { FinGeometry1D } from '../../mesh/types.js';
+import type { FinGeometry1D } from '../../mesh/index.js';
 import type { LinearHDistribution } from './linear-case.js';
 
 /** h at position x (m) on a fin of length L (m), W/(m^2*K). */

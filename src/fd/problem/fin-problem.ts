@@ -18,9 +18,8 @@
  * W/(m^2 K^4) (CODATA 2018). |θ| keeps the law defined and odd when part of the fin is colder than the
  * fluid (the same power of the excess either way). k(T) in W/(m K): constant or a table over T.
  */
-import type { Case, Conductivity, Edges, Profile } from '../../case/types.js';
-import { finGeometry } from '../../mesh/geometry1d.js';
-import type { FinGeometry1D } from '../../mesh/types.js';
+import type { Case, Conductivity, Edges, Profile } from '../../case/index.js';
+import { finGeometry, type FinGeometry1D } from '../../mesh/index.js';
 import { baseBoundary, tipBoundary, type BaseBoundary, type TipBoundary } from './conditions.js';
 import type { LinearHDistribution } from './linear-case.js';
 

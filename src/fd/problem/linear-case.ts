@@ -4,7 +4,7 @@
  * k and radiation make the fin equation nonlinear; the nonlinear solver wraps the same assembly
  * (assembleFin1D takes nodal h values) inside a Newton or Picard iteration.
  */
-import type { Case, Conductivity, Convection, HDistribution, Material } from '../../case/types.js';
+import type { Case, Conductivity, Convection, HDistribution, Material } from '../../case/index.js';
 
 /** The h distributions that do not depend on temperature. */
 export type LinearHDistribution = Exclude<HDistribution, { kind: 'power' }>;

@@ -20,7 +20,7 @@ import { requireModel, type FinModel } from '../problem/model-applies.js';
 import { alongFin2D } from '../two-d/along-fin.js';
 import { gridFamily2D, gridValues, summariseStudy2D, type Fin2DStudyOptions } from '../two-d/linear-study.js';
 import { twoDFinProblem } from '../two-d/nonlinear-problem.js';
-import { sizingProblem } from '../two-d/nonlinear-study.js';
+import { sizingProblem } from '../two-d/linear-study.js';
 import type { AlongFin } from './along-fin.js';
 import type { FinStudy, FinStudy1D, FinStudy2D, NewtonStatistics } from './fin-study.js';
 import { gridSolvers, type Grid1D, type Grid2D, type GridSolution1D, type GridSolution2D, type GridSolvers } from './grid-solvers.js';

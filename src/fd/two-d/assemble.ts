@@ -18,8 +18,7 @@
  * diagonal couplings are the cross-derivative terms a boundary-fitted grid needs. Second order.
  * Units of the assembled coefficients: W/K per metre of width (planar) or per radian (axisymmetric).
  */
-import type { Grid2D } from '../../mesh/grid2d.js';
-import { radiusAt } from '../../mesh/grid2d.js';
+import { type Grid2D, radiusAt } from '../../mesh/index.js';
 import { addCoupling, emptyStencil9, type Stencil9 } from '../linear-algebra/stencil9.js';
 
 /**

@@ -18,8 +18,8 @@
  * positive definite.
  */
 import { hAt } from '../problem/convection.js';
-import type { HDistribution } from '../../case/types.js';
-import { boundaryNodes, radiusAt, type BoundaryName, type Grid2D } from '../../mesh/grid2d.js';
+import type { HDistribution } from '../../case/index.js';
+import { boundaryNodes, radiusAt, type BoundaryName, type Grid2D } from '../../mesh/index.js';
 import { applyStencil9, couplingOf, type Stencil9, type System2D } from '../linear-algebra/stencil9.js';
 
 /** Convection coefficient along the fin (the linear distributions of the case contract). */

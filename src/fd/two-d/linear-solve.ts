@@ -8,9 +8,9 @@
  * shape and strides (ndarray style, shared with the grid, never copied). Heat rates in W for the whole
  * fin (width x section for straight fins, 2 pi x section for pins and annular fins).
  */
-import type { Case } from '../../case/types.js';
+import type { Case } from '../../case/index.js';
 import { GridError } from '../../errors.js';
-import { buildGrid2D, type Grid2D } from '../../mesh/grid2d.js';
+import { buildGrid2D, type Grid2D } from '../../mesh/index.js';
 import { assembleConduction2D } from './assemble.js';
 import { buildSystem2D, discretizeBoundaries, lumpedIntegral } from './boundary.js';
 import { hAt } from '../problem/convection.js';

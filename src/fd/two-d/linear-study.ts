@@ -11,9 +11,11 @@
  * 1.96 on thick sloped fins (Bi = 1), 1.99-2.02 in the thin limit; on uniform grids 1.6-1.9 (the independent
  * uniform-grid finite-volume check in script fin2d_series.py found 1.7-1.85).
  */
-import type { Case } from '../../case/types.js';
+import type { Case } from '../../case/index.js';
 import { fin2dProblem, type Fin2DProblem } from './problem.js';
 import { DEFAULT_GRADING, solveFin2DProblem, type Fin2DResult } from './linear-solve.js';
+import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../problem/fin-problem.js';
+import type { NonlinearFin2DProblem } from './nonlinear-problem.js';
 import { richardsonGci, type RefinementStudy } from '../study/refinement.js';
 import { solveGrids } from '../study/refinement-loop.js';
 import type { SolverMethod } from '../linear-algebra/auto-solver.js';
@@ -158,4 +160,19 @@ export function maxCoefficient(problem: Fin2DProblem): number {
       throw new Error(`maxCoefficient: ${JSON.stringify(never)}`);
     }
   }
+}
+
+/**
+ * Grid sizing of a fin with laws on top of its linear problem (nonlinear-problem.ts): the family resolves
+ * the decay length 1/m with m from the largest position part of h; a radiating fin adds its radiative
+ * tangent coefficient 4 ε σ T^3 at the hotter of the base and the surroundings, so a fin cooled mostly (or
+ * only) by radiation gets the cells its decay length needs. A linear fin gets its own problem's grids.
+ */
+export function sizingProblem(problem: NonlinearFin2DProblem): NonlinearFin2DProblem['linear'] {
+  const { linear, physics } = problem;
+  const emissivity = physics.radiation.emissivity;
+  if (emissivity === 0) return linear;
+  const hottest = Math.max(linear.thetaBase + linear.ambient_degC + KELVIN_OFFSET, physics.radiation.surroundings_K);
+  const radiative = 4 * emissivity * STEFAN_BOLTZMANN * hottest ** 3;
+  return { ...linear, h: { kind: 'uniform', h: maxCoefficient(linear) + radiative } };
 }

@@ -14,7 +14,7 @@
  * the radiating surface S_p = ∫ r ds of the same half-edges (m^2 per unit depth). A node's face loss is
  * then, as in 1-D (nonlinear-losses.ts), G_p |θ_p/θ_b|^n θ_p + ε σ S_p (T_p^4 - T_s^4), W per unit depth.
  */
-import type { Grid2D } from '../../mesh/grid2d.js';
+import type { Grid2D } from '../../mesh/index.js';
 import { assembleConduction2D } from './assemble.js';
 import { discretizeBoundaries, lumpedIntegral, type BoundaryTerms2D } from './boundary.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';

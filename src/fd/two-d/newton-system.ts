@@ -20,15 +20,13 @@
  * For a linear problem started from d = 0, Ĵ is the linear system's matrix and -R(θ_b) its right-hand
  * side minus A θ_b, so the first step gives the linear solution (to the linear solver's residual).
  *
- * Damping and stopping follow the 1-D driver (nonlinear-newton.ts): backtracking line search on ||R||_2
- * with the Armijo condition (c = 1e-4, halving; Dennis & Schnabel 1983, Numerical Methods for
- * Unconstrained Optimization and Nonlinear Equations, §6.3 [from memory]), non-finite trial states and
- * negative absolute temperatures rejected, full steps near round-off. Converged when the relative
+ * Damping and stopping: the driver shared with 1-D (newton/damped-newton.ts: Armijo line search, full
+ * steps near round-off, here a relative residual <= 1e-8), non-finite trial states and negative absolute
+ * temperatures rejected. Converged when the relative
  * residual max_p (|R_p| - f_p) / max_p s_p <= 1e-10 (s_p the sum of the magnitudes of the terms of row p:
  * each coupling's flow |K_pq (D_q - D_p)| and each exchange; f_p the row's round-off floor,
  * RESIDUAL_FLOOR_FACTOR) and the base heat rate changed by <= 1e-10 relative in the last step (or its
- * round-off floor, 16 ε_mach sum of the base rows' s_p). That driver is written for its tridiagonal state
- * and solve, so it is mirrored here rather than shared.
+ * round-off floor, 16 ε_mach sum of the base rows' s_p).
  */
 import { buildSystem2D, type BoundaryTerms2D, type SideTerms } from './boundary.js';
 import { heatRatesFromExchange, type HeatRates2D } from './heat-rate.js';
@@ -37,6 +35,7 @@ import { SIDE_NAMES, type Newton2DSetup, type SideName } from './newton-setup.js
 import { chooseSolverMethod, MAX_BANDED_BYTES, prepareSolver2D, type SolverMethod } from '../linear-algebra/auto-solver.js';
 import { bandedCholeskyBytes } from '../linear-algebra/banded-cholesky.js';
 import { attemptMgPcg } from '../linear-algebra/pcg.js';
+import { dampedNewton, type NewtonModel } from '../newton/damped-newton.js';
 import type { Stencil9, System2D } from '../linear-algebra/stencil9.js';
 
 export interface Newton2DOptions {
@@ -49,8 +48,6 @@ export interface Newton2DOptions {
 
 export const NEWTON_2D_MAX_ITERATIONS = 50;
 export const NEWTON_2D_TOLERANCE = 1e-10;
-const ARMIJO = 1e-4;
-const MAX_HALVINGS = 40;
 /** Below this relative residual the full step is taken (the line search cannot see a decrease there). */
 const ROUND_OFF_REGIME = 1e-8;
 const HEAT_RATE_FLOOR_FACTOR = 16 * Number.EPSILON;
@@ -302,65 +299,57 @@ function solveStep(system: System2D, requested: SolverMethod | 'auto'): { w: Flo
   return { w: prepareSolver2D(system, 'banded-cholesky').solve(system), method: 'banded-cholesky' };
 }
 
+/** A 2-D state with the heat rates of its potential and exchanges (set by the model's heatRate). */
+interface RatedState extends State {
+  rates: HeatRates2D | null;
+}
+
+/** The 2-D fin as a model of the damped Newton driver (newton/damped-newton.ts); `method`: the linear solver of the last step. */
+function newtonModel(setup: Newton2DSetup, n: number, requested: SolverMethod | 'auto', method: { last: SolverMethod }): NewtonModel<RatedState> {
+  return {
+    linear: setup.linear,
+    roundOffRegime: ROUND_OFF_REGIME,
+    createState: () => ({ ...createState(setup), rates: null }),
+    // The initial drops with the fixed nodes reset.
+    start: (initial, into) => step(setup, initial, new Float64Array(n), 0, into),
+    evaluate: (s) => evaluate(setup, s),
+    correction: (s, delta) => {
+      const solved = solveStep(newtonSystem(setup, s), requested);
+      method.last = solved.method;
+      const w = solved.w;
+      for (let p = 0; p < w.length; p++) delta[p] = -(w[p] as number) / (s.ratio[p] as number);
+    },
+    step: (from, delta, lambda, into) => step(setup, from, delta, lambda, into),
+    heatRate: (s) => {
+      const rates = stateHeatRates(setup, s.potential, s.exchange);
+      s.rates = rates;
+      return rates.base;
+    },
+    heatRateFloor: (s) => heatRateFloor(setup, s, s.rates as HeatRates2D),
+  };
+}
+
 /** Damped Newton from the drops `initial` (not modified; fixed nodes are reset). Never throws on non-convergence. */
 export function newtonSolve2D(setup: Newton2DSetup, initial: Float64Array, opts: Newton2DOptions = {}): Newton2DOutcome {
-  const maxIterations = opts.maxIterations ?? NEWTON_2D_MAX_ITERATIONS;
-  const residualTolerance = opts.residualTolerance ?? NEWTON_2D_TOLERANCE;
-  const heatRateTolerance = opts.heatRateTolerance ?? NEWTON_2D_TOLERANCE;
-  let current = createState(setup);
-  let trial = createState(setup);
-  const delta = new Float64Array(initial.length);
-  step(setup, initial, delta, 0, current.drop); // the initial drops with the fixed nodes reset
-  evaluate(setup, current);
-  let rates = stateHeatRates(setup, current.potential, current.exchange);
-  let halvings = 0;
-  let change = Infinity;
-  let method: SolverMethod = 'banded-cholesky';
-  const outcome = (converged: boolean, iterations: number, failure: string | null): Newton2DOutcome => ({
-    converged,
-    drop: current.drop,
-    theta: current.theta,
-    potential: current.potential,
-    exchange: current.exchange,
-    iterations,
-    halvings,
-    residual: current.relative,
-    heatRateChange: change,
-    rates,
-    method,
-    failure,
+  const method = { last: 'banded-cholesky' as SolverMethod };
+  const run = dampedNewton(newtonModel(setup, initial.length, opts.method ?? 'auto', method), initial, {
+    maxIterations: opts.maxIterations ?? NEWTON_2D_MAX_ITERATIONS,
+    residualTolerance: opts.residualTolerance ?? NEWTON_2D_TOLERANCE,
+    heatRateTolerance: opts.heatRateTolerance ?? NEWTON_2D_TOLERANCE,
   });
-  if (!current.valid) return outcome(false, 0, 'the starting temperatures give a non-finite residual');
-  for (let iteration = 1; iteration <= maxIterations; iteration++) {
-    const system = newtonSystem(setup, current);
-    const solved = solveStep(system, opts.method ?? 'auto');
-    method = solved.method;
-    const w = solved.w;
-    for (let p = 0; p < w.length; p++) delta[p] = -(w[p] as number) / (current.ratio[p] as number);
-    let lambda = 1;
-    const fullStepOnly = current.relative <= ROUND_OFF_REGIME;
-    for (;;) {
-      step(setup, current.drop, delta, lambda, trial.drop);
-      evaluate(setup, trial);
-      if (trial.valid && (fullStepOnly || trial.norm <= (1 - ARMIJO * lambda) * current.norm)) break;
-      if (fullStepOnly && !trial.valid) return outcome(false, iteration, 'the Newton step gave non-finite temperatures');
-      halvings++;
-      lambda *= 0.5;
-      if (lambda < 2 ** -MAX_HALVINGS) {
-        return outcome(false, iteration, `the line search could not reduce the residual (stalled at ${current.relative.toExponential(2)})`);
-      }
-    }
-    [current, trial] = [trial, current];
-    const previous = rates.base;
-    rates = stateHeatRates(setup, current.potential, current.exchange);
-    const difference = Math.abs(rates.base - previous);
-    change = difference === 0 ? 0 : difference / Math.abs(rates.base);
-    const heatRateLimit = Math.max(heatRateTolerance, heatRateFloor(setup, current, rates));
-    if (current.relative <= residualTolerance && (setup.linear || change <= heatRateLimit)) return outcome(true, iteration, null);
-  }
-  return outcome(
-    false,
-    maxIterations,
-    `no convergence in ${maxIterations} Newton steps (relative residual ${current.relative.toExponential(2)}, heat-rate change ${change.toExponential(2)})`,
-  );
+  const { state } = run;
+  return {
+    converged: run.converged,
+    drop: state.drop,
+    theta: state.theta,
+    potential: state.potential,
+    exchange: state.exchange,
+    iterations: run.iterations,
+    halvings: run.halvings,
+    residual: state.relative,
+    heatRateChange: run.heatRateChange,
+    rates: state.rates as HeatRates2D,
+    method: method.last,
+    failure: run.failure,
+  };
 }

@@ -18,7 +18,7 @@
  * slowest 2-D mode, which a nonlinear fin does not have); linear infinite fins are covered as in
  * fin2dCase.ts.
  */
-import type { Case } from '../../case/types.js';
+import type { Case } from '../../case/index.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { finProblem, type FinProblem } from '../problem/fin-problem.js';
 import { modelApplies, requireModel } from '../problem/model-applies.js';

@@ -20,9 +20,9 @@
  * base temperature, which is the linear solver's system: the result is fd-2d's (fin2d.ts) to round-off.
  */
 import { continueFromLinear } from '../newton/continuation.js';
-import type { Case } from '../../case/types.js';
+import type { Case } from '../../case/index.js';
 import { SolverError } from '../../errors.js';
-import { buildGrid2D, type Grid2D } from '../../mesh/grid2d.js';
+import { buildGrid2D, type Grid2D } from '../../mesh/index.js';
 import { checkGrid2D, DEFAULT_GRADING, gridLine, type Fin2DResult } from './linear-solve.js';
 import type { NewtonReport } from '../newton/newton-report.js';
 import { isLinearProblem, scaleNonlinearity } from '../problem/fin-problem.js';

@@ -9,11 +9,10 @@
  * surroundings, so a fin cooled mostly (or only) by radiation gets the cells its decay length needs.
  * A linear case gets the linear study's grids exactly.
  */
-import type { Case } from '../../case/types.js';
+import type { Case } from '../../case/index.js';
 import { DEFAULT_GRADING } from './linear-solve.js';
-import { gridFamily2D, gridValues, maxCoefficient, summariseStudy2D, type Fin2DStudy, type Fin2DStudyOptions } from './linear-study.js';
+import { gridFamily2D, gridValues, sizingProblem, summariseStudy2D, type Fin2DStudy, type Fin2DStudyOptions } from './linear-study.js';
 import { solveGrids } from '../study/refinement-loop.js';
-import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../problem/fin-problem.js';
 import { solveNonlinearFin2DProblem, type NonlinearFin2DResult } from './nonlinear-solve.js';
 import type { Newton2DOptions } from './newton-system.js';
 import { nonlinearFin2DProblem, type NonlinearFin2DProblem } from './nonlinear-problem.js';
@@ -53,12 +52,3 @@ export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
   };
 }
 
-/** The linear problem whose h sizes the grids (header). */
-export function sizingProblem(problem: NonlinearFin2DProblem): NonlinearFin2DProblem['linear'] {
-  const { linear, physics } = problem;
-  const emissivity = physics.radiation.emissivity;
-  if (emissivity === 0) return linear;
-  const hottest = Math.max(linear.thetaBase + linear.ambient_degC + KELVIN_OFFSET, physics.radiation.surroundings_K);
-  const radiative = 4 * emissivity * STEFAN_BOLTZMANN * hottest ** 3;
-  return { ...linear, h: { kind: 'uniform', h: maxCoefficient(linear) + radiative } };
-}

@@ -20,8 +20,8 @@
  * 826819). The next mode decays faster by at least exp(-(lambda2 - lambda1) L_cut / b)
  * <= exp(-1.43 * 20) ~ 4e-13 at the cut, so the cut changes the heat rate by less than that.
  */
-import type { Case } from '../../case/types.js';
-import { sectionOf, type Section2D } from '../../mesh/grid2d-section.js';
+import type { Case } from '../../case/index.js';
+import { sectionOf, type Section2D } from '../../mesh/index.js';
 import { finProblem, type FinProblem } from '../problem/fin-problem.js';
 import { modelApplies, nonlinearity } from '../problem/model-applies.js';
 import { ModelNotApplicableError } from '../../errors.js';
