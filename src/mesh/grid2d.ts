@@ -1,5 +1,5 @@
 /**
- * Structured, boundary-fitted grids for the 2-D fin section (see grid2dSection.ts for the coordinates).
+ * Structured, boundary-fitted grids for the 2-D fin section (see grid2d-section.ts for the coordinates).
  *
  * Nodes (i, j), i = 0..nodesX-1 along the fin (base to tip), j = 0..nodesY-1 across it (symmetry plane or
  * axis to the face). Node p = i * nodesY + j: the short direction is numbered fastest, so the matrices

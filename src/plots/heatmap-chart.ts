@@ -4,7 +4,7 @@
  * and the field is mirrored about the symmetry line. Colour bar in °C (viridis: perceptually uniform,
  * readable with colour-vision deficiencies and in grey), labelled isotherms, base and tip marked.
  * Coordinates in mm: x along the fin (annular fins: the radius r), y across it. Nonlinear fins: the same
- * chart of the Newton study (nonlinear2d-study.ts), its steps per grid in the header.
+ * chart of the Newton study (two-d/nonlinear-study.ts), its steps per grid in the header.
  */
 import { CHART_CAUTION } from '../compare/index.js';
 import type { Case } from '../case/index.js';

@@ -4,7 +4,7 @@
  *
  * Equation: d/dx(k A(x) dθ/dx) - h(x) P(x) θ = 0, θ = T - T_amb (K), x from the base (m), with the
  * case's base and tip conditions (boundary.ts). Discrete form: conservative vertex-centred finite
- * volumes (assemble1d.ts), second order in the cell size, solved for the drop θ_b - θ
+ * volumes (one-d/assemble.ts), second order in the cell size, solved for the drop θ_b - θ
  * (drop-system.ts) by a tridiagonal direct solver (row-sum Thomas by default).
  * Heat rates in W for the whole fin (straight fins: the whole width; annular: the whole ring).
  * Refinement study: three or more nested grids of ratio 2, Richardson extrapolation and the GCI of

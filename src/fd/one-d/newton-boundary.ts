@@ -3,7 +3,7 @@
  *
  * Sign convention: that of boundary.ts (θ = T - T_amb in K; every row reads "heat leaving CV i" =
  * "heat entering it from outside the fin"; Q_base positive INTO the fin at its base, Q_tip positive
- * OUT of the fin through its tip section, both in W). Kirchhoff potential U (nonlinear-conductivity.ts).
+ * OUT of the fin through its tip section, both in W). Kirchhoff potential U (problem/conductivity.ts).
  *
  * Base (node 0):
  *   temperature: θ_0 = θ_b (the row is replaced); Q_base = K_0 (U_0 - U_1) + loss_0.

@@ -2,8 +2,8 @@
  * Heat rates of a solved nonlinear 1-D fin, W, and its figures of merit.
  *
  * Q_base: the base CV's energy balance, K_0 (D_1 - D_0) + loss_0 (temperature base; D the Kirchhoff
- * potential drop below the base, nonlinear-conductivity.ts), or the flow through the contact
- * resistance C_b d_0 (nonlinear-boundary.ts). Q_surf = Q_tip + Σ_i loss_i (every CV's convection and
+ * potential drop below the base, problem/conductivity.ts), or the flow through the contact
+ * resistance C_b d_0 (one-d/newton-boundary.ts). Q_surf = Q_tip + Σ_i loss_i (every CV's convection and
  * radiation plus the tip). The interface fluxes F_i = K_i (D_{i+1} - D_i) cancel in pairs, so
  * Q_base - Q_surf is the sum of the converged residuals: energyBalance = |Q_base - Q_surf| / |Q_base|
  * is round-off.
@@ -20,7 +20,7 @@
  * area would lose at the base temperature, convection and radiation:
  *   ε_f = Q / (A_b [h_x(0) θ_b + ε σ (T_b^4 - T_s^4)]).
  * T_b is the wall temperature (behind any contact resistance). Without radiation and with n = 0 these
- * are the linear solver's definitions (heat-rate1d.ts), evaluated in the same order.
+ * are the linear solver's definitions (one-d/heat-rate.ts), evaluated in the same order.
  */
 import type { FinGeometry1D } from '../../mesh/index.js';
 import { hAt } from '../problem/convection.js';

@@ -1,11 +1,11 @@
 /**
  * The nonlinear 1-D fin on one mesh: set up the discrete operators, run damped Newton
- * (nonlinear-newton.ts), fall back on continuation when Newton alone fails, and report a failure as
+ * (one-d/newton-system.ts), fall back on continuation when Newton alone fails, and report a failure as
  * a SolverError that says what to change.
  *
  * Continuation (natural-parameter continuation; Allgower, E. L. & Georg, K., 1990, Numerical
  * Continuation Methods, Springer, ch. 1 [from memory]): the problem with its nonlinearity scaled by s
- * (exponent s n, emissivity s ε, k_ref + s (k - k_ref); nonlinear-problem.ts) is solved for
+ * (exponent s n, emissivity s ε, k_ref + s (k - k_ref); problem/fin-problem.ts) is solved for
  * s = 0 (linear), then s increased by Δs = 1/4, each stage started from the previous solution; a
  * stage that fails halves Δs, one that succeeds doubles it (up to 1/2); below Δs = 2^-12 it gives up.
  */
@@ -20,7 +20,7 @@ import { faceLaw } from '../problem/surface-law.js';
 import { newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup } from './newton-system.js';
 import { isLinearProblem, scaleNonlinearity, type FinProblem } from '../problem/fin-problem.js';
 
-/** The discrete operators of a problem on a mesh (nonlinear-newton.ts, NewtonSetup). */
+/** The discrete operators of a problem on a mesh (one-d/newton-system.ts, NewtonSetup). */
 export function newtonSetup(problem: FinProblem, mesh: Mesh1D): NewtonSetup {
   const n = mesh.nodes;
   const kirchhoff = kirchhoffTransform(problem.conductivity, problem.ambient_degC, problem.base.theta);

@@ -4,10 +4,10 @@
  * Unknowns: the drops below the base excess, d_i = θ_b - θ_i (K), as the linear solver carries them
  * (drop-system.ts): the base conduction is then formed from drops, without cancellation.
  * Residual of CV i (W; heat leaving minus heat entering, sign convention of boundary.ts):
- *   R_i = F_i - F_{i-1} + loss_i (+ base and tip terms, nonlinear-boundary.ts),
- *   F_i = K_i (D_{i+1} - D_i),  K_i = k_ref A_{i+1/2} / Δx_i  (interface i, conductance1d.ts),
- * with D the Kirchhoff potential drop (nonlinear-conductivity.ts) and loss_i the CV's convection and
- * radiation (nonlinear-losses.ts). Fixed-temperature rows are constraints, kept exact.
+ *   R_i = F_i - F_{i-1} + loss_i (+ base and tip terms, one-d/newton-boundary.ts),
+ *   F_i = K_i (D_{i+1} - D_i),  K_i = k_ref A_{i+1/2} / Δx_i  (interface i, one-d/conductance.ts),
+ * with D the Kirchhoff potential drop (problem/conductivity.ts) and loss_i the CV's convection and
+ * radiation (problem/surface-law.ts). Fixed-temperature rows are constraints, kept exact.
  *
  * Jacobian: ∂R_i/∂θ_j = M_ij κ_j + δ_ij loss'_i, with M the linear conduction matrix (conductances
  * K_i) and κ = k(T)/k_ref. Written J = Ĵ diag(κ), Ĵ = M + diag(loss'_i / κ_i + boundary slopes / κ_i):

@@ -13,20 +13,20 @@
  * Units: k W/(m K), h W/(m^2 K), lengths m, heat rates W (straight fins: the whole width).
  *
  * Discrete form: the linear solver's conservative vertex-centred finite volumes (the same mesh,
- * conductances and lumping; assemble1d.ts), with
+ * conductances and lumping; one-d/assemble.ts), with
  * - conduction through the Kirchhoff potential U = ∫_{T_amb}^{T} k dT / k_ref: F_i = K_i (U_i - U_{i+1}).
  *   Chosen over face conductivities from the mean of the two nodal temperatures because it is the
  *   exact face flux of the two nodal temperatures for a uniform section (∫ k dT over the face is
  *   the interval's mean conductivity, not k at the mean temperature), stays a single flux per face
  *   (conservative: the energy balance holds to round-off), keeps the scheme second order, and makes
  *   the conduction operator linear in U, so the Newton matrix is the linear fin matrix scaled by
- *   columns (nonlinear-newton.ts). For k linear in T (the fin of Aziz & Enamul-Huq 1975, J. Heat
+ *   columns (one-d/newton-system.ts). For k linear in T (the fin of Aziz & Enamul-Huq 1975, J. Heat
  *   Transfer 97 [from memory]) the heat rate converges at order 2 to the first-integral solution.
  * - face losses lumped at the nodes over each control volume, as in the linear scheme
- *   (nonlinear-losses.ts); boundary conditions in nonlinear-boundary.ts (exact continuation for the
+ *   (problem/surface-law.ts); boundary conditions in one-d/newton-boundary.ts (exact continuation for the
  *   infinite tip).
  * Solve: Newton's method with a tridiagonal Jacobian (row-sum Thomas solve), backtracking line search,
- * continuation in the nonlinearity when needed (nonlinear1d-solve.ts); converged when the relative
+ * continuation in the nonlinearity when needed (one-d/newton-solve.ts); converged when the relative
  * residual <= 1e-12 and the heat-rate change <= 1e-12 (or its round-off floor on very fine grids).
  * A fine grid starts from the linear interpolation of the solution on a grid 8 times coarser
  * (nested iteration), which cuts the Newton steps on the fine grid to about three.
@@ -36,7 +36,7 @@
  * A case that does not converge raises SolverError (exit code 3) saying what to change; never a
  * silent answer.
  *
- * Efficiency (nonlinear1d-heat.ts): Q / Q_ideal, Q_ideal = the heat of the same fin with every cooled
+ * Efficiency (one-d/newton-heat-rate.ts): Q / Q_ideal, Q_ideal = the heat of the same fin with every cooled
  * surface (the tip too when convective) at the base temperature, with the h and the radiation the base
  * temperature gives there. Effectiveness: Q / (heat of the bare base area at the base temperature,
  * convection and radiation). Refinement study: Celik et al. 2008 (refinement.ts).
@@ -56,7 +56,7 @@ import { solveGrids } from '../study/refinement-loop.js';
 export interface NonlinearFin1DOptions extends NewtonOptions {
   /** Number of nodes (cells + 1); more when breakpoints need at least one cell per segment. */
   readonly nodes: number;
-  /** Node distribution; 'auto' (default) as the linear solver (fin1d.ts, autoGrading). */
+  /** Node distribution; 'auto' (default) as the linear solver (one-d/linear-solve.ts, autoGrading). */
   readonly grading?: Grading | 'auto';
   /** Start a fine grid from a coarser grid's solution (default true). */
   readonly nested?: boolean;

@@ -29,6 +29,6 @@ export interface GridSolvers {
   readonly nonlinear: boolean;
   /** The fin on one 1-D grid, from `previous` (a coarser grid's solution of the same fin) when given. */
   oneD(problem: FinProblem, grid: Grid1D, previous?: GridSolution1D): GridSolution1D;
-  /** The fin on one 2-D grid (problem: two-d/nonlinear-problem.ts, twoDFinProblem), from `previous` when given. */
+  /** The fin on one 2-D grid (problem: two-d/problem/fin-problem.ts, twoDFinProblem), from `previous` when given. */
   twoD(problem: NonlinearFin2DProblem, grid: Grid2D, previous?: GridSolution2D): GridSolution2D;
 }

@@ -1,7 +1,7 @@
 /**
  * Heat rates of a solved 2-D section, from the node balances of the finite-volume scheme.
  *
- * For node p the balance of its control volume reads (sign convention of assemble2dBoundary.ts: heat
+ * For node p the balance of its control volume reads (sign convention of two-d/boundary.ts: heat
  * leaving the fin is positive)
  *     R_p = (K theta)_p + sum over its non-fixed boundaries s of G_s,p (theta_p - thetaFar_s),
  * where R_p is the heat entering through a fixed-temperature boundary (0 on every other node). The heat

@@ -1,9 +1,9 @@
 /**
  * fd-2d: the fin solved across its thickness on one grid.
  *
- * Pipeline (one function per stage): case -> 2-D problem (fin2dCase.ts) -> grid (mesh/grid2d.ts) ->
- * conduction operator (assemble2d.ts) -> boundary terms and system (assemble2dBoundary.ts) -> solve
- * (any Solver2D; automatic choice by default) -> heat rates and lines (fin2dHeat.ts, here).
+ * Pipeline (one function per stage): case -> 2-D problem (two-d/problem.ts) -> grid (mesh/grid2d.ts) ->
+ * conduction operator (two-d/assemble.ts) -> boundary terms and system (two-d/boundary.ts) -> solve
+ * (any Solver2D; automatic choice by default) -> heat rates and lines (two-d/heat-rate.ts, here).
  * Temperatures: the field is the excess theta = T - T_inf (K) at the grid nodes, flat, with the grid's
  * shape and strides (ndarray style, shared with the grid, never copied). Heat rates in W for the whole
  * fin (width x section for straight fins, 2 pi x section for pins and annular fins).
@@ -74,7 +74,7 @@ export interface Fin2DResult {
   baseTemperature_degC: number;
   /**
    * At the centre of the tip (x = end of the section, on the mid-plane or axis), degC. An infinite fin
-   * reports its limit, the ambient temperature (its field ends at the cut, see fin2dCase.ts).
+   * reports its limit, the ambient temperature (its field ends at the cut, see two-d/problem.ts).
    */
   tipTemperature_degC: number;
   /** Mid-plane (straight, annular) or axis (pins), from base to tip. */
@@ -83,7 +83,7 @@ export interface Fin2DResult {
   surface: Fin2DLine;
   /** h (t/2)/k (straight, annular) or h (D/2)/k (pins) at the base. */
   biot: number;
-  /** True when an infinite fin was cut and closed by its exact slowest mode (see fin2dCase.ts). */
+  /** True when an infinite fin was cut and closed by its exact slowest mode (see two-d/problem.ts). */
   truncatedInfinite: boolean;
   /** The linear solver that ran ('custom' when the caller passed one). */
   solver: SolverMethod | 'custom';

@@ -28,7 +28,7 @@ export interface Fin2DStudyOptions {
   coarseCellsAcross?: number;
   /** Target cell aspect ratio, length along / height across, before grading (default 2). */
   aspect?: number;
-  /** Grading toward the base and the face (largest/smallest cell); defaults in DEFAULT_GRADING (fin2d.ts). */
+  /** Grading toward the base and the face (largest/smallest cell); defaults in DEFAULT_GRADING (two-d/linear-solve.ts). */
   baseGrading?: number;
   faceGrading?: number;
   solver?: Solver2D;
@@ -163,7 +163,7 @@ export function maxCoefficient(problem: Fin2DProblem): number {
 }
 
 /**
- * Grid sizing of a fin with laws on top of its linear problem (nonlinear-problem.ts): the family resolves
+ * Grid sizing of a fin with laws on top of its linear problem (problem/fin-problem.ts): the family resolves
  * the decay length 1/m with m from the largest position part of h; a radiating fin adds its radiative
  * tangent coefficient 4 ε σ T^3 at the hotter of the base and the surroundings, so a fin cooled mostly (or
  * only) by radiation gets the cells its decay length needs. A linear fin gets its own problem's grids.

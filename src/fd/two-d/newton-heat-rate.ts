@@ -1,6 +1,6 @@
 /**
- * Figures of merit of a solved nonlinear 2-D fin, with the 1-D solver's definitions (nonlinear1d-heat.ts)
- * evaluated on the 2-D grid's lumped surfaces, as the linear 2-D solver does (fin2d.ts).
+ * Figures of merit of a solved nonlinear 2-D fin, with the 1-D solver's definitions (one-d/newton-heat-rate.ts)
+ * evaluated on the 2-D grid's lumped surfaces, as the linear 2-D solver does (two-d/linear-solve.ts).
  *
  * Efficiency (Harper, D. R. & Brown, W. B., 1922, NACA Report 158 [from memory], with the local laws at
  * the base temperature): η = Q / Q_ideal, Q_ideal = the heat of the same section with every cooled node

@@ -1,18 +1,18 @@
 /**
  * The discrete operators of the nonlinear 2-D fin on one grid: what the Newton iteration reads and never
- * changes (nonlinear2d-newton.ts).
+ * changes (two-d/newton-system.ts).
  *
- * Conduction: the linear scheme's operator K (assemble2d.ts: median-dual finite volumes on the triangles
+ * Conduction: the linear scheme's operator K (two-d/assemble.ts: median-dual finite volumes on the triangles
  * of the boundary-fitted grid, zero row sums) assembled with k_ref, the conductivity at the base
  * temperature, W/K per unit depth. With the Kirchhoff potential U = ∫ k dT / k_ref
- * (nonlinear-conductivity.ts) the conductive heat leaving node p is (K U)_p exactly as the linear scheme's
+ * (problem/conductivity.ts) the conductive heat leaving node p is (K U)_p exactly as the linear scheme's
  * (K θ)_p: the section's geometry does not change with temperature, so div(k grad T) = k_ref div(grad U)
  * is discretised by the same K, and U is taken linear in each triangle (the 1-D solver's choice: one flux
- * per dual face, conservative, second order; nonlinear1d.ts).
- * Boundaries: the linear scheme's terms of the position part (assemble2dBoundary.ts: per boundary node the
+ * per dual face, conservative, second order; one-d/nonlinear-solve.ts).
+ * Boundaries: the linear scheme's terms of the position part (two-d/boundary.ts: per boundary node the
  * lumped conductance G_p = ∫ h_x r ds over its two half-edges, or ∫ r/R'' ds for a contact base), plus
  * the radiating surface S_p = ∫ r ds of the same half-edges (m^2 per unit depth). A node's face loss is
- * then, as in 1-D (nonlinear-losses.ts), G_p |θ_p/θ_b|^n θ_p + ε σ S_p (T_p^4 - T_s^4), W per unit depth.
+ * then, as in 1-D (problem/surface-law.ts), G_p |θ_p/θ_b|^n θ_p + ε σ S_p (T_p^4 - T_s^4), W per unit depth.
  */
 import type { Grid2D } from '../../mesh/index.js';
 import { assembleConduction2D } from './assemble.js';
@@ -53,7 +53,7 @@ export interface Newton2DSetup {
   readonly thetaBase: number;
   /** True for a linear problem: one Newton step solves it. */
   readonly linear: boolean;
-  /** No node may change the sign of its θ in one step (nonlinear-newton.ts, keepSign). */
+  /** No node may change the sign of its θ in one step (one-d/newton-system.ts, keepSign). */
   readonly keepSign: boolean;
 }
 

@@ -3,18 +3,18 @@
  *
  * Unknowns: the drops below the base excess, d_p = θ_b - θ_p (K), at every node (fixed-temperature nodes
  * held exact). Residual of node p (W per unit depth; heat leaving its control volume minus heat entering,
- * sign convention of assemble2dBoundary.ts):
+ * sign convention of two-d/boundary.ts):
  *   R_p = sum_q K_pq (D_p - D_q) + sum over its boundaries of the exchange e_p,
- * D the Kirchhoff potential drop U(θ_b) - U(θ) (nonlinear-conductivity.ts), so that the first sum is
+ * D the Kirchhoff potential drop U(θ_b) - U(θ) (problem/conductivity.ts), so that the first sum is
  * (K U)_p in difference form; e_p = G_p g(θ_p) θ_p + ε σ S_p (T_p^4 - T_s^4) on a cooled face or tip
- * (nonlinear-losses.ts, cvLosses), C_p (θ_p - θ_b) = -C_p d_p through a contact resistance.
+ * (problem/surface-law.ts, cvLosses), C_p (θ_p - θ_b) = -C_p d_p through a contact resistance.
  *
  * Jacobian: dR_p/dθ_q = K_pq κ_q + δ_pq e'_p, κ = k(T)/k_ref: J = Ĵ diag(κ) with
  *   Ĵ = K + diag(e'_p / κ_p)   (fixed rows and columns eliminated),
  * the linear scheme's matrix with tangent conductances e'/κ on the boundary nodes. e' > 0 (q increases
  * with θ for n > -1) and κ > 0, so Ĵ is symmetric positive definite with row sums e'/κ plus the couplings
  * to fixed nodes: the linear 2-D solvers apply unchanged (banded Cholesky or MG-preconditioned CG,
- * sparse/autoSolver.ts). This symmetrised form was chosen over a nonsymmetric solve of J (banded LU)
+ * linear-algebra/auto-solver.ts). This symmetrised form was chosen over a nonsymmetric solve of J (banded LU)
  * because it keeps the linear solver's error control, multigrid and memory, and costs nothing: the column
  * scaling is undone after the solve. Step: Ĵ w = -R, δθ = w / κ, δd = -w / κ.
  * For a linear problem started from d = 0, Ĵ is the linear system's matrix and -R(θ_b) its right-hand
@@ -233,7 +233,7 @@ function conductionInto(K: Stencil9, D: Float64Array, out: Float64Array, scale: 
   }
 }
 
-/** Heat rates of a state (fin2dHeat.ts balances on the potential U - U_b = -D). */
+/** Heat rates of a state (two-d/heat-rate.ts balances on the potential U - U_b = -D). */
 export function stateHeatRates(setup: Newton2DSetup, potentialDrop: Float64Array, exchange: Record<SideName, Float64Array>): HeatRates2D {
   const { K, terms } = setup.ops;
   const potential = potentialDrop.map((v) => -v);

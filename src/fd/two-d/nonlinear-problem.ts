@@ -1,7 +1,7 @@
 /**
  * The nonlinear fin across its thickness as plain data: the 2-D section and boundary conditions of the
- * linear model (fin2dCase.ts) for the position part of h and the reference conductivity, plus the laws
- * that make the fin nonlinear, exactly as the 1-D solver states them (nonlinear-problem.ts).
+ * linear model (two-d/problem.ts) for the position part of h and the reference conductivity, plus the laws
+ * that make the fin nonlinear, exactly as the 1-D solver states them (problem/fin-problem.ts).
  *
  * Equation in the section (θ = T - T_amb in K, k in W/(m K), r the radius of axisymmetric sections,
  * 1 for the planar section of a straight fin):
@@ -11,12 +11,12 @@
  * h_x the position part of h along the fin (W/(m^2 K); the `base` of a power law), n its exponent, ε the
  * grey emissivity, T_s the surroundings (K). A convective tip loses the same q with h_x(L) ('face' tip
  * law), or with its own constant coefficient and the faces' radiation ('own-h'), as in 1-D
- * (nonlinear-boundary.ts). Base: fixed temperature or a contact resistance; tip: adiabatic, convective or
+ * (one-d/newton-boundary.ts). Base: fixed temperature or a contact resistance; tip: adiabatic, convective or
  * fixed temperature. Radiation: the fin sees only its surroundings (view factor 1).
  *
  * Not covered in 2-D: the infinite tip of a nonlinear fin (the linear model closes a cut fin with its
  * slowest 2-D mode, which a nonlinear fin does not have); linear infinite fins are covered as in
- * fin2dCase.ts.
+ * two-d/problem.ts.
  */
 import type { Case } from '../../case/index.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';

@@ -2,22 +2,22 @@
  * fd-2d for nonlinear fins (power-law h, grey radiation, k over temperature): the fin solved across its
  * thickness by Newton's method on one grid.
  *
- * Equation (nonlinear2d-problem.ts): div(k(T) r grad T) = 0 in the section, -k dT/dn = h_x |θ/θ_b|^n θ
+ * Equation (two-d/problem/fin-problem.ts): div(k(T) r grad T) = 0 in the section, -k dT/dn = h_x |θ/θ_b|^n θ
  * + ε σ (T^4 - T_s^4) on the cooled faces (and a convective tip), θ = T - T_amb in K, T absolute in K;
  * k W/(m K), h W/(m^2 K), heat rates in W for the whole fin (width x section for straight fins, 2 pi x
  * section for pins and annular fins). Straight fins have insulated side edges (as the linear fd-2d).
- * Discrete form: the linear scheme on the same boundary-fitted grid (assemble2d.ts, median-dual finite
+ * Discrete form: the linear scheme on the same boundary-fitted grid (two-d/assemble.ts, median-dual finite
  * volumes) applied to the Kirchhoff potential, boundary losses lumped per boundary node
- * (nonlinear2d-setup.ts). Solve: Newton with the symmetrised Jacobian and a line search
- * (nonlinear2d-newton.ts), converged to a relative residual <= 1e-10 and a heat-rate change <= 1e-10;
+ * (two-d/newton-setup.ts). Solve: Newton with the symmetrised Jacobian and a line search
+ * (two-d/newton-system.ts), converged to a relative residual <= 1e-10 and a heat-rate change <= 1e-10;
  * when Newton alone fails, natural-parameter continuation in the nonlinearity (exponent s n, emissivity
  * s ε, k_ref + s (k - k_ref), s from 0 to 1; Allgower, E. L. & Georg, K., 1990, Numerical Continuation
- * Methods, Springer, ch. 1 [from memory]) as in 1-D (nonlinear1d-solve.ts); a failure is a SolverError
+ * Methods, Springer, ch. 1 [from memory]) as in 1-D (one-d/newton-solve.ts); a failure is a SolverError
  * (exit code 3) that says what to change.
  * Start: a grid with an even number of cells both ways and more than NESTED_MIN_NODES nodes starts from
  * the solution on the grid with half the cells (nested iteration, recursively); otherwise from the base
  * temperature everywhere. A linear case (n = 0, ε = 0, constant k) is solved by the first step from the
- * base temperature, which is the linear solver's system: the result is fd-2d's (fin2d.ts) to round-off.
+ * base temperature, which is the linear solver's system: the result is fd-2d's (two-d/linear-solve.ts) to round-off.
  */
 import { continueFromLinear } from '../newton/continuation.js';
 import type { Case } from '../../case/index.js';
@@ -35,7 +35,7 @@ export interface NonlinearFin2DOptions extends Newton2DOptions {
   /** Grid nodes along the fin and across the half-thickness (or radius), >= 2 each. */
   readonly nx: number;
   readonly ny: number;
-  /** Grading toward the base and the face (largest/smallest cell); defaults DEFAULT_GRADING (fin2d.ts). */
+  /** Grading toward the base and the face (largest/smallest cell); defaults DEFAULT_GRADING (two-d/linear-solve.ts). */
   readonly baseGrading?: number;
   readonly faceGrading?: number;
   /** Start from the grid with half the cells when possible (default true). */
@@ -90,7 +90,7 @@ function dropsOf(setup: Newton2DSetup, theta: Float64Array): Float64Array {
 
 /**
  * A nodal field of a coarse grid on the nodes of a finer grid of the same section, bilinear in the grid
- * indices (exact at coincident nodes; the grids of a family share their smooth maps, fin2dStudy.ts).
+ * indices (exact at coincident nodes; the grids of a family share their smooth maps, two-d/linear-study.ts).
  */
 export function interpolateField(coarse: Grid2D, values: Float64Array, fine: Grid2D): Float64Array {
   const { nodesX: cx, nodesY: cy } = coarse;

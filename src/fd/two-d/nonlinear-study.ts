@@ -1,7 +1,7 @@
 /**
  * fd-2d of a nonlinear fin with its discretisation error: the grid family of the linear study
- * (fin2dStudy.ts, gridFamily2D: three grids refined by exactly 2 in both directions), each grid solved by
- * Newton (nonlinear2d.ts) from the previous grid's solution (nested iteration: 2-4 steps on the finer
+ * (two-d/linear-study.ts, gridFamily2D: three grids refined by exactly 2 in both directions), each grid solved by
+ * Newton (two-d/nonlinear-solve.ts) from the previous grid's solution (nested iteration: 2-4 steps on the finer
  * grids), then Richardson extrapolation and the Grid Convergence Index of Celik et al. 2008, J. Fluids Eng.
  * 130(7), 078001 (refinement.ts), exactly as for a linear fin.
  * Grid sizing: the family resolves the decay length 1/m with m from the largest position part of h; a

@@ -8,7 +8,7 @@
  * convective with its own or the local h, fixed temperature), the base temperature with or without a
  * contact resistance. Straight fins are solved per metre of width and multiplied by the width, so the
  * narrow side edges are insulated (`fin.edges` is not modelled: the 1-D model handles edges).
- * The nonlinear laws (k(T), the power-law h, radiation) act on top of this problem (nonlinear-problem.ts),
+ * The nonlinear laws (k(T), the power-law h, radiation) act on top of this problem (problem/fin-problem.ts),
  * which is built here for the position part of h and the reference conductivity.
  *
  * Infinite tip (uniform rectangular fins and pins, uniform h only): the section is cut at
@@ -46,7 +46,7 @@ export const INFINITE_CUT_HALF_SIZES = 20;
 
 /**
  * Why the linear 2-D solver cannot solve this case, or null when it can: a nonlinearity (solved by
- * Newton's method on top of the linear problem, nonlinear-problem.ts), or a fin fd-2d does not cover.
+ * Newton's method on top of the linear problem, problem/fin-problem.ts), or a fin fd-2d does not cover.
  */
 export function fin2dUnsupported(c: Case): string | null {
   const problem = finProblem(c);
@@ -66,7 +66,7 @@ export function fin2dProblem(c: Case): Fin2DProblem {
 
 /**
  * The 2-D problem of a fin with conductivity k (W/(m*K)) and the position part of its h: the linear fin
- * itself, or the base of a nonlinear one (k = k_ref; the laws act on top, nonlinear-problem.ts). The
+ * itself, or the base of a nonlinear one (k = k_ref; the laws act on top, problem/fin-problem.ts). The
  * caller has asked modelApplies(problem, '2d').
  */
 export function twoDProblem(problem: FinProblem, k: number): Fin2DProblem {
