@@ -3,6 +3,7 @@
  * names the option, the value and what is accepted (exit 2).
  */
 import { z } from 'zod';
+import { clip, quoted } from '../src/case/index.js';
 import { UsageError } from '../src/errors.js';
 
 /** "2%", "2 %", "0.02": a relative tolerance in (0, 1). */
@@ -29,7 +30,7 @@ export function parseOption<T>(option: string, schema: z.ZodType<T>, value: unkn
   const r = schema.safeParse(value);
   if (r.success) return r.data;
   const what = accepted ?? r.error.issues[0]?.message ?? 'a valid value';
-  throw new UsageError(`${option}: got ${JSON.stringify(value)}; expected ${what}`);
+  throw new UsageError(`${option}: got ${typeof value === 'string' ? quoted(value) : clip(String(value))}; expected ${what}`);
 }
 
 export const modelOption = z.enum(['1d', '2d']);

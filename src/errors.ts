@@ -33,18 +33,17 @@ export class UsageError extends Error {
 }
 
 /**
- * What a caller of the solver can change when a solve fails, besides the physics the message names.
- * Library code states them in the problem's words; the command line maps each to its own options.
+ * What the user can change after a solver failure, in the problem's words; the CLI turns it into the
+ * option of the command that ran ('another-2d-grid': the 2-D system of this grid could not be solved).
  */
-export type SolverRemedy = 'change-grid' | 'use-1d-model';
+export type SolverRemedy = 'another-2d-grid';
 
 export class SolverError extends Error {
   readonly exitCode = 3;
   override name = 'SolverError';
   constructor(
     message: string,
-    /** What else may help (grid, model), for the command line to name its options. */
-    readonly remedies: readonly SolverRemedy[] = [],
+    readonly remedy?: SolverRemedy,
   ) {
     super(message);
   }
@@ -68,7 +67,7 @@ export class ModelNotApplicableError extends UsageError {
 export class GridError extends UsageError {
   override name = 'GridError';
   constructor(readonly reason: string) {
-    super(`grid: ${reason}`);
+    super(`2-D grid: ${reason}`);
   }
 }
 

@@ -1,7 +1,7 @@
 /** `fincheck check CASE`: the reference solution against every applicable shortcut. */
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/index.js';
 import { runCheck, formatCheck } from '../../src/compare/index.js';
+import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
@@ -10,7 +10,7 @@ import type { SetExit } from '../program.js';
 export function registerCheck(program: Command, io: Io, setExit: SetExit): Command {
   return program
     .command('check')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('solve the fin and show how far each textbook shortcut drifts from the solution, and why')
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
@@ -27,10 +27,10 @@ Examples:
     .action(async (file: string, o: { tolerance: string; reference: string; json?: boolean; strict?: boolean }) => {
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
-      const c = loadCase(file);
+      const c = await loadCaseInput(file, io);
       requireReference(c, reference);
       const { report } = await runCheck(c, { tolerance, reference });
-      io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatCheck(c, report));
+      io.out(o.json ? `${JSON.stringify({ ...report, warnings: c.warnings ?? [] }, null, 2)}\n` : formatCheck(c, report));
       if (o.strict && report.models.some((m) => m.verdict === 'unsafe')) setExit(1);
     });
 }

@@ -6,6 +6,7 @@ import { existsSync } from 'node:fs';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Command } from 'commander';
+import { loadCase } from '../../src/case/index.js';
 import { formatCheck } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
 import { reportDate } from '../../src/report/index.js';
@@ -41,7 +42,7 @@ export function registerDemo(program: Command, io: Io): Command {
       const outDir = parseOutDir(o.out);
       const date = reportDate(undefined, process.env.SOURCE_DATE_EPOCH);
       const file = join(projectRoot(), DEMO_CASE);
-      const written = await writeReport({ caseFile: file, outDir, tolerance: 0.02, reference: 'auto', dpi: 96, date });
+      const written = await writeReport({ case: loadCase(file), caseFile: file, outDir, tolerance: 0.02, reference: 'auto', dpi: 96, date });
       io.out(`$ fincheck check ${shown(file)}\n\n`);
       io.out(formatCheck(written.case, written.check));
       io.out(`\nCharts and report of this check (fincheck report ${shown(file)} --out ${shown(outDir)}):\n`);

@@ -3,8 +3,9 @@ import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import { readCaseFile } from '../../src/case/index.js';
 import { type MapModelId, formatMapSummary, OutputsInterrupted, renderMapFiles, MapInterrupted, progressBar, prepareMap, runMap, MANIFEST_NAME, removeFiles, staleFiles, StagedFiles } from '../../src/map/index.js';
+import { asUsageError } from '../../src/report/index.js';
+import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
 import type { Io } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
@@ -21,7 +22,7 @@ const stepsOption = z
     const nx = m ? Number(m[1]) : Number.NaN;
     const ny = m ? Number(m[2] ?? m[1]) : Number.NaN;
     if (!(nx >= 2 && ny >= 2 && nx <= 1000 && ny <= 1000)) {
-      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, each from 2 to 1000' });
+      ctx.addIssue({ code: 'custom', message: 'NXxNY such as 41x41, each from 2 to 1000 (or N for N x N)' });
       return z.NEVER;
     }
     return [nx, ny];
@@ -59,11 +60,11 @@ function defaultOutDir(file: string): string {
 export function registerMap(program: Command, io: Io, setExit: SetExit): Command {
   return program
     .command('map')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point)')
     .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm')
     .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. "convection.h=10:1000 W/(m^2*K)"')
-    .option('--steps <NXxNY>', 'grid points along x and y', '41x41')
+    .option('--steps <NXxNY>', 'grid points along x and y: NXxNY, or N for N x N (9 is 9x9)', '41x41')
     .option('--log-x', 'space the x values geometrically and draw a log axis')
     .option('--log-y', 'space the y values geometrically and draw a log axis')
     .option('--models <ids>', `models to map, comma-separated (${modelIds.join(', ')}); default every shortcut that applies, and fd-1d beside a 2-D reference`)
@@ -98,10 +99,10 @@ Examples:
       const outDir = o.out ?? defaultOutDir(file);
 
       // prepareMap parses and validates the text (InputError with positions, as check reports them).
-      const caseText = readCaseFile(file);
+      const { text: caseText, fileName } = await readCaseInput(file, io);
       const prepared = await prepareMap({
         caseText,
-        fileName: file,
+        fileName,
         x: o.x,
         y: o.y,
         logX: o.logX === true,
@@ -112,6 +113,7 @@ Examples:
         ...(models ? { models } : {}),
         labels: { x: '--x', y: '--y', models: '--models', reference: '--reference' },
       });
+      printWarnings(prepared.warnings, io);
 
       // Default: all cores for 2-D references; in this process for a 1-D reference, whose points take
       // about a millisecond each, so that starting and warming up workers (module load, JIT) costs more
@@ -151,7 +153,7 @@ Examples:
           setExit(interruptExitCode(by));
           return;
         }
-        throw err;
+        throw asUsageError(err);
       } finally {
         interrupt.dispose();
       }

@@ -7,11 +7,11 @@ import { existsSync, statSync } from 'node:fs';
 import { dirname, extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { z } from 'zod';
-import { loadCase } from '../../src/case/index.js';
 import { UsageError } from '../../src/errors.js';
 import { chartBytes, type ChartFormat } from '../../src/images/index.js';
 import { plotSvg, type PlotSources, checkPlotInput, fieldStudy, heatmapAvailability, PLOT_KINDS, type PlotKind } from '../../src/plots/index.js';
 import { writeFilesAtomically } from '../../src/report/index.js';
+import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
@@ -76,7 +76,7 @@ const DESCRIPTIONS: Record<PlotKind, string> = {
 export function registerPlot(program: Command, io: Io): Command {
   return program
     .command('plot')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('draw one chart of the check: temperature profiles, heat flow, or the 2-D temperature field')
     .option('--out <file>', 'output file: .png (rendered with the bundled font) or .svg')
     .option('--kind <kind>', `profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}) or heatmap (${DESCRIPTIONS.heatmap})`, 'profile')
@@ -101,7 +101,7 @@ Examples:
       if (out.format === 'svg' && image.dpi !== 96) throw new UsageError('--dpi: applies to PNG output only (an SVG scales without loss)');
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
-      const c = loadCase(file);
+      const c = await loadCaseInput(file, io);
       if (kind === 'heatmap') {
         const available = heatmapAvailability(c);
         if (!available.ok) throw new UsageError(`--kind heatmap: ${available.reason}`);

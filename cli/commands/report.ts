@@ -7,11 +7,12 @@
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { loadCase, type Case } from '../../src/case/index.js';
+import { type Case, cleanFreeText } from '../../src/case/index.js';
 import type { CheckReport } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
 import { makeReport, REPORT_FILES, reportDate, writeFilesAtomically, type OutputFile } from '../../src/report/index.js';
 import { VERSION } from '../../src/version.js';
+import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
@@ -20,6 +21,9 @@ import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import { dpiOption } from './plot.js';
 
 export interface ReportRequest {
+  /** The case, read and parsed by the caller. */
+  case: Case;
+  /** Its file name as given (`stdin` for standard input), shown in the report. */
   caseFile: string;
   outDir: string;
   tolerance: number;
@@ -45,12 +49,12 @@ export interface WrittenReport {
   markdown: string;
   images: string[];
   heatmapUnavailable: string | null;
-  worstVerdict: 'ok' | 'marginal' | 'unsafe';
+  worstVerdict: 'ok' | 'marginal' | 'unsafe' | 'unresolved';
 }
 
 /** Computes the report and writes it into `outDir` (also what `fincheck demo` uses). */
 export async function writeReport(request: ReportRequest): Promise<WrittenReport> {
-  const c = loadCase(request.caseFile);
+  const c = request.case;
   requireReference(c, request.reference);
   const content = await makeReport(c, {
     tolerance: request.tolerance,
@@ -72,7 +76,7 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
   request.beforeWrite?.();
   writeFilesAtomically(files, [request.outDir]);
   const verdicts = content.check.report.models.map((m) => m.verdict);
-  const worstVerdict = verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
+  const worstVerdict = verdicts.includes('unresolved') ? 'unresolved' : verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
   return { case: c, check: content.check.report, html, markdown, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
 }
 
@@ -88,7 +92,7 @@ interface ReportCliOptions {
 export function registerReport(program: Command, io: Io, setExit: SetExit): Command {
   return program
     .command('report')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('write the check as a self-contained HTML report (prints to A4) and a Markdown report with PNG charts')
     .option('--out <dir>', 'folder for report.html, report.md and the PNG charts (created if missing)')
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
@@ -109,12 +113,13 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
-      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
+      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
+      const c = await loadCaseInput(file, io);
       // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
       const interrupt = listenForInterrupt();
       let written: WrittenReport;
       try {
-        written = await writeReport({ caseFile: file, outDir, tolerance, reference, dpi, date, beforeWrite: interrupt.check });
+        written = await writeReport({ case: c, caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text, outDir, tolerance, reference, dpi, date, beforeWrite: interrupt.check });
       } catch (err) {
         if (!(err instanceof Interrupted)) throw err;
         io.err(`fincheck: interrupted (${err.by}); no report files were written\n`);

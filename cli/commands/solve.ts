@@ -1,16 +1,17 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { loadCase } from '../../src/case/index.js';
-import { runSolve, type SolveReport, describeCase, runSolve2D, type Solve2DReport } from '../../src/compare/index.js';
+import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/index.js';
+import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
-import { requireModel2D } from '../model-coverage.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
 import { UsageError } from '../../src/errors.js';
+import { grid2dIssue } from '../../src/fd/index.js';
+import { sectionOf } from '../../src/mesh/index.js';
 
 export function registerSolve(program: Command, io: Io): Command {
   return program
     .command('solve')
-    .argument('<case>', 'case file (YAML or JSON)')
+    .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('solve the fin with finite volumes; by default a refinement study gives the discretisation error')
     .option('--model <m>', '1d (finite volumes along the fin) or 2d (across the thickness too)', '1d')
     .option('--nodes <n>', '1-D: solve once on exactly n nodes (no refinement study, discretisation error null)')
@@ -32,16 +33,27 @@ Examples:
       const grid = o.grid === undefined ? undefined : parseOption('--grid', gridOption, o.grid, 'NXxNY with whole numbers from 2 to 20000, e.g. 400x40');
       if (model === '1d' && grid !== undefined) throw new UsageError('--grid goes with --model 2d; use --nodes N for the 1-D model');
       if (model === '2d' && nodes !== undefined) throw new UsageError('--nodes goes with --model 1d; use --grid NXxNY for the 2-D model');
-      const c = loadCase(file);
+      const c = await loadCaseInput(file, io);
+      const warnings = c.warnings ?? [];
+      const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);
+      if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
-        requireModel2D(c);
-        const { report } = await runSolve2D(c, grid === undefined ? {} : { grid });
-        io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
+        const unsupported = solve2dUnsupported(c);
+        if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
+        const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
+        io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;
       }
-      const { report } = await runSolve(c, nodes === undefined ? {} : { nodes });
-      io.out(o.json ? `${JSON.stringify(report, null, 2)}\n` : formatSolve(report, describeCase(c)));
+      const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
+      io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
+}
+
+/** '  r1' on the first row and '  r2' on the last row of a radial profile table. */
+function radialMark(radial: boolean, row: number, rows: number): string {
+  if (!radial) return '';
+  if (row === 0) return '   r1';
+  return row === rows - 1 ? '   r2' : '';
 }
 
 function formatSolve(r: SolveReport, description: string[]): string {
@@ -49,15 +61,16 @@ function formatSolve(r: SolveReport, description: string[]): string {
   const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nodes} nodes`);
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
-  lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
+  lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
   lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
-  lines.push('', '  x [mm]     T [degC]');
   const pts = r.profile;
+  const radial = pts[0] !== undefined && 'r_m' in pts[0];
+  lines.push('', radial ? '  r [mm]     T [degC]   (radius: r1 at the base, r2 at the rim)' : '  x [mm]     T [degC]');
   const want = Math.min(11, pts.length);
   for (let j = 0; j < want; j++) {
     const p = pts[Math.round((j * (pts.length - 1)) / Math.max(1, want - 1))];
-    if (p) lines.push(`  ${(p.x_m * 1000).toFixed(3).padStart(8)}   ${p.T_degC.toFixed(3).padStart(9)}`);
+    if (p) lines.push(`  ${(pointPosition(p) * 1000).toFixed(3).padStart(8)}   ${p.T_degC.toFixed(3).padStart(9)}${radialMark(radial, j, want)}`);
   }
   lines.push('', 'Estimates of the stated model: confirm by test; h is usually the largest uncertainty.');
   return `${lines.join('\n')}\n`;
@@ -67,7 +80,12 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
   const lines = [`fincheck solve: ${r.case}`, ...description.map((d) => `  ${d}`), ''];
   const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nx} x ${r.grid.ny} nodes (along x across)`);
-  lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
+  const edges = r.edgesHeatRate_W !== 0;
+  lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (${edges ? 'whole fin, as check reports it; ' : ''}discretisation error ${err})`);
+  if (edges) {
+    lines.push(`    section      ${r.sectionHeatRate_W.toPrecision(6)} W  (2-D section x width: side edges insulated)`);
+    lines.push(`    side edges   ${r.edgesHeatRate_W >= 0 ? '+' : ''}${r.edgesHeatRate_W.toPrecision(4)} W  (the cooled side edges, from fd-1d: Q cooled / Q insulated = ${(r.heatRate_W / r.sectionHeatRate_W).toFixed(5)})`);
+  }
   if (r.efficiency !== null) lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
   lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
@@ -75,14 +93,15 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
     const grids = r.newton.stepsPerGrid.length > 1 ? ` (${r.newton.stepsPerGrid.join('/')} steps, coarsest to finest grid)` : ` (${r.newton.stepsPerGrid[0] ?? 0} steps with the coarser grids that seeded it)`;
     lines.push(`  nonlinear      Newton converged${grids}, relative residual ${r.newton.finest.residual.toExponential(1)}`);
   }
-  lines.push('', '  x [mm]   centre T [degC]   surface T [degC]');
+  const radial = r.centreline[0] !== undefined && 'r_m' in r.centreline[0];
+  lines.push('', `  ${radial ? 'r' : 'x'} [mm]   centre T [degC]   surface T [degC]${radial ? '   (radius: r1 at the base, r2 at the rim)' : ''}`);
   const n = r.centreline.length;
   const want = Math.min(11, n);
   for (let j = 0; j < want; j++) {
     const i = Math.round((j * (n - 1)) / Math.max(1, want - 1));
     const c = r.centreline[i];
     const s = r.surface[i];
-    if (c && s) lines.push(`  ${(c.x_m * 1000).toFixed(3).padStart(8)}   ${c.T_degC.toFixed(3).padStart(13)}   ${s.T_degC.toFixed(3).padStart(15)}`);
+    if (c && s) lines.push(`  ${(pointPosition(c) * 1000).toFixed(3).padStart(8)}   ${c.T_degC.toFixed(3).padStart(13)}   ${s.T_degC.toFixed(3).padStart(15)}${radialMark(radial, j, want)}`);
   }
   lines.push('', 'Estimates of the stated model: confirm by test; h is usually the largest uncertainty.');
   return `${lines.join('\n')}\n`;

@@ -132,8 +132,15 @@ export function checkMaterial(material: ValidatedCase['material']): PendingIssue
 export function checkConvection(c: ValidatedCase): PendingIssue[] {
   const issues: PendingIssue[] = [];
   const { h, tip, emissivity } = c.convection;
-  const radiates = (emissivity ?? 0) > 0;
-  const somewhere = 'h > 0 somewhere (or emissivity > 0): with no heat leaving the faces the fin carries no heat';
+  // Radiation carries heat only to surroundings at another temperature than the base: with
+  // convection.surroundings at base.temperature and no convection, no heat leaves an isothermal fin.
+  const surroundings = c.convection.surroundings ?? c.convection.ambient;
+  const idleRadiation = Math.abs(surroundings - c.base.temperature) <= equalTemperatureTolerance;
+  const radiates = (emissivity ?? 0) > 0 && !idleRadiation;
+  const somewhere =
+    (emissivity ?? 0) > 0 && idleRadiation
+      ? `h > 0 somewhere: convection.emissivity is ${emissivity} but convection.surroundings (${Number(surroundings.toPrecision(6))} degC) equals base.temperature, so radiation carries no heat either; with no heat leaving the faces there is nothing to cool`
+      : 'h > 0 somewhere (or emissivity > 0): with no heat leaving the faces the fin carries no heat';
 
   if (typeof h === 'number') {
     if (h === 0 && !radiates) issues.push({ path: ['convection', 'h'], accepted: somewhere });

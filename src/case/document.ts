@@ -6,6 +6,7 @@
  * keys are issues; the raw value is still returned for what could be read.
  */
 import { LineCounter, isMap, isPair, isScalar, isSeq, parseDocument, type Node, type Pair } from 'yaml';
+import { clip, escapeControl, quoted } from './clip-text.js';
 import type { KeyPath } from './key-path.js';
 import type { Locate, PendingIssue, SourcePosition } from './issues.js';
 
@@ -46,7 +47,7 @@ export function readDocument(text: string, fileName: string): ReadDocument {
     problems.push({
       issue: { path: ['(syntax)'], accepted: `valid ${name} (${error.message.replace(/\.$/, '')})` },
       position: at,
-      value: sourceLine === '' ? 'the end of the file' : JSON.stringify(sourceLine),
+      value: sourceLine === '' ? 'the end of the file' : quoted(sourceLine),
     });
   }
 
@@ -54,8 +55,31 @@ export function readDocument(text: string, fileName: string): ReadDocument {
   if (doc.errors.length === 0) findDuplicateKeys(contents, [], problems, position, text);
 
   const locate: Locate = (path) => locateIn(contents, path, position, text);
-  const raw: unknown = doc.errors.length === 0 ? doc.toJS({ maxAliasCount: 100 }) : undefined;
+  const raw: unknown = doc.errors.length === 0 ? toPlainValue(doc, problems) : undefined;
   return { raw, locate, problems, format };
+}
+
+/** At most this many alias expansions (`*name`) in a document: a case needs a few; a billion-laughs file has millions. */
+const maxAliasCount = 100;
+
+/**
+ * The document as plain data. yaml refuses to expand too many aliases by throwing (it has no way to ask first);
+ * that refusal is the file's problem, reported like a syntax error (exit 2), not an internal error.
+ */
+function toPlainValue(doc: ReturnType<typeof parseDocument>, problems: ReadDocument['problems']): unknown {
+  try {
+    return doc.toJS({ maxAliasCount });
+  } catch (err) {
+    if (!(err instanceof ReferenceError)) throw err;
+    problems.push({
+      issue: {
+        path: ['(syntax)'],
+        accepted: `a case whose aliases (*name) expand to at most ${maxAliasCount} copies (this one expands to far more, as a file made to exhaust memory does)`,
+      },
+      value: 'aliases that expand without bound',
+    });
+    return undefined;
+  }
 }
 
 function keyOf(pair: Pair): string | undefined {
@@ -77,7 +101,7 @@ function valueText(pair: Pair, text: string): string {
   const range = nodeRange(pair.value);
   const source = range ? text.slice(range[0], range[1]).trim() : '';
   if (source === '') return 'an empty value';
-  return source.length > 80 ? `${source.slice(0, 77)}...` : source;
+  return escapeControl(clip(source));
 }
 
 function findDuplicateKeys(
@@ -115,6 +139,25 @@ function findDuplicateKeys(
   }
 }
 
+const pairIndex = new WeakMap<object, Map<string, Pair>>();
+
+/**
+ * The pairs of a mapping by key (the first of duplicates), built once per mapping: looking each issue's key up by a
+ * linear search made 100,000 unknown keys take minutes (quadratic).
+ */
+function pairsByKey(node: { items: Pair[] }): Map<string, Pair> {
+  let index = pairIndex.get(node);
+  if (index === undefined) {
+    index = new Map();
+    for (const pair of node.items) {
+      const key = keyOf(pair);
+      if (key !== undefined && !index.has(key)) index.set(key, pair);
+    }
+    pairIndex.set(node, index);
+  }
+  return index;
+}
+
 /**
  * The position of the value at `path`; for a missing key, the position of the nearest key that exists (where
  * the missing one belongs). Scalars carry their source text.
@@ -134,7 +177,7 @@ function locateIn(
     if (typeof segment === 'number' && isSeq(node)) {
       next = node.items[segment];
     } else if (isMap(node)) {
-      const pair = node.items.find((p) => keyOf(p) === String(segment));
+      const pair = pairsByKey(node).get(String(segment));
       next = pair?.value;
       keyNode = pair?.key;
     }

@@ -1,6 +1,8 @@
 /** The case layer's public API: reading, units, validation and the built-in materials. */
-export { loadCase, parseCaseObject, parseCaseText, readCaseFile, type ParseOptions } from './parse.js';
-export { caseJsonSchema, caseSchema, profileNames, type ValidatedCase } from './schema.js';
+export { bareLengthUnit, loadCase, maxCaseBytes, parseCaseObject, parseCaseText, readCaseFile, readCaseStream, type ParseOptions } from './parse.js';
+export { caseJsonSchema, caseSchema, caseSchemaFor, profileNames, type ValidatedCase } from './schema.js';
+export { dimensionWarning, dimensionWarnings } from './plausibility.js';
+export { clip, cleanFreeText, quoted } from './clip-text.js';
 export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './key-path.js';
 export type { Locate, SourcePosition } from './issues.js';
 export { readDocument, detectFormat, type ReadDocument, type SourceFormat } from './document.js';
@@ -14,6 +16,9 @@ export {
 export {
   describeQuantity,
   fromSI,
+  isLengthUnit,
+  lengthUnits,
+  type LengthUnit,
   normaliseUnitText,
   parseQuantity,
   quantityKinds,
@@ -25,3 +30,5 @@ export type * from './types.js';
 export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
 export { aboveAbsoluteZero, fraction, nonNegative, positive } from './fields.js';
 export type { Range } from './fields.js';
+export type { CaseWarning } from './types.js';
+export { coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, temperatureRange, rangeText } from './fields.js';

@@ -4,6 +4,7 @@
  */
 import type { z } from 'zod';
 import type { InputIssue } from '../errors.js';
+import { clip, escapeControl, maxEchoChars, quoted } from './clip-text.js';
 import { formatKeyPath, getByKeyPath, type KeyPath } from './key-path.js';
 
 /** An issue before the value and position are looked up. */
@@ -23,13 +24,21 @@ export type Locate = (path: KeyPath) => SourcePosition | undefined;
 
 type ZodIssue = z.core.$ZodIssue;
 
+/** Unknown keys of one mapping listed one by one; the rest are counted in one more issue. */
+export const maxUnknownKeysListed = 10;
+
 /** Flattens zod issues into pending issues: one per unknown key, and the intended option of a failed union. */
 export function fromZodIssues(issues: readonly ZodIssue[], raw: unknown, prefix: KeyPath = []): PendingIssue[] {
   const out: PendingIssue[] = [];
   for (const issue of issues) {
     const path: KeyPath = [...prefix, ...issue.path.map((p) => (typeof p === 'symbol' ? String(p) : p))];
     if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) out.push({ path: [...path, key], accepted: issue.message });
+      for (const key of issue.keys.slice(0, maxUnknownKeysListed)) out.push({ path: [...path, key], accepted: issue.message });
+      const more = issue.keys.length - maxUnknownKeysListed;
+      if (more > 0) {
+        const where = formatKeyPath(path) || 'the top level';
+        out.push({ path, accepted: `no unknown keys (and ${more.toLocaleString('en-US')} more unknown keys at ${where}, not listed)` });
+      }
     } else if (issue.code === 'invalid_union' && issue.errors.length > 0) {
       out.push(...fromUnion(issue, path, raw));
     } else {
@@ -72,7 +81,7 @@ function fromUnion(issue: Extract<ZodIssue, { code: 'invalid_union' }>, path: Ke
  */
 export function displayValue(raw: unknown, path: KeyPath, position?: SourcePosition): string {
   const value = getByKeyPath(raw, path);
-  if (position?.scalar && Object.is(position.scalar.value, value)) return position.scalar.text;
+  if (position?.scalar && Object.is(position.scalar.value, value)) return escapeControl(clip(position.scalar.text));
   return renderValue(value, pathExists(raw, path));
 }
 
@@ -88,9 +97,21 @@ export function renderValue(value: unknown, present = true): string {
   if (value === undefined) return present ? 'an empty value' : 'nothing (the key is missing)';
   if (value === null) return 'an empty value';
   if (typeof value === 'number') return String(value);
-  if (typeof value === 'string') return JSON.stringify(value);
-  const text = JSON.stringify(value, (_key, v: unknown) => (typeof v === 'number' && !Number.isFinite(v) ? String(v) : v));
-  return text.length > 80 ? `${text.slice(0, 77)}...` : text;
+  if (typeof value === 'string') return quoted(value);
+  return escapeControl(clip(compactJson(value)));
+}
+
+/** JSON of a value, stopping once it is longer than can be shown (a value may hold a million keys). */
+function compactJson(value: unknown): string {
+  let length = 0;
+  const budget = maxEchoChars * 4;
+  const text = JSON.stringify(value, (_key, v: unknown) => {
+    if (length > budget) return undefined;
+    const shown = typeof v === 'number' && !Number.isFinite(v) ? String(v) : v;
+    length += typeof shown === 'string' ? shown.length + 3 : 4;
+    return typeof shown === 'string' && shown.length > maxEchoChars ? clip(shown) : shown;
+  });
+  return text ?? String(value);
 }
 
 /** Finalises pending issues: display path, value, and the position when the source is known. */
@@ -100,7 +121,7 @@ export function toInputIssues(pending: readonly PendingIssue[], raw: unknown, lo
     const issue: InputIssue = {
       path: formatKeyPath(path) || '(top level)',
       value: displayValue(raw, path, position),
-      accepted,
+      accepted: escapeControl(accepted),
     };
     if (position) {
       issue.line = position.line;

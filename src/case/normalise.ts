@@ -5,6 +5,7 @@
  * Defaults: edges cooled, tip convective (local face h), emissivity 0, surroundings = ambient,
  * contactResistance 0.
  */
+import { caseName } from './case-name.js';
 import type { ValidatedCase } from './schema.js';
 import type { Case, Conductivity, Edges, HDistribution, Material, Profile, TipCondition } from './types.js';
 
@@ -84,7 +85,7 @@ export function toTip(tip: ValidatedCase['convection']['tip']): TipCondition {
 export function toCase(validated: ValidatedCase, defaultName: string): Case {
   const { fin, material, convection, base } = validated;
   return {
-    name: validated.name ?? defaultName,
+    name: caseName(validated.name, defaultName).name,
     fin: { profile: toProfile(fin), edges: toEdges(fin) },
     material: toMaterial(material),
     convection: {

@@ -3,14 +3,18 @@
  * Every problem found is collected and thrown together as one InputError (exit code 2); nothing is computed
  * for a case with an error.
  */
-import { readFileSync } from 'node:fs';
 import { basename, extname } from 'node:path';
 import { InputError, type InputIssue } from '../errors.js';
 import { checkCase } from './checks.js';
 import { readDocument } from './document.js';
 import { fromZodIssues, toInputIssues, type Locate } from './issues.js';
 import { toCase } from './normalise.js';
-import { caseSchema } from './schema.js';
+import { readCaseFile } from './read-input.js';
+import { caseName } from './case-name.js';
+import { getByKeyPath } from './key-path.js';
+import { dimensionWarnings } from './plausibility.js';
+import { caseSchemaFor } from './schema.js';
+import { isLengthUnit, type LengthUnit } from './units.js';
 import type { Case } from './types.js';
 
 export interface ParseOptions {
@@ -26,12 +30,29 @@ export interface ParseOptions {
  * Throws InputError listing every issue.
  */
 export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
-  const result = caseSchema.safeParse(raw);
+  const lengthUnit = bareLengthUnit(raw);
+  const result = caseSchemaFor(lengthUnit).safeParse(raw);
   const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
   if (pending.length > 0 || !result.success) {
     throw new InputError(sortByPosition(toInputIssues(pending, raw, locate)), options.file);
   }
-  return toCase(result.data, options.defaultName ?? 'unnamed case');
+  const defaultName = options.defaultName ?? 'unnamed case';
+  const c = toCase(result.data, defaultName);
+  const nameWarning = caseName(result.data.name, defaultName).warning;
+  const warnings = [
+    ...(nameWarning ? [nameWarning] : []),
+    ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined),
+  ];
+  return { ...c, warnings };
+}
+
+/**
+ * The unit of bare lengths chosen by the case (`units: { length: mm }`), else m. An invalid `units` is reported
+ * by the schema (which then reads bare lengths in m).
+ */
+export function bareLengthUnit(raw: unknown): LengthUnit {
+  const unit = getByKeyPath(raw, ['units', 'length']);
+  return isLengthUnit(unit) ? unit : 'm';
 }
 
 /** Parses case text, YAML or JSON (by the file name's extension, else by content). Throws InputError. */
@@ -61,15 +82,7 @@ export function parseCaseText(text: string, fileName: string): Case {
   return parsed;
 }
 
-/** The text of a case file; a missing or unreadable file is an InputError (exit 2). */
-export function readCaseFile(path: string): string {
-  try {
-    return readFileSync(path, 'utf8');
-  } catch (err) {
-    const reason = (err as NodeJS.ErrnoException).code === 'ENOENT' ? 'no such file' : (err as Error).message;
-    throw new InputError([{ path: '(file)', value: JSON.stringify(path), accepted: `a readable case file (${reason})` }]);
-  }
-}
+export { readCaseFile, readCaseStream, maxCaseBytes } from './read-input.js';
 
 /** Reads and parses a case file. A missing or unreadable file is an InputError too. */
 export function loadCase(path: string): Case {

@@ -8,129 +8,25 @@
  */
 import { z } from 'zod';
 import {
-  aboveAbsoluteZero,
+  coefficientRange,
+  conductivityRange,
+  contactResistanceRange,
+  exponentRange,
+  finPosition,
+  finSize,
+  finSizeOrZero,
   fraction,
   mapping,
-  nonNegative,
   pairs,
-  positive,
+  positiveCoefficient,
   quantity,
+  temperatureRange,
   word,
   type Range,
 } from './fields.js';
 import { nearWords } from './spelling.js';
 import { findMaterial, materialNames, similarMaterialNames } from './materials.js';
-
-// ---- fin -------------------------------------------------------------------------------------------------
-
-const finLength = (description: string, whenMissing: string, range: Range = positive) =>
-  quantity('length', { range, description: `${description}, m`, whenMissing });
-
-const edges = word(
-  ['cooled', 'insulated'],
-  'Straight fins: whether the two narrow side edges (thickness x length) lose heat. Default cooled; ' +
-    'insulated gives the per-unit-width fin of the closed forms',
-);
-
-const needs = (fin: string, keys: string) => `${fin} needs ${keys}`;
-
-const rectangularNeeds = needs('a rectangular fin', 'length, thickness and width');
-const rectangular = mapping(
-  {
-    profile: z.literal('rectangular'),
-    length: finLength('Length from the base (x = 0) to the tip', rectangularNeeds),
-    thickness: finLength('Thickness (uniform)', rectangularNeeds),
-    width: finLength('Width along the base, across the direction of heat flow', rectangularNeeds),
-    edges: edges.optional(),
-  },
-  'a rectangular fin',
-  'Straight fin of uniform thickness',
-);
-
-const pinNeeds = needs('a pin fin', 'length and diameter');
-const pin = mapping(
-  {
-    profile: z.literal('pin'),
-    length: finLength('Length from the base (x = 0) to the tip', pinNeeds),
-    diameter: finLength('Diameter (uniform)', pinNeeds),
-  },
-  'a pin fin',
-  'Cylindrical spine',
-);
-
-const trapezoidalNeeds = needs('a trapezoidal fin', 'length, baseThickness, tipThickness and width');
-const trapezoidal = mapping(
-  {
-    profile: z.literal('trapezoidal'),
-    length: finLength('Length from the base (x = 0) to the tip', trapezoidalNeeds),
-    baseThickness: finLength('Thickness at the base', trapezoidalNeeds),
-    tipThickness: finLength('Thickness at the tip, at most baseThickness (0 makes a triangle)', trapezoidalNeeds, nonNegative),
-    width: finLength('Width along the base', trapezoidalNeeds),
-    edges: edges.optional(),
-  },
-  'a trapezoidal fin',
-  'Straight fin whose thickness tapers linearly from base to tip',
-);
-
-function taperedStraight(profile: 'triangular' | 'parabolic-concave' | 'parabolic-convex', shape: string) {
-  const fin = `a ${profile} fin`;
-  const finNeeds = needs(fin, 'length, baseThickness and width');
-  return mapping(
-    {
-      profile: z.literal(profile),
-      length: finLength('Length from the base (x = 0) to the tip', finNeeds),
-      baseThickness: finLength('Thickness at the base', finNeeds),
-      width: finLength('Width along the base', finNeeds),
-      edges: edges.optional(),
-    },
-    fin,
-    `Straight fin, ${shape}`,
-  );
-}
-
-const conicalNeeds = needs('a conical-pin fin', 'length, baseDiameter and tipDiameter');
-const conicalPin = mapping(
-  {
-    profile: z.literal('conical-pin'),
-    length: finLength('Length from the base (x = 0) to the tip', conicalNeeds),
-    baseDiameter: finLength('Diameter at the base', conicalNeeds),
-    tipDiameter: finLength('Diameter at the tip, at most baseDiameter (0 makes a sharp cone)', conicalNeeds, nonNegative),
-  },
-  'a conical-pin fin',
-  'Spine whose diameter tapers linearly from base to tip',
-);
-
-const annularNeeds = needs('an annular fin', 'innerRadius, outerRadius and thickness');
-const annular = mapping(
-  {
-    profile: z.literal('annular'),
-    innerRadius: finLength('Radius of the base (the tube the fin sits on)', annularNeeds),
-    outerRadius: finLength('Radius of the tip, greater than innerRadius', annularNeeds),
-    thickness: finLength('Thickness (uniform)', annularNeeds),
-  },
-  'an annular fin',
-  'Radial fin of uniform thickness on a tube; x = r - innerRadius',
-);
-
-const tabulatedNeeds = needs('a tabulated fin', 'shape and points (and width when the shape is straight)');
-const tabulated = mapping(
-  {
-    profile: z.literal('tabulated'),
-    shape: word(['straight', 'pin'], 'Whether the points give the thickness of a straight fin or the diameter of a pin'),
-    points: pairs(
-      quantity('length', { range: nonNegative, description: 'Position x from the base, m', whenMissing: tabulatedNeeds }),
-      quantity('length', { range: nonNegative, description: 'Thickness (straight) or diameter (pin) at x, m' }),
-      '[x, thickness or diameter]',
-      2,
-      'The profile, linear between points: x strictly increasing from 0 at the base; the size at the base > 0, ' +
-        'the size at the tip may be 0',
-    ),
-    width: finLength('Width along the base (straight shape only)', tabulatedNeeds).optional(),
-    edges: edges.optional(),
-  },
-  'a tabulated fin',
-  'Any measured or drawn profile',
-);
+import { lengthUnits, type LengthUnit } from './units.js';
 
 export const profileNames = [
   'rectangular',
@@ -144,195 +40,340 @@ export const profileNames = [
   'tabulated',
 ] as const;
 
-const finSchema = z
-  .discriminatedUnion(
-    'profile',
-    [
-      rectangular,
-      pin,
-      trapezoidal,
-      taperedStraight('triangular', 'tapering linearly to a sharp tip'),
-      taperedStraight('parabolic-concave', 'thickness ~ (1 - x/L)^2'),
-      taperedStraight('parabolic-convex', 'thickness ~ (1 - x/L)^(1/2)'),
-      conicalPin,
-      annular,
-      tabulated,
-    ],
+/**
+ * The case schema whose bare lengths are in `lengthUnit` (`units: { length: mm }`); every other key is the same.
+ * Built once per unit (see caseSchemaFor).
+ */
+function buildCaseSchema(lengthUnit: LengthUnit) {
+  const lengthOptions = lengthUnit === 'm' ? {} : { bareUnit: lengthUnit };
+
+  // ---- fin -------------------------------------------------------------------------------------------------
+
+  const finLength = (description: string, whenMissing: string, range: Range = finSize) =>
+    quantity('length', { ...lengthOptions, range, description: `${description}, m`, whenMissing });
+
+  const edges = word(
+    ['cooled', 'insulated'],
+    'Straight fins: whether the two narrow side edges (thickness x length) lose heat. Default cooled; ' +
+      'insulated gives the per-unit-width fin of the closed forms',
+  );
+
+  const needs = (fin: string, keys: string) => `${fin} needs ${keys}`;
+
+  const rectangularNeeds = needs('a rectangular fin', 'length, thickness and width');
+  const rectangular = mapping(
     {
-      error: (issue) => {
-        const given = issue.input;
-        const profile = typeof given === 'object' && given !== null && 'profile' in given ? given.profile : given;
-        const near = typeof profile === 'string' ? nearWords(profile, profileNames, 3) : [];
-        const hint = near.length > 0 ? ` (did you mean ${near[0]}?)` : '';
-        return `a fin profile: one of ${profileNames.join(', ')}${hint}`;
-      },
+      profile: z.literal('rectangular'),
+      length: finLength('Length from the base (x = 0) to the tip', rectangularNeeds),
+      thickness: finLength('Thickness (uniform)', rectangularNeeds),
+      width: finLength('Width along the base, across the direction of heat flow', rectangularNeeds),
+      edges: edges.optional(),
     },
-  )
-  .describe('The fin: its profile and the dimensions that profile needs');
+    'a rectangular fin',
+    'Straight fin of uniform thickness',
+  );
 
-// ---- material --------------------------------------------------------------------------------------------
+  const pinNeeds = needs('a pin fin', 'length and diameter');
+  const pin = mapping(
+    {
+      profile: z.literal('pin'),
+      length: finLength('Length from the base (x = 0) to the tip', pinNeeds),
+      diameter: finLength('Diameter (uniform)', pinNeeds),
+    },
+    'a pin fin',
+    'Cylindrical spine',
+  );
 
-const conductivity = (description: string) => quantity('conductivity', { range: positive, description });
+  const trapezoidalNeeds = needs('a trapezoidal fin', 'length, baseThickness, tipThickness and width');
+  const trapezoidal = mapping(
+    {
+      profile: z.literal('trapezoidal'),
+      length: finLength('Length from the base (x = 0) to the tip', trapezoidalNeeds),
+      baseThickness: finLength('Thickness at the base', trapezoidalNeeds),
+      tipThickness: finLength('Thickness at the tip, at most baseThickness (0 makes a triangle)', trapezoidalNeeds, finSizeOrZero),
+      width: finLength('Width along the base', trapezoidalNeeds),
+      edges: edges.optional(),
+    },
+    'a trapezoidal fin',
+    'Straight fin whose thickness tapers linearly from base to tip',
+  );
 
-const materialName = z
-  .string()
-  .transform((name, ctx) => {
-    const material = findMaterial(name);
-    if (material) return material;
-    const near = similarMaterialNames(name);
-    const hint = near.length > 0 ? `; did you mean ${near.slice(0, 3).join(' or ')}?` : '';
-    ctx.issues.push({
-      code: 'custom',
-      input: name,
-      message: `a built-in material (${materialNames.join(', ')}) or { k: 205 W/(m*K) } (unknown material${hint})`,
-      continue: true,
-    });
-    return z.NEVER;
-  })
-  .meta({ description: 'A built-in material (fincheck materials lists them with k and its source)', enum: [...materialNames] });
+  function taperedStraight(profile: 'triangular' | 'parabolic-concave' | 'parabolic-convex', shape: string) {
+    const fin = `a ${profile} fin`;
+    const finNeeds = needs(fin, 'length, baseThickness and width');
+    return mapping(
+      {
+        profile: z.literal(profile),
+        length: finLength('Length from the base (x = 0) to the tip', finNeeds),
+        baseThickness: finLength('Thickness at the base', finNeeds),
+        width: finLength('Width along the base', finNeeds),
+        edges: edges.optional(),
+      },
+      fin,
+      `Straight fin, ${shape}`,
+    );
+  }
 
-const conductivityTable = mapping(
-  {
-    points: pairs(
-      quantity('temperature', { range: aboveAbsoluteZero, description: 'Temperature, degC' }),
-      conductivity('Thermal conductivity at that temperature, W/(m*K)'),
-      '[temperature, conductivity]',
-      2,
-      'Conductivity against temperature, linear between points, temperatures strictly increasing',
-    ),
-  },
-  'a conductivity table',
-  'Conductivity that depends on temperature',
-);
+  const conicalNeeds = needs('a conical-pin fin', 'length, baseDiameter and tipDiameter');
+  const conicalPin = mapping(
+    {
+      profile: z.literal('conical-pin'),
+      length: finLength('Length from the base (x = 0) to the tip', conicalNeeds),
+      baseDiameter: finLength('Diameter at the base', conicalNeeds),
+      tipDiameter: finLength('Diameter at the tip, at most baseDiameter (0 makes a sharp cone)', conicalNeeds, finSizeOrZero),
+    },
+    'a conical-pin fin',
+    'Spine whose diameter tapers linearly from base to tip',
+  );
 
-const customMaterial = mapping(
-  {
-    k: z
-      .union([conductivity('Thermal conductivity, W/(m*K)'), conductivityTable], {
-        error: () => 'a thermal conductivity such as "205 W/(m*K)" or { points: [[20 degC, 205], [150 degC, 198]] }',
-      })
-      .describe('Thermal conductivity, constant or tabulated over temperature'),
-  },
-  'a material',
-  'A material given by its conductivity',
-);
+  const annularNeeds = needs('an annular fin', 'innerRadius, outerRadius and thickness');
+  const annular = mapping(
+    {
+      profile: z.literal('annular'),
+      innerRadius: finLength('Radius of the base (the tube the fin sits on)', annularNeeds),
+      outerRadius: finLength('Radius of the tip, greater than innerRadius', annularNeeds),
+      thickness: finLength('Thickness (uniform)', annularNeeds),
+    },
+    'an annular fin',
+    'Radial fin of uniform thickness on a tube; x = r - innerRadius',
+  );
 
-const materialSchema = z
-  .union([materialName, customMaterial], {
-    error: () => `a built-in material (${materialNames.join(', ')}) or { k: 205 W/(m*K) }`,
-  })
-  .describe('The fin material: a built-in name or { k: ... }');
-
-// ---- convection ------------------------------------------------------------------------------------------
-
-const coefficient = (description: string, range: Range = nonNegative) =>
-  quantity('heatTransferCoefficient', { range, description: `${description}, W/(m^2*K)` });
-
-const hLinear = mapping(
-  { base: coefficient('h at the base'), tip: coefficient('h at the tip') },
-  'a linear h',
-  'h varying linearly from base to tip',
-);
-
-const hPoints = mapping(
-  {
-    points: pairs(
-      quantity('length', { range: nonNegative, description: 'Position x from the base, m' }),
-      coefficient('h at x'),
-      '[x, h]',
-      2,
-      'h piecewise linear along x: x strictly increasing, within [0, fin length]',
-    ),
-  },
-  'an h table',
-  'h given at points along the fin',
-);
-
-const hPower = mapping(
-  {
-    law: z.literal('power').describe('h = base * (theta / theta_base)^exponent, theta = T - ambient'),
-    base: coefficient('h at the base temperature', positive),
-    exponent: quantity('dimensionless', {
-      range: { test: (v) => v > -1, text: '> -1' },
-      description: 'Exponent of the excess temperature: 1/4 laminar natural convection, 1/3 turbulent, about 2 ' +
-        'nucleate boiling; > -1 so that the heat flux h * theta vanishes with theta',
-    }),
-  },
-  'a power-law h',
-  'h that depends on the local excess temperature (nonlinear)',
-);
-
-const hSchema = z
-  .union([coefficient('Uniform h over the faces'), hLinear, hPoints, hPower], {
-    error: () =>
-      'a heat-transfer coefficient such as "40 W/(m^2*K)", { base: 60, tip: 25 }, { points: [[0 mm, 60], [40 mm, 25]] } ' +
-      'or { law: power, base: 12, exponent: 0.25 }',
-  })
-  .describe('Convection coefficient over the faces: uniform, linear, tabulated or a power law');
-
-const tipSchema = z
-  .union(
-    [
-      word(['adiabatic', 'convective', 'infinite'], 'adiabatic: no heat leaves the tip; convective: the local face h; infinite: a fin so long the tip is at ambient (uniform profiles only)'),
-      mapping({ convective: coefficient('The tip face\u2019s own coefficient') }, 'a convective tip', 'Tip with its own h'),
-      mapping(
-        { temperature: quantity('temperature', { range: aboveAbsoluteZero, description: 'Tip temperature, degC' }) },
-        'a tip at a set temperature',
-        'Tip held at a temperature',
+  const tabulatedNeeds = needs('a tabulated fin', 'shape and points (and width when the shape is straight)');
+  const tabulated = mapping(
+    {
+      profile: z.literal('tabulated'),
+      shape: word(['straight', 'pin'], 'Whether the points give the thickness of a straight fin or the diameter of a pin'),
+      points: pairs(
+        quantity('length', { ...lengthOptions, range: finPosition, description: 'Position x from the base, m', whenMissing: tabulatedNeeds }),
+        quantity('length', { ...lengthOptions, range: finSizeOrZero, description: 'Thickness (straight) or diameter (pin) at x, m' }),
+        '[x, thickness or diameter]',
+        2,
+        'The profile, linear between points: x strictly increasing from 0 at the base; the size at the base > 0, ' +
+          'the size at the tip may be 0',
       ),
-    ],
-    { error: () => 'adiabatic, convective, infinite, { convective: 55 W/(m^2*K) } or { temperature: 30 degC }' },
-  )
-  .describe('Tip condition; default convective (the local face h)');
+      width: finLength('Width along the base (straight shape only)', tabulatedNeeds).optional(),
+      edges: edges.optional(),
+    },
+    'a tabulated fin',
+    'Any measured or drawn profile',
+  );
 
-const convectionSchema = mapping(
-  {
-    ambient: quantity('temperature', { range: aboveAbsoluteZero, description: 'Temperature of the surrounding fluid, degC' }),
-    h: hSchema,
-    tip: tipSchema.optional(),
-    emissivity: quantity('dimensionless', { range: fraction, description: 'Grey-body emissivity of the faces (default 0: no radiation)' }).optional(),
-    surroundings: quantity('temperature', {
-      range: aboveAbsoluteZero,
-      description: 'Temperature of the radiating surroundings, degC (default: ambient)',
-    }).optional(),
-  },
-  'convection',
-  'Convection (and radiation) from the fin surfaces',
-);
 
-// ---- base and the whole case -----------------------------------------------------------------------------
+  const finSchema = z
+    .discriminatedUnion(
+      'profile',
+      [
+        rectangular,
+        pin,
+        trapezoidal,
+        taperedStraight('triangular', 'tapering linearly to a sharp tip'),
+        taperedStraight('parabolic-concave', 'thickness ~ (1 - x/L)^2'),
+        taperedStraight('parabolic-convex', 'thickness ~ (1 - x/L)^(1/2)'),
+        conicalPin,
+        annular,
+        tabulated,
+      ],
+      {
+        error: (issue) => {
+          const given = issue.input;
+          const profile = typeof given === 'object' && given !== null && 'profile' in given ? given.profile : given;
+          const near = typeof profile === 'string' ? nearWords(profile, profileNames, 3) : [];
+          const hint = near.length > 0 ? ` (did you mean ${near[0]}?)` : '';
+          return `a fin profile: one of ${profileNames.join(', ')}${hint}`;
+        },
+      },
+    )
+    .describe('The fin: its profile and the dimensions that profile needs');
 
-const baseSchema = mapping(
-  {
-    temperature: quantity('temperature', {
-      range: aboveAbsoluteZero,
-      description: 'Temperature of the wall the fin stands on, degC',
-      whenMissing: 'the base temperature is required',
-    }),
-    contactResistance: quantity('contactResistance', {
-      range: nonNegative,
-      description: 'Contact resistance between wall and fin per unit of base area, m^2*K/W (default 0)',
-    }).optional(),
-  },
-  'base',
-  'The fin base',
-);
+  // ---- material --------------------------------------------------------------------------------------------
 
-export const caseSchema = mapping(
-  {
-    name: z
-      .union([z.string(), z.number().transform(String)], { error: () => 'free text' })
-      .optional()
-      .describe('Free text shown in every output (default: the file name without extension)'),
-    fin: finSchema,
-    material: materialSchema,
-    convection: convectionSchema,
-    base: baseSchema,
-  },
-  'a case',
-  'A fincheck case (format 1): one fin and its surroundings. A bare number is SI (m, W/(m*K), W/(m^2*K), ' +
-    'm^2*K/W); a bare temperature is degC; a string carries its unit ("3 mm", "185 degF").',
-);
+  const conductivity = (description: string) => quantity('conductivity', { range: conductivityRange, description });
+
+  const materialName = z
+    .string()
+    .transform((name, ctx) => {
+      const material = findMaterial(name);
+      if (material) return material;
+      const near = similarMaterialNames(name);
+      const hint = near.length > 0 ? `; did you mean ${near.slice(0, 3).join(' or ')}?` : '';
+      ctx.issues.push({
+        code: 'custom',
+        input: name,
+        message: `a built-in material (${materialNames.join(', ')}) or { k: 205 W/(m*K) } (unknown material${hint})`,
+        continue: true,
+      });
+      return z.NEVER;
+    })
+    .meta({ description: 'A built-in material (fincheck materials lists them with k and its source)', enum: [...materialNames] });
+
+  const conductivityTable = mapping(
+    {
+      points: pairs(
+        quantity('temperature', { range: temperatureRange, description: 'Temperature, degC' }),
+        conductivity('Thermal conductivity at that temperature, W/(m*K)'),
+        '[temperature, conductivity]',
+        2,
+        'Conductivity against temperature, linear between points, temperatures strictly increasing',
+      ),
+    },
+    'a conductivity table',
+    'Conductivity that depends on temperature',
+  );
+
+  const customMaterial = mapping(
+    {
+      k: z
+        .union([conductivity('Thermal conductivity, W/(m*K)'), conductivityTable], {
+          error: () => 'a thermal conductivity such as "205 W/(m*K)" or { points: [[20 degC, 205], [150 degC, 198]] }',
+        })
+        .describe('Thermal conductivity, constant or tabulated over temperature'),
+    },
+    'a material',
+    'A material given by its conductivity',
+  );
+
+  const materialSchema = z
+    .union([materialName, customMaterial], {
+      error: () => `a built-in material (${materialNames.join(', ')}) or { k: 205 W/(m*K) }`,
+    })
+    .describe('The fin material: a built-in name or { k: ... }');
+
+  // ---- convection ------------------------------------------------------------------------------------------
+
+  const coefficient = (description: string, range: Range = coefficientRange) =>
+    quantity('heatTransferCoefficient', { range, description: `${description}, W/(m^2*K)` });
+
+  const hLinear = mapping(
+    { base: coefficient('h at the base'), tip: coefficient('h at the tip') },
+    'a linear h',
+    'h varying linearly from base to tip',
+  );
+
+  const hPoints = mapping(
+    {
+      points: pairs(
+        quantity('length', { ...lengthOptions, range: finPosition, description: 'Position x from the base, m' }),
+        coefficient('h at x'),
+        '[x, h]',
+        2,
+        'h piecewise linear along x: x strictly increasing, within [0, fin length]',
+      ),
+    },
+    'an h table',
+    'h given at points along the fin',
+  );
+
+  const hPower = mapping(
+    {
+      law: z.literal('power').describe('h = base * (theta / theta_base)^exponent, theta = T - ambient'),
+      base: coefficient('h at the base temperature', positiveCoefficient),
+      exponent: quantity('dimensionless', {
+        range: exponentRange,
+        description: 'Exponent of the excess temperature: 1/4 laminar natural convection, 1/3 turbulent, about 2 ' +
+          'nucleate boiling; > -1 so that the heat flux h * theta vanishes with theta, at most 5',
+      }),
+    },
+    'a power-law h',
+    'h that depends on the local excess temperature (nonlinear)',
+  );
+
+  const hSchema = z
+    .union([coefficient('Uniform h over the faces'), hLinear, hPoints, hPower], {
+      error: () =>
+        'a heat-transfer coefficient such as "40 W/(m^2*K)", { base: 60, tip: 25 }, { points: [[0 mm, 60], [40 mm, 25]] } ' +
+        'or { law: power, base: 12, exponent: 0.25 }',
+    })
+    .describe('Convection coefficient over the faces: uniform, linear, tabulated or a power law');
+
+  const tipSchema = z
+    .union(
+      [
+        word(['adiabatic', 'convective', 'infinite'], 'adiabatic: no heat leaves the tip; convective: the local face h; infinite: a fin so long the tip is at ambient (uniform profiles only)'),
+        mapping({ convective: coefficient('The tip face\u2019s own coefficient') }, 'a convective tip', 'Tip with its own h'),
+        mapping(
+          { temperature: quantity('temperature', { range: temperatureRange, description: 'Tip temperature, degC' }) },
+          'a tip at a set temperature',
+          'Tip held at a temperature',
+        ),
+      ],
+      { error: () => 'adiabatic, convective, infinite, { convective: 55 W/(m^2*K) } or { temperature: 30 degC }' },
+    )
+    .describe('Tip condition; default convective (the local face h)');
+
+  const convectionSchema = mapping(
+    {
+      ambient: quantity('temperature', { range: temperatureRange, description: 'Temperature of the surrounding fluid, degC' }),
+      h: hSchema,
+      tip: tipSchema.optional(),
+      emissivity: quantity('dimensionless', { range: fraction, description: 'Grey-body emissivity of the faces (default 0: no radiation)' }).optional(),
+      surroundings: quantity('temperature', {
+        range: temperatureRange,
+        description: 'Temperature of the radiating surroundings, degC (default: ambient)',
+      }).optional(),
+    },
+    'convection',
+    'Convection (and radiation) from the fin surfaces',
+  );
+
+  // ---- base and the whole case -----------------------------------------------------------------------------
+
+  const baseSchema = mapping(
+    {
+      temperature: quantity('temperature', {
+        range: temperatureRange,
+        description: 'Temperature of the wall the fin stands on, degC',
+        whenMissing: 'the base temperature is required',
+      }),
+      contactResistance: quantity('contactResistance', {
+        range: contactResistanceRange,
+        description: 'Contact resistance between wall and fin per unit of base area, m^2*K/W (default 0)',
+      }).optional(),
+    },
+    'base',
+    'The fin base',
+  );
+
+  return mapping(
+    {
+      name: z
+        .union([z.string(), z.number().transform(String)], { error: () => 'free text' })
+        .optional()
+        .describe('Free text shown in every output (default: the file name without extension)'),
+      fin: finSchema,
+      material: materialSchema,
+      convection: convectionSchema,
+      base: baseSchema,
+      units: mapping(
+        {
+          length: word(
+            lengthUnits,
+            'Unit of every length given as a bare number in this case (default m); a length with its own unit keeps it',
+          ),
+        },
+        'units',
+        'Units of bare numbers in this case; default SI (m)',
+      ).optional(),
+    },
+    'a case',
+    'A fincheck case (format 1): one fin and its surroundings. A bare number is SI (m, W/(m*K), W/(m^2*K), ' +
+      'm^2*K/W; lengths in units.length when given); a bare temperature is degC; a string carries its unit.',
+  );
+}
+
+const schemas = new Map<LengthUnit, ReturnType<typeof buildCaseSchema>>();
+
+/** The schema for a case whose bare lengths are in `lengthUnit`. */
+export function caseSchemaFor(lengthUnit: LengthUnit): ReturnType<typeof buildCaseSchema> {
+  let schema = schemas.get(lengthUnit);
+  if (schema === undefined) {
+    schema = buildCaseSchema(lengthUnit);
+    schemas.set(lengthUnit, schema);
+  }
+  return schema;
+}
+
+/** The schema of a case without `units` (bare lengths in m): its types, and what `fincheck schema` prints. */
+export const caseSchema = caseSchemaFor('m');
 
 /** The validated case file: SI numbers, temperatures degC, built-in materials resolved. */
 export type ValidatedCase = z.output<typeof caseSchema>;

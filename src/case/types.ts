@@ -87,10 +87,25 @@ export interface BaseSpec {
   contactResistance: number;
 }
 
+/**
+ * Something in a case that is valid but probably not what was meant (a bare `length: 40` is 40 m): shown beside
+ * every output, never a reason to refuse. `value` is the value as given; `message` says what it is taken as and
+ * what was probably meant.
+ */
+export interface CaseWarning {
+  /** Key path, e.g. `fin.length`. */
+  path: string;
+  value: string;
+  message: string;
+}
+
 export interface Case {
+  /** One line of at most 120 characters, without control characters (src/case/clip-text.ts). */
   name: string;
   fin: FinSpec;
   material: Material;
   convection: Convection;
   base: BaseSpec;
+  /** Warnings found while reading the case (a parsed case always has the list; cases built in code may omit it). */
+  warnings?: readonly CaseWarning[];
 }

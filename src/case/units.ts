@@ -22,6 +22,7 @@
 // @ts-expect-error -- mathjs exports these factories at run time (lib/esm/factoriesAny.js) but its typings omit them.
 import { createBigNumberClass, createComplexClass, createFractionClass, createUnitClass } from 'mathjs';
 import type { Unit } from 'mathjs';
+import { clip, quoted } from './clip-text.js';
 
 export type QuantityKind =
   | 'length'
@@ -58,12 +59,20 @@ export const quantityKinds: Record<QuantityKind, KindInfo> = {
 };
 
 /** "a length such as "2 mm", "0.125 in" or a bare number in m" (the range, if any, is added by the caller). */
-export function describeQuantity(kind: QuantityKind, range = ''): string {
+export function describeQuantity(kind: QuantityKind, range = '', bareUnit = quantityKinds[kind].bareUnit): string {
   const info = quantityKinds[kind];
   const noun = range ? `${info.noun} ${range}` : info.noun;
   if (kind === 'dimensionless') return `${noun} such as ${info.examples.join(' or ')}`;
   const examples = info.examples.map((e) => `"${e}"`).join(', ');
-  return `${noun} such as ${examples} or a bare number in ${info.bareUnit}`;
+  return `${noun} such as ${examples} or a bare number in ${bareUnit}`;
+}
+
+/** Units a case may choose for its bare lengths (`units: { length: mm }`); m is the default. */
+export const lengthUnits = ['m', 'cm', 'mm', 'um', 'in'] as const;
+export type LengthUnit = (typeof lengthUnits)[number];
+
+export function isLengthUnit(value: unknown): value is LengthUnit {
+  return typeof value === 'string' && (lengthUnits as readonly string[]).includes(value);
 }
 
 /**
@@ -227,7 +236,7 @@ export function parseQuantity(given: unknown, kind: QuantityKind): QuantityResul
     return { ok: false, problem: unitProblem(unitText, err) };
   }
   if (u.value !== null || u.units.length === 0) {
-    return { ok: false, problem: `"${unitText}" is not a unit (write one number followed by one unit)` };
+    return { ok: false, problem: `${quoted(unitText)} is not a unit (write one number followed by one unit)` };
   }
   if (kind === 'temperature' || kind === 'temperatureDifference') return temperatureValue(n, u, unitText, kind);
 
@@ -235,7 +244,7 @@ export function parseQuantity(given: unknown, kind: QuantityKind): QuantityResul
   if (reference === undefined) throw new Error(`no SI reference for ${kind}`);
   if (!u.equalBase(unitOf(reference))) return { ok: false, problem: wrongKind(u, unitText, kind) };
   const value = n * u.toNumber(reference);
-  if (!Number.isFinite(value)) return { ok: false, problem: `${given} is not a finite value in ${reference}` };
+  if (!Number.isFinite(value)) return { ok: false, problem: `${quoted(String(given))} is not a finite value in ${reference}` };
   return { ok: true, value };
 }
 
@@ -260,7 +269,7 @@ function temperatureValue(n: number, u: Unit, unitText: string, kind: 'temperatu
   const lone = loneTemperatureUnit(u);
   if (!lone) {
     if (u.equalBase(unitOf('K'))) {
-      return { ok: false, problem: `write a single temperature unit (K, degC, degF, degR), not "${unitText}"` };
+      return { ok: false, problem: `write a single temperature unit (K, degC, degF, degR), not ${quoted(unitText)}` };
     }
     return { ok: false, problem: wrongKind(u, unitText, kind) };
   }
@@ -275,14 +284,14 @@ function wrongKind(u: Unit, unitText: string, kind: QuantityKind): string {
   const hint = /(^|[^A-Za-z])[CF]([^A-Za-z]|$)/.test(unitText)
     ? ' (C is the coulomb and F the farad: write degC or degF)'
     : '';
-  return what ? `"${unitText}" is ${what}, not ${noun}${hint}` : `"${unitText}" is not ${noun}${hint}`;
+  return what ? `${quoted(unitText)} is ${what}, not ${noun}${hint}` : `${quoted(unitText)} is not ${noun}${hint}`;
 }
 
 function unitProblem(unitText: string, err: unknown): string {
   const message = err instanceof Error ? err.message : String(err);
   const notFound = /Unit "([^"]*)" not found/.exec(message);
-  if (notFound) return `unit "${notFound[1]}" is not known`;
-  return `cannot read the unit "${unitText}" (${message.replace(/\.$/, '')})`;
+  if (notFound) return `unit ${quoted(notFound[1] ?? '')} is not known`;
+  return `cannot read the unit ${quoted(unitText)} (${clip(message.replace(/\.$/, ''))})`;
 }
 
 /**

@@ -2,84 +2,64 @@
  * `fincheck check`: the reference solution, every applicable shortcut with its drift and verdict,
  * the assumption ledger, the design flags and the cautions (outputs.md).
  *
- * Pipeline: case -> fin problem -> fd-1d study (studyFin: a direct solve per grid for a linear fin,
- * Newton's method for a nonlinear one) -> reference (the fd-2d study where the 2-D model covers the fin
- * and the reference asked for is auto or 2d, else fd-1d; reference2d.ts) -> shortcuts -> ledger -> flags.
- * The shortcuts need one h and one k: a linear fin gives them its own; a nonlinear fin (power-law h,
- * radiation, k over temperature) is evaluated twice, with h and k at the base temperature and with h and k
- * averaged over the fin solved by fd-1d (linear-surrogate.ts), and its ledger adds one row per
- * nonlinearity (nonlinear-ledger.ts). Radiation: the fin sees only its surroundings (view factor 1, no
- * exchange with the base or neighbours).
+ * Pipeline (linear fins): case -> 1-D geometry -> equivalent uniform fin -> fd-1d refinement study ->
+ * reference (fd-2d study where the case allows and the reference asked for is auto or 2d, else fd-1d) -> shortcuts
+ * -> ledger -> flags. Nonlinear fins (power-law h, radiation, k over temperature): check-nonlinear.ts.
  */
 import type { Case } from '../case/index.js';
 import { initBessel } from '../analytic/index.js';
-import { ModelNotApplicableError } from '../errors.js';
-import {
-  finProblem,
-  gridSolvers,
-  modelApplies,
-  solveFinWith,
-  studyFinWith,
-  type FinStudy,
-  type FinStudy1D,
-  type FinStudy2D,
-  type GridSolvers,
-} from '../fd/index.js';
+import { type Fin1DStudy, finProblem1D, resolveFinProblem1D, type Resolution, type ResolutionBudget, type Fin2DStudy, isLinearFinCase, type LinearFinCase } from '../fd/index.js';
 import { finGeometry, type FinGeometry1D } from '../mesh/index.js';
-import { cautionsFor, RADIATION_VIEW_NOTE } from './cautions.js';
+import { CAUTIONS } from './cautions.js';
+import { nonlinearCheck } from './check-nonlinear.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { designFlags } from './flags.js';
-import { assumptionLedger, LEDGER_NODES } from './ledger.js';
-import { GUESS_LABEL, guessesFor, shortcutCase } from './linear-surrogate.js';
-import { madeByReported, modelRows, shortcutInputs, type ModelInput } from './model-rows.js';
-import { nonlinearRows } from './nonlinear-ledger.js';
-import { reference2D, type Reference2D } from './reference2d.js';
+import { assumptionLedger } from './ledger.js';
+import { madeByReported, modelRows, shortcutInputs } from './model-rows.js';
+import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
-import type { CheckReport, Flag, NotApplicable, ReferenceResult } from './types.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote, type EfficiencyBasis } from './efficiency-basis.js';
+import { choose2DReference, judgedReference, resolution1D, resolution2D, resolutionTarget } from './resolved-reference.js';
+import type { CheckReport, Flag, ReferenceResult } from './types.js';
 
 export interface CheckOptions {
   /** Relative drift accepted as `ok` (0.02 = 2 %). */
   tolerance: number;
-  /** The reference model: fd-2d where it covers the fin ('auto'), always fd-2d ('2d'), fd-1d ('1d'). */
   reference: 'auto' | '1d' | '2d';
   /** Compute the assumption ledger (default true); maps skip it, their points need only drifts. */
   ledger?: boolean;
+  /** How far the fd-1d reference may be refined to reach tolerance / 10 (default DEFAULT_RESOLUTION_BUDGET). */
+  resolutionBudget?: ResolutionBudget;
 }
 
 export interface CheckOutcome {
   report: CheckReport;
-  /** The fd-1d study (the reference, or the fd-1d model beside a 2-D reference); profiles for plots. */
-  oneD: FinStudy1D;
-  /** The fd-2d study when fd-2d is the reference (field for heat maps). */
-  twoD: FinStudy2D | null;
+  /** The 1-D solution (the reference, or the fd-1d model beside a 2-D reference); profiles for plots. */
+  oneD: Fin1DStudy;
+  /** The 2-D study when fd-2d is the reference (field for heat maps). */
+  twoD: Fin2DStudy | null;
 }
 
-/**
- * Runs the check. A '2d' reference on a fin the 2-D model does not cover throws ModelNotApplicableError
- * (ask modelApplies(finProblem(c), '2d') first).
- */
 export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcome> {
   await initBessel();
-  const problem = finProblem(c);
-  return check(c, await gridSolvers(problem), opts);
+  return isLinearFinCase(c) ? linearCheck(c, opts) : nonlinearCheck(c, opts);
 }
 
-/** The fd-1d study as a reference. */
-export function reference1D(oneD: FinStudy1D, extraNote = ''): ReferenceResult {
-  const ref = oneD.finest;
-  const refinement = oneD.refinement;
-  return {
+/** The fd-1d study as a reference, judged against the resolution it reached. */
+export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
+  const ref = oneD.result;
+  const grids = resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
+  return judgedReference({
     model: 'fd-1d',
     heatRate_W: ref.heatRate,
-    efficiency: ref.efficiency,
     effectiveness: ref.effectiveness,
-    discretizationError: oneD.discretizationError ?? Number.NaN,
+    discretizationError: oneD.study.gci,
     energyBalance: ref.energyBalance,
-    observedOrder: refinement === null ? null : refinement.observedOrder,
+    observedOrder: oneD.study.observedOrder,
     grid: { nodes: ref.mesh.nodes },
     tipTemperature_degC: ref.tipTemperature_degC,
-    note: `1-D finite volumes, ${refinement === null ? 1 : refinement.sizes.length} grids; ${refinement === null ? 'one grid' : refinement.note}${extraNote}`,
-  };
+    note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
+  }, resolution1D(resolution), basis);
 }
 
 /**
@@ -116,51 +96,22 @@ export function checkFlags(
   });
 }
 
-/** How the study solved the fin, for the notes: Newton's method, with its step counts, or nothing to add. */
-function newtonNote(study: FinStudy, tolerance: string, steps: string): string {
-  return study.newton === null ? '' : `; nonlinear, Newton converged (residual <= ${tolerance}${steps})`;
-}
-
-function check(c: Case, solvers: GridSolvers, opts: CheckOptions): CheckOutcome {
-  const problem = finProblem(c);
+function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
   const geometry = finGeometry(c);
-  const oneD = studyFinWith(solvers, problem, { model: '1d' }) as FinStudy1D;
-  const ref = oneD.finest;
-  const radiationNote = c.convection.emissivity > 0 ? `; ${RADIATION_VIEW_NOTE}` : '';
-
-  // The shortcuts: the fin's own h and k, or one guess each for a nonlinear fin.
-  const inputs: ModelInput[] = [];
-  let notApplicable: NotApplicable[] = [];
-  let eqFirst: EquivalentUniformFin | null = null;
-  for (const guess of guessesFor(c)) {
-    const surrogate = shortcutCase(c, guess, ref);
-    const eq = equivalentUniformFin(surrogate, geometry);
-    const { values, notApplicable: na } = evaluateShortcuts(surrogate, eq);
-    inputs.push(...(guess === null ? shortcutInputs(values) : shortcutInputs(values, { guess, guessValues: { h_W_per_m2K: eq.h, k_W_per_mK: eq.k, description: GUESS_LABEL[guess] } })));
-    if (eqFirst === null) {
-      notApplicable = na;
-      eqFirst = eq;
-    }
-  }
-  const eq = eqFirst as EquivalentUniformFin;
-  // The heat the bare base area would lose at the base temperature (radiation as an equivalent h), W.
+  const eq = equivalentUniformFin(c, geometry);
+  const target = resolutionTarget(opts.tolerance);
+  const { study: oneD, resolution } = resolveFinProblem1D(finProblem1D(c), target, opts.resolutionBudget);
+  const ref = oneD.result;
   const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
+  const required = opts.reference === '2d';
+  const { twoD, fallback } = choose2DReference(opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, required), required, target);
+  const basis = twoD
+    ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE)
+    : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
+  const reference = twoD ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis) : reference1D(oneD, resolution, basis, fallback);
 
-  const solve1D = (variant: Case, nodes: number): number => solveFinWith(solvers, finProblem(variant), { model: '1d', nodes }).heatRate_W;
-  let twoD: Reference2D | null = null;
-  let outside2D = '';
-  if (opts.reference !== '1d') {
-    const coverage = modelApplies(problem, '2d');
-    if (coverage.ok) {
-      const study = studyFinWith(solvers, problem, { model: '2d' }) as FinStudy2D;
-      const steps = study.newton === null ? '' : `; ${study.newton.stepsPerGrid.join('/')} steps, coarsest to finest grid`;
-      twoD = reference2D(c, oneD, study, ref.idealHeatRate, effectivenessScale, solve1D, `${newtonNote(study, '1e-10', steps)}${radiationNote}`);
-    } else if (opts.reference === '2d') throw new ModelNotApplicableError('fd-2d', coverage.reason);
-    else outside2D = `; the 2-D model does not cover this fin (${coverage.reason})`;
-  }
-  const finestSteps = oneD.newton === null ? '' : `, ${oneD.newton.stepsPerGrid[oneD.newton.stepsPerGrid.length - 1] ?? 0} steps on the finest grid`;
-  const reference = twoD ? twoD.reference : reference1D(oneD, `${newtonNote(oneD, '1e-12', finestSteps)}${outside2D}${radiationNote}`);
-
+  const { values, notApplicable } = evaluateShortcuts(c, eq);
+  const inputs = shortcutInputs(values);
   const fd1d = twoD
     ? [
         {
@@ -169,22 +120,17 @@ function check(c: Case, solvers: GridSolvers, opts: CheckOptions): CheckOutcome 
           formulaEfficiency: null,
           m_per_m: null,
           length_m: null,
-          basis:
-            oneD.newton === null
-              ? '1-D finite volumes: actual profile, h, tip and edges; uniform temperature across the thickness'
-              : '1-D finite volumes, Newton: actual profile, h(theta), k(T), radiation, tip and edges; uniform temperature across the thickness',
-          accuracy: `estimated discretisation error ${(oneD.discretizationError ?? Number.NaN).toExponential(1)} (GCI)`,
+          basis: '1-D finite volumes: actual profile, h, tip and edges; uniform temperature across the thickness',
+          accuracy: `estimated discretisation error ${oneD.study.gci.toExponential(1)} (GCI)`,
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, ref.idealHeatRate, effectivenessScale, opts.tolerance);
+  const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
+  reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
-  const solveLedger = (variant: Case): number => solve1D(variant, LEDGER_NODES);
-  const assumptions = opts.ledger === false ? [] : [...nonlinearRows(c, solveLedger), ...assumptionLedger(c, geometry, eq, solveLedger)];
+  const assumptions = opts.ledger === false ? [] : assumptionLedger(c, geometry, eq);
   if (twoD) assumptions.unshift(twoD.oneDRow);
-  const converged = twoD
-    ? (twoD.study.refinement?.converged ?? false) || (twoD.study.discretizationError ?? Number.NaN) < opts.tolerance / 100
-    : (oneD.refinement?.converged ?? false);
+  const converged = twoD ? twoD.study.heatRate.converged || twoD.study.discretizationError < opts.tolerance / 100 : oneD.study.converged;
   const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
   return {
     report: {
@@ -196,7 +142,7 @@ function check(c: Case, solvers: GridSolvers, opts: CheckOptions): CheckOutcome 
       notApplicable,
       assumptions: madeByReported(assumptions, models),
       flags,
-      cautions: cautionsFor(c.convection.emissivity),
+      cautions: [...CAUTIONS],
     },
     oneD,
     twoD: twoD ? twoD.study : null,

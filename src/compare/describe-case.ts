@@ -63,6 +63,14 @@ export function describeTip(t: TipCondition): string {
   }
 }
 
+/** Grey radiation of a radiating fin: emissivity and the surroundings' temperature (none when emissivity is 0). */
+function describeRadiation(c: Case): string {
+  const { emissivity, surroundings_degC, ambient_degC } = c.convection;
+  if (!(emissivity > 0)) return '';
+  const same = surroundings_degC === ambient_degC ? ' (the ambient)' : '';
+  return `; radiation, emissivity ${num(emissivity)}, surroundings ${num(surroundings_degC)} degC${same}`;
+}
+
 export function describeCase(c: Case): string[] {
   const k = c.material.k;
   const kText = k.kind === 'constant' ? `k = ${num(k.k)} W/(m*K)` : `k tabulated over temperature`;
@@ -73,7 +81,7 @@ export function describeCase(c: Case): string[] {
   return [
     `${describeProfile(c.fin.profile)}${edges}`,
     `${c.material.name}, ${kText} (${c.material.source})`,
-    `${describeH(c.convection.h)}; ${describeTip(c.convection.tip)}`,
+    `${describeH(c.convection.h)}${describeRadiation(c)}; ${describeTip(c.convection.tip)}`,
     `base ${num(c.base.T_degC)} degC${contact}; ambient ${num(c.convection.ambient_degC)} degC`,
   ];
 }

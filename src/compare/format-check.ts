@@ -19,18 +19,19 @@ export function formatCheck(c: Case, r: CheckReport): string {
   out.push('');
   const ref = r.reference;
   const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} nodes`;
-  out.push(`Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`);
+  out.push(`Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`);
   out.push(`  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`);
   out.push(`  ${ref.note}`);
   out.push('');
   out.push(`Shortcuts against the reference (tolerance +/-${(100 * r.tolerance).toFixed(1)} %):`);
   const label = (m: CheckReport['models'][number]): string => (m.guess ? `${m.model} (${m.guess} h)` : m.model);
   const w = Math.max(16, ...r.models.map((m) => label(m).length + 2));
-  const head = `  ${pad('model', w)}${lpad('Q [W]', 12)}${lpad('efficiency', 12)}${lpad('drift', 11)}  verdict`;
+  const head = `  ${pad('model', w)}${lpad('Q [W]', 12)}${lpad('efficiency', 12)}${lpad('formula eff.', 14)}${lpad('drift', 11)}  verdict`;
   out.push(head);
   out.push(`  ${'-'.repeat(head.length - 2)}`);
   for (const m of r.models) {
-    out.push(`  ${pad(label(m), w)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency.toFixed(4), 12)}${lpad(pct(m.drift), 11)}  ${m.verdict}`);
+    const formula = m.formulaEfficiency === null ? '-' : m.formulaEfficiency.toFixed(4);
+    out.push(`  ${pad(label(m), w)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency === null ? 'n/a' : m.efficiency.toFixed(4), 12)}${lpad(formula, 14)}${lpad(pct(m.drift), 11)}  ${m.verdict}`);
   }
   const seen = new Set<string>();
   for (const m of r.models) {
@@ -43,7 +44,10 @@ export function formatCheck(c: Case, r: CheckReport): string {
     if (v) out.push(`    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(v.h_W_per_m2K, 4)} W/(m^2*K), k = ${sig(v.k_W_per_mK, 4)} W/(m*K)`);
   }
   for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);
-  out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature;');
+  out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature, the surface of the reference model;');
+  if (ref.efficiencyNote !== null) out.push(`   efficiency: ${ref.efficiencyNote};`);
+  out.push('   formula eff. = the shortcut\'s own textbook efficiency on the area its formula assumes, e.g. tanh(mLc)/(mLc)');
+  out.push('   on the corrected length: compare it with a textbook; it differs from the common efficiency by that area;');
   out.push(`   the shortcuts are closed forms, exact for their own assumptions, so their error for this fin is the drift,`);
   out.push(`   known to about the reference's discretisation error, ${ref.discretizationError.toExponential(1)})`);
   out.push('');

@@ -12,3 +12,5 @@ export { runSolve } from './solve.js';
 export type { SolveReport } from './solve.js';
 export { runSolve2D } from './solve2d.js';
 export type { Solve2DReport } from './solve2d.js';
+export { pointPosition } from './solve.js';
+export { solve2dUnsupported } from './solve2d.js';

@@ -8,21 +8,29 @@
  */
 import type { Case, HDistribution, Profile } from '../case/index.js';
 import { uniformFin } from '../analytic/index.js';
+import { unusableEquivalent } from './shortcuts.js';
+import { solveFin1D, isLinearFinCase } from '../fd/index.js';
 import type { FinGeometry1D } from '../mesh/index.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { AssumptionRow, ModelId } from './types.js';
 
 export const LEDGER_NODES = 4001;
 
+/** fd-1d heat rate of a linear case on the ledger grid. */
+export function linearLedgerSolve(variant: Case): number {
+  if (!isLinearFinCase(variant)) throw new Error('linearLedgerSolve: the variant is not linear');
+  return solveFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
+}
+
 /**
  * Rows for the geometric and boundary assumptions. `solve` is the fd-1d heat rate of a variant case on
- * one fixed grid (the one study's solve: direct for a linear fin, Newton for a nonlinear one); `eq` the equivalent uniform fin the shortcuts used.
+ * one fixed grid (linear or nonlinear solver); `eq` the equivalent uniform fin the shortcuts used.
  */
 export function assumptionLedger(
   c: Case,
   geometry: FinGeometry1D,
   eq: EquivalentUniformFin,
-  solve: (variant: Case) => number,
+  solve: (variant: Case) => number = linearLedgerSolve,
 ): AssumptionRow[] {
   const rows: AssumptionRow[] = [];
   // The fin as given, on the same grid as every variant (so discretisation errors cancel).
@@ -44,7 +52,9 @@ export function assumptionLedger(
       method: sameGrid,
     });
   }
-  if (tip.kind === 'convective') {
+  // Rows measured with closed forms need a single finite h > 0 (shortcuts.ts, unusableEquivalent).
+  const closedFormsApply = unusableEquivalent(eq) === null;
+  if (tip.kind === 'convective' && closedFormsApply) {
     const common = { h: eq.h, k: eq.k, P: eq.P, A: eq.A, thetaBase: 1 } as const;
     const exact = uniformFin({ ...common, L: eq.length, tip: { kind: 'convective', hTip: eq.hTip } }).heatRate;
     const lc = uniformFin({ ...common, L: eq.length + eq.A / eq.P, tip: { kind: 'adiabatic' } }).heatRate;
@@ -55,7 +65,7 @@ export function assumptionLedger(
       method: 'closed forms on the equivalent uniform fin (adiabatic at Lc vs exact convective tip)',
     });
   }
-  if (geometry.shape === 'annular') {
+  if (geometry.shape === 'annular' && closedFormsApply) {
     const uTip = tip.kind === 'convective' ? ({ kind: 'convective', hTip: eq.hTip } as const) : ({ kind: 'adiabatic' } as const);
     const straight = uniformFin({ h: eq.h, k: eq.k, P: eq.P, A: eq.A, L: eq.length, thetaBase: eq.thetaBase, tip: uTip }).heatRate;
     const withResistance = eq.contactResistance > 0 ? eq.thetaBase / (eq.contactResistance + eq.thetaBase / straight) : straight;

@@ -68,8 +68,11 @@ function scaledH(h: HDistribution, factor: number, extra: number): Exclude<HDist
   }
 }
 
-/** The linear case of one guess. `ref` (the nonlinear reference) supplies the fin's temperatures for 'mean'. */
-export function linearSurrogate(c: Case, guess: HGuess, ref: Fin1DResult): LinearFinCase {
+/**
+ * The linear case of one guess. `ref` (the nonlinear reference) supplies the fin's temperatures for 'mean'
+ * ('base' needs none: null).
+ */
+export function linearSurrogate(c: Case, guess: HGuess, ref: Fin1DResult | null): LinearFinCase {
   const thetaBase = c.base.T_degC - c.convection.ambient_degC;
   let factor: number;
   let hRad: number;
@@ -79,6 +82,7 @@ export function linearSurrogate(c: Case, guess: HGuess, ref: Fin1DResult): Linea
     hRad = radiativeH(c, thetaBase);
     k = conductivityAt(c.material.k, c.base.T_degC);
   } else {
+    if (ref === null) throw new Error('linearSurrogate: the fin-averaged guess needs the solved fin');
     const { mesh, theta } = ref;
     let s = 0;
     let sf = 0;

@@ -1,4 +1,5 @@
 /** Turns model heat rates into the rows of the check table: efficiency, effectiveness, drift, verdict. */
+import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
 import type { ShortcutValue } from './shortcuts.js';
 import { verdictOf, type AssumptionRow, type ModelResult, type ReferenceResult } from './types.js';
 
@@ -11,13 +12,13 @@ export function shortcutInputs(values: ShortcutValue[], guess?: { guess: 'base' 
 }
 
 /**
- * idealHeatRate: Q with every cooled surface at the base temperature (efficiency denominator), W;
+ * basis: Q with every cooled surface at the base temperature (the efficiency denominator of every row), W;
  * effectivenessScale: bare-base heat at the base temperature, W.
  */
 export function modelRows(
   inputs: (Omit<ModelInput, 'model'> & { model: ModelResult['model'] })[],
   reference: ReferenceResult,
-  idealHeatRate: number,
+  basis: EfficiencyBasis,
   effectivenessScale: number,
   tolerance: number,
 ): ModelResult[] {
@@ -26,10 +27,10 @@ export function modelRows(
     return {
       model: v.model,
       heatRate_W: v.heatRate_W,
-      efficiency: v.heatRate_W / idealHeatRate,
+      efficiency: efficiencyOf(v.heatRate_W, basis),
       effectiveness: v.heatRate_W / effectivenessScale,
       drift,
-      verdict: verdictOf(drift, tolerance),
+      verdict: verdictOf(drift, tolerance, reference.resolved),
       formulaEfficiency: v.formulaEfficiency,
       m_per_m: v.m_per_m,
       length_m: v.length_m,

@@ -39,6 +39,11 @@ function adiabaticUniform(eq: EquivalentUniformFin, P: number, L: number, basis:
 export function evaluateShortcuts(c: LinearFinCase, eq: EquivalentUniformFin): { values: ShortcutValue[]; notApplicable: NotApplicable[] } {
   const values: ShortcutValue[] = [];
   const notApplicable: NotApplicable[] = [];
+  const unusable = unusableEquivalent(eq);
+  if (unusable !== null) {
+    for (const model of SHORTCUT_IDS) notApplicable.push({ model, reason: unusable });
+    return { values, notApplicable };
+  }
   const convective = c.convection.tip.kind === 'convective';
   const meanWords = describeMeans(c);
   const add = (model: ShortcutId, f: AffineHeatRate): void => {
@@ -76,6 +81,25 @@ export function evaluateShortcuts(c: LinearFinCase, eq: EquivalentUniformFin): {
   if (cf.ok) add('closed-form', cf.value);
   else notApplicable.push({ model: 'closed-form', reason: cf.reason });
   return { values, notApplicable };
+}
+
+const SHORTCUT_IDS: ShortcutId[] = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form'];
+
+/**
+ * Why no shortcut applies to an equivalent fin, or null: every formula needs one finite h > 0 (and a tip
+ * coefficient >= 0). A nonlinear fin's single h can be negative (radiation from surroundings hotter than
+ * the fin outweighs convection) or infinite (h ~ theta^n with n < 0 where the fin reaches the ambient).
+ */
+export function unusableEquivalent(eq: EquivalentUniformFin): string | null {
+  const w = (x: number): string => `${Number(x.toPrecision(3))} W/(m^2*K)`;
+  if (!Number.isFinite(eq.h) || !Number.isFinite(eq.hTip)) {
+    return 'no finite single h describes this fin (h ~ theta^n with n < 0 is infinite where the fin reaches the ambient): the shortcuts need one finite h';
+  }
+  if (eq.h <= 0) {
+    return `the single h of this fin is ${w(eq.h)}, not > 0 (radiation from surroundings hotter than the fin outweighs convection): the shortcuts need h > 0`;
+  }
+  if (eq.hTip < 0) return `the tip coefficient is ${w(eq.hTip)}, below 0 (radiation from hotter surroundings): the convective-tip forms need h_tip >= 0`;
+  return null;
 }
 
 function describeMeans(c: LinearFinCase): string {

@@ -3,12 +3,24 @@
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
+import { INFINITE_TIP_NOTE, tipTemperatureNote } from './efficiency-basis.js';
 import type { Case } from '../case/index.js';
-import { finProblem, solveFin, studyFin, type FinStudy1D } from '../fd/index.js';
+import { solveFin1D, studyFin1D, type Fin1DResult, isLinearFinCase, solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/index.js';
 
-export interface ProfilePoint {
-  x_m: number;
-  T_degC: number;
+/**
+ * One point of a temperature profile: x_m, the distance along the fin from the base (m), or for annular
+ * (radial) fins r_m, the radius (m, from the inner radius r1 at the base to the outer radius r2).
+ */
+export type ProfilePoint = { x_m: number; T_degC: number } | { r_m: number; T_degC: number };
+
+/** Annular fins are described by the radius: profiles give r_m from r1 to r2 instead of x_m. */
+export function isRadial(c: Case): boolean {
+  return c.fin.profile.kind === 'annular';
+}
+
+/** The position of a point: x_m or r_m (m). */
+export function pointPosition(p: ProfilePoint): number {
+  return 'r_m' in p ? p.r_m : p.x_m;
 }
 
 export interface SolveReport {
@@ -16,7 +28,10 @@ export interface SolveReport {
   model: 'fd-1d';
   grid: { nodes: number };
   heatRate_W: number;
-  efficiency: number;
+  /** Q / Q_ideal; null for an infinite tip (no finite surface, see efficiencyNote). */
+  efficiency: number | null;
+  /** Why the efficiency is null or may exceed 1; null otherwise (efficiency-basis.ts). */
+  efficiencyNote: string | null;
   effectiveness: number;
   baseTemperature_degC: number;
   tipTemperature_degC: number;
@@ -31,33 +46,44 @@ export interface SolveReport {
 /** At most this many profile points in the output; every k-th node, never interpolated. */
 const MAX_PROFILE_POINTS = 401;
 
-export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ report: SolveReport; study: FinStudy1D }> {
-  const problem = finProblem(c);
+export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; result: Fin1DResult } {
   const single = opts.nodes !== undefined;
-  // The one study: a direct solve per grid for a linear fin, Newton's method for a nonlinear one.
-  const study = (single ? await solveFin(problem, { model: '1d', nodes: opts.nodes as number }) : await studyFin(problem, { model: '1d' })) as FinStudy1D;
-  const result = study.finest;
-  const refinement = study.refinement;
+  // Linear fins: one tridiagonal solve per grid; nonlinear fins (power-law h, radiation, k(T)): Newton.
+  const linear = isLinearFinCase(c);
+  const study = single ? null : linear ? studyFin1D(c) : studyNonlinearFin1D(c);
+  const result: Fin1DResult = study
+    ? study.result
+    : linear
+      ? solveFin1D(c, { nodes: opts.nodes as number })
+      : solveNonlinearFin1D(c, { nodes: opts.nodes as number });
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;
+  // Annular fins: the 1-D mesh measures from the base, so the radius is r1 + x.
+  const r1 = c.fin.profile.kind === 'annular' ? c.fin.profile.innerRadius : 0;
+  const point = (i: number): ProfilePoint => {
+    const T_degC = (result.theta[i] as number) + ambient;
+    const x = result.mesh.x[i] as number;
+    return isRadial(c) ? { r_m: r1 + x, T_degC } : { x_m: x, T_degC };
+  };
   const profile: ProfilePoint[] = [];
-  for (let i = 0; i < n; i += stride) profile.push({ x_m: result.mesh.x[i] as number, T_degC: (result.theta[i] as number) + ambient });
-  if ((n - 1) % stride !== 0) profile.push({ x_m: result.mesh.x[n - 1] as number, T_degC: (result.theta[n - 1] as number) + ambient });
+  for (let i = 0; i < n; i += stride) profile.push(point(i));
+  if ((n - 1) % stride !== 0) profile.push(point(n - 1));
   return {
-    study,
+    result,
     report: {
       case: c.name,
       model: 'fd-1d',
       grid: { nodes: n },
       heatRate_W: result.heatRate,
-      efficiency: result.efficiency,
+      efficiency: c.convection.tip.kind === 'infinite' ? null : result.efficiency,
+      efficiencyNote: c.convection.tip.kind === 'infinite' ? INFINITE_TIP_NOTE : tipTemperatureNote(c),
       effectiveness: result.effectiveness,
       baseTemperature_degC: (result.theta[0] as number) + ambient,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: study.discretizationError,
-      observedOrder: refinement === null ? null : refinement.observedOrder,
+      discretizationError: study ? study.study.gci : null,
+      observedOrder: study ? study.study.observedOrder : null,
       profileStride: stride,
       profile,
     },

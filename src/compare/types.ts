@@ -6,12 +6,33 @@
 /** Model ids of the output contract (tables, JSON, images). */
 export type ModelId = 'tanh-L' | 'tanh-Lc' | 'tanh-Lc-thin' | 'convective-tip' | 'closed-form' | 'fd-1d' | 'fd-2d';
 export type ShortcutId = Exclude<ModelId, 'fd-1d' | 'fd-2d'>;
-export type Verdict = 'ok' | 'marginal' | 'unsafe';
+/**
+ * `unresolved`: the reference's estimated discretisation error is above a tenth of the tolerance (after
+ * the refinement its budget allows), so the drift is not known well enough to judge: no ok or unsafe.
+ */
+export type Verdict = 'ok' | 'marginal' | 'unsafe' | 'unresolved';
+
+/** How the reference was resolved before anything was judged on it. */
+export interface ReferenceResolution {
+  /** The discretisation error (GCI) the reference must reach: tolerance / 10. */
+  target: number;
+  /** Doublings of the study's grids beyond the default ones. */
+  refinements: number;
+  /** The grids of the study, coarsest first: node counts (1-D) or "nx" x "ny" (2-D). */
+  grids: string[];
+  /** The grading of the grids, in words. */
+  grading: string;
+  /** The refinement budget, in words. */
+  budget: string;
+}
 
 export interface ReferenceResult {
   model: 'fd-1d' | 'fd-2d';
   heatRate_W: number;
-  efficiency: number;
+  /** Q / Q_ideal on the reference model's own surface (efficiency-basis.ts); null for an infinite tip (see efficiencyNote). */
+  efficiency: number | null;
+  /** Why the efficiency is null (infinite tip) or may exceed 1 (prescribed tip temperature); null otherwise. */
+  efficiencyNote: string | null;
   effectiveness: number;
   /** Estimated relative discretisation error of heatRate_W (GCI of the finest grid). */
   discretizationError: number;
@@ -21,13 +42,22 @@ export interface ReferenceResult {
   grid: { nodes: number } | { nx: number; ny: number };
   tipTemperature_degC: number;
   note: string;
+  /** True when discretizationError <= tolerance / 10: only then are verdicts given (else `unresolved`). */
+  resolved: boolean;
+  resolution: ReferenceResolution;
 }
+
+/** A reference before its resolution is judged (resolved-reference.ts adds it). */
+export type UnjudgedReference = Omit<ReferenceResult, 'resolved' | 'resolution' | 'efficiency' | 'efficiencyNote'>;
 
 export interface ModelResult {
   model: ShortcutId | 'fd-1d';
   heatRate_W: number;
-  /** Q / Q_ideal of the actual fin (case-format.md definition), so every row is comparable. */
-  efficiency: number;
+  /**
+   * Q / Q_ideal of the actual fin (case-format.md definition) with the reference's Q_ideal, so every row is
+   * comparable; null for an infinite tip (reference.efficiencyNote says why).
+   */
+  efficiency: number | null;
   effectiveness: number;
   drift: number;
   verdict: Verdict;
@@ -85,7 +115,9 @@ export interface CheckReport {
   cautions: string[];
 }
 
-export function verdictOf(drift: number, tolerance: number): Verdict {
+/** The verdict of a drift against a reference; `unresolved` whenever the reference is not resolved. */
+export function verdictOf(drift: number, tolerance: number, referenceResolved = true): Verdict {
+  if (!referenceResolved) return 'unresolved';
   const a = Math.abs(drift);
   if (a <= tolerance) return 'ok';
   if (a <= 2 * tolerance) return 'marginal';

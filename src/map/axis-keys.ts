@@ -4,7 +4,7 @@
  * refused before the run). Checks that relate two keys (a tip thicker than the base) depend on the other axis and
  * show per point instead.
  */
-import { aboveAbsoluteZero, fraction, nonNegative, positive, type Range } from '../case/index.js';
+import { coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, fraction, temperatureRange, type Range } from '../case/index.js';
 import type { QuantityKind } from '../case/index.js';
 
 export interface AxisKeyInfo {
@@ -18,30 +18,29 @@ interface KeyPattern extends AxisKeyInfo {
   pattern: RegExp;
 }
 
-const aboveMinusOne: Range = { test: (v) => v > -1, text: '> -1' };
-
 const finSizes = 'length|thickness|width|diameter|baseThickness|baseDiameter|innerRadius|outerRadius';
 
 const patterns: readonly KeyPattern[] = [
-  { pattern: new RegExp(`^fin\\.(${finSizes})$`), kind: 'length', range: positive },
-  { pattern: /^fin\.(tipThickness|tipDiameter)$/, kind: 'length', range: nonNegative },
-  { pattern: /^fin\.points\[\d+\]\[[01]\]$/, kind: 'length', range: nonNegative },
-  { pattern: /^material\.k$/, kind: 'conductivity', range: positive },
-  { pattern: /^material\.k\.points\[\d+\]\[0\]$/, kind: 'temperature', range: aboveAbsoluteZero },
-  { pattern: /^material\.k\.points\[\d+\]\[1\]$/, kind: 'conductivity', range: positive },
-  { pattern: /^convection\.h(\.tip)?$/, kind: 'heatTransferCoefficient', range: nonNegative },
+  { pattern: new RegExp(`^fin\\.(${finSizes})$`), kind: 'length', range: finSize },
+  { pattern: /^fin\.(tipThickness|tipDiameter)$/, kind: 'length', range: finSizeOrZero },
+  { pattern: /^fin\.points\[\d+\]\[0\]$/, kind: 'length', range: finPosition },
+  { pattern: /^fin\.points\[\d+\]\[1\]$/, kind: 'length', range: finSizeOrZero },
+  { pattern: /^material\.k$/, kind: 'conductivity', range: conductivityRange },
+  { pattern: /^material\.k\.points\[\d+\]\[0\]$/, kind: 'temperature', range: temperatureRange },
+  { pattern: /^material\.k\.points\[\d+\]\[1\]$/, kind: 'conductivity', range: conductivityRange },
+  { pattern: /^convection\.h(\.tip)?$/, kind: 'heatTransferCoefficient', range: coefficientRange },
   // convection.h.base is > 0 for the power law and >= 0 for a linear h; the schema decides per point.
-  { pattern: /^convection\.h\.base$/, kind: 'heatTransferCoefficient', range: nonNegative },
-  { pattern: /^convection\.h\.points\[\d+\]\[0\]$/, kind: 'length', range: nonNegative },
-  { pattern: /^convection\.h\.points\[\d+\]\[1\]$/, kind: 'heatTransferCoefficient', range: nonNegative },
-  { pattern: /^convection\.h\.exponent$/, kind: 'dimensionless', range: aboveMinusOne },
-  { pattern: /^convection\.tip\.convective$/, kind: 'heatTransferCoefficient', range: nonNegative },
-  { pattern: /^convection\.tip\.temperature$/, kind: 'temperature', range: aboveAbsoluteZero },
-  { pattern: /^convection\.ambient$/, kind: 'temperature', range: aboveAbsoluteZero },
-  { pattern: /^convection\.surroundings$/, kind: 'temperature', range: aboveAbsoluteZero },
+  { pattern: /^convection\.h\.base$/, kind: 'heatTransferCoefficient', range: coefficientRange },
+  { pattern: /^convection\.h\.points\[\d+\]\[0\]$/, kind: 'length', range: finPosition },
+  { pattern: /^convection\.h\.points\[\d+\]\[1\]$/, kind: 'heatTransferCoefficient', range: coefficientRange },
+  { pattern: /^convection\.h\.exponent$/, kind: 'dimensionless', range: exponentRange },
+  { pattern: /^convection\.tip\.convective$/, kind: 'heatTransferCoefficient', range: coefficientRange },
+  { pattern: /^convection\.tip\.temperature$/, kind: 'temperature', range: temperatureRange },
+  { pattern: /^convection\.ambient$/, kind: 'temperature', range: temperatureRange },
+  { pattern: /^convection\.surroundings$/, kind: 'temperature', range: temperatureRange },
   { pattern: /^convection\.emissivity$/, kind: 'dimensionless', range: fraction, absentDefault: 0 },
-  { pattern: /^base\.temperature$/, kind: 'temperature', range: aboveAbsoluteZero },
-  { pattern: /^base\.contactResistance$/, kind: 'contactResistance', range: nonNegative, absentDefault: 0 },
+  { pattern: /^base\.temperature$/, kind: 'temperature', range: temperatureRange },
+  { pattern: /^base\.contactResistance$/, kind: 'contactResistance', range: contactResistanceRange, absentDefault: 0 },
 ];
 
 /** Examples for the message when a key cannot be mapped. */

@@ -9,6 +9,7 @@
  * both ends carry different units, TO is converted to FROM's unit. Axis values are spaced in that unit.
  */
 import {
+  bareLengthUnit,
   fromSI,
   formatKeyPath,
   getByKeyPath,
@@ -20,6 +21,7 @@ import {
   type KeyPath,
   type QuantityKind,
 } from '../case/index.js';
+import { rangeText } from '../case/index.js';
 import { UsageError } from '../errors.js';
 import { axisKeyInfo, mappableKeyExamples, type AxisKeyInfo } from './axis-keys.js';
 import { axisValues } from './spacing.js';
@@ -79,7 +81,8 @@ function caseValueSI(option: string, key: string, path: KeyPath, info: AxisKeyIn
         `map one of its values instead, e.g. ${key}.base or ${key}.points[0][1]`,
     );
   }
-  const parsed = parseQuantity(current, info.kind);
+  const bare = info.kind === 'length' ? bareLengthUnit(raw) : 'm';
+  const parsed = parseQuantity(typeof current === 'number' && bare !== 'm' ? `${current} ${bare}` : current, info.kind);
   if (!parsed.ok) throw new Error(`${key} of a validated case does not parse: ${parsed.problem}`);
   return parsed.value;
 }
@@ -106,7 +109,9 @@ export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAx
   }
   const from = splitNumber(option, key, (ends[0] as string).trim());
   const to = splitNumber(option, key, (ends[1] as string).trim());
-  const unit = from.unit !== '' ? from.unit : to.unit;
+  // Bare ends of a length axis are in the case's unit for bare lengths (units: { length: mm }), as in the file.
+  const caseBare = info.kind === 'length' ? bareLengthUnit(raw) : 'm';
+  const unit = from.unit !== '' ? from.unit : to.unit !== '' ? to.unit : caseBare === 'm' ? '' : caseBare;
   const kindName = quantityKinds[info.kind].noun;
   for (const u of new Set([from.unit, to.unit])) {
     const problem = unitProblem(info.kind, u);
@@ -128,7 +133,7 @@ export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAx
     const si = parseQuantity(rawAxisValue(substitution, end), info.kind);
     if (!si.ok) throw new UsageError(`${option}: ${key}: ${si.problem}`);
     if (!info.range.test(si.value)) {
-      throw new UsageError(`${option}: ${key} = ${end}${unit ? ` ${unit}` : ''} is outside its range: ${kindName} ${info.range.text}`);
+      throw new UsageError(`${option}: ${key} = ${end}${unit ? ` ${unit}` : ''} is outside its range: ${kindName} ${rangeText(info.range)}`);
     }
   }
   if (request.log && !(lo > 0)) {

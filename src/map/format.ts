@@ -39,10 +39,15 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     summary.references.length > 1
       ? summary.references.map((r) => `${r.model} at ${r.points} points`).join(', ')
       : run.casePoint.reference.model;
+  const unresolved =
+    summary.unresolvedPoints > 0
+      ? `  reference NOT RESOLVED at ${summary.unresolvedPoints} points (discretisation error above a tenth of the tolerance): their verdicts are 'unresolved'`
+      : '';
   lines.push(
     `  reference ${references}; tolerance ${pct(tolerance)} (ok), ${pct(2 * tolerance)} (marginal); ` +
       `${summary.points} points, ${summary.solved} solved${summary.errors > 0 ? `, ${summary.errors} invalid` : ''}`,
   );
+  if (unresolved) lines.push(unresolved);
   if (run.job.check.guess === 'base') {
     lines.push('  nonlinear fin: the shortcuts use h and k at the base temperature (check also shows the fin-averaged guess)');
   }

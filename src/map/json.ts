@@ -44,6 +44,7 @@ export function mapJson(run: MapRun, files?: readonly string[]) {
       models: summary.models.map((m) => ({ ...m, minDrift: finiteOrNull(m.minDrift), maxDrift: finiteOrNull(m.maxDrift) })),
     },
     cautions: [...CAUTIONS],
+    warnings: run.warnings,
     points: run.points.map(pointJson),
     ...(files ? { files: [...files] } : {}),
   };

@@ -52,7 +52,7 @@ export function pointFromReport(index: number, x: number, y: number, report: Che
     y,
     biot,
     mL,
-    reference: { model: ref.model, heatRate_W: ref.heatRate_W, efficiency: ref.efficiency, discretizationError: ref.discretizationError },
+    reference: { model: ref.model, heatRate_W: ref.heatRate_W, efficiency: ref.efficiency, discretizationError: ref.discretizationError, resolved: ref.resolved },
     models,
   };
 }

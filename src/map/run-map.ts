@@ -3,7 +3,8 @@
  * reference and the shortcuts asked for, on the case's own point), then solve every grid point (pool.ts) and
  * return plain data. Files and text are written by the caller (outputs.ts, format.ts).
  */
-import { parseCaseText, readDocument } from '../case/index.js';
+import { bareLengthUnit, dimensionWarning, parseCaseText, parseQuantity, readDocument, type CaseWarning } from '../case/index.js';
+import { rawAxisValue } from './substitute.js';
 import { runCheck, type NotApplicable } from '../compare/index.js';
 import { UsageError } from '../errors.js';
 import { finProblem, modelApplies } from '../fd/index.js';
@@ -12,6 +13,16 @@ import { solvePoints } from './pool.js';
 import { pointFromReport } from './point.js';
 import { summariseMap, type MapSummary } from './summary.js';
 import type { MapAxis, MapJob, MapModelId, MapPoint, PointCheckOptions, PointResult } from './types.js';
+
+export interface MapLabels {
+  x: string;
+  y: string;
+  models: string;
+  reference: string;
+}
+
+/** The parts of a map request in words. */
+export const DEFAULT_LABELS: MapLabels = { x: 'x axis', y: 'y axis', models: 'models', reference: 'reference model' };
 
 export interface MapRequest {
   caseText: string;
@@ -30,16 +41,6 @@ export interface MapRequest {
   labels?: MapLabels;
 }
 
-export interface MapLabels {
-  x: string;
-  y: string;
-  models: string;
-  reference: string;
-}
-
-/** The parts of a map request in words. */
-export const DEFAULT_LABELS: MapLabels = { x: 'x axis', y: 'y axis', models: 'models', reference: 'reference model' };
-
 /** A map ready to run: checked axes, the job every point runs, and the case's own point. */
 export interface PreparedMap {
   caseName: string;
@@ -49,6 +50,8 @@ export interface PreparedMap {
   /** The case as given (its own x, y), checked with the same options; index -1. */
   casePoint: PointResult;
   notApplicable: NotApplicable[];
+  /** The case's warnings (src/case) and those of an axis sweeping implausible lengths (a bare 20:300 is metres). */
+  warnings: CaseWarning[];
 }
 
 export interface MapRun extends PreparedMap {
@@ -91,7 +94,19 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
     check,
   };
   const casePoint = pointFromReport(-1, x.caseValue ?? Number.NaN, y.caseValue ?? Number.NaN, report, models);
-  return { caseName: c.name, x, y, job, casePoint, notApplicable: report.notApplicable };
+  const bareUnitChosen = bareLengthUnit(raw) !== 'm';
+  const warnings = [...(c.warnings ?? []), ...axisWarnings(x, labels.x, bareUnitChosen), ...axisWarnings(y, labels.y, bareUnitChosen)];
+  return { caseName: c.name, x, y, job, casePoint, notApplicable: report.notApplicable, warnings };
+}
+
+/** A warning when a length axis reaches a value implausible for a fin (its largest end is checked). */
+function axisWarnings(axis: MapAxis, option: string, bareUnitChosen: boolean): CaseWarning[] {
+  if (axis.kind !== 'length') return [];
+  const top = Math.max(...axis.values);
+  const si = parseQuantity(rawAxisValue(axis, top), 'length');
+  if (!si.ok) return [];
+  const warning = dimensionWarning(axis.path, si.value, axis.unit === '' ? top : `${top} ${axis.unit}`, bareUnitChosen);
+  return warning ? [{ ...warning, path: `${option} ${warning.path}` }] : [];
 }
 
 export interface RunOptions {

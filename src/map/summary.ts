@@ -11,6 +11,8 @@ export interface ModelCounts {
   ok: number;
   marginal: number;
   unsafe: number;
+  /** Points where the reference was not resolved, so no verdict was given. */
+  unresolved: number;
   /** Points where the shortcut does not apply. */
   missing: number;
   minDrift: number;
@@ -29,8 +31,13 @@ export interface MapSummary {
   errors: number;
   errorGroups: ErrorGroup[];
   models: ModelCounts[];
-  /** Points per reference model (an automatic reference keeps fd-1d where the 2-D model does not cover the case). */
-  references: { model: string; points: number }[];
+  /**
+   * Points per reference model (an automatic reference keeps fd-1d where the 2-D model does not cover the case,
+   * or where its study is not resolved); `unresolved`: of those, points whose reference is not resolved.
+   */
+  references: { model: string; points: number; unresolved: number }[];
+  /** Solved points whose reference is not resolved (their verdicts are `unresolved`). */
+  unresolvedPoints: number;
 }
 
 /** The message without the values in it (the value given, the numbers in what is accepted). */
@@ -39,10 +46,11 @@ function groupKey(message: string): string {
 }
 
 export function summariseMap(points: readonly MapPoint[], models: readonly MapModelId[]): MapSummary {
-  const counts: ModelCounts[] = models.map((model) => ({ model, ok: 0, marginal: 0, unsafe: 0, missing: 0, minDrift: Infinity, maxDrift: -Infinity }));
+  const counts: ModelCounts[] = models.map((model) => ({ model, ok: 0, marginal: 0, unsafe: 0, unresolved: 0, missing: 0, minDrift: Infinity, maxDrift: -Infinity }));
   const groups = new Map<string, ErrorGroup>();
   let errors = 0;
-  const references = new Map<string, number>();
+  const references = new Map<string, { points: number; unresolved: number }>();
+  let unresolvedPoints = 0;
   for (const p of points) {
     if (isPointError(p)) {
       errors++;
@@ -52,7 +60,13 @@ export function summariseMap(points: readonly MapPoint[], models: readonly MapMo
       else groups.set(key, { example: p.error, count: 1 });
       continue;
     }
-    references.set(p.reference.model, (references.get(p.reference.model) ?? 0) + 1);
+    const r = references.get(p.reference.model) ?? { points: 0, unresolved: 0 };
+    r.points++;
+    if (!p.reference.resolved) {
+      r.unresolved++;
+      unresolvedPoints++;
+    }
+    references.set(p.reference.model, r);
     for (const c of counts) {
       const m = p.models.find((r) => r.model === c.model);
       if (!m) {
@@ -70,6 +84,7 @@ export function summariseMap(points: readonly MapPoint[], models: readonly MapMo
     errors,
     errorGroups: [...groups.values()].sort((a, b) => b.count - a.count),
     models: counts,
-    references: [...references].map(([model, n]) => ({ model, points: n })),
+    references: [...references].map(([model, n]) => ({ model, points: n.points, unresolved: n.unresolved })),
+    unresolvedPoints,
   };
 }

@@ -55,7 +55,8 @@ export interface MapJob {
 export interface PointModel {
   model: MapModelId;
   heatRate_W: number;
-  efficiency: number;
+  /** null for an infinite tip (no finite surface; check's reference.efficiencyNote). */
+  efficiency: number | null;
   drift: number;
   verdict: Verdict;
 }
@@ -63,8 +64,11 @@ export interface PointModel {
 export interface PointReference {
   model: Extract<ModelId, 'fd-1d' | 'fd-2d'>;
   heatRate_W: number;
-  efficiency: number;
+  /** null for an infinite tip (no finite surface; check's reference.efficiencyNote). */
+  efficiency: number | null;
   discretizationError: number;
+  /** True when discretizationError <= tolerance / 10; else the point's verdicts are `unresolved`. */
+  resolved: boolean;
 }
 
 /** A grid point where the check ran. */

@@ -7,7 +7,7 @@
  */
 import type { LineChartSpec, LineSeries } from '../images/index.js';
 import type { ModelProfile } from '../compare/index.js';
-import { alongAxisLabel, lineLabel, modelStyle, thinSeries, toMillimetres } from './labels.js';
+import { alongAxisTitle, lineLabel, modelStyle, thinSeries, toMillimetres } from './labels.js';
 import { checkSubtitle, legendNote, type ChartSize, type CheckPlotInput } from './profile-chart.js';
 
 /** Fraction of the base heat rate still flowing at the marked point. */
@@ -65,7 +65,7 @@ export function fluxChartSpec(input: CheckPlotInput, size: ChartSize): LineChart
   return {
     title: `Heat flow along the fin: ${c.name}`,
     subtitle,
-    xLabel: alongAxisLabel(c),
+    xLabel: alongAxisTitle(c),
     panels: [
       { yLabel: 'Heat flow Q (W)', series: flow, includeZero: true },
       { yLabel: 'Heat lost q′ (W/m)', series: loss, includeZero: true },

@@ -10,7 +10,7 @@ import { CHART_CAUTION } from '../compare/index.js';
 import type { Case } from '../case/index.js';
 import type { FinStudy2D } from '../fd/index.js';
 import type { FieldChartSpec } from '../images/index.js';
-import { relativeError, sig } from './labels.js';
+import { alongAxisTitle, relativeError, sig } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
 
 export interface MirroredField {
@@ -48,7 +48,7 @@ export function mirroredField(study: FinStudy2D): MirroredField {
 
 function axisWords(c: Case): { x: string; y: string; symmetry: string; tip: string; base: string } {
   const kind = c.fin.profile.kind;
-  if (kind === 'annular') return { x: 'Radius r (mm)', y: 'Axial position z (mm)', symmetry: 'mid-plane', tip: 'rim', base: 'base (tube)' };
+  if (kind === 'annular') return { x: alongAxisTitle(c), y: 'Axial position z (mm)', symmetry: 'mid-plane', tip: 'r2 (rim)', base: 'r1 (tube)' };
   if (kind === 'pin' || kind === 'conical-pin' || (kind === 'tabulated' && c.fin.profile.shape === 'pin')) {
     return { x: 'Distance from the base x (mm)', y: 'Across the diameter (mm)', symmetry: 'axis', tip: 'tip', base: 'base' };
   }
@@ -68,7 +68,7 @@ export function heatmapChartSpec(c: Case, study: FinStudy2D, size: ChartSize, ra
   const steps = newtonSteps(study);
   const subtitle = [
     `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError ?? Number.NaN)} (GCI, ${study.grids.length} grids).`,
-    `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; tip centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
+    `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; ${c.fin.profile.kind === 'annular' ? 'rim' : 'tip'} centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
     r.truncatedInfinite ? 'Infinite fin: the section is cut where the field has decayed and closed by its exact slowest mode.' : '',
     steps ? `Nonlinear fin: Newton's method on every grid (${steps.join('/')} steps, coarsest to finest; relative residual ≤ 1e-10).` : '',
     CHART_CAUTION,

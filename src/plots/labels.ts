@@ -36,6 +36,21 @@ export function alongAxisLabel(c: Case): string {
   return c.fin.profile.kind === 'annular' ? 'Radius r (mm)' : 'Distance from the base x (mm)';
 }
 
+/**
+ * Title of the charts' x axis: alongAxisLabel, and for annular fins where the radius starts and ends:
+ * "Radius r (mm): r1 = 3.1 at the tube, r2 = 5.6 at the rim".
+ */
+export function alongAxisTitle(c: Case): string {
+  const p = c.fin.profile;
+  if (p.kind !== 'annular') return alongAxisLabel(c);
+  return `${alongAxisLabel(c)}: r1 = ${millimetres(p.innerRadius)} at the tube, r2 = ${millimetres(p.outerRadius)} at the rim`;
+}
+
+/** A length in mm for a label, to 4 significant figures without trailing zeros (3.1, 12.5, 0.05). */
+function millimetres(m: number): string {
+  return String(Number((m * 1000).toPrecision(4)));
+}
+
 /** The label of a model's line: the reference says so; fd-2d's temperature line is its mid-plane (pins: axis). */
 export function lineLabel(c: Case, model: ModelId, reference: ReferenceResult, temperature = true): string {
   const base = model === reference.model ? `${model} (reference)` : model;

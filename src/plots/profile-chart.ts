@@ -9,7 +9,7 @@ import type { Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D } from '../fd/index.js';
 import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
 import { withPointLabels, type PointLabel } from './point-labels.js';
-import { alongAxisLabel, faceLabel, isPin, lineLabel, modelStyle, referenceWords, sig, signedPercent, thinSeries, toMillimetres } from './labels.js';
+import { alongAxisTitle, faceLabel, isPin, lineLabel, modelStyle, referenceWords, sig, signedPercent, thinSeries, toMillimetres } from './labels.js';
 
 export interface ChartSize {
   /** Canvas in CSS px (96 per inch). */
@@ -75,7 +75,8 @@ export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineCh
     const tipX = (profiles.baseX_m + profiles.length_m) * 1000;
     const tipT = reference.tipTemperature_degC;
     points.push({ x: tipX, y: tipT, marker: 'circle' });
-    labels.push({ panel: 0, x: tipX, y: tipT, text: `tip ${tipT.toFixed(2)} °C (${reference.model})` });
+    const tipWords = c.fin.profile.kind === 'annular' ? 'rim (r2)' : 'tip';
+    labels.push({ panel: 0, x: tipX, y: tipT, text: `${tipWords} ${tipT.toFixed(2)} °C (${reference.model})` });
     if (c.base.contactResistance > 0) {
       const baseX = profiles.baseX_m * 1000;
       const baseT = reference.temperature.values[0] as number;
@@ -86,7 +87,7 @@ export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineCh
   const spec: LineChartSpec = {
     title: `Temperature along the fin: ${c.name}`,
     subtitle: checkSubtitle(input),
-    xLabel: alongAxisLabel(c),
+    xLabel: alongAxisTitle(c),
     panels: [{ yLabel: 'Temperature T (°C)', series, points }],
     width: size.width,
     height: size.height,

@@ -23,7 +23,7 @@ export interface ReportInputs {
   date: string;
 }
 
-const efficiency = (x: number): string => x.toFixed(4);
+const efficiency = (x: number | null): string => (x === null ? 'n/a' : x.toFixed(4));
 
 /** A model's name in the tables; nonlinear fins list each shortcut with the h and k it was given. */
 function modelName(m: ModelResult): string {
@@ -31,20 +31,35 @@ function modelName(m: ModelResult): string {
   return `${m.model} (${m.guess === 'base' ? 'h, k at the base' : 'h, k fin mean'})`;
 }
 
+/**
+ * One exact sentence about the flags: the warnings (and errors) by name, and how many notes (info flags)
+ * are listed below, e.g. "No warnings; 2 notes (long-fin, low-biot) listed under Flags."
+ */
+export function flagSummary(flags: readonly Flag[]): string {
+  const count = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
+  const warnings = flags.filter((f) => f.severity !== 'info');
+  const notes = flags.filter((f) => f.severity === 'info');
+  const names = (list: readonly Flag[]): string => list.map((f) => f.flag).join(', ');
+  const warned = warnings.length > 0 ? `${count(warnings.length, 'warning', 'warnings')} (${names(warnings)})` : 'No warnings';
+  const noted = notes.length > 0 ? `${count(notes.length, 'note', 'notes')} (${names(notes)})` : 'no notes';
+  return flags.length > 0 ? `${warned}; ${noted}; see Flags.` : `${warned}; ${noted}.`;
+}
+
 function summary(r: CheckReport): Block[] {
   const ref = r.reference;
-  const counts = { ok: 0, marginal: 0, unsafe: 0 };
+  const counts = { ok: 0, marginal: 0, unsafe: 0, unresolved: 0 };
   for (const m of r.models) counts[m.verdict]++;
   const worst = [...r.models].sort((a, b) => Math.abs(b.drift) - Math.abs(a.drift))[0];
-  const tone: Tone = counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
+  const tone: Tone = !ref.resolved ? 'warning' : counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
   const items = [
     `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
-    `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`,
+    ref.resolved
+      ? `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`
+      : `The reference is not resolved (estimated discretisation error above a tenth of the tolerance, ${relativeError(ref.resolution.target)}): no verdicts are given (${counts.unresolved} models unresolved).`,
   ];
   if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
-  const warnings = r.flags.filter((f) => f.severity !== 'info');
-  items.push(warnings.length > 0 ? `Flags: ${warnings.map((f) => f.flag).join(', ')} (see Flags).` : 'No warning flags.');
-  return [{ kind: 'callout', title: tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
+  items.push(flagSummary(r.flags));
+  return [{ kind: 'callout', title: tone === 'warning' ? 'Result: reference not resolved, no verdicts' : tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
 }
 
 function referenceFacts(r: CheckReport): Block {
@@ -55,7 +70,7 @@ function referenceFacts(r: CheckReport): Block {
     caption: `Reference model ${ref.model}`,
     items: [
       ['Heat rate Q', `${sig(ref.heatRate_W, 6)} W (whole fin)`],
-      ['Efficiency', `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)`],
+      ['Efficiency', `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)${ref.efficiencyNote !== null ? `; ${ref.efficiencyNote}` : ''}`],
       ['Effectiveness', `${sig(ref.effectiveness)} (Q over the bare base area's heat rate)`],
       ['Tip temperature', `${ref.tipTemperature_degC.toFixed(2)} °C${ref.model === 'fd-2d' ? ' (centre of the tip)' : ''}`],
       ['Estimated discretisation error of Q', `${relativeError(ref.discretizationError)} relative = ±${sig(ref.discretizationError * ref.heatRate_W, 2)} W (GCI, Celik et al. 2008)`],
@@ -70,7 +85,7 @@ function referenceFacts(r: CheckReport): Block {
 function checkTable(r: CheckReport): Block[] {
   const row = (m: ModelResult): { cells: string[]; tone: Tone } => ({
     cells: [modelName(m), sig(m.heatRate_W, 5), efficiency(m.efficiency), signedPercent(m.drift), m.verdict, prettyUnits(m.accuracy)],
-    tone: m.verdict,
+    tone: m.verdict === 'unresolved' ? 'warning' : m.verdict,
   });
   const blocks: Block[] = [
     referenceFacts(r),

@@ -3,3 +3,4 @@ export { reportDate } from './report-date.js';
 export { writeFilesAtomically } from './write-files.js';
 export type { OutputFile } from './write-files.js';
 export { makeReport, REPORT_FILES } from './make-report.js';
+export { asUsageError } from './write-files.js';

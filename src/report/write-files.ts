@@ -55,8 +55,12 @@ export function writeFilesAtomically(files: readonly OutputFile[], folders: read
   files.forEach((f, k) => renameSync(temporaryName(f.path, k), f.path));
 }
 
-/** File-system refusals (no such folder, no permission, read-only, disk full) are the user's to fix: exit 2. */
-function asUsageError(e: unknown): unknown {
+/**
+ * File-system refusals (no such folder, no permission, read-only, disk full, a file where a folder should be) are
+ * the user's to fix: a UsageError (exit 2) with the system's message. Anything else is returned unchanged.
+ * Shared by every command that writes files (plot, report, map).
+ */
+export function asUsageError(e: unknown): unknown {
   const code = typeof e === 'object' && e !== null && 'code' in e ? String((e as { code: unknown }).code) : '';
   if (['ENOENT', 'ENOTDIR', 'EISDIR', 'EACCES', 'EPERM', 'EROFS', 'ENOSPC', 'EEXIST'].includes(code)) {
     return new UsageError(`cannot write the output: ${e instanceof Error ? e.message : String(e)}`);

@@ -66,7 +66,8 @@ base: { temperature: 85 degC }
     expect(map.code, map.stderr).toBe(0);
     const check = await cli('check', file, '--reference', '1d');
     // tanh-L (adiabatic tip) underestimates a convective-tip fin: a negative drift, printed with its sign in both.
-    const checkDrift = /tanh-L\s+\S+\s+\S+\s+(-\d+\.\d+ %)/.exec(check.stdout)?.[1];
+    // Columns: model, Q, efficiency, formula eff., drift.
+    const checkDrift = /tanh-L\s+\S+\s+\S+\s+\S+\s+(-\d+\.\d+ %)/.exec(check.stdout)?.[1];
     expect(checkDrift).toBeDefined();
     expect(map.stdout).toMatch(new RegExp(`tanh-L\\s+drift ${(checkDrift ?? '').replace('.', '\\.')}`));
     expect(map.stdout).toMatch(/tanh-L\s+\S+ %\s+\S+ %\s+\S+ %\s+-\d+\.\d+ % \.\. -\d+\.\d+ %/);

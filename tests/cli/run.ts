@@ -9,7 +9,12 @@ export interface CliRun {
 }
 
 export async function cli(...argv: string[]): Promise<CliRun> {
-  const io = bufferIo();
+  return cliWithStdin('', ...argv);
+}
+
+/** The same with `stdin` as standard input (for a case given as `-`). */
+export async function cliWithStdin(stdin: string, ...argv: string[]): Promise<CliRun> {
+  const io = bufferIo(stdin);
   const code = await runCli(argv, io);
   return { code, stdout: io.stdout(), stderr: io.stderr() };
 }

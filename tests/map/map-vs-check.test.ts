@@ -11,7 +11,7 @@ import { cli } from '../cli/run.js';
 import { caseFile, tmp } from './support.js';
 
 interface CheckJson {
-  reference: { model: string; heatRate_W: number; efficiency: number; discretizationError: number };
+  reference: { model: string; heatRate_W: number; efficiency: number; discretizationError: number; resolved: boolean };
   models: { model: string; heatRate_W: number; efficiency: number; drift: number; verdict: string }[];
 }
 
@@ -65,7 +65,7 @@ describe('map points equal fincheck check on the same parameters', () => {
     // Log spacing: the middle value is the geometric mean, sqrt(20 * 400), to the 12 digits values are kept to.
     expect(map.y.values[1]).toBeCloseTo(Math.sqrt(8000), 9);
     expect(map.points).toHaveLength(12);
-    expect(map.summary.references).toEqual([{ model: 'fd-1d', points: 12 }]);
+    expect(map.summary.references).toEqual([{ model: 'fd-1d', points: 12, unresolved: 0 }]);
     for (let j = 0; j < 3; j++) {
       for (let i = 0; i < 4; i++) {
         const p = map.points[j * 4 + i];
@@ -105,6 +105,7 @@ describe('map points equal fincheck check on the same parameters', () => {
         heatRate_W: check.reference.heatRate_W,
         efficiency: check.reference.efficiency,
         discretizationError: check.reference.discretizationError,
+        resolved: check.reference.resolved,
       });
       expect(p.models.map((m) => [m.model, m.drift, m.verdict])).toEqual(check.models.map((m) => [m.model, m.drift, m.verdict]));
     }

@@ -37,7 +37,8 @@ export function factorBandedCholesky(a: Stencil9): BandedCholesky {
 /** The SolverError of a failed factorisation. */
 export function notPositiveDefinite(failure: { readonly pivot: number; readonly unknown: number }): SolverError {
   return new SolverError(
-    `banded Cholesky: the 2-D system is not positive definite (pivot ${failure.pivot.toExponential(3)} at unknown ${failure.unknown}); check the boundary conditions`,
+    `banded Cholesky: the 2-D system is not positive definite (pivot ${failure.pivot.toExponential(3)} at unknown ${failure.unknown})`,
+    'another-2d-grid',
   );
 }
 

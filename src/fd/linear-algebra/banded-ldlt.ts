@@ -47,7 +47,7 @@ export function factorBandedLdltRowSums(a: Stencil9, rowSums: Float64Array): Ban
     for (let t = 1; t <= tEnd; t++) couplings += U[ri + t] as number;
     const d = (e[i] as number) - couplings;
     if (!(d > 0)) {
-      throw new SolverError(`banded LDL^T: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${i})`);
+      throw new SolverError(`banded LDL^T: the 2-D system is not positive definite (pivot ${d.toExponential(3)} at unknown ${i})`, 'another-2d-grid');
     }
     const inv = 1 / d;
     invD[i] = inv;

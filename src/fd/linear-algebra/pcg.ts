@@ -60,7 +60,7 @@ const UNIT_ROUNDOFF = 2 ** -53;
 /** MG-PCG; a SolverError when it does not reach its residual target (attemptMgPcg asks instead). */
 export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigrid = buildMultigrid(system.matrix)): { x: Float64Array; report: PcgReport } {
   const attempt = attemptMgPcg(system, opts, mg);
-  if (attempt.failure !== null) throw new SolverError(attempt.failure);
+  if (attempt.failure !== null) throw new SolverError(attempt.failure, 'another-2d-grid');
   return { x: attempt.x, report: attempt.report };
 }
 
@@ -121,7 +121,7 @@ export function attemptMgPcg(
     relative <= FAILURE
       ? null
       : `multigrid-preconditioned CG did not converge: relative residual ${relative.toExponential(2)} after ${iterations} iterations ` +
-        `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid; try another grid (e.g. fewer nodes across) or the direct solver`;
+        `on a ${system.matrix.nodesX} x ${system.matrix.nodesY} grid`;
   return { x, report, failure };
 }
 

@@ -124,6 +124,5 @@ function failure(problem: FinProblem, mesh: Mesh1D, outcome: NewtonOutcome, reac
     `fd-1d (nonlinear fin) did not converge on ${mesh.nodes} nodes: ${outcome.failure ?? 'unknown reason'}` +
       ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})${progress}. ` +
       `To get a solution: ${advice(problem)}.`,
-    isLinearProblem(problem) ? [] : ['change-grid'],
   );
 }

@@ -21,9 +21,10 @@
  * Damping and stopping: the shared driver (newton/damped-newton.ts: Armijo line search, full steps near
  * round-off, here a relative residual <= 1e-10); trial states with non-finite values or a negative
  * absolute temperature are rejected.
- * Convergence (both): relative residual max_i |R_i| / max_i s_i <= 1e-12, s_i the sum of the
- * magnitudes of the terms of row i (so 1e-12 is a thousand times the round-off floor whatever the
- * grid); and the heat-rate change between the last two iterates <= 1e-12 relative, or the heat
+ * Convergence (both): relative residual max_i |R_i| / max(max_j s_j, f_i) <= 1e-12, s_j the sum of the
+ * magnitudes of the terms of row j (so 1e-12 is a thousand times the round-off floor whatever the
+ * grid) and f_i = |dloss_i/dθ_i| (|θ_b| + T_i with radiation) the round-off floor of a row whose loss
+ * is steep in θ (evaluate); and the heat-rate change between the last two iterates <= 1e-12 relative, or the heat
  * rate's round-off floor 16 ε_mach (|terms of Q_base|) / |Q| when that is larger. A linear problem
  * is solved by its first step (its heat rate cannot change beyond round-off), so it stops there. */
 import type { Mesh1D } from '../../mesh/index.js';
@@ -182,6 +183,21 @@ function evaluate(setup: NewtonSetup, s: State): void {
   s.valid = valid;
   s.norm = Math.sqrt(norm2);
   s.relative = maxScale > 0 ? maxResidual / maxScale : 0;
+  // A row whose loss is steep in θ cannot be evaluated more accurately than its slope times the
+  // round-off of θ (θ = θ_b - d carries eps |θ_b|; radiation's T = T_amb + θ carries eps T): for n < 0
+  // the slope ~ |θ|^n grows without bound as a node approaches the ambient, and that floor rose above
+  // 1e-12 of the conduction scale (a converged solve stalled at 1.2e-12 for 50 steps and was called a
+  // failure). Such a row is measured against that floor instead, so 1e-12 stays ~4500 round-offs.
+  if (maxScale > 0) {
+    const thetaScale = Math.abs(reference);
+    let relative = 0;
+    for (let i = 0; i < n; i++) {
+      const radiationT = law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
+      const rowFloor = Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
+      relative = Math.max(relative, Math.abs(R[i] as number) / Math.max(maxScale, rowFloor));
+    }
+    s.relative = relative;
+  }
   if (b.base.kind === 'temperature') {
     const k0 = K[0] as number;
     const d0 = D[0] as number;

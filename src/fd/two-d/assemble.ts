@@ -30,6 +30,36 @@ import { addCoupling, emptyStencil9, type Stencil9 } from '../linear-algebra/ste
  */
 const TIP_TIE_FACTOR = 1e6;
 
+/**
+ * Largest ratio of the conduction across a cell to the conduction along it (W/K to W/K). On a cell of
+ * length D along the fin and height H across, the across conductance is k D / H and the along one k H / D:
+ * their ratio (D / H)^2 grows without bound at a cusped tip, where the thickness vanishes faster than the
+ * cells shorten (concave parabola: t ~ xi^2 at the distance xi from the tip; with the tip clustering of
+ * grid2dSection.ts the last cells were 1e-7 m long and 1e-15 m high, a ratio of 1e16). The matrix is then
+ * positive definite in exact arithmetic but not in doubles: the along-fin and convective conductances,
+ * which decide the temperatures, fall below the round-off of the across ones in every factorisation or
+ * Galerkin coarse operator (the banded Cholesky pivots went negative, multigrid CG returned NaN).
+ * Such a cell is at one temperature across (its Biot number h H / k is ~1e-16 at the cusp), so its across
+ * conductivity is lowered until the ratio is this bound; the cell still conducts across 1e6 times better
+ * than along. The temperature difference across it, (D/H)^2 Bi_cell / 1e6 of the local excess, stays far
+ * below the discretisation error (the heat rates of cusped fins that solved before moved by at most 1e-8,
+ * relative, on 21 x 5 to 81 x 17 grids; their GCI is ~1e-5), and the operator stays symmetric, positive definite (each triangle's conductivity tensor
+ * is) and conservative (zero row sums). 1e6 keeps ten digits of the small conductances in a factorisation.
+ * Cells of ordinary grids (aspect D/H <= 1000) are unchanged.
+ */
+export const MAX_ACROSS_ALONG_RATIO = 1e6;
+
+/**
+ * Conductivity across a cell of length `along` and height `across` (m): k, or the value that caps the
+ * across/along conductance ratio at MAX_ACROSS_ALONG_RATIO (W/(m*K)). A zero-height cell (collapsed tip)
+ * keeps k: its triangles have no area and no couplings.
+ */
+export function acrossConductivity(k: number, along: number, across: number): number {
+  if (!(across > 0)) return k;
+  const ratio = (along / across) ** 2;
+  return ratio > MAX_ACROSS_ALONG_RATIO ? (k * MAX_ACROSS_ALONG_RATIO) / ratio : k;
+}
+
 /** Conduction operator K (zero row sums), W/K per unit depth, for a uniform conductivity k (W/(m*K)). */
 export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
   const { nodesX: nx, nodesY: ny, x, y, diagonal, section } = grid;
@@ -43,10 +73,11 @@ export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
       const b = a + ny;
       const c = b + 1;
       const d = a + 1;
+      const kAcross = acrossConductivity(k, (x[b] as number) - (x[a] as number), Math.max((y[d] as number) - (y[a] as number), (y[c] as number) - (y[b] as number)));
       if (diagonal[i * (ny - 1) + j] === 0) {
         // Triangles (a, b, c) and (a, c, d).
-        const t1 = triangleCouplings(x, y, a, b, c, k, section);
-        const t2 = triangleCouplings(x, y, a, c, d, k, section);
+        const t1 = triangleCouplings(x, y, a, b, c, k, kAcross, section);
+        const t2 = triangleCouplings(x, y, a, c, d, k, kAcross, section);
         K.east[a] = (K.east[a] as number) + t1.k01;
         K.north[b] = (K.north[b] as number) + t1.k12;
         K.northEast[a] = (K.northEast[a] as number) + t1.k20 + t2.k01;
@@ -56,8 +87,8 @@ export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
         addDiagonals(K, a, c, d, t2);
       } else {
         // Triangles (a, b, d) and (b, c, d).
-        const t1 = triangleCouplings(x, y, a, b, d, k, section);
-        const t2 = triangleCouplings(x, y, b, c, d, k, section);
+        const t1 = triangleCouplings(x, y, a, b, d, k, kAcross, section);
+        const t2 = triangleCouplings(x, y, b, c, d, k, kAcross, section);
         K.east[a] = (K.east[a] as number) + t1.k01;
         K.southEast[d] = (K.southEast[d] as number) + t1.k12 + t2.k20;
         K.north[a] = (K.north[a] as number) + t1.k20;
@@ -90,7 +121,7 @@ interface TriangleCouplings {
 
 const NONE: TriangleCouplings = { k01: 0, k12: 0, k20: 0 };
 
-/** Couplings of triangle (p0, p1, p2); all zero for the degenerate triangles of a collapsed tip. */
+/** Couplings of triangle (p0, p1, p2); all zero for the zero-area triangles of a collapsed tip. */
 function triangleCouplings(
   x: Float64Array,
   y: Float64Array,
@@ -98,6 +129,7 @@ function triangleCouplings(
   p1: number,
   p2: number,
   k: number,
+  kAcross: number,
   section: Grid2D['section'],
 ): TriangleCouplings {
   const x0 = x[p0] as number;
@@ -114,11 +146,20 @@ function triangleCouplings(
   const ex2 = x1 - x0;
   const ey2 = y1 - y0;
   const area = 0.5 * Math.abs(ex2 * -ey1 - ey2 * -ex1);
-  const scale = Math.max(ex0 * ex0 + ey0 * ey0, ex1 * ex1 + ey1 * ey1, ex2 * ex2 + ey2 * ey2);
-  if (area <= 1e-14 * scale) return NONE;
+  // Only the collapsed tip has coincident vertices (exactly: then the cross product is exactly 0). A relative
+  // threshold (area <= 1e-14 x longest edge^2) also dropped the real cells next to a cusp, which are that
+  // thin (1e-26 m high and 1e-12 m long on a 5273 x 33 grid of a long concave fin): their nodes were
+  // left without any coupling and the matrix singular.
+  if (!(area > 0)) return NONE;
   const r = radiusAt(section, (x0 + x1 + x2) / 3, (y0 + y1 + y2) / 3);
-  const f = (k * r) / (4 * area);
-  return { k01: f * (ex0 * ex1 + ey0 * ey1), k12: f * (ex1 * ex2 + ey1 * ey2), k20: f * (ex2 * ex0 + ey2 * ey0) };
+  // grad phi_a = (ey_a, -ex_a) / (2 |T|) rotated: the along-fin gradient comes from the y-components of the
+  // edges, the across gradient from their x-components.
+  const f = r / (4 * area);
+  return {
+    k01: f * (k * ey0 * ey1 + kAcross * ex0 * ex1),
+    k12: f * (k * ey1 * ey2 + kAcross * ex1 * ex2),
+    k20: f * (k * ey2 * ey0 + kAcross * ex2 * ex0),
+  };
 }
 
 /** Zero row sums: each vertex's diagonal is minus its couplings in the triangle. */

@@ -169,10 +169,16 @@ function evaluate(setup: Newton2DSetup, s: State): void {
     const side = terms[name];
     sideExchange(setup, side, s);
     const values = s.exchange[name];
+    const slopes = s.slope[name];
+    // An exchange steep in θ (h ~ θ^n with n < 0 near the ambient; radiation, whose T = T_amb + θ carries
+    // ε_mach T) is known only to its slope times the round-off of θ: part of the row's floor.
+    const law = name === 'tip' ? setup.tipLaw : setup.faceLaw;
     side.nodes.forEach((p, e) => {
       const v = values[e] as number;
       R[p] = (R[p] as number) + v;
       scale[p] = (scale[p] as number) + Math.abs(v);
+      const roundOffT = Math.abs(thetaBase) + (law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[p] as number)) : 0);
+      floor[p] = (floor[p] as number) + Math.abs(slopes[e] as number) * roundOffT;
     });
   }
   let norm2 = 0;

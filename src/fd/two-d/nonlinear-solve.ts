@@ -157,7 +157,7 @@ function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2D
   const steps = reason.startsWith('no convergence') ? '' : ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})`;
   return new SolverError(
     `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${reason}${steps}${progress}. To get a solution: ${advice(problem)}.`,
-    isLinearProblem(problem.physics) ? [] : ['change-grid', 'use-1d-model'],
+    isLinearProblem(problem.physics) ? undefined : 'another-2d-grid',
   );
 }
 
