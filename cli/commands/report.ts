@@ -113,7 +113,7 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
-      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
+      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
       const c = await loadCaseInput(file, io);
       // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
       const interrupt = listenForInterrupt();
