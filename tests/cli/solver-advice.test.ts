@@ -15,7 +15,7 @@ import { cli } from './run.js';
 
 // The 2-D study of the one case below fails as a real solver failure would (a stand-in for the fin
 // that made the multigrid CG fail before fin2d.ts solved for the departure from the lumped level).
-vi.mock('../../src/fd/fin2dStudy.js', async (importOriginal) => {
+vi.mock('../../src/fd/two-d/linear-study.js', async (importOriginal) => {
   const original = await importOriginal<typeof import('../../src/fd/two-d/linear-study.js')>();
   return {
     ...original,
