@@ -8,6 +8,9 @@ export interface Io {
   stdin(): AsyncIterable<Uint8Array | string>;
 }
 
+/** A command reports a non-zero outcome (e.g. exit 1 for --strict) through this; errors are thrown. */
+export type SetExit = (code: number) => void;
+
 export function processIo(): Io {
   return {
     out: (t) => void process.stdout.write(t),

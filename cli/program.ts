@@ -1,6 +1,6 @@
 /** The `fincheck` program: one command a file under cli/commands/. */
 import { Command, type OutputConfiguration } from 'commander';
-import type { Io } from './io.js';
+import type { Io, SetExit } from './io.js';
 import { registerCheck } from './commands/check.js';
 import { registerSolve } from './commands/solve.js';
 import { registerMaterials } from './commands/materials.js';
@@ -10,9 +10,6 @@ import { registerPlot } from './commands/plot.js';
 import { registerReport } from './commands/report.js';
 import { registerMap } from './commands/map.js';
 import { VERSION } from '../src/version.js';
-
-/** A command reports a non-zero outcome (e.g. exit 1 for --strict) through this; errors are thrown. */
-export type SetExit = (code: number) => void;
 
 export function buildProgram(io: Io, setExit: SetExit): Command {
   const program = new Command();

@@ -2,10 +2,9 @@
 import type { Command } from 'commander';
 import { runCheck, formatCheck } from '../../src/compare/index.js';
 import { loadCaseInput } from '../case-input.js';
-import type { Io } from '../io.js';
+import type { Io, SetExit } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
-import type { SetExit } from '../program.js';
 
 export function registerCheck(program: Command, io: Io, setExit: SetExit): Command {
   return program

@@ -7,9 +7,8 @@ import { type MapModelId, formatMapSummary, OutputsInterrupted, renderMapFiles, 
 import { asUsageError } from '../../src/report/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
-import type { Io } from '../io.js';
+import type { Io, SetExit } from '../io.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
-import type { SetExit } from '../program.js';
 
 const modelIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'] as const satisfies readonly MapModelId[];
 

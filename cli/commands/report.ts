@@ -13,10 +13,9 @@ import { UsageError } from '../../src/errors.js';
 import { makeReport, REPORT_FILES, reportDate, writeFilesAtomically, type OutputFile } from '../../src/report/index.js';
 import { VERSION } from '../../src/version.js';
 import { loadCaseInput } from '../case-input.js';
-import type { Io } from '../io.js';
+import type { Io, SetExit } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
-import type { SetExit } from '../program.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import { dpiOption } from './plot.js';
 
@@ -76,7 +75,13 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
   request.beforeWrite?.();
   writeFilesAtomically(files, [request.outDir]);
   const verdicts = content.check.report.models.map((m) => m.verdict);
-  const worstVerdict = verdicts.includes('unresolved') ? 'unresolved' : verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
+  const worstVerdict = verdicts.includes('unresolved')
+    ? 'unresolved'
+    : verdicts.includes('unsafe')
+      ? 'unsafe'
+      : verdicts.includes('marginal')
+        ? 'marginal'
+        : 'ok';
   return { case: c, check: content.check.report, html, markdown, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
 }
 
@@ -119,7 +124,16 @@ Examples:
       const interrupt = listenForInterrupt();
       let written: WrittenReport;
       try {
-        written = await writeReport({ case: c, caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text, outDir, tolerance, reference, dpi, date, beforeWrite: interrupt.check });
+        written = await writeReport({
+          case: c,
+          caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text,
+          outDir,
+          tolerance,
+          reference,
+          dpi,
+          date,
+          beforeWrite: interrupt.check,
+        });
       } catch (err) {
         if (!(err instanceof Interrupted)) throw err;
         io.err(`fincheck: interrupted (${err.by}); no report files were written\n`);

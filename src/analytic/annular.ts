@@ -5,7 +5,7 @@
  *   Adiabatic rim at r2 (a = m r1, b = m r2):
  *     eta = (2 r1 / (m (r2^2 - r1^2))) [K1(a) I1(b) - I1(a) K1(b)] / [I0(a) K1(b) + K0(a) I1(b)]
  *     area 2 pi (r2^2 - r1^2), q = eta h area thetaBase.
- *     Gardner, K. A., 1945, Trans. ASME 67, 621-631 [from memory]; Incropera et al., Table 3.5
+ *     Gardner, K. A., 1945, Trans. ASME 67, 621-631 [from memory]; Incropera et al. 2007, Table 3.5
  *     [from memory]; Shabany, Heat Transfer: Thermal Management of Electronics, CRC 2009, eq. 7.53.
  *   Corrected radius: the same with r2c = r2 + t/2 and area 2 pi (r2c^2 - r1^2) (Shabany 2009, eq. 7.53).
  *   Exact convective rim (-k theta'(r2) = h_tip theta(r2), B = h_tip/(m k)):

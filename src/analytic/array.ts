@@ -11,7 +11,7 @@
  *     eta_o(c) = 1 - (N A_f / A_t) (1 - eta_f / C1),   C1 = 1 + eta_f h A_f R''_tc / A_b,
  *
  * which is the fin resistance 1/(eta_f h A_f) in series with R''_tc/A_b.
- * Source: Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer (6th ed., 2007),
+ * Source: Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer (6th ed.),
  * section 3.6.5 "Overall surface efficiency" [from memory; equation numbers not checked].
  */
 import { requireNonNegative, requirePositive } from './check.js';

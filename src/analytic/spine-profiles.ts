@@ -14,7 +14,7 @@
  *   concave parabolic r ~ x_tip^2     eta = 2 / (sqrt(1 + (4/9)(mL)^2) + 1)
  *   convex parabolic  r ~ x_tip^(1/2) eta = 3 I1(4mL/3) / (2 mL I0(4mL/3))
  *
- * Sources: Incropera et al., Fundamentals of Heat and Mass Transfer, Table 3.5 (cylinder, cone, concave
+ * Sources: Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer (6th ed.), Table 3.5 (cylinder, cone, concave
  * parabolic spine) [from memory]; Kraus, Aziz & Welty, Extended Surface Heat Transfer, Wiley 2001 (convex
  * parabolic spine) [from memory]; the truncated cone is derived with xi^{-1/2} I1, K1 of 2m sqrt(xi_b xi)
  * (xi from the virtual apex), and reduces to the cone (tau -> 0) and the cylinder (tau -> 1).

@@ -18,7 +18,7 @@
  *
  * Sources: Gardner, K. A., 1945, "Efficiency of extended surface", Trans. ASME 67, 621-631 (triangular,
  * parabolic and the general form) [from memory]; Harper & Brown 1922 (rectangular) [from memory];
- * Incropera et al., Fundamentals of Heat and Mass Transfer, Table 3.5 [from memory]; triangular also
+ * Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer (6th ed.), Table 3.5 [from memory]; triangular also
  * Shabany, Heat Transfer: Thermal Management of Electronics, CRC 2009, eq. 7.52; trapezoidal as in Kraus,
  * Aziz & Welty, Extended Surface Heat Transfer, Wiley 2001 [from memory].
  * Evaluation: every ratio of I's is a continued fraction (bessel-ratio.ts) and the trapezoid uses the

@@ -19,7 +19,7 @@
  * (Harper, D. R. & Brown, W. B., 1922, NACA Report 158 [from memory]); it is not defined (null) for a
  * prescribed tip excess or an infinite fin. Effectiveness q/(h A thetaBase) (Gardner, K. A., 1945,
  * "Efficiency of extended surface", Trans. ASME 67, 621-631 [from memory]).
- * Source of the table: Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer,
+ * Source of the table: Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer,
  * 6th ed., Wiley 2007, Table 3.4 [from memory]. Every hyperbolic function is written with exp(-m...)
  * factors only, so nothing overflows at large mL.
  */

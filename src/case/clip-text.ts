@@ -44,5 +44,11 @@ export function cleanFreeText(text: string, max: number): { text: string; shorte
   const oneLine = text.replace(CONTROL, ' ').replace(/\s+/g, ' ').trim();
   const points = [...oneLine];
   if (points.length <= max) return { text: oneLine, shortened: false };
-  return { text: `${points.slice(0, max - 1).join('').trimEnd()}\u2026`, shortened: true };
+  return {
+    text: `${points
+      .slice(0, max - 1)
+      .join('')
+      .trimEnd()}\u2026`,
+    shortened: true,
+  };
 }

@@ -5,7 +5,7 @@
  * line numbers, the same duplicate-key check and the same `.inf`/`.nan` handling. Syntax errors and duplicate
  * keys are issues; the raw value is still returned for what could be read.
  */
-import { LineCounter, isMap, isPair, isScalar, isSeq, parseDocument, type Node, type Pair } from 'yaml';
+import { LineCounter, isMap, isScalar, isSeq, parseDocument, type Node, type Pair } from 'yaml';
 import { clip, escapeControl, quoted } from './clip-text.js';
 import type { KeyPath } from './key-path.js';
 import type { Locate, PendingIssue, SourcePosition } from './issues.js';

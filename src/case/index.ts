@@ -27,8 +27,7 @@ export {
 } from './units.js';
 export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
-export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
-export { aboveAbsoluteZero, fraction, nonNegative, positive } from './fields.js';
+export { aboveAbsoluteZero, coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, fraction, nonNegative, positive, rangeText, temperatureRange } from './fields.js';
 export type { Range } from './fields.js';
+export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
 export type { CaseWarning } from './types.js';
-export { coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, temperatureRange, rangeText } from './fields.js';

@@ -39,10 +39,7 @@ export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOpt
   const defaultName = options.defaultName ?? 'unnamed case';
   const c = toCase(result.data, defaultName);
   const nameWarning = caseName(result.data.name, defaultName).warning;
-  const warnings = [
-    ...(nameWarning ? [nameWarning] : []),
-    ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined),
-  ];
+  const warnings = [...(nameWarning ? [nameWarning] : []), ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined)];
   return { ...c, warnings };
 }
 

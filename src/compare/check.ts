@@ -48,18 +48,23 @@ export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcom
 /** The fd-1d study as a reference, judged against the resolution it reached. */
 export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
   const ref = oneD.result;
-  const grids = resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
-  return judgedReference({
-    model: 'fd-1d',
-    heatRate_W: ref.heatRate,
-    effectiveness: ref.effectiveness,
-    discretizationError: oneD.study.gci,
-    energyBalance: ref.energyBalance,
-    observedOrder: oneD.study.observedOrder,
-    grid: { nodes: ref.mesh.nodes },
-    tipTemperature_degC: ref.tipTemperature_degC,
-    note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
-  }, resolution1D(resolution), basis);
+  const grids =
+    resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
+  return judgedReference(
+    {
+      model: 'fd-1d',
+      heatRate_W: ref.heatRate,
+      effectiveness: ref.effectiveness,
+      discretizationError: oneD.study.gci,
+      energyBalance: ref.energyBalance,
+      observedOrder: oneD.study.observedOrder,
+      grid: { nodes: ref.mesh.nodes },
+      tipTemperature_degC: ref.tipTemperature_degC,
+      note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
+    },
+    resolution1D(resolution),
+    basis,
+  );
 }
 
 /**
@@ -104,10 +109,12 @@ function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {
   const ref = oneD.result;
   const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
   const required = opts.reference === '2d';
-  const { twoD, fallback } = choose2DReference(opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, required), required, target);
-  const basis = twoD
-    ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE)
-    : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
+  const { twoD, fallback } = choose2DReference(
+    opts.reference === '1d' ? null : reference2D(c, oneD, ref.idealHeatRate, effectivenessScale, required),
+    required,
+    target,
+  );
+  const basis = twoD ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE) : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
   const reference = twoD ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis) : reference1D(oneD, resolution, basis, fallback);
 
   const { values, notApplicable } = evaluateShortcuts(c, eq);

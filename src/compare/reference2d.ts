@@ -32,7 +32,8 @@ export interface Reference2DModels<C extends Case> {
 const LINEAR_MODELS: Reference2DModels<LinearFinCase> = {
   study2D: (c) => studyFin2D(c),
   heatRate1D: (variant, nodes) => solveFin1D(variant, { nodes }).heatRate,
-  idealHeatRate1D: (variant) => idealHeatRate(finGeometry(variant), variant.convection.h, tipBoundary(variant), variant.base.T_degC - variant.convection.ambient_degC),
+  idealHeatRate1D: (variant) =>
+    idealHeatRate(finGeometry(variant), variant.convection.h, tipBoundary(variant), variant.base.T_degC - variant.convection.ambient_degC),
 };
 
 export interface Reference2D {
@@ -128,7 +129,12 @@ export function sideEdgeCorrection<C extends Case>(c: C, oneD: Fin1DStudy, heatR
   const ref1d = oneD.result;
   const cooledEdges = ref1d.mesh.baseArea > 0 && c.fin.edges === 'cooled' && isStraight(c);
   const insulated = cooledEdges ? heatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }, ref1d.mesh.nodes) : ref1d.heatRate;
-  return { cooledEdges, edgeHeatRate_W: ref1d.heatRate - insulated, insulatedHeatRate1D_W: insulated, discretizationError: cooledEdges ? oneD.study.gci : 0 };
+  return {
+    cooledEdges,
+    edgeHeatRate_W: ref1d.heatRate - insulated,
+    insulatedHeatRate1D_W: insulated,
+    discretizationError: cooledEdges ? oneD.study.gci : 0,
+  };
 }
 
 /** Whether the fin is straight (has side edges): not a pin, conical pin, annular fin or tabulated pin. */

@@ -5,7 +5,7 @@
  *   lineChart   temperature profiles, heat flow / loss panels (series, legend notes, point annotations)
  *   fieldChart  2-D field on a structured boundary-fitted grid: true outline, colour bar, labelled iso-lines
  *   mapChart    scalar over a regular (linear/log) parameter grid, diverging colours, labelled contour levels
- *   svgToPng    rasterise with the bundled DejaVu Sans; chartBytes for a .png or .svg file
+ *   svgToPng    rasterise with the bundled DejaVu Sans; chartBytes for "--out FILE.png|FILE.svg"
  */
 
 export { lineChart } from './line-chart.js';
@@ -37,12 +37,15 @@ export type { LineStyle } from './series-styles.js';
 export type { MarkerShape } from './markers.js';
 export type { Rect } from './layout.js';
 export { defaultWidth, defaultHeight } from './theme.js';
-export { prettyUnit } from './unit-text.js';
-export { markerElement } from './markers.js';
-export { textEl, el, fmt, polylinePathData, svgDocument } from './svg.js';
-export { fontSize, ink, gap } from './theme.js';
-export { drawHeader } from './layout.js';
-export { textWidth, truncateToWidth } from './text-metrics.js';
+// Building blocks for the charts that other layers draw themselves (plots, map).
 export { drawAxes, xAxisMargin, yAxisMargin } from './axes.js';
 export { fieldImage } from './field-layer.js';
-export { defaultSeriesStyle } from './series-styles.js';
+export { drawHeader } from './layout.js';
+export { drawLegend, legendSize } from './legend.js';
+export { markerElement } from './markers.js';
+export { dashArray, defaultSeriesStyle, okabeItoColours } from './series-styles.js';
+export { el, fmt, polylinePathData, svgDocument, textEl } from './svg.js';
+export { textWidth, truncateToWidth } from './text-metrics.js';
+export { fontSize, gap, ink } from './theme.js';
+export type { LegendEntry } from './legend.js';
+export { prettyUnit } from './unit-text.js';

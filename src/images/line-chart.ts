@@ -9,7 +9,7 @@
  * Okabe-Ito colour, a dash pattern and a marker shape each (see series-styles.ts).
  */
 
-import { el, fmt, polylinePathData, svgDocument, textEl } from './svg.js';
+import { el, polylinePathData, svgDocument, textEl } from './svg.js';
 import { defaultHeight, defaultWidth, fontSize, gap, ink, stroke } from './theme.js';
 import { extent, makeAxis, project, type Axis, type Scale, type ScaleKind } from './scales.js';
 import { drawAxes, drawGrid, xAxisMargin, yAxisMargin } from './axes.js';

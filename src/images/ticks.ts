@@ -96,8 +96,8 @@ function heckbertTicks(min: number, max: number, targetCount: number, mode: Tick
 /** Log ticks over [min, max], both > 0. */
 export function logTicks(min: number, max: number, mode: TickMode = 'loose'): LogTicks {
   if (!(min > 0) || !(max > 0)) throw new RangeError(`ticks: a log axis needs positive limits, got [${min}, ${max}]`);
-  let [lo, hi] = widenRange(min, max);
-  if (lo <= 0) lo = min * 0.95;
+  const [low, hi] = widenRange(min, max);
+  const lo = low <= 0 ? min * 0.95 : low;
   const eps = 1e-9;
   const firstDecade = Math.floor(Math.log10(lo) + eps);
   const lastDecade = Math.ceil(Math.log10(hi) - eps);

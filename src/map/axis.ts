@@ -20,8 +20,8 @@ import {
   type Case,
   type KeyPath,
   type QuantityKind,
+  rangeText,
 } from '../case/index.js';
-import { rangeText } from '../case/index.js';
 import { UsageError } from '../errors.js';
 import { axisKeyInfo, mappableKeyExamples, type AxisKeyInfo } from './axis-keys.js';
 import { axisValues } from './spacing.js';

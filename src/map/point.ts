@@ -4,7 +4,7 @@
  * invalid, or where the solver fails, gives its message instead of results; every other error is a bug and is
  * thrown. The same function runs in-process (one job) and in each worker, so both give the same numbers.
  */
-import { parseCaseObject, readDocument, type Case, type Locate, type ParseOptions } from '../case/index.js';
+import { parseCaseObject, readDocument, type Locate, type ParseOptions } from '../case/index.js';
 import { basename, extname } from 'node:path';
 import { runCheck, type CheckReport } from '../compare/index.js';
 import { InputError, SolverError, UsageError } from '../errors.js';
@@ -52,7 +52,13 @@ export function pointFromReport(index: number, x: number, y: number, report: Che
     y,
     biot,
     mL,
-    reference: { model: ref.model, heatRate_W: ref.heatRate_W, efficiency: ref.efficiency, discretizationError: ref.discretizationError, resolved: ref.resolved },
+    reference: {
+      model: ref.model,
+      heatRate_W: ref.heatRate_W,
+      efficiency: ref.efficiency,
+      discretizationError: ref.discretizationError,
+      resolved: ref.resolved,
+    },
     models,
   };
 }

@@ -46,7 +46,16 @@ function groupKey(message: string): string {
 }
 
 export function summariseMap(points: readonly MapPoint[], models: readonly MapModelId[]): MapSummary {
-  const counts: ModelCounts[] = models.map((model) => ({ model, ok: 0, marginal: 0, unsafe: 0, unresolved: 0, missing: 0, minDrift: Infinity, maxDrift: -Infinity }));
+  const counts: ModelCounts[] = models.map((model) => ({
+    model,
+    ok: 0,
+    marginal: 0,
+    unsafe: 0,
+    unresolved: 0,
+    missing: 0,
+    minDrift: Infinity,
+    maxDrift: -Infinity,
+  }));
   const groups = new Map<string, ErrorGroup>();
   let errors = 0;
   const references = new Map<string, { points: number; unresolved: number }>();

@@ -147,7 +147,7 @@ function segmentIndex(xs: Float64Array, x: number): number {
   let hi = xs.length - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
-    if ((xs[mid] as number) <= x) lo = mid;
+    if (xs[mid] <= x) lo = mid;
     else hi = mid;
   }
   return lo;
@@ -162,13 +162,13 @@ export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinG
     throw new InputError([{ path: 'fin.width', value: 'missing', accepted: 'a width > 0 for a tabulated straight fin' }]);
   }
   const section = sectionOf(profile.shape, profile.width ?? 0, edges);
-  const L = xs[last] as number;
+  const L = xs[last];
   const size = (x: number): number => {
     const j = segmentIndex(xs, x);
-    const x0 = xs[j] as number;
-    const x1 = xs[j + 1] as number;
-    const s0 = sizes[j] as number;
-    const s1 = sizes[j + 1] as number;
+    const x0 = xs[j];
+    const x1 = xs[j + 1];
+    const s0 = sizes[j];
+    const s1 = sizes[j + 1];
     const f = Math.min(1, Math.max(0, (x - x0) / (x1 - x0)));
     return s0 + (s1 - s0) * f;
   };
@@ -179,20 +179,20 @@ export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinG
     let sum = 0;
     let left = a;
     for (let j = segmentIndex(xs, a); j < last && left < b; j++) {
-      const right = Math.min(b, xs[j + 1] as number);
+      const right = Math.min(b, xs[j + 1]);
       if (right > left) sum += gauss3(left, right, (x) => g(x) * perimeter(x));
       left = right;
     }
     return sum;
   };
-  const tipSize = sizes[last] as number;
+  const tipSize = sizes[last];
   return {
     shape: profile.shape,
     length: L,
     area: (x) => section.area(size(x)),
     perimeter,
     size,
-    baseArea: section.area(sizes[0] as number),
+    baseArea: section.area(sizes[0]),
     tipArea: section.area(tipSize),
     faceArea: perimeterIntegral(0, L, 1, 1),
     breakpoints: Float64Array.from(xs),

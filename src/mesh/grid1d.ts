@@ -71,14 +71,14 @@ export function mergeBreakpoints(length: number, minSpacing: number, ...lists: A
   const inside: number[] = [];
   for (const list of lists) {
     for (let i = 0; i < list.length; i++) {
-      const x = list[i] as number;
+      const x = list[i];
       if (x > 0 && x < length) inside.push(x);
     }
   }
   inside.sort((a, b) => a - b);
   const merged: number[] = [0];
   for (const x of inside) {
-    if (x - (merged[merged.length - 1] as number) >= minSpacing && length - x >= minSpacing) merged.push(x);
+    if (x - merged[merged.length - 1] >= minSpacing && length - x >= minSpacing) merged.push(x);
   }
   merged.push(length);
   return Float64Array.from(merged);
@@ -87,12 +87,12 @@ export function mergeBreakpoints(length: number, minSpacing: number, ...lists: A
 /** Cells per segment: proportional to length (largest remainder), at least one each. */
 export function allocateCells(breakpoints: Float64Array, cells: number): Int32Array {
   const segments = breakpoints.length - 1;
-  const length = (breakpoints[segments] as number) - (breakpoints[0] as number);
+  const length = breakpoints[segments] - breakpoints[0];
   const counts = new Int32Array(segments);
   const remainders: { index: number; rest: number }[] = [];
   let used = 0;
   for (let s = 0; s < segments; s++) {
-    const share = (cells * ((breakpoints[s + 1] as number) - (breakpoints[s] as number))) / length;
+    const share = (cells * (breakpoints[s + 1] - breakpoints[s])) / length;
     const whole = Math.max(1, Math.floor(share));
     counts[s] = whole;
     used += whole;
@@ -101,7 +101,7 @@ export function allocateCells(breakpoints: Float64Array, cells: number): Int32Ar
   remainders.sort((a, b) => b.rest - a.rest);
   for (let r = 0; used < cells && r < remainders.length; r++, used++) {
     const index = (remainders[r] as { index: number }).index;
-    counts[index] = (counts[index] as number) + 1;
+    counts[index] = counts[index] + 1;
   }
   return counts;
 }
@@ -116,16 +116,16 @@ export function gridNodes(geometry: FinGeometry1D, spec: Grid1DSpec): { x: Float
   const counts = allocateCells(breakpoints, cells);
   const segments = counts.length;
   let total = 0;
-  for (let s = 0; s < segments; s++) total += (counts[s] as number) * refine;
+  for (let s = 0; s < segments; s++) total += counts[s] * refine;
   const x = new Float64Array(total + 1);
   const grading = spec.grading ?? { kind: 'uniform' };
   const towardBase = grading.kind !== 'uniform' && grading.toward !== 'tip';
   const towardTip = grading.kind !== 'uniform' && grading.toward !== 'base';
   let node = 0;
   for (let s = 0; s < segments; s++) {
-    const a = breakpoints[s] as number;
-    const b = breakpoints[s + 1] as number;
-    const n = (counts[s] as number) * refine;
+    const a = breakpoints[s];
+    const b = breakpoints[s + 1];
+    const n = counts[s] * refine;
     const g = gradingMap(grading, towardBase && s === 0, towardTip && s === segments - 1);
     for (let j = 0; j < n; j++) x[node++] = a + (b - a) * g(j / n);
   }
@@ -162,26 +162,26 @@ function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D 
   const weightSelf = new Float64Array(n);
   const weightNext = new Float64Array(n);
   const P = geometry.perimeter;
-  let pLeft = P(x[0] as number);
+  let pLeft = P(x[0]);
   for (let i = 0; i < n - 1; i++) {
-    const xi = x[i] as number;
-    const delta = (x[i + 1] as number) - xi;
+    const xi = x[i];
+    const delta = x[i + 1] - xi;
     dx[i] = delta;
     const centre = xi + 0.5 * delta;
     interfaceArea[i] = geometry.area(centre);
     const pQuarter = P(xi + 0.25 * delta);
     const pCentre = P(centre);
     const pThreeQuarter = P(xi + 0.75 * delta);
-    const pRight = P(x[i + 1] as number);
+    const pRight = P(x[i + 1]);
     const w = delta / 12;
-    weightSelf[i] = (weightSelf[i] as number) + w * (pLeft + 3 * pQuarter + 0.5 * pCentre);
+    weightSelf[i] = weightSelf[i] + w * (pLeft + 3 * pQuarter + 0.5 * pCentre);
     weightNext[i] = w * (pQuarter + 0.5 * pCentre);
     weightPrev[i + 1] = w * (0.5 * pCentre + pThreeQuarter);
     weightSelf[i + 1] = w * (0.5 * pCentre + 3 * pThreeQuarter + pRight);
     pLeft = pRight;
   }
   const cvSurface = new Float64Array(n);
-  for (let i = 0; i < n; i++) cvSurface[i] = (weightPrev[i] as number) + (weightSelf[i] as number) + (weightNext[i] as number);
+  for (let i = 0; i < n; i++) cvSurface[i] = weightPrev[i] + weightSelf[i] + weightNext[i];
   return {
     nodes: n,
     x,

@@ -85,12 +85,12 @@ export function sectionOf(profile: Profile): Section2D {
     case 'tabulated': {
       const { x, size } = profile;
       const n = x.length;
-      const L = x[n - 1] as number;
+      const L = x[n - 1];
       const halfSize = (s: number): number => interpolate(x, size, s) / 2;
       const breakpoints = Array.from(x);
-      const sharpTip = (size[n - 1] as number) === 0;
+      const sharpTip = size[n - 1] === 0;
       for (let k = 0; k < n - 1; k++) {
-        if (!((size[k] as number) > 0)) throw new RangeError(`sectionOf: tabulated size must be > 0 before the tip (point ${k})`);
+        if (!(size[k] > 0)) throw new RangeError(`sectionOf: tabulated size must be > 0 before the tip (point ${k})`);
       }
       if (profile.shape === 'pin') return { kind: 'pin', length: L, baseX: 0, halfSize, breakpoints, sharpTip, tipClustering: 1, depth: twoPi };
       if (profile.width === undefined) throw new RangeError('sectionOf: a tabulated straight fin needs a width');
@@ -110,18 +110,18 @@ function straight(length: number, halfSize: (s: number) => number, width: number
 /** Piecewise-linear interpolation in a strictly increasing table (clamped at the ends). */
 function interpolate(xs: Float64Array, ys: Float64Array, s: number): number {
   const n = xs.length;
-  if (s <= (xs[0] as number)) return ys[0] as number;
-  if (s >= (xs[n - 1] as number)) return ys[n - 1] as number;
+  if (s <= xs[0]) return ys[0];
+  if (s >= xs[n - 1]) return ys[n - 1];
   let lo = 0;
   let hi = n - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
-    if ((xs[mid] as number) <= s) lo = mid;
+    if (xs[mid] <= s) lo = mid;
     else hi = mid;
   }
-  const x0 = xs[lo] as number;
-  const x1 = xs[hi] as number;
-  const y0 = ys[lo] as number;
-  const y1 = ys[hi] as number;
+  const x0 = xs[lo];
+  const x1 = xs[hi];
+  const y0 = ys[lo];
+  const y1 = ys[hi];
   return y0 + ((y1 - y0) * (s - x0)) / (x1 - x0);
 }

@@ -59,11 +59,11 @@ export function buildGrid2D(section: Section2D, opts: GridOptions): Grid2D {
   const x = new Float64Array(nx * ny);
   const y = new Float64Array(nx * ny);
   for (let i = 0; i < nx; i++) {
-    const s = along[i] as number;
+    const s = along[i];
     const half = i === nx - 1 && section.sharpTip ? 0 : section.halfSize(s);
     for (let j = 0; j < ny; j++) {
       x[i * ny + j] = section.baseX + s;
-      y[i * ny + j] = (eta[j] as number) * half;
+      y[i * ny + j] = eta[j] * half;
     }
   }
   return {
@@ -130,13 +130,13 @@ function alongPositions(section: Section2D, nx: number, baseGrading: number): Fl
   const out = new Float64Array(nx);
   let node = 0;
   for (let k = 0; k < segments; k++) {
-    const s0 = bp[k] as number;
-    const s1 = bp[k + 1] as number;
-    const n = counts[k] as number;
+    const s0 = bp[k];
+    const s1 = bp[k + 1];
+    const n = counts[k];
     const grading = k === 0 ? baseGrading : 1;
     const t = stretched(n + 1, grading, 'start');
     for (let c = 0; c < n; c++) {
-      let u = t[c] as number;
+      let u = t[c];
       if (section.tipClustering !== 1 && k === segments - 1) u = 1 - (1 - u) ** section.tipClustering;
       out[node++] = s0 + (s1 - s0) * u;
     }
@@ -149,19 +149,19 @@ function shareCells(bp: number[], cells: number, L: number): Int32Array {
   const segments = bp.length - 1;
   const counts = new Int32Array(segments).fill(1);
   let left = cells - segments;
-  const ideal = bp.slice(1).map((b, k) => ((b - (bp[k] as number)) / L) * cells);
+  const ideal = bp.slice(1).map((b, k) => ((b - bp[k]) / L) * cells);
   while (left > 0) {
     // Give the next cell to the segment furthest below its share.
     let best = 0;
     let bestGap = -Infinity;
     for (let k = 0; k < segments; k++) {
-      const gap = (ideal[k] as number) - (counts[k] as number);
+      const gap = ideal[k] - counts[k];
       if (gap > bestGap) {
         bestGap = gap;
         best = k;
       }
     }
-    counts[best] = (counts[best] as number) + 1;
+    counts[best] = counts[best] + 1;
     left--;
   }
   return counts;
@@ -191,10 +191,10 @@ function chooseDiagonals(x: Float64Array, y: Float64Array, nx: number, ny: numbe
   const out = new Uint8Array((nx - 1) * (ny - 1));
   const angle = (p: number, q: number, r: number): number => {
     // Angle at p between p->q and p->r; NaN when degenerate.
-    const ux = (x[q] as number) - (x[p] as number);
-    const uy = (y[q] as number) - (y[p] as number);
-    const vx = (x[r] as number) - (x[p] as number);
-    const vy = (y[r] as number) - (y[p] as number);
+    const ux = x[q] - x[p];
+    const uy = y[q] - y[p];
+    const vx = x[r] - x[p];
+    const vy = y[r] - y[p];
     return Math.atan2(Math.abs(ux * vy - uy * vx), ux * vx + uy * vy);
   };
   for (let i = 0; i + 1 < nx; i++) {

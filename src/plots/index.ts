@@ -1,8 +1,8 @@
-/** Public entry of src/plots: what the other layers import. */
-export { relativeError, sig, signedPercent, alongAxisLabel, referenceWords } from './labels.js';
-export type { CheckPlotInput, ChartSize } from './profile-chart.js';
-export { checkPlotInput, fieldStudy, heatmapAvailability, PLOT_KINDS } from './sources.js';
-export type { PlotKind } from './sources.js';
-export { REMAINING_FRACTION } from './flux-chart.js';
+/** The plots layer's public API: what the other layers import. */
 export { plotSvg } from './draw.js';
+export { REMAINING_FRACTION } from './flux-chart.js';
+export { alongAxisLabel, referenceWords, relativeError, sig, signedPercent } from './labels.js';
+export { PLOT_KINDS, checkPlotInput, fieldStudy, heatmapAvailability } from './sources.js';
 export type { PlotSources } from './draw.js';
+export type { ChartSize, CheckPlotInput } from './profile-chart.js';
+export type { PlotKind } from './sources.js';

@@ -1,6 +1,5 @@
-/** Public entry of src/report: what the other layers import. */
+/** The report layer's public API: what the other layers import. */
+export { REPORT_FILES, makeReport } from './make-report.js';
 export { reportDate } from './report-date.js';
-export { writeFilesAtomically } from './write-files.js';
+export { asUsageError, writeFilesAtomically } from './write-files.js';
 export type { OutputFile } from './write-files.js';
-export { makeReport, REPORT_FILES } from './make-report.js';
-export { asUsageError } from './write-files.js';

@@ -24,7 +24,7 @@ function inputFor(ratio: number, mLc: number): AnnularFinInput {
 }
 
 // Annular fin of constant thickness, adiabatic at r2c: computed reference values (mpmath, script
-// profiles.py; scipy solve_bvp agrees to 1e-15), closed form of Gardner 1945 / Incropera Table 3.5
+// profiles.py; scipy solve_bvp agrees to 1e-15), closed form of Gardner 1945 / Incropera et al. 2007, Table 3.5
 // [from memory], Shabany 2009 eq. 7.53. Columns m(r2c - r1) = 0.25, 0.5, 1, 2, 3. Tolerance `tenDigits`.
 // Schmidt (1949) approximation [from memory]: the same script prints it to 6 significant digits, so
 // its tolerance is half a unit of the 6th digit, 5e-7 absolute (all values lie in [0.1, 1)).

@@ -3,7 +3,7 @@ import { finArray } from '../../src/analytic/array.js';
 import { correctedLengthFin } from '../../src/analytic/corrected-length.js';
 import { expectRelClose, tenDigits } from './close.js';
 
-// Overall surface efficiency (Incropera et al., Fundamentals of Heat and Mass Transfer, sec. 3.6,
+// Overall surface efficiency (Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer (6th ed.), sec. 3.6,
 // from memory). Array example: 20 fins of case R1 (corrected-length form) on a 0.05 m x 0.10 m base,
 // h = 40, thetaBase = 60 K; computed reference values (script make_tables2.py). Tolerance `tenDigits`.
 describe('array of 20 R1 fins', () => {

@@ -77,7 +77,7 @@ describe.each(powerLawTable)('power-law h, adiabatic tip: n = %d, mL = %d', (n, 
 });
 
 describe('power-law h: limits', () => {
-  // n = 0 is the linear fin: u_t = 1/cosh(mL), Q = tanh(mL) (Table 3.4 of Incropera et al., from memory).
+  // n = 0 is the linear fin: u_t = 1/cosh(mL), Q = tanh(mL) (Incropera et al. 2007, Table 3.4, from memory).
   // Quadrature and root finding to ~1e-13.
   it.each([0.3, 1, 3, 10])('n = 0 reproduces the linear fin at mL = %d', (mL) => {
     const r = powerLawHAdiabatic(0, mL);

@@ -26,7 +26,7 @@ function inputFor(mL: number): SpineInput {
 
 const mLs = [0.25, 0.5, 1, 1.5, 2, 3];
 // Efficiency table 2a (spines, m^2 = 4h/(k D_b)): computed reference values (mpmath, script profiles.py,
-// each checked by finite volumes + Richardson), closed forms of Incropera et al. Table 3.5 (cylinder,
+// each checked by finite volumes + Richardson), closed forms of Incropera et al. 2007, Table 3.5 (cylinder,
 // cone, concave parabolic) and Kraus, Aziz & Welty 2001 (convex parabolic) [from memory].
 // Tolerance `tenDigits`: 10 significant digits printed.
 // The last entry is the area factor (2 pi int r dx)/(pi D_b L) of the convention.

@@ -4,7 +4,7 @@ import { expectRelClose, tenDigits } from './close.js';
 
 // Check cases R1, R2, P1, P2 (invented inputs) with computed reference values (mpmath, checked with
 // scipy solve_bvp; scripts uniform_fin.py / make_tables2.py), closed forms of Incropera, DeWitt, Bergman &
-// Lavine, Fundamentals of Heat and Mass Transfer, Table 3.4 (table number from memory); efficiency after
+// Lavine 2007, Fundamentals of Heat and Mass Transfer, Table 3.4 (table number from memory); efficiency after
 // Harper & Brown 1922 and effectiveness after Gardner 1945 (from memory).
 // Tolerance `tenDigits` (1e-9 relative): the values are printed to 10 significant digits.
 const D = 0.005;

@@ -53,7 +53,13 @@ describe('plausibility bounds: exit 2 naming the key, the value and the accepted
     expect(err.issues).toHaveLength(1);
     const issue = err.issues[0];
     expect(issue?.path).toBe(path);
-    expect(issue?.value).toBe(replacement.split(': ').slice(1).join(': ').replace(/^\{ k: (.*) \}$/, '$1'));
+    expect(issue?.value).toBe(
+      replacement
+        .split(': ')
+        .slice(1)
+        .join(': ')
+        .replace(/^\{ k: (.*) \}$/, '$1'),
+    );
     expect(issue?.accepted).toMatch(range);
   });
 
@@ -69,7 +75,9 @@ describe('plausibility bounds: exit 2 naming the key, the value and the accepted
   });
 
   it('the bounds do not refuse real fins: a 20 um micro fin and a 2 m radiator fin in boiling water', () => {
-    expect(() => parseCaseText(valid.replace('  thickness: 2 mm', '  thickness: 20 um').replace('  length: 40 mm', '  length: 200 um'), 'micro.yaml')).not.toThrow();
+    expect(() =>
+      parseCaseText(valid.replace('  thickness: 2 mm', '  thickness: 20 um').replace('  length: 40 mm', '  length: 200 um'), 'micro.yaml'),
+    ).not.toThrow();
     const radiator = parseCaseText(valid.replace('  length: 40 mm', '  length: 2 m').replace('  h: 40 W/(m^2*K)', '  h: 5e4'), 'big.yaml');
     expect(radiator.fin.profile).toMatchObject({ length: 2 });
   });
@@ -101,6 +109,7 @@ describe('hostile documents', () => {
 
   it('control characters in an echoed value are escaped, not passed to the terminal', () => {
     const err = failure(valid.replace('  thickness: 2 mm', '  thickness: "2 \\e[31mmm\\a"'));
+    // eslint-disable-next-line no-control-regex -- the control characters are what the test looks for
     expect(err.message).not.toMatch(/[\u0000-\u0008\u000b-\u001f\u007f]/);
     expect(err.message).toContain('\\u001b');
   });
@@ -186,7 +195,10 @@ base: { temperature: 80 }
   });
 
   it('units: { length: mm } reads bare lengths in mm (and leaves lengths with a unit as they are)', () => {
-    const c = parseCaseText(`units: { length: mm }\nfin: { profile: pin, length: 40, diameter: 0.003 m }\nmaterial: copper-pure\nconvection: { ambient: 25, h: 20 }\nbase: { temperature: 80 }\n`, 'mm.yaml');
+    const c = parseCaseText(
+      `units: { length: mm }\nfin: { profile: pin, length: 40, diameter: 0.003 m }\nmaterial: copper-pure\nconvection: { ambient: 25, h: 20 }\nbase: { temperature: 80 }\n`,
+      'mm.yaml',
+    );
     expect(c.fin.profile).toEqual({ kind: 'pin', length: 0.04, diameter: 0.003 });
     expect(c.warnings).toEqual([]);
   });

@@ -38,7 +38,7 @@ describe('built-in materials', () => {
     ['brass', 110],
     ['stainless-316', 13.4],
     ['ceramic-alumina', 36.0],
-  ])('%s has the Incropera Table A.1/A.2 value %f W/(m*K)', (name, k) => {
+  ])('%s has the Incropera et al. 2007, Table A.1/A.2 value %f W/(m*K)', (name, k) => {
     expect(findMaterial(name)).toEqual({
       name,
       k: { kind: 'constant', k },

@@ -76,7 +76,7 @@ describe('fincheck check --json', () => {
 
 describe('fincheck check, prescribed tip temperature', () => {
   it('R1 with the tip held at 35 degC (theta_L = 15 K): closed form 29.76665185 W, fd-1d within 1e-6', async () => {
-    // Incropera et al., Table 3.4 case C (from memory for the table number); value computed with mpmath.
+    // Incropera et al. 2007, Table 3.4 case C (from memory for the table number); value computed with mpmath.
     const tipC = caseFile('r1-tip.yaml', (await import('node:fs')).readFileSync(R1, 'utf8').replace('tip: convective', 'tip: { temperature: 35 degC }'));
     const j = JSON.parse((await cli('check', tipC, '--json', '--reference', '1d')).stdout);
     const cf = j.models.find((m: { model: string }) => m.model === 'closed-form');
@@ -89,8 +89,8 @@ describe('fincheck check with the 2-D reference', () => {
   // Plate fin with Bi = h b / k = 0.1 and mL = 1 (b = t/2 = 1 mm, L = b / sqrt(Bi)), insulated edges, convective
   // tip with the face h. Exact 2-D eigen-series (separation of variables for the rectangular fin, cf. Lau &
   // Tan 1973, J. Heat Transfer 95, 549; from memory): eta_2D = 0.648851377 on the area 2L + 2b; exact 1-D
-  // convective tip eta = 0.659934986 (Incropera et al., Table 3.4 case A; from memory); values computed with
-  // mpmath in the shared reference scripts (fin2d_series.py).
+  // convective tip eta = 0.659934986 (Incropera et al. 2007, Table 3.4 case A; from memory); values computed with
+  // mpmath in tests/reference/fin2d_series.py.
   const L = 0.001 / Math.sqrt(0.1);
   const plate = caseFile(
     'plate-bi01.yaml',
@@ -161,7 +161,7 @@ describe('fincheck solve', () => {
     expect(j.baseTemperature_degC).toBeCloseTo(80, 12);
     // Second-order scheme at 100 cells, mL = 0.456: error ~ (mL)^2/(12 N^2) ~ 2e-6 relative.
     expect(Math.abs(j.heatRate_W / 7.203722261 - 1)).toBeLessThan(1e-5);
-    // Tip temperature: theta(L) = 53.92214373 K (closed form, Incropera Table 3.4 case A) + 20 degC.
+    // Tip temperature: theta(L) = 53.92214373 K (closed form, Incropera et al. 2007, Table 3.4 case A) + 20 degC.
     expect(j.tipTemperature_degC).toBeCloseTo(73.92214373, 4);
   });
   it('by default runs a refinement study and reports the GCI', async () => {

@@ -41,7 +41,13 @@ describe('- reads the case from standard input', () => {
   });
 
   it('solve - and plot - read it too; JSON text on stdin is read as JSON', async () => {
-    const json = JSON.stringify({ name: 'json plate', fin: { profile: 'rectangular', length: '30 mm', thickness: '2 mm', width: '50 mm' }, material: { k: 180 }, convection: { ambient: 20, h: 40 }, base: { temperature: 80 } });
+    const json = JSON.stringify({
+      name: 'json plate',
+      fin: { profile: 'rectangular', length: '30 mm', thickness: '2 mm', width: '50 mm' },
+      material: { k: 180 },
+      convection: { ambient: 20, h: 40 },
+      base: { temperature: 80 },
+    });
     const solve = await cliWithStdin(json, 'solve', '-', '--nodes', '50', '--json');
     expect(solve.code).toBe(0);
     expect(JSON.parse(solve.stdout).case).toBe('json plate');
@@ -59,7 +65,24 @@ describe('- reads the case from standard input', () => {
 
   it('map - reads it as well', async () => {
     const out = join(tmp, 'stdin-map');
-    const r = await cliWithStdin(plateText, 'map', '-', '--x', 'fin.length=20mm:40mm', '--y', 'convection.h=20:60', '--steps', '2', '--reference', '1d', '--format', 'svg', '--out', out, '--json');
+    const r = await cliWithStdin(
+      plateText,
+      'map',
+      '-',
+      '--x',
+      'fin.length=20mm:40mm',
+      '--y',
+      'convection.h=20:60',
+      '--steps',
+      '2',
+      '--reference',
+      '1d',
+      '--format',
+      'svg',
+      '--out',
+      out,
+      '--json',
+    );
     expect(r.code).toBe(0);
     const j = JSON.parse(r.stdout);
     // --steps 2 is the N x N shorthand: 2 values on each axis.
@@ -88,7 +111,14 @@ describe('warnings: a bare length read in metres', () => {
   it('solve --json lists them too; units: { length: mm } makes the same file a 40 mm pin without warning', async () => {
     const r = await cliWithStdin(barePinText, 'solve', '-', '--nodes', '50', '--json');
     expect(JSON.parse(r.stdout).warnings[0].path).toBe('fin.length');
-    const mm = await cliWithStdin(`units: { length: mm }\n${barePinText.replace('diameter: 3 mm', 'diameter: 3')}`, 'solve', '-', '--nodes', '50', '--json');
+    const mm = await cliWithStdin(
+      `units: { length: mm }\n${barePinText.replace('diameter: 3 mm', 'diameter: 3')}`,
+      'solve',
+      '-',
+      '--nodes',
+      '50',
+      '--json',
+    );
     expect(mm.code).toBe(0);
     expect(mm.stderr).toBe('');
     const j = JSON.parse(mm.stdout);
@@ -98,7 +128,23 @@ describe('warnings: a bare length read in metres', () => {
 
   it('map: a bare length axis swept to 300 (metres) is warned in the JSON and on stderr', async () => {
     const out = join(tmp, 'bare-map');
-    const r = await cli('map', plate, '--x', 'fin.length=20:300', '--y', 'convection.h=20:60', '--steps', '2', '--reference', '1d', '--format', 'svg', '--out', out, '--json');
+    const r = await cli(
+      'map',
+      plate,
+      '--x',
+      'fin.length=20:300',
+      '--y',
+      'convection.h=20:60',
+      '--steps',
+      '2',
+      '--reference',
+      '1d',
+      '--format',
+      'svg',
+      '--out',
+      out,
+      '--json',
+    );
     expect(r.code).toBe(0);
     expect(r.stderr).toContain('fincheck: warning: --x fin.length: 300 is 300 m');
     expect(JSON.parse(r.stdout).warnings[0].message).toContain('did you mean 300 mm?');
@@ -106,18 +152,16 @@ describe('warnings: a bare length read in metres', () => {
 });
 
 describe('error lines', () => {
-  it.each([
-    [['check', '--bogus', 'x.yaml']],
-    [['bogus-command']],
-    [['check']],
-    [['check', join(tmp, 'missing.yaml')]],
-  ])('%j: exit 2, every stderr line starts with "fincheck:"', async (argv) => {
-    const r = await cli(...argv);
-    expect(r.code).toBe(2);
-    const lines = r.stderr.trimEnd().split('\n');
-    expect(lines.length).toBeGreaterThan(0);
-    for (const line of lines) expect(line).toMatch(/^fincheck: /);
-  });
+  it.each([[['check', '--bogus', 'x.yaml']], [['bogus-command']], [['check']], [['check', join(tmp, 'missing.yaml')]]])(
+    '%j: exit 2, every stderr line starts with "fincheck:"',
+    async (argv) => {
+      const r = await cli(...argv);
+      expect(r.code).toBe(2);
+      const lines = r.stderr.trimEnd().split('\n');
+      expect(lines.length).toBeGreaterThan(0);
+      for (const line of lines) expect(line).toMatch(/^fincheck: /);
+    },
+  );
 
   it('a case with thousands of problems prints a bounded message', async () => {
     const points = Array.from({ length: 900 }, (_, i) => `[${i} mm, -1]`).join(', ');
@@ -131,7 +175,16 @@ describe('error lines', () => {
   });
 
   it('the alias bomb and a width of 1e308 are exit 2 (they were internal errors, exit 70)', async () => {
-    const bomb = caseFile('bomb.yaml', ['a: &a [1,1,1,1,1,1,1,1,1]', 'b: &b [*a,*a,*a,*a,*a,*a,*a,*a,*a]', 'c: &c [*b,*b,*b,*b,*b,*b,*b,*b,*b]', 'd: &d [*c,*c,*c,*c,*c,*c,*c,*c,*c]', 'fin: *d'].join('\n'));
+    const bomb = caseFile(
+      'bomb.yaml',
+      [
+        'a: &a [1,1,1,1,1,1,1,1,1]',
+        'b: &b [*a,*a,*a,*a,*a,*a,*a,*a,*a]',
+        'c: &c [*b,*b,*b,*b,*b,*b,*b,*b,*b]',
+        'd: &d [*c,*c,*c,*c,*c,*c,*c,*c,*c]',
+        'fin: *d',
+      ].join('\n'),
+    );
     expect((await cli('check', bomb)).code).toBe(2);
     const wide = await cli('check', caseFile('wide.yaml', plateText.replace('width: 50 mm', 'width: 1e308')));
     expect(wide.code).toBe(2);
@@ -141,7 +194,11 @@ describe('error lines', () => {
   });
 
   it('absurd magnitudes that used to exit 0 with NaN are refused: h 1e308, base 1e308, thickness 1e-300', async () => {
-    for (const [from, to] of [['h: 40', 'h: 1e308'], ['temperature: 80 degC', 'temperature: 1e308'], ['thickness: 2 mm', 'thickness: 1e-300']] as const) {
+    for (const [from, to] of [
+      ['h: 40', 'h: 1e308'],
+      ['temperature: 80 degC', 'temperature: 1e308'],
+      ['thickness: 2 mm', 'thickness: 1e-300'],
+    ] as const) {
       const r = await cli('check', caseFile('absurd.yaml', plateText.replace(from, to)), '--json');
       expect(r.code, to).toBe(2);
       expect(r.stdout).toBe('');
@@ -159,6 +216,7 @@ describe('error lines', () => {
     const r = await cliWithStdin(plateText.replace('name: stdin plate', 'name: "bell\\a \\e[2J clear"'), 'solve', '-', '--nodes', '20');
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('fincheck solve: bell [2J clear');
+    // eslint-disable-next-line no-control-regex -- the control characters are what the test looks for
     expect(r.stdout).not.toMatch(/[\u0007\u001b]/);
   });
 });
@@ -180,7 +238,22 @@ describe('help and map options', () => {
 
   it('map --out where a folder cannot be made is exit 2 with the reason', async () => {
     const file = caseFile('not-a-folder', 'x');
-    const r = await cli('map', plate, '--x', 'fin.length=20mm:40mm', '--y', 'convection.h=20:60', '--steps', '2', '--reference', '1d', '--format', 'svg', '--out', file);
+    const r = await cli(
+      'map',
+      plate,
+      '--x',
+      'fin.length=20mm:40mm',
+      '--y',
+      'convection.h=20:60',
+      '--steps',
+      '2',
+      '--reference',
+      '1d',
+      '--format',
+      'svg',
+      '--out',
+      file,
+    );
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/^fincheck: cannot write the output: E(EXIST|NOTDIR)/);
   });
@@ -188,7 +261,20 @@ describe('help and map options', () => {
   it.skipIf(process.getuid?.() === 0)('map --out into a read-only folder is exit 2 (EACCES)', async () => {
     const locked = mkdtempSync(join(tmpdir(), 'fincheck-locked-'));
     chmodSync(locked, 0o500);
-    const r = await cli('map', plate, '--x', 'fin.length=20mm:40mm', '--y', 'convection.h=20:60', '--steps', '2', '--reference', '1d', '--out', join(locked, 'map'));
+    const r = await cli(
+      'map',
+      plate,
+      '--x',
+      'fin.length=20mm:40mm',
+      '--y',
+      'convection.h=20:60',
+      '--steps',
+      '2',
+      '--reference',
+      '1d',
+      '--out',
+      join(locked, 'map'),
+    );
     expect(r.code).toBe(2);
     expect(r.stderr).toContain('EACCES');
   });
@@ -197,7 +283,7 @@ describe('help and map options', () => {
 describe('material sources in design-note outputs', () => {
   it('check shows the table or "typical; confirm with the supplier\'s data sheet", never "from memory"', async () => {
     const alloy = await cliWithStdin(plateText.replace('material: { k: 180 }', 'material: aluminium-6063'), 'check', '-', '--reference', '1d');
-    expect(alloy.stdout).toContain("aluminium-6063, k = 209 W/(m*K) (typical of aluminium 6063-T5");
+    expect(alloy.stdout).toContain('aluminium-6063, k = 209 W/(m*K) (typical of aluminium 6063-T5');
     expect(alloy.stdout).toContain("confirm with the supplier's data sheet");
     const pure = await cliWithStdin(plateText.replace('material: { k: 180 }', 'material: copper-pure'), 'check', '-', '--reference', '1d');
     expect(pure.stdout).toMatch(/copper-pure, k = 401 W\/\(m\*K\) \(Incropera, DeWitt, Bergman & Lavine 2007, .*Table A\.1, 300 K\)/);

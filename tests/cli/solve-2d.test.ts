@@ -25,12 +25,15 @@ convection: { ambient: 20 degC, h: 40, tip: convective }
 base: { temperature: 80 degC }
 `,
 );
-const insulated = caseFile('insulated.yaml', `name: insulated edges
+const insulated = caseFile(
+  'insulated.yaml',
+  `name: insulated edges
 fin: { profile: rectangular, length: 30 mm, thickness: 3 mm, width: 10 mm, edges: insulated }
 material: { k: 180 }
 convection: { ambient: 20 degC, h: 40, tip: convective }
 base: { temperature: 80 degC }
-`);
+`,
+);
 const annular = caseFile(
   'annular.yaml',
   `name: disc fin

@@ -9,7 +9,8 @@ import { describe, expect, it, vi } from 'vitest';
 import { SolverError, UsageError } from '../../src/errors.js';
 import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
 import { factorBandedCholesky } from '../../src/fd/linear-algebra/banded-cholesky.js';
-import { finCase } from '../fd2d/cases.js';
+import { TEMPERATURES_2D } from '../fd2d/cases.js';
+import { finCase } from '../support/fin-case.js';
 import { randomSpdStencil } from '../fd2d/random.js';
 import { cli } from './run.js';
 
@@ -20,7 +21,11 @@ vi.mock('../../src/fd/two-d/linear-study.js', async (importOriginal) => {
   return {
     ...original,
     studyFin2D: (c: { name: string }, ...rest: unknown[]) => {
-      if (c.name === 'failing 2-D solve') throw new SolverError('multigrid-preconditioned CG did not converge: relative residual 1.2e-7 after 7 iterations on a 153 x 33 grid', 'another-2d-grid');
+      if (c.name === 'failing 2-D solve')
+        throw new SolverError(
+          'multigrid-preconditioned CG did not converge: relative residual 1.2e-7 after 7 iterations on a 153 x 33 grid',
+          'another-2d-grid',
+        );
       return (original.studyFin2D as (...a: unknown[]) => unknown)(c, ...rest);
     },
   };
@@ -66,7 +71,9 @@ describe('advice after a 2-D solver failure', () => {
   it('solve --model 2d names --grid and --model 1d (exit 3)', async () => {
     const r = await cli('solve', failing, '--model', '2d');
     expect(r.code).toBe(3);
-    expect(r.stderr).toMatch(/^fincheck: solver failure: multigrid-preconditioned CG did not converge.*; solve on another grid \(--grid NXxNY, e\.g\. fewer nodes across\) or with the 1-D model \(--model 1d\)\n$/);
+    expect(r.stderr).toMatch(
+      /^fincheck: solver failure: multigrid-preconditioned CG did not converge.*; solve on another grid \(--grid NXxNY, e\.g\. fewer nodes across\) or with the 1-D model \(--model 1d\)\n$/,
+    );
   });
 
   it('check, which has no grid option, names --reference 1d (exit 3)', async () => {
@@ -79,7 +86,19 @@ describe('advice after a 2-D solver failure', () => {
 
 describe('a grid that cannot mesh the section', () => {
   it('src/ words it as the 2-D grid, without the option', () => {
-    const c = finCase({ kind: 'tabulated', shape: 'straight', x: Float64Array.of(0, 0.01, 0.02, 0.03), size: Float64Array.of(0.004, 0.003, 0.002, 0.001), width: 0.05 }, 180, { kind: 'uniform', h: 40 }, { kind: 'adiabatic' });
+    const c = finCase({
+      profile: {
+        kind: 'tabulated',
+        shape: 'straight',
+        x: Float64Array.of(0, 0.01, 0.02, 0.03),
+        size: Float64Array.of(0.004, 0.003, 0.002, 0.001),
+        width: 0.05,
+      },
+      k: 180,
+      h: { kind: 'uniform', h: 40 },
+      tip: { kind: 'adiabatic' },
+      ...TEMPERATURES_2D,
+    });
     expect(() => solveFin2D(c, { nx: 3, ny: 5 })).toThrow(UsageError);
     expect(() => solveFin2D(c, { nx: 3, ny: 5 })).toThrow(/^2-D grid: the profile has 4 points, so it needs at least 4 nodes along \(got 3\)$/);
   });

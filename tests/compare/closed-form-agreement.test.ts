@@ -14,8 +14,8 @@ const common = {
 };
 
 // Closed forms: Gardner 1945, Trans. ASME 67, 621 (straight profiles; from memory); Incropera et al.,
-// Table 3.5 (pin, annular; from memory); truncated cone as derived in the shared reference scripts
-// (profiles.py, checked against a finite-volume solution there).
+// Table 3.5 (pin, annular; from memory); truncated cone as derived in tests/reference/profiles.py
+// (checked against a finite-volume solution there).
 const cases: [string, Record<string, unknown>][] = [
   ['rectangular', { profile: 'rectangular', length: '30 mm', thickness: '2 mm', width: '50 mm', edges: 'insulated' }],
   ['triangular', { profile: 'triangular', length: '30 mm', baseThickness: '3 mm', width: '50 mm', edges: 'insulated' }],

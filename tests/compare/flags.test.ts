@@ -51,7 +51,7 @@ describe('designFlags', () => {
   it('thick fin states the measured drift when the 2-D model ran', () => {
     expect(designFlags({ ...base, biot: 0.5, measuredOneDDrift: 0.07 })[0]?.message).toMatch(/2-D solution shows .* 7\.0 %/);
   });
-  // Effectiveness ~2 (Incropera et al., from memory); mL = 2.65 for 99 % of the infinite fin
+  // Effectiveness ~2 (Incropera et al. 2007, from memory); mL = 2.65 for 99 % of the infinite fin
   // (tanh 2.65 = 0.9901); hA/(kP) = 1 is where dq/dL at L = 0 changes sign (exact).
   it.each([
     [{ effectiveness: 1.9 }, 'low-effectiveness'],

@@ -26,7 +26,7 @@ function powerLawCase(exponent: number) {
 describe('power-law h, adiabatic tip, mL = 1', () => {
   // Q = q / (sqrt(h_b P k A) theta_b) from the first integral of the fin equation with h = h_b (theta/theta_b)^n:
   // Sen & Trinh 1986, J. Heat Transfer 108, 457 (from memory); values evaluated by quadrature with mpmath
-  // in the shared reference scripts (nonlinear.py), given to 10 digits.
+  // in tests/reference/nonlinear.py, given to 10 digits.
   it.each([
     [0.25, 0.7283030125],
     [1 / 3, 0.7183075317],
@@ -36,7 +36,7 @@ describe('power-law h, adiabatic tip, mL = 1', () => {
     expect(report.reference.model).toBe('fd-1d');
     // Finest grid error ~1e-8 (GCI); 1e-6 is the acceptance level of the nonlinear issue.
     expect(Math.abs(report.reference.heatRate_W / (Q * M) - 1)).toBeLessThan(1e-6);
-    // h at the base temperature is h_b: the shortcut is the linear fin, q = M tanh(mL) (Incropera Table 3.4 case B).
+    // h at the base temperature is h_b: the shortcut is the linear fin, q = M tanh(mL) (Incropera et al. 2007, Table 3.4 case B).
     const base = report.models.find((x) => x.model === 'tanh-L' && x.guess === 'base')!;
     expect(base.heatRate_W / (Math.tanh(1) * M)).toBeCloseTo(1, 10);
     expect(base.drift).toBeCloseTo(Math.tanh(1) / Q - 1, 6);
@@ -74,7 +74,7 @@ describe('radiation and tabulated conductivity', () => {
       base: { temperature: 70 },
     });
     const { report } = await runCheck(flat, { tolerance: 0.02, reference: '1d' });
-    // Uniform fin, adiabatic tip: q = M tanh(mL) (Incropera et al., Table 3.4 case B; from memory).
+    // Uniform fin, adiabatic tip: q = M tanh(mL) (Incropera et al. 2007, Table 3.4 case B; from memory).
     expect(Math.abs(report.reference.heatRate_W / (M * Math.tanh(1)) - 1)).toBeLessThan(1e-6);
     expect(report.assumptions.find((a) => a.assumption.startsWith('constant k'))!.drift).toBeCloseTo(0, 12);
   });
@@ -114,7 +114,7 @@ describe('fd-2d reference for nonlinear fins (Newton across the thickness)', () 
     expect(report.reference.model).toBe('fd-2d');
     expect(report.reference.note).toMatch(/side edges' cooling added from fd-1d/);
     const row = report.assumptions.find((a) => a.assumption.startsWith('one-dimensional conduction'))!;
-    // At Bi = 0.5 the 1-D model over-predicts by several per cent (linear plate fins: references.md section 4c).
+    // At Bi = 0.5 the 1-D model over-predicts by several per cent (linear plate fins: the exact 2-D series of tests/reference/fin2d_series.py; cf. Lau & Tan 1973, J. Heat Transfer 95(4), 549, from memory).
     expect(row.drift).toBeGreaterThan(0.02);
     const flag = report.flags.find((f) => f.flag === 'thick-fin')!;
     expect(flag.message).toContain(`over-predicting by ${(100 * row.drift).toFixed(1)} %`);

@@ -6,7 +6,7 @@
  * 1e-15) of these closed forms:
  * - adiabatic tip at r2c, η = 2r1/(m(r2c^2 - r1^2)) [K1(mr1)I1(mr2c) - I1(mr1)K1(mr2c)] /
  *   [I0(mr1)K1(mr2c) + K0(mr1)I1(mr2c)]: Gardner, K. A., 1945, Trans. ASME 67, 621-631 [from memory];
- *   Incropera et al., Table 3.5 [from memory]; Shabany, Heat Transfer: Thermal Management of
+ *   Incropera et al. 2007, Table 3.5 [from memory]; Shabany, Heat Transfer: Thermal Management of
  *   Electronics, CRC 2009, eq. 7.53 (with r2c = r2 + t/2);
  * - convective tip on the rim (−k θ'(r2) = h θ(r2)): the exact I0/K0 solution derived in profiles.py
  *   (`annular_convtip`; same Bessel form as Gardner 1945), η referred to 2π(r2^2 - r1^2) + 2π r2 t.
@@ -14,8 +14,8 @@
 import { describe, expect, test } from 'vitest';
 import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
-import { linearCase } from './support/cases.js';
 import { expectEfficiency } from './support/efficiency-check.js';
+import { linearFinCase } from '../support/fin-case.js';
 
 const INNER_RADIUS = 0.01;
 const THICKNESS = 0.001;
@@ -34,8 +34,8 @@ function annularCase(ratio: number, mLc: number) {
   const outer = ratio * INNER_RADIUS;
   const m = mLc / (outer - INNER_RADIUS);
   const h = (m * m * K * THICKNESS) / 2;
-  return linearCase({
-    profile: { kind: 'annular', innerRadius: INNER_RADIUS, outerRadius: outer, thickness: THICKNESS },
+  return linearFinCase({
+    edges: 'cooled', profile: { kind: 'annular', innerRadius: INNER_RADIUS, outerRadius: outer, thickness: THICKNESS },
     k: K, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, thetaBase: 70,
   });
 }
@@ -56,15 +56,15 @@ const CONVECTIVE_TIP = [
 describe.each(CONVECTIVE_TIP)('annular, convective rim, h = $h, r2 = $r2 (exact I0/K0 solution; profiles.py)', (row) => {
   const thetaBase = 50;
   const run = studyFin1D(
-    linearCase({
-      profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
+    linearFinCase({
+      edges: 'cooled', profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
       k: row.k, h: { kind: 'uniform', h: row.h }, tip: { kind: 'convective', h: null }, thetaBase,
     }),
   );
   test('observed order 2 from four grids', () => {
     const cells = [50, 100, 200, 400];
-    const fin = linearCase({
-      profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
+    const fin = linearFinCase({
+      edges: 'cooled', profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
       k: row.k, h: { kind: 'uniform', h: row.h }, tip: { kind: 'convective', h: null }, thetaBase,
     });
     const errors = cells.map((n) => solveFin1D(fin, { nodes: n + 1 }).heatRate / (row.qPerK * thetaBase) - 1);

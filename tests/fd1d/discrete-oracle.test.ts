@@ -13,7 +13,7 @@
 import { describe, expect, test } from 'vitest';
 import { solveFin1D } from '../../src/fd/one-d/linear-solve.js';
 import { thomas } from '../../src/fd/linear-algebra/tridiagonal.js';
-import { linearCase } from './support/cases.js';
+import { linearFinCase } from '../support/fin-case.js';
 
 const L = 0.05;
 const T = 0.003;
@@ -23,7 +23,7 @@ const THETA_BASE = 30;
 function uniformFin(mL: number) {
   const h = (mL * mL * K * T) / (2 * L * L); // per unit width: m^2 = 2h/(kt)
   return {
-    fin: linearCase({ profile: { kind: 'rectangular', length: L, thickness: T, width: 1 }, edges: 'insulated', k: K, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE }),
+    fin: linearFinCase({ profile: { kind: 'rectangular', length: L, thickness: T, width: 1 }, edges: 'insulated', k: K, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE }),
     scale: Math.sqrt(h * 2 * K * T) * THETA_BASE, // sqrt(hPkA) θ_b per metre of width
   };
 }

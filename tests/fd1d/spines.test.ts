@@ -4,8 +4,8 @@
  *
  * Values: computed reference values (mpmath script profiles.py, checked against an independent
  * finite-volume solution) of these closed forms: cylinder tanh(mL)/(mL) and cone
- * 2 I2(2mL)/(mL I1(2mL)) (Incropera et al., Fundamentals of Heat and Mass Transfer, Table 3.5 [from
- * memory]); concave parabolic spine 2/(sqrt(1 + (4/9)(mL)^2) + 1) (Incropera Table 3.5 [from memory]);
+ * 2 I2(2mL)/(mL I1(2mL)) (Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer (6th ed.), Table 3.5 [from
+ * memory]); concave parabolic spine 2/(sqrt(1 + (4/9)(mL)^2) + 1) (Incropera et al. 2007, Table 3.5 [from memory]);
  * convex parabolic spine 3 I1(4mL/3)/(2 mL I0(4mL/3)) (Kraus, Aziz & Welty 2001, Extended Surface Heat
  * Transfer [from memory]); truncated cone: closed form with I1, I2, K1, K2 derived in profiles.py.
  * The parabolic spines are not profiles of the case format; they are built with taperedGeometry.
@@ -16,8 +16,8 @@ import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { solveFin1D, solveFinProblem1D, studyFin1D, studyFinProblem1D } from '../../src/fd/one-d/linear-solve.js';
 import type { FinProblem1D } from '../../src/fd/one-d/problem.js';
 import { taperedGeometry, type TaperExponent } from '../../src/mesh/geometry1d.js';
-import { linearCase } from './support/cases.js';
 import { expectEfficiency } from './support/efficiency-check.js';
+import { linearFinCase } from '../support/fin-case.js';
 
 const L = 0.04;
 const BASE_DIAMETER = 0.006;
@@ -32,7 +32,7 @@ const CONCAVE_SPINE = [0.9931503636, 0.973665961, 0.9083269132, 0.8284271247, 0.
 const CONVEX_SPINE = [0.9863634934, 0.9482677238, 0.828228124, 0.697774658, 0.5864792074, 0.4317613055];
 
 const caseFor = (profile: Profile, mL: number) =>
-  linearCase({ profile, k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 40 });
+  linearFinCase({ edges: 'cooled', profile, k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 40 });
 
 /** A parabolic spine, D = D_b (1 - x/L)^e, as a 1-D problem. */
 function parabolicSpine(exponent: TaperExponent, mL: number): FinProblem1D {
@@ -48,16 +48,16 @@ function parabolicSpine(exponent: TaperExponent, mL: number): FinProblem1D {
 
 const rows = (etas: number[]) => M_L.map((mL, j) => ({ mL, eta: etas[j] as number }));
 
-describe.each(rows(CYLINDER))('cylinder, mL = $mL (Incropera Table 3.5: tanh(mL)/(mL); profiles.py)', ({ mL, eta }) => {
+describe.each(rows(CYLINDER))('cylinder, mL = $mL (Incropera et al. 2007, Table 3.5: tanh(mL)/(mL); profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFin1D(caseFor({ kind: 'pin', length: L, diameter: BASE_DIAMETER }, mL)), eta));
 });
 
-describe.each(rows(CONE))('cone, mL = $mL (Incropera Table 3.5: 2 I2(2mL)/(mL I1(2mL)); profiles.py)', ({ mL, eta }) => {
+describe.each(rows(CONE))('cone, mL = $mL (Incropera et al. 2007, Table 3.5: 2 I2(2mL)/(mL I1(2mL)); profiles.py)', ({ mL, eta }) => {
   test('efficiency', () =>
     expectEfficiency(studyFin1D(caseFor({ kind: 'conical-pin', length: L, baseDiameter: BASE_DIAMETER, tipDiameter: 0 }, mL)), eta));
 });
 
-describe.each(rows(CONCAVE_SPINE))('concave parabolic spine, mL = $mL (Incropera Table 3.5; profiles.py)', ({ mL, eta }) => {
+describe.each(rows(CONCAVE_SPINE))('concave parabolic spine, mL = $mL (Incropera et al. 2007, Table 3.5; profiles.py)', ({ mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFinProblem1D(parabolicSpine(2, mL)), eta));
 });
 

@@ -15,8 +15,8 @@ import { describe, expect, test } from 'vitest';
 import type { Profile } from '../../src/case/types.js';
 import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
-import { linearCase } from './support/cases.js';
 import { expectEfficiency } from './support/efficiency-check.js';
+import { linearFinCase } from '../support/fin-case.js';
 
 const L = 0.05;
 const BASE_THICKNESS = 0.004;
@@ -49,7 +49,7 @@ const TABLE: Record<StraightKind, number[]> = {
 };
 
 const finFor = (profile: Profile, mL: number) =>
-  linearCase({ profile, edges: 'insulated', k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 50 });
+  linearFinCase({ profile, edges: 'insulated', k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 50 });
 
 const ROWS = (Object.keys(TABLE) as StraightKind[]).flatMap((kind) =>
   M_L.map((mL, j) => ({ kind, mL, eta: (TABLE[kind] as number[])[j] as number })),

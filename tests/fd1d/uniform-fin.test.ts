@@ -3,7 +3,7 @@
  *
  * Reference values: check cases R1, R2, P1, P2 (invented inputs), computed reference values (mpmath
  * script uniform_fin.py, checked with scipy solve_bvp), closed forms of Incropera, DeWitt, Bergman &
- * Lavine, Fundamentals of Heat and Mass Transfer (6th/7th ed.), Table 3.4 [from memory for the table
+ * Lavine 2007, Fundamentals of Heat and Mass Transfer (6th/7th ed.), Table 3.4 [from memory for the table
  * number]: A convective tip, B adiabatic, C prescribed tip temperature, D infinite. Fin efficiency:
  * Harper & Brown 1922; fin effectiveness: Gardner 1945.
  */
@@ -11,7 +11,7 @@ import { describe, expect, test } from 'vitest';
 import type { Profile, TipCondition } from '../../src/case/types.js';
 import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
-import { AMBIENT_DEGC, linearCase, relative } from './support/cases.js';
+import { AMBIENT_DEGC, linearFinCase, relative } from '../support/fin-case.js';
 
 interface UniformCase {
   id: string;
@@ -94,9 +94,9 @@ function tipOf(tip: 'A' | 'B' | 'C' | 'D', thetaBase: number): TipCondition {
 
 const ROWS = CASES.flatMap((c) => (['A', 'B', 'C', 'D'] as const).map((tip) => ({ c, tip, name: `${c.id} tip ${tip}` })));
 
-describe.each(ROWS)('$name (Incropera Table 3.4 closed forms; computed reference values, uniform_fin.py)', ({ c, tip }) => {
+describe.each(ROWS)('$name (Incropera et al. 2007, Table 3.4 closed forms; computed reference values, uniform_fin.py)', ({ c, tip }) => {
   const expected = c.rows[tip];
-  const fin = linearCase({ profile: c.profile, edges: c.edges, k: c.k, h: { kind: 'uniform', h: c.h }, tip: tipOf(tip, c.thetaBase), thetaBase: c.thetaBase });
+  const fin = linearFinCase({ profile: c.profile, edges: c.edges, k: c.k, h: { kind: 'uniform', h: c.h }, tip: tipOf(tip, c.thetaBase), thetaBase: c.thetaBase });
   const { result, study } = studyFin1D(fin);
 
   test('heat rate on the default study grids', () => {

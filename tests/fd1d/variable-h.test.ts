@@ -13,9 +13,9 @@ import { beforeAll, describe, expect, test } from 'vitest';
 import type { HDistribution } from '../../src/case/types.js';
 import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
-import { linearCase } from './support/cases.js';
 import { expectEfficiency } from './support/efficiency-check.js';
 import { besselI, gamma, loadSpecial } from './support/special.js';
+import { linearFinCase } from '../support/fin-case.js';
 
 const L = 0.04;
 const T = 0.002;
@@ -27,7 +27,7 @@ const hRefFor = (mL: number): number => (mL * mL * K * T) / (2 * L * L);
 beforeAll(loadSpecial);
 
 const finWith = (h: HDistribution) =>
-  linearCase({ profile: { kind: 'rectangular', length: L, thickness: T, width: 1 }, edges: 'insulated', k: K, h, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE });
+  linearFinCase({ profile: { kind: 'rectangular', length: L, thickness: T, width: 1 }, edges: 'insulated', k: K, h, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE });
 
 /** Q = q/(kAmθ_b) of NU1 and NU2 for n = 1 (ν = 1/3), from the closed forms in the header. */
 function closedFormQ(oracle: 'NU1' | 'NU2', mL: number): number {

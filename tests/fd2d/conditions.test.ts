@@ -5,16 +5,17 @@ import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
 import { fin2dUnsupported } from '../../src/fd/two-d/problem.js';
 import { fieldViews } from '../../src/fd/two-d/field-views.js';
 import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
-import { BASE, finCase, THETA_B } from './cases.js';
+import { BASE, THETA_B, TEMPERATURES_2D } from './cases.js';
+import { finCase } from '../support/fin-case.js';
 
-// Check case R2 (invented inputs; Incropera et al., Table 3.4, from memory): unit-width aluminium plate, k = 237, h = 40, t = 1 mm, L = 25 mm.
+// Check case R2 (invented inputs; Incropera et al. 2007, Table 3.4, from memory): unit-width aluminium plate, k = 237, h = 40, t = 1 mm, L = 25 mm.
 // Computed reference values (scipy/mpmath script uniform_fin.py) of the 1-D closed forms of Incropera,
 // DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, Table 3.4 [from memory]; per unit
 // theta_b: q/theta_b in W/(m K). Bi = h (t/2)/k = 8.4e-5, so the 2-D heat rate lies below the 1-D one by
 // about Bi/6 to Bi/3 (small-Bi expansion of the exact 2-D series): 1.4e-5 to 2.8e-5.
 const R2 = { k: 237, h: 40, t: 0.001, L: 0.025, thetaB: 50 };
 const r2Case = (tip: TipCondition, contactResistance = 0) =>
-  finCase({ kind: 'rectangular', length: R2.L, thickness: R2.t, width: 1 }, R2.k, { kind: 'uniform', h: R2.h }, tip, contactResistance);
+  finCase({ profile: { kind: 'rectangular', length: R2.L, thickness: R2.t, width: 1 }, k: R2.k, h: { kind: 'uniform', h: R2.h }, tip: tip, contactResistance: contactResistance, ...TEMPERATURES_2D });
 
 describe('tip and base conditions on a thin plate (case R2), against the exact 1-D fin', () => {
   it.each([
@@ -45,7 +46,7 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
 
   it('contact resistance at the base: in series with the fin in the thin limit', () => {
     // A contact resistance R'' over the base area A_b adds R''/A_b in series with the fin's resistance
-    // theta_b/q_fin (series thermal resistances, Incropera et al. section 3.1 and the contact-resistance
+    // theta_b/q_fin (series thermal resistances, Incropera et al. 2007, section 3.1 and the contact-resistance
     // factor of section 3.6 [from memory]). Exact in 1-D; in 2-D the base flux is uniform to O(Bi).
     const rc = 2e-4;
     const s = studyFin2D(r2Case({ kind: 'adiabatic' }, rc));
@@ -66,7 +67,7 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
     const hb = (1e-4 * k) / b;
     const m = Math.sqrt(hb / (k * b));
     const L = 1 / m;
-    const c = finCase({ kind: 'rectangular', length: L, thickness: 2 * b, width: 1 }, k, { kind: 'linear', base: hb, tip: 0 }, { kind: 'adiabatic' });
+    const c = finCase({ profile: { kind: 'rectangular', length: L, thickness: 2 * b, width: 1 }, k: k, h: { kind: 'linear', base: hb, tip: 0 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
     const s = studyFin2D(c);
     const exact = 0.4555445261 * k * (2 * b) * m * THETA_B;
     // 1e-4: the 2-D drop of order Bi = 1e-4 times a fraction; extrapolation error ~1e-8.
@@ -78,7 +79,7 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
 describe('symmetry', () => {
   it('a plate held at the base temperature at both ends is mirror-symmetric about its middle', () => {
     // Physical symmetry of the problem; on a uniform grid the scheme must keep it to round-off.
-    const c = finCase({ kind: 'rectangular', length: 0.01, thickness: 0.004, width: 1 }, 20, { kind: 'uniform', h: 2000 }, { kind: 'temperature', T_degC: BASE });
+    const c = finCase({ profile: { kind: 'rectangular', length: 0.01, thickness: 0.004, width: 1 }, k: 20, h: { kind: 'uniform', h: 2000 }, tip: { kind: 'temperature', T_degC: BASE }, ...TEMPERATURES_2D });
     const r = solveFin2D(c, { nx: 41, ny: 9, baseGrading: 1, faceGrading: 1 });
     const { nodesX: nx, nodesY: ny } = r.grid;
     for (let i = 0; i < nx; i++) {
@@ -116,7 +117,7 @@ describe.each(profiles)('maximum principle and energy balance: %s', (_, profile)
     // out). On sloped faces the matrix is not an M-matrix (slanted cells give a few small positive
     // couplings, up to ~1 % of the largest), so the discrete maximum principle is not guaranteed a priori:
     // this checks that it holds on these grids. Tolerances: round-off.
-    const c = finCase(profile, 20, { kind: 'uniform', h: 10000 }, tip);
+    const c = finCase({ profile: profile, k: 20, h: { kind: 'uniform', h: 10000 }, tip: tip, ...TEMPERATURES_2D });
     const r = solveFin2D(c, { nx: 41, ny: 13 });
     for (const v of r.field) {
       expect(v).toBeGreaterThanOrEqual(0);
@@ -134,7 +135,7 @@ describe.each(profiles)('maximum principle and energy balance: %s', (_, profile)
 
 describe('the 2-D field for images', () => {
   it('is exposed as ndarray views sharing the result arrays', () => {
-    const c = finCase({ kind: 'trapezoidal', length: 0.02, baseThickness: 0.004, tipThickness: 0.002, width: 0.1 }, 50, { kind: 'uniform', h: 500 }, { kind: 'adiabatic' });
+    const c = finCase({ profile: { kind: 'trapezoidal', length: 0.02, baseThickness: 0.004, tipThickness: 0.002, width: 0.1 }, k: 50, h: { kind: 'uniform', h: 500 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
     const r = solveFin2D(c, { nx: 21, ny: 7 });
     const v = fieldViews(r);
     expect(v.theta.shape).toEqual([21, 7]);
@@ -148,7 +149,7 @@ describe('the 2-D field for images', () => {
 });
 
 describe('what the 2-D model does not solve', () => {
-  const base = finCase({ kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, 200, { kind: 'uniform', h: 50 }, { kind: 'adiabatic' });
+  const base = finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, k: 200, h: { kind: 'uniform', h: 50 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
   it.each([
     ['temperature-dependent k', { ...base, material: { name: 'custom', k: { kind: 'table', T_degC: Float64Array.of(20, 200), k: Float64Array.of(200, 190) }, source: 'test' } }],
     ['power-law h', { ...base, convection: { ...base.convection, h: { kind: 'power', base: 10, exponent: 0.25 } } }],
@@ -167,7 +168,7 @@ describe('what the 2-D model does not solve', () => {
 });
 
 describe('grid requests', () => {
-  const c = finCase({ kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, 200, { kind: 'uniform', h: 50 }, { kind: 'adiabatic' });
+  const c = finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, k: 200, h: { kind: 'uniform', h: 50 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
   it.each([
     [1, 5],
     [10, 1.5],

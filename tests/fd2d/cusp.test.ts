@@ -21,7 +21,8 @@ import { DEFAULT_GRADING } from '../../src/fd/two-d/linear-solve.js';
 import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { coupledRhsNorm1, couplingOf, residual } from '../../src/fd/linear-algebra/stencil9.js';
 import { buildGrid2D } from '../../src/mesh/grid2d.js';
-import { finCase, THETA_B } from './cases.js';
+import { THETA_B, TEMPERATURES_2D } from './cases.js';
+import { finCase } from '../support/fin-case.js';
 
 const concave = (length: number, baseThickness: number, width = 0.05): Profile => ({ kind: 'parabolic-concave', length, baseThickness, width });
 
@@ -34,7 +35,7 @@ describe('fd-2d on cusped tips: check with the fd-2d reference', () => {
     const fin = fc.record({ L: logUniform(0.005, 0.1), tb: logUniform(0.0005, 0.01), k: logUniform(10, 400), h: logUniform(5, 500) });
     await fc.assert(
       fc.asyncProperty(fin, async ({ L, tb, k, h }) => {
-        const c = finCase(concave(L, tb), k, { kind: 'uniform', h }, { kind: 'adiabatic' });
+        const c = finCase({ profile: concave(L, tb), k: k, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
         const { report } = await runCheck(c, { tolerance: 0.02, reference: '2d', ledger: false });
         expect(report.reference.model).toBe('fd-2d');
         // A conservative scheme balances to round-off: measured 5e-13 to 1e-9 over the family.
@@ -47,7 +48,7 @@ describe('fd-2d on cusped tips: check with the fd-2d reference', () => {
 
   it('solves the fin of the report (40 mm, 2 mm base, 50 mm wide, k 209, h 45)', async () => {
     await initBessel();
-    const c = finCase(concave(0.04, 0.002), 209, { kind: 'uniform', h: 45 }, { kind: 'adiabatic' });
+    const c = finCase({ profile: concave(0.04, 0.002), k: 209, h: { kind: 'uniform', h: 45 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
     const { report } = await runCheck(c, { tolerance: 0.02, reference: '2d', ledger: false });
     expect(report.reference.model).toBe('fd-2d');
     expect(report.reference.energyBalance).toBeLessThan(1e-9);
@@ -57,11 +58,24 @@ describe('fd-2d on cusped tips: check with the fd-2d reference', () => {
 describe('fd-2d on cusped tips: the matrix', () => {
   // Small cusped grids (default grading, tip clustering of grid2dSection.ts), cases of the random family.
   const cases: [string, Case][] = [
-    ['45 mm x 8 mm, k 98, h 36', finCase(concave(0.0452, 0.00806), 98, { kind: 'uniform', h: 36 }, { kind: 'adiabatic' })],
-    ['40 mm x 2 mm, k 209, h 45', finCase(concave(0.04, 0.002), 209, { kind: 'uniform', h: 45 }, { kind: 'adiabatic' })],
-    ['7 mm x 0.7 mm, k 196, h 10', finCase(concave(0.0069, 0.00067), 196, { kind: 'uniform', h: 10 }, { kind: 'adiabatic' })],
+    [
+      '45 mm x 8 mm, k 98, h 36',
+      finCase({ profile: concave(0.0452, 0.00806), k: 98, h: { kind: 'uniform', h: 36 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }),
+    ],
+    [
+      '40 mm x 2 mm, k 209, h 45',
+      finCase({ profile: concave(0.04, 0.002), k: 209, h: { kind: 'uniform', h: 45 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }),
+    ],
+    [
+      '7 mm x 0.7 mm, k 196, h 10',
+      finCase({ profile: concave(0.0069, 0.00067), k: 196, h: { kind: 'uniform', h: 10 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }),
+    ],
   ];
-  const grids: [number, number][] = [[41, 5], [81, 9], [121, 9]];
+  const grids: [number, number][] = [
+    [41, 5],
+    [81, 9],
+    [121, 9],
+  ];
   describe.each(cases)('%s', (_, c) => {
     it.each(grids)('is symmetric positive definite in doubles on %i x %i nodes (dense Cholesky, ml-matrix)', (nx, ny) => {
       const problem = fin2dProblem(c);
@@ -106,24 +120,28 @@ describe('fd-2d on cusped tips: the thin limit', () => {
   // Heat and Mass Transfer, Table 3.5 [from memory] (src/analytic/straight-profiles.ts).
   const k = 200;
   const b = 1e-3; // base half-thickness, m
-  it.each([1, 2, 4])('mL = %s, Bi = 1e-6: fd-2d agrees with the closed form within its GCI, order ~2', async (mL) => {
-    await initBessel();
-    const bi = 1e-6;
-    const h = (bi * k) / b;
-    const L = (mL * b) / Math.sqrt(bi);
-    const s = studyFin2D(finCase(concave(L, 2 * b, 1), k, { kind: 'uniform', h }, { kind: 'adiabatic' }));
-    const exact = straightConcaveParabolicFin({ h, k, length: L, baseThickness: 2 * b, thetaBase: THETA_B, width: 1 }).heatRate;
-    // The 1-D model neglects conduction across (O(Bi)) and the face slope (O((2b/L)^2) = O(4 Bi/(mL)^2));
-    // measured gaps of the extrapolated value 8e-7 (mL = 1), 2e-7, 8e-9: below that bound. The finest grid
-    // is within its GCI (measured errors 1.1e-5, 6.3e-6, 5.6e-6 against GCIs ~1.2e-5, 7.6e-6, 6.9e-6).
-    // (At mL = 0.3 the slope term, 4e-5, exceeds the GCI: the 1-D closed form is then not the limit.)
-    const modelGap = (4 * bi) / mL ** 2;
-    expect(Math.abs(s.heatRate_W / exact - 1)).toBeLessThan(s.discretizationError + modelGap);
-    expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(modelGap + 0.1 * s.discretizationError);
-    expect(s.energyBalance).toBeLessThan(1e-9);
-    // Thin fins: the base corner's singularity is weighted by Bi and the tip clustering makes the cusp's
-    // power-law field smooth in the grid index (grid2dSection.ts): second order (measured 1.999-2.000).
-    expect(s.heatRate.observedOrder).toBeGreaterThan(1.9);
-    expect(s.heatRate.observedOrder).toBeLessThan(2.1);
-  }, 60_000);
+  it.each([1, 2, 4])(
+    'mL = %s, Bi = 1e-6: fd-2d agrees with the closed form within its GCI, order ~2',
+    async (mL) => {
+      await initBessel();
+      const bi = 1e-6;
+      const h = (bi * k) / b;
+      const L = (mL * b) / Math.sqrt(bi);
+      const s = studyFin2D(finCase({ profile: concave(L, 2 * b, 1), k: k, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }));
+      const exact = straightConcaveParabolicFin({ h, k, length: L, baseThickness: 2 * b, thetaBase: THETA_B, width: 1 }).heatRate;
+      // The 1-D model neglects conduction across (O(Bi)) and the face slope (O((2b/L)^2) = O(4 Bi/(mL)^2));
+      // measured gaps of the extrapolated value 8e-7 (mL = 1), 2e-7, 8e-9: below that bound. The finest grid
+      // is within its GCI (measured errors 1.1e-5, 6.3e-6, 5.6e-6 against GCIs ~1.2e-5, 7.6e-6, 6.9e-6).
+      // (At mL = 0.3 the slope term, 4e-5, exceeds the GCI: the 1-D closed form is then not the limit.)
+      const modelGap = (4 * bi) / mL ** 2;
+      expect(Math.abs(s.heatRate_W / exact - 1)).toBeLessThan(s.discretizationError + modelGap);
+      expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(modelGap + 0.1 * s.discretizationError);
+      expect(s.energyBalance).toBeLessThan(1e-9);
+      // Thin fins: the base corner's singularity is weighted by Bi and the tip clustering makes the cusp's
+      // power-law field smooth in the grid index (grid2dSection.ts): second order (measured 1.999-2.000).
+      expect(s.heatRate.observedOrder).toBeGreaterThan(1.9);
+      expect(s.heatRate.observedOrder).toBeLessThan(2.1);
+    },
+    60_000,
+  );
 });

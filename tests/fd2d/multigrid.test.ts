@@ -12,11 +12,12 @@ import { buildMultigrid } from '../../src/fd/linear-algebra/multigrid.js';
 import { solveMgPcg } from '../../src/fd/linear-algebra/pcg.js';
 import { stencilToDense } from '../../src/fd/linear-algebra/stencil9.js';
 import { buildGrid2D } from '../../src/mesh/grid2d.js';
-import { finCase } from './cases.js';
 import { randomSpdStencil } from './random.js';
+import { finCase } from '../support/fin-case.js';
+import { TEMPERATURES_2D } from './cases.js';
 
 function finSystem(profile: Profile, k: number, h: number, nx: number, ny: number) {
-  const problem = fin2dProblem(finCase(profile, k, { kind: 'uniform', h }, { kind: 'convective', h: null }));
+  const problem = fin2dProblem(finCase({ profile: profile, k: k, h: { kind: 'uniform', h }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D }));
   const grid = buildGrid2D(problem.section, { nx, ny, baseGrading: 8, faceGrading: 8 });
   const K = assembleConduction2D(grid, k);
   const terms = discretizeBoundaries(grid, problem.conditions);

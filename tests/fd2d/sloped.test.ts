@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import type { Profile } from '../../src/case/types.js';
 import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
-import { finCase, THETA_B } from './cases.js';
+import { THETA_B, TEMPERATURES_2D } from './cases.js';
+import { finCase } from '../support/fin-case.js';
 
 const k = 200;
 const b = 1e-3; // base half-thickness or base radius, m
@@ -31,7 +32,7 @@ describe.each(rows)('sloped faces in the thin limit: %s', (_, profile, mL, eta, 
       const h = (bi * k) / b;
       const m = Math.sqrt(((spine ? 2 : 1) * h) / (k * b));
       const L = mL / m;
-      const s = studyFin2D(finCase(profile(L), k, { kind: 'uniform', h }, { kind: 'adiabatic' }));
+      const s = studyFin2D(finCase({ profile: profile(L), k: k, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }));
       expect(s.energyBalance).toBeLessThan(1e-9);
       // Thin fins: the base corner's singularity is weighted by Bi, the field is smooth elsewhere (tip
       // clustering for the parabolic profiles): measured 1.99-2.02.
@@ -55,7 +56,7 @@ describe('sloped faces, thick fins (Bi = 1 at the base, convective tip)', () => 
     ['triangular', { kind: 'triangular', length: 0.01, baseThickness: 0.004, width: 1 }],
     ['conical pin', { kind: 'conical-pin', length: 0.01, baseDiameter: 0.004, tipDiameter: 0 }],
   ] as [string, Profile][])('%s: observed order and an honest error estimate', (_, profile) => {
-    const c = finCase(profile, 20, { kind: 'uniform', h: 10000 }, { kind: 'convective', h: null });
+    const c = finCase({ profile: profile, k: 20, h: { kind: 'uniform', h: 10000 }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
     const s3 = studyFin2D(c);
     const s4 = studyFin2D(c, { levels: 4 });
     // The base corner (fixed temperature meets a cooled face) has a log-singular flux: order below 2.
@@ -75,13 +76,8 @@ describe('tabulated profiles', () => {
   it('a tabulated trapezoid (with an extra point on its face) gives the trapezoid', () => {
     const L = 0.02;
     const h = 2000;
-    const trapezoid = finCase({ kind: 'trapezoidal', length: L, baseThickness: 0.004, tipThickness: 0.001, width: 0.05 }, 50, { kind: 'uniform', h }, { kind: 'convective', h: null });
-    const tabulated = finCase(
-      { kind: 'tabulated', shape: 'straight', x: Float64Array.of(0, L / 4, L), size: Float64Array.of(0.004, 0.004 - 0.003 / 4, 0.001), width: 0.05 },
-      50,
-      { kind: 'uniform', h },
-      { kind: 'convective', h: null },
-    );
+    const trapezoid = finCase({ profile: { kind: 'trapezoidal', length: L, baseThickness: 0.004, tipThickness: 0.001, width: 0.05 }, k: 50, h: { kind: 'uniform', h }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
+    const tabulated = finCase({ profile: { kind: 'tabulated', shape: 'straight', x: Float64Array.of(0, L / 4, L), size: Float64Array.of(0.004, 0.004 - 0.003 / 4, 0.001), width: 0.05 }, k: 50, h: { kind: 'uniform', h }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
     const a = studyFin2D(trapezoid);
     const t = studyFin2D(tabulated);
     // Same geometry, different grid distribution (the table's point is a grid line): the extrapolated

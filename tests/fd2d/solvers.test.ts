@@ -97,7 +97,7 @@ describe('banded LDL^T carrying the row sums (for couplings of very different si
     const rhs = new Float64Array(ny);
     rhs[ny - 1] = 1;
     // Plain Cholesky loses the conductance to ground to round-off: it fails or returns nonsense.
-    let plainError = Infinity;
+    let plainError: number;
     try {
       const xc = factorBandedCholesky(a).solve(rhs);
       plainError = Math.abs((xc[0] as number) - 1);

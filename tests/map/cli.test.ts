@@ -29,6 +29,7 @@ describe('fincheck map writes its files', () => {
     expect(r.stderr).toBe('');
     const shortcuts = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form'];
     expect(readdirSync(out).sort()).toEqual(['map.csv', 'map.json', ...shortcuts.map((m) => `map-${m}.png`), 'overview.png'].sort());
+    // eslint-disable-next-line no-regex-spaces -- the summary's two-space indentation, as printed
     expect(r.stdout).toMatch(/^Map of cli plate\n  x: fin\.thickness from 1 mm to 4 mm, 5 values\n  y: convection\.h from 20 W\/\(m\^2\*K\) to 400 W\/\(m\^2\*K\), 4 values \(log spacing\)/);
     expect(r.stdout).toContain('reference fd-1d');
     for (const m of shortcuts) expect(r.stdout).toMatch(new RegExp(`\\n${m.replace(/-/g, '\\-')} +\\d`));

@@ -89,6 +89,7 @@ describe('progress bar', () => {
     let written = '';
     const bar = progressBar((t) => (written += t), true, 4);
     bar.update(4);
+    // eslint-disable-next-line no-control-regex -- ESC[K is what the progress bar writes
     expect(written).toMatch(/^\rmap \[#{28}\] 100 % {2}4\/4 points\u001b\[K$/);
     bar.finish();
     expect(written.endsWith('\r\u001b[2K')).toBe(true);

@@ -20,7 +20,13 @@ function point(index: number, model: 'fd-1d' | 'fd-2d', resolved: boolean): MapP
 
 describe('summariseMap', () => {
   it('counts points per reference model, the unresolved ones, and unresolved verdicts per shortcut', () => {
-    const points: MapPoint[] = [point(0, 'fd-2d', true), point(1, 'fd-2d', true), point(2, 'fd-1d', true), point(3, 'fd-1d', false), { index: 4, x: 4, y: 0, error: 'fin.length: got "0 mm"; expected a length > 0' }];
+    const points: MapPoint[] = [
+      point(0, 'fd-2d', true),
+      point(1, 'fd-2d', true),
+      point(2, 'fd-1d', true),
+      point(3, 'fd-1d', false),
+      { index: 4, x: 4, y: 0, error: 'fin.length: got "0 mm"; expected a length > 0' },
+    ];
     const s = summariseMap(points, ['tanh-L']);
     expect(s.references).toEqual([
       { model: 'fd-2d', points: 2, unresolved: 0 },

@@ -61,7 +61,7 @@ describe('the tolerance contour over Bi and mL', () => {
       steps: [21, 11],
       reference: '1d',
     });
-    // Closed forms of the uniform fin (Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer,
+    // Closed forms of the uniform fin (Incropera, DeWitt, Bergman & Lavine 2007, Fundamentals of Heat and Mass Transfer,
     // Table 3.4, cases A and B; table number from memory): q_B / q_A = T (1 + beta T) / (T + beta), T = tanh(mL),
     // beta = h/(mk) = sqrt(Bi) for this fin. At mL = 1 the ratio is 0.98 where beta = 0.02 T / (0.98 - T^2).
     const T = Math.tanh(1);

@@ -3,7 +3,7 @@
  * integral, for every profile of the case format.
  *
  * Expected values are the thin-fin geometry of the case-format contract (faces' slope neglected; the
- * convention of Gardner, K. A., 1945, Trans. ASME 67, 621-631, and Incropera et al., Table 3.5 [both
+ * convention of Gardner, K. A., 1945, Trans. ASME 67, 621-631, and Incropera et al. 2007, Table 3.5 [both
  * from memory]) integrated exactly by hand (calculus): e.g. ∫_0^L (1 - x/L)^(1/2) dx = 2L/3,
  * ∫_0^L x (1 - x/L)^(1/2) dx = 4L^2/15. Tolerances: 1e-14 relative (a few roundings of O(1) terms;
  * the 3-point Gauss rule is exact for these polynomial integrands).

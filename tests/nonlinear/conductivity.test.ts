@@ -17,7 +17,8 @@
 import { describe, expect, test } from 'vitest';
 import type { Conductivity } from '../../src/case/types.js';
 import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
-import { AMBIENT_DEGC, nonlinearCase, plateFin, relative } from './support/cases.js';
+import { plateFin } from './support/cases.js';
+import { AMBIENT_DEGC, finCase, relative } from '../support/fin-case.js';
 
 const K0 = 100;
 const H = 25;
@@ -59,7 +60,7 @@ const ROWS = TABLES.flatMap(({ id, points }) =>
 
 describe.each(ROWS)('k = k0 (1 + β θ), adiabatic tip: $name (Aziz & Enamul-Huq 1975; nonlinear.py)', ({ points, B, m0L, tipRatio, Q }) => {
   test('heat rate, extrapolation, tip temperature, energy balance', () => {
-    const c = nonlinearCase({
+    const c = finCase({
       profile: plateFin.profile(m0L / M0),
       k: linearK(B, points),
       h: { kind: 'uniform', h: H },
@@ -90,7 +91,7 @@ const INFINITE: [number, number][] = [
 
 describe.each(INFINITE)('k = k0 (1 + β θ), infinite fin, B = %d (Aziz & Enamul-Huq 1975; nonlinear.py)', (B, Q) => {
   test('fin cut at m0 L = 1 with the exact continuation', () => {
-    const c = nonlinearCase({
+    const c = finCase({
       profile: plateFin.profile(1 / M0),
       k: linearK(B, [AMBIENT_DEGC, AMBIENT_DEGC + THETA_B]),
       h: { kind: 'uniform', h: H },

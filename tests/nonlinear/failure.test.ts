@@ -8,11 +8,12 @@ import { describe, expect, test } from 'vitest';
 import { SolverError } from '../../src/errors.js';
 import { powerLawHInfiniteQ } from '../../src/analytic/nonlinear.js';
 import { solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
-import { AMBIENT_DEGC, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
+import { plateFin } from './support/cases.js';
+import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 
 // Boiling-like law n = 2 on a long plate fin (mL ~ 14): from the whole fin at the base temperature,
 // plain Newton needs 10 steps on this grid.
-const boiling = nonlinearCase({
+const boiling = finCase({
   profile: plateFin.profile(2),
   k: constantK(200),
   h: { kind: 'power', base: 10, exponent: 2 },
@@ -45,7 +46,7 @@ describe('continuation', () => {
 
 describe('solver failure: SolverError saying what to change', () => {
   test('power law, radiation and k(T) at one Newton step per attempt', () => {
-    const c = nonlinearCase({
+    const c = finCase({
       profile: plateFin.profile(0.3),
       k: { kind: 'table', T_degC: Float64Array.from([0, 200]), k: Float64Array.from([210, 170]) },
       h: { kind: 'power', base: 10, exponent: 2 },
@@ -68,7 +69,7 @@ describe('solver failure: SolverError saying what to change', () => {
     // θ_b (Sen & Trinh 1986, J. Heat Transfer 108, 457-459; src/analytic/nonlinear.ts). This test used to
     // expect a SolverError: Newton stalled at the round-off floor of the nodes next to the ambient (slope
     // ~ θ^n unbounded) and a converged solve was called a failure (issue 9, items 2 and 11).
-    const c = nonlinearCase({
+    const c = finCase({
       profile: plateFin.profile(2),
       k: constantK(200),
       h: { kind: 'power', base: 10, exponent: -0.5 },

@@ -20,7 +20,7 @@ import { finGeometry } from '../../src/mesh/geometry1d.js';
 import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import type { Case } from '../../src/case/types.js';
 import { finCaseArbitrary } from '../fd1d/support/arbitraries.js';
-import { AMBIENT_DEGC, constantK, nonlinearCase, relative } from './support/cases.js';
+import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 
 function allowance(c: Case, heatRate: number): number {
   const thetaBase = c.base.T_degC - c.convection.ambient_degC;
@@ -64,8 +64,8 @@ describe('a power law with exponent 0 is the uniform-h fin', () => {
     tip: { kind: 'convective' as const, h: null },
     base_degC: AMBIENT_DEGC + 60,
   };
-  const power = nonlinearCase({ ...shared, h: { kind: 'power', base: 40, exponent: 0 } });
-  const uniform = nonlinearCase({ ...shared, h: { kind: 'uniform', h: 40 } });
+  const power = finCase({ ...shared, h: { kind: 'power', base: 40, exponent: 0 } });
+  const uniform = finCase({ ...shared, h: { kind: 'uniform', h: 40 } });
   if (!isLinearFinCase(uniform)) throw new Error('uniform case should be linear');
 
   test('study: same heat rate, GCI, extrapolation and order as the linear study', () => {

@@ -15,7 +15,8 @@ import {
   radiatingInfiniteFin,
 } from '../../src/analytic/nonlinear.js';
 import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
-import { AMBIENT_DEGC, KELVIN, constantK, nonlinearCase, pinFin, plateFin, relative, type UniformFin } from './support/cases.js';
+import { KELVIN, pinFin, plateFin, type UniformFin } from './support/cases.js';
+import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 
 /**
  * Tolerances: 1e-6 on the default study grids (the accuracy target; measured <= 3e-7 at mL = 3);
@@ -43,7 +44,7 @@ describe.each(FINS.flatMap(({ fin, k }) => [0.25, 1 / 3, 2].map((n) => ({ fin, k
       const m = Math.sqrt((hBase * fin.P) / (k * fin.A));
       const L = 3 / m;
       const oracle = powerLawHAdiabaticFin({ hBase, n, k, P: fin.P, A: fin.A, thetaBase, L });
-      const c = nonlinearCase({ profile: fin.profile(L), k: constantK(k), h: { kind: 'power', base: hBase, exponent: n }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + thetaBase });
+      const c = finCase({ profile: fin.profile(L), k: constantK(k), h: { kind: 'power', base: hBase, exponent: n }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + thetaBase });
       const { result, study } = studyNonlinearFin1D(c);
       expectOracle(result, study, oracle.heatRate);
       // Nodal error ~1e-7 θ_b at mL = 3 on 4000 cells; 1e-6 θ_b.
@@ -61,7 +62,7 @@ describe('k = k0 (1 + β θ), B = 0.8, m0 L = 1.5, pin (Aziz & Enamul-Huq 1975)'
     const m0 = Math.sqrt((h * pinFin.P) / (k0 * pinFin.A));
     const L = 1.5 / m0;
     const oracle = linearConductivityAdiabaticFin({ h, k0, beta, P: pinFin.P, A: pinFin.A, thetaBase, L });
-    const c = nonlinearCase({
+    const c = finCase({
       profile: pinFin.profile(L),
       k: { kind: 'table', T_degC: Float64Array.from([AMBIENT_DEGC, AMBIENT_DEGC + thetaBase]), k: Float64Array.from([k0, k0 * 1.8]) },
       h: { kind: 'uniform', h },
@@ -77,7 +78,7 @@ describe('k = k0 (1 + β θ), B = 0.8, m0 L = 1.5, pin (Aziz & Enamul-Huq 1975)'
 describe('radiating pin, T_b = 500 K, enclosure at 320 K, ε = 0.6, k = 25 (Bartas & Sellers 1960)', () => {
   const input = { emissivity: 0.6, k: 25, P: pinFin.P, A: pinFin.A, baseTemperature_K: 500, sinkTemperature_K: 320 };
   const make = (L: number, tip: 'adiabatic' | 'infinite') =>
-    nonlinearCase({
+    finCase({
       profile: pinFin.profile(L),
       k: constantK(25),
       h: { kind: 'uniform', h: 0 },

@@ -15,7 +15,8 @@ import { describe, expect, test } from 'vitest';
 import type { Case } from '../../src/case/types.js';
 import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { fitObservedOrder } from '../../src/fd/study/refinement.js';
-import { AMBIENT_DEGC, KELVIN, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
+import { KELVIN, plateFin } from './support/cases.js';
+import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 
 const M = Math.sqrt(50); // plate fin with k = 200, h_b = 10: m^2 = h_b P / (k A) = 50 1/m^2
 const POWER_SCALE = Math.sqrt(10 * plateFin.P * 200 * plateFin.A) * 60;
@@ -24,17 +25,17 @@ const K_SCALE = Math.sqrt(25 * plateFin.P * 100 * plateFin.A) * 50;
 const ORACLES: { id: string; c: Case; q: number }[] = [
   {
     id: 'power-law h, n = 1/3, mL = 1, adiabatic tip (Sen & Trinh 1986; nonlinear.py: Q = 0.7183075317)',
-    c: nonlinearCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 1 / 3 }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + 60 }),
+    c: finCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 1 / 3 }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + 60 }),
     q: 0.7183075317 * POWER_SCALE,
   },
   {
     id: 'power-law h, n = 2, infinite fin cut at mL = 1 (Sen & Trinh 1986; nonlinear.py: Q = 0.707106781187)',
-    c: nonlinearCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 2 }, tip: { kind: 'infinite' }, base_degC: AMBIENT_DEGC + 60 }),
+    c: finCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 2 }, tip: { kind: 'infinite' }, base_degC: AMBIENT_DEGC + 60 }),
     q: 0.707106781187 * POWER_SCALE,
   },
   {
     id: 'k = k0 (1 + β θ), B = 0.5, m0 L = 2 (Aziz & Enamul-Huq 1975; nonlinear.py: Q = 1.097974842)',
-    c: nonlinearCase({
+    c: finCase({
       profile: plateFin.profile(2 / Math.sqrt(250)),
       k: { kind: 'table', T_degC: Float64Array.from([AMBIENT_DEGC, AMBIENT_DEGC + 50]), k: Float64Array.from([100, 150]) },
       h: { kind: 'uniform', h: 25 },
@@ -45,7 +46,7 @@ const ORACLES: { id: string; c: Case; q: number }[] = [
   },
   {
     id: 'radiation, T_b = 600 K, T_s = 300 K, L = 0.2 m (Bartas & Sellers 1960; nonlinear.py: q\' = 919.229832 W/m)',
-    c: nonlinearCase({
+    c: finCase({
       profile: plateFin.profile(0.2),
       k: constantK(180),
       h: { kind: 'uniform', h: 0 },
@@ -70,7 +71,7 @@ describe.each(ORACLES)('observed order: $id', ({ c, q }) => {
 
 describe('observed order without an oracle: tapered pin, power-law h, radiation and k(T), convective tip', () => {
   test('Celik three-grid order is 2 within 0.1', () => {
-    const c = nonlinearCase({
+    const c = finCase({
       profile: { kind: 'conical-pin', length: 0.05, baseDiameter: 0.006, tipDiameter: 0.002 },
       k: { kind: 'table', T_degC: Float64Array.from([0, 100, 300]), k: Float64Array.from([230, 210, 160]) },
       h: { kind: 'power', base: 12, exponent: 0.25 },

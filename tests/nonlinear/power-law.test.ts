@@ -15,7 +15,8 @@
  */
 import { describe, expect, test } from 'vitest';
 import { studyNonlinearFin1D, solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
-import { AMBIENT_DEGC, constantK, nonlinearCase, pinFin, plateFin, relative, type UniformFin } from './support/cases.js';
+import { pinFin, plateFin, type UniformFin } from './support/cases.js';
+import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 
 const THETA_B = 60;
 /** Both fins have m^2 = h_b P / (k A) = 50 1/m^2. */
@@ -26,7 +27,7 @@ const FINS: { fin: UniformFin; k: number; hBase: number }[] = [
 const M = Math.sqrt(50);
 
 function powerLawCase(fin: UniformFin, k: number, hBase: number, n: number, mL: number, tip: 'adiabatic' | 'infinite') {
-  return nonlinearCase({
+  return finCase({
     profile: fin.profile(mL / M),
     k: constantK(k),
     h: { kind: 'power', base: hBase, exponent: n },

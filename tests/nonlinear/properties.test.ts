@@ -19,7 +19,7 @@ import { describe, expect } from 'vitest';
 import type { Conductivity, HDistribution, Profile, TipCondition } from '../../src/case/types.js';
 import { solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { profileArbitrary } from '../fd1d/support/arbitraries.js';
-import { AMBIENT_DEGC, nonlinearCase } from './support/cases.js';
+import { AMBIENT_DEGC, finCase } from '../support/fin-case.js';
 
 type Law = { kind: 'power'; C: number; n: number } | { kind: 'fixed'; h: HDistribution };
 
@@ -90,7 +90,7 @@ function tipOf(f: RandomFin): TipCondition {
 
 function caseAt(f: RandomFin, thetaBase: number) {
   const h: HDistribution = f.law.kind === 'power' ? { kind: 'power', base: f.law.C * (thetaBase / 50) ** f.law.n, exponent: f.law.n } : f.law.h;
-  return nonlinearCase({
+  return finCase({
     profile: f.profile,
     edges: f.edges,
     k: f.k,

@@ -13,7 +13,8 @@
  */
 import { describe, expect, test } from 'vitest';
 import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
-import { KELVIN, constantK, nonlinearCase, plateFin, relative } from './support/cases.js';
+import { KELVIN, plateFin } from './support/cases.js';
+import { constantK, finCase, relative } from '../support/fin-case.js';
 
 /** Computed reference values (nonlinear.py): T_b, T_s (K), q'_inf, then for L = 0.05 and 0.2 m: T_tip (K), q' (W/m). */
 const TABLE: { Tb: number; Ts: number; infinite: number; rows: { L: number; tip: number; q: number }[] }[] = [
@@ -26,7 +27,7 @@ const TABLE: { Tb: number; Ts: number; infinite: number; rows: { L: number; tip:
 const AMBIENT = 20;
 
 function radiatingCase(Tb: number, Ts: number, L: number, tip: 'adiabatic' | 'infinite') {
-  return nonlinearCase({
+  return finCase({
     profile: plateFin.profile(L),
     k: constantK(180),
     h: { kind: 'uniform', h: 0 },
@@ -70,7 +71,7 @@ describe('convection (power law) and radiation to surroundings colder than the f
   // integral of the whole remaining fin (nonlinear-boundary.ts), so the heat rate must not depend on
   // where the fin is cut, and the short fin's tip temperature must be the long fin's temperature there.
   const make = (L: number) =>
-    nonlinearCase({
+    finCase({
       profile: { kind: 'pin', length: L, diameter: 0.001 },
       k: { kind: 'table', T_degC: Float64Array.from([0, 200]), k: Float64Array.from([160, 140]) },
       h: { kind: 'power', base: 15, exponent: 0.25 },

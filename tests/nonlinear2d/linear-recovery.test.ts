@@ -17,7 +17,7 @@ import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
 import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { solveNonlinearFin2D } from '../../src/fd/two-d/nonlinear-solve.js';
 import { studyNonlinearFin2D } from '../../src/fd/two-d/nonlinear-study.js';
-import { AMBIENT_DEGC, constantK, finCase } from './support.js';
+import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const HEAT_RATE_ALLOWANCE = 2e-11;
 const FIELD_ALLOWANCE = 1e-11;

@@ -15,10 +15,9 @@
 import { fc, test } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import type { Case, Conductivity, HDistribution, Profile } from '../../src/case/types.js';
-import { SolverError } from '../../src/errors.js';
 import { powerLawHInfiniteQ } from '../../src/analytic/nonlinear.js';
 import { solveNonlinearFin2D } from '../../src/fd/two-d/nonlinear-solve.js';
-import { AMBIENT_DEGC, constantK, finCase } from './support.js';
+import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const profileArbitrary: fc.Arbitrary<Profile> = fc.oneof(
   fc.record({ kind: fc.constant('rectangular' as const), length: fc.double({ min: 0.01, max: 0.08, noNaN: true }), thickness: fc.double({ min: 0.001, max: 0.008, noNaN: true }), width: fc.constant(0.1) }),

@@ -1,43 +1,12 @@
 /**
- * Normalised cases (SI, degC) for the nonlinear fd-2d tests. The plate fins are per metre of width with
- * insulated side edges (A = t x 1 m, P = 2 m), the fin of the reference sheet's section 6 oracles.
+ * Helpers for the nonlinear fd-2d tests (the cases come from tests/support/fin-case.ts). The plate fins are
+ * per metre of width with insulated side edges (A = t x 1 m, P = 2 m), the fin of the first-integral oracles (tests/reference/nonlinear.py).
  * Inputs are invented; the oracles are dimensionless.
  */
-import type { Case, Conductivity, HDistribution, Profile, TipCondition } from '../../src/case/types.js';
+import type { Conductivity, Profile } from '../../src/case/index.js';
+import { AMBIENT_DEGC } from '../support/fin-case.js';
 
-export const AMBIENT_DEGC = 20;
 export const KELVIN = 273.15;
-
-export interface Inputs {
-  profile: Profile;
-  k: Conductivity;
-  h: HDistribution;
-  tip?: TipCondition;
-  /** Base temperature, degC. */
-  base_degC: number;
-  emissivity?: number;
-  /** Radiating surroundings, degC (default: ambient). */
-  surroundings_degC?: number;
-  contactResistance?: number;
-}
-
-export function finCase(inputs: Inputs): Case {
-  return {
-    name: 'nonlinear 2-D test case',
-    fin: { profile: inputs.profile, edges: 'insulated' },
-    material: { name: 'custom', k: inputs.k, source: 'given in the case file' },
-    convection: {
-      ambient_degC: AMBIENT_DEGC,
-      h: inputs.h,
-      tip: inputs.tip ?? { kind: 'adiabatic' },
-      emissivity: inputs.emissivity ?? 0,
-      surroundings_degC: inputs.surroundings_degC ?? AMBIENT_DEGC,
-    },
-    base: { T_degC: inputs.base_degC, contactResistance: inputs.contactResistance ?? 0 },
-  };
-}
-
-export const constantK = (k: number): Conductivity => ({ kind: 'constant', k });
 
 /** k linear in θ from k0 at the fluid temperature to k0 (1 + B) at the base: k = k0 (1 + β θ), β = B/θ_b. */
 export function linearK(k0: number, B: number, thetaBase: number): Conductivity {

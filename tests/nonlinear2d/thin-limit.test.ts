@@ -1,6 +1,6 @@
 /**
  * Thin limit: as the Biot number across the thickness goes to 0 at fixed fin parameter, the nonlinear 2-D
- * solution must approach the 1-D first-integral solutions of references.md section 6, and the gap must be
+ * solution must approach the 1-D first-integral solutions (sources below; values: tests/reference/nonlinear.py), and the gap must be
  * linear in Bi (the first-order thickness correction: the face runs colder than the mid-plane by about
  * Bi/2 of the local excess, so the 2-D fin loses less heat).
  *
@@ -23,7 +23,8 @@ import { describe, expect, it } from 'vitest';
 import { STEFAN_BOLTZMANN } from '../../src/fd/problem/fin-problem.js';
 import { studyNonlinearFin2D } from '../../src/fd/two-d/nonlinear-study.js';
 import type { Case } from '../../src/case/types.js';
-import { AMBIENT_DEGC, KELVIN, constantK, finCase, linearK, logSlope, plate } from './support.js';
+import { KELVIN, linearK, logSlope, plate } from './support.js';
+import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const THETA_B = 50;
 

@@ -1,6 +1,6 @@
 /**
  * Temperature and heat-flow profiles of every model (src/compare/model-profiles.ts) against the closed
- * forms of the uniform fin. Check values: check case R1 (invented inputs; closed forms of Incropera et al., Table 3.4, from memory; k = 180,
+ * forms of the uniform fin. Check values: check case R1 (invented inputs; closed forms of Incropera et al. 2007, Table 3.4, from memory; k = 180,
  * h = 40, t = 2 mm, w = 50 mm, cooled edges, L = 30 mm, theta_b = 60 K): computed reference values
  * (scipy/mpmath script uniform_fin.py), closed forms of Incropera, DeWitt, Bergman & Lavine,
  * Fundamentals of Heat and Mass Transfer, Table 3.4 (table number from memory).
@@ -44,7 +44,7 @@ function thetaAt(p: ModelProfile, x: number): number {
 const last = (a: Float64Array): number => a[a.length - 1] as number;
 const L = 0.03;
 
-describe('shortcut profiles on the uniform fin R1 (Incropera et al. Table 3.4; computed reference values, uniform_fin.py)', () => {
+describe('shortcut profiles on the uniform fin R1 (Incropera et al. 2007, Table 3.4; computed reference values, uniform_fin.py)', () => {
   // The values are quoted to 10 significant digits; the closed forms here are evaluated in double
   // precision, so 1e-9 relative covers the quoting.
   const rel = 1e-9;
@@ -91,7 +91,7 @@ describe('shortcut profiles on the uniform fin R1 (Incropera et al. Table 3.4; c
   });
 });
 
-describe('fd-1d profile of R1 against tip A (Incropera et al. Table 3.4; computed reference values)', () => {
+describe('fd-1d profile of R1 against tip A (Incropera et al. 2007, Table 3.4; computed reference values)', () => {
   it('temperatures, base heat rate and tip flow', async () => {
     const { profiles } = await checkPlotInput(r1('convective'), { tolerance: 0.02, reference: '1d', ledger: false });
     const p = profileOf(profiles.profiles, 'fd-1d');

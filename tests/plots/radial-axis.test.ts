@@ -9,12 +9,25 @@ import { fluxChartSpec } from '../../src/plots/flux-chart.js';
 import { heatmapChartSpec } from '../../src/plots/heatmap-chart.js';
 import { profileChartSpec, type CheckPlotInput } from '../../src/plots/profile-chart.js';
 import { checkPlotInput, fieldStudy } from '../../src/plots/sources.js';
-import { finCase } from '../fd2d/cases.js';
+import { TEMPERATURES_2D } from '../fd2d/cases.js';
+import { finCase } from '../support/fin-case.js';
 import { svgTexts } from '../images/helpers.js';
 
 const size = { width: 1200, height: 750 };
-const annular: Case = finCase({ kind: 'annular', innerRadius: 3.1e-3, outerRadius: 5.6e-3, thickness: 5e-4 }, 209, { kind: 'uniform', h: 45 }, { kind: 'adiabatic' });
-const straight: Case = finCase({ kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 }, 180, { kind: 'uniform', h: 40 }, { kind: 'adiabatic' });
+const annular: Case = finCase({
+  profile: { kind: 'annular', innerRadius: 3.1e-3, outerRadius: 5.6e-3, thickness: 5e-4 },
+  k: 209,
+  h: { kind: 'uniform', h: 45 },
+  tip: { kind: 'adiabatic' },
+  ...TEMPERATURES_2D,
+});
+const straight: Case = finCase({
+  profile: { kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 },
+  k: 180,
+  h: { kind: 'uniform', h: 40 },
+  tip: { kind: 'adiabatic' },
+  ...TEMPERATURES_2D,
+});
 const RADIUS_AXIS = 'Radius r (mm): r1 = 3.1 at the tube, r2 = 5.6 at the rim';
 
 let input: CheckPlotInput;

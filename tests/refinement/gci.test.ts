@@ -19,7 +19,7 @@ describe('richardsonGci (Celik et al. 2008 procedure)', () => {
 
   it('on the exact discrete solution of the 3-point fin scheme (mL = 1, N = 40/20/10) the GCI bounds the true error', () => {
     // Discrete oracle: theta_i = cosh(mu (N - i)) / cosh(mu N), cosh mu = 1 + (mL/N)^2 / 2, base heat from
-    // the half-cell balance; the exact fin value is tanh(mL) (Incropera et al., Table 3.4, adiabatic tip; from memory).
+    // the half-cell balance; the exact fin value is tanh(mL) (Incropera et al. 2007, Table 3.4, adiabatic tip; from memory).
     const q = (mL: number, n: number): number => {
       const d = 1 / n;
       const mu = Math.acosh(1 + (mL * d) ** 2 / 2);

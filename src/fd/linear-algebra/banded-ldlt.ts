@@ -10,7 +10,7 @@
  *     e_j <- e_j - S_ji e_i / d_i        (S the current Schur complement, d_i the pivot),
  *     d_i  = e_i - sum_{k > i} S_ik,
  * which for couplings S_ik <= 0 adds numbers of one sign only: the pivots keep full relative accuracy.
- * This is the idea of Grassmann, Taufer & Heyman (1985), "Regenerative analysis and steady state
+ * This is the idea of Grassmann, Taksar & Heyman (1985), "Regenerative analysis and steady state
  * distributions for Markov chains", Oper. Res. 33, 1107-1116 [from memory], applied to a symmetric band.
  * Storage: the upper band of S row by row, U[i * (w + 1) + t] = S(i, i + t), t = 1..w, w = nodesY + 1.
  * Cost ~ N w^2 / 2 multiply-adds, as for Cholesky, but right-looking (writes the trailing band), so slower;

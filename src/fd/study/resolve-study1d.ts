@@ -117,7 +117,10 @@ export function resolveStudy1D<S extends { readonly study: RefinementStudy }>(
   const budgetWords = `finest grid at most ${budget.maxFinestNodes} nodes`;
   let nodes = [...DEFAULT_STUDY_NODES];
   let study = run(nodes, 'auto');
-  const words = (g: DecayGrading | null): string => (g === null ? 'default grading' : `graded to the decay length 1/m at the ${g.toward === 'both' ? 'base and tip' : 'base'} (geometric, stretch ${g.stretch.toPrecision(3)})`);
+  const words = (g: DecayGrading | null): string =>
+    g === null
+      ? 'default grading'
+      : `graded to the decay length 1/m at the ${g.toward === 'both' ? 'base and tip' : 'base'} (geometric, stretch ${g.stretch.toPrecision(3)})`;
   if (study.study.gci <= target) {
     return { study, resolution: { target, resolved: true, nodes, refinements: 0, grading: 'default grading', budget: budgetWords } };
   }
@@ -138,7 +141,11 @@ export function resolveStudy1D<S extends { readonly study: RefinementStudy }>(
 }
 
 /** The resolved refinement study of a linear 1-D problem (decay grading from its own h, P, k, A). */
-export function resolveFinProblem1D(problem: FinProblem1D, target: number, budget: ResolutionBudget = DEFAULT_RESOLUTION_BUDGET): { study: Fin1DStudy; resolution: Resolution } {
+export function resolveFinProblem1D(
+  problem: FinProblem1D,
+  target: number,
+  budget: ResolutionBudget = DEFAULT_RESOLUTION_BUDGET,
+): { study: Fin1DStudy; resolution: Resolution } {
   return resolveStudy1D((nodes, g) => studyFinProblem1D(problem, { nodes, grading: g }), decayGradingOf(problem), target, budget);
 }
 

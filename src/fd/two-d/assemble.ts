@@ -73,7 +73,11 @@ export function assembleConduction2D(grid: Grid2D, k: number): Stencil9 {
       const b = a + ny;
       const c = b + 1;
       const d = a + 1;
-      const kAcross = acrossConductivity(k, (x[b] as number) - (x[a] as number), Math.max((y[d] as number) - (y[a] as number), (y[c] as number) - (y[b] as number)));
+      const kAcross = acrossConductivity(
+        k,
+        (x[b] as number) - (x[a] as number),
+        Math.max((y[d] as number) - (y[a] as number), (y[c] as number) - (y[b] as number)),
+      );
       if (diagonal[i * (ny - 1) + j] === 0) {
         // Triangles (a, b, c) and (a, c, d).
         const t1 = triangleCouplings(x, y, a, b, c, k, kAcross, section);

@@ -7,7 +7,7 @@
 import { fc } from '@fast-check/vitest';
 import type { HDistribution, Profile, TipCondition } from '../../../src/case/types.js';
 import type { LinearFinCase } from '../../../src/fd/problem/linear-case.js';
-import { AMBIENT_DEGC, linearCase } from './cases.js';
+import { AMBIENT_DEGC, linearFinCase } from '../../support/fin-case.js';
 
 const length = fc.double({ min: 0.005, max: 0.2, noNaN: true });
 const thickness = fc.double({ min: 2e-4, max: 0.01, noNaN: true });
@@ -107,6 +107,6 @@ export const finCaseArbitrary: fc.Arbitrary<LinearFinCase> = fc
   })
   .chain(({ profile, thetaBase, k, edges, contact }) =>
     fc.record({ h: hArbitrary(lengthOf(profile)), tip: tipArbitrary(thetaBase) }).map(({ h, tip }) =>
-      linearCase({ profile, thetaBase, k, edges, contactResistance: contact, h, tip }),
+      linearFinCase({ profile, thetaBase, k, edges, contactResistance: contact, h, tip }),
     ),
   );

@@ -1,19 +1,20 @@
 /**
- * Timings of the 2-D solver (not a test: run `npx tsx tests/fd2d/timing2d.ts`). Medians of several runs,
+ * Timings of the 2-D solver (not a test: run `npx tsx bench/twod-timings.ts`). Medians of several runs,
  * after a warm-up. Grids: nodes along x nodes across. The shared machine is noisy: run it when idle.
  *   2000x20    thin plate fin (L/b = 40), banded Cholesky (the automatic choice)
  *   10000x50   thin plate fin, automatic choice, and both methods
  *   1000x1000  thick plate fin (L/b = 10), MG-PCG
  *   study      studyFin2D on a typical air-cooled aluminium fin (3 grids)
  */
-import type { Case } from '../../src/case/types.js';
-import { assembleConduction2D } from '../../src/fd/two-d/assemble.js';
-import { buildSystem2D, discretizeBoundaries } from '../../src/fd/two-d/boundary.js';
-import { fin2dProblem } from '../../src/fd/two-d/problem.js';
-import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
-import { prepareSolver2D, type SolverMethod } from '../../src/fd/linear-algebra/auto-solver.js';
-import { buildGrid2D } from '../../src/mesh/grid2d.js';
-import { finCase } from './cases.js';
+import type { Case } from '../src/case/types.js';
+import { assembleConduction2D } from '../src/fd/two-d/assemble.js';
+import { buildSystem2D, discretizeBoundaries } from '../src/fd/two-d/boundary.js';
+import { fin2dProblem } from '../src/fd/two-d/problem.js';
+import { studyFin2D } from '../src/fd/two-d/linear-study.js';
+import { prepareSolver2D, type SolverMethod } from '../src/fd/linear-algebra/auto-solver.js';
+import { buildGrid2D } from '../src/mesh/grid2d.js';
+import { finCase } from '../tests/support/fin-case.js';
+import { TEMPERATURES_2D } from '../tests/fd2d/cases.js';
 
 const median = (v: number[]): number => [...v].sort((a, b) => a - b)[Math.floor(v.length / 2)] as number;
 
@@ -47,8 +48,8 @@ function time(label: string, c: Case, nx: number, ny: number, method: SolverMeth
   console.log(`${label.padEnd(28)} ${chosen.padEnd(16)} setup ${median(setup).toFixed(1)} ms  solve ${median(solve).toFixed(1)} ms  total ${total.toFixed(1)} ms  rss ${(rss / 2 ** 20).toFixed(0)} MB`);
 }
 
-const thin = finCase({ kind: 'rectangular', length: 0.04, thickness: 0.002, width: 0.08 }, 205, { kind: 'uniform', h: 40 }, { kind: 'convective', h: null });
-const thick = finCase({ kind: 'rectangular', length: 0.02, thickness: 0.004, width: 0.08 }, 20, { kind: 'uniform', h: 2000 }, { kind: 'convective', h: null });
+const thin = finCase({ profile: { kind: 'rectangular', length: 0.04, thickness: 0.002, width: 0.08 }, k: 205, h: { kind: 'uniform', h: 40 }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
+const thick = finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.004, width: 0.08 }, k: 20, h: { kind: 'uniform', h: 2000 }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
 
 const which = process.argv[2] ?? 'all';
 if (which === 'all' || which === 'small') time('2000x20 thin', thin, 2000, 20, 'auto', 9);

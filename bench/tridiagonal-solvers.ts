@@ -1,20 +1,20 @@
 /**
  * Timing of the tridiagonal solvers and of the fd-1d study (not a test: run with
- * `npx tsx tests/fd1d/bench-tridiagonal.ts`). Prints medians of repeated runs: wall time and CPU
+ * `npx tsx bench/tridiagonal-solvers.ts`). Prints medians of repeated runs: wall time and CPU
  * time of this process (the CPU time excludes waiting when other processes share the cores).
  *
  * Systems: the assembled fin system (check case R1, invented inputs: k = 180, h = 40, t = 2 mm,
  * w = 50 mm, L = 30 mm; drop form) with 1e6 nodes,
  * and 1e4 solves of a 1000-node system, into preallocated arrays (the `...Into` variants).
  */
-import { assembleFin1D } from '../../src/fd/one-d/assemble.js';
-import { conservativeThomasInto } from '../../src/fd/linear-algebra/conservative-thomas.js';
-import { dropSystem } from '../../src/fd/one-d/drop-system.js';
-import { studyFin1D } from '../../src/fd/one-d/linear-solve.js';
-import { thomasInto, twoSidedThomasInto, type RowSumSystem, type TridiagonalSystem } from '../../src/fd/linear-algebra/tridiagonal.js';
-import { taperedGeometry } from '../../src/mesh/geometry1d.js';
-import { buildMesh1D } from '../../src/mesh/grid1d.js';
-import { linearCase } from './support/cases.js';
+import { assembleFin1D } from '../src/fd/one-d/assemble.js';
+import { conservativeThomasInto } from '../src/fd/linear-algebra/conservative-thomas.js';
+import { dropSystem } from '../src/fd/one-d/drop-system.js';
+import { studyFin1D } from '../src/fd/one-d/linear-solve.js';
+import { thomasInto, twoSidedThomasInto, type RowSumSystem, type TridiagonalSystem } from '../src/fd/linear-algebra/tridiagonal.js';
+import { taperedGeometry } from '../src/mesh/geometry1d.js';
+import { buildMesh1D } from '../src/mesh/grid1d.js';
+import { linearFinCase } from '../tests/support/fin-case.js';
 
 const geometry = taperedGeometry({ shape: 'straight', length: 0.03, baseSize: 0.002, tipSize: 0.002, exponent: 0, width: 0.05 });
 
@@ -65,8 +65,8 @@ for (const [name, solve] of SOLVERS) {
   console.log(`${name.padEnd(44)} 1e6 nodes: ${report(singles, 2)} | 1e4 x 1000 nodes: ${report(batches, 1)}`);
 }
 
-const fin = linearCase({
-  profile: { kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 },
+const fin = linearFinCase({
+  edges: 'cooled', profile: { kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 },
   k: 180, h: { kind: 'uniform', h: 40 }, tip: { kind: 'convective', h: null }, thetaBase: 60,
 });
 for (let warm = 0; warm < 20; warm++) studyFin1D(fin);

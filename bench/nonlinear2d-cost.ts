@@ -1,6 +1,6 @@
 /**
  * Cost of a nonlinear fd-2d solve against the linear one on the same grid (not a test: run with
- * `npx tsx tests/nonlinear2d/bench-nonlinear2d.ts`). Target: nonlinear <= 15x linear. Medians of repeated
+ * `npx tsx bench/nonlinear2d-cost.ts`). Target: nonlinear <= 15x linear. Medians of repeated
  * runs after a warm-up, wall and CPU time of this process (the CPU time excludes waiting for a shared core).
  *
  * Fins (invented inputs): a 60 mm x 3 mm aluminium plate in still air, h = 6.5 (theta/theta_b)^(1/4) with
@@ -8,12 +8,12 @@
  * h = 6.5 W/(m^2 K), no radiation, k = 205. Grids: the check study's finest (185 x 33), a longer one
  * (1025 x 33, banded), a fine one (369 x 129, MG-PCG), and the whole three-grid study.
  */
-import type { Case } from '../../src/case/types.js';
-import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
-import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
-import { solveNonlinearFin2D } from '../../src/fd/two-d/nonlinear-solve.js';
-import { studyNonlinearFin2D } from '../../src/fd/two-d/nonlinear-study.js';
-import { finCase } from './support.js';
+import type { Case } from '../src/case/types.js';
+import { solveFin2D } from '../src/fd/two-d/linear-solve.js';
+import { studyFin2D } from '../src/fd/two-d/linear-study.js';
+import { solveNonlinearFin2D } from '../src/fd/two-d/nonlinear-solve.js';
+import { studyNonlinearFin2D } from '../src/fd/two-d/nonlinear-study.js';
+import { finCase } from '../tests/support/fin-case.js';
 
 const median = (v: number[]): number => [...v].sort((a, b) => a - b)[v.length >> 1] as number;
 
