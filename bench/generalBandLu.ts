@@ -21,7 +21,7 @@
  * bandwidth is nodesX + 1 (2001 on a 2000 x 20 grid: 1.3 GB of band and ~1.6e11 multiply-adds), which
  * cannot run here at all.
  */
-import { couplingOf, type Stencil9 } from '../src/fd/sparse/stencil9.js';
+import { couplingOf, type Stencil9 } from '../src/fd/linear-algebra/stencil9.js';
 
 export interface Csr {
   readonly size: number;

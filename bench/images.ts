@@ -9,9 +9,9 @@
  * The solves are done once, outside the timed part. resvg is loaded before timing (warm-up runs).
  */
 import { loadCase } from '../src/case/parse.js';
-import { solveFin1D } from '../src/fd/fin1d.js';
-import { solveFin2D } from '../src/fd/fin2d.js';
-import { isLinearFinCase } from '../src/fd/linear-case.js';
+import { solveFin1D } from '../src/fd/one-d/linear-solve.js';
+import { solveFin2D } from '../src/fd/two-d/linear-solve.js';
+import { isLinearFinCase } from '../src/fd/problem/linear-case.js';
 import { fieldChart, type FieldChartSpec } from '../src/images/field-chart.js';
 import { lineChart, type LineChartSpec } from '../src/images/line-chart.js';
 import { svgToPng } from '../src/images/render.js';

@@ -4,9 +4,9 @@
  * power law h ~ theta^(1/4), and power law + radiation + a conductivity table.
  */
 import { parseCaseObject } from '../src/case/parse.js';
-import { solveFin1D } from '../src/fd/fin1d.js';
-import { isLinearFinCase } from '../src/fd/linear-case.js';
-import { solveNonlinearFin1D } from '../src/fd/nonlinear1d.js';
+import { solveFin1D } from '../src/fd/one-d/linear-solve.js';
+import { isLinearFinCase } from '../src/fd/problem/linear-case.js';
+import { solveNonlinearFin1D } from '../src/fd/one-d/nonlinear-solve.js';
 import { cpuText, formatMs, timeTask, type BenchRow } from './measure.js';
 
 const NODES = 4001;

@@ -9,10 +9,10 @@
  * (1025 x 33, banded), a fine one (369 x 129, MG-PCG), and the whole three-grid study.
  */
 import type { Case } from '../src/case/types.js';
-import { solveFin2D } from '../src/fd/fin2d.js';
-import { studyFin2D } from '../src/fd/fin2dStudy.js';
-import { solveNonlinearFin2D } from '../src/fd/nonlinear2d.js';
-import { studyNonlinearFin2D } from '../src/fd/nonlinear2d-study.js';
+import { solveFin2D } from '../src/fd/two-d/linear-solve.js';
+import { studyFin2D } from '../src/fd/two-d/linear-study.js';
+import { solveNonlinearFin2D } from '../src/fd/two-d/nonlinear-solve.js';
+import { studyNonlinearFin2D } from '../src/fd/two-d/nonlinear-study.js';
 import { finCase } from '../tests/support/fin-case.js';
 
 const median = (v: number[]): number => [...v].sort((a, b) => a - b)[v.length >> 1] as number;

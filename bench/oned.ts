@@ -9,13 +9,13 @@
  * and the two-sided twoSidedThomasInto. All `...Into` calls write into preallocated arrays.
  */
 import { loadCase } from '../src/case/parse.js';
-import { assembleFin1D } from '../src/fd/assemble1d.js';
-import { hAtNodes, hBreakpoints } from '../src/fd/convection1d.js';
-import { conservativeThomasInto } from '../src/fd/conservative-thomas.js';
-import { autoGrading, solveFinProblem1D } from '../src/fd/fin1d.js';
-import { isLinearFinCase } from '../src/fd/linear-case.js';
-import { finProblem1D, type FinProblem1D } from '../src/fd/problem1d.js';
-import { thomasInto, twoSidedThomasInto, type RowSumSystem } from '../src/fd/tridiagonal.js';
+import { assembleFin1D } from '../src/fd/one-d/assemble.js';
+import { hAtNodes, hBreakpoints } from '../src/fd/problem/convection.js';
+import { conservativeThomasInto } from '../src/fd/linear-algebra/conservative-thomas.js';
+import { autoGrading, solveFinProblem1D } from '../src/fd/one-d/linear-solve.js';
+import { isLinearFinCase } from '../src/fd/problem/linear-case.js';
+import { finProblem1D, type FinProblem1D } from '../src/fd/one-d/problem.js';
+import { thomasInto, twoSidedThomasInto, type RowSumSystem } from '../src/fd/linear-algebra/tridiagonal.js';
 import { buildMesh1D } from '../src/mesh/grid1d.js';
 import type { Mesh1D } from '../src/mesh/types.js';
 import { atMost, cpuText, formatMs, spread, timeTask, type BenchRow } from './measure.js';

@@ -7,11 +7,11 @@
  * w = 50 mm, L = 30 mm; drop form) with 1e6 nodes,
  * and 1e4 solves of a 1000-node system, into preallocated arrays (the `...Into` variants).
  */
-import { assembleFin1D } from '../src/fd/assemble1d.js';
-import { conservativeThomasInto } from '../src/fd/conservative-thomas.js';
-import { dropSystem } from '../src/fd/drop-system.js';
-import { studyFin1D } from '../src/fd/fin1d.js';
-import { thomasInto, twoSidedThomasInto, type RowSumSystem, type TridiagonalSystem } from '../src/fd/tridiagonal.js';
+import { assembleFin1D } from '../src/fd/one-d/assemble.js';
+import { conservativeThomasInto } from '../src/fd/linear-algebra/conservative-thomas.js';
+import { dropSystem } from '../src/fd/one-d/drop-system.js';
+import { studyFin1D } from '../src/fd/one-d/linear-solve.js';
+import { thomasInto, twoSidedThomasInto, type RowSumSystem, type TridiagonalSystem } from '../src/fd/linear-algebra/tridiagonal.js';
 import { taperedGeometry } from '../src/mesh/geometry1d.js';
 import { buildMesh1D } from '../src/mesh/grid1d.js';
 import { linearFinCase } from '../tests/support/fin-case.js';

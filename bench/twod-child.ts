@@ -6,8 +6,8 @@
  * and prints one JSON line (ChildReport). The system is built before timing; each timed run is the
  * whole solve (factor or iterate, then solve), as the library calls it.
  */
-import { autoSolver2D } from '../src/fd/sparse/autoSolver.js';
-import { bandedCholeskySolver } from '../src/fd/sparse/bandedCholesky.js';
+import { autoSolver2D } from '../src/fd/linear-algebra/auto-solver.js';
+import { bandedCholeskySolver } from '../src/fd/linear-algebra/banded-solve.js';
 import { generalBandLuSolve, stencilToCsr } from './generalBandLu.js';
 import { timeTask } from './measure.js';
 import { benchProblem2D, benchSystem2D, findIterativeSolver, relativeResidual, type BenchCase2D } from './twodSystems.js';

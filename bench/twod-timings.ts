@@ -7,11 +7,11 @@
  *   study      studyFin2D on a typical air-cooled aluminium fin (3 grids)
  */
 import type { Case } from '../src/case/types.js';
-import { assembleConduction2D } from '../src/fd/assemble2d.js';
-import { buildSystem2D, discretizeBoundaries } from '../src/fd/assemble2dBoundary.js';
-import { fin2dProblem } from '../src/fd/fin2dCase.js';
-import { studyFin2D } from '../src/fd/fin2dStudy.js';
-import { prepareSolver2D, type SolverMethod } from '../src/fd/sparse/autoSolver.js';
+import { assembleConduction2D } from '../src/fd/two-d/assemble.js';
+import { buildSystem2D, discretizeBoundaries } from '../src/fd/two-d/boundary.js';
+import { fin2dProblem } from '../src/fd/two-d/problem.js';
+import { studyFin2D } from '../src/fd/two-d/linear-study.js';
+import { prepareSolver2D, type SolverMethod } from '../src/fd/linear-algebra/auto-solver.js';
 import { buildGrid2D } from '../src/mesh/grid2d.js';
 import { finCase } from '../tests/support/fin-case.js';
 import { TEMPERATURES_2D } from '../tests/fd2d/cases.js';

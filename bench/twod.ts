@@ -12,10 +12,10 @@
  * Ratios are baseline median / library median, both medians of wall time in this run.
  */
 import { spawnSync } from 'node:child_process';
-import { solveFin2DProblem } from '../src/fd/fin2d.js';
-import { studyFin2DProblem } from '../src/fd/fin2dStudy.js';
-import { autoSolver2D } from '../src/fd/sparse/autoSolver.js';
-import { bandedCholeskyBytes, factorBandedCholesky } from '../src/fd/sparse/bandedCholesky.js';
+import { solveFin2DProblem } from '../src/fd/two-d/linear-solve.js';
+import { studyFin2DProblem } from '../src/fd/two-d/linear-study.js';
+import { autoSolver2D } from '../src/fd/linear-algebra/auto-solver.js';
+import { bandedCholeskyBytes, factorBandedCholesky } from '../src/fd/linear-algebra/banded-cholesky.js';
 import type { ChildReport } from './twod-child.js';
 import { bandLuBytes, generalBandLuSolve, relativeDifference, stencilToCsr } from './generalBandLu.js';
 import { atMost, cpuText, errored, formatMs, skipped, spread, timeTask, type BenchRow } from './measure.js';

@@ -13,11 +13,11 @@ import { readdirSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { loadCase, parseCaseText } from '../src/case/parse.js';
 import type { Case } from '../src/case/types.js';
-import { assembleConduction2D } from '../src/fd/assemble2d.js';
-import { buildSystem2D, discretizeBoundaries } from '../src/fd/assemble2dBoundary.js';
-import { DEFAULT_GRADING } from '../src/fd/fin2d.js';
-import { fin2dProblem, type Fin2DProblem } from '../src/fd/fin2dCase.js';
-import { residual, type Solver2D, type System2D } from '../src/fd/sparse/stencil9.js';
+import { assembleConduction2D } from '../src/fd/two-d/assemble.js';
+import { buildSystem2D, discretizeBoundaries } from '../src/fd/two-d/boundary.js';
+import { DEFAULT_GRADING } from '../src/fd/two-d/linear-solve.js';
+import { fin2dProblem, type Fin2DProblem } from '../src/fd/two-d/problem.js';
+import { residual, type Solver2D, type System2D } from '../src/fd/linear-algebra/stencil9.js';
 import { buildGrid2D } from '../src/mesh/grid2d.js';
 
 export type BenchCase2D = 'thin' | 'block';
@@ -89,7 +89,7 @@ const ITERATIVE_NAME = /multigrid|mgpcg|mg_?cg|pcg|conjugate/i;
  * (the solver is still being written), so that the benchmark can say so instead of failing to compile.
  */
 export async function findIterativeSolver(): Promise<FoundSolver | null> {
-  const folder = new URL('../src/fd/sparse/', import.meta.url);
+  const folder = new URL('../src/fd/linear-algebra/', import.meta.url);
   const files = readdirSync(folder).filter((f) => f.endsWith('.ts') && !f.endsWith('.d.ts'));
   for (const file of files) {
     let mod: Record<string, unknown>;
@@ -112,7 +112,7 @@ export async function findIterativeSolver(): Promise<FoundSolver | null> {
  * (`chooseSolverMethod(nodesX, nodesY)`); null while it does not.
  */
 export async function autoSolverChoice(nodesX: number, nodesY: number): Promise<string | null> {
-  const mod = (await import('../src/fd/sparse/autoSolver.js')) as Record<string, unknown>;
+  const mod = (await import('../src/fd/linear-algebra/auto-solver.js')) as Record<string, unknown>;
   const choose = mod['chooseSolverMethod'];
   if (typeof choose !== 'function') return null;
   const method: unknown = choose(nodesX, nodesY);

@@ -3,7 +3,7 @@
  * 0 done; 1 an unsafe shortcut with --strict; 2 bad input or usage; 3 solver failure.
  */
 import { Command, CommanderError } from 'commander';
-import { InputError, SolverError, UsageError, type SolverRemedy } from '../src/errors.js';
+import { GridError, InputError, SolverError, UsageError, type SolverRemedy } from '../src/errors.js';
 import type { Io } from './io.js';
 import { buildProgram } from './program.js';
 
@@ -42,6 +42,10 @@ function reportError(e: unknown, io: Io, command: string): number {
   if (e instanceof CommanderError) {
     // Help and version end with code 0; every other commander error is a usage error.
     if (e.code === 'commander.helpDisplayed' || e.code === 'commander.version' || e.code === 'commander.help') return 0;
+    return 2;
+  }
+  if (e instanceof GridError) {
+    io.err(errorLines(`--grid: ${e.reason}`));
     return 2;
   }
   if (e instanceof InputError || e instanceof UsageError) {

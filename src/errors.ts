@@ -49,6 +49,28 @@ export class SolverError extends Error {
   }
 }
 
+/**
+ * A model asked of a fin it does not cover (e.g. fd-2d on a nonlinear fin with an infinite tip).
+ * `reason` says why in the problem's words; ask first with modelApplies (src/fd) to avoid it.
+ */
+export class ModelNotApplicableError extends UsageError {
+  override name = 'ModelNotApplicableError';
+  constructor(
+    readonly model: 'fd-1d' | 'fd-2d',
+    readonly reason: string,
+  ) {
+    super(`${model}: ${reason}`);
+  }
+}
+
+/** A grid the model cannot use (too few or too many nodes); `reason` in the problem's words. */
+export class GridError extends UsageError {
+  override name = 'GridError';
+  constructor(readonly reason: string) {
+    super(`2-D grid: ${reason}`);
+  }
+}
+
 export function formatIssues(issues: InputIssue[], file?: string): string {
   const lines = issues.map((i) => {
     const where = i.line !== undefined ? `${file ?? 'case'}:${i.line}${i.column !== undefined ? `:${i.column}` : ''}: ` : file ? `${file}: ` : '';

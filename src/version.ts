@@ -1,2 +1,2 @@
-/** The fincheck version printed in reports and `--version` (kept in step with package.json by a test). */
+/** The fincheck version printed in reports and by the command line (kept in step with package.json by a test). */
 export const VERSION = '0.1.0';

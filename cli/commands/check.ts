@@ -3,6 +3,7 @@ import type { Command } from 'commander';
 import { runCheck, formatCheck } from '../../src/compare/index.js';
 import { loadCaseInput } from '../case-input.js';
 import type { Io, SetExit } from '../io.js';
+import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 
 export function registerCheck(program: Command, io: Io, setExit: SetExit): Command {
@@ -26,6 +27,7 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const c = await loadCaseInput(file, io);
+      requireReference(c, reference);
       const { report } = await runCheck(c, { tolerance, reference });
       io.out(o.json ? `${JSON.stringify({ ...report, warnings: c.warnings ?? [] }, null, 2)}\n` : formatCheck(c, report));
       if (o.strict && report.models.some((m) => m.verdict === 'unsafe')) setExit(1);

@@ -3,20 +3,7 @@ import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import {
-  type MapModelId,
-  formatMapSummary,
-  OutputsInterrupted,
-  renderMapFiles,
-  MapInterrupted,
-  progressBar,
-  prepareMap,
-  runMap,
-  MANIFEST_NAME,
-  removeFiles,
-  staleFiles,
-  StagedFiles,
-} from '../../src/map/index.js';
+import { type MapModelId, formatMapSummary, OutputsInterrupted, renderMapFiles, MapInterrupted, progressBar, prepareMap, runMap, MANIFEST_NAME, removeFiles, staleFiles, StagedFiles } from '../../src/map/index.js';
 import { asUsageError } from '../../src/report/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
@@ -123,6 +110,7 @@ Examples:
         tolerance,
         reference,
         ...(models ? { models } : {}),
+        labels: { x: '--x', y: '--y', models: '--models', reference: '--reference' },
       });
       printWarnings(prepared.warnings, io);
 

@@ -9,10 +9,11 @@ import type { Command } from 'commander';
 import { z } from 'zod';
 import { UsageError } from '../../src/errors.js';
 import { chartBytes, type ChartFormat } from '../../src/images/index.js';
-import { plotSvg, type PlotSources, checkPlotInput, fieldStudy, PLOT_KINDS, type PlotKind } from '../../src/plots/index.js';
+import { plotSvg, type PlotSources, checkPlotInput, fieldStudy, heatmapAvailability, PLOT_KINDS, type PlotKind } from '../../src/plots/index.js';
 import { writeFilesAtomically } from '../../src/report/index.js';
 import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
+import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 
 /** Canvas width and height in px at 96 dpi (the chart's layout size). */
@@ -101,10 +102,14 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const c = await loadCaseInput(file, io);
+      if (kind === 'heatmap') {
+        const available = heatmapAvailability(c);
+        if (!available.ok) throw new UsageError(`--kind heatmap: ${available.reason}`);
+      } else requireReference(c, reference);
 
       const sources: PlotSources =
         kind === 'heatmap'
-          ? { case: c, check: null, field: fieldStudy(c) }
+          ? { case: c, check: null, field: await fieldStudy(c) }
           : { case: c, check: await checkPlotInput(c, { tolerance, reference, ledger: false }), field: null };
       const svg = plotSvg(kind, sources, image, image.dpi / 96);
       const bytes = await chartBytes(svg, out.format, { dpi: image.dpi });

@@ -7,13 +7,14 @@
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { cleanFreeText, type Case } from '../../src/case/index.js';
+import { type Case, cleanFreeText } from '../../src/case/index.js';
 import type { CheckReport } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
 import { makeReport, REPORT_FILES, reportDate, writeFilesAtomically, type OutputFile } from '../../src/report/index.js';
 import { VERSION } from '../../src/version.js';
 import { loadCaseInput } from '../case-input.js';
 import type { Io, SetExit } from '../io.js';
+import { requireReference } from '../model-coverage.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
 import { dpiOption } from './plot.js';
@@ -53,6 +54,7 @@ export interface WrittenReport {
 /** Computes the report and writes it into `outDir` (also what `fincheck demo` uses). */
 export async function writeReport(request: ReportRequest): Promise<WrittenReport> {
   const c = request.case;
+  requireReference(c, request.reference);
   const content = await makeReport(c, {
     tolerance: request.tolerance,
     reference: request.reference,
@@ -116,7 +118,7 @@ Examples:
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
-      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH);
+      const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
       const c = await loadCaseInput(file, io);
       // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
       const interrupt = listenForInterrupt();

@@ -3,7 +3,7 @@
  * every value's own range). Each check returns issues naming the key to change and what it accepts.
  */
 import type { PendingIssue } from './issues.js';
-import type { KeyPath } from './keyPath.js';
+import type { KeyPath } from './key-path.js';
 import type { ValidatedCase } from './schema.js';
 
 type Fin = ValidatedCase['fin'];

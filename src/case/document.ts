@@ -7,7 +7,7 @@
  */
 import { LineCounter, isMap, isScalar, isSeq, parseDocument, type Node, type Pair } from 'yaml';
 import { clip, escapeControl, quoted } from './clip-text.js';
-import type { KeyPath } from './keyPath.js';
+import type { KeyPath } from './key-path.js';
 import type { Locate, PendingIssue, SourcePosition } from './issues.js';
 
 export type SourceFormat = 'yaml' | 'json';

@@ -3,7 +3,7 @@ export { bareLengthUnit, loadCase, maxCaseBytes, parseCaseObject, parseCaseText,
 export { caseJsonSchema, caseSchema, caseSchemaFor, profileNames, type ValidatedCase } from './schema.js';
 export { dimensionWarning, dimensionWarnings } from './plausibility.js';
 export { clip, cleanFreeText, quoted } from './clip-text.js';
-export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './keyPath.js';
+export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './key-path.js';
 export type { Locate, SourcePosition } from './issues.js';
 export { readDocument, detectFormat, type ReadDocument, type SourceFormat } from './document.js';
 export {
@@ -29,3 +29,5 @@ export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
 export { aboveAbsoluteZero, coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, fraction, nonNegative, positive, rangeText, temperatureRange } from './fields.js';
 export type { Range } from './fields.js';
+export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
+export type { CaseWarning } from './types.js';

@@ -5,7 +5,7 @@
 import type { z } from 'zod';
 import type { InputIssue } from '../errors.js';
 import { clip, escapeControl, maxEchoChars, quoted } from './clip-text.js';
-import { formatKeyPath, getByKeyPath, type KeyPath } from './keyPath.js';
+import { formatKeyPath, getByKeyPath, type KeyPath } from './key-path.js';
 
 /** An issue before the value and position are looked up. */
 export interface PendingIssue {

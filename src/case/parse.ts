@@ -11,7 +11,7 @@ import { fromZodIssues, toInputIssues, type Locate } from './issues.js';
 import { toCase } from './normalise.js';
 import { readCaseFile } from './read-input.js';
 import { caseName } from './case-name.js';
-import { getByKeyPath } from './keyPath.js';
+import { getByKeyPath } from './key-path.js';
 import { dimensionWarnings } from './plausibility.js';
 import { caseSchemaFor } from './schema.js';
 import { isLengthUnit, type LengthUnit } from './units.js';

@@ -7,7 +7,7 @@
  * of centimetres long and at most a few centimetres thick; a fin longer or wider than 1 m, or thicker than 0.1 m,
  * is rare enough to ask about.
  */
-import { getByKeyPath, formatKeyPath, type KeyPath } from './keyPath.js';
+import { getByKeyPath, formatKeyPath, type KeyPath } from './key-path.js';
 import { clip } from './clip-text.js';
 import type { CaseWarning } from './types.js';
 

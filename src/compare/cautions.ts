@@ -8,3 +8,13 @@ export const CAUTIONS: readonly string[] = [
 
 /** The one-line form printed on every chart (charts travel alone into design notes). */
 export const CHART_CAUTION = 'Estimates of an idealised fin: confirm by test; h is usually the largest uncertainty; follow applicable codes and practice.';
+
+/** How radiation is modelled, for notes and cautions. */
+export const RADIATION_VIEW_NOTE = 'radiation: grey faces that see only the surroundings (view factor 1; no exchange with the base or other fins)';
+
+/** The cautions of a fin: CAUTIONS, and for a radiating fin what its view factor leaves out. */
+export function cautionsFor(emissivity: number): string[] {
+  return emissivity > 0
+    ? [...CAUTIONS, `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`]
+    : [...CAUTIONS];
+}

@@ -3,10 +3,10 @@
  * radiation from the faces, conductivity that depends on temperature.
  *
  * Reference: as for linear fins (reference2d.ts), fd-2d across the thickness where the 2-D model covers the
- * case and --reference is auto or 2d, solved by Newton's method on the three grids of the 2-D study
+ * case and the reference asked for is auto or 2d, solved by Newton's method on the three grids of the 2-D study
  * (nonlinear2d*.ts); the straight fin's cooled side edges are added from fd-1d, the ledger's
  * "one-dimensional conduction" row compares fd-1d and fd-2d on the same idealisation, fd-1d is listed as a
- * model. Else (--reference 1d, or a case the 2-D model does not cover: a nonlinear infinite tip) fd-1d
+ * model. Else (a 1-D reference asked for, or a case the 2-D model does not cover: a nonlinear infinite tip) fd-1d
  * solved by Newton's method on the 1-D grids (refinement study as for linear fins).
  * The shortcuts need one h and one k: they are evaluated twice, with h and k at the base temperature and
  * with h and k averaged over the fin solved by fd-1d (linear-surrogate.ts). The ledger adds one row per
@@ -14,18 +14,14 @@
  * temperature), constant k (at the base temperature), no radiation.
  * Radiation: the fin sees only its surroundings (view factor 1, no exchange with the base or neighbours).
  */
-import type { Case } from '../case/types.js';
-import { UsageError } from '../errors.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
-import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
-import { studyNonlinearFin2D, type NonlinearFin2DStudy } from '../fd/nonlinear2d-study.js';
-import { finGeometry } from '../mesh/geometry1d.js';
+import type { Case } from '../case/index.js';
+import { ModelNotApplicableError } from '../errors.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D, nonlinear2dUnsupported, studyNonlinearFin2D, type NonlinearFin2DStudy, finProblem1D, decayGradingOf, resolveStudy1D } from '../fd/index.js';
+import { finGeometry } from '../mesh/index.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
 import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
-import { finProblem1D } from '../fd/problem1d.js';
-import { decayGradingOf, resolveStudy1D } from '../fd/resolve-study1d.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
 import { assumptionLedger, LEDGER_NODES } from './ledger.js';
 import { conductivityAt, GUESS_LABEL, linearSurrogate, type HGuess } from './linear-surrogate.js';
@@ -63,7 +59,7 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   if (opts.reference !== '1d') {
     const unsupported = nonlinear2dUnsupported(c);
     if (unsupported === null) candidate = reference2DWith(c, study, ref.idealHeatRate, effectivenessScale, true, nonlinearModels(radiationNote));
-    else if (opts.reference === '2d') throw new UsageError(`--reference 2d: ${unsupported}; use --reference 1d or auto`);
+    else if (opts.reference === '2d') throw new ModelNotApplicableError('fd-2d', unsupported);
     else outside2D = `; the 2-D model does not cover this fin (${unsupported})`;
   }
   const { twoD, fallback } = choose2DReference(candidate, opts.reference === '2d', target);

@@ -3,17 +3,13 @@
  * the assumption ledger, the design flags and the cautions (outputs.md).
  *
  * Pipeline (linear fins): case -> 1-D geometry -> equivalent uniform fin -> fd-1d refinement study ->
- * reference (fd-2d study where the case allows and --reference is auto or 2d, else fd-1d) -> shortcuts
+ * reference (fd-2d study where the case allows and the reference asked for is auto or 2d, else fd-1d) -> shortcuts
  * -> ledger -> flags. Nonlinear fins (power-law h, radiation, k over temperature): check-nonlinear.ts.
  */
-import type { Case } from '../case/types.js';
-import { initBessel } from '../analytic/bessel.js';
-import type { Fin1DStudy } from '../fd/fin1d.js';
-import { finProblem1D } from '../fd/problem1d.js';
-import { resolveFinProblem1D, type Resolution, type ResolutionBudget } from '../fd/resolve-study1d.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
-import { finGeometry } from '../mesh/geometry1d.js';
+import type { Case } from '../case/index.js';
+import { initBessel } from '../analytic/index.js';
+import { type Fin1DStudy, finProblem1D, resolveFinProblem1D, type Resolution, type ResolutionBudget, type Fin2DStudy, isLinearFinCase, type LinearFinCase } from '../fd/index.js';
+import { finGeometry, type FinGeometry1D } from '../mesh/index.js';
 import { CAUTIONS } from './cautions.js';
 import { nonlinearCheck } from './check-nonlinear.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
@@ -25,7 +21,6 @@ import { evaluateShortcuts } from './shortcuts.js';
 import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote, type EfficiencyBasis } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution1D, resolution2D, resolutionTarget } from './resolved-reference.js';
 import type { CheckReport, Flag, ReferenceResult } from './types.js';
-import type { FinGeometry1D } from '../mesh/types.js';
 
 export interface CheckOptions {
   /** Relative drift accepted as `ok` (0.02 = 2 %). */

@@ -12,16 +12,8 @@
  * Returns the base heat rate as an affine function of the base excess, so a contact resistance can be
  * put in series exactly: q(theta0) = slope * theta0 + offset (offset != 0 only for a prescribed tip).
  */
-import type { LinearFinCase } from '../fd/linear-case.js';
-import { annularFin, annularFinConvectiveTip } from '../analytic/annular.js';
-import { conicalSpine, truncatedConicalSpine } from '../analytic/spine-profiles.js';
-import {
-  straightConcaveParabolicFin,
-  straightConvexParabolicFin,
-  straightTrapezoidalFin,
-  straightTriangularFin,
-} from '../analytic/straight-profiles.js';
-import { uniformFin, type UniformTip } from '../analytic/uniform-fin.js';
+import type { LinearFinCase } from '../fd/index.js';
+import { annularFin, annularFinConvectiveTip, conicalSpine, truncatedConicalSpine, straightConcaveParabolicFin, straightConvexParabolicFin, straightTrapezoidalFin, straightTriangularFin, uniformFin, type UniformTip } from '../analytic/index.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 
 export interface AffineHeatRate {

@@ -1,5 +1,5 @@
 /** One-line, unit-bearing descriptions of a case's inputs, for terminal output and reports. */
-import type { Case, HDistribution, Profile, TipCondition } from '../case/types.js';
+import type { Case, HDistribution, Profile, TipCondition } from '../case/index.js';
 
 const mm = (m: number): string => `${+(m * 1000).toPrecision(4)} mm`;
 const num = (x: number): string => `${+x.toPrecision(4)}`;

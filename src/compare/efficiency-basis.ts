@@ -16,7 +16,7 @@
  *   - prescribed tip temperature: heat can enter the fin through its tip (a tip held near or above the base
  *     temperature), so Q/Q_ideal can legitimately exceed 1: a note says so.
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 
 export interface EfficiencyBasis {
   /** Q_ideal, W; null when the model's surface is infinite (no efficiency). */

@@ -5,10 +5,9 @@
  *
  * Units: m, m^2, W/(m^2*K), W/(m*K), K.
  */
-import type { Case } from '../case/types.js';
-import { hAt, idealConvectiveConductance } from '../fd/convection1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
-import type { FinGeometry1D } from '../mesh/types.js';
+import type { Case } from '../case/index.js';
+import { hAt, idealConvectiveConductance, type LinearFinCase } from '../fd/index.js';
+import type { FinGeometry1D } from '../mesh/index.js';
 
 export interface EquivalentUniformFin {
   family: FinGeometry1D['shape'];

@@ -1,5 +1,5 @@
 /** Plain-text rendering of a check report for the terminal (the default output of `fincheck check`). */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import { describeCase } from './describe-case.js';
 import { signedPercentText } from './percent-text.js';
 import type { CheckReport, Flag } from './types.js';

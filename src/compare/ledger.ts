@@ -6,12 +6,11 @@
  * discretisation errors cancel to well below the drifts shown (both are O(1/N^2) with nearly the same
  * constant). The corrected-length row compares two closed forms on the equivalent uniform fin.
  */
-import type { Case, HDistribution, Profile } from '../case/types.js';
-import { uniformFin } from '../analytic/uniform-fin.js';
+import type { Case, HDistribution, Profile } from '../case/index.js';
+import { uniformFin } from '../analytic/index.js';
 import { unusableEquivalent } from './shortcuts.js';
-import { solveFin1D } from '../fd/fin1d.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import type { FinGeometry1D } from '../mesh/types.js';
+import { solveFin1D, isLinearFinCase } from '../fd/index.js';
+import type { FinGeometry1D } from '../mesh/index.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { AssumptionRow, ModelId } from './types.js';
 

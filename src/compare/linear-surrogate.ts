@@ -10,10 +10,9 @@
  * Power-law h: h(theta) = h_b (theta/theta_b)^n. Conductivity tables: linear between points, constant
  * beyond the ends (as the solver). Units: W/(m^2*K), W/(m*K), K.
  */
-import type { Case, Conductivity, HDistribution } from '../case/types.js';
-import type { Fin1DResult } from '../fd/fin1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
-import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../fd/nonlinear-problem.js';
+import type { Case, Conductivity, HDistribution } from '../case/index.js';
+import { KELVIN_OFFSET, STEFAN_BOLTZMANN, type Fin1DResult } from '../fd/index.js';
+import { isLinearFinCase, type LinearFinCase } from '../fd/index.js';
 
 export type HGuess = 'base' | 'mean';
 
@@ -118,4 +117,19 @@ export function linearSurrogate(c: Case, guess: HGuess, ref: Fin1DResult | null)
       tip: tip.kind === 'convective' && tip.h !== null ? { kind: 'convective', h: tip.h + hRad } : tip,
     },
   };
+}
+
+/**
+ * The single-h guesses the shortcuts of a fin are evaluated with: none for a linear fin (it has one h
+ * and one k: null stands for the case itself), 'base' then 'mean' for a nonlinear fin.
+ */
+export function guessesFor(c: Case): readonly (HGuess | null)[] {
+  return isLinearFinCase(c) ? [null] : ['base', 'mean'];
+}
+
+/** The linear case the shortcuts take: the case itself (guess null, a linear case), or a guess. */
+export function shortcutCase(c: Case, guess: HGuess | null, ref: Fin1DResult): LinearFinCase {
+  if (guess !== null) return linearSurrogate(c, guess, ref);
+  if (!isLinearFinCase(c)) throw new Error('shortcutCase: a nonlinear fin needs a guess (guessesFor)');
+  return c;
 }

@@ -16,48 +16,22 @@
  * fin beyond x, a uniform fin of length L - x with base excess theta(x) and the same tip (exact).
  * Heat lost per unit length q'(x) = h P theta(x), W/m (annular fins: per metre of radius).
  *
- * fd-1d (refinement study's finest grid): theta at the nodes; Q at the base (the solver's base heat
- * rate), at each interface i+1/2 as K_i (theta_i - theta_{i+1}) with K_i = k A_{i+1/2}/dx_i (the
- * conservative scheme's own flux, Patankar 1980, ch. 4 [from memory]) and at the tip (surface heat
- * minus the face losses); q' = h(x) P(x) theta(x) at the nodes.
- *
- * Nonlinear fins (power-law h, radiation, k over temperature): fd-1d is the Newton solution; Q at the
- * interfaces uses k at the interface's mean temperature, and q' is the drop of Q across each control
- * volume over its length (the scheme's balance). The shortcuts are drawn as a hand calculation makes
- * them, with h and k at the base temperature (linear-surrogate.ts); the table also has the fin-averaged
- * guess.
- *
- * fd-2d (finest grid of its study, both halves, side edges insulated): temperature on the mid-plane
- * (pins: the axis) and on the cooled face. Face loss of the segment between face nodes a and b:
- * q(theta) ds times the depth (planar: 2 w; pins: 2 pi r_face; annular: 2 x 2 pi r), with theta and the
- * position part of h at the segment's middle and ds the chord (sloped faces at their true length); q is
- * the face law the solver uses (nonlinear-losses.ts, faceFlux), W/m^2:
- *   q(theta) = h_x |theta/theta_b|^n theta + eps sigma (T^4 - T_s^4),
- * which is h theta for a linear fin (n = 0, eps = 0). q' = the segment loss / dx at the segment's
- * middle, Q(x) = Q_base - the sum of the segment losses up to x (trapezoidal rule, second order, like the
- * solver's lumped face losses). At the tip Q(L) matches the solver's tip heat rate to that order. Q(x)
- * comes from the losses, not from k(T) grad T, so a conductivity over temperature needs no extra step:
- * the solver's temperatures already carry it (Kirchhoff transform, nonlinear2d-setup.ts).
+ * fd-1d and fd-2d (the finest grid of their studies): temperature, heat flow and loss along the fin as
+ * the solver computes them from its own discrete quantities (alongFin in src/fd: the scheme's own
+ * fluxes, the Kirchhoff flux for k(T), the face law the solver uses); fd-2d also the cooled face's
+ * temperature. Nonlinear fins: the shortcuts are drawn as a hand calculation makes them, with h and k at
+ * the base temperature (linear-surrogate.ts); the table also has the fin-averaged guess.
  */
-import { uniformFin, uniformFinExcess, type UniformFinInput, type UniformTip } from '../analytic/uniform-fin.js';
-import { hAt, hAtNodes } from '../fd/convection1d.js';
-import { convectiveConductance, interfaceConductance } from '../fd/conductance1d.js';
-import type { Fin1DStudy } from '../fd/fin1d.js';
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase, type LinearFinCase } from '../fd/linear-case.js';
-import type { Case } from '../case/types.js';
-import { faceFlux, faceLaw } from '../fd/nonlinear-losses.js';
-import { nonlinearFinProblem1D } from '../fd/nonlinear-problem.js';
-import { conductivityAt, linearSurrogate } from './linear-surrogate.js';
-import { finGeometry } from '../mesh/geometry1d.js';
+import { uniformFin, uniformFinExcess, type UniformFinInput, type UniformTip } from '../analytic/index.js';
+import type { Case } from '../case/index.js';
+import { alongFin, type AlongFinSeries, type FinStudy, type FinStudy1D, type FinStudy2D, type LinearFinCase } from '../fd/index.js';
+import { finGeometry } from '../mesh/index.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
+import { guessesFor, shortcutCase } from './linear-surrogate.js';
 import type { CheckReport, ModelId, ShortcutId } from './types.js';
 
 /** A quantity along the fin: positions in m from the base (annular fins: r - r1) and values. */
-export interface AlongFin {
-  x_m: Float64Array;
-  values: Float64Array;
-}
+export type AlongFin = AlongFinSeries;
 
 export interface ModelProfile {
   model: ModelId;
@@ -196,124 +170,23 @@ function shortcutProfile(
   };
 }
 
-function oneDProfile(c: LinearFinCase, oneD: Fin1DStudy): ModelProfile {
-  const r = oneD.result;
-  const mesh = r.mesh;
-  const n = mesh.nodes;
-  const geometry = finGeometry(c);
-  const k = c.material.k.k;
-  const hNodes = hAtNodes(c.convection.h, mesh.x, mesh.length);
-  const T = new Float64Array(n);
-  const loss = new Float64Array(n);
-  let faceLoss = 0;
-  for (let i = 0; i < n; i++) {
-    const theta = r.theta[i] as number;
-    T[i] = theta + c.convection.ambient_degC;
-    loss[i] = (hNodes[i] as number) * geometry.perimeter(mesh.x[i] as number) * theta;
-    faceLoss += convectiveConductance(mesh, hNodes, i) * theta;
-  }
-  const flowX = new Float64Array(n + 1);
-  const flow = new Float64Array(n + 1);
-  flow[0] = r.heatRate;
-  for (let i = 0; i + 1 < n; i++) {
-    flowX[i + 1] = 0.5 * ((mesh.x[i] as number) + (mesh.x[i + 1] as number));
-    flow[i + 1] = interfaceConductance(mesh, k, i) * ((r.theta[i] as number) - (r.theta[i + 1] as number));
-  }
-  flowX[n] = mesh.length;
-  flow[n] = r.surfaceHeatRate - faceLoss;
+/** The profile of a numerical model: the solver's own along-fin quantities. */
+function solvedProfile(study: FinStudy): ModelProfile {
+  const along = alongFin(study);
+  const newton = study.newton === null ? '' : ', nonlinear (Newton)';
+  const basis =
+    study.model === 'fd-1d'
+      ? `1-D finite volumes on ${study.finest.mesh.nodes} nodes (the actual profile, h distribution, tip and base)${newton}`
+      : `2-D finite volumes on ${study.finest.grid.nodesX} x ${study.finest.grid.nodesY} nodes (${study.finest.grid.section === 'planar' ? 'longitudinal section, side edges insulated' : 'axisymmetric section'})${newton}`;
   return {
-    model: 'fd-1d',
-    temperature: { x_m: mesh.x, values: T },
-    faceTemperature: null,
-    loss: { x_m: mesh.x, values: loss },
-    flow: { x_m: flowX, values: flow },
-    tipTemperature_degC: r.tipTemperature_degC,
-    heatRate_W: r.heatRate,
-    basis: `1-D finite volumes on ${n} nodes (the actual profile, h distribution, tip and base)`,
-  };
-}
-
-/** fd-1d of any fin (also nonlinear): Q from the interface conduction with k(T), q' from the drop of Q across each CV. */
-function oneDProfileGeneric(c: Case, oneD: Fin1DStudy): ModelProfile {
-  const r = oneD.result;
-  const mesh = r.mesh;
-  const n = mesh.nodes;
-  const ambient = c.convection.ambient_degC;
-  const T = r.theta.map((theta) => theta + ambient);
-  const flowX = new Float64Array(n);
-  const flow = new Float64Array(n);
-  flow[0] = r.heatRate;
-  for (let i = 0; i + 1 < n; i++) {
-    const k = conductivityAt(c.material.k, 0.5 * ((T[i] as number) + (T[i + 1] as number)));
-    flowX[i + 1] = 0.5 * ((mesh.x[i] as number) + (mesh.x[i + 1] as number));
-    flow[i + 1] = ((k * (mesh.interfaceArea[i] as number)) / (mesh.dx[i] as number)) * ((r.theta[i] as number) - (r.theta[i + 1] as number));
-  }
-  // CV i runs from flowX[i] (the base for i = 0) to flowX[i + 1]; the last node's half cell is left out.
-  const lossX = mesh.x.slice(0, n - 1);
-  const loss = new Float64Array(n - 1);
-  for (let i = 0; i + 1 < n; i++) loss[i] = ((flow[i] as number) - (flow[i + 1] as number)) / ((flowX[i + 1] as number) - (flowX[i] as number));
-  return {
-    model: 'fd-1d',
-    temperature: { x_m: mesh.x, values: T },
-    faceTemperature: null,
-    loss: { x_m: lossX, values: loss },
-    flow: { x_m: flowX, values: flow },
-    tipTemperature_degC: r.tipTemperature_degC,
-    heatRate_W: r.heatRate,
-    basis: `1-D finite volumes on ${n} nodes${isLinearFinCase(c) ? '' : ', nonlinear (Newton)'}`,
-  };
-}
-
-/** Heat flux leaving the face at distance x from the base (m) and excess theta (K), W/m^2 (header). */
-function faceFluxAlong(c: Case, length: number): (x: number, theta: number) => number {
-  const problem = nonlinearFinProblem1D(c);
-  const law = faceLaw(problem);
-  return (x, theta) => faceFlux(law, hAt(problem.h, x, length), theta);
-}
-
-function twoDProfile(c: Case, study: Fin2DStudy): ModelProfile {
-  const r = study.finest;
-  const baseX = r.grid.baseX;
-  const shift = (a: Float64Array): Float64Array => a.map((v) => v - baseX);
-  const face = r.surface;
-  const n = face.x_m.length;
-  const L = (face.x_m[n - 1] as number) - baseX;
-  const flux = faceFluxAlong(c, L);
-  const lossX = new Float64Array(n - 1);
-  const loss = new Float64Array(n - 1);
-  const flow = new Float64Array(n);
-  const segments = new Float64Array(n - 1);
-  for (let i = 0; i + 1 < n; i++) {
-    const xa = face.x_m[i] as number;
-    const xb = face.x_m[i + 1] as number;
-    const ya = face.y_m[i] as number;
-    const yb = face.y_m[i + 1] as number;
-    const xm = 0.5 * (xa + xb);
-    const theta = 0.5 * ((face.T_degC[i] as number) + (face.T_degC[i + 1] as number)) - r.ambient_degC;
-    const perDepth = r.grid.section === 'planar' ? 1 : r.grid.section === 'pin' ? 0.5 * (ya + yb) : xm;
-    const segment = flux(xm - baseX, theta) * r.grid.depth * perDepth * Math.hypot(xb - xa, yb - ya);
-    lossX[i] = xm - baseX;
-    loss[i] = segment / (xb - xa);
-    segments[i] = segment;
-  }
-  // Q(x) = tip loss + face losses beyond x, summed from the tip: the solver's own tip and face heat rates
-  // fix the ends (an adiabatic tip passes exactly 0, and Q(0) is the face plus tip loss, the base heat rate
-  // to the energy balance). Summing down from the base instead left the quadrature's O(h^2) mismatch at the
-  // tip, a stray negative Q (-4e-4 W on a 118 W annular fin) that pulled the chart's axis below zero.
-  let quadrature = 0;
-  for (const s of segments) quadrature += s;
-  const toSolverFaceLoss = quadrature !== 0 ? r.faceHeatRate_W / quadrature : 1;
-  flow[n - 1] = r.tipHeatRate_W;
-  for (let i = n - 2; i >= 0; i--) flow[i] = (flow[i + 1] as number) + (segments[i] as number) * toSolverFaceLoss;
-  return {
-    model: 'fd-2d',
-    temperature: { x_m: shift(r.centreline.x_m), values: r.centreline.T_degC },
-    faceTemperature: { x_m: shift(face.x_m), values: face.T_degC },
-    loss: { x_m: lossX, values: loss },
-    flow: { x_m: shift(face.x_m), values: flow },
-    tipTemperature_degC: r.tipTemperature_degC,
-    heatRate_W: r.heatRate_W,
-    basis: `2-D finite volumes on ${r.grid.nodesX} x ${r.grid.nodesY} nodes (${r.grid.section === 'planar' ? 'longitudinal section, side edges insulated' : 'axisymmetric section'})${isLinearFinCase(c) ? '' : ', nonlinear (Newton)'}`,
+    model: study.model,
+    temperature: along.temperature,
+    faceTemperature: along.faceTemperature,
+    loss: along.loss,
+    flow: along.flow,
+    tipTemperature_degC: study.tipTemperature_degC,
+    heatRate_W: study.heatRate_W,
+    basis,
   };
 }
 
@@ -321,15 +194,16 @@ function twoDProfile(c: Case, study: Fin2DStudy): ModelProfile {
  * Profiles of the numerical solutions (fd-2d first when given, then fd-1d) and of every shortcut in
  * `report` (same case, same check).
  */
-export function modelProfiles(c: Case, report: CheckReport, oneD: Fin1DStudy, twoD: Fin2DStudy | null = null): ModelProfiles {
-  const linear = isLinearFinCase(c) ? c : null;
-  // A nonlinear fin's shortcuts take one h and k: the hand calculation's, at the base temperature.
-  const surrogate = linear ?? linearSurrogate(c, 'base', oneD.result);
+export function modelProfiles(c: Case, report: CheckReport, oneD: FinStudy1D, twoD: FinStudy2D | null = null): ModelProfiles {
+  // The shortcuts take one h and k: the fin's own, or for a nonlinear fin the hand calculation's first
+  // guess, at the base temperature.
+  const guess = guessesFor(c)[0] ?? null;
+  const surrogate = shortcutCase(c, guess, oneD.finest);
   const geometry = finGeometry(surrogate);
   const eq = equivalentUniformFin(surrogate, geometry);
   const profiles: ModelProfile[] = [];
-  if (twoD) profiles.push(twoDProfile(c, twoD));
-  profiles.push(linear ? oneDProfile(linear, oneD) : oneDProfileGeneric(c, oneD));
+  if (twoD) profiles.push(solvedProfile(twoD));
+  profiles.push(solvedProfile(oneD));
   const omitted: OmittedProfile[] = [];
   for (const m of report.models) {
     if (m.model === 'fd-1d' || (m.guess !== undefined && m.guess !== 'base')) continue;
@@ -345,6 +219,6 @@ export function modelProfiles(c: Case, report: CheckReport, oneD: Fin1DStudy, tw
     profiles.push(shortcutProfile(m.model, fin, eq, m.heatRate_W, m.basis, c.convection.ambient_degC));
   }
   const p = c.fin.profile;
-  const note = linear ? null : 'Nonlinear fin: shortcuts drawn with h and k at the base temperature (the table also has fin-averaged h and k).';
+  const note = guess === null ? null : 'Nonlinear fin: shortcuts drawn with h and k at the base temperature (the table also has fin-averaged h and k).';
   return { profiles, omitted, length_m: eq.length, baseX_m: p.kind === 'annular' ? p.innerRadius : 0, note };
 }

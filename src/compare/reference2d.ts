@@ -11,14 +11,10 @@
  * 2-D): `reference2DWith` takes the models as functions.
  * Units: W, K.
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import { UsageError } from '../errors.js';
-import { solveFin1D, type Fin1DStudy } from '../fd/fin1d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
-import { tipBoundary } from '../fd/boundary.js';
-import { idealHeatRate } from '../fd/heat-rate1d.js';
-import { finGeometry } from '../mesh/geometry1d.js';
-import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
+import { solveFin1D, type Fin1DStudy, type LinearFinCase, tipBoundary, idealHeatRate, studyFin2D, type Fin2DStudy } from '../fd/index.js';
+import { finGeometry } from '../mesh/index.js';
 import type { AssumptionRow, UnjudgedReference } from './types.js';
 
 /** The solvers behind a 2-D reference. */
@@ -54,7 +50,7 @@ export interface Reference2D {
 
 /**
  * fd-2d reference, or null when the case is outside the 2-D model and `required` is false
- * (then `check --reference auto` keeps fd-1d).
+ * (then an automatic reference keeps fd-1d).
  */
 export function reference2D(c: LinearFinCase, oneD: Fin1DStudy, ideal1D: number, effectivenessScale: number, required: boolean): Reference2D | null {
   return reference2DWith(c, oneD, ideal1D, effectivenessScale, required, LINEAR_MODELS);

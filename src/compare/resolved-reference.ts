@@ -7,10 +7,9 @@
  *
  * fd-1d: the study is refined first (fd/resolve-study1d.ts: grading to the decay length 1/m, doubling
  * within a budget). fd-2d: the study's own grids; where they do not reach the target the check falls back
- * to a resolved fd-1d reference (--reference auto) or gives `unresolved` verdicts (--reference 2d).
+ * to a resolved fd-1d reference (an automatic reference) or gives `unresolved` verdicts (a 2-D reference asked for).
  */
-import type { Fin2DStudy } from '../fd/fin2dStudy.js';
-import type { Resolution } from '../fd/resolve-study1d.js';
+import type { Fin2DStudy, Resolution } from '../fd/index.js';
 import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
 import type { ReferenceResolution, ReferenceResult, UnjudgedReference } from './types.js';
 
@@ -31,8 +30,7 @@ export function resolution2D(study: Fin2DStudy, target: number): ReferenceResolu
     refinements: 0,
     grids: study.grids.map((g) => `${g.nx}x${g.ny}`).reverse(),
     grading: 'the 2-D study grids',
-    budget:
-      'the fd-2d study grids (not refined further; an unresolved fd-2d study hands the reference to fd-1d when the reference model is chosen automatically)',
+    budget: 'the fd-2d study grids (not refined further; an unresolved fd-2d study hands the reference to fd-1d under an automatic reference)',
   };
 }
 
@@ -49,8 +47,8 @@ export function judgedReference(ref: UnjudgedReference, resolution: ReferenceRes
 }
 
 /**
- * The fd-2d reference when it is resolved; under --reference auto an unresolved 2-D study hands the
- * reference to fd-1d (the note says so), under --reference 2d it stays and its verdicts are unresolved.
+ * The fd-2d reference when it is resolved; under an automatic reference an unresolved 2-D study hands the
+ * reference to fd-1d (the note says so), with a 2-D reference asked for it stays and its verdicts are unresolved.
  */
 export function choose2DReference<T extends { reference: UnjudgedReference; study: Fin2DStudy }>(
   twoD: T | null,

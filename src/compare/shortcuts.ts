@@ -10,8 +10,8 @@
  * q_f(theta0) = s theta0 + c (affine), q = (theta_b - theta0)/R gives theta0 = (theta_b - c R)/(1 + s R).
  * Units: W, K, m.
  */
-import { uniformFin } from '../analytic/uniform-fin.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
+import { uniformFin } from '../analytic/index.js';
+import type { LinearFinCase } from '../fd/index.js';
 import { closedForm, type AffineHeatRate } from './closed-form.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { NotApplicable, ShortcutId } from './types.js';

@@ -1,13 +1,11 @@
 /**
- * `fincheck solve`: one model's solution of the case (outputs.md, `fincheck solve --json`).
+ * `fincheck solve`: one model's solution of the case (outputs.md, the JSON of `fincheck solve`).
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
 import { INFINITE_TIP_NOTE, tipTemperatureNote } from './efficiency-basis.js';
-import type { Case } from '../case/types.js';
-import { solveFin1D, studyFin1D, type Fin1DResult } from '../fd/fin1d.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
+import type { Case } from '../case/index.js';
+import { solveFin1D, studyFin1D, type Fin1DResult, isLinearFinCase, solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/index.js';
 
 /**
  * One point of a temperature profile: x_m, the distance along the fin from the base (m), or for annular

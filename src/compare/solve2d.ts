@@ -7,19 +7,9 @@
  * same grids (nonlinear2d.ts, nonlinear2d-study.ts); the report then carries the Newton step counts.
  * Where the 2-D model does not apply (fin2dUnsupported, nonlinear2dUnsupported) the UsageError names why.
  */
-import type { Case } from '../case/types.js';
+import type { Case } from '../case/index.js';
 import { UsageError } from '../errors.js';
-import { solveFin2D, type Fin2DLine, type Fin2DResult } from '../fd/fin2d.js';
-import { solveFin1D, studyFin1D } from '../fd/fin1d.js';
-import { studyFin2D, type Fin2DStudy } from '../fd/fin2dStudy.js';
-import { isLinearFinCase } from '../fd/linear-case.js';
-import { fin2dUnsupported } from '../fd/fin2dCase.js';
-import type { NewtonReport } from '../fd/nonlinear1d.js';
-import { solveNonlinearFin2D, type NonlinearFin2DResult } from '../fd/nonlinear2d.js';
-import type { LinearFinCase } from '../fd/linear-case.js';
-import { nonlinear2dUnsupported } from '../fd/nonlinear2d-problem.js';
-import { studyNonlinearFin2D } from '../fd/nonlinear2d-study.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/nonlinear1d.js';
+import { solveFin2D, type Fin2DLine, type Fin2DResult, solveFin1D, studyFin1D, studyFin2D, type Fin2DStudy, isLinearFinCase, fin2dUnsupported, type NewtonReport, solveNonlinearFin2D, type NonlinearFin2DResult, type LinearFinCase, nonlinear2dUnsupported, studyNonlinearFin2D, solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/index.js';
 import { isStraight, sideEdgeCorrection, type SideEdgeCorrection } from './reference2d.js';
 import { isRadial, type ProfilePoint } from './solve.js';
 

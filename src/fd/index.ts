@@ -1,42 +1,72 @@
-/** Public API of the 1-D finite-volume fin solver (fd-1d). */
-export type { LinearFinCase, LinearHDistribution } from './linear-case.js';
-export { isLinearFinCase } from './linear-case.js';
-export type { BaseBoundary, TipBoundary, ExcessField } from './boundary.js';
-export { baseBoundary, tipBoundary, fieldFromTheta, baseHeatRate, tipHeatLoss } from './boundary.js';
-export { dropSystem } from './drop-system.js';
-export type { FinProblem1D } from './problem1d.js';
-export { finProblem1D } from './problem1d.js';
-export { hAt, hAtNodes, hBreakpoints, idealConvectiveConductance } from './convection1d.js';
-export { interfaceConductance, convectiveConductance } from './conductance1d.js';
-export { assembleFin1D } from './assemble1d.js';
-export type { TridiagonalSystem, RowSumSystem, TridiagonalSolver } from './tridiagonal.js';
-export {
-  createTridiagonalSystem,
-  thomas,
-  thomasInto,
-  twoSidedThomas,
-  twoSidedThomasInto,
-  solveTridiagonal,
-} from './tridiagonal.js';
-export { conservativeThomas, conservativeThomasInto, conservativeThomasFromTipInto } from './conservative-thomas.js';
-export type { FinHeatRates1D } from './heat-rate1d.js';
-export { finHeatRates, idealHeatRate, finEffectiveness } from './heat-rate1d.js';
-export type { Fin1DOptions, Fin1DResult, Fin1DStudy, Fin1DStudyOptions } from './fin1d.js';
-export {
-  solveFin1D,
-  studyFin1D,
-  solveFinProblem1D,
-  studyFinProblem1D,
-  solveOnMesh1D,
-  autoGrading,
-  DEFAULT_STUDY_NODES,
-} from './fin1d.js';
-// The 2-D models and the refinement study, as plots and report use them.
-export { fin2dProblem } from './fin2dCase.js';
-export { grid2dIssue } from './fin2d.js';
-export { studyFin2DProblem } from './fin2dStudy.js';
-export { nonlinearFin2DProblem } from './nonlinear2d-problem.js';
-export { studyNonlinearFin2DProblem } from './nonlinear2d-study.js';
-export type { Fin2DStudy } from './fin2dStudy.js';
-export type { NonlinearFin2DStudy } from './nonlinear2d-study.js';
-export type { RefinementStudy } from './refinement.js';
+/**
+ * Public entry of the fd layer (the finite-volume models of a fin): what compare, plots, map, report and
+ * cli import. Everything else under src/fd is internal to the layer (tests may reach in).
+ *
+ * problem/  the one fin problem (geometry, conductivity law, surface law, base, tip) and which model covers it
+ * study/    the one study: studyFin(problem, { model: '1d' | '2d' }) -> FinStudy; the refinement loop and GCI
+ * one-d/    the 1-D model along the fin: assembly, boundaries, direct solve, Newton, heat rates, along-fin
+ * two-d/    the 2-D model across the thickness: problem, assembly, boundaries, solve, Newton, study grids
+ * newton/   what the 1-D and 2-D Newton solves share: continuation, the report
+ * linear-algebra/  tridiagonal, banded and multigrid solvers
+ */
+export type { FinProblem, Radiation } from './problem/fin-problem.js';
+export { finProblem, isLinearProblem, KELVIN_OFFSET, STEFAN_BOLTZMANN } from './problem/fin-problem.js';
+export type { BaseBoundary, TipBoundary } from './problem/conditions.js';
+export type { LinearFinCase, LinearHDistribution } from './problem/linear-case.js';
+export { isLinearFinCase } from './problem/linear-case.js';
+export type { FinModel, ModelCoverage } from './problem/model-applies.js';
+export { modelApplies, modelId, nonlinearity, requireModel } from './problem/model-applies.js';
+export { hAt, idealConvectiveConductance } from './problem/convection.js';
+
+export type { FinStudy, FinStudy1D, FinStudy2D, NewtonStatistics } from './study/fin-study.js';
+export type { AlongFin, AlongFinSeries } from './study/along-fin.js';
+export type { FinGrid, FinStudyOptions } from './study/study-fin.js';
+export { alongFin, solveFin, solveFinWith, studyFin, studyFinWith } from './study/study-fin.js';
+export type { GridSolvers } from './study/grid-solvers.js';
+export { gridSolvers } from './study/grid-solvers.js';
+export type { RefinementStudy } from './study/refinement.js';
+export { richardsonGci, fitObservedOrder } from './study/refinement.js';
+export type { NewtonReport } from './newton/newton-report.js';
+
+export type { Fin1DResult } from './one-d/linear-solve.js';
+export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';
+export type { Fin2DLine, Fin2DResult } from './two-d/linear-solve.js';
+export type { Fin2DGridValue } from './two-d/linear-study.js';
+export type { Fin2DFieldViews } from './two-d/field-views.js';
+export { fieldViews } from './two-d/field-views.js';
+export { finStudy1DFrom, finStudy2DFrom } from './study/from-studies.js';
+export { solveNonlinearFin1D, studyNonlinearFin1D } from './one-d/nonlinear-solve.js';
+export { nonlinear2dUnsupported } from './two-d/nonlinear-problem.js';
+export { studyNonlinearFin2D } from './two-d/nonlinear-study.js';
+export type { NonlinearFin2DStudy } from './two-d/nonlinear-study.js';
+export { finProblem1D } from './one-d/problem.js';
+export { decayGradingOf, resolveStudy1D, resolveFinProblem1D } from './study/resolve-study1d.js';
+export type { Resolution, ResolutionBudget } from './study/resolve-study1d.js';
+export { solveFin1D, studyFin1D } from './one-d/linear-solve.js';
+export type { Fin1DStudy } from './one-d/linear-solve.js';
+export { studyFin2D } from './two-d/linear-study.js';
+export type { Fin2DStudy } from './two-d/linear-study.js';
+export { tipBoundary } from './one-d/boundary.js';
+export { idealHeatRate } from './one-d/heat-rate.js';
+export { solveFin2D, grid2dIssue } from './two-d/linear-solve.js';
+export { fin2dUnsupported } from './two-d/problem.js';
+export { solveNonlinearFin2D } from './two-d/nonlinear-solve.js';
+export type { NonlinearFin2DResult } from './two-d/nonlinear-solve.js';
+export type { ExcessField } from './one-d/boundary.js';
+export { baseBoundary, fieldFromTheta, baseHeatRate, tipHeatLoss } from './one-d/boundary.js';
+export { dropSystem } from './one-d/drop-system.js';
+export type { FinProblem1D } from './one-d/problem.js';
+export { hAtNodes, hBreakpoints } from './problem/convection.js';
+export { interfaceConductance, convectiveConductance } from './one-d/conductance.js';
+export { assembleFin1D } from './one-d/assemble.js';
+export type { TridiagonalSystem, RowSumSystem, TridiagonalSolver } from './linear-algebra/tridiagonal.js';
+export { createTridiagonalSystem, thomas, thomasInto, twoSidedThomas, twoSidedThomasInto, solveTridiagonal } from './linear-algebra/tridiagonal.js';
+export { conservativeThomas, conservativeThomasInto, conservativeThomasFromTipInto } from './linear-algebra/conservative-thomas.js';
+export type { FinHeatRates1D } from './one-d/heat-rate.js';
+export { finHeatRates, finEffectiveness } from './one-d/heat-rate.js';
+export type { Fin1DOptions, Fin1DStudyOptions } from './one-d/linear-solve.js';
+export { solveFinProblem1D, studyFinProblem1D, solveOnMesh1D } from './one-d/linear-solve.js';
+export { fin2dProblem } from './two-d/problem.js';
+export { studyFin2DProblem } from './two-d/linear-study.js';
+export { nonlinearFin2DProblem } from './two-d/nonlinear-problem.js';
+export { studyNonlinearFin2DProblem } from './two-d/nonlinear-study.js';

@@ -64,7 +64,7 @@ export async function svgToPng(svg: string, options: RenderOptions = {}): Promis
 
 export type ChartFormat = 'png' | 'svg';
 
-/** The bytes to write for `--out FILE.png|FILE.svg`: the SVG text as UTF-8, or its PNG rendering. */
+/** The bytes to write for a chart file (.png or .svg): the SVG text as UTF-8, or its PNG rendering. */
 export async function chartBytes(svg: string, format: ChartFormat, options: RenderOptions = {}): Promise<Buffer> {
   switch (format) {
     case 'svg':

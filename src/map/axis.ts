@@ -1,5 +1,5 @@
 /**
- * `--x KEY=FROM:TO` (and `--y`): which case key to sweep, between which values, in which unit. Everything that
+ * An axis of a map, KEY=FROM:TO: which case key to sweep, between which values, in which unit. Everything that
  * can be known before the run is checked here and refused with a UsageError (exit 2) naming the option: a key
  * that is not a numeric key of the case, units of the wrong kind, FROM == TO, an end outside the key's own range,
  * a log axis through zero.
@@ -29,7 +29,7 @@ import { rawAxisValue } from './substitute.js';
 import type { MapAxis } from './types.js';
 
 export interface AxisRequest {
-  /** '--x' or '--y', for messages. */
+  /** The axis's name as the caller shows it, for messages (the command line: its option). */
   option: string;
   /** KEY=FROM:TO as typed. */
   text: string;
@@ -140,7 +140,7 @@ export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAx
     throw new UsageError(`${option}: a log axis needs FROM and TO above 0 in the unit given; got ${lo} ${unit}`.trimEnd());
   }
   if (!(Number.isInteger(request.steps) && request.steps >= 2)) {
-    throw new UsageError(`--steps: ${option} needs at least 2 steps; got ${request.steps}`);
+    throw new RangeError(`parseMapAxis: ${option} needs at least 2 steps; got ${request.steps}`);
   }
   const caseValue = unit === '' ? own : fromSI(own, info.kind, unit);
   return {

@@ -3,7 +3,8 @@
  * map chart of src/images draws its marked points, so that it can be drawn again on top of overlays (iso-lines)
  * and on the overview chart.
  */
-import { project, type MapPoint as ChartPoint, type Scale, markerElement, textEl, fontSize, ink } from '../images/index.js';
+import { project, type MapPoint as ChartPoint, type Scale } from '../images/index.js';
+import { markerElement, textEl, fontSize, ink } from '../images/index.js';
 import type { MapRun } from './run-map.js';
 import type { MapAxis } from './types.js';
 

@@ -8,7 +8,8 @@
  * dashed under a label "Bi = 0.1", and clipped to the plot. Input fields are given at the grid points
  * (index = j * nx + i), NaN where a point has no result.
  */
-import { contourLines, placeLineLabel, project, type Scale, type Rect, el, fmt, polylinePathData, textEl, textWidth } from '../images/index.js';
+import { contourLines, placeLineLabel, project, type Scale } from '../images/index.js';
+import { type Rect, el, fmt, polylinePathData, textEl, textWidth } from '../images/index.js';
 
 export interface IsoField {
   /** Label prefix, e.g. "Bi" or "mL". */

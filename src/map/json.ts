@@ -1,11 +1,11 @@
 /**
- * The JSON document of `fincheck map --json` (outputs.md): case, reference, tolerance, the two axes with their
+ * The JSON document of `fincheck map` in JSON (outputs.md): case, reference, tolerance, the two axes with their
  * key, unit and values, and one entry per point, x fastest (index = j * NX + i). A point where the case became
  * invalid carries `error` instead of results. Added to the contract's keys: each axis's `log`, the shortcuts
  * mapped, the case's own point, the summary counts and (per point) `mL`, the reference's model, efficiency and
  * discretisation error, each shortcut's heat rate and efficiency. `reference` is the case's own point's reference;
  * `summary.references` counts the points per reference model (auto keeps fd-1d where 2-D does not cover the case).
- * `files` (in map.json and --json alike) lists the files the map wrote into its folder (manifest.ts).
+ * `files` (in map.json and the JSON printed alike) lists the files the map wrote into its folder (manifest.ts).
  */
 import { CAUTIONS } from '../compare/index.js';
 import type { MapRun } from './run-map.js';

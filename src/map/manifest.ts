@@ -1,7 +1,7 @@
 /**
  * Which files in a map's folder fincheck wrote: map.json lists them (its key `files`), written with the map's
  * files. A re-run into the same folder removes the files the earlier run listed and this one does not write (a shortcut
- * left out with --models, PNGs after a switch to SVG), so map.json never sits beside images of another map.
+ * left out of the models mapped, PNGs after a switch to SVG), so map.json never sits beside images of another map.
  * Only names a map can have (map.csv, map.json, map-<model>.png|svg, overview.png|svg) are ever removed, and only
  * when listed: a user's own file in the folder, or a name slipped into the list, is never touched.
  */

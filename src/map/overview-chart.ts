@@ -11,30 +11,8 @@
  * (even-odd rule for holes). Invalid points and points where the shortcut does not apply count as unsafe.
  */
 import { CHART_CAUTION } from '../compare/index.js';
-import {
-  contourLines,
-  getColormap,
-  makeAxis,
-  project,
-  type Axis,
-  drawAxes,
-  xAxisMargin,
-  yAxisMargin,
-  fieldImage,
-  drawHeader,
-  type Rect,
-  el,
-  fmt,
-  polylinePathData,
-  svgDocument,
-  textEl,
-  truncateToWidth,
-  defaultHeight,
-  defaultWidth,
-  fontSize,
-  gap,
-  ink,
-} from '../images/index.js';
+import { contourLines, getColormap, makeAxis, project, type Axis } from '../images/index.js';
+import { drawAxes, xAxisMargin, yAxisMargin, fieldImage, drawHeader, type Rect, el, fmt, polylinePathData, svgDocument, textEl, truncateToWidth, defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/index.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';

@@ -2,7 +2,7 @@
  * One grid point: substitute the two axis values into the raw case, validate it again, run `fincheck check`'s
  * pipeline (runCheck, without the assumption ledger) and keep what the map reports. A point where the case becomes
  * invalid, or where the solver fails, gives its message instead of results; every other error is a bug and is
- * thrown. The same function runs in-process (`--jobs 1`) and in each worker, so both give the same numbers.
+ * thrown. The same function runs in-process (one job) and in each worker, so both give the same numbers.
  */
 import { parseCaseObject, readDocument, type Locate, type ParseOptions } from '../case/index.js';
 import { basename, extname } from 'node:path';

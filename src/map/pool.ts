@@ -1,5 +1,5 @@
 /**
- * Solving every grid point: in this thread (`--jobs 1`) or on N worker threads (node:worker_threads), batches of
+ * Solving every grid point: in this thread (one job) or on N worker threads (node:worker_threads), batches of
  * neighbouring points dealt out as workers become free (schedule.ts). Results come back in any order and are
  * stored by index. An abort signal (Ctrl-C) stops the run: workers are terminated at once and the promise rejects
  * with MapInterrupted. The in-process path yields to the event loop every few milliseconds so that the signal

@@ -1,6 +1,6 @@
 /**
  * A one-line progress bar for long maps, written to stderr and only when stderr is a terminal (so logs, pipes and
- * `--json` consumers never see it): "map [#######.......] 45 %  760/1681 points  3 s left". Redrawn at most ten
+ * JSON consumers never see it): "map [#######.......] 45 %  760/1681 points  3 s left". Redrawn at most ten
  * times a second with a carriage return; `finish` clears the line. The time left appears once it can be
  * estimated fairly (eta.ts).
  */

@@ -7,11 +7,22 @@ import { bareLengthUnit, dimensionWarning, parseCaseText, parseQuantity, readDoc
 import { rawAxisValue } from './substitute.js';
 import { runCheck, type NotApplicable } from '../compare/index.js';
 import { UsageError } from '../errors.js';
+import { finProblem, modelApplies } from '../fd/index.js';
 import { parseMapAxis } from './axis.js';
 import { solvePoints } from './pool.js';
 import { pointFromReport } from './point.js';
 import { summariseMap, type MapSummary } from './summary.js';
 import type { MapAxis, MapJob, MapModelId, MapPoint, PointCheckOptions, PointResult } from './types.js';
+
+export interface MapLabels {
+  x: string;
+  y: string;
+  models: string;
+  reference: string;
+}
+
+/** The parts of a map request in words. */
+export const DEFAULT_LABELS: MapLabels = { x: 'x axis', y: 'y axis', models: 'models', reference: 'reference model' };
 
 export interface MapRequest {
   caseText: string;
@@ -26,6 +37,8 @@ export interface MapRequest {
   reference: PointCheckOptions['reference'];
   /** Models to map; undefined maps every shortcut that applies to the case (and fd-1d beside a 2-D reference). */
   models?: readonly MapModelId[];
+  /** How the caller names the request's parts in messages (the command line: its options); default DEFAULT_LABELS. */
+  labels?: MapLabels;
 }
 
 /** A map ready to run: checked axes, the job every point runs, and the case's own point. */
@@ -50,9 +63,14 @@ export interface MapRun extends PreparedMap {
 export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
   const c = parseCaseText(request.caseText, request.fileName);
   const { raw } = readDocument(request.caseText, request.fileName);
-  const x = parseMapAxis({ option: '--x', text: request.x, steps: request.steps[0], log: request.logX }, raw, c);
-  const y = parseMapAxis({ option: '--y', text: request.y, steps: request.steps[1], log: request.logY }, raw, c);
-  if (x.key === y.key) throw new UsageError(`--x and --y both sweep ${x.key}; give two different keys`);
+  const labels = request.labels ?? DEFAULT_LABELS;
+  const x = parseMapAxis({ option: labels.x, text: request.x, steps: request.steps[0], log: request.logX }, raw, c);
+  const y = parseMapAxis({ option: labels.y, text: request.y, steps: request.steps[1], log: request.logY }, raw, c);
+  if (x.key === y.key) throw new UsageError(`${labels.x} and ${labels.y} both sweep ${x.key}; give two different keys`);
+  if (request.reference === '2d') {
+    const coverage = modelApplies(finProblem(c), '2d');
+    if (!coverage.ok) throw new UsageError(`${labels.reference} 2d: ${coverage.reason}; use ${labels.reference} 1d or auto`);
+  }
 
   const { report } = await runCheck(c, { tolerance: request.tolerance, reference: request.reference, ledger: false });
   // Unique ids: a nonlinear fin lists each shortcut once per single-h guess; the map shows the base-temperature guess.
@@ -61,9 +79,9 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
     if (applicable.includes(id)) continue;
     const reason =
       id === 'fd-1d'
-        ? `it is the reference here; fd-1d is compared with fd-2d where the case allows 2-D (--reference auto or 2d)`
+        ? `it is the reference here; fd-1d is compared with fd-2d where the case allows 2-D (${labels.reference} auto or 2d)`
         : (report.notApplicable.find((n) => n.model === id)?.reason ?? 'not evaluated for this case');
-    throw new UsageError(`--models: ${id} does not apply to this case (${reason}); these do: ${applicable.join(', ')}`);
+    throw new UsageError(`${labels.models}: ${id} does not apply to this case (${reason}); these do: ${applicable.join(', ')}`);
   }
   const models = request.models ? [...new Set(request.models)] : applicable;
   const guess = report.models.some((m) => m.guess !== undefined) ? 'base' : null;
@@ -77,7 +95,7 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
   };
   const casePoint = pointFromReport(-1, x.caseValue ?? Number.NaN, y.caseValue ?? Number.NaN, report, models);
   const bareUnitChosen = bareLengthUnit(raw) !== 'm';
-  const warnings = [...(c.warnings ?? []), ...axisWarnings(x, '--x', bareUnitChosen), ...axisWarnings(y, '--y', bareUnitChosen)];
+  const warnings = [...(c.warnings ?? []), ...axisWarnings(x, labels.x, bareUnitChosen), ...axisWarnings(y, labels.y, bareUnitChosen)];
   return { caseName: c.name, x, y, job, casePoint, notApplicable: report.notApplicable, warnings };
 }
 

@@ -32,7 +32,7 @@ export interface MapSummary {
   errorGroups: ErrorGroup[];
   models: ModelCounts[];
   /**
-   * Points per reference model (`--reference auto` keeps fd-1d where the 2-D model does not cover the case,
+   * Points per reference model (an automatic reference keeps fd-1d where the 2-D model does not cover the case,
    * or where its study is not resolved); `unresolved`: of those, points whose reference is not resolved.
    */
   references: { model: string; points: number; unresolved: number }[];

@@ -1,5 +1,5 @@
 /**
- * Structured, boundary-fitted grids for the 2-D fin section (see grid2dSection.ts for the coordinates).
+ * Structured, boundary-fitted grids for the 2-D fin section (see grid2d-section.ts for the coordinates).
  *
  * Nodes (i, j), i = 0..nodesX-1 along the fin (base to tip), j = 0..nodesY-1 across it (symmetry plane or
  * axis to the face). Node p = i * nodesY + j: the short direction is numbered fastest, so the matrices
@@ -15,7 +15,7 @@
  * Named boundaries: base (i = 0), tip (i = last), face (j = last), symmetry (j = 0: mid-plane or axis).
  * The arrays follow the ndarray convention: shape [nodesX, nodesY], stride [nodesY, 1], offset 0.
  */
-import type { Section2D, SectionKind } from './grid2dSection.js';
+import type { Section2D, SectionKind } from './grid2d-section.js';
 
 export type BoundaryName = 'base' | 'tip' | 'face' | 'symmetry';
 

@@ -3,4 +3,7 @@ export type { FinGeometry1D, FinShape1D, Grading, GradingEnd, Grid1DSpec, Mesh1D
 export type { TaperExponent, TaperSpec } from './geometry1d.js';
 export { finGeometry, taperedGeometry, annularGeometry, tabulatedGeometry } from './geometry1d.js';
 export { buildMesh1D, gridNodes, mergeBreakpoints, allocateCells } from './grid1d.js';
-export { sectionOf } from './grid2dSection.js';
+export { sectionOf } from './grid2d-section.js';
+export { radiusAt, boundaryNodes, buildGrid2D } from './grid2d.js';
+export type { Grid2D, BoundaryName } from './grid2d.js';
+export type { Section2D } from './grid2d-section.js';

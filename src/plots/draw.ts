@@ -1,5 +1,5 @@
 /** One chart of a kind as SVG text, from the sources it needs (sources.ts). */
-import type { Fin2DStudy } from '../fd/index.js';
+import type { FinStudy2D } from '../fd/index.js';
 import { fieldChart, lineChart } from '../images/index.js';
 import { fluxChartSpec } from './flux-chart.js';
 import { heatmapChartSpec } from './heatmap-chart.js';
@@ -10,7 +10,7 @@ import type { Case } from '../case/index.js';
 export interface PlotSources {
   case: Case;
   check: CheckPlotInput | null;
-  field: Fin2DStudy | null;
+  field: FinStudy2D | null;
 }
 
 /** SVG of one chart. `rasterScale` (PNG dpi / 96) sharpens the heat map's embedded raster. */

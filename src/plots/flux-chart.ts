@@ -1,5 +1,5 @@
 /**
- * `fincheck plot --kind flux`: the heat flowing along the fin Q(x) (W) and the heat lost per unit
+ * The flux chart of `fincheck plot`: the heat flowing along the fin Q(x) (W) and the heat lost per unit
  * length q'(x) = h P theta (W/m), for every model of the check, on two panels sharing the x axis.
  * Where Q has fallen to a tenth of its base value, 90 % of the heat has left the fin: the length
  * beyond that point carries little, which is where the fin stops working; the chart marks it on the

@@ -1,14 +1,14 @@
 /**
- * `fincheck plot --kind heatmap`: the fd-2d temperature field on the fin's true section (sloped and
+ * The heat map of `fincheck plot`: the fd-2d temperature field on the fin's true section (sloped and
  * curved faces as they are), both halves: the solver meshes one half (mid-plane or axis to the face)
  * and the field is mirrored about the symmetry line. Colour bar in °C (viridis: perceptually uniform,
  * readable with colour-vision deficiencies and in grey), labelled isotherms, base and tip marked.
  * Coordinates in mm: x along the fin (annular fins: the radius r), y across it. Nonlinear fins: the same
- * chart of the Newton study (nonlinear2d-study.ts), its steps per grid in the header.
+ * chart of the Newton study (two-d/nonlinear-study.ts), its steps per grid in the header.
  */
 import { CHART_CAUTION } from '../compare/index.js';
 import type { Case } from '../case/index.js';
-import type { Fin2DStudy, NonlinearFin2DStudy } from '../fd/index.js';
+import type { FinStudy2D } from '../fd/index.js';
 import type { FieldChartSpec } from '../images/index.js';
 import { alongAxisTitle, relativeError, sig } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
@@ -23,7 +23,7 @@ export interface MirroredField {
 }
 
 /** Both halves of the solved half-section: j runs from the far face through the symmetry line to the near face. */
-export function mirroredField(study: Fin2DStudy): MirroredField {
+export function mirroredField(study: FinStudy2D): MirroredField {
   const r = study.finest;
   const g = r.grid;
   const ni = g.nodesX;
@@ -56,18 +56,18 @@ function axisWords(c: Case): { x: string; y: string; symmetry: string; tip: stri
 }
 
 /** Newton steps per grid (coarsest first) of a nonlinear fin's study; null for a linear fin. */
-function newtonSteps(study: Fin2DStudy): number[] | null {
-  return 'iterations' in study ? (study as NonlinearFin2DStudy).iterations : null;
+function newtonSteps(study: FinStudy2D): number[] | null {
+  return study.newton === null ? null : study.newton.stepsPerGrid;
 }
 
-export function heatmapChartSpec(c: Case, study: Fin2DStudy, size: ChartSize, rasterScale = 1): FieldChartSpec {
+export function heatmapChartSpec(c: Case, study: FinStudy2D, size: ChartSize, rasterScale = 1): FieldChartSpec {
   const field = mirroredField(study);
   const words = axisWords(c);
   const r = study.finest;
   const planar = r.grid.section === 'planar';
   const steps = newtonSteps(study);
   const subtitle = [
-    `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError)} (GCI, ${study.grids.length} grids).`,
+    `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError ?? Number.NaN)} (GCI, ${study.grids.length} grids).`,
     `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; ${c.fin.profile.kind === 'annular' ? 'rim' : 'tip'} centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
     r.truncatedInfinite ? 'Infinite fin: the section is cut where the field has decayed and closed by its exact slowest mode.' : '',
     steps ? `Nonlinear fin: Newton's method on every grid (${steps.join('/')} steps, coarsest to finest; relative residual ≤ 1e-10).` : '',

@@ -4,7 +4,8 @@
  */
 import type { Case } from '../case/index.js';
 import type { ModelId, ReferenceResult } from '../compare/index.js';
-import { type LineSeries, defaultSeriesStyle } from '../images/index.js';
+import type { LineSeries } from '../images/index.js';
+import { defaultSeriesStyle } from '../images/index.js';
 
 /** Typographic minus, so "−1.75 %" does not read as a hyphen. */
 const MINUS = '\u2212';

@@ -7,7 +7,8 @@
  * drawn line points), and the label is added as a label-only annotation anchored there. The axis
  * ranges of the first layout are kept, so the labels move nothing else.
  */
-import { lineChart, project, unproject, type LineChartSpec, type PanelGeometry, type PointAnnotation, textWidth, fontSize } from '../images/index.js';
+import { lineChart, project, unproject, type LineChartSpec, type PanelGeometry, type PointAnnotation } from '../images/index.js';
+import { textWidth, fontSize } from '../images/index.js';
 
 export interface PointLabel {
   panel: number;

@@ -1,12 +1,12 @@
 /**
- * `fincheck plot --kind profile`: the temperature along the fin for every model of the check on one
+ * The profile chart of `fincheck plot`: the temperature along the fin for every model of the check on one
  * chart. The reference is the solid black line; each shortcut has its own colour, dash pattern and
  * marker (images/series-styles.ts), its heat rate, drift and verdict in the legend; the reference's tip
  * temperature is marked. Axes in mm and °C.
  */
 import { CHART_CAUTION, type ModelProfiles, type CheckReport } from '../compare/index.js';
 import type { Case } from '../case/index.js';
-import type { Fin1DStudy, Fin2DStudy } from '../fd/index.js';
+import type { FinStudy1D, FinStudy2D } from '../fd/index.js';
 import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
 import { withPointLabels, type PointLabel } from './point-labels.js';
 import { alongAxisTitle, faceLabel, isPin, lineLabel, modelStyle, referenceWords, sig, signedPercent, thinSeries, toMillimetres } from './labels.js';
@@ -22,9 +22,9 @@ export interface CheckPlotInput {
   report: CheckReport;
   profiles: ModelProfiles;
   /** The fd-1d refinement study behind the check. */
-  oneD: Fin1DStudy;
+  oneD: FinStudy1D;
   /** The fd-2d study when it is the check's reference (the heat map reuses it). */
-  twoD: Fin2DStudy | null;
+  twoD: FinStudy2D | null;
 }
 
 /** Legend note of a model: its heat rate, and for a shortcut its drift and verdict. */

@@ -1,12 +1,11 @@
 /**
  * What the charts are drawn from: the check (reference, shortcuts, their profiles) for `profile` and
- * `flux`, and the fd-2d refinement study for `heatmap` (nonlinear fins: the Newton study of
- * nonlinear2d-study.ts on the same grid family). Each is computed only when a chart needs it.
+ * `flux`, and the fd-2d refinement study for `heatmap` (the one study, studyFin: Newton's method on the
+ * same grid family for a nonlinear fin). Each is computed only when a chart needs it.
  */
 import type { Case } from '../case/index.js';
 import { runCheck, type CheckOptions, modelProfiles } from '../compare/index.js';
-import { UsageError } from '../errors.js';
-import { fin2dProblem, studyFin2DProblem, type Fin2DStudy, isLinearFinCase, nonlinearFin2DProblem, studyNonlinearFin2DProblem } from '../fd/index.js';
+import { finProblem, finStudy1DFrom, finStudy2DFrom, modelApplies, studyFin, type FinStudy2D } from '../fd/index.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
 export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;
@@ -19,27 +18,23 @@ export type HeatmapAvailability = { ok: true } | { ok: false; reason: string };
  * what the 2-D model lacks (e.g. an infinite tip on a tapered fin, or on any nonlinear fin).
  */
 export function heatmapAvailability(c: Case): HeatmapAvailability {
-  try {
-    if (isLinearFinCase(c)) fin2dProblem(c);
-    else nonlinearFin2DProblem(c);
-    return { ok: true };
-  } catch (e) {
-    if (e instanceof UsageError || e instanceof RangeError) {
-      return { ok: false, reason: `the 2-D model does not cover this ${c.fin.profile.kind} fin: ${e.message.replace(/^fd-2d: /, '').replace(/; use the 1-D model$/, '')}` };
-    }
-    throw e;
-  }
+  const coverage = modelApplies(finProblem(c), '2d');
+  return coverage.ok ? { ok: true } : { ok: false, reason: `the 2-D model does not cover this ${c.fin.profile.kind} fin: ${coverage.reason}` };
 }
 
-/** The fd-2d study behind a heat map; a UsageError naming the profile where the 2-D model does not apply. */
-export function fieldStudy(c: Case): Fin2DStudy {
-  const available = heatmapAvailability(c);
-  if (!available.ok) throw new UsageError(`--kind heatmap: ${available.reason}`);
-  return isLinearFinCase(c) ? studyFin2DProblem(fin2dProblem(c)) : studyNonlinearFin2DProblem(nonlinearFin2DProblem(c));
+/**
+ * The fd-2d study behind a heat map. Ask heatmapAvailability first: a fin the 2-D model does not cover
+ * throws ModelNotApplicableError.
+ */
+export async function fieldStudy(c: Case): Promise<FinStudy2D> {
+  return (await studyFin(finProblem(c), { model: '2d' })) as FinStudy2D;
 }
 
-/** The check and every model's profile (throws the check's UsageError, e.g. --reference 2d where the 2-D model does not apply). */
+/** The check and every model's profile (a '2d' reference the 2-D model does not cover throws the check's ModelNotApplicableError). */
 export async function checkPlotInput(c: Case, opts: CheckOptions): Promise<CheckPlotInput> {
-  const { report, oneD, twoD } = await runCheck(c, opts);
+  const { report, oneD: oneDStudy, twoD: twoDStudy } = await runCheck(c, opts);
+  const problem = finProblem(c);
+  const oneD = finStudy1DFrom(problem, oneDStudy);
+  const twoD = twoDStudy === null ? null : finStudy2DFrom(problem, twoDStudy);
   return { case: c, report, profiles: modelProfiles(c, report, oneD, twoD), oneD, twoD };
 }

@@ -37,12 +37,12 @@ function studyTable(model: string, grids: string[], study: RefinementStudy): Blo
 
 export function discretisationSection(check: CheckPlotInput): Section {
   const blocks: Block[] = [];
-  const study1 = check.oneD.study;
-  const length = check.oneD.result.mesh.length;
-  blocks.push(...studyTable('fd-1d', study1.sizes.map((h) => `${Math.round(length / h) + 1} nodes`), study1));
+  const study1 = check.oneD.refinement;
+  const length = check.oneD.finest.mesh.length;
+  if (study1 !== null) blocks.push(...studyTable('fd-1d', study1.sizes.map((h) => `${Math.round(length / h) + 1} nodes`), study1));
   if (check.twoD) {
     const s2 = check.twoD;
-    blocks.push(...studyTable('fd-2d', s2.grids.map((g) => `${g.nx} × ${g.ny} nodes`), s2.heatRate));
+    if (s2.refinement !== null) blocks.push(...studyTable('fd-2d', s2.grids.map((g) => `${g.nx} × ${g.ny} nodes`), s2.refinement));
     if (check.report.reference.model === 'fd-2d' && Math.abs(check.report.reference.heatRate_W - s2.heatRate_W) > 0) {
       blocks.push({ kind: 'paragraph', text: `The reference Q (${sig(check.report.reference.heatRate_W, 6)} W) is fd-2d's section (${sig(s2.heatRate_W, 6)} W) with the side edges' cooling added from fd-1d; its error estimate adds fd-1d's.` });
     }

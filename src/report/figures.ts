@@ -1,5 +1,5 @@
 /** The report's figures: the PNG of each chart with a caption naming its models, units and errors. */
-import type { Fin2DStudy } from '../fd/index.js';
+import type { FinStudy2D } from '../fd/index.js';
 import { alongAxisLabel, referenceWords, relativeError, sig, type CheckPlotInput, type PlotKind, REMAINING_FRACTION } from '../plots/index.js';
 import type { Block, Section } from './document.js';
 
@@ -15,12 +15,12 @@ export interface ReportFigure {
 /** File name of each chart beside the reports. */
 export const FIGURE_FILES: Record<PlotKind, string> = { profile: 'profile.png', flux: 'flux.png', heatmap: 'heatmap.png' };
 
-function twoDWords(study: Fin2DStudy): string {
+function twoDWords(study: FinStudy2D): string {
   const g = study.finest.grid;
-  return `fd-2d on ${g.nodesX} × ${g.nodesY} nodes, Q = ${sig(study.heatRate_W, 5)} W${g.section === 'planar' ? ' (section with insulated side edges)' : ''}, estimated discretisation error of Q ${relativeError(study.discretizationError)} (GCI, ${study.grids.length} grids)`;
+  return `fd-2d on ${g.nodesX} × ${g.nodesY} nodes, Q = ${sig(study.heatRate_W, 5)} W${g.section === 'planar' ? ' (section with insulated side edges)' : ''}, estimated discretisation error of Q ${relativeError(study.discretizationError ?? Number.NaN)} (GCI, ${study.grids.length} grids)`;
 }
 
-function caption(kind: PlotKind, check: CheckPlotInput, field: Fin2DStudy | null): string {
+function caption(kind: PlotKind, check: CheckPlotInput, field: FinStudy2D | null): string {
   const ref = check.report.reference;
   const along = alongAxisLabel(check.case).replace(/ \(mm\)$/, '');
   const omitted = check.profiles.omitted.map((o) => ` ${o.model} is not drawn: ${o.reason}.`).join('');

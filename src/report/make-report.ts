@@ -5,7 +5,7 @@
  */
 import type { Case } from '../case/index.js';
 import type { CheckOptions } from '../compare/index.js';
-import type { Fin2DStudy } from '../fd/index.js';
+import type { FinStudy2D } from '../fd/index.js';
 import { svgToPng } from '../images/index.js';
 import { plotSvg, type ChartSize, type CheckPlotInput, checkPlotInput, fieldStudy, heatmapAvailability, type PlotKind } from '../plots/index.js';
 import { buildReport } from './build-report.js';
@@ -39,15 +39,15 @@ export interface ReportContent {
   markdown: string;
 }
 
-function field(c: Case, check: CheckPlotInput): { study: Fin2DStudy | null; unavailable: string | null } {
+async function field(c: Case, check: CheckPlotInput): Promise<{ study: FinStudy2D | null; unavailable: string | null }> {
   if (check.twoD) return { study: check.twoD, unavailable: null };
   const available = heatmapAvailability(c);
-  return available.ok ? { study: fieldStudy(c), unavailable: null } : { study: null, unavailable: available.reason };
+  return available.ok ? { study: await fieldStudy(c), unavailable: null } : { study: null, unavailable: available.reason };
 }
 
 export async function makeReport(c: Case, opts: ReportOptions): Promise<ReportContent> {
   const check = await checkPlotInput(c, { tolerance: opts.tolerance, reference: opts.reference });
-  const { study, unavailable } = field(c, check);
+  const { study, unavailable } = await field(c, check);
   const kinds: PlotKind[] = study ? ['profile', 'flux', 'heatmap'] : ['profile', 'flux'];
   const scale = opts.dpi / 96;
   const figures: ReportFigure[] = [];

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { UsageError, InputError } from '../../src/errors.js';
-import { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath } from '../../src/case/keyPath.js';
+import { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath } from '../../src/case/key-path.js';
 import { readDocument } from '../../src/case/document.js';
 import { parseCaseObject } from '../../src/case/parse.js';
 

@@ -7,8 +7,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it, vi } from 'vitest';
 import { SolverError, UsageError } from '../../src/errors.js';
-import { solveFin2D } from '../../src/fd/fin2d.js';
-import { factorBandedCholesky } from '../../src/fd/sparse/bandedCholesky.js';
+import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
+import { factorBandedCholesky } from '../../src/fd/linear-algebra/banded-cholesky.js';
 import { TEMPERATURES_2D } from '../fd2d/cases.js';
 import { finCase } from '../support/fin-case.js';
 import { randomSpdStencil } from '../fd2d/random.js';
@@ -16,8 +16,8 @@ import { cli } from './run.js';
 
 // The 2-D study of the one case below fails as a real solver failure would (a stand-in for the fin
 // that made the multigrid CG fail before fin2d.ts solved for the departure from the lumped level).
-vi.mock('../../src/fd/fin2dStudy.js', async (importOriginal) => {
-  const original = await importOriginal<typeof import('../../src/fd/fin2dStudy.js')>();
+vi.mock('../../src/fd/two-d/linear-study.js', async (importOriginal) => {
+  const original = await importOriginal<typeof import('../../src/fd/two-d/linear-study.js')>();
   return {
     ...original,
     studyFin2D: (c: { name: string }, ...rest: unknown[]) => {

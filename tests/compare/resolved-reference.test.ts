@@ -11,9 +11,9 @@
 import { describe, expect, it } from 'vitest';
 import { parseCaseObject } from '../../src/case/parse.js';
 import { runCheck } from '../../src/compare/check.js';
-import { studyFin1D } from '../../src/fd/fin1d.js';
-import { resolveStudy1D } from '../../src/fd/resolve-study1d.js';
-import type { LinearFinCase } from '../../src/fd/linear-case.js';
+import { studyFin1D } from '../../src/fd/one-d/linear-solve.js';
+import { resolveStudy1D } from '../../src/fd/study/resolve-study1d.js';
+import type { LinearFinCase } from '../../src/fd/problem/linear-case.js';
 
 const D = 0.003;
 const k = 388;

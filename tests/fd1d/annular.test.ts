@@ -12,8 +12,8 @@
  *   (`annular_convtip`; same Bessel form as Gardner 1945), η referred to 2π(r2^2 - r1^2) + 2π r2 t.
  */
 import { describe, expect, test } from 'vitest';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
-import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
+import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
 import { expectEfficiency } from './support/efficiency-check.js';
 import { linearFinCase } from '../support/fin-case.js';
 

@@ -11,9 +11,9 @@
  *   table number], with β = h_tip/(mk): q = M θ_b (sinh mL + β cosh mL)/(cosh mL + β sinh mL).
  */
 import { describe, expect, test } from 'vitest';
-import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
-import { baseBoundary, tipBoundary } from '../../src/fd/boundary.js';
+import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
+import { baseBoundary, tipBoundary } from '../../src/fd/one-d/boundary.js';
 import { AMBIENT_DEGC, linearFinCase } from '../support/fin-case.js';
 
 // Check case R1 (invented inputs; aluminium plate, cooled edges): k = 180, h = 40, t = 2 mm, w = 50 mm, L = 30 mm.

@@ -11,8 +11,8 @@
  * it to round-off: 1e-12 (errors of ~N operations of 1e-16 on O(1) values, N <= 1e5).
  */
 import { describe, expect, test } from 'vitest';
-import { solveFin1D } from '../../src/fd/fin1d.js';
-import { thomas } from '../../src/fd/tridiagonal.js';
+import { solveFin1D } from '../../src/fd/one-d/linear-solve.js';
+import { thomas } from '../../src/fd/linear-algebra/tridiagonal.js';
 import { linearFinCase } from '../support/fin-case.js';
 
 const L = 0.05;

@@ -12,11 +12,11 @@
  */
 import { fc, test } from '@fast-check/vitest';
 import { describe, expect } from 'vitest';
-import { assembleFin1D } from '../../src/fd/assemble1d.js';
-import { hAtNodes, hBreakpoints } from '../../src/fd/convection1d.js';
-import { autoGrading, solveFin1D } from '../../src/fd/fin1d.js';
-import { finProblem1D } from '../../src/fd/problem1d.js';
-import { solveTridiagonal } from '../../src/fd/tridiagonal.js';
+import { assembleFin1D } from '../../src/fd/one-d/assemble.js';
+import { hAtNodes, hBreakpoints } from '../../src/fd/problem/convection.js';
+import { autoGrading, solveFin1D } from '../../src/fd/one-d/linear-solve.js';
+import { finProblem1D } from '../../src/fd/one-d/problem.js';
+import { solveTridiagonal } from '../../src/fd/linear-algebra/tridiagonal.js';
 import { buildMesh1D } from '../../src/mesh/grid1d.js';
 import { finCaseArbitrary } from './support/arbitraries.js';
 import { denseSolve } from './support/dense.js';

@@ -12,9 +12,9 @@
  */
 import { describe, expect, test } from 'vitest';
 import type { Profile } from '../../src/case/types.js';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
-import { solveFin1D, solveFinProblem1D, studyFin1D, studyFinProblem1D } from '../../src/fd/fin1d.js';
-import type { FinProblem1D } from '../../src/fd/problem1d.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
+import { solveFin1D, solveFinProblem1D, studyFin1D, studyFinProblem1D } from '../../src/fd/one-d/linear-solve.js';
+import type { FinProblem1D } from '../../src/fd/one-d/problem.js';
 import { taperedGeometry, type TaperExponent } from '../../src/mesh/geometry1d.js';
 import { expectEfficiency } from './support/efficiency-check.js';
 import { linearFinCase } from '../support/fin-case.js';

@@ -8,7 +8,7 @@
  */
 import { fc, test } from '@fast-check/vitest';
 import { describe, expect } from 'vitest';
-import { conservativeThomas, conservativeThomasFromTipInto, conservativeThomasInto } from '../../src/fd/conservative-thomas.js';
+import { conservativeThomas, conservativeThomasFromTipInto, conservativeThomasInto } from '../../src/fd/linear-algebra/conservative-thomas.js';
 import {
   createTridiagonalSystem,
   solveTridiagonal,
@@ -17,7 +17,7 @@ import {
   twoSidedThomas,
   twoSidedThomasInto,
   type TridiagonalSolver,
-} from '../../src/fd/tridiagonal.js';
+} from '../../src/fd/linear-algebra/tridiagonal.js';
 import { denseSolve } from './support/dense.js';
 
 function maxRelativeDifference(x: Float64Array, y: Float64Array): number {

@@ -9,8 +9,8 @@
  */
 import { describe, expect, test } from 'vitest';
 import type { Profile, TipCondition } from '../../src/case/types.js';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
-import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
+import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
 import { AMBIENT_DEGC, linearFinCase, relative } from '../support/fin-case.js';
 
 interface UniformCase {

@@ -11,8 +11,8 @@
  */
 import { beforeAll, describe, expect, test } from 'vitest';
 import type { HDistribution } from '../../src/case/types.js';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
-import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
+import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
 import { expectEfficiency } from './support/efficiency-check.js';
 import { besselI, gamma, loadSpecial } from './support/special.js';
 import { linearFinCase } from '../support/fin-case.js';

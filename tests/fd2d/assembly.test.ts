@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { assembleConduction2D } from '../../src/fd/assemble2d.js';
-import { applyStencil9 } from '../../src/fd/sparse/stencil9.js';
+import { assembleConduction2D } from '../../src/fd/two-d/assemble.js';
+import { applyStencil9 } from '../../src/fd/linear-algebra/stencil9.js';
 import { buildGrid2D } from '../../src/mesh/grid2d.js';
-import { sectionOf } from '../../src/mesh/grid2dSection.js';
+import { sectionOf } from '../../src/mesh/grid2d-section.js';
 
 describe('2-D conduction operator', () => {
   it('on a uniform rectangular grid is the 5-point vertex-centred finite-volume scheme', () => {

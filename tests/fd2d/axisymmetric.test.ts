@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { THETA_B, TEMPERATURES_2D } from './cases.js';
 import { finCase } from '../support/fin-case.js';
 

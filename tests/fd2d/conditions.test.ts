@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import type { Case, Profile, TipCondition } from '../../src/case/types.js';
 import { UsageError } from '../../src/errors.js';
-import { solveFin2D } from '../../src/fd/fin2d.js';
-import { fin2dUnsupported } from '../../src/fd/fin2dCase.js';
-import { fieldViews } from '../../src/fd/fin2dField.js';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
+import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
+import { fin2dUnsupported } from '../../src/fd/two-d/problem.js';
+import { fieldViews } from '../../src/fd/two-d/field-views.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { BASE, THETA_B, TEMPERATURES_2D } from './cases.js';
 import { finCase } from '../support/fin-case.js';
 

@@ -14,12 +14,12 @@ import { straightConcaveParabolicFin } from '../../src/analytic/straight-profile
 import { initBessel } from '../../src/analytic/bessel.js';
 import type { Case, Profile } from '../../src/case/types.js';
 import { runCheck } from '../../src/compare/check.js';
-import { assembleConduction2D } from '../../src/fd/assemble2d.js';
-import { buildSystem2D, discretizeBoundaries } from '../../src/fd/assemble2dBoundary.js';
-import { fin2dProblem } from '../../src/fd/fin2dCase.js';
-import { DEFAULT_GRADING } from '../../src/fd/fin2d.js';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
-import { coupledRhsNorm1, couplingOf, residual } from '../../src/fd/sparse/stencil9.js';
+import { assembleConduction2D } from '../../src/fd/two-d/assemble.js';
+import { buildSystem2D, discretizeBoundaries } from '../../src/fd/two-d/boundary.js';
+import { fin2dProblem } from '../../src/fd/two-d/problem.js';
+import { DEFAULT_GRADING } from '../../src/fd/two-d/linear-solve.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
+import { coupledRhsNorm1, couplingOf, residual } from '../../src/fd/linear-algebra/stencil9.js';
 import { buildGrid2D } from '../../src/mesh/grid2d.js';
 import { THETA_B, TEMPERATURES_2D } from './cases.js';
 import { finCase } from '../support/fin-case.js';

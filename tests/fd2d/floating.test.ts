@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { annularFin, annularFinConvectiveTip } from '../../src/analytic/annular.js';
 import { initBessel } from '../../src/analytic/bessel.js';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { THETA_B, TEMPERATURES_2D } from './cases.js';
 import { finCase } from '../support/fin-case.js';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
 import { plateCase, THETA_B } from './cases.js';
 
 // Reference values: computed reference values (scipy/mpmath script fin2d_series.py, adiabatic and

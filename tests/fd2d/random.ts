@@ -1,5 +1,5 @@
 /** Test matrices for the 2-D solvers. */
-import { addCoupling, emptyStencil9, type Stencil9 } from '../../src/fd/sparse/stencil9.js';
+import { addCoupling, emptyStencil9, type Stencil9 } from '../../src/fd/linear-algebra/stencil9.js';
 
 /**
  * A random symmetric 9-point conduction-like matrix (negative couplings, positive row sums `excess`),

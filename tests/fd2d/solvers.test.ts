@@ -1,9 +1,10 @@
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { SolverError } from '../../src/errors.js';
-import { factorBanded, factorBandedCholesky } from '../../src/fd/sparse/bandedCholesky.js';
-import { factorBandedLdltRowSums } from '../../src/fd/sparse/bandedLdlt.js';
-import { addCoupling, emptyStencil9, residual, stencilToDense, type Stencil9 } from '../../src/fd/sparse/stencil9.js';
+import { factorBandedCholesky } from '../../src/fd/linear-algebra/banded-cholesky.js';
+import { factorBanded } from '../../src/fd/linear-algebra/banded-solve.js';
+import { factorBandedLdltRowSums } from '../../src/fd/linear-algebra/banded-ldlt.js';
+import { addCoupling, emptyStencil9, residual, stencilToDense, type Stencil9 } from '../../src/fd/linear-algebra/stencil9.js';
 import { randomSpdStencil } from './random.js';
 
 function denseSolve(a: Stencil9, rhs: Float64Array): Float64Array {

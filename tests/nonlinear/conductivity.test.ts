@@ -16,7 +16,7 @@
  */
 import { describe, expect, test } from 'vitest';
 import type { Conductivity } from '../../src/case/types.js';
-import { studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { plateFin } from './support/cases.js';
 import { AMBIENT_DEGC, finCase, relative } from '../support/fin-case.js';
 

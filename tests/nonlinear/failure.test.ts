@@ -7,7 +7,7 @@
 import { describe, expect, test } from 'vitest';
 import { SolverError } from '../../src/errors.js';
 import { powerLawHInfiniteQ } from '../../src/analytic/nonlinear.js';
-import { solveNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { plateFin } from './support/cases.js';
 import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 

@@ -14,10 +14,10 @@
  */
 import { fc, test } from '@fast-check/vitest';
 import { describe, expect } from 'vitest';
-import { solveFin1D, studyFin1D } from '../../src/fd/fin1d.js';
-import { isLinearFinCase } from '../../src/fd/linear-case.js';
+import { solveFin1D, studyFin1D } from '../../src/fd/one-d/linear-solve.js';
+import { isLinearFinCase } from '../../src/fd/problem/linear-case.js';
 import { finGeometry } from '../../src/mesh/geometry1d.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import type { Case } from '../../src/case/types.js';
 import { finCaseArbitrary } from '../fd1d/support/arbitraries.js';
 import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';

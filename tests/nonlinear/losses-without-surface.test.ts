@@ -7,7 +7,7 @@
  * tests/fuzz/cases/power-law-convex-nan-pivot.yaml). The values are exact (no tolerance): 0 and finite.
  */
 import { describe, expect, it } from 'vitest';
-import { cvLosses, type FaceLaw } from '../../src/fd/nonlinear-losses.js';
+import { cvLosses, type FaceLaw } from '../../src/fd/problem/surface-law.js';
 
 const law = (exponent: number, radiative = 0): FaceLaw => ({
   exponent,

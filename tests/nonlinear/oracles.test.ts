@@ -14,7 +14,7 @@ import {
   radiatingAdiabaticFin,
   radiatingInfiniteFin,
 } from '../../src/analytic/nonlinear.js';
-import { studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { KELVIN, pinFin, plateFin, type UniformFin } from './support/cases.js';
 import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 

@@ -13,8 +13,8 @@
  */
 import { describe, expect, test } from 'vitest';
 import type { Case } from '../../src/case/types.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
-import { fitObservedOrder } from '../../src/fd/refinement.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
+import { fitObservedOrder } from '../../src/fd/study/refinement.js';
 import { KELVIN, plateFin } from './support/cases.js';
 import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 

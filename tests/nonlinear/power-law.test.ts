@@ -14,7 +14,7 @@
  * exactly (the same first integral: Q_tip = sqrt(2 A P ∫_0^θ q k dθ)), so no truncation remainder.
  */
 import { describe, expect, test } from 'vitest';
-import { studyNonlinearFin1D, solveNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { studyNonlinearFin1D, solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { pinFin, plateFin, type UniformFin } from './support/cases.js';
 import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
 

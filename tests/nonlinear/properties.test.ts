@@ -17,7 +17,7 @@
 import { fc, test } from '@fast-check/vitest';
 import { describe, expect } from 'vitest';
 import type { Conductivity, HDistribution, Profile, TipCondition } from '../../src/case/types.js';
-import { solveNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { solveNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { profileArbitrary } from '../fd1d/support/arbitraries.js';
 import { AMBIENT_DEGC, finCase } from '../support/fin-case.js';
 

@@ -12,7 +12,7 @@
  * ε = 0.9, σ = 5.670374419e-8 W/(m^2 K^4); values printed to 10 significant digits.
  */
 import { describe, expect, test } from 'vitest';
-import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { solveNonlinearFin1D, studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { KELVIN, plateFin } from './support/cases.js';
 import { constantK, finCase, relative } from '../support/fin-case.js';
 

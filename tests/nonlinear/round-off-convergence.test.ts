@@ -11,7 +11,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { parseCaseObject } from '../../src/case/parse.js';
-import { studyNonlinearFin1D } from '../../src/fd/nonlinear1d.js';
+import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 
 const cases: [string, Record<string, unknown>][] = [
   [

@@ -13,10 +13,10 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Case, HDistribution, Profile, TipCondition } from '../../src/case/types.js';
-import { solveFin2D } from '../../src/fd/fin2d.js';
-import { studyFin2D } from '../../src/fd/fin2dStudy.js';
-import { solveNonlinearFin2D } from '../../src/fd/nonlinear2d.js';
-import { studyNonlinearFin2D } from '../../src/fd/nonlinear2d-study.js';
+import { solveFin2D } from '../../src/fd/two-d/linear-solve.js';
+import { studyFin2D } from '../../src/fd/two-d/linear-study.js';
+import { solveNonlinearFin2D } from '../../src/fd/two-d/nonlinear-solve.js';
+import { studyNonlinearFin2D } from '../../src/fd/two-d/nonlinear-study.js';
 import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const HEAT_RATE_ALLOWANCE = 2e-11;

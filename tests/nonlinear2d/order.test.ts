@@ -13,7 +13,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Case, Conductivity } from '../../src/case/types.js';
-import { studyNonlinearFin2D } from '../../src/fd/nonlinear2d-study.js';
+import { studyNonlinearFin2D } from '../../src/fd/two-d/nonlinear-study.js';
 import { constantK, finCase } from '../support/fin-case.js';
 
 const table: Conductivity = { kind: 'table', T_degC: Float64Array.from([20, 80, 150]), k: Float64Array.from([15, 18, 25]) };

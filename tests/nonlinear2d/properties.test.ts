@@ -16,7 +16,7 @@ import { fc, test } from '@fast-check/vitest';
 import { describe, expect, it } from 'vitest';
 import type { Case, Conductivity, HDistribution, Profile } from '../../src/case/types.js';
 import { powerLawHInfiniteQ } from '../../src/analytic/nonlinear.js';
-import { solveNonlinearFin2D } from '../../src/fd/nonlinear2d.js';
+import { solveNonlinearFin2D } from '../../src/fd/two-d/nonlinear-solve.js';
 import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const profileArbitrary: fc.Arbitrary<Profile> = fc.oneof(

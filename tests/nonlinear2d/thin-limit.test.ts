@@ -20,8 +20,8 @@
  * discretisation error, ~1e-7, is far below the gaps of 1e-3 to 1e-2 measured here).
  */
 import { describe, expect, it } from 'vitest';
-import { STEFAN_BOLTZMANN } from '../../src/fd/nonlinear-problem.js';
-import { studyNonlinearFin2D } from '../../src/fd/nonlinear2d-study.js';
+import { STEFAN_BOLTZMANN } from '../../src/fd/problem/fin-problem.js';
+import { studyNonlinearFin2D } from '../../src/fd/two-d/nonlinear-study.js';
 import type { Case } from '../../src/case/types.js';
 import { KELVIN, linearK, logSlope, plate } from './support.js';
 import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';

@@ -78,7 +78,7 @@ describe('flux chart of an annular fin with an insulated rim', () => {
 
 describe('heat map of a short pin (true shape, a plot much lower than the canvas)', () => {
   let chart: FieldChartResult;
-  beforeAll(() => {
+  beforeAll(async () => {
     const c = parseCaseText(
       `name: short pin
 fin: { profile: pin, length: 10 mm, diameter: 3 mm }
@@ -88,7 +88,7 @@ base: { temperature: 70 degC }
 `,
       'pin.yaml',
     );
-    chart = fieldChart(heatmapChartSpec(c, fieldStudy(c), size));
+    chart = fieldChart(heatmapChartSpec(c, await fieldStudy(c), size));
   });
 
   it('the colour bar spans exactly the plot height (it was 60 % of the canvas, taller than the plot)', () => {
@@ -118,7 +118,7 @@ base: { temperature: 70 degC }
 });
 
 describe('heat map titles on a small canvas', () => {
-  it('the rotated y title and colour bar title are no taller than the plot; the stretch note is kept', () => {
+  it('the rotated y title and colour bar title are no taller than the plot; the stretch note is kept', async () => {
     const c = parseCaseText(
       `name: long pin
 fin: { profile: pin, length: 60 mm, diameter: 3 mm }
@@ -128,7 +128,7 @@ base: { temperature: 70 degC }
 `,
       'pin.yaml',
     );
-    const chart = fieldChart(heatmapChartSpec(c, fieldStudy(c), { width: 900, height: 420 }));
+    const chart = fieldChart(heatmapChartSpec(c, await fieldStudy(c), { width: 900, height: 420 }));
     const rotated = texts(chart.svg).filter((t) => Math.abs(t.rotate) === 90 && t.fontSize === fontSize.axisLabel);
     expect(rotated.length).toBeGreaterThanOrEqual(2);
     for (const t of rotated) expect(textWidth(t.text, t.fontSize)).toBeLessThanOrEqual(chart.plot.height + 1e-9);

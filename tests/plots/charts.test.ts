@@ -12,7 +12,7 @@ import { fluxChartSpec, positionOfRemainingFlow } from '../../src/plots/flux-cha
 import { heatmapChartSpec, mirroredField } from '../../src/plots/heatmap-chart.js';
 import { profileChartSpec, type CheckPlotInput } from '../../src/plots/profile-chart.js';
 import { checkPlotInput, fieldStudy } from '../../src/plots/sources.js';
-import type { Fin2DStudy } from '../../src/fd/fin2dStudy.js';
+import type { FinStudy2D as Fin2DStudy } from '../../src/fd/index.js';
 import { colourDistance, countPixels, decodePng, isDark, isNotWhite, pixel, svgTexts, wellFormednessError, type Decoded } from '../images/helpers.js';
 
 const demo = join(import.meta.dirname, '../../demo/inverter-plate-fin.yaml');
@@ -23,7 +23,7 @@ let field: Fin2DStudy;
 beforeAll(async () => {
   const c = loadCase(demo);
   input = await checkPlotInput(c, { tolerance: 0.02, reference: '1d', ledger: false });
-  field = fieldStudy(c);
+  field = await fieldStudy(c);
 });
 
 /** Linear interpolation of a node series at x. */

@@ -52,8 +52,8 @@ describe('charts of an annular fin use the radius, r1 and r2 marked', () => {
     expect(fluxChartSpec(input, size).xLabel).toBe(RADIUS_AXIS);
   });
 
-  it('heat map: radius axis, the base edge is r1 (tube) and the tip edge r2 (rim)', () => {
-    const spec = heatmapChartSpec(annular, fieldStudy(annular), size);
+  it('heat map: radius axis, the base edge is r1 (tube) and the tip edge r2 (rim)', async () => {
+    const spec = heatmapChartSpec(annular, await fieldStudy(annular), size);
     expect(spec.xLabel).toBe(RADIUS_AXIS);
     expect(spec.edgeLabels).toEqual({ iMin: 'r1 (tube)', iMax: 'r2 (rim)' });
   });
@@ -61,6 +61,6 @@ describe('charts of an annular fin use the radius, r1 and r2 marked', () => {
   it('a straight fin keeps the distance from the base x and its tip', async () => {
     const s = await checkPlotInput(straight, { tolerance: 0.02, reference: '1d', ledger: false });
     expect(profileChartSpec(s, size).xLabel).toBe('Distance from the base x (mm)');
-    expect(heatmapChartSpec(straight, fieldStudy(straight), size).edgeLabels).toEqual({ iMin: 'base', iMax: 'tip' });
+    expect(heatmapChartSpec(straight, await fieldStudy(straight), size).edgeLabels).toEqual({ iMin: 'base', iMax: 'tip' });
   });
 });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitObservedOrder, richardsonGci } from '../../src/fd/refinement.js';
+import { fitObservedOrder, richardsonGci } from '../../src/fd/study/refinement.js';
 
 describe('richardsonGci (Celik et al. 2008 procedure)', () => {
   it('reproduces the worked example attributed to Celik et al. 2008 (J. Fluids Eng. 130(7) 078001, Table 1)', () => {

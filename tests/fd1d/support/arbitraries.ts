@@ -6,7 +6,7 @@
  */
 import { fc } from '@fast-check/vitest';
 import type { HDistribution, Profile, TipCondition } from '../../../src/case/types.js';
-import type { LinearFinCase } from '../../../src/fd/linear-case.js';
+import type { LinearFinCase } from '../../../src/fd/problem/linear-case.js';
 import { AMBIENT_DEGC, linearFinCase } from '../../support/fin-case.js';
 
 const length = fc.double({ min: 0.005, max: 0.2, noNaN: true });

@@ -3,7 +3,7 @@
  * partial pivoting; Golub & Van Loan, Matrix Computations, §3.4 [from memory for the section]).
  */
 import { LuDecomposition, Matrix } from 'ml-matrix';
-import type { TridiagonalSystem } from '../../../src/fd/tridiagonal.js';
+import type { TridiagonalSystem } from '../../../src/fd/linear-algebra/tridiagonal.js';
 
 export function denseSolve(system: TridiagonalSystem): Float64Array {
   const n = system.diag.length;

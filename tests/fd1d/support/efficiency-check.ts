@@ -3,7 +3,7 @@
  * grid, its GCI and its Richardson extrapolation against one published value).
  */
 import { expect } from 'vitest';
-import type { Fin1DStudy } from '../../../src/fd/fin1d.js';
+import type { Fin1DStudy } from '../../../src/fd/one-d/linear-solve.js';
 
 /**
  * Tolerances:

@@ -8,7 +8,7 @@
  * files that are not a case (empty, a list, syntax errors, duplicate keys, a YAML alias bomb).
  */
 import { fc } from '@fast-check/vitest';
-import { formatKeyPath, type KeyPath } from '../../../src/case/keyPath.js';
+import { formatKeyPath, type KeyPath } from '../../../src/case/key-path.js';
 import { validCase, type FuzzCase } from './cases.js';
 import { caseText } from './drive.js';
 import { getAt, mappingPaths, quantityPaths, setAt, type Kind, type QuantityPath } from './paths.js';

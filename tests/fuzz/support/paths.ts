@@ -2,7 +2,7 @@
  * The quantity keys of a case document and their kinds (case-format.md), found by walking the document:
  * what a mutation may replace and which key path the refusal must then name.
  */
-import { formatKeyPath, type KeyPath } from '../../../src/case/keyPath.js';
+import { formatKeyPath, type KeyPath } from '../../../src/case/key-path.js';
 
 export type Kind = 'length' | 'size' | 'tipSize' | 'temperature' | 'h' | 'k' | 'resistance' | 'emissivity' | 'exponent' | 'lawBase';
 

@@ -1,0 +1,175 @@
+/**
+ * Temperature-dependent conductivity and its Kirchhoff transform, measured down from the base.
+ *
+ * k(T), W/(m K): a constant, or a table (T_j, k_j) linear between points and held constant beyond
+ * the first and last points (no extrapolation: a table says nothing outside its range, and a
+ * constant end keeps k > 0).
+ * Kirchhoff transform (Kirchhoff, G., 1894, Vorlesungen über die Theorie der Wärme [from memory]):
+ * with k_ref = k at the base temperature, k(T) dT/dx = k_ref dU/dx for U = ∫ k dT / k_ref, so
+ * d/dx(k A dT/dx) = k_ref d/dx(A dU/dx) is linear in U. The solver carries temperatures as drops
+ * below the base, d = θ_b - θ (K), as the linear solver does (drop-system.ts: no cancellation in the
+ * base conduction), and U as the potential drop
+ *   D(d) = U(θ_b) - U(θ_b - d) = (1/k_ref) ∫_0^d k(θ_b - e) de,   κ = dD/dd = k(T)/k_ref.
+ * For a table, k is piecewise linear in e, so D is integrated exactly (trapezoids from e = 0 to the
+ * last table point before d, then to d), every piece formed from drops, never from differences of
+ * large potentials. For a constant k, D = d and κ = 1 exactly (the linear scheme, bit for bit).
+ */
+import type { Conductivity } from '../../case/index.js';
+
+/** A piece of k over [from, to] in θ (K): k(θ) = k + slope (θ - from). */
+export interface ConductivityPiece {
+  readonly from: number;
+  readonly to: number;
+  /** k at `from`, W/(m K). */
+  readonly k: number;
+  /** dk/dθ, W/(m K^2). */
+  readonly slope: number;
+}
+
+export interface KirchhoffTransform {
+  /** True for a constant k (then D = d, κ = 1). */
+  readonly constant: boolean;
+  /** k_ref = k at the base temperature, W/(m K). */
+  readonly kRef: number;
+  /** k at excess temperature θ (K), W/(m K). */
+  readonly conductivityAt: (theta: number) => number;
+  /** Writes D(d_i) (K) and κ_i = k(T_i)/k_ref for the drops d_i (K) of every node. */
+  readonly evaluate: (drop: Float64Array, potentialDrop: Float64Array, ratio: Float64Array) => void;
+  /** The linear pieces of k between θ = lo and θ = hi (lo < hi), in order. */
+  readonly pieces: (lo: number, hi: number) => ConductivityPiece[];
+}
+
+/** Kirchhoff transform of a conductivity, fluid at ambient_degC, base excess thetaBase (K). */
+export function kirchhoffTransform(conductivity: Conductivity, ambient_degC: number, thetaBase: number): KirchhoffTransform {
+  switch (conductivity.kind) {
+    case 'constant':
+      return constantTransform(conductivity.k);
+    case 'table':
+      return conductivity.k.length === 1
+        ? constantTransform(conductivity.k[0] as number)
+        : tableTransform(conductivity.T_degC, conductivity.k, ambient_degC, thetaBase);
+    default: {
+      const never: never = conductivity;
+      throw new Error(`unknown conductivity ${JSON.stringify(never)}`);
+    }
+  }
+}
+
+function constantTransform(k: number): KirchhoffTransform {
+  return {
+    constant: true,
+    kRef: k,
+    conductivityAt: () => k,
+    evaluate: (drop, potentialDrop, ratio) => {
+      potentialDrop.set(drop);
+      ratio.fill(1);
+    },
+    pieces: (lo, hi) => [{ from: lo, to: hi, k, slope: 0 }],
+  };
+}
+
+/** A table as a piecewise-linear function of a coordinate, ascending points, constant beyond the ends. */
+interface PiecewiseLinear {
+  readonly at: Float64Array;
+  readonly values: Float64Array;
+  readonly slopes: Float64Array;
+}
+
+function piecewiseLinear(at: Float64Array, values: Float64Array): PiecewiseLinear {
+  const slopes = new Float64Array(at.length - 1);
+  for (let j = 0; j + 1 < at.length; j++) {
+    slopes[j] = ((values[j + 1] as number) - (values[j] as number)) / ((at[j + 1] as number) - (at[j] as number));
+  }
+  return { at, values, slopes };
+}
+
+/** Segment j with at[j] <= s < at[j+1]; -1 below the first point, last index at or above the last. */
+function segmentOf(f: PiecewiseLinear, s: number): number {
+  const { at } = f;
+  const last = at.length - 1;
+  if (s < (at[0] as number)) return -1;
+  if (s >= (at[last] as number)) return last;
+  let low = 0;
+  let high = last;
+  while (high - low > 1) {
+    const mid = (low + high) >> 1;
+    if ((at[mid] as number) <= s) low = mid;
+    else high = mid;
+  }
+  return low;
+}
+
+function valueAt(f: PiecewiseLinear, s: number): number {
+  const j = segmentOf(f, s);
+  const last = f.at.length - 1;
+  if (j < 0) return f.values[0] as number;
+  if (j === last) return f.values[last] as number;
+  return (f.values[j] as number) + (f.slopes[j] as number) * (s - (f.at[j] as number));
+}
+
+function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: number, thetaBase: number): KirchhoffTransform {
+  const count = k.length;
+  const byTheta = piecewiseLinear(Float64Array.from(T_degC, (T) => T - ambient_degC), k);
+  // The same table over the drop e = θ_b - θ (ascending e: reversed order).
+  const byDrop = piecewiseLinear(
+    Float64Array.from({ length: count }, (_, j) => thetaBase - (T_degC[count - 1 - j] as number) + ambient_degC),
+    Float64Array.from({ length: count }, (_, j) => k[count - 1 - j] as number),
+  );
+  const kRef = valueAt(byDrop, 0);
+  // ∫_0^{e_j} k de at every table point (signed: negative below e = 0), by exact trapezoids outward from 0.
+  const pointIntegral = new Float64Array(count);
+  const zeroSegment = segmentOf(byDrop, 0);
+  for (let j = zeroSegment + 1; j < count; j++) {
+    const e = byDrop.at[j] as number;
+    const previous = j === zeroSegment + 1 ? 0 : (byDrop.at[j - 1] as number);
+    const kPrevious = j === zeroSegment + 1 ? kRef : (byDrop.values[j - 1] as number);
+    const base = j === zeroSegment + 1 ? 0 : (pointIntegral[j - 1] as number);
+    pointIntegral[j] = base + 0.5 * (e - previous) * (kPrevious + (byDrop.values[j] as number));
+  }
+  for (let j = zeroSegment; j >= 0; j--) {
+    const e = byDrop.at[j] as number;
+    const next = j === zeroSegment ? 0 : (byDrop.at[j + 1] as number);
+    const kNext = j === zeroSegment ? kRef : (byDrop.values[j + 1] as number);
+    const base = j === zeroSegment ? 0 : (pointIntegral[j + 1] as number);
+    pointIntegral[j] = base - 0.5 * (next - e) * (kNext + (byDrop.values[j] as number));
+  }
+  /** (1/k_ref) ∫_0^d k de: from the last table point between 0 and d (or from 0), one exact trapezoid. */
+  const potentialDrop = (d: number, kd: number): number => {
+    const j = segmentOf(byDrop, d);
+    if (j === zeroSegment) return (0.5 * d * (kRef + kd)) / kRef;
+    // d above the segment of 0: start from point j (<= d); below it: from point j + 1 (>= d).
+    const from = j > zeroSegment ? j : j + 1;
+    const e = byDrop.at[from] as number;
+    return ((pointIntegral[from] as number) + 0.5 * (d - e) * ((byDrop.values[from] as number) + kd)) / kRef;
+  };
+  return {
+    constant: false,
+    kRef,
+    conductivityAt: (theta) => valueAt(byTheta, theta),
+    evaluate: (drop, potential, ratio) => {
+      for (let i = 0; i < drop.length; i++) {
+        const d = drop[i] as number;
+        const kd = valueAt(byDrop, d);
+        potential[i] = potentialDrop(d, kd);
+        ratio[i] = kd / kRef;
+      }
+    },
+    pieces: (lo, hi) => {
+      const cuts = [lo];
+      for (let j = 0; j < count; j++) {
+        const c = byTheta.at[j] as number;
+        if (c > lo && c < hi) cuts.push(c);
+      }
+      cuts.push(hi);
+      const pieces: ConductivityPiece[] = [];
+      for (let p = 0; p + 1 < cuts.length; p++) {
+        const from = cuts[p] as number;
+        const to = cuts[p + 1] as number;
+        const j = segmentOf(byTheta, 0.5 * (from + to));
+        const slope = j < 0 || j === count - 1 ? 0 : (byTheta.slopes[j] as number);
+        pieces.push({ from, to, k: valueAt(byTheta, from), slope });
+      }
+      return pieces;
+    },
+  };
+}

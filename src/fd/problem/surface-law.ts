@@ -1,0 +1,134 @@
+/**
+ * Heat leaving the fin's faces: temperature-dependent convection and grey radiation.
+ *
+ * Flux from a face, W/m^2, at excess temperature θ = T - T_amb (K) and position part h_x of h:
+ *   q(θ) = h_x g(θ) θ + ε σ (T^4 - T_s^4),   g(θ) = |θ/θ_b|^n,   T = T_amb + θ in K,
+ *   dq/dθ = (n + 1) h_x g(θ) + 4 ε σ T^3.
+ * Power-law h: Sen & Trinh 1986, J. Heat Transfer 108, 457-459; Ünal 1985, IJHMT 28, 2279-2284 [both
+ * from memory]. Radiation: the fin sees only the surroundings, a black enclosure at T_s (view factor 1
+ * from every face to the surroundings, none to the base wall or to neighbouring fins), grey faces of
+ * emissivity ε; as in the radiating-fin analyses of Bartas & Sellers 1960, J. Heat Transfer 82, 73
+ * [from memory]. T^4 - T_s^4 is formed as (T - T_s)(T + T_s)(T^2 + T_s^2), free of cancellation.
+ *
+ * Discrete form (control volume i of the vertex-centred mesh, W): the same lumping as the linear
+ * scheme, θ taken at the node over its CV,
+ *   loss_i = G_i g(θ_i) θ_i + ε σ S_i (T_i^4 - T_s^4),   G_i = ∫_CV h_x P dx,   S_i = ∫_CV P dx,
+ * so that with n = 0 and ε = 0 it is the linear scheme's G_i θ_i exactly. The derivative is diagonal.
+ */
+import type { FinProblem } from './fin-problem.js';
+import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from './fin-problem.js';
+
+/** The face-flux law of a problem, with everything that does not depend on position. */
+export interface FaceLaw {
+  /** Exponent n of g. */
+  readonly exponent: number;
+  /** 1/|θ_b|, 1/K. */
+  readonly inverseBaseExcess: number;
+  /** ε σ, W/(m^2 K^4). */
+  readonly radiative: number;
+  /** T_amb and T_s, K. */
+  readonly ambient_K: number;
+  readonly surroundings_K: number;
+}
+
+export function faceLaw(problem: FinProblem): FaceLaw {
+  return {
+    exponent: problem.exponent,
+    inverseBaseExcess: 1 / Math.abs(problem.base.theta),
+    radiative: problem.radiation.emissivity * STEFAN_BOLTZMANN,
+    ambient_K: problem.ambient_degC + KELVIN_OFFSET,
+    surroundings_K: problem.radiation.surroundings_K,
+  };
+}
+
+/** g(θ) = |θ/θ_b|^n (1 when n = 0). */
+export function powerFactor(law: FaceLaw, theta: number): number {
+  return law.exponent === 0 ? 1 : Math.pow(Math.abs(theta) * law.inverseBaseExcess, law.exponent);
+}
+
+/** T^4 - T_s^4 at excess θ, K^4. */
+export function radiationGap(law: FaceLaw, theta: number): number {
+  const T = law.ambient_K + theta;
+  const Ts = law.surroundings_K;
+  return (T - Ts) * (T + Ts) * (T * T + Ts * Ts);
+}
+
+/**
+ * Largest convective slope (dq/dθ in W/(m^2 K), or G_i g (n+1) in W/K) put in the Newton matrix: for
+ * n < 0 it is infinite at θ = 0, and a finite stand-in keeps the matrix finite.
+ */
+const LARGEST_SLOPE = 1e300;
+
+/** g(θ) θ, K: 0 at θ = 0 also for n < 0 (where g itself is infinite). */
+export function convectedExcess(law: FaceLaw, theta: number): number {
+  return theta === 0 ? 0 : powerFactor(law, theta) * theta;
+}
+
+/** Face flux q(θ), W/m^2, for position part hx, W/(m^2 K). */
+export function faceFlux(law: FaceLaw, hx: number, theta: number): number {
+  const convected = hx === 0 ? 0 : hx * convectedExcess(law, theta);
+  return law.radiative === 0 ? convected : convected + law.radiative * radiationGap(law, theta);
+}
+
+/** dq/dθ, W/(m^2 K). */
+export function faceFluxSlope(law: FaceLaw, hx: number, theta: number): number {
+  const convected = hx === 0 ? 0 : Math.min(LARGEST_SLOPE, (law.exponent + 1) * hx * powerFactor(law, theta));
+  if (law.radiative === 0) return convected;
+  const T = law.ambient_K + theta;
+  return convected + 4 * law.radiative * T * T * T;
+}
+
+/**
+ * Losses of every CV and their derivatives, W and W/K: loss_i = G_i g θ_i + ε σ S_i (T_i^4 - T_s^4).
+ * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2).
+ */
+export function cvLosses(
+  law: FaceLaw,
+  G: Float64Array,
+  S: Float64Array,
+  theta: Float64Array,
+  loss: Float64Array,
+  slope: Float64Array,
+): void {
+  const n = theta.length;
+  const { exponent, radiative, ambient_K: Ta, surroundings_K: Ts } = law;
+  const scale = law.inverseBaseExcess;
+  for (let i = 0; i < n; i++) {
+    const t = theta[i] as number;
+    const g = exponent === 0 ? 1 : Math.pow(Math.abs(t) * scale, exponent);
+    const Gi = G[i] as number;
+    // A CV without convective surface (G_i = 0: the node at a sharp or cusped tip) exchanges nothing: with
+    // n < 0 at θ = 0, g is infinite and 0 * g would put NaN into the Newton matrix (fuzz finding: a convex
+    // parabolic fin, n = -0.95, ended in a NaN pivot).
+    let value = t === 0 || Gi === 0 ? 0 : Gi * g * t;
+    let derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
+    if (radiative !== 0) {
+      const T = Ta + t;
+      const Si = radiative * (S[i] as number);
+      value += Si * ((T - Ts) * (T + Ts) * (T * T + Ts * Ts));
+      derivative += 4 * Si * T * T * T;
+    }
+    loss[i] = value;
+    slope[i] = derivative;
+  }
+}
+
+/**
+ * Equilibrium excess θ_e where q(θ_e) = 0 (the far end of an infinitely long fin), for position part
+ * hx: 0 without radiation or when T_s = T_amb; T_s - T_amb without convection; otherwise between the
+ * two (q is increasing in θ), found by bisection to the last bit.
+ */
+export function equilibriumExcess(law: FaceLaw, hx: number): number {
+  const sinkExcess = law.surroundings_K - law.ambient_K;
+  if (law.radiative === 0 || sinkExcess === 0) return 0;
+  if (hx === 0) return sinkExcess;
+  let low = Math.min(0, sinkExcess);
+  let high = Math.max(0, sinkExcess);
+  for (let it = 0; it < 200; it++) {
+    const mid = 0.5 * (low + high);
+    if (mid <= low || mid >= high) break;
+    if (faceFlux(law, hx, mid) > 0) high = mid;
+    else low = mid;
+  }
+  return 0.5 * (low + high);
+}

@@ -1,0 +1,100 @@
+/**
+ * Heat rates of a solved 2-D section, from the node balances of the finite-volume scheme.
+ *
+ * For node p the balance of its control volume reads (sign convention of two-d/boundary.ts: heat
+ * leaving the fin is positive)
+ *     R_p = (K theta)_p + sum over its non-fixed boundaries s of G_s,p (theta_p - thetaFar_s),
+ * where R_p is the heat entering through a fixed-temperature boundary (0 on every other node). The heat
+ * entering through a boundary is then: fixed, the sum of R_p over its nodes (the "reaction"); convective or
+ * contact, sum G_p (thetaFar - theta_p); adiabatic, 0. Because K has zero row and column sums, heat in at
+ * the base equals heat out through the faces and tip up to the solver's residual:
+ *     energyBalance = |Q_base - Q_surfaces| / |Q_base|.
+ * Units: W per unit depth (per metre of width, or per radian); multiply by the grid's depth for the fin.
+ */
+import type { BoundaryTerms2D, SideTerms } from './boundary.js';
+import { couplingOf, type Stencil9 } from '../linear-algebra/stencil9.js';
+
+export interface HeatRates2D {
+  /** Heat entering the fin through the base, W per unit depth. */
+  base: number;
+  /** Heat leaving through the faces, W per unit depth. */
+  face: number;
+  /** Heat leaving through the tip, W per unit depth. */
+  tip: number;
+  /** face + tip. */
+  surfaces: number;
+  /** |base - surfaces| / |base|. */
+  energyBalance: number;
+}
+
+export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): HeatRates2D {
+  // Boundary exchange G (theta - thetaFar) of every node of each non-fixed boundary.
+  const exchangeOf = (side: SideTerms): Float64Array | null =>
+    side.kind === 'fixed'
+      ? null
+      : Float64Array.from(side.nodes, (p, e) => (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta));
+  return heatRatesFromExchange(K, terms, theta, { base: exchangeOf(terms.base), face: exchangeOf(terms.face), tip: exchangeOf(terms.tip) });
+}
+
+/**
+ * The same balances for any boundary law: `exchange[side][e]` is the heat leaving the fin through node e
+ * of that boundary (W per unit depth; null for a fixed boundary), and `potential` the field the conduction
+ * operator K acts on (theta itself, or the Kirchhoff potential of a temperature-dependent k; only its
+ * differences are used).
+ */
+export function heatRatesFromExchange(
+  K: Stencil9,
+  terms: BoundaryTerms2D,
+  potential: Float64Array,
+  exchangeBySide: Record<'base' | 'face' | 'tip', Float64Array | null>,
+): HeatRates2D {
+  const ny = K.nodesY;
+  const n = potential.length;
+  const sides: SideTerms[] = [terms.base, terms.face, terms.tip];
+  // Boundary exchange of every node with its non-fixed boundaries.
+  const exchange = new Float64Array(n);
+  for (const side of sides) {
+    const values = exchangeBySide[side.name as 'base' | 'face' | 'tip'];
+    if (side.kind === 'fixed' || values === null) continue;
+    side.nodes.forEach((p, e) => {
+      exchange[p] = (exchange[p] as number) + (values[e] as number);
+    });
+  }
+  const claimed = new Uint8Array(n);
+  const inSide = new Uint8Array(n);
+  const heatIn = (side: SideTerms): number => {
+    let q = 0;
+    inSide.fill(0);
+    for (const p of side.nodes) inSide[p] = 1;
+    const values = exchangeBySide[side.name as 'base' | 'face' | 'tip'];
+    side.nodes.forEach((p, e) => {
+      if (side.kind === 'fixed') {
+        if (claimed[p] === 1) return; // a corner shared by two fixed boundaries counts once
+        claimed[p] = 1;
+        // Conduction from p to the nodes off this boundary, in difference form: the couplings between
+        // nodes of the boundary cancel in pairs and are left out, so no round-off of them remains.
+        const i = Math.floor(p / ny);
+        const j = p - i * ny;
+        const tp = potential[p] as number;
+        let conducted = 0;
+        for (let di = -1; di <= 1; di++) {
+          for (let dj = -1; dj <= 1; dj++) {
+            if (di === 0 && dj === 0) continue;
+            const c = couplingOf(K, i, j, di, dj);
+            const nb = p + di * ny + dj;
+            if (c !== 0 && inSide[nb] === 0) conducted += c * ((potential[nb] as number) - tp);
+          }
+        }
+        q += conducted + (exchange[p] as number);
+      } else if (values !== null) {
+        q += -(values[e] as number);
+      }
+    });
+    return q;
+  };
+  const base = heatIn(terms.base);
+  const tip = -heatIn(terms.tip);
+  const face = -heatIn(terms.face);
+  const surfaces = face + tip;
+  return { base, face, tip, surfaces, energyBalance: Math.abs(base - surfaces) / Math.abs(base) };
+}
