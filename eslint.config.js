@@ -44,36 +44,4 @@ export default tseslint.config(
     files: ['src/**/*.ts'],
     rules: { 'no-restricted-syntax': noFlagNames },
   },
-  // Known violations, left to issue 10's one-model branch (which restructures src/fd and src/compare): they
-  // warn instead of failing until it lands. The coordinator deletes this block after that merge, and each
-  // file taken out of a list below must stay clean.
-  {
-    files: ['src/fd/**/*.ts', 'src/compare/**/*.ts'],
-    rules: { 'fincheck/layer-entry': 'warn' },
-  },
-  {
-    files: [
-      'src/compare/check.ts',
-      'src/compare/check-nonlinear.ts',
-      'src/fd/tridiagonal.ts',
-      'src/fd/conservative-thomas.ts',
-      'src/fd/sparse/bandedCholesky.ts',
-      'src/fd/sparse/bandedLdlt.ts',
-    ],
-    rules: { 'fincheck/no-import-cycle': 'warn' },
-  },
-  {
-    files: [
-      'src/compare/check-nonlinear.ts',
-      'src/compare/solve2d.ts',
-      'src/fd/fin2d.ts',
-      'src/fd/nonlinear1d-solve.ts',
-      'src/fd/nonlinear2d.ts',
-      'src/map/axis.ts',
-      'src/map/run-map.ts',
-      'src/plots/sources.ts',
-      'src/report/report-date.ts',
-    ],
-    rules: { 'no-restricted-syntax': ['warn', ...noFlagNames.slice(1)] },
-  },
 );

@@ -19,7 +19,7 @@ import { ModelNotApplicableError } from '../errors.js';
 import { solveNonlinearFin1D, studyNonlinearFin1D, nonlinear2dUnsupported, studyNonlinearFin2D, type NonlinearFin2DStudy, finProblem1D, decayGradingOf, resolveStudy1D } from '../fd/index.js';
 import { finGeometry } from '../mesh/index.js';
 import { CAUTIONS } from './cautions.js';
-import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check.js';
+import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check-common.js';
 import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './efficiency-basis.js';
 import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
 import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';

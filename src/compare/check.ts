@@ -8,97 +8,24 @@
  */
 import type { Case } from '../case/index.js';
 import { initBessel } from '../analytic/index.js';
-import { type Fin1DStudy, finProblem1D, resolveFinProblem1D, type Resolution, type ResolutionBudget, type Fin2DStudy, isLinearFinCase, type LinearFinCase } from '../fd/index.js';
-import { finGeometry, type FinGeometry1D } from '../mesh/index.js';
+import { finProblem1D, resolveFinProblem1D, isLinearFinCase, type LinearFinCase } from '../fd/index.js';
+import { finGeometry } from '../mesh/index.js';
+import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check-common.js';
 import { CAUTIONS } from './cautions.js';
 import { nonlinearCheck } from './check-nonlinear.js';
-import { equivalentUniformFin, type EquivalentUniformFin } from './equivalent.js';
-import { designFlags } from './flags.js';
+import { equivalentUniformFin } from './equivalent.js';
 import { assumptionLedger } from './ledger.js';
 import { madeByReported, modelRows, shortcutInputs } from './model-rows.js';
 import { reference2D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
-import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote, type EfficiencyBasis } from './efficiency-basis.js';
-import { choose2DReference, judgedReference, resolution1D, resolution2D, resolutionTarget } from './resolved-reference.js';
-import type { CheckReport, Flag, ReferenceResult } from './types.js';
+import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './efficiency-basis.js';
+import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
 
-export interface CheckOptions {
-  /** Relative drift accepted as `ok` (0.02 = 2 %). */
-  tolerance: number;
-  reference: 'auto' | '1d' | '2d';
-  /** Compute the assumption ledger (default true); maps skip it, their points need only drifts. */
-  ledger?: boolean;
-  /** How far the fd-1d reference may be refined to reach tolerance / 10 (default DEFAULT_RESOLUTION_BUDGET). */
-  resolutionBudget?: ResolutionBudget;
-}
-
-export interface CheckOutcome {
-  report: CheckReport;
-  /** The 1-D solution (the reference, or the fd-1d model beside a 2-D reference); profiles for plots. */
-  oneD: Fin1DStudy;
-  /** The 2-D study when fd-2d is the reference (field for heat maps). */
-  twoD: Fin2DStudy | null;
-}
+export type { CheckOptions, CheckOutcome } from './check-common.js';
 
 export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcome> {
   await initBessel();
   return isLinearFinCase(c) ? linearCheck(c, opts) : nonlinearCheck(c, opts);
-}
-
-/** The fd-1d study as a reference, judged against the resolution it reached. */
-export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
-  const ref = oneD.result;
-  const grids =
-    resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
-  return judgedReference(
-    {
-      model: 'fd-1d',
-      heatRate_W: ref.heatRate,
-      effectiveness: ref.effectiveness,
-      discretizationError: oneD.study.gci,
-      energyBalance: ref.energyBalance,
-      observedOrder: oneD.study.observedOrder,
-      grid: { nodes: ref.mesh.nodes },
-      tipTemperature_degC: ref.tipTemperature_degC,
-      note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
-    },
-    resolution1D(resolution),
-    basis,
-  );
-}
-
-/**
- * Bi = h_b (s_b/2)/k across the thickness at the base (s_b: base thickness, or diameter for pins) and mL
- * of the equivalent uniform fin (mean section and perimeter, area-weighted mean h): where the fin sits on
- * the textbook's charts. Dimensionless.
- */
-export function dimensionless(geometry: FinGeometry1D, eq: EquivalentUniformFin): { biot: number; mL: number } {
-  return {
-    biot: (eq.hBase * geometry.size(0)) / 2 / eq.k,
-    mL: Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length,
-  };
-}
-
-/** Flags from the equivalent uniform fin of the shortcuts and the reference. */
-export function checkFlags(
-  geometry: FinGeometry1D,
-  eq: EquivalentUniformFin,
-  reference: ReferenceResult,
-  tolerance: number,
-  converged: boolean,
-  measuredOneDDrift: number | null,
-): Flag[] {
-  return designFlags({
-    family: geometry.shape,
-    ...dimensionless(geometry, eq),
-    effectiveness: reference.effectiveness,
-    hAoverkP: (eq.hBase * geometry.baseArea) / (eq.k * geometry.perimeter(0)),
-    tolerance,
-    discretizationError: reference.discretizationError,
-    converged,
-    energyBalance: reference.energyBalance,
-    measuredOneDDrift,
-  });
 }
 
 function linearCheck(c: LinearFinCase, opts: CheckOptions): CheckOutcome {

@@ -1,0 +1,86 @@
+/**
+ * What the linear check (check.ts) and the nonlinear check (check-nonlinear.ts) share: the options and the
+ * outcome of `check`, the fd-1d study as a judged reference, the dimensionless groups and the flags. Its own
+ * module so that neither check imports the other.
+ */
+import { type Fin1DStudy, type Resolution, type ResolutionBudget, type Fin2DStudy } from '../fd/index.js';
+import type { FinGeometry1D } from '../mesh/index.js';
+import type { EquivalentUniformFin } from './equivalent.js';
+import { designFlags } from './flags.js';
+import type { EfficiencyBasis } from './efficiency-basis.js';
+import { judgedReference, resolution1D } from './resolved-reference.js';
+import type { CheckReport, Flag, ReferenceResult } from './types.js';
+
+export interface CheckOptions {
+  /** Relative drift accepted as `ok` (0.02 = 2 %). */
+  tolerance: number;
+  reference: 'auto' | '1d' | '2d';
+  /** Compute the assumption ledger (default true); maps skip it, their points need only drifts. */
+  ledger?: boolean;
+  /** How far the fd-1d reference may be refined to reach tolerance / 10 (default DEFAULT_RESOLUTION_BUDGET). */
+  resolutionBudget?: ResolutionBudget;
+}
+
+export interface CheckOutcome {
+  report: CheckReport;
+  /** The 1-D solution (the reference, or the fd-1d model beside a 2-D reference); profiles for plots. */
+  oneD: Fin1DStudy;
+  /** The 2-D study when fd-2d is the reference (field for heat maps). */
+  twoD: Fin2DStudy | null;
+}
+
+/** The fd-1d study as a reference, judged against the resolution it reached. */
+export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
+  const ref = oneD.result;
+  const grids =
+    resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
+  return judgedReference(
+    {
+      model: 'fd-1d',
+      heatRate_W: ref.heatRate,
+      effectiveness: ref.effectiveness,
+      discretizationError: oneD.study.gci,
+      energyBalance: ref.energyBalance,
+      observedOrder: oneD.study.observedOrder,
+      grid: { nodes: ref.mesh.nodes },
+      tipTemperature_degC: ref.tipTemperature_degC,
+      note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
+    },
+    resolution1D(resolution),
+    basis,
+  );
+}
+
+/**
+ * Bi = h_b (s_b/2)/k across the thickness at the base (s_b: base thickness, or diameter for pins) and mL
+ * of the equivalent uniform fin (mean section and perimeter, area-weighted mean h): where the fin sits on
+ * the textbook's charts. Dimensionless.
+ */
+export function dimensionless(geometry: FinGeometry1D, eq: EquivalentUniformFin): { biot: number; mL: number } {
+  return {
+    biot: (eq.hBase * geometry.size(0)) / 2 / eq.k,
+    mL: Math.sqrt((eq.h * eq.P) / (eq.k * eq.A)) * eq.length,
+  };
+}
+
+/** Flags from the equivalent uniform fin of the shortcuts and the reference. */
+export function checkFlags(
+  geometry: FinGeometry1D,
+  eq: EquivalentUniformFin,
+  reference: ReferenceResult,
+  tolerance: number,
+  converged: boolean,
+  measuredOneDDrift: number | null,
+): Flag[] {
+  return designFlags({
+    family: geometry.shape,
+    ...dimensionless(geometry, eq),
+    effectiveness: reference.effectiveness,
+    hAoverkP: (eq.hBase * geometry.baseArea) / (eq.k * geometry.perimeter(0)),
+    tolerance,
+    discretizationError: reference.discretizationError,
+    converged,
+    energyBalance: reference.energyBalance,
+    measuredOneDDrift,
+  });
+}
