@@ -70,9 +70,19 @@ export const temperatureRange: Range = {
  * liquids 50-20,000, boiling and condensation 2500-100,000 (Incropera et al. 2007, Table 1.1); dropwise
  * condensation and jet impingement boiling reach a few 1e5, so 1e6 leaves a margin of ten over the largest.
  */
-export const coefficientRange: Range = { test: (v) => v >= 0 && v <= 1e6, text: '>= 0', limit: 'at most 1e6 W/(m^2*K)' };
+/*
+ * The lower bound of a nonzero h, 1e-3 W/(m^2*K), is 2000 times below the smallest of those (free convection in
+ * gases, 2); radiation, the other small loss, is given by emissivity. Below it an h is no coefficient but round-off:
+ * a subnormal h (5e-324) made the heat rate exactly 0 and every efficiency null, and an h of 2.2e-308 on the 2-D
+ * grid gave an energy balance of 42 with exit 0 (fuzz findings, tests/fuzz/cases/subnormal-h*.yaml).
+ */
+export const coefficientRange: Range = {
+  test: (v) => v === 0 || (v >= 1e-3 && v <= 1e6),
+  text: '>= 0',
+  limit: '0 or at least 1e-3 and at most 1e6 W/(m^2*K)',
+};
 /** The same bound where 0 has no meaning (the power law's h at the base temperature). */
-export const positiveCoefficient: Range = { test: (v) => v > 0 && v <= 1e6, text: '> 0', limit: 'at most 1e6 W/(m^2*K)' };
+export const positiveCoefficient: Range = { test: (v) => v >= 1e-3 && v <= 1e6, text: '> 0', limit: 'at least 1e-3 and at most 1e6 W/(m^2*K)' };
 
 /**
  * A thermal conductivity, W/(m*K): 0.001 to 10,000. Silica aerogel, about the least conductive solid, is near
@@ -83,9 +93,16 @@ export const conductivityRange: Range = { test: (v) => v >= 1e-3 && v <= 1e4, te
 
 /**
  * A contact resistance per unit area, m^2*K/W: 0 to 10. Metallic joints are 1e-6 to 1e-3 (Incropera et al.
- * 2007, Tables 3.1 and 3.2); 10 is the resistance of a 10 mm gap of still air, far beyond any bonded fin.
+ * 2007, Tables 3.1 and 3.2); 10 is the resistance of a 10 mm gap of still air, far beyond any bonded fin. A nonzero
+ * resistance is at least 1e-9, a thousand times below the best joint: smaller is no joint but round-off (0 says
+ * "none"); 2.2e-308 overflowed 1/R at the start of the nonlinear 2-D solve (fuzz finding,
+ * tests/fuzz/cases/tiny-contact-resistance.yaml).
  */
-export const contactResistanceRange: Range = { test: (v) => v >= 0 && v <= 10, text: '>= 0', limit: 'at most 10 m^2*K/W' };
+export const contactResistanceRange: Range = {
+  test: (v) => v === 0 || (v >= 1e-9 && v <= 10),
+  text: '>= 0',
+  limit: '0 or at least 1e-9 and at most 10 m^2*K/W',
+};
 
 /**
  * The exponent of a power-law h, theta^n: above -1 (so that the flux h * theta vanishes with theta) and at most 5.

@@ -43,6 +43,9 @@ describe('plausibility bounds: exit 2 naming the key, the value and the accepted
     ['fin.thickness', '  thickness: 2 mm', '  thickness: 1e308', /at most 1000 m/],
     ['fin.length', '  length: 40 mm', '  length: 1e308', /at most 1000 m/],
     ['convection.h', '  h: 40 W/(m^2*K)', '  h: 1e308', /at most 1e6 W\/\(m\^2\*K\)/],
+    // A nonzero h below 1e-3 is round-off, not a coefficient (fuzz: 2.2e-308 gave an energy balance of 42 on the 2-D grid).
+    ['convection.h', '  h: 40 W/(m^2*K)', '  h: 2.2250738585072014e-308', /0 or at least 1e-3/],
+    ['convection.h', '  h: 40 W/(m^2*K)', '  h: 5e-4', /0 or at least 1e-3/],
     ['base.temperature', '  temperature: 85 degC', '  temperature: 1e308', /at most 4000 degC/],
     ['convection.ambient', '  ambient: 25 degC', '  ambient: 5000 K', /at most 4000 degC/],
     ['material.k', 'material: aluminium-6063', 'material: { k: 1e-9 }', /at least 0\.001/],
@@ -66,6 +69,11 @@ describe('plausibility bounds: exit 2 naming the key, the value and the accepted
   it('contact resistance, exponent and table length have bounds too', () => {
     const contact = failure(valid.replace('  temperature: 85 degC', '  temperature: 85 degC\n  contactResistance: 1e9'));
     expect(contact.issues[0]?.accepted).toMatch(/at most 10 m\^2\*K\/W/);
+    // A nonzero resistance below 1e-9 is round-off (fuzz: 2.2e-308 overflowed 1/R in the nonlinear 2-D start).
+    const tiny = failure(valid.replace('  temperature: 85 degC', '  temperature: 85 degC\n  contactResistance: 2.2250738585072014e-308'));
+    expect(tiny.issues[0]?.path).toBe('base.contactResistance');
+    expect(tiny.issues[0]?.accepted).toMatch(/0 or at least 1e-9/);
+    expect(failure(valid.replace('  h: 40 W/(m^2*K)', '  h: { law: power, base: 1e-4, exponent: 0.25 }')).issues[0]?.path).toBe('convection.h.base');
     const exponent = failure(valid.replace('  h: 40 W/(m^2*K)', '  h: { law: power, base: 10, exponent: 50 }'));
     expect(exponent.issues[0]?.path).toBe('convection.h.exponent');
     expect(exponent.issues[0]?.accepted).toMatch(/at most 5/);

@@ -110,3 +110,26 @@ describe('fd-2d reference: the true sloped faces are the surface of every row', 
     expectOneSurface(report);
   });
 });
+
+describe('formulaEfficiency: the shortcut formula’s own value, null only where the formula has none', () => {
+  // Fuzz finding: a 2 mm brass pin with a prescribed tip temperature had formulaEfficiency null on the
+  // closed-form row. Documented (README "check"): the textbook solution for a prescribed tip temperature
+  // gives the heat rate and the temperature but no efficiency, as heat also crosses the tip (Incropera et al.
+  // 2007, Fundamentals of Heat and Mass Transfer, 6th ed., Table 3.4, case C). Every other row has one.
+  it('a 2 mm brass pin with its tip held at 70 degC: null on the prescribed-tip closed form only', async () => {
+    const c = parseCaseObject({
+      name: 'brass pin, tip held',
+      fin: { profile: 'pin', length: '30 mm', diameter: '2 mm' },
+      material: 'brass',
+      convection: { ambient: 25, h: 40, tip: { temperature: '70 degC' } },
+      base: { temperature: 85 },
+    });
+    const { report } = await runCheck(c, { tolerance: 0.02, reference: '1d', ledger: false });
+    const shortcuts = report.models.filter((m) => !m.model.startsWith('fd-'));
+    expect(shortcuts.map((m) => m.model)).toContain('closed-form');
+    for (const m of shortcuts) {
+      if (m.model === 'closed-form') expect(m.formulaEfficiency).toBeNull();
+      else expect(Number.isFinite(m.formulaEfficiency)).toBe(true);
+    }
+  });
+});

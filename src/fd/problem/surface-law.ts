@@ -97,8 +97,11 @@ export function cvLosses(
     const t = theta[i] as number;
     const g = exponent === 0 ? 1 : Math.pow(Math.abs(t) * scale, exponent);
     const Gi = G[i] as number;
-    let value = t === 0 ? 0 : Gi * g * t;
-    let derivative = exponent === 0 ? Gi : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
+    // A CV without convective surface (G_i = 0: the node at a sharp or cusped tip) exchanges nothing: with
+    // n < 0 at θ = 0, g is infinite and 0 * g would put NaN into the Newton matrix (fuzz finding: a convex
+    // parabolic fin, n = -0.95, ended in a NaN pivot).
+    let value = t === 0 || Gi === 0 ? 0 : Gi * g * t;
+    let derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
     if (radiative !== 0) {
       const T = Ta + t;
       const Si = radiative * (S[i] as number);
