@@ -2,6 +2,8 @@
  * Extreme magnitudes: a random valid case with one quantity replaced by a value at the edge of what a double
  * holds (1e308, the largest double, 5e-324, 1e-300, the smallest normal double) or far outside any fin
  * (1e30 m, h = 1e12, a base at 1e6 degC), as a bare number or with a unit (1e308 km overflows on conversion).
+ * The double limits are those of IEEE 754-2008 binary64 (largest 1.7976931348623157e308, smallest normal
+ * 2.2250738585072014e-308, smallest subnormal 5e-324): inputs at the edge, not reference values.
  * fincheck must refuse it (exit 2 naming a key), solve it (exit 0 with finite, sane numbers) or say that the
  * solver failed and what to change (exit 3); never crash (issue 9, items 2 and 3).
  */
