@@ -15,12 +15,14 @@ function newtonOf(finest: { readonly newton?: NewtonReport }, iterations: readon
   return finest.newton === undefined ? null : { stepsPerGrid: [...(iterations ?? [])], finest: finest.newton };
 }
 
-/** A 1-D study ({ result, study }, with Newton's step counts for a nonlinear fin) as a FinStudy1D. */
-export function finStudy1DFrom(
+/** The fields of a FinStudy1D that its finest grid's solution gives (the study's own and the resolved one's). */
+export function finStudy1DFields(
   problem: FinProblem,
-  s: { readonly result: Fin1DResult & { readonly newton?: NewtonReport }; readonly study: RefinementStudy; readonly iterations?: readonly number[] },
-): FinStudy1D {
-  const finest = s.result;
+  finest: Fin1DResult,
+): Pick<
+  FinStudy1D,
+  'model' | 'problem' | 'finest' | 'heatRate_W' | 'surfaceHeatRate_W' | 'energyBalance' | 'idealHeatRate_W' | 'efficiency' | 'effectiveness' | 'baseTemperature_degC' | 'tipTemperature_degC'
+> {
   return {
     model: 'fd-1d',
     problem,
@@ -33,9 +35,19 @@ export function finStudy1DFrom(
     effectiveness: finest.effectiveness,
     baseTemperature_degC: (finest.theta[0] as number) + problem.ambient_degC,
     tipTemperature_degC: finest.tipTemperature_degC,
+  };
+}
+
+/** A 1-D study ({ result, study }, with Newton's step counts for a nonlinear fin) as a FinStudy1D. */
+export function finStudy1DFrom(
+  problem: FinProblem,
+  s: { readonly result: Fin1DResult & { readonly newton?: NewtonReport }; readonly study: RefinementStudy; readonly iterations?: readonly number[] },
+): FinStudy1D {
+  return {
+    ...finStudy1DFields(problem, s.result),
     refinement: s.study,
     discretizationError: s.study.gci,
-    newton: newtonOf(finest, s.iterations),
+    newton: newtonOf(s.result, s.iterations),
   };
 }
 

@@ -26,6 +26,7 @@ import type { FinStudy, FinStudy1D, FinStudy2D, NewtonStatistics } from './fin-s
 import { gridSolvers, type Grid1D, type Grid2D, type GridSolution1D, type GridSolution2D, type GridSolvers } from './grid-solvers.js';
 import { richardsonGci } from './refinement.js';
 import { solveGrids } from './refinement-loop.js';
+import { finStudy1DFields } from './from-studies.js';
 
 export interface FinStudyOptions {
   readonly model: FinModel;
@@ -105,17 +106,7 @@ function newtonOf(results: readonly { readonly newton?: NewtonStatistics['finest
 function study1D(problem: FinProblem, results: GridSolution1D[], refinement: ReturnType<typeof richardsonGci> | null): FinStudy1D {
   const finest = results[results.length - 1] as GridSolution1D;
   return {
-    model: 'fd-1d',
-    problem,
-    finest,
-    heatRate_W: finest.heatRate,
-    surfaceHeatRate_W: finest.surfaceHeatRate,
-    energyBalance: finest.energyBalance,
-    idealHeatRate_W: finest.idealHeatRate,
-    efficiency: finest.efficiency,
-    effectiveness: finest.effectiveness,
-    baseTemperature_degC: (finest.theta[0] as number) + problem.ambient_degC,
-    tipTemperature_degC: finest.tipTemperature_degC,
+    ...finStudy1DFields(problem, finest),
     refinement,
     discretizationError: refinement === null ? null : refinement.gci,
     newton: newtonOf(results),
