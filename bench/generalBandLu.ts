@@ -59,7 +59,15 @@ export function stencilToCsr(a: Stencil9): Csr {
 }
 
 /** Breadth-first levels from `start`; returns the visit order and the last level's first index in it. */
-function breadthFirst(m: Csr, start: number, degree: Int32Array, mark: Int32Array, stamp: number, order: Int32Array, from: number): { end: number; lastLevel: number; depth: number } {
+function breadthFirst(
+  m: Csr,
+  start: number,
+  degree: Int32Array,
+  mark: Int32Array,
+  stamp: number,
+  order: Int32Array,
+  from: number,
+): { end: number; lastLevel: number; depth: number } {
   let head = from;
   let tail = from;
   order[tail++] = start;

@@ -27,7 +27,19 @@ export async function benchNonlinear(): Promise<BenchRow[]> {
   const t0 = await timeTask('linear', () => solveFin1D(linear, { nodes: NODES }), { time: 500, iterations: 50 });
   const cases: [string, ReturnType<typeof plate>][] = [
     ['power-law h (n = 1/4)', plate({ law: 'power', base: 10, exponent: 0.25 })],
-    ['power-law h + radiation + k table', plate({ law: 'power', base: 10, exponent: 0.25 }, { emissivity: 0.8 }, { points: [[20, 210], [100, 200]] })],
+    [
+      'power-law h + radiation + k table',
+      plate(
+        { law: 'power', base: 10, exponent: 0.25 },
+        { emissivity: 0.8 },
+        {
+          points: [
+            [20, 210],
+            [100, 200],
+          ],
+        },
+      ),
+    ],
   ];
   const rows: BenchRow[] = [];
   for (const [label, c] of cases) {

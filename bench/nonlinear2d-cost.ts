@@ -35,7 +35,13 @@ const nonlinear: Case = finCase({
   base_degC: 75,
   emissivity: 0.85,
 });
-const linear: Case = finCase({ profile, k: { kind: 'constant', k: 205 }, h: { kind: 'uniform', h: 6.5 }, tip: { kind: 'convective', h: null }, base_degC: 75 });
+const linear: Case = finCase({
+  profile,
+  k: { kind: 'constant', k: 205 },
+  h: { kind: 'uniform', h: 6.5 },
+  tip: { kind: 'convective', h: null },
+  base_degC: 75,
+});
 
 function compare(label: string, runLinear: () => void, runNonlinear: () => void, runs: number): void {
   runLinear();
@@ -55,11 +61,25 @@ function compare(label: string, runLinear: () => void, runNonlinear: () => void,
   );
 }
 
-for (const [nx, ny, runs] of [[185, 33, 15], [1025, 33, 9], [369, 129, 7]] as const) {
+for (const [nx, ny, runs] of [
+  [185, 33, 15],
+  [1025, 33, 9],
+  [369, 129, 7],
+] as const) {
   const r = solveNonlinearFin2D(nonlinear, { nx, ny });
   const steps = `${r.newton.iterations} steps + ${r.newton.coarseGridIterations} on coarser grids, ${r.solver}`;
-  compare(`${nx} x ${ny}`, () => void solveFin2D(linear, { nx, ny }), () => void solveNonlinearFin2D(nonlinear, { nx, ny }), runs);
+  compare(
+    `${nx} x ${ny}`,
+    () => void solveFin2D(linear, { nx, ny }),
+    () => void solveNonlinearFin2D(nonlinear, { nx, ny }),
+    runs,
+  );
   console.log(`${''.padEnd(22)} nonlinear: ${steps}`);
 }
-compare('study (3 grids)', () => void studyFin2D(linear), () => void studyNonlinearFin2D(nonlinear), 9);
+compare(
+  'study (3 grids)',
+  () => void studyFin2D(linear),
+  () => void studyNonlinearFin2D(nonlinear),
+  9,
+);
 console.log(`${''.padEnd(22)} Newton steps per grid: ${studyNonlinearFin2D(nonlinear).iterations.join('/')}`);

@@ -105,7 +105,7 @@ export async function benchOneD(): Promise<BenchRow[]> {
         item: `assemble + solve, ${n} nodes (mesh reused, arrays reused)`,
         target: '-',
         measured: formatMs(a.medianMs),
-      cpu: cpuText(a.cpuMedianMs),
+        cpu: cpuText(a.cpuMedianMs),
         verdict: 'info',
         note: spread(a),
       });
@@ -118,7 +118,7 @@ export async function benchOneD(): Promise<BenchRow[]> {
         item: `solveFinProblem1D end to end, ${n} nodes (mesh, assembly, solve, heat rates; allocates)`,
         target: '-',
         measured: formatMs(e.medianMs),
-      cpu: cpuText(e.cpuMedianMs),
+        cpu: cpuText(e.cpuMedianMs),
         verdict: 'info',
         note: spread(e),
       });

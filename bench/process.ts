@@ -18,7 +18,8 @@ const RUNS = 10;
  * Loaded before the CLI with --import: at exit the child writes its own CPU time (user + system, us) to
  * stderr, so that the table can show it beside the wall time (a module from a data: URL, well under 1 ms).
  */
-const CPU_REPORTER = 'data:text/javascript,process.on("exit",()=>{const u=process.cpuUsage();process.stderr.write("\\nbench-cpu-us "+(u.user+u.system)+"\\n")})';
+const CPU_REPORTER =
+  'data:text/javascript,process.on("exit",()=>{const u=process.cpuUsage();process.stderr.write("\\nbench-cpu-us "+(u.user+u.system)+"\\n")})';
 
 interface CliRun {
   status: number | null;
@@ -109,7 +110,20 @@ export async function benchCommands(): Promise<BenchRow[]> {
     const probe = runCli(report);
     if (probe.status === 0) rows.push(await timeCli(`fincheck report ${DEMO_CASE} (whole process)`, report, '<= 1 s', 1000, probe));
     else rows.push(skipped(AREA, 'fincheck report', '<= 1 s', `exit ${probe.status}: ${probe.stderr.trim()}`));
-    const map = ['map', DEMO_CASE, '--x', 'fin.thickness=1mm:4mm', '--y', 'convection.h=10:200', '--steps', '41x41', '--reference', '1d', '--out', join(dir, 'map')];
+    const map = [
+      'map',
+      DEMO_CASE,
+      '--x',
+      'fin.thickness=1mm:4mm',
+      '--y',
+      'convection.h=10:200',
+      '--steps',
+      '41x41',
+      '--reference',
+      '1d',
+      '--out',
+      join(dir, 'map'),
+    ];
     const probeMap = runCli(map);
     if (probeMap.status === 0) rows.push(await timeCli('fincheck map 41x41, 1-D reference, default jobs (whole process)', map, '<= 2 s', 2000, probeMap));
     else rows.push(skipped(AREA, 'fincheck map 41x41 1-D', '<= 2 s', `exit ${probeMap.status}: ${probeMap.stderr.trim()}`));
@@ -126,12 +140,35 @@ export async function benchMap2D(): Promise<BenchRow[]> {
   const { join } = await import('node:path');
   const dir = mkdtempSync(join(tmpdir(), 'fincheck-bench-'));
   try {
-    const args = ['map', DEMO_CASE, '--x', 'fin.thickness=1mm:4mm', '--y', 'convection.h=10:200', '--steps', '41x41', '--reference', '2d', '--out', join(dir, 'map')];
+    const args = [
+      'map',
+      DEMO_CASE,
+      '--x',
+      'fin.thickness=1mm:4mm',
+      '--y',
+      'convection.h=10:200',
+      '--steps',
+      '41x41',
+      '--reference',
+      '2d',
+      '--out',
+      join(dir, 'map'),
+    ];
     const t0 = performance.now();
     const r = runCli(args);
     const ms = performance.now() - t0;
     if (r.status !== 0) return [skipped(AREA, 'fincheck map 41x41, 2-D reference', '<= 60 s', `exit ${r.status}: ${r.stderr.trim()}`)];
-    return [{ area: AREA, item: 'fincheck map 41x41, 2-D reference, default jobs (whole process)', target: '<= 60 s', measured: formatMs(ms), cpu: cpuText(r.cpuMs), verdict: atMost(ms, 60_000), note: 'one run (it takes about a minute); CPU = the child\'s own, main thread only (workers not counted)' }];
+    return [
+      {
+        area: AREA,
+        item: 'fincheck map 41x41, 2-D reference, default jobs (whole process)',
+        target: '<= 60 s',
+        measured: formatMs(ms),
+        cpu: cpuText(r.cpuMs),
+        verdict: atMost(ms, 60_000),
+        note: "one run (it takes about a minute); CPU = the child's own, main thread only (workers not counted)",
+      },
+    ];
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }

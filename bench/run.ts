@@ -46,10 +46,22 @@ function pad(text: string, width: number): string {
 
 function printTable(rows: readonly BenchRow[]): void {
   const header = { n: '#', area: 'area', item: 'item', target: 'target', measured: 'median', verdict: 'verdict', cpu: 'CPU median' };
-  const lines = rows.map((r, k) => ({ n: String(k + 1), area: r.area, item: r.item, target: r.target, measured: r.measured, verdict: r.verdict, cpu: r.cpu }));
+  const lines = rows.map((r, k) => ({
+    n: String(k + 1),
+    area: r.area,
+    item: r.item,
+    target: r.target,
+    measured: r.measured,
+    verdict: r.verdict,
+    cpu: r.cpu,
+  }));
   const keys = ['n', 'area', 'item', 'target', 'measured', 'verdict', 'cpu'] as const;
   const widths = keys.map((key) => Math.max(header[key].length, ...lines.map((l) => l[key].length)));
-  const format = (l: Record<(typeof keys)[number], string>) => keys.map((key, c) => pad(l[key], widths[c] as number)).join('  ').trimEnd();
+  const format = (l: Record<(typeof keys)[number], string>) =>
+    keys
+      .map((key, c) => pad(l[key], widths[c] as number))
+      .join('  ')
+      .trimEnd();
   console.log(format(header));
   console.log(widths.map((w) => '-'.repeat(w)).join('  '));
   for (const l of lines) console.log(format(l));

@@ -66,8 +66,12 @@ for (const [name, solve] of SOLVERS) {
 }
 
 const fin = linearFinCase({
-  edges: 'cooled', profile: { kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 },
-  k: 180, h: { kind: 'uniform', h: 40 }, tip: { kind: 'convective', h: null }, thetaBase: 60,
+  edges: 'cooled',
+  profile: { kind: 'rectangular', length: 0.03, thickness: 0.002, width: 0.05 },
+  k: 180,
+  h: { kind: 'uniform', h: 40 },
+  tip: { kind: 'convective', h: null },
+  thetaBase: 60,
 });
 for (let warm = 0; warm < 20; warm++) studyFin1D(fin);
 const studies = Array.from({ length: 51 }, () => timed(() => studyFin1D(fin)));

@@ -45,11 +45,25 @@ function time(label: string, c: Case, nx: number, ny: number, method: SolverMeth
     }
   }
   const total = median(setup.map((v, i) => v + (solve[i] as number)));
-  console.log(`${label.padEnd(28)} ${chosen.padEnd(16)} setup ${median(setup).toFixed(1)} ms  solve ${median(solve).toFixed(1)} ms  total ${total.toFixed(1)} ms  rss ${(rss / 2 ** 20).toFixed(0)} MB`);
+  console.log(
+    `${label.padEnd(28)} ${chosen.padEnd(16)} setup ${median(setup).toFixed(1)} ms  solve ${median(solve).toFixed(1)} ms  total ${total.toFixed(1)} ms  rss ${(rss / 2 ** 20).toFixed(0)} MB`,
+  );
 }
 
-const thin = finCase({ profile: { kind: 'rectangular', length: 0.04, thickness: 0.002, width: 0.08 }, k: 205, h: { kind: 'uniform', h: 40 }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
-const thick = finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.004, width: 0.08 }, k: 20, h: { kind: 'uniform', h: 2000 }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
+const thin = finCase({
+  profile: { kind: 'rectangular', length: 0.04, thickness: 0.002, width: 0.08 },
+  k: 205,
+  h: { kind: 'uniform', h: 40 },
+  tip: { kind: 'convective', h: null },
+  ...TEMPERATURES_2D,
+});
+const thick = finCase({
+  profile: { kind: 'rectangular', length: 0.02, thickness: 0.004, width: 0.08 },
+  k: 20,
+  h: { kind: 'uniform', h: 2000 },
+  tip: { kind: 'convective', h: null },
+  ...TEMPERATURES_2D,
+});
 
 const which = process.argv[2] ?? 'all';
 if (which === 'all' || which === 'small') time('2000x20 thin', thin, 2000, 20, 'auto', 9);

@@ -28,12 +28,19 @@ function gigabytes(bytes: number): string {
   return `${(bytes / 2 ** 30).toFixed(1)} GB`;
 }
 
-function runChild(kind: BenchCase2D, nx: number, ny: number, solver: 'auto' | 'banded' | 'baseline' | 'iterative', runs: number, warmup: number): ChildReport {
-  const r = spawnSync(
-    process.execPath,
-    ['--import', 'tsx', 'bench/twod-child.ts', kind, String(nx), String(ny), solver, String(runs), String(warmup)],
-    { encoding: 'utf8', timeout: 240_000, maxBuffer: 1 << 20 },
-  );
+function runChild(
+  kind: BenchCase2D,
+  nx: number,
+  ny: number,
+  solver: 'auto' | 'banded' | 'baseline' | 'iterative',
+  runs: number,
+  warmup: number,
+): ChildReport {
+  const r = spawnSync(process.execPath, ['--import', 'tsx', 'bench/twod-child.ts', kind, String(nx), String(ny), solver, String(runs), String(warmup)], {
+    encoding: 'utf8',
+    timeout: 240_000,
+    maxBuffer: 1 << 20,
+  });
   if (r.error) throw r.error;
   if (r.status !== 0 || r.signal !== null) {
     const reason = r.stderr.split('\n').find((l) => /Error\b.*:/.test(l)) ?? (r.signal !== null ? `killed by ${r.signal}` : 'no error message');
@@ -45,7 +52,8 @@ function runChild(kind: BenchCase2D, nx: number, ny: number, solver: 'auto' | 'b
 
 /** Baseline over library: median wall-time ratio, and the CPU-time ratio when both have one. */
 function ratioText(baseline: { medianMs: number; cpuMedianMs: number | null }, library: { medianMs: number; cpuMedianMs: number | null }): string {
-  const cpu = baseline.cpuMedianMs !== null && library.cpuMedianMs !== null ? `, ${(baseline.cpuMedianMs / library.cpuMedianMs).toFixed(2)}x by CPU time` : '';
+  const cpu =
+    baseline.cpuMedianMs !== null && library.cpuMedianMs !== null ? `, ${(baseline.cpuMedianMs / library.cpuMedianMs).toFixed(2)}x by CPU time` : '';
   return `baseline/library ${(baseline.medianMs / library.medianMs).toFixed(2)}x by wall time${cpu}`;
 }
 
@@ -100,7 +108,9 @@ async function thinGrid(): Promise<BenchRow[]> {
   const ratio = ratioText(baseline, auto);
   const whole = await timeTask('fd-2d 2000x20 end to end', () => solveFin2DProblem(problem, { nx, ny }), { time: 800, iterations: 10 });
   const study = await timeTask('fd-2d study demo', () => studyFin2DProblem(problem), { time: 800, iterations: 5, warmupIterations: 1 });
-  const grids = studyFin2DProblem(problem).grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
+  const grids = studyFin2DProblem(problem)
+    .grids.map((g) => `${g.nx}x${g.ny}`)
+    .join(', ');
   return [
     {
       area: AREA,
@@ -154,9 +164,12 @@ async function largeThinGrid(): Promise<BenchRow[]> {
   const ny = 50;
   const target = '<= 0.6 s';
   const choice = await autoSolverChoice(nx, ny);
-  const candidates: { solver: 'auto' | 'banded'; item: string }[] = [{ solver: 'auto', item: `${nx}x${ny} thin-fin grid solve, ${await autoLabel(nx, ny)}` }];
+  const candidates: { solver: 'auto' | 'banded'; item: string }[] = [
+    { solver: 'auto', item: `${nx}x${ny} thin-fin grid solve, ${await autoLabel(nx, ny)}` },
+  ];
   // While the automatic choice is not the band, the banded Cholesky is measured too (the thin-grid solver).
-  if (choice !== null && choice !== 'banded-cholesky') candidates.push({ solver: 'banded', item: `${nx}x${ny} thin-fin grid solve, bandedCholeskySolver` });
+  if (choice !== null && choice !== 'banded-cholesky')
+    candidates.push({ solver: 'banded', item: `${nx}x${ny} thin-fin grid solve, bandedCholeskySolver` });
   const measured: { item: string; report: ChildReport }[] = [];
   const rows: BenchRow[] = [];
   for (const { solver, item } of candidates) {

@@ -3,7 +3,20 @@ import type { Command } from 'commander';
 import { availableParallelism } from 'node:os';
 import { basename, extname, join } from 'node:path';
 import { z } from 'zod';
-import { type MapModelId, formatMapSummary, OutputsInterrupted, renderMapFiles, MapInterrupted, progressBar, prepareMap, runMap, MANIFEST_NAME, removeFiles, staleFiles, StagedFiles } from '../../src/map/index.js';
+import {
+  type MapModelId,
+  formatMapSummary,
+  OutputsInterrupted,
+  renderMapFiles,
+  MapInterrupted,
+  progressBar,
+  prepareMap,
+  runMap,
+  MANIFEST_NAME,
+  removeFiles,
+  staleFiles,
+  StagedFiles,
+} from '../../src/map/index.js';
 import { asUsageError } from '../../src/report/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
@@ -29,7 +42,12 @@ const stepsOption = z
 
 const modelsOption = z
   .string()
-  .transform((s) => s.split(',').map((m) => m.trim()).filter((m) => m !== ''))
+  .transform((s) =>
+    s
+      .split(',')
+      .map((m) => m.trim())
+      .filter((m) => m !== ''),
+  )
   .pipe(z.array(z.enum(modelIds)).min(1));
 
 const jobsOption = z.coerce.number().int().min(1).max(256);
@@ -52,7 +70,11 @@ interface MapOptions {
 
 /** ./fincheck-map-<file name as a slug>. */
 function defaultOutDir(file: string): string {
-  const slug = basename(file, extname(file)).toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'case';
+  const slug =
+    basename(file, extname(file))
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-+|-+$/g, '') || 'case';
   return join('.', `fincheck-map-${slug}`);
 }
 
@@ -66,7 +88,10 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
     .option('--steps <NXxNY>', 'grid points along x and y: NXxNY, or N for N x N (9 is 9x9)', '41x41')
     .option('--log-x', 'space the x values geometrically and draw a log axis')
     .option('--log-y', 'space the y values geometrically and draw a log axis')
-    .option('--models <ids>', `models to map, comma-separated (${modelIds.join(', ')}); default every shortcut that applies, and fd-1d beside a 2-D reference`)
+    .option(
+      '--models <ids>',
+      `models to map, comma-separated (${modelIds.join(', ')}); default every shortcut that applies, and fd-1d beside a 2-D reference`,
+    )
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02', '2%')
     .option('--jobs <n>', 'worker threads (default: all cores with the 2-D reference, in this process with the 1-D one; 1 runs in this process)')
@@ -92,7 +117,8 @@ Examples:
       const steps = parseOption('--steps', stepsOption, o.steps);
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
-      const models = o.models === undefined ? undefined : parseOption('--models', modelsOption, o.models, `a comma-separated list of ${modelIds.join(', ')}`);
+      const models =
+        o.models === undefined ? undefined : parseOption('--models', modelsOption, o.models, `a comma-separated list of ${modelIds.join(', ')}`);
       const askedJobs = o.jobs === undefined ? undefined : parseOption('--jobs', jobsOption, o.jobs, 'a whole number of threads from 1 to 256');
       const format = parseOption('--format', formatOption, o.format, 'png or svg');
       const outDir = o.out ?? defaultOutDir(file);
@@ -137,7 +163,10 @@ Examples:
         interrupt.check();
         // Staging, committing and pruning are synchronous: a signal that arrives meanwhile waits until they end.
         // Files an earlier map listed in this folder's map.json and this one does not write go (never others).
-        const stale = staleFiles(outDir, files.map((f) => f.name));
+        const stale = staleFiles(
+          outDir,
+          files.map((f) => f.name),
+        );
         for (const f of files) staged.stage(f.name, f.data);
         const written = staged.commit();
         removeFiles(outDir, stale);

@@ -39,7 +39,9 @@ export function parseImageOptions(o: { width: string; height: string; dpi: strin
   const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
   const pixels = Math.round((width * dpi) / 96) * Math.round((height * dpi) / 96);
   if (pixels > MAX_PIXELS) {
-    throw new UsageError(`--width ${width} --height ${height} --dpi ${dpi}: the PNG would have ${(pixels / 1e6).toFixed(0)} Mpx; at most ${MAX_PIXELS / 1e6} Mpx (lower --dpi or the size)`);
+    throw new UsageError(
+      `--width ${width} --height ${height} --dpi ${dpi}: the PNG would have ${(pixels / 1e6).toFixed(0)} Mpx; at most ${MAX_PIXELS / 1e6} Mpx (lower --dpi or the size)`,
+    );
   }
   return { width, height, dpi };
 }
@@ -115,7 +117,10 @@ Examples:
       const bytes = await chartBytes(svg, out.format, { dpi: image.dpi });
       writeFilesAtomically([{ path: out.path, bytes }]);
 
-      const pixels = out.format === 'png' ? { width_px: Math.round((image.width * image.dpi) / 96), height_px: Math.round((image.height * image.dpi) / 96) } : { width_px: image.width, height_px: image.height };
+      const pixels =
+        out.format === 'png'
+          ? { width_px: Math.round((image.width * image.dpi) / 96), height_px: Math.round((image.height * image.dpi) / 96) }
+          : { width_px: image.width, height_px: image.height };
       const models = sources.check ? sources.check.profiles.profiles.map((p) => p.model) : ['fd-2d'];
       const omitted = sources.check ? sources.check.profiles.omitted : [];
       if (o.json) {

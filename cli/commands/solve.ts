@@ -58,7 +58,10 @@ function radialMark(radial: boolean, row: number, rows: number): string {
 
 function formatSolve(r: SolveReport, description: string[]): string {
   const lines = [`fincheck solve: ${r.case}`, ...description.map((d) => `  ${d}`), ''];
-  const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
+  const err =
+    r.discretizationError === null
+      ? 'not estimated (single grid)'
+      : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nodes} nodes`);
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
   lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
@@ -78,19 +81,27 @@ function formatSolve(r: SolveReport, description: string[]): string {
 
 function formatSolve2D(r: Solve2DReport, description: string[]): string {
   const lines = [`fincheck solve: ${r.case}`, ...description.map((d) => `  ${d}`), ''];
-  const err = r.discretizationError === null ? 'not estimated (single grid)' : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
+  const err =
+    r.discretizationError === null
+      ? 'not estimated (single grid)'
+      : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nx} x ${r.grid.ny} nodes (along x across)`);
   const edges = r.edgesHeatRate_W !== 0;
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (${edges ? 'whole fin, as check reports it; ' : ''}discretisation error ${err})`);
   if (edges) {
     lines.push(`    section      ${r.sectionHeatRate_W.toPrecision(6)} W  (2-D section x width: side edges insulated)`);
-    lines.push(`    side edges   ${r.edgesHeatRate_W >= 0 ? '+' : ''}${r.edgesHeatRate_W.toPrecision(4)} W  (the cooled side edges, from fd-1d: Q cooled / Q insulated = ${(r.heatRate_W / r.sectionHeatRate_W).toFixed(5)})`);
+    lines.push(
+      `    side edges   ${r.edgesHeatRate_W >= 0 ? '+' : ''}${r.edgesHeatRate_W.toPrecision(4)} W  (the cooled side edges, from fd-1d: Q cooled / Q insulated = ${(r.heatRate_W / r.sectionHeatRate_W).toFixed(5)})`,
+    );
   }
   if (r.efficiency !== null) lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
   lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   if (r.newton) {
-    const grids = r.newton.stepsPerGrid.length > 1 ? ` (${r.newton.stepsPerGrid.join('/')} steps, coarsest to finest grid)` : ` (${r.newton.stepsPerGrid[0] ?? 0} steps with the coarser grids that seeded it)`;
+    const grids =
+      r.newton.stepsPerGrid.length > 1
+        ? ` (${r.newton.stepsPerGrid.join('/')} steps, coarsest to finest grid)`
+        : ` (${r.newton.stepsPerGrid[0] ?? 0} steps with the coarser grids that seeded it)`;
     lines.push(`  nonlinear      Newton converged${grids}, relative residual ${r.newton.finest.residual.toExponential(1)}`);
   }
   const radial = r.centreline[0] !== undefined && 'r_m' in r.centreline[0];
@@ -101,7 +112,10 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
     const i = Math.round((j * (n - 1)) / Math.max(1, want - 1));
     const c = r.centreline[i];
     const s = r.surface[i];
-    if (c && s) lines.push(`  ${(pointPosition(c) * 1000).toFixed(3).padStart(8)}   ${c.T_degC.toFixed(3).padStart(13)}   ${s.T_degC.toFixed(3).padStart(15)}${radialMark(radial, j, want)}`);
+    if (c && s)
+      lines.push(
+        `  ${(pointPosition(c) * 1000).toFixed(3).padStart(8)}   ${c.T_degC.toFixed(3).padStart(13)}   ${s.T_degC.toFixed(3).padStart(15)}${radialMark(radial, j, want)}`,
+      );
   }
   lines.push('', 'Estimates of the stated model: confirm by test; h is usually the largest uncertainty.');
   return `${lines.join('\n')}\n`;

@@ -34,13 +34,7 @@ export type { FinArrayInput, FinArrayResult } from './array.js';
 export { finHFallingToTip, finHRisingFromBase } from './nonuniform-h.js';
 export type { PowerLawHInput, PowerLawHResult } from './nonuniform-h.js';
 
-export {
-  optimumRectangularFin,
-  optimumTriangularFin,
-  optimumConcaveParabolicFin,
-  optimumConvexParabolicFin,
-  optimumPinFin,
-} from './optimum.js';
+export { optimumRectangularFin, optimumTriangularFin, optimumConcaveParabolicFin, optimumConvexParabolicFin, optimumPinFin } from './optimum.js';
 export type { OptimumStraightInput, OptimumPinInput, OptimumResult } from './optimum.js';
 
 export {

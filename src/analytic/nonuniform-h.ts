@@ -86,9 +86,6 @@ export function finHRisingFromBase(input: PowerLawHInput): PowerLawHResult {
   const { m, mL, nu } = prepare('finHRisingFromBase', input);
   const gammaRatio = gammaFunction(1 - nu) / gammaFunction(1 + nu);
   const heatRate =
-    ((input.k * input.A * input.thetaBase) / input.L) *
-    Math.pow(nu * mL, 2 * nu) *
-    gammaRatio *
-    besselIReflectionRatio(1 - nu, 2 * nu * mL);
+    ((input.k * input.A * input.thetaBase) / input.L) * Math.pow(nu * mL, 2 * nu) * gammaRatio * besselIReflectionRatio(1 - nu, 2 * nu * mL);
   return finish(input, m, mL, heatRate);
 }

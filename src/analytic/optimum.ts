@@ -78,30 +78,39 @@ export function optimumRectangularFin(input: OptimumStraightInput): OptimumResul
 /** Triangular straight fin of given profile area. */
 export function optimumTriangularFin(input: OptimumStraightInput): OptimumResult {
   checkStraight('optimumTriangularFin', input);
-  const zeta = brentRoot((z) => {
-    const r = besselIRatio(1, 2 * z);
-    return 1 / r - r - 2 / (3 * z);
-  }, ...bracket);
+  const zeta = brentRoot(
+    (z) => {
+      const r = besselIRatio(1, 2 * z);
+      return 1 / r - r - 2 / (3 * z);
+    },
+    ...bracket,
+  );
   return straightResult(input, zeta, besselIRatio(1, 2 * zeta) / zeta, 1, 1 / 2);
 }
 
 /** Concave parabolic straight fin of given profile area (zeta = sqrt 2, eta = 1/2). */
 export function optimumConcaveParabolicFin(input: OptimumStraightInput): OptimumResult {
   checkStraight('optimumConcaveParabolicFin', input);
-  const zeta = brentRoot((z) => {
-    const s = Math.sqrt(1 + 4 * z * z);
-    return (s - 1) * s - 3 * z * z;
-  }, ...bracket);
+  const zeta = brentRoot(
+    (z) => {
+      const s = Math.sqrt(1 + 4 * z * z);
+      return (s - 1) * s - 3 * z * z;
+    },
+    ...bracket,
+  );
   return straightResult(input, zeta, 2 / (Math.sqrt(1 + 4 * zeta * zeta) + 1), 3 / 2, 1 / 3);
 }
 
 /** Convex parabolic straight fin of given profile area. */
 export function optimumConvexParabolicFin(input: OptimumStraightInput): OptimumResult {
   checkStraight('optimumConvexParabolicFin', input);
-  const zeta = brentRoot((z) => {
-    const R = besselIRatio(2 / 3, (4 * z) / 3);
-    return 1 / R - R - 1 / (2 * z);
-  }, ...bracket);
+  const zeta = brentRoot(
+    (z) => {
+      const R = besselIRatio(2 / 3, (4 * z) / 3);
+      return 1 / R - R - 1 / (2 * z);
+    },
+    ...bracket,
+  );
   return straightResult(input, zeta, besselIRatio(2 / 3, (4 * zeta) / 3) / zeta, 3 / 4, 2 / 3);
 }
 

@@ -26,11 +26,7 @@
 import { requireFinite, requireNonNegative, requirePositive } from './check.js';
 
 /** Tip condition at x = L. thetaTip is an excess temperature (K), not an absolute temperature. */
-export type UniformTip =
-  | { kind: 'convective'; hTip?: number }
-  | { kind: 'adiabatic' }
-  | { kind: 'temperature'; thetaTip: number }
-  | { kind: 'infinite' };
+export type UniformTip = { kind: 'convective'; hTip?: number } | { kind: 'adiabatic' } | { kind: 'temperature'; thetaTip: number } | { kind: 'infinite' };
 
 export interface UniformFinInput {
   /** Face convection coefficient, W/(m^2 K). */

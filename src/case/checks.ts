@@ -84,7 +84,14 @@ export function checkFin(fin: Fin): PendingIssue[] {
 function checkTabulated(fin: Extract<Fin, { profile: 'tabulated' }>): PendingIssue[] {
   const issues: PendingIssue[] = [];
   const size = fin.shape === 'straight' ? 'thickness' : 'diameter';
-  issues.push(...checkIncreasing(fin.points.map((p) => p[0]), ['fin', 'points'], 'x', true));
+  issues.push(
+    ...checkIncreasing(
+      fin.points.map((p) => p[0]),
+      ['fin', 'points'],
+      'x',
+      true,
+    ),
+  );
   fin.points.forEach(([, s], i) => {
     const isTip = i === fin.points.length - 1;
     if (!isTip && s <= 0) {
@@ -146,7 +153,14 @@ export function checkConvection(c: ValidatedCase): PendingIssue[] {
     if (h === 0 && !radiates) issues.push({ path: ['convection', 'h'], accepted: somewhere });
   } else if ('points' in h) {
     const extent = finExtent(c.fin);
-    issues.push(...checkIncreasing(h.points.map((p) => p[0]), ['convection', 'h', 'points'], 'x', false));
+    issues.push(
+      ...checkIncreasing(
+        h.points.map((p) => p[0]),
+        ['convection', 'h', 'points'],
+        'x',
+        false,
+      ),
+    );
     h.points.forEach(([x], i) => {
       if (x > extent * (1 + 1e-12)) {
         issues.push({

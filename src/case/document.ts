@@ -162,12 +162,7 @@ function pairsByKey(node: { items: Pair[] }): Map<string, Pair> {
  * The position of the value at `path`; for a missing key, the position of the nearest key that exists (where
  * the missing one belongs). Scalars carry their source text.
  */
-function locateIn(
-  contents: Node | null,
-  path: KeyPath,
-  position: (offset: number) => SourcePosition,
-  text: string,
-): SourcePosition | undefined {
+function locateIn(contents: Node | null, path: KeyPath, position: (offset: number) => SourcePosition, text: string): SourcePosition | undefined {
   let node: unknown = contents;
   const contentsRange = nodeRange(contents);
   let best: SourcePosition | undefined = contentsRange ? position(contentsRange[0]) : undefined;

@@ -6,13 +6,7 @@ export { clip, cleanFreeText, quoted } from './clip-text.js';
 export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './key-path.js';
 export type { Locate, SourcePosition } from './issues.js';
 export { readDocument, detectFormat, type ReadDocument, type SourceFormat } from './document.js';
-export {
-  builtInMaterials,
-  findMaterial,
-  materialNames,
-  similarMaterialNames,
-  type BuiltInMaterial,
-} from './materials.js';
+export { builtInMaterials, findMaterial, materialNames, similarMaterialNames, type BuiltInMaterial } from './materials.js';
 export {
   describeQuantity,
   fromSI,
@@ -27,7 +21,22 @@ export {
 } from './units.js';
 export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
-export { aboveAbsoluteZero, coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, fraction, nonNegative, positive, rangeText, temperatureRange } from './fields.js';
+export type * from './heat-sink-types.js';
+export {
+  aboveAbsoluteZero,
+  coefficientRange,
+  conductivityRange,
+  contactResistanceRange,
+  exponentRange,
+  finPosition,
+  finSize,
+  finSizeOrZero,
+  fraction,
+  nonNegative,
+  positive,
+  rangeText,
+  temperatureRange,
+} from './fields.js';
 export type { Range } from './fields.js';
 export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
 export type { CaseWarning } from './types.js';

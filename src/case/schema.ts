@@ -148,8 +148,7 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
         quantity('length', { ...lengthOptions, range: finSizeOrZero, description: 'Thickness (straight) or diameter (pin) at x, m' }),
         '[x, thickness or diameter]',
         2,
-        'The profile, linear between points: x strictly increasing from 0 at the base; the size at the base > 0, ' +
-          'the size at the tip may be 0',
+        'The profile, linear between points: x strictly increasing from 0 at the base; the size at the base > 0, ' + 'the size at the tip may be 0',
       ),
       width: finLength('Width along the base (straight shape only)', tabulatedNeeds).optional(),
       edges: edges.optional(),
@@ -157,7 +156,6 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
     'a tabulated fin',
     'Any measured or drawn profile',
   );
-
 
   const finSchema = z
     .discriminatedUnion(
@@ -243,11 +241,7 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
   const coefficient = (description: string, range: Range = coefficientRange) =>
     quantity('heatTransferCoefficient', { range, description: `${description}, W/(m^2*K)` });
 
-  const hLinear = mapping(
-    { base: coefficient('h at the base'), tip: coefficient('h at the tip') },
-    'a linear h',
-    'h varying linearly from base to tip',
-  );
+  const hLinear = mapping({ base: coefficient('h at the base'), tip: coefficient('h at the tip') }, 'a linear h', 'h varying linearly from base to tip');
 
   const hPoints = mapping(
     {
@@ -269,7 +263,8 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
       base: coefficient('h at the base temperature', positiveCoefficient),
       exponent: quantity('dimensionless', {
         range: exponentRange,
-        description: 'Exponent of the excess temperature: 1/4 laminar natural convection, 1/3 turbulent, about 2 ' +
+        description:
+          'Exponent of the excess temperature: 1/4 laminar natural convection, 1/3 turbulent, about 2 ' +
           'nucleate boiling; > -1 so that the heat flux h * theta vanishes with theta, at most 5',
       }),
     },
@@ -288,7 +283,10 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
   const tipSchema = z
     .union(
       [
-        word(['adiabatic', 'convective', 'infinite'], 'adiabatic: no heat leaves the tip; convective: the local face h; infinite: a fin so long the tip is at ambient (uniform profiles only)'),
+        word(
+          ['adiabatic', 'convective', 'infinite'],
+          'adiabatic: no heat leaves the tip; convective: the local face h; infinite: a fin so long the tip is at ambient (uniform profiles only)',
+        ),
         mapping({ convective: coefficient('The tip face\u2019s own coefficient') }, 'a convective tip', 'Tip with its own h'),
         mapping(
           { temperature: quantity('temperature', { range: temperatureRange, description: 'Tip temperature, degC' }) },
@@ -345,10 +343,7 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
       base: baseSchema,
       units: mapping(
         {
-          length: word(
-            lengthUnits,
-            'Unit of every length given as a bare number in this case (default m); a length with its own unit keeps it',
-          ),
+          length: word(lengthUnits, 'Unit of every length given as a bare number in this case (default m); a length with its own unit keeps it'),
         },
         'units',
         'Units of bare numbers in this case; default SI (m)',

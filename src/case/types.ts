@@ -53,15 +53,10 @@ export type HDistribution =
 
 /** Tip condition. `convective` with h = null uses the local face h at the tip. */
 export type TipCondition =
-  | { kind: 'adiabatic' }
-  | { kind: 'convective'; h: number | null }
-  | { kind: 'temperature'; T_degC: number }
-  | { kind: 'infinite' };
+  { kind: 'adiabatic' } | { kind: 'convective'; h: number | null } | { kind: 'temperature'; T_degC: number } | { kind: 'infinite' };
 
 /** Thermal conductivity, W/(m*K): constant or tabulated over temperature (linear between points). */
-export type Conductivity =
-  | { kind: 'constant'; k: number }
-  | { kind: 'table'; T_degC: Float64Array; k: Float64Array };
+export type Conductivity = { kind: 'constant'; k: number } | { kind: 'table'; T_degC: Float64Array; k: Float64Array };
 
 export interface Material {
   /** Built-in name, or 'custom' for `{ k: ... }`. */

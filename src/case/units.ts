@@ -25,13 +25,7 @@ import type { Unit } from 'mathjs';
 import { clip, quoted } from './clip-text.js';
 
 export type QuantityKind =
-  | 'length'
-  | 'conductivity'
-  | 'heatTransferCoefficient'
-  | 'contactResistance'
-  | 'temperature'
-  | 'temperatureDifference'
-  | 'dimensionless';
+  'length' | 'conductivity' | 'heatTransferCoefficient' | 'contactResistance' | 'temperature' | 'temperatureDifference' | 'dimensionless';
 
 export type QuantityResult = { ok: true; value: number } | { ok: false; problem: string };
 
@@ -114,8 +108,7 @@ function buildUnitClass(): UnitClass {
       return Math.round(num(a) * scale) / scale;
     },
     equal: (a: unknown, b: unknown) => num(a) === num(b),
-    isNumeric: (x: unknown) =>
-      typeof x === 'number' || (typeof x === 'object' && x !== null && ('isFraction' in x || 'isBigNumber' in x)),
+    isNumeric: (x: unknown) => typeof x === 'number' || (typeof x === 'object' && x !== null && ('isFraction' in x || 'isBigNumber' in x)),
     format: (x: unknown) => String(x),
     number: num,
   });
@@ -129,7 +122,17 @@ function unitOf(text: string): Unit {
 /** Rewrites typographic unit notation to what mathjs reads: °C, ℃, ², ³, ⁻¹, ·, ×, µ, μ, −. */
 export function normaliseUnitText(text: string): string {
   const superscripts: Record<string, string> = {
-    '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁻': '-',
+    '⁰': '0',
+    '¹': '1',
+    '²': '2',
+    '³': '3',
+    '⁴': '4',
+    '⁵': '5',
+    '⁶': '6',
+    '⁷': '7',
+    '⁸': '8',
+    '⁹': '9',
+    '⁻': '-',
   };
   return text
     .replace(/℃/g, 'degC')
@@ -281,9 +284,7 @@ function temperatureValue(n: number, u: Unit, unitText: string, kind: 'temperatu
 function wrongKind(u: Unit, unitText: string, kind: QuantityKind): string {
   const noun = quantityKinds[kind].noun;
   const what = dimensionName(u);
-  const hint = /(^|[^A-Za-z])[CF]([^A-Za-z]|$)/.test(unitText)
-    ? ' (C is the coulomb and F the farad: write degC or degF)'
-    : '';
+  const hint = /(^|[^A-Za-z])[CF]([^A-Za-z]|$)/.test(unitText) ? ' (C is the coulomb and F the farad: write degC or degF)' : '';
   return what ? `${quoted(unitText)} is ${what}, not ${noun}${hint}` : `${quoted(unitText)} is not ${noun}${hint}`;
 }
 
@@ -306,9 +307,7 @@ export function fromSI(value: number, kind: QuantityKind, unit: string): number 
     if (!check.ok) throw new Error(check.problem);
     const lone = loneTemperatureUnit(unitOf(unitText));
     if (!lone) throw new Error(`"${unitText}" is not a temperature unit`);
-    return kind === 'temperature'
-      ? lone.definition.fromDegC(value) / lone.prefixScale
-      : value / lone.definition.differenceScale / lone.prefixScale;
+    return kind === 'temperature' ? lone.definition.fromDegC(value) / lone.prefixScale : value / lone.definition.differenceScale / lone.prefixScale;
   }
   const probe = parseQuantity(`1 ${unitText}`, kind);
   if (!probe.ok) throw new Error(probe.problem);

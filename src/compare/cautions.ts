@@ -15,6 +15,9 @@ export const RADIATION_VIEW_NOTE = 'radiation: grey faces that see only the surr
 /** The cautions of a fin: CAUTIONS, and for a radiating fin what its view factor leaves out. */
 export function cautionsFor(emissivity: number): string[] {
   return emissivity > 0
-    ? [...CAUTIONS, `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`]
+    ? [
+        ...CAUTIONS,
+        `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`,
+      ]
     : [...CAUTIONS];
 }

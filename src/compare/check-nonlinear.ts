@@ -16,7 +16,16 @@
  */
 import type { Case } from '../case/index.js';
 import { ModelNotApplicableError } from '../errors.js';
-import { solveNonlinearFin1D, studyNonlinearFin1D, nonlinear2dUnsupported, studyNonlinearFin2D, type NonlinearFin2DStudy, finProblem1D, decayGradingOf, resolveStudy1D } from '../fd/index.js';
+import {
+  solveNonlinearFin1D,
+  studyNonlinearFin1D,
+  nonlinear2dUnsupported,
+  studyNonlinearFin2D,
+  type NonlinearFin2DStudy,
+  finProblem1D,
+  decayGradingOf,
+  resolveStudy1D,
+} from '../fd/index.js';
 import { finGeometry } from '../mesh/index.js';
 import { CAUTIONS } from './cautions.js';
 import { checkFlags, dimensionless, reference1D, type CheckOptions, type CheckOutcome } from './check-common.js';
@@ -67,7 +76,12 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   const basis = twoD ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE) : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
   const reference = twoD
     ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis)
-    : reference1D(study, resolution, basis, `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${fallback}${radiationNote}`);
+    : reference1D(
+        study,
+        resolution,
+        basis,
+        `; nonlinear, Newton converged (residual <= 1e-12, ${finestSteps} steps on the finest grid)${outside2D}${fallback}${radiationNote}`,
+      );
 
   const inputs: ModelInput[] = [];
   let notApplicable: NotApplicable[] = [];
@@ -83,7 +97,8 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
       eqBase = eq;
     } else {
       // A shortcut the fin-averaged guess cannot take (while the base guess could) says why too.
-      for (const n of na) if (!notApplicable.some((b) => b.model === n.model)) notApplicable.push({ model: n.model, reason: `fin-averaged guess: ${n.reason}` });
+      for (const n of na)
+        if (!notApplicable.some((b) => b.model === n.model)) notApplicable.push({ model: n.model, reason: `fin-averaged guess: ${n.reason}` });
     }
   }
   const eq = eqBase as EquivalentUniformFin;
@@ -108,9 +123,25 @@ export function nonlinearCheck(c: Case, opts: CheckOptions): CheckOutcome {
   if (twoD) assumptions.unshift(twoD.oneDRow);
   const converged = twoD ? twoD.study.heatRate.converged || twoD.study.discretizationError < opts.tolerance / 100 : study.study.converged;
   const flags = checkFlags(geometry, eq, reference, opts.tolerance, converged, twoD ? twoD.oneDRow.drift : null);
-  const cautions = c.convection.emissivity > 0 ? [...CAUTIONS, `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`] : [...CAUTIONS];
+  const cautions =
+    c.convection.emissivity > 0
+      ? [
+          ...CAUTIONS,
+          `Radiation is modelled with ${RADIATION_VIEW_NOTE.replace('radiation: ', '')}; in an array, neighbouring fins see each other and radiate less.`,
+        ]
+      : [...CAUTIONS];
   return {
-    report: { case: c.name, tolerance: opts.tolerance, ...dimensionless(geometry, eq), reference, models, notApplicable, assumptions: madeByReported(assumptions, models), flags, cautions },
+    report: {
+      case: c.name,
+      tolerance: opts.tolerance,
+      ...dimensionless(geometry, eq),
+      reference,
+      models,
+      notApplicable,
+      assumptions: madeByReported(assumptions, models),
+      flags,
+      cautions,
+    },
     oneD: study,
     twoD: twoD ? twoD.study : null,
   };

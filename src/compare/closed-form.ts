@@ -13,7 +13,18 @@
  * put in series exactly: q(theta0) = slope * theta0 + offset (offset != 0 only for a prescribed tip).
  */
 import type { LinearFinCase } from '../fd/index.js';
-import { annularFin, annularFinConvectiveTip, conicalSpine, truncatedConicalSpine, straightConcaveParabolicFin, straightConvexParabolicFin, straightTrapezoidalFin, straightTriangularFin, uniformFin, type UniformTip } from '../analytic/index.js';
+import {
+  annularFin,
+  annularFinConvectiveTip,
+  conicalSpine,
+  truncatedConicalSpine,
+  straightConcaveParabolicFin,
+  straightConvexParabolicFin,
+  straightTrapezoidalFin,
+  straightTriangularFin,
+  uniformFin,
+  type UniformTip,
+} from '../analytic/index.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 
 export interface AffineHeatRate {

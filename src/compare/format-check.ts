@@ -19,8 +19,12 @@ export function formatCheck(c: Case, r: CheckReport): string {
   out.push('');
   const ref = r.reference;
   const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} nodes`;
-  out.push(`Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`);
-  out.push(`  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`);
+  out.push(
+    `Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`,
+  );
+  out.push(
+    `  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`,
+  );
   out.push(`  ${ref.note}`);
   out.push('');
   out.push(`Shortcuts against the reference (tolerance +/-${(100 * r.tolerance).toFixed(1)} %):`);
@@ -31,7 +35,9 @@ export function formatCheck(c: Case, r: CheckReport): string {
   out.push(`  ${'-'.repeat(head.length - 2)}`);
   for (const m of r.models) {
     const formula = m.formulaEfficiency === null ? '-' : m.formulaEfficiency.toFixed(4);
-    out.push(`  ${pad(label(m), w)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency === null ? 'n/a' : m.efficiency.toFixed(4), 12)}${lpad(formula, 14)}${lpad(pct(m.drift), 11)}  ${m.verdict}`);
+    out.push(
+      `  ${pad(label(m), w)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency === null ? 'n/a' : m.efficiency.toFixed(4), 12)}${lpad(formula, 14)}${lpad(pct(m.drift), 11)}  ${m.verdict}`,
+    );
   }
   const seen = new Set<string>();
   for (const m of r.models) {
@@ -41,12 +47,15 @@ export function formatCheck(c: Case, r: CheckReport): string {
   }
   const guesses = new Map(r.models.filter((m) => m.guess && m.guessValues).map((m) => [m.guess, m.guessValues]));
   for (const [g, v] of guesses) {
-    if (v) out.push(`    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(v.h_W_per_m2K, 4)} W/(m^2*K), k = ${sig(v.k_W_per_mK, 4)} W/(m*K)`);
+    if (v)
+      out.push(
+        `    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(v.h_W_per_m2K, 4)} W/(m^2*K), k = ${sig(v.k_W_per_mK, 4)} W/(m*K)`,
+      );
   }
   for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);
   out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature, the surface of the reference model;');
   if (ref.efficiencyNote !== null) out.push(`   efficiency: ${ref.efficiencyNote};`);
-  out.push('   formula eff. = the shortcut\'s own textbook efficiency on the area its formula assumes, e.g. tanh(mLc)/(mLc)');
+  out.push("   formula eff. = the shortcut's own textbook efficiency on the area its formula assumes, e.g. tanh(mLc)/(mLc)");
   out.push('   on the corrected length: compare it with a textbook; it differs from the common efficiency by that area;');
   out.push(`   the shortcuts are closed forms, exact for their own assumptions, so their error for this fin is the drift,`);
   out.push(`   known to about the reference's discretisation error, ${ref.discretizationError.toExponential(1)})`);

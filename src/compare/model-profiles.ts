@@ -213,7 +213,10 @@ export function modelProfiles(c: Case, report: CheckReport, oneD: FinStudy1D, tw
       continue;
     }
     if (eq.contactResistance > 0 && !Number.isFinite(m.heatRate_W)) {
-      omitted.push({ model: m.model, reason: 'its heat rate in the check is not a finite number, so its base temperature behind the contact resistance is unknown' });
+      omitted.push({
+        model: m.model,
+        reason: 'its heat rate in the check is not a finite number, so its base temperature behind the contact resistance is unknown',
+      });
       continue;
     }
     profiles.push(shortcutProfile(m.model, fin, eq, m.heatRate_W, m.basis, c.convection.ambient_degC));

@@ -7,7 +7,10 @@ export const SHORTCUT_ACCURACY = 'closed form: exact for its own assumptions (ro
 
 export type ModelInput = ShortcutValue & { accuracy: string; guess?: 'base' | 'mean'; guessValues?: ModelResult['guessValues'] };
 
-export function shortcutInputs(values: ShortcutValue[], guess?: { guess: 'base' | 'mean'; guessValues: NonNullable<ModelResult['guessValues']> }): ModelInput[] {
+export function shortcutInputs(
+  values: ShortcutValue[],
+  guess?: { guess: 'base' | 'mean'; guessValues: NonNullable<ModelResult['guessValues']> },
+): ModelInput[] {
   return values.map((v) => ({ ...v, accuracy: SHORTCUT_ACCURACY, ...(guess ?? {}) }));
 }
 

@@ -62,7 +62,15 @@ export function evaluateShortcuts(c: LinearFinCase, eq: EquivalentUniformFin): {
   if (convective) {
     add('tanh-Lc', adiabaticUniform(eq, eq.P, eq.length + eq.A / eq.P, `tanh(mLc)/(mLc), Lc = L + A/P, full perimeter${meanWords}`));
     const thinLc = eq.length + (eq.family === 'pin' ? eq.size / 4 : eq.size / 2);
-    add('tanh-Lc-thin', adiabaticUniform(eq, eq.Pthin, thinLc, `tanh(mLc)/(mLc), ${eq.family === 'pin' ? 'P = pi D, Lc = L + D/4' : eq.family === 'annular' ? 'Lc = L + t/2' : 'P = 2w, Lc = L + t/2'}${meanWords}`));
+    add(
+      'tanh-Lc-thin',
+      adiabaticUniform(
+        eq,
+        eq.Pthin,
+        thinLc,
+        `tanh(mLc)/(mLc), ${eq.family === 'pin' ? 'P = pi D, Lc = L + D/4' : eq.family === 'annular' ? 'Lc = L + t/2' : 'P = 2w, Lc = L + t/2'}${meanWords}`,
+      ),
+    );
     const r = uniformFin({ h: eq.h, k: eq.k, P: eq.P, A: eq.A, L: eq.length, thetaBase: 1, tip: { kind: 'convective', hTip: eq.hTip } });
     add('convective-tip', {
       slope: r.heatRate,

@@ -9,7 +9,25 @@
  */
 import type { Case } from '../case/index.js';
 import { UsageError } from '../errors.js';
-import { solveFin2D, type Fin2DLine, type Fin2DResult, solveFin1D, studyFin1D, studyFin2D, type Fin2DStudy, isLinearFinCase, fin2dUnsupported, type NewtonReport, solveNonlinearFin2D, type NonlinearFin2DResult, type LinearFinCase, nonlinear2dUnsupported, studyNonlinearFin2D, solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/index.js';
+import {
+  solveFin2D,
+  type Fin2DLine,
+  type Fin2DResult,
+  solveFin1D,
+  studyFin1D,
+  studyFin2D,
+  type Fin2DStudy,
+  isLinearFinCase,
+  fin2dUnsupported,
+  type NewtonReport,
+  solveNonlinearFin2D,
+  type NonlinearFin2DResult,
+  type LinearFinCase,
+  nonlinear2dUnsupported,
+  studyNonlinearFin2D,
+  solveNonlinearFin1D,
+  studyNonlinearFin1D,
+} from '../fd/index.js';
 import { isStraight, sideEdgeCorrection, type SideEdgeCorrection } from './reference2d.js';
 import { isRadial, type ProfilePoint } from './solve.js';
 

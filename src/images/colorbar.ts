@@ -75,7 +75,8 @@ export function drawColourBar(map: Colormap, axis: Axis, bar: Rect, title: strin
   const lines = typeof title === 'string' ? [title] : title;
   const ty = bar.y + bar.height / 2;
   lines.forEach((line, k) => {
-    const tx = right + gap.tickLength + gap.tickLabel + widest + gap.axisLabel + capHeight(fontSize.axisLabel) + (lines.length - 1 - k) * (fontSize.axisLabel + 4);
+    const tx =
+      right + gap.tickLength + gap.tickLabel + widest + gap.axisLabel + capHeight(fontSize.axisLabel) + (lines.length - 1 - k) * (fontSize.axisLabel + 4);
     out.push(
       textEl(line, {
         x: tx,

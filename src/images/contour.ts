@@ -45,13 +45,7 @@ const segmentTable: readonly (readonly [CellEdge, CellEdge])[][] = [
   [],
 ];
 
-export function contourLines(
-  layout: GridLayout,
-  xs: ArrayLike<number>,
-  ys: ArrayLike<number>,
-  values: ArrayLike<number>,
-  level: number,
-): Polyline[] {
+export function contourLines(layout: GridLayout, xs: ArrayLike<number>, ys: ArrayLike<number>, values: ArrayLike<number>, level: number): Polyline[] {
   const { ni, nj, offset, strideI, strideJ } = layout;
   if (ni < 2 || nj < 2) return [];
   const horizontalCount = nj * (ni - 1);
@@ -91,19 +85,44 @@ export function contourLines(
       const n10 = n00 + strideI;
       const n11 = n10 + strideJ;
       const n01 = n00 + strideJ;
-      const v00 = values[n00] as number, v10 = values[n10] as number;
-      const v11 = values[n11] as number, v01 = values[n01] as number;
+      const v00 = values[n00] as number,
+        v10 = values[n10] as number;
+      const v11 = values[n11] as number,
+        v01 = values[n01] as number;
       if (!Number.isFinite(v00) || !Number.isFinite(v10) || !Number.isFinite(v11) || !Number.isFinite(v01)) continue;
       const code = (v00 >= level ? 1 : 0) | (v10 >= level ? 2 : 0) | (v11 >= level ? 4 : 0) | (v01 >= level ? 8 : 0);
       let pairs = segmentTable[code] ?? [];
       if (code === 5 || code === 10) {
         const centreAbove = (v00 + v10 + v11 + v01) / 4 >= level;
         // Case 5: corners (i,j) and (i+1,j+1) above. Joined through the centre -> cut off the two below corners.
-        if (code === 5) pairs = centreAbove ? [[0, 1], [2, 3]] : [[3, 0], [1, 2]];
-        else pairs = centreAbove ? [[3, 0], [1, 2]] : [[0, 1], [2, 3]];
+        if (code === 5)
+          pairs = centreAbove
+            ? [
+                [0, 1],
+                [2, 3],
+              ]
+            : [
+                [3, 0],
+                [1, 2],
+              ];
+        else
+          pairs = centreAbove
+            ? [
+                [3, 0],
+                [1, 2],
+              ]
+            : [
+                [0, 1],
+                [2, 3],
+              ];
       }
       if (pairs.length === 0) continue;
-      const ends: readonly (readonly [number, number])[] = [[n00, n10], [n10, n11], [n01, n11], [n00, n01]];
+      const ends: readonly (readonly [number, number])[] = [
+        [n00, n10],
+        [n10, n11],
+        [n01, n11],
+        [n00, n01],
+      ];
       for (const pair of pairs) {
         for (const e of pair) {
           const [a, b] = ends[e] as readonly [number, number];
@@ -118,12 +137,7 @@ export function contourLines(
 }
 
 /** Joins segments that share an edge point into polylines (open chains first, then closed loops). */
-function chainSegments(
-  segA: number[],
-  segB: number[],
-  pointX: Map<number, number>,
-  pointY: Map<number, number>,
-): Polyline[] {
+function chainSegments(segA: number[], segB: number[], pointX: Map<number, number>, pointY: Map<number, number>): Polyline[] {
   const bySegEnd = new Map<number, number[]>();
   const link = (id: number, s: number): void => {
     const list = bySegEnd.get(id);
@@ -186,8 +200,10 @@ export function pointAtLength(line: Polyline, s: number): [number, number] {
   const n = line.x.length;
   let walked = 0;
   for (let k = 1; k < n; k++) {
-    const x0 = line.x[k - 1] as number, y0 = line.y[k - 1] as number;
-    const x1 = line.x[k] as number, y1 = line.y[k] as number;
+    const x0 = line.x[k - 1] as number,
+      y0 = line.y[k - 1] as number;
+    const x1 = line.x[k] as number,
+      y1 = line.y[k] as number;
     const d = Math.hypot(x1 - x0, y1 - y0);
     if (walked + d >= s && d > 0) {
       const f = Math.max(0, (s - walked) / d);

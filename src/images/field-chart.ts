@@ -85,7 +85,8 @@ export function gridLayout(grid: StructuredGrid): GridLayout {
   const layout = { ni: grid.ni, nj: grid.nj, offset: grid.offset ?? 0, strideI: grid.strideI ?? 1, strideJ: grid.strideJ ?? grid.ni };
   const last = layout.offset + (layout.ni - 1) * layout.strideI + (layout.nj - 1) * layout.strideJ;
   if (layout.ni < 2 || layout.nj < 2) throw new RangeError(`field chart: grid ${layout.ni} x ${layout.nj} needs at least 2 x 2 nodes`);
-  if (last >= grid.x.length || last >= grid.y.length) throw new RangeError(`field chart: node (${layout.ni - 1}, ${layout.nj - 1}) at index ${last} is outside the coordinate arrays`);
+  if (last >= grid.x.length || last >= grid.y.length)
+    throw new RangeError(`field chart: node (${layout.ni - 1}, ${layout.nj - 1}) at index ${last} is outside the coordinate arrays`);
   return layout;
 }
 
@@ -233,7 +234,11 @@ function outline(layout: GridLayout, sx: Float64Array, sy: Float64Array): string
     ...edgeNodes(layout, 'iMin').reverse(),
   ];
   return el('path', {
-    d: polylinePathData(ring.map((k) => sx[k] as number), ring.map((k) => sy[k] as number), true),
+    d: polylinePathData(
+      ring.map((k) => sx[k] as number),
+      ring.map((k) => sy[k] as number),
+      true,
+    ),
     fill: 'none',
     stroke: ink.frame,
     'stroke-width': 1.2,
@@ -253,7 +258,14 @@ function yTitle(lines: readonly string[], plot: Rect, yAxis: Axis): string {
     {},
     lines.map((line, k) => {
       const x = lastX - (lines.length - 1 - k) * lineStep;
-      return textEl(line, { x, y, 'font-size': fontSize.axisLabel, 'text-anchor': 'middle', fill: ink.text, transform: `rotate(-90 ${fmt(x)} ${fmt(y)})` });
+      return textEl(line, {
+        x,
+        y,
+        'font-size': fontSize.axisLabel,
+        'text-anchor': 'middle',
+        fill: ink.text,
+        transform: `rotate(-90 ${fmt(x)} ${fmt(y)})`,
+      });
     }),
   );
 }
@@ -267,9 +279,15 @@ function yTitle(lines: readonly string[], plot: Rect, yAxis: Axis): string {
 function edgeMarks(layout: GridLayout, sx: Float64Array, sy: Float64Array, labels: EdgeLabels): { elements: string[]; boxes: LabelBox[] } {
   const out: string[] = [];
   const boxes: LabelBox[] = [];
-  let cx = 0, cy = 0, count = 0;
+  let cx = 0,
+    cy = 0,
+    count = 0;
   for (let k = 0; k < sx.length; k++) {
-    if (Number.isFinite(sx[k]) && Number.isFinite(sy[k])) { cx += sx[k] as number; cy += sy[k] as number; count++; }
+    if (Number.isFinite(sx[k]) && Number.isFinite(sy[k])) {
+      cx += sx[k] as number;
+      cy += sy[k] as number;
+      count++;
+    }
   }
   cx /= Math.max(1, count);
   cy /= Math.max(1, count);
@@ -289,18 +307,26 @@ function edgeMarks(layout: GridLayout, sx: Float64Array, sy: Float64Array, label
     const ey = (ys[ys.length - 1] as number) - (ys[0] as number);
     const len = Math.hypot(ex, ey) || 1;
     // Outward normal: the one pointing away from the shape's centroid.
-    let nx = -ey / len, ny = ex / len;
-    const px = xs[mid] as number, py = ys[mid] as number;
-    if (nx * (px - cx) + ny * (py - cy) < 0) { nx = -nx; ny = -ny; }
+    let nx = -ey / len,
+      ny = ex / len;
+    const px = xs[mid] as number,
+      py = ys[mid] as number;
+    if (nx * (px - cx) + ny * (py - cy) < 0) {
+      nx = -nx;
+      ny = -ny;
+    }
     const angle = readableAngle((Math.atan2(ey, ex) * 180) / Math.PI);
     const rad = (angle * Math.PI) / 180;
     // The text's "up" on screen (SVG y points down) and its reading direction.
-    const upX = Math.sin(rad), upY = -Math.cos(rad);
-    const alongX = Math.cos(rad), alongY = Math.sin(rad);
+    const upX = Math.sin(rad),
+      upY = -Math.cos(rad);
+    const alongX = Math.cos(rad),
+      alongY = Math.sin(rad);
     // Glyphs rise cap height above the baseline: facing out, the baseline is 7 px out; facing in, 7 px + cap height.
     const facingOut = upX * nx + upY * ny >= 0;
     const offset = facingOut ? 7 : 7 + capHeight(size);
-    const lx = px + nx * offset, ly = py + ny * offset;
+    const lx = px + nx * offset,
+      ly = py + ny * offset;
     const attrs = {
       x: lx,
       y: ly,
@@ -313,7 +339,9 @@ function edgeMarks(layout: GridLayout, sx: Float64Array, sy: Float64Array, label
     out.push(textEl(label, { ...attrs, fill: ink.text }));
     // Screen box of the rotated text (bold runs about 10 % wider than the regular widths; 2 px of halo).
     const half = (1.1 * textWidth(label, size)) / 2 + 2;
-    const corners = [-half, half].flatMap((a) => [-capHeight(size) - 2, 0.25 * size + 2].map((u) => [lx + a * alongX - u * upX, ly + a * alongY - u * upY] as const));
+    const corners = [-half, half].flatMap((a) =>
+      [-capHeight(size) - 2, 0.25 * size + 2].map((u) => [lx + a * alongX - u * upX, ly + a * alongY - u * upY] as const),
+    );
     boxes.push({
       x0: Math.min(...corners.map((c) => c[0])),
       x1: Math.max(...corners.map((c) => c[0])),

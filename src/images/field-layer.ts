@@ -34,14 +34,22 @@ export function fieldImage(
   high: number,
   pixelScale: number,
 ): string {
-  let x0 = Infinity, x1 = -Infinity, y0 = Infinity, y1 = -Infinity;
+  let x0 = Infinity,
+    x1 = -Infinity,
+    y0 = Infinity,
+    y1 = -Infinity;
   for (let k = 0; k < sx.length; k++) {
-    const x = sx[k] as number, y = sy[k] as number;
+    const x = sx[k] as number,
+      y = sy[k] as number;
     if (!Number.isFinite(x) || !Number.isFinite(y)) continue;
-    x0 = Math.min(x0, x); x1 = Math.max(x1, x); y0 = Math.min(y0, y); y1 = Math.max(y1, y);
+    x0 = Math.min(x0, x);
+    x1 = Math.max(x1, x);
+    y0 = Math.min(y0, y);
+    y1 = Math.max(y1, y);
   }
   if (!(x1 > x0) || !(y1 > y0)) return '';
-  const left = Math.floor(x0), top = Math.floor(y0);
+  const left = Math.floor(x0),
+    top = Math.floor(y0);
   const w = Math.max(1, Math.ceil((Math.ceil(x1) - left) * pixelScale));
   const h = Math.max(1, Math.ceil((Math.ceil(y1) - top) * pixelScale));
   const px = new Float64Array(sx.length);

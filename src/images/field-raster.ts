@@ -47,10 +47,15 @@ export function rasterizeStructuredField(
   const lut = colours.lut;
 
   const fillTriangle = (a: number, b: number, c: number): void => {
-    const ax = px[a] as number, ay = py[a] as number;
-    const bx = px[b] as number, by = py[b] as number;
-    const cx = px[c] as number, cy = py[c] as number;
-    const va = values[a] as number, vb = values[b] as number, vc = values[c] as number;
+    const ax = px[a] as number,
+      ay = py[a] as number;
+    const bx = px[b] as number,
+      by = py[b] as number;
+    const cx = px[c] as number,
+      cy = py[c] as number;
+    const va = values[a] as number,
+      vb = values[b] as number,
+      vc = values[c] as number;
     const area = (bx - ax) * (cy - ay) - (cx - ax) * (by - ay);
     if (area === 0 || !Number.isFinite(area)) return;
     // Pixel centres sit at (x + 0.5, y + 0.5).

@@ -32,7 +32,14 @@ export function drawHeader(title: string, subtitle: string | readonly string[] |
     y += fontSize.title;
     elements.push(
       // A long title (a long case name) is cut with "…" at the canvas width instead of running off it.
-      textEl(truncateToWidth(title, fontSize.title * 1.08, usable), { x: width / 2, y, 'font-size': fontSize.title, 'font-weight': 'bold', 'text-anchor': 'middle', fill: ink.text }),
+      textEl(truncateToWidth(title, fontSize.title * 1.08, usable), {
+        x: width / 2,
+        y,
+        'font-size': fontSize.title,
+        'font-weight': 'bold',
+        'text-anchor': 'middle',
+        fill: ink.text,
+      }),
     );
   }
   const paragraphs = subtitle === undefined ? [] : typeof subtitle === 'string' ? [subtitle] : subtitle;

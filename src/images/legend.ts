@@ -55,9 +55,7 @@ export function drawLegend(entries: readonly LegendEntry[], x: number, y: number
   const cols = Math.max(1, Math.min(columns, entries.length));
   const { width, height } = legendSize(entries, cols);
   const cellWidth = entryWidth(entries);
-  const out: string[] = [
-    el('rect', { x, y, width, height, fill: '#ffffff', 'fill-opacity': 0.92, stroke: '#999999', 'stroke-width': 1, rx: 3 }),
-  ];
+  const out: string[] = [el('rect', { x, y, width, height, fill: '#ffffff', 'fill-opacity': 0.92, stroke: '#999999', 'stroke-width': 1, rx: 3 })];
   entries.forEach((e, k) => {
     const row = Math.floor(k / cols);
     const col = k % cols;
@@ -114,7 +112,10 @@ export function chooseLegendPlace(
   for (const [cx, cy] of candidates) {
     let covered = 0;
     // Points within 6 px of the box count as covered: a line that close would touch the frame.
-    const x0 = cx - 6, x1 = cx + size.width + 6, y0 = cy - 6, y1 = cy + size.height + 6;
+    const x0 = cx - 6,
+      x1 = cx + size.width + 6,
+      y0 = cy - 6,
+      y1 = cy + size.height + 6;
     for (const p of points) {
       for (let k = 0; k < p.x.length; k++) {
         const px = p.x[k] as number;

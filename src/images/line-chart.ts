@@ -135,10 +135,12 @@ function densify(xs: readonly number[], ys: readonly number[]): { x: number[]; y
   const x: number[] = [];
   const y: number[] = [];
   for (let k = 0; k < xs.length; k++) {
-    const x1 = xs[k] as number, y1 = ys[k] as number;
+    const x1 = xs[k] as number,
+      y1 = ys[k] as number;
     if (!Number.isFinite(x1) || !Number.isFinite(y1)) continue;
     if (k > 0 && Number.isFinite(xs[k - 1]) && Number.isFinite(ys[k - 1])) {
-      const x0 = xs[k - 1] as number, y0 = ys[k - 1] as number;
+      const x0 = xs[k - 1] as number,
+        y0 = ys[k - 1] as number;
       const steps = Math.min(500, Math.ceil(Math.hypot(x1 - x0, y1 - y0) / 8));
       for (let s = 1; s < steps; s++) {
         x.push(x0 + ((x1 - x0) * s) / steps);

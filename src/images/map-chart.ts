@@ -100,7 +100,9 @@ export function mapChart(spec: MapChartSpec): MapChartResult {
 
   const name = spec.colormap ?? 'rdbu';
   const map = getColormap(name, spec.reversed ?? name === 'rdbu');
-  let maxAbs = 0, lo = Infinity, hi = -Infinity;
+  let maxAbs = 0,
+    lo = Infinity,
+    hi = -Infinity;
   for (let k = 0; k < spec.values.length; k++) {
     const v = spec.values[k] as number;
     if (!Number.isFinite(v)) continue;
@@ -122,8 +124,10 @@ export function mapChart(spec: MapChartSpec): MapChartResult {
   const bottom = height - gap.outer - xAxisMargin(true, true) - noteSpace;
   const barProbe = colourBarAxis(low, high, top, bottom);
   const right = width - gap.outer - colourBarWidth(barProbe) - 24;
-  const x0 = spec.x[0] as number, x1 = spec.x[nx - 1] as number;
-  const y0 = spec.y[0] as number, y1 = spec.y[ny - 1] as number;
+  const x0 = spec.x[0] as number,
+    x1 = spec.x[nx - 1] as number;
+  const y0 = spec.y[0] as number,
+    y1 = spec.y[ny - 1] as number;
   const yProbe = makeAxis(yKind, y0, y1, bottom, top, 6, 'inside');
   const left = gap.outer + yAxisMargin(yProbe, true) + 6;
   const plot: Rect = { x: left, y: top, width: right - left, height: bottom - top };
@@ -188,6 +192,14 @@ export function mapChart(spec: MapChartSpec): MapChartResult {
     );
   }
   const bar: Rect = { x: right + 24, y: plot.y, width: colourBarThickness, height: plot.height };
-  body.push(drawColourBar(map, colourBarAxis(low, high, bar.y, bar.y + bar.height), bar, spec.valueLabel, levels.map((l) => l.value)));
+  body.push(
+    drawColourBar(
+      map,
+      colourBarAxis(low, high, bar.y, bar.y + bar.height),
+      bar,
+      spec.valueLabel,
+      levels.map((l) => l.value),
+    ),
+  );
   return { svg: svgDocument(width, height, body), plot, x: xAxis.scale, y: yAxis.scale, low, high, colourBar: bar };
 }

@@ -72,15 +72,7 @@ export function extent(arrays: readonly ArrayLike<number>[], positiveOnly = fals
  * An axis over [min, max] drawn from `from` px to `to` px, with round ticks.
  * `mode` "loose" widens the domain to round values (line charts); "inside" keeps the data range (maps, grids).
  */
-export function makeAxis(
-  kind: ScaleKind,
-  min: number,
-  max: number,
-  from: number,
-  to: number,
-  targetTicks: number,
-  mode: TickMode,
-): Axis {
+export function makeAxis(kind: ScaleKind, min: number, max: number, from: number, to: number, targetTicks: number, mode: TickMode): Axis {
   switch (kind) {
     case 'linear': {
       const t = linearTicks(min, max, targetTicks, mode);

@@ -14,26 +14,21 @@ export const fontDescender = -483;
 
 /** The characters with a tabulated width; ASCII 32..126 then the symbols charts use. */
 export const measuredChars =
-  ' !"#$%&\'()*+,-./0123456789:;<=>?@ABCDEFGHIJKLMNOPQRSTUVWXYZ[\\]^_`abcdefghijklmnopqrstuvwxyz{|}~' +
-  '°−×Δηεθµμ²³·–—≈≤≥±′″…∞√∑ΣαβγλπρσφωΩ';
+  ' !"#$%&\'()*+,-./0123456789:;<=>?@ABCDEFGHIJKLMNOPQRSTUVWXYZ[\\]^_`abcdefghijklmnopqrstuvwxyz{|}~' + '°−×Δηεθµμ²³·–—≈≤≥±′″…∞√∑ΣαβγλπρσφωΩ';
 
 /** Advance widths (font units) of `measuredChars`, in the same order. */
 export const advanceWidths: readonly number[] = [
-  651, 821, 942, 1716, 1303, 1946, 1597, 563, 799, 799, 1024, 1716, 651, 739, 651, 690, 1303, 1303, 1303, 1303, 1303,
-  1303, 1303, 1303, 1303, 1303, 690, 690, 1716, 1716, 1716, 1087, 2048, 1401, 1405, 1430, 1577, 1294, 1178, 1587, 1540,
-  604, 604, 1343, 1141, 1767, 1532, 1612, 1235, 1612, 1423, 1300, 1251, 1499, 1401, 2025, 1403, 1251, 1403, 799, 690,
-  799, 1716, 1024, 1024, 1255, 1300, 1126, 1300, 1260, 721, 1300, 1298, 569, 569, 1186, 569, 1995, 1298, 1253, 1300,
-  1300, 842, 1067, 803, 1298, 1212, 1675, 1212, 1212, 1075, 1303, 690, 1303, 1716, 1024, 1716, 1716, 1401, 1298, 1107,
-  1253, 1303, 1303, 821, 821, 651, 1024, 2048, 1716, 1716, 1716, 1716, 465, 765, 2048, 1706, 1305, 1380, 1294, 1350,
-  1307, 1212, 1212, 1233, 1300, 1298, 1351, 1715, 1565,
+  651, 821, 942, 1716, 1303, 1946, 1597, 563, 799, 799, 1024, 1716, 651, 739, 651, 690, 1303, 1303, 1303, 1303, 1303, 1303, 1303, 1303, 1303, 1303, 690,
+  690, 1716, 1716, 1716, 1087, 2048, 1401, 1405, 1430, 1577, 1294, 1178, 1587, 1540, 604, 604, 1343, 1141, 1767, 1532, 1612, 1235, 1612, 1423, 1300, 1251,
+  1499, 1401, 2025, 1403, 1251, 1403, 799, 690, 799, 1716, 1024, 1024, 1255, 1300, 1126, 1300, 1260, 721, 1300, 1298, 569, 569, 1186, 569, 1995, 1298,
+  1253, 1300, 1300, 842, 1067, 803, 1298, 1212, 1675, 1212, 1212, 1075, 1303, 690, 1303, 1716, 1024, 1716, 1716, 1401, 1298, 1107, 1253, 1303, 1303, 821,
+  821, 651, 1024, 2048, 1716, 1716, 1716, 1716, 465, 765, 2048, 1706, 1305, 1380, 1294, 1350, 1307, 1212, 1212, 1233, 1300, 1298, 1351, 1715, 1565,
 ];
 
 /** Width used for a character outside the table: the width of a digit, a middle-of-the-road guess. */
 const fallbackAdvance = 1303;
 
-const widthByChar: ReadonlyMap<string, number> = new Map(
-  [...measuredChars].map((ch, k) => [ch, advanceWidths[k] ?? fallbackAdvance] as const),
-);
+const widthByChar: ReadonlyMap<string, number> = new Map([...measuredChars].map((ch, k) => [ch, advanceWidths[k] ?? fallbackAdvance] as const));
 
 /** Width in px of `text` set in DejaVu Sans at `fontSize` px. */
 export function textWidth(text: string, fontSize: number): number {

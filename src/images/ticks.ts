@@ -88,8 +88,7 @@ function heckbertTicks(min: number, max: number, targetCount: number, mode: Tick
   const last = mode === 'loose' ? Math.ceil(hi / step - eps) : Math.floor(hi / step + eps);
   const values: number[] = [];
   for (let k = first; k <= last; k++) values.push(roundTo(k * step, decimals));
-  const domain: [number, number] =
-    mode === 'loose' ? [roundTo(first * step, decimals), roundTo(last * step, decimals)] : [lo, hi];
+  const domain: [number, number] = mode === 'loose' ? [roundTo(first * step, decimals), roundTo(last * step, decimals)] : [lo, hi];
   return { values, step, decimals, domain };
 }
 

@@ -4,7 +4,18 @@
  * refused before the run). Checks that relate two keys (a tip thicker than the base) depend on the other axis and
  * show per point instead.
  */
-import { coefficientRange, conductivityRange, contactResistanceRange, exponentRange, finPosition, finSize, finSizeOrZero, fraction, temperatureRange, type Range } from '../case/index.js';
+import {
+  coefficientRange,
+  conductivityRange,
+  contactResistanceRange,
+  exponentRange,
+  finPosition,
+  finSize,
+  finSizeOrZero,
+  fraction,
+  temperatureRange,
+  type Range,
+} from '../case/index.js';
 import type { QuantityKind } from '../case/index.js';
 
 export interface AxisKeyInfo {

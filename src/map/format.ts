@@ -36,9 +36,7 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
   lines.push(`Map of ${run.caseName}`);
   lines.push(axisLine('x', run.x), axisLine('y', run.y));
   const references =
-    summary.references.length > 1
-      ? summary.references.map((r) => `${r.model} at ${r.points} points`).join(', ')
-      : run.casePoint.reference.model;
+    summary.references.length > 1 ? summary.references.map((r) => `${r.model} at ${r.points} points`).join(', ') : run.casePoint.reference.model;
   const unresolved =
     summary.unresolvedPoints > 0
       ? `  reference NOT RESOLVED at ${summary.unresolvedPoints} points (discretisation error above a tenth of the tolerance): their verdicts are 'unresolved'`
@@ -62,7 +60,9 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
   if (own.models.length > 0) {
     lines.push('');
     const where = `${run.x.key} = ${value(own.x, run.x)}, ${run.y.key} = ${value(own.y, run.y)}`;
-    lines.push(`This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot.toPrecision(3)}, mL = ${own.mL.toPrecision(3)}`);
+    lines.push(
+      `This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot.toPrecision(3)}, mL = ${own.mL.toPrecision(3)}`,
+    );
     for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(signedPercentText(m.drift), 10)}${m.verdict}`);
   }
   if (summary.errors > 0) {

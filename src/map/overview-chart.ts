@@ -12,7 +12,25 @@
  */
 import { CHART_CAUTION } from '../compare/index.js';
 import { contourLines, getColormap, makeAxis, project, type Axis } from '../images/index.js';
-import { drawAxes, xAxisMargin, yAxisMargin, fieldImage, drawHeader, type Rect, el, fmt, polylinePathData, svgDocument, textEl, truncateToWidth, defaultHeight, defaultWidth, fontSize, gap, ink } from '../images/index.js';
+import {
+  drawAxes,
+  xAxisMargin,
+  yAxisMargin,
+  fieldImage,
+  drawHeader,
+  type Rect,
+  el,
+  fmt,
+  polylinePathData,
+  svgDocument,
+  textEl,
+  truncateToWidth,
+  defaultHeight,
+  defaultWidth,
+  fontSize,
+  gap,
+  ink,
+} from '../images/index.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';
@@ -110,8 +128,10 @@ export function overviewChart(run: MapRun): OverviewChart {
   const rows = Math.max(1, Math.ceil(models.length / cols));
   const yKind = run.y.log ? 'log' : 'linear';
   const xKind = run.x.log ? 'log' : 'linear';
-  const xFirst = run.x.values[0] as number, xLast = run.x.values[nx - 1] as number;
-  const yFirst = run.y.values[0] as number, yLast = run.y.values[ny - 1] as number;
+  const xFirst = run.x.values[0] as number,
+    xLast = run.x.values[nx - 1] as number;
+  const yFirst = run.y.values[0] as number,
+    yLast = run.y.values[ny - 1] as number;
   const titleBand = fontSize.legend + 10;
   // Shared titles: the y title left of the grid, the x title under it.
   const top = header.bottom + 4;
@@ -176,7 +196,9 @@ export function overviewChart(run: MapRun): OverviewChart {
   const gridLeft = left + yMargin;
   const gridRight = left + (cols - 1) * cellW + yMargin + panelW;
   const xTitleY = height - gap.outer - 2;
-  body.push(textEl(axisLabel(run.x), { x: (gridLeft + gridRight) / 2, y: xTitleY, 'font-size': fontSize.axisLabel, 'text-anchor': 'middle', fill: ink.text }));
+  body.push(
+    textEl(axisLabel(run.x), { x: (gridLeft + gridRight) / 2, y: xTitleY, 'font-size': fontSize.axisLabel, 'text-anchor': 'middle', fill: ink.text }),
+  );
   const yTitleX = gap.outer + fontSize.axisLabel - 4;
   const yTitleY = (top + bottom) / 2;
   body.push(

@@ -44,10 +44,7 @@ const GAUSS_WEIGHT_CENTRE = 8 / 9;
 function gauss3(a: number, b: number, f: (x: number) => number): number {
   const mid = 0.5 * (a + b);
   const half = 0.5 * (b - a);
-  return (
-    half *
-    (GAUSS_WEIGHT_OUTER * (f(mid - half * GAUSS_NODE) + f(mid + half * GAUSS_NODE)) + GAUSS_WEIGHT_CENTRE * f(mid))
-  );
+  return half * (GAUSS_WEIGHT_OUTER * (f(mid - half * GAUSS_NODE) + f(mid + half * GAUSS_NODE)) + GAUSS_WEIGHT_CENTRE * f(mid));
 }
 
 /** g linear through (a, gA) and (b, gB). */

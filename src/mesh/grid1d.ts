@@ -34,8 +34,7 @@ const BREAKPOINT_MERGE_FRACTION = 0.01;
 
 /** The map g: [0,1] -> [0,1] of a grading, with which ends of this segment it refines. */
 function gradingMap(grading: Grading, refineStart: boolean, refineEnd: boolean): (xi: number) => number {
-  const toward: GradingEnd | 'none' =
-    refineStart && refineEnd ? 'both' : refineStart ? 'base' : refineEnd ? 'tip' : 'none';
+  const toward: GradingEnd | 'none' = refineStart && refineEnd ? 'both' : refineStart ? 'base' : refineEnd ? 'tip' : 'none';
   if (toward === 'none') return (xi) => xi;
   switch (grading.kind) {
     case 'uniform':

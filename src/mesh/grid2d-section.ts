@@ -71,7 +71,16 @@ export function sectionOf(profile: Profile): Section2D {
     }
     case 'pin': {
       const r = profile.diameter / 2;
-      return { kind: 'pin', length: profile.length, baseX: 0, halfSize: () => r, breakpoints: [0, profile.length], sharpTip: false, tipClustering: 1, depth: twoPi };
+      return {
+        kind: 'pin',
+        length: profile.length,
+        baseX: 0,
+        halfSize: () => r,
+        breakpoints: [0, profile.length],
+        sharpTip: false,
+        tipClustering: 1,
+        depth: twoPi,
+      };
     }
     case 'conical-pin': {
       const { length: L, baseDiameter: db, tipDiameter: dt } = profile;
@@ -80,7 +89,16 @@ export function sectionOf(profile: Profile): Section2D {
     }
     case 'annular': {
       const { innerRadius: r1, outerRadius: r2, thickness: t } = profile;
-      return { kind: 'annular', length: r2 - r1, baseX: r1, halfSize: () => t / 2, breakpoints: [0, r2 - r1], sharpTip: false, tipClustering: 1, depth: 2 * twoPi };
+      return {
+        kind: 'annular',
+        length: r2 - r1,
+        baseX: r1,
+        halfSize: () => t / 2,
+        breakpoints: [0, r2 - r1],
+        sharpTip: false,
+        tipClustering: 1,
+        depth: 2 * twoPi,
+      };
     }
     case 'tabulated': {
       const { x, size } = profile;

@@ -59,7 +59,11 @@ export function fluxChartSpec(input: CheckPlotInput, size: ChartSize): LineChart
     } else {
       const tip = reference.flow.values[reference.flow.values.length - 1] as number;
       // Before the caution line, which stays last.
-      subtitle.splice(subtitle.length - 1, 0, `Less than ${pct} % of Q leaves before the tip: the tip still passes ${((100 * tip) / (reference.flow.values[0] as number)).toFixed(1)} % of Q (${reference.model}).`);
+      subtitle.splice(
+        subtitle.length - 1,
+        0,
+        `Less than ${pct} % of Q leaves before the tip: the tip still passes ${((100 * tip) / (reference.flow.values[0] as number)).toFixed(1)} % of Q (${reference.model}).`,
+      );
     }
   }
   return {

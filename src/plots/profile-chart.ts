@@ -61,7 +61,13 @@ export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineCh
   const series: LineSeries[] = [];
   for (const p of profiles.profiles) {
     const line = thinSeries(toMillimetres(p.temperature.x_m, profiles.baseX_m), p.temperature.values);
-    series.push({ label: lineLabel(c, p.model, report.reference), x: line.x, y: line.y, note: legendNote(input, p.model), ...modelStyle(p.model, report.reference.model) });
+    series.push({
+      label: lineLabel(c, p.model, report.reference),
+      x: line.x,
+      y: line.y,
+      note: legendNote(input, p.model),
+      ...modelStyle(p.model, report.reference.model),
+    });
     if (p.faceTemperature) {
       // The face of the 2-D solution: grey long dashes, so the mid-plane-to-face drop reads as a band.
       const face = thinSeries(toMillimetres(p.faceTemperature.x_m, profiles.baseX_m), p.faceTemperature.values);

@@ -59,7 +59,21 @@ function summary(r: CheckReport): Block[] {
   ];
   if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
   items.push(flagSummary(r.flags));
-  return [{ kind: 'callout', title: tone === 'warning' ? 'Result: reference not resolved, no verdicts' : tone === 'ok' ? 'Result: every shortcut within the tolerance' : tone === 'marginal' ? 'Result: some shortcuts marginal' : 'Result: some shortcuts unsafe', items, tone }];
+  return [
+    {
+      kind: 'callout',
+      title:
+        tone === 'warning'
+          ? 'Result: reference not resolved, no verdicts'
+          : tone === 'ok'
+            ? 'Result: every shortcut within the tolerance'
+            : tone === 'marginal'
+              ? 'Result: some shortcuts marginal'
+              : 'Result: some shortcuts unsafe',
+      items,
+      tone,
+    },
+  ];
 }
 
 function referenceFacts(r: CheckReport): Block {
@@ -70,10 +84,16 @@ function referenceFacts(r: CheckReport): Block {
     caption: `Reference model ${ref.model}`,
     items: [
       ['Heat rate Q', `${sig(ref.heatRate_W, 6)} W (whole fin)`],
-      ['Efficiency', `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)${ref.efficiencyNote !== null ? `; ${ref.efficiencyNote}` : ''}`],
+      [
+        'Efficiency',
+        `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)${ref.efficiencyNote !== null ? `; ${ref.efficiencyNote}` : ''}`,
+      ],
       ['Effectiveness', `${sig(ref.effectiveness)} (Q over the bare base area's heat rate)`],
       ['Tip temperature', `${ref.tipTemperature_degC.toFixed(2)} °C${ref.model === 'fd-2d' ? ' (centre of the tip)' : ''}`],
-      ['Estimated discretisation error of Q', `${relativeError(ref.discretizationError)} relative = ±${sig(ref.discretizationError * ref.heatRate_W, 2)} W (GCI, Celik et al. 2008)`],
+      [
+        'Estimated discretisation error of Q',
+        `${relativeError(ref.discretizationError)} relative = ±${sig(ref.discretizationError * ref.heatRate_W, 2)} W (GCI, Celik et al. 2008)`,
+      ],
       ['Observed order of accuracy', ref.observedOrder === null ? 'not determined' : ref.observedOrder.toFixed(2)],
       ['Energy balance', `${ref.energyBalance.toExponential(1)} (|Q_base − Q_surfaces| / Q_base)`],
       ['Finest grid', grid],
@@ -106,7 +126,13 @@ function checkTable(r: CheckReport): Block[] {
         'Efficiency of every row = Q / (Q with the whole cooled surface at the base temperature), so the rows compare.',
       ],
     },
-    { kind: 'list', items: r.models.map((m) => `${modelName(m)}: ${prettyUnits(m.basis)}${m.guessValues ? `; ${m.guessValues.description}: h = ${sig(m.guessValues.h_W_per_m2K)} W/(m²·K), k = ${sig(m.guessValues.k_W_per_mK)} W/(m·K)` : ''}${m.formulaEfficiency !== null ? `; formula efficiency ${efficiency(m.formulaEfficiency)}` : ''}${m.m_per_m !== null ? `; m = ${sig(m.m_per_m)} 1/m` : ''}${m.length_m !== null ? `, length ${sig(m.length_m * 1000)} mm` : ''}.`) },
+    {
+      kind: 'list',
+      items: r.models.map(
+        (m) =>
+          `${modelName(m)}: ${prettyUnits(m.basis)}${m.guessValues ? `; ${m.guessValues.description}: h = ${sig(m.guessValues.h_W_per_m2K)} W/(m²·K), k = ${sig(m.guessValues.k_W_per_mK)} W/(m·K)` : ''}${m.formulaEfficiency !== null ? `; formula efficiency ${efficiency(m.formulaEfficiency)}` : ''}${m.m_per_m !== null ? `; m = ${sig(m.m_per_m)} 1/m` : ''}${m.length_m !== null ? `, length ${sig(m.length_m * 1000)} mm` : ''}.`,
+      ),
+    },
   ];
   if (r.notApplicable.length > 0) {
     blocks.push({ kind: 'paragraph', text: 'Not applicable to this case:' });
@@ -138,7 +164,13 @@ function ledger(r: CheckReport): Block[] {
 const FLAG_TONE: Record<Flag['severity'], Tone> = { info: 'info', warning: 'warning', error: 'error' };
 
 function flags(r: CheckReport): Block[] {
-  if (r.flags.length === 0) return [{ kind: 'paragraph', text: 'No flags: none of the design checks (thick fin, low effectiveness, long fin, fin that insulates, grid convergence, energy balance) was triggered.' }];
+  if (r.flags.length === 0)
+    return [
+      {
+        kind: 'paragraph',
+        text: 'No flags: none of the design checks (thick fin, low effectiveness, long fin, fin that insulates, grid convergence, energy balance) was triggered.',
+      },
+    ];
   return [
     {
       kind: 'table',
@@ -165,7 +197,19 @@ export function buildReport(inputs: ReportInputs): ReportDocument {
     {
       id: 'case',
       title: 'The case',
-      blocks: [{ kind: 'table', caption: `Inputs of ${fileName}`, columns: [{ title: 'Quantity', align: 'left' }, { title: 'Value', align: 'left' }, { title: 'Note', align: 'left' }], rows: caseInputRows(c), notes: [] }],
+      blocks: [
+        {
+          kind: 'table',
+          caption: `Inputs of ${fileName}`,
+          columns: [
+            { title: 'Quantity', align: 'left' },
+            { title: 'Value', align: 'left' },
+            { title: 'Note', align: 'left' },
+          ],
+          rows: caseInputRows(c),
+          notes: [],
+        },
+      ],
     },
     { id: 'check', title: 'Shortcuts against the reference', blocks: checkTable(r) },
     { id: 'ledger', title: 'Where the drift comes from', blocks: ledger(r) },

@@ -9,24 +9,52 @@ import type { TableRow } from './document.js';
 const mm = (m: number): string => `${+(m * 1000).toPrecision(4)} mm`;
 const num = (x: number): string => `${+x.toPrecision(4)}`;
 /** Units written for people: W/(m^2*K) becomes W/(m²·K). */
-export const prettyUnits = (s: string): string => s.replace(/\^2\b/g, '²').replace(/([\w)²])\*(?=[\w(])/g, '$1·').replace(/\bdegC\b/g, '°C');
+export const prettyUnits = (s: string): string =>
+  s
+    .replace(/\^2\b/g, '²')
+    .replace(/([\w)²])\*(?=[\w(])/g, '$1·')
+    .replace(/\bdegC\b/g, '°C');
 
 function geometryRows(p: Profile): [string, string][] {
   switch (p.kind) {
     case 'rectangular':
-      return [['Length', mm(p.length)], ['Thickness', mm(p.thickness)], ['Width', mm(p.width)]];
+      return [
+        ['Length', mm(p.length)],
+        ['Thickness', mm(p.thickness)],
+        ['Width', mm(p.width)],
+      ];
     case 'pin':
-      return [['Length', mm(p.length)], ['Diameter', mm(p.diameter)]];
+      return [
+        ['Length', mm(p.length)],
+        ['Diameter', mm(p.diameter)],
+      ];
     case 'trapezoidal':
-      return [['Length', mm(p.length)], ['Thickness at the base', mm(p.baseThickness)], ['Thickness at the tip', mm(p.tipThickness)], ['Width', mm(p.width)]];
+      return [
+        ['Length', mm(p.length)],
+        ['Thickness at the base', mm(p.baseThickness)],
+        ['Thickness at the tip', mm(p.tipThickness)],
+        ['Width', mm(p.width)],
+      ];
     case 'triangular':
     case 'parabolic-concave':
     case 'parabolic-convex':
-      return [['Length', mm(p.length)], ['Thickness at the base', mm(p.baseThickness)], ['Width', mm(p.width)]];
+      return [
+        ['Length', mm(p.length)],
+        ['Thickness at the base', mm(p.baseThickness)],
+        ['Width', mm(p.width)],
+      ];
     case 'conical-pin':
-      return [['Length', mm(p.length)], ['Diameter at the base', mm(p.baseDiameter)], ['Diameter at the tip', mm(p.tipDiameter)]];
+      return [
+        ['Length', mm(p.length)],
+        ['Diameter at the base', mm(p.baseDiameter)],
+        ['Diameter at the tip', mm(p.tipDiameter)],
+      ];
     case 'annular':
-      return [['Inner radius (tube)', mm(p.innerRadius)], ['Outer radius', mm(p.outerRadius)], ['Thickness', mm(p.thickness)]];
+      return [
+        ['Inner radius (tube)', mm(p.innerRadius)],
+        ['Outer radius', mm(p.outerRadius)],
+        ['Thickness', mm(p.thickness)],
+      ];
     case 'tabulated': {
       const what = p.shape === 'pin' ? 'diameter' : 'thickness';
       const points = Array.from(p.x, (x, k) => `${mm(x)}: ${mm(p.size[k] as number)}`);
@@ -54,15 +82,24 @@ export function caseInputRows(c: Case): TableRow[] {
   const p = c.fin.profile;
   const rows: [string, string, string][] = [['Profile', p.kind, p.kind === 'tabulated' ? `${p.shape}, linear between points` : '']];
   for (const [q, v] of geometryRows(p)) rows.push([q, v, '']);
-  if (hasEdges(p)) rows.push(['Side edges', c.fin.edges, c.fin.edges === 'cooled' ? 'the two narrow edges lose heat' : 'the two narrow edges lose no heat']);
+  if (hasEdges(p))
+    rows.push(['Side edges', c.fin.edges, c.fin.edges === 'cooled' ? 'the two narrow edges lose heat' : 'the two narrow edges lose no heat']);
   const k = c.material.k;
   rows.push(['Material', c.material.name, prettyUnits(c.material.source)]);
-  rows.push(['Conductivity k', k.kind === 'constant' ? `${num(k.k)} W/(m·K)` : `table of ${k.k.length} points, ${num(Math.min(...k.k))} to ${num(Math.max(...k.k))} W/(m·K)`, '']);
+  rows.push([
+    'Conductivity k',
+    k.kind === 'constant' ? `${num(k.k)} W/(m·K)` : `table of ${k.k.length} points, ${num(Math.min(...k.k))} to ${num(Math.max(...k.k))} W/(m·K)`,
+    '',
+  ]);
   rows.push(['Convection h', prettyUnits(describeH(c.convection.h)), '']);
   rows.push(['Tip', prettyUnits(describeTip(c.convection.tip)), '']);
   rows.push(['Ambient (fluid) temperature', `${num(c.convection.ambient_degC)} °C`, '']);
   if (c.convection.emissivity > 0) rows.push(['Emissivity', num(c.convection.emissivity), `surroundings at ${num(c.convection.surroundings_degC)} °C`]);
   rows.push(['Base temperature', `${num(c.base.T_degC)} °C`, c.base.contactResistance > 0 ? 'of the wall, behind the contact resistance' : '']);
-  rows.push(['Contact resistance at the base', c.base.contactResistance > 0 ? `${c.base.contactResistance.toExponential(2)} m²·K/W` : 'none', c.base.contactResistance > 0 ? 'per unit of base area' : '']);
+  rows.push([
+    'Contact resistance at the base',
+    c.base.contactResistance > 0 ? `${c.base.contactResistance.toExponential(2)} m²·K/W` : 'none',
+    c.base.contactResistance > 0 ? 'per unit of base area' : '',
+  ]);
   return rows.map((cells) => ({ cells }));
 }

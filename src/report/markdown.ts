@@ -23,9 +23,27 @@ function blockMd(b: Block): string {
     case 'callout':
       return [`> **${escapeMarkdown(b.title)}**`, '>', ...b.items.map((i) => `> - ${escapeMarkdown(i)}`)].join('\n');
     case 'table':
-      return [`**${escapeMarkdown(b.caption)}**`, '', ...tableMd(b.columns, b.rows.map((r) => r.cells)), ...(b.notes.length > 0 ? ['', ...b.notes.map((n) => `*${escapeMarkdown(n)}*`)] : [])].join('\n');
+      return [
+        `**${escapeMarkdown(b.caption)}**`,
+        '',
+        ...tableMd(
+          b.columns,
+          b.rows.map((r) => r.cells),
+        ),
+        ...(b.notes.length > 0 ? ['', ...b.notes.map((n) => `*${escapeMarkdown(n)}*`)] : []),
+      ].join('\n');
     case 'facts':
-      return [`**${escapeMarkdown(b.caption)}**`, '', ...tableMd([{ title: 'Quantity', align: 'left' }, { title: 'Value', align: 'left' }], b.items.map(([t, v]) => [t, v]))].join('\n');
+      return [
+        `**${escapeMarkdown(b.caption)}**`,
+        '',
+        ...tableMd(
+          [
+            { title: 'Quantity', align: 'left' },
+            { title: 'Value', align: 'left' },
+          ],
+          b.items.map(([t, v]) => [t, v]),
+        ),
+      ].join('\n');
     case 'figure':
       return `![${escapeMarkdown(b.alt)}](${b.file})\n\n*${escapeMarkdown(b.caption)}*`;
     default: {

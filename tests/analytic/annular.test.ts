@@ -1,12 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { initBessel } from '../../src/analytic/bessel.js';
-import {
-  annularFin,
-  annularFinConvectiveTip,
-  annularFinCorrected,
-  annularFinSchmidt,
-  type AnnularFinInput,
-} from '../../src/analytic/annular.js';
+import { annularFin, annularFinConvectiveTip, annularFinCorrected, annularFinSchmidt, type AnnularFinInput } from '../../src/analytic/annular.js';
 import { expectAbsClose, expectRelClose, tenDigits } from './close.js';
 
 beforeAll(async () => {

@@ -15,10 +15,66 @@ import { expectRelClose, tenDigits } from './close.js';
 // (L_c* to 12 digits, so the same tolerance is loose for it).
 const D = 0.005;
 const cases = [
-  { name: 'R1', h: 40, k: 180, P: 0.104, A: 1e-4, L: 0.03, thetaBase: 60, Lc: 0.03096153846, eta: 0.9321568913, qLc: 7.203708456, qExact: 7.203722261, relDiff: -1.92e-6, LcExact: 0.030961606956 },
-  { name: 'R2', h: 40, k: 237, P: 2, A: 0.001, L: 0.025, thetaBase: 50, Lc: 0.0255, eta: 0.9327350245, qLc: 95.1389725, qExact: 95.13901802, relDiff: -4.78e-7, LcExact: 0.0255000140654 },
-  { name: 'P1', h: 100, k: 398, P: Math.PI * D, A: (Math.PI * D * D) / 4, L: 0.05, thetaBase: 75, Lc: 0.05125, eta: 0.8546381502, qLc: 5.160090108, qExact: 5.160099582, relDiff: -1.84e-6, LcExact: 0.0512501308873 },
-  { name: 'P2', h: 25, k: 15, P: Math.PI * D, A: (Math.PI * D * D) / 4, L: 0.1, thetaBase: 80, Lc: 0.10125, eta: 0.2701479107, qLc: 0.8593033754, qExact: 0.8593034424, relDiff: -7.8e-8, LcExact: 0.101250869142 },
+  {
+    name: 'R1',
+    h: 40,
+    k: 180,
+    P: 0.104,
+    A: 1e-4,
+    L: 0.03,
+    thetaBase: 60,
+    Lc: 0.03096153846,
+    eta: 0.9321568913,
+    qLc: 7.203708456,
+    qExact: 7.203722261,
+    relDiff: -1.92e-6,
+    LcExact: 0.030961606956,
+  },
+  {
+    name: 'R2',
+    h: 40,
+    k: 237,
+    P: 2,
+    A: 0.001,
+    L: 0.025,
+    thetaBase: 50,
+    Lc: 0.0255,
+    eta: 0.9327350245,
+    qLc: 95.1389725,
+    qExact: 95.13901802,
+    relDiff: -4.78e-7,
+    LcExact: 0.0255000140654,
+  },
+  {
+    name: 'P1',
+    h: 100,
+    k: 398,
+    P: Math.PI * D,
+    A: (Math.PI * D * D) / 4,
+    L: 0.05,
+    thetaBase: 75,
+    Lc: 0.05125,
+    eta: 0.8546381502,
+    qLc: 5.160090108,
+    qExact: 5.160099582,
+    relDiff: -1.84e-6,
+    LcExact: 0.0512501308873,
+  },
+  {
+    name: 'P2',
+    h: 25,
+    k: 15,
+    P: Math.PI * D,
+    A: (Math.PI * D * D) / 4,
+    L: 0.1,
+    thetaBase: 80,
+    Lc: 0.10125,
+    eta: 0.2701479107,
+    qLc: 0.8593033754,
+    qExact: 0.8593034424,
+    relDiff: -7.8e-8,
+    LcExact: 0.101250869142,
+  },
 ];
 
 describe.each(cases)('corrected length, case $name', (c) => {
@@ -68,7 +124,7 @@ describe('thin forms and the range of the exact correction', () => {
     const P = 1;
     const k = 1;
     const h = 1;
-    const A = beta2 * (k * P) / h;
+    const A = (beta2 * (k * P)) / h;
     const input = { h, k, P, A, L: 1e-9, thetaBase: 1 };
     const shortcut = correctedLengthFin(input).heatRate;
     const exact = uniformFin({ ...input, tip: { kind: 'convective' } }).heatRate;

@@ -21,19 +21,39 @@ describe('adaptive integration', () => {
   // Closed-form integrals (elementary calculus); tolerance 1e-12 over the default 1e-13 target.
   it('smooth, peaked and endpoint-steep integrands', () => {
     expectRelClose(integrate(Math.exp, 0, 1), Math.E - 1, 1e-12, 'exp');
-    expectRelClose(integrate((x) => 1 / (1e-4 + x * x), -1, 1), (2 / 1e-2) * Math.atan(1 / 1e-2), 1e-12, 'Runge peak');
+    expectRelClose(
+      integrate((x) => 1 / (1e-4 + x * x), -1, 1),
+      (2 / 1e-2) * Math.atan(1 / 1e-2),
+      1e-12,
+      'Runge peak',
+    );
     // integral_0^1 x^{-1/2} dx = 2: an integrable endpoint singularity, never evaluated at 0.
-    expectRelClose(integrate((x) => 1 / Math.sqrt(x), 0, 1, { maxPanels: 5000, relTolerance: 1e-10 }), 2, 1e-9, 'x^-1/2');
+    expectRelClose(
+      integrate((x) => 1 / Math.sqrt(x), 0, 1, { maxPanels: 5000, relTolerance: 1e-10 }),
+      2,
+      1e-9,
+      'x^-1/2',
+    );
   });
 });
 
 describe('brentRoot', () => {
   // Roots known in closed form; Brent converges to ~4 eps |x|.
   it('finds sqrt(2), the Dottie number and a root near 0 to round-off', () => {
-    expectRelClose(brentRoot((x) => x * x - 2, 0, 2), Math.SQRT2, 1e-15, 'sqrt2');
+    expectRelClose(
+      brentRoot((x) => x * x - 2, 0, 2),
+      Math.SQRT2,
+      1e-15,
+      'sqrt2',
+    );
     const dottie = brentRoot((x) => Math.cos(x) - x, 0, 1);
     expect(Math.abs(Math.cos(dottie) - dottie)).toBeLessThan(1e-15);
-    expectRelClose(brentRoot((x) => x - 1e-200, -1, 1), 1e-200, 1e-15, 'tiny root');
+    expectRelClose(
+      brentRoot((x) => x - 1e-200, -1, 1),
+      1e-200,
+      1e-15,
+      'tiny root',
+    );
   });
   it('rejects a non-bracketing interval', () => {
     expect(() => brentRoot((x) => x * x + 1, -1, 1)).toThrow(RangeError);

@@ -9,7 +9,12 @@ import {
   type OptimumResult,
   type OptimumStraightInput,
 } from '../../src/analytic/optimum.js';
-import { straightRectangularFin, straightTriangularFin, straightConcaveParabolicFin, straightConvexParabolicFin } from '../../src/analytic/straight-profiles.js';
+import {
+  straightRectangularFin,
+  straightTriangularFin,
+  straightConcaveParabolicFin,
+  straightConvexParabolicFin,
+} from '../../src/analytic/straight-profiles.js';
 import { cylindricalPinFin } from '../../src/analytic/spine-profiles.js';
 import { expectRelClose } from './close.js';
 
@@ -33,14 +38,17 @@ describe.each([
   ['triangular', optimumTriangularFin, 1.30940206276, 1e-11, 0.59364881288, 1e-11, 1 / 2],
   ['concave parabolic: mL = sqrt 2, eta = 1/2 exactly', optimumConcaveParabolicFin, Math.SQRT2, 1e-14, 0.5, 1e-14, 1 / 3],
   ['convex parabolic', optimumConvexParabolicFin, 1.35395663795, 1e-11, 0.6146872003, 1e-9, 2 / 3],
-] as [string, (i: OptimumStraightInput) => OptimumResult, number, number, number, number, number][])('optimum %s', (_name, optimum, mL, mLTol, eta, etaTol, meanOverBase) => {
-  it('mL and efficiency', () => {
-    const r = optimum(example);
-    expectRelClose(r.mL, mL, mLTol, 'mL');
-    expectRelClose(r.efficiency, eta, etaTol, 'eta');
-    expectRelClose(meanOverBase * r.thickness * r.length, example.profileArea, 1e-14, 'profile area');
-  });
-});
+] as [string, (i: OptimumStraightInput) => OptimumResult, number, number, number, number, number][])(
+  'optimum %s',
+  (_name, optimum, mL, mLTol, eta, etaTol, meanOverBase) => {
+    it('mL and efficiency', () => {
+      const r = optimum(example);
+      expectRelClose(r.mL, mL, mLTol, 'mL');
+      expectRelClose(r.efficiency, eta, etaTol, 'eta');
+      expectRelClose(meanOverBase * r.thickness * r.length, example.profileArea, 1e-14, 'profile area');
+    });
+  },
+);
 
 describe('optimum pin of fixed volume: sinh 2z = (10/3) z (script optimum.py)', () => {
   it('mL and efficiency to 12 digits; the heat rate is a maximum over L', () => {
@@ -49,7 +57,8 @@ describe('optimum pin of fixed volume: sinh 2z = (10/3) z (script optimum.py)', 
     expectRelClose(r.mL, 0.919296357325, 1e-11, 'mL');
     expectRelClose(r.efficiency, 0.789260573809, 1e-11, 'eta');
     expectRelClose((Math.PI * r.thickness * r.thickness * r.length) / 4, input.volume, 1e-14, 'volume');
-    const qAt = (L: number) => cylindricalPinFin({ h: input.h, k: input.k, length: L, baseDiameter: Math.sqrt((4 * input.volume) / (Math.PI * L)), thetaBase: 1 }).heatRate;
+    const qAt = (L: number) =>
+      cylindricalPinFin({ h: input.h, k: input.k, length: L, baseDiameter: Math.sqrt((4 * input.volume) / (Math.PI * L)), thetaBase: 1 }).heatRate;
     expectRelClose(qAt(r.length), r.heatRate, 1e-13, 'q at optimum');
     expect(qAt(r.length * 1.01)).toBeLessThan(r.heatRate);
     expect(qAt(r.length * 0.99)).toBeLessThan(r.heatRate);
@@ -84,10 +93,26 @@ describe('dimensional example h = 40, k = 180, A_p = 6e-5 m^2 (script optimum.py
   // L with the material fixed, using the efficiency closed forms. The maximum is flat, so L is only
   // located to ~sqrt(eps) relative; the heat rates agree to 1e-12.
   it.each([
-    ['rectangle', optimumRectangularFin, (L: number) => straightRectangularFin({ h: 40, k: 180, length: L, baseThickness: 6e-5 / L, thetaBase: 1 }).heatRate],
-    ['triangle', optimumTriangularFin, (L: number) => straightTriangularFin({ h: 40, k: 180, length: L, baseThickness: (2 * 6e-5) / L, thetaBase: 1 }).heatRate],
-    ['concave parabola', optimumConcaveParabolicFin, (L: number) => straightConcaveParabolicFin({ h: 40, k: 180, length: L, baseThickness: (3 * 6e-5) / L, thetaBase: 1 }).heatRate],
-    ['convex parabola', optimumConvexParabolicFin, (L: number) => straightConvexParabolicFin({ h: 40, k: 180, length: L, baseThickness: (1.5 * 6e-5) / L, thetaBase: 1 }).heatRate],
+    [
+      'rectangle',
+      optimumRectangularFin,
+      (L: number) => straightRectangularFin({ h: 40, k: 180, length: L, baseThickness: 6e-5 / L, thetaBase: 1 }).heatRate,
+    ],
+    [
+      'triangle',
+      optimumTriangularFin,
+      (L: number) => straightTriangularFin({ h: 40, k: 180, length: L, baseThickness: (2 * 6e-5) / L, thetaBase: 1 }).heatRate,
+    ],
+    [
+      'concave parabola',
+      optimumConcaveParabolicFin,
+      (L: number) => straightConcaveParabolicFin({ h: 40, k: 180, length: L, baseThickness: (3 * 6e-5) / L, thetaBase: 1 }).heatRate,
+    ],
+    [
+      'convex parabola',
+      optimumConvexParabolicFin,
+      (L: number) => straightConvexParabolicFin({ h: 40, k: 180, length: L, baseThickness: (1.5 * 6e-5) / L, thetaBase: 1 }).heatRate,
+    ],
   ] as [string, (i: OptimumStraightInput) => OptimumResult, (L: number) => number][])('%s: direct maximisation over L agrees', (_n, optimum, q) => {
     let a = 0.005;
     let b = 0.5;

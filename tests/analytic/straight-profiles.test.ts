@@ -68,7 +68,12 @@ describe('limits and special cases of the general forms', () => {
   it.each([0.25, 1, 2, 5])('trapezoid tau -> 1 and tau -> 0 at mL = %d', (mL) => {
     const input = inputFor(mL);
     const t = input.baseThickness;
-    expectRelClose(straightTrapezoidalFin({ ...input, tipThickness: t * (1 - 1e-9) }).efficiency, straightRectangularFin(input).efficiency, 1e-8, 'tau->1');
+    expectRelClose(
+      straightTrapezoidalFin({ ...input, tipThickness: t * (1 - 1e-9) }).efficiency,
+      straightRectangularFin(input).efficiency,
+      1e-8,
+      'tau->1',
+    );
     expectRelClose(straightTrapezoidalFin({ ...input, tipThickness: t }).efficiency, straightRectangularFin(input).efficiency, 1e-15, 'tau=1');
     expectRelClose(straightTrapezoidalFin({ ...input, tipThickness: 0 }).efficiency, straightTriangularFin(input).efficiency, 1e-14, 'tau=0');
     // tau = 1e-12: the correction is O(sqrt(tau) * ...) in u_a; 1e-8 is ample.

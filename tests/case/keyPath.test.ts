@@ -25,7 +25,17 @@ describe('parseKeyPath and formatKeyPath', () => {
 });
 
 describe('getByKeyPath and setByKeyPath', () => {
-  const raw = { fin: { profile: 'rectangular', thickness: '2 mm' }, convection: { h: { points: [[0, 60], ['40 mm', 25]] } } };
+  const raw = {
+    fin: { profile: 'rectangular', thickness: '2 mm' },
+    convection: {
+      h: {
+        points: [
+          [0, 60],
+          ['40 mm', 25],
+        ],
+      },
+    },
+  };
 
   it('reads values by path and gives undefined for missing steps', () => {
     expect(getByKeyPath(raw, 'fin.thickness')).toBe('2 mm');

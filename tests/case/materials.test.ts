@@ -10,9 +10,23 @@ import { builtInMaterials, findMaterial, materialNames, similarMaterialNames } f
 describe('built-in materials', () => {
   it('includes the materials the case format promises', () => {
     for (const name of [
-      'aluminium-1100', 'aluminium-6061', 'aluminium-6063', 'aluminium-pure', 'copper-pure', 'copper-c110', 'brass',
-      'carbon-steel-1010', 'stainless-304', 'stainless-316', 'titanium-6al4v', 'magnesium-az31', 'polymer-pa66',
-      'polymer-pps-tc', 'polymer-abs', 'ceramic-alumina', 'aluminium-nitride',
+      'aluminium-1100',
+      'aluminium-6061',
+      'aluminium-6063',
+      'aluminium-pure',
+      'copper-pure',
+      'copper-c110',
+      'brass',
+      'carbon-steel-1010',
+      'stainless-304',
+      'stainless-316',
+      'titanium-6al4v',
+      'magnesium-az31',
+      'polymer-pa66',
+      'polymer-pps-tc',
+      'polymer-abs',
+      'ceramic-alumina',
+      'aluminium-nitride',
     ]) {
       expect(materialNames).toContain(name);
     }

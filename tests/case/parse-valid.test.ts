@@ -57,7 +57,11 @@ const profiles: Record<string, ProfileCase> = {
       profile: 'tabulated',
       shape: 'straight',
       width: '50 mm',
-      points: [['0 mm', '3 mm'], ['10 mm', '2 mm'], ['30 mm', '0.5 mm']],
+      points: [
+        ['0 mm', '3 mm'],
+        ['10 mm', '2 mm'],
+        ['30 mm', '0.5 mm'],
+      ],
     },
     expected: {
       kind: 'tabulated',
@@ -68,7 +72,15 @@ const profiles: Record<string, ProfileCase> = {
     },
   },
   'tabulated pin': {
-    fin: { profile: 'tabulated', shape: 'pin', points: [[0, '5 mm'], ['20 mm', '4 mm'], ['40 mm', 0]] },
+    fin: {
+      profile: 'tabulated',
+      shape: 'pin',
+      points: [
+        [0, '5 mm'],
+        ['20 mm', '4 mm'],
+        ['40 mm', 0],
+      ],
+    },
     expected: {
       kind: 'tabulated',
       shape: 'pin',

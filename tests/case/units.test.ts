@@ -184,15 +184,14 @@ const lengthUnits: [string, number][] = [
 describe('property: lengths in random units', () => {
   // The parser multiplies the number by the unit's factor: one or two roundings, so 1e-13 relative is ample and
   // still catches any wrong factor or prefix (the smallest factor error here would be 1e-3 or more).
-  fcTest.prop([
-    fc.double({ min: 1e-6, max: 1e6, noNaN: true, noDefaultInfinity: true }),
-    fc.constantFrom(...lengthUnits),
-    fc.constantFrom('', ' ', '  '),
-  ])('"<v><space><unit>" is v * factor in m, and fromSI gives v back', (v, [unit, factor], space) => {
-    const si = value(`${v}${space}${unit}`, 'length');
-    expectRelative(si, v * factor, 1e-13);
-    expectRelative(fromSI(si, 'length', unit), v, 1e-13);
-  });
+  fcTest.prop([fc.double({ min: 1e-6, max: 1e6, noNaN: true, noDefaultInfinity: true }), fc.constantFrom(...lengthUnits), fc.constantFrom('', ' ', '  ')])(
+    '"<v><space><unit>" is v * factor in m, and fromSI gives v back',
+    (v, [unit, factor], space) => {
+      const si = value(`${v}${space}${unit}`, 'length');
+      expectRelative(si, v * factor, 1e-13);
+      expectRelative(fromSI(si, 'length', unit), v, 1e-13);
+    },
+  );
 
   fcTest.prop([fc.double({ min: -200, max: 2000, noNaN: true }), fc.constantFrom('degC', 'degF', 'K', 'degR', '°C', '°F')])(
     'absolute temperatures round-trip through degC',

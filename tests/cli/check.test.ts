@@ -139,7 +139,10 @@ describe('exit codes and messages for bad input (exit 2, nothing on stdout)', ()
   });
 
   it('a case with an error names the key path, the value, what is accepted and the line', async () => {
-    const bad = caseFile('bad.yaml', 'name: x\nfin:\n  profile: rectangular\n  length: 30 mm\n  thickness: -2 mm\n  width: 50 mm\nmaterial: { k: 180 }\nconvection: { ambient: 20, h: 40, tip: convective }\nbase: { temperature: 80 }\n');
+    const bad = caseFile(
+      'bad.yaml',
+      'name: x\nfin:\n  profile: rectangular\n  length: 30 mm\n  thickness: -2 mm\n  width: 50 mm\nmaterial: { k: 180 }\nconvection: { ambient: 20, h: 40, tip: convective }\nbase: { temperature: 80 }\n',
+    );
     const r = await cli('check', bad, '--json');
     expect(r.code).toBe(2);
     expect(r.stdout).toBe('');

@@ -56,7 +56,9 @@ describe('fincheck solve --model 2d on a nonlinear fin (power-law h, radiation)'
     const j = JSON.parse(solved.stdout) as Solve2DJson;
     const checked = await cli('check', insulatedDemo(), '--json', '--reference', '2d');
     expect(checked.code).toBe(0);
-    const ref = (JSON.parse(checked.stdout) as { reference: { model: string; heatRate_W: number; discretizationError: number; grid: { nx: number; ny: number } } }).reference;
+    const ref = (
+      JSON.parse(checked.stdout) as { reference: { model: string; heatRate_W: number; discretizationError: number; grid: { nx: number; ny: number } } }
+    ).reference;
     expect(ref.model).toBe('fd-2d');
     expect(j.model).toBe('fd-2d');
     expect(j.grid).toEqual(ref.grid);
@@ -68,7 +70,9 @@ describe('fincheck solve --model 2d on a nonlinear fin (power-law h, radiation)'
     // heatRate_W before solve reported the whole fin; issue 9, item 7).
     expect(Math.abs(j.sectionHeatRate_W - ref.heatRate_W) / ref.heatRate_W).toBeLessThanOrEqual(ref.discretizationError + 1e-9);
     // The whole fin, edges included, is check's own reference for the demo: the same number and error.
-    const whole = (JSON.parse((await cli('check', demo, '--json', '--reference', '2d')).stdout) as { reference: { heatRate_W: number; discretizationError: number } }).reference;
+    const whole = (
+      JSON.parse((await cli('check', demo, '--json', '--reference', '2d')).stdout) as { reference: { heatRate_W: number; discretizationError: number } }
+    ).reference;
     expect(Math.abs(j.heatRate_W - whole.heatRate_W) / whole.heatRate_W).toBeLessThanOrEqual(1e-9);
     expect(j.discretizationError).toBe(whole.discretizationError);
     // Newton: three grids, each converged (relative residual <= 1e-10, the solver's stopping test).

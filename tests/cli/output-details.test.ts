@@ -62,7 +62,24 @@ convection: { ambient: 35 degC, h: 45 W/(m^2*K), tip: convective }
 base: { temperature: 85 degC }
 `,
     );
-    const map = await cli('map', file, '--x', 'fin.thickness=1:4 mm', '--y', 'convection.h=20:400', '--steps', '3x3', '--reference', '1d', '--jobs', '1', '--models', 'tanh-L', '--out', join(dir, 'out'));
+    const map = await cli(
+      'map',
+      file,
+      '--x',
+      'fin.thickness=1:4 mm',
+      '--y',
+      'convection.h=20:400',
+      '--steps',
+      '3x3',
+      '--reference',
+      '1d',
+      '--jobs',
+      '1',
+      '--models',
+      'tanh-L',
+      '--out',
+      join(dir, 'out'),
+    );
     expect(map.code, map.stderr).toBe(0);
     const check = await cli('check', file, '--reference', '1d');
     // tanh-L (adiabatic tip) underestimates a convective-tip fin: a negative drift, printed with its sign in both.

@@ -75,7 +75,22 @@ describe('interrupted map', () => {
     ['2', '2d'],
   ] as const)('SIGTERM with --jobs %s (%s reference): exit 143, a message, no folder', async (jobs, reference) => {
     const out = join(tmp, `map-${jobs}`);
-    const args = ['map', pin, '--x', 'fin.diameter=2:8 mm', '--y', 'fin.length=10:60 mm', '--steps', '150x150', '--reference', reference, '--jobs', jobs, '--out', out];
+    const args = [
+      'map',
+      pin,
+      '--x',
+      'fin.diameter=2:8 mm',
+      '--y',
+      'fin.length=10:60 mm',
+      '--steps',
+      '150x150',
+      '--reference',
+      reference,
+      '--jobs',
+      jobs,
+      '--out',
+      out,
+    ];
     const r = await interrupted(args, 'SIGTERM', 3000);
     expect(r.signal, 'SIGTERM arrived before the map started listening for it').toBeNull();
     expect(r.code).toBe(143);

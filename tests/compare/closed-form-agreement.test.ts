@@ -29,7 +29,7 @@ const cases: [string, Record<string, unknown>][] = [
 ];
 
 describe.each(cases)('%s: fd-1d vs its closed form', (_name, fin) => {
-  it('agree to 1e-6 relative (the foundation issue\'s acceptance level), with a GCI that covers the gap', async () => {
+  it("agree to 1e-6 relative (the foundation issue's acceptance level), with a GCI that covers the gap", async () => {
     const c = parseCaseObject({ name: 'agreement', fin, ...common });
     const { report } = await runCheck(c, { tolerance: 0.02, reference: '1d' });
     const cf = report.models.find((m) => m.model === 'closed-form');
@@ -45,7 +45,16 @@ describe('closed-form is reported not applicable where no published form exists'
   it('tabulated profile', async () => {
     const c = parseCaseObject({
       name: 'tab',
-      fin: { profile: 'tabulated', shape: 'straight', width: '50 mm', points: [['0 mm', '3 mm'], ['10 mm', '2 mm'], ['30 mm', '1 mm']] },
+      fin: {
+        profile: 'tabulated',
+        shape: 'straight',
+        width: '50 mm',
+        points: [
+          ['0 mm', '3 mm'],
+          ['10 mm', '2 mm'],
+          ['30 mm', '1 mm'],
+        ],
+      },
       ...common,
     });
     const { report } = await runCheck(c, { tolerance: 0.02, reference: '1d' });

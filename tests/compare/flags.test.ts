@@ -35,8 +35,16 @@ describe('estimateOneDError (interpolated exact 2-D series error of the 1-D mode
 });
 
 const base: FlagInputs = {
-  family: 'straight', biot: 1e-4, mL: 1, effectiveness: 30, hAoverkP: 0.01, tolerance: 0.02,
-  discretizationError: 1e-9, converged: true, energyBalance: 1e-14, measuredOneDDrift: null,
+  family: 'straight',
+  biot: 1e-4,
+  mL: 1,
+  effectiveness: 30,
+  hAoverkP: 0.01,
+  tolerance: 0.02,
+  discretizationError: 1e-9,
+  converged: true,
+  energyBalance: 1e-14,
+  measuredOneDDrift: null,
 };
 const ids = (f: Partial<FlagInputs>): string[] => designFlags({ ...base, ...f }).map((x) => x.flag);
 

@@ -69,7 +69,14 @@ describe('radiation and tabulated conductivity', () => {
     const flat = parseCaseObject({
       name: 'flat table',
       fin: { profile: 'rectangular', length: 1 / m, thickness: 0.002, width: w, edges: 'insulated' },
-      material: { k: { points: [[0, 200], [200, 200]] } },
+      material: {
+        k: {
+          points: [
+            [0, 200],
+            [200, 200],
+          ],
+        },
+      },
       convection: { ambient: 20, h: 10, tip: 'adiabatic' },
       base: { temperature: 70 },
     });

@@ -35,8 +35,12 @@ function annularCase(ratio: number, mLc: number) {
   const m = mLc / (outer - INNER_RADIUS);
   const h = (m * m * K * THICKNESS) / 2;
   return linearFinCase({
-    edges: 'cooled', profile: { kind: 'annular', innerRadius: INNER_RADIUS, outerRadius: outer, thickness: THICKNESS },
-    k: K, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, thetaBase: 70,
+    edges: 'cooled',
+    profile: { kind: 'annular', innerRadius: INNER_RADIUS, outerRadius: outer, thickness: THICKNESS },
+    k: K,
+    h: { kind: 'uniform', h },
+    tip: { kind: 'adiabatic' },
+    thetaBase: 70,
   });
 }
 
@@ -57,19 +61,34 @@ describe.each(CONVECTIVE_TIP)('annular, convective rim, h = $h, r2 = $r2 (exact 
   const thetaBase = 50;
   const run = studyFin1D(
     linearFinCase({
-      edges: 'cooled', profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
-      k: row.k, h: { kind: 'uniform', h: row.h }, tip: { kind: 'convective', h: null }, thetaBase,
+      edges: 'cooled',
+      profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
+      k: row.k,
+      h: { kind: 'uniform', h: row.h },
+      tip: { kind: 'convective', h: null },
+      thetaBase,
     }),
   );
   test('observed order 2 from four grids', () => {
     const cells = [50, 100, 200, 400];
     const fin = linearFinCase({
-      edges: 'cooled', profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
-      k: row.k, h: { kind: 'uniform', h: row.h }, tip: { kind: 'convective', h: null }, thetaBase,
+      edges: 'cooled',
+      profile: { kind: 'annular', innerRadius: row.r1, outerRadius: row.r2, thickness: row.t },
+      k: row.k,
+      h: { kind: 'uniform', h: row.h },
+      tip: { kind: 'convective', h: null },
+      thetaBase,
     });
     const errors = cells.map((n) => solveFin1D(fin, { nodes: n + 1 }).heatRate / (row.qPerK * thetaBase) - 1);
     // Formal order 2; ±0.1 for a fitted slope in the asymptotic range.
-    expect(Math.abs(fitObservedOrder(cells.map((n) => (row.r2 - row.r1) / n), errors).order - 2)).toBeLessThan(0.1);
+    expect(
+      Math.abs(
+        fitObservedOrder(
+          cells.map((n) => (row.r2 - row.r1) / n),
+          errors,
+        ).order - 2,
+      ),
+    ).toBeLessThan(0.1);
   });
   test('heat rate and efficiency', () => {
     // 1e-6: default-grid accuracy target; the extrapolated value within 3e-9 (10-digit table values).
@@ -84,5 +103,12 @@ test('annular: observed order 2 from four grids (r2c/r1 = 3, m(r2c - r1) = 1)', 
   const fin = annularCase(3, 1);
   const errors = cells.map((n) => solveFin1D(fin, { nodes: n + 1 }).efficiency / 0.6463936181 - 1);
   // Formal order 2 of the scheme; ±0.1 for a fitted slope in the asymptotic range.
-  expect(Math.abs(fitObservedOrder(cells.map((n) => 0.02 / n), errors).order - 2)).toBeLessThan(0.1);
+  expect(
+    Math.abs(
+      fitObservedOrder(
+        cells.map((n) => 0.02 / n),
+        errors,
+      ).order - 2,
+    ),
+  ).toBeLessThan(0.1);
 });

@@ -29,8 +29,18 @@ const m = Math.sqrt((H * PERIMETER) / (K * AREA));
 const M = Math.sqrt(H * PERIMETER * K * AREA);
 const profile = { kind: 'rectangular', length: LENGTH, thickness: THICKNESS, width: WIDTH } as const;
 
-describe.each([1e-4, 1.5e-4, 1e-3])('contact resistance R\'\' = %d m^2 K/W (series network)', (resistance) => {
-  const run = studyFin1D(linearFinCase({ edges: 'cooled', profile, k: K, h: { kind: 'uniform', h: H }, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE, contactResistance: resistance }));
+describe.each([1e-4, 1.5e-4, 1e-3])("contact resistance R'' = %d m^2 K/W (series network)", (resistance) => {
+  const run = studyFin1D(
+    linearFinCase({
+      edges: 'cooled',
+      profile,
+      k: K,
+      h: { kind: 'uniform', h: H },
+      tip: { kind: 'adiabatic' },
+      thetaBase: THETA_BASE,
+      contactResistance: resistance,
+    }),
+  );
   const exact = THETA_BASE / (resistance / AREA + 1 / (M * Math.tanh(m * LENGTH)));
   test('heat rate and temperatures', () => {
     // 1e-6 default-grid target; the GCI bounds the true error; energy balance at round-off.
@@ -45,16 +55,33 @@ describe.each([1e-4, 1.5e-4, 1e-3])('contact resistance R\'\' = %d m^2 K/W (seri
     expect(Math.abs(run.result.efficiency / (exact / (H * PERIMETER * LENGTH * THETA_BASE)) - 1)).toBeLessThan(1e-6);
   });
   test('observed order 2 from four grids', () => {
-    const fin = linearFinCase({ edges: 'cooled', profile, k: K, h: { kind: 'uniform', h: H }, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE, contactResistance: resistance });
+    const fin = linearFinCase({
+      edges: 'cooled',
+      profile,
+      k: K,
+      h: { kind: 'uniform', h: H },
+      tip: { kind: 'adiabatic' },
+      thetaBase: THETA_BASE,
+      contactResistance: resistance,
+    });
     const cells = [50, 100, 200, 400];
     const errors = cells.map((n) => solveFin1D(fin, { nodes: n + 1 }).heatRate / exact - 1);
     // Formal order 2; ±0.1 for a fitted slope in the asymptotic range.
-    expect(Math.abs(fitObservedOrder(cells.map((n) => LENGTH / n), errors).order - 2)).toBeLessThan(0.1);
+    expect(
+      Math.abs(
+        fitObservedOrder(
+          cells.map((n) => LENGTH / n),
+          errors,
+        ).order - 2,
+      ),
+    ).toBeLessThan(0.1);
   });
 });
 
 describe.each([0, 10, 120, 400])('convective tip with its own coefficient h_tip = %d W/(m^2 K) (Table 3.4 case A)', (hTip) => {
-  const run = studyFin1D(linearFinCase({ edges: 'cooled', profile, k: K, h: { kind: 'uniform', h: H }, tip: { kind: 'convective', h: hTip }, thetaBase: THETA_BASE }));
+  const run = studyFin1D(
+    linearFinCase({ edges: 'cooled', profile, k: K, h: { kind: 'uniform', h: H }, tip: { kind: 'convective', h: hTip }, thetaBase: THETA_BASE }),
+  );
   const beta = hTip / (m * K);
   const mL = m * LENGTH;
   const exact = (M * THETA_BASE * (Math.sinh(mL) + beta * Math.cosh(mL))) / (Math.cosh(mL) + beta * Math.sinh(mL));
@@ -72,7 +99,9 @@ describe('boundary conditions built from a case', () => {
   test('base: temperature without a contact resistance, contact with one', () => {
     expect(baseBoundary(linearFinCase({ ...base, tip: { kind: 'adiabatic' } }))).toEqual({ kind: 'temperature', theta: THETA_BASE });
     expect(baseBoundary(linearFinCase({ ...base, tip: { kind: 'adiabatic' }, contactResistance: 2e-4 }))).toEqual({
-      kind: 'contact', theta: THETA_BASE, resistance: 2e-4,
+      kind: 'contact',
+      theta: THETA_BASE,
+      resistance: 2e-4,
     });
   });
   test('tip: the four kinds, temperatures as excess over ambient', () => {

@@ -23,7 +23,14 @@ const THETA_BASE = 30;
 function uniformFin(mL: number) {
   const h = (mL * mL * K * T) / (2 * L * L); // per unit width: m^2 = 2h/(kt)
   return {
-    fin: linearFinCase({ profile: { kind: 'rectangular', length: L, thickness: T, width: 1 }, edges: 'insulated', k: K, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE }),
+    fin: linearFinCase({
+      profile: { kind: 'rectangular', length: L, thickness: T, width: 1 },
+      edges: 'insulated',
+      k: K,
+      h: { kind: 'uniform', h },
+      tip: { kind: 'adiabatic' },
+      thetaBase: THETA_BASE,
+    }),
     scale: Math.sqrt(h * 2 * K * T) * THETA_BASE, // sqrt(hPkA) θ_b per metre of width
   };
 }

@@ -81,7 +81,10 @@ describe.each(TRUNCATED_ROWS)('truncated cone τ = $tau, mL = $mL (closed form d
 describe('observed order of the heat rate (default grading)', () => {
   const cells = [100, 200, 400, 800];
   const order = (solve: (nodes: number) => number, eta: number) =>
-    fitObservedOrder(cells.map((n) => L / n), cells.map((n) => solve(n + 1) / eta - 1)).order;
+    fitObservedOrder(
+      cells.map((n) => L / n),
+      cells.map((n) => solve(n + 1) / eta - 1),
+    ).order;
   // Order 2 +- 0.1 from four grids (formal order of the scheme; usual allowance for a fitted slope).
   test.each([0.25, 1, 3])('cone, mL = %d', (mL) => {
     const fin = caseFor({ kind: 'conical-pin', length: L, baseDiameter: BASE_DIAMETER, tipDiameter: 0 }, mL);
@@ -111,6 +114,13 @@ describe('why the convex spine is graded', () => {
     const cells = [400, 800, 1600, 3200];
     const eta = CONVEX_SPINE[0] as number;
     const errors = cells.map((n) => solveFinProblem1D(parabolicSpine(0.5, 0.25), { nodes: n + 1, grading: { kind: 'uniform' } }).efficiency / eta - 1);
-    expect(Math.abs(fitObservedOrder(cells.map((n) => L / n), errors).order - 1.5)).toBeLessThan(0.05);
+    expect(
+      Math.abs(
+        fitObservedOrder(
+          cells.map((n) => L / n),
+          errors,
+        ).order - 1.5,
+      ),
+    ).toBeLessThan(0.05);
   });
 });

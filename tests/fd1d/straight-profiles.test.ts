@@ -51,9 +51,7 @@ const TABLE: Record<StraightKind, number[]> = {
 const finFor = (profile: Profile, mL: number) =>
   linearFinCase({ profile, edges: 'insulated', k: K, h: { kind: 'uniform', h: hFor(mL) }, tip: { kind: 'adiabatic' }, thetaBase: 50 });
 
-const ROWS = (Object.keys(TABLE) as StraightKind[]).flatMap((kind) =>
-  M_L.map((mL, j) => ({ kind, mL, eta: (TABLE[kind] as number[])[j] as number })),
-);
+const ROWS = (Object.keys(TABLE) as StraightKind[]).flatMap((kind) => M_L.map((mL, j) => ({ kind, mL, eta: (TABLE[kind] as number[])[j] as number })));
 
 describe.each(ROWS)('$kind, mL = $mL (Gardner 1945 closed form; profiles.py)', ({ kind, mL, eta }) => {
   test('efficiency', () => expectEfficiency(studyFin1D(finFor(profileOf(kind), mL)), eta));
@@ -81,7 +79,10 @@ function fittedOrder(profile: Profile, mL: number, eta: number, grading?: 'unifo
   const errors = cells.map(
     (n) => solveFin1D(finFor(profile, mL), { nodes: n + 1, ...(grading ? { grading: { kind: grading } } : {}) }).efficiency / eta - 1,
   );
-  return fitObservedOrder(cells.map((n) => L / n), errors).order;
+  return fitObservedOrder(
+    cells.map((n) => L / n),
+    errors,
+  ).order;
 }
 
 describe('observed order of the heat rate (default grading)', () => {

@@ -27,7 +27,14 @@ const hRefFor = (mL: number): number => (mL * mL * K * T) / (2 * L * L);
 beforeAll(loadSpecial);
 
 const finWith = (h: HDistribution) =>
-  linearFinCase({ profile: { kind: 'rectangular', length: L, thickness: T, width: 1 }, edges: 'insulated', k: K, h, tip: { kind: 'adiabatic' }, thetaBase: THETA_BASE });
+  linearFinCase({
+    profile: { kind: 'rectangular', length: L, thickness: T, width: 1 },
+    edges: 'insulated',
+    k: K,
+    h,
+    tip: { kind: 'adiabatic' },
+    thetaBase: THETA_BASE,
+  });
 
 /** Q = q/(kAmθ_b) of NU1 and NU2 for n = 1 (ν = 1/3), from the closed forms in the header. */
 function closedFormQ(oracle: 'NU1' | 'NU2', mL: number): number {
@@ -75,7 +82,14 @@ describe.each(['NU1', 'NU2'] as const)('%s, n = 1, mL = 3 (closed form computed 
     expect(Math.abs(run.study.extrapolated / exact - 1)).toBeLessThan(1e-9); // O(h^3) remainder + Cephes round-off
     const cells = [50, 100, 200, 400];
     const errors = cells.map((n) => solveFin1D(finWith(hOf(oracle, 3)), { nodes: n + 1 }).heatRate / exact - 1);
-    expect(Math.abs(fitObservedOrder(cells.map((n) => L / n), errors).order - 2)).toBeLessThan(0.1); // formal order 2
+    expect(
+      Math.abs(
+        fitObservedOrder(
+          cells.map((n) => L / n),
+          errors,
+        ).order - 2,
+      ),
+    ).toBeLessThan(0.1); // formal order 2
   });
 });
 
@@ -103,7 +117,10 @@ describe('piecewise-linear h (points)', () => {
     const cells = [30, 60, 120, 240, 480];
     const q = cells.map((n) => solveFin1D(finWith(kinked), { nodes: n + 1 }).heatRate);
     const differences = q.slice(1).map((v, i) => v - (q[i] as number));
-    const order = fitObservedOrder(cells.slice(1).map((n) => L / n), differences).order;
+    const order = fitObservedOrder(
+      cells.slice(1).map((n) => L / n),
+      differences,
+    ).order;
     expect(Math.abs(order - 2)).toBeLessThan(0.1); // formal order 2; ±0.1 for a fitted slope
   });
 });

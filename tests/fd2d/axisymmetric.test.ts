@@ -19,7 +19,9 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
     const k = 200;
     const h = (bi * k) / R;
     const L = (mL * R) / Math.sqrt(2 * bi);
-    const s = studyFin2D(finCase({ profile: { kind: 'pin', length: L, diameter: 2 * R }, k: k, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }));
+    const s = studyFin2D(
+      finCase({ profile: { kind: 'pin', length: L, diameter: 2 * R }, k: k, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }),
+    );
     const exact = eta * h * 2 * Math.PI * R * L * THETA_B;
     // Requirement 1e-4 after extrapolation; measured 4e-9 to 1.1e-5. The table has 8 digits (1e-8).
     expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(1e-4);
@@ -38,7 +40,9 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
     const R = 1e-3;
     const k = 200;
     const h = (bi * k) / R;
-    const s = studyFin2D(finCase({ profile: { kind: 'pin', length: 0.05, diameter: 2 * R }, k: k, h: { kind: 'uniform', h }, tip: { kind: 'infinite' }, ...TEMPERATURES_2D }));
+    const s = studyFin2D(
+      finCase({ profile: { kind: 'pin', length: 0.05, diameter: 2 * R }, k: k, h: { kind: 'uniform', h }, tip: { kind: 'infinite' }, ...TEMPERATURES_2D }),
+    );
     const q1d = Math.sqrt(h * 2 * Math.PI * R * k * Math.PI * R * R) * THETA_B;
     const exact = q1d / (1 + errPercent / 100);
     // The table rounds to 0.001 % (5e-6 relative) and the extrapolation is good to ~1e-5.
@@ -64,7 +68,15 @@ describe('annular fin, axisymmetric (r, z), against the 1-D closed form in the t
     const deviation = (bi: number): number => {
       const b = Math.sqrt(bi) / m; // m^2 = h/(k b) = Bi/b^2
       const h = (bi * k) / b;
-      const s = studyFin2D(finCase({ profile: { kind: 'annular', innerRadius: r1, outerRadius: r2, thickness: 2 * b }, k: k, h: { kind: 'uniform', h }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D }));
+      const s = studyFin2D(
+        finCase({
+          profile: { kind: 'annular', innerRadius: r1, outerRadius: r2, thickness: 2 * b },
+          k: k,
+          h: { kind: 'uniform', h },
+          tip: { kind: 'adiabatic' },
+          ...TEMPERATURES_2D,
+        }),
+      );
       expect(s.energyBalance).toBeLessThan(1e-9);
       return (s.efficiency?.extrapolated as number) / eta1d - 1;
     };
@@ -86,7 +98,15 @@ describe('annular fin, axisymmetric (r, z), against the 1-D closed form in the t
     // Exact 1-D annular fin with a convective rim -k theta'(r2) = h theta(r2) (I0/K0 solution): computed
     // reference values (profiles.py annular_convtip), Gardner's (1945) equation
     // with the rim condition. Bi = h t/(2k) = 1.25e-4 and 2.2e-4: the 2-D drop is about Bi/3 = 4e-5 to 7e-5.
-    const s = studyFin2D(finCase({ profile: { kind: 'annular', innerRadius: r1, outerRadius: r2, thickness: t }, k: k, h: { kind: 'uniform', h }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D }));
+    const s = studyFin2D(
+      finCase({
+        profile: { kind: 'annular', innerRadius: r1, outerRadius: r2, thickness: t },
+        k: k,
+        h: { kind: 'uniform', h },
+        tip: { kind: 'convective', h: null },
+        ...TEMPERATURES_2D,
+      }),
+    );
     const dev = s.extrapolatedHeatRate_W / (qPerK * THETA_B) - 1;
     const bi = (h * t) / (2 * k);
     expect(dev).toBeLessThan(0);

@@ -15,7 +15,14 @@ import { finCase } from '../support/fin-case.js';
 // about Bi/6 to Bi/3 (small-Bi expansion of the exact 2-D series): 1.4e-5 to 2.8e-5.
 const R2 = { k: 237, h: 40, t: 0.001, L: 0.025, thetaB: 50 };
 const r2Case = (tip: TipCondition, contactResistance = 0) =>
-  finCase({ profile: { kind: 'rectangular', length: R2.L, thickness: R2.t, width: 1 }, k: R2.k, h: { kind: 'uniform', h: R2.h }, tip: tip, contactResistance: contactResistance, ...TEMPERATURES_2D });
+  finCase({
+    profile: { kind: 'rectangular', length: R2.L, thickness: R2.t, width: 1 },
+    k: R2.k,
+    h: { kind: 'uniform', h: R2.h },
+    tip: tip,
+    contactResistance: contactResistance,
+    ...TEMPERATURES_2D,
+  });
 
 describe('tip and base conditions on a thin plate (case R2), against the exact 1-D fin', () => {
   it.each([
@@ -67,7 +74,13 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
     const hb = (1e-4 * k) / b;
     const m = Math.sqrt(hb / (k * b));
     const L = 1 / m;
-    const c = finCase({ profile: { kind: 'rectangular', length: L, thickness: 2 * b, width: 1 }, k: k, h: { kind: 'linear', base: hb, tip: 0 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
+    const c = finCase({
+      profile: { kind: 'rectangular', length: L, thickness: 2 * b, width: 1 },
+      k: k,
+      h: { kind: 'linear', base: hb, tip: 0 },
+      tip: { kind: 'adiabatic' },
+      ...TEMPERATURES_2D,
+    });
     const s = studyFin2D(c);
     const exact = 0.4555445261 * k * (2 * b) * m * THETA_B;
     // 1e-4: the 2-D drop of order Bi = 1e-4 times a fraction; extrapolation error ~1e-8.
@@ -79,7 +92,13 @@ describe('tip and base conditions on a thin plate (case R2), against the exact 1
 describe('symmetry', () => {
   it('a plate held at the base temperature at both ends is mirror-symmetric about its middle', () => {
     // Physical symmetry of the problem; on a uniform grid the scheme must keep it to round-off.
-    const c = finCase({ profile: { kind: 'rectangular', length: 0.01, thickness: 0.004, width: 1 }, k: 20, h: { kind: 'uniform', h: 2000 }, tip: { kind: 'temperature', T_degC: BASE }, ...TEMPERATURES_2D });
+    const c = finCase({
+      profile: { kind: 'rectangular', length: 0.01, thickness: 0.004, width: 1 },
+      k: 20,
+      h: { kind: 'uniform', h: 2000 },
+      tip: { kind: 'temperature', T_degC: BASE },
+      ...TEMPERATURES_2D,
+    });
     const r = solveFin2D(c, { nx: 41, ny: 9, baseGrading: 1, faceGrading: 1 });
     const { nodesX: nx, nodesY: ny } = r.grid;
     for (let i = 0; i < nx; i++) {
@@ -135,7 +154,13 @@ describe.each(profiles)('maximum principle and energy balance: %s', (_, profile)
 
 describe('the 2-D field for images', () => {
   it('is exposed as ndarray views sharing the result arrays', () => {
-    const c = finCase({ profile: { kind: 'trapezoidal', length: 0.02, baseThickness: 0.004, tipThickness: 0.002, width: 0.1 }, k: 50, h: { kind: 'uniform', h: 500 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
+    const c = finCase({
+      profile: { kind: 'trapezoidal', length: 0.02, baseThickness: 0.004, tipThickness: 0.002, width: 0.1 },
+      k: 50,
+      h: { kind: 'uniform', h: 500 },
+      tip: { kind: 'adiabatic' },
+      ...TEMPERATURES_2D,
+    });
     const r = solveFin2D(c, { nx: 21, ny: 7 });
     const v = fieldViews(r);
     expect(v.theta.shape).toEqual([21, 7]);
@@ -149,12 +174,28 @@ describe('the 2-D field for images', () => {
 });
 
 describe('what the 2-D model does not solve', () => {
-  const base = finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, k: 200, h: { kind: 'uniform', h: 50 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
+  const base = finCase({
+    profile: { kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 },
+    k: 200,
+    h: { kind: 'uniform', h: 50 },
+    tip: { kind: 'adiabatic' },
+    ...TEMPERATURES_2D,
+  });
   it.each([
-    ['temperature-dependent k', { ...base, material: { name: 'custom', k: { kind: 'table', T_degC: Float64Array.of(20, 200), k: Float64Array.of(200, 190) }, source: 'test' } }],
+    [
+      'temperature-dependent k',
+      { ...base, material: { name: 'custom', k: { kind: 'table', T_degC: Float64Array.of(20, 200), k: Float64Array.of(200, 190) }, source: 'test' } },
+    ],
     ['power-law h', { ...base, convection: { ...base.convection, h: { kind: 'power', base: 10, exponent: 0.25 } } }],
     ['radiation', { ...base, convection: { ...base.convection, emissivity: 0.9 } }],
-    ['infinite tip on a tapered fin', { ...base, fin: { ...base.fin, profile: { kind: 'triangular', length: 0.02, baseThickness: 0.002, width: 0.05 } }, convection: { ...base.convection, tip: { kind: 'infinite' } } }],
+    [
+      'infinite tip on a tapered fin',
+      {
+        ...base,
+        fin: { ...base.fin, profile: { kind: 'triangular', length: 0.02, baseThickness: 0.002, width: 0.05 } },
+        convection: { ...base.convection, tip: { kind: 'infinite' } },
+      },
+    ],
   ] as [string, Case][])('%s: says why, and solveFin2D refuses with a usage error', (_, c) => {
     expect(fin2dUnsupported(c)).toMatch(/2-D|infinite/);
     expect(() => solveFin2D(c, { nx: 11, ny: 5 })).toThrow(UsageError);
@@ -168,7 +209,13 @@ describe('what the 2-D model does not solve', () => {
 });
 
 describe('grid requests', () => {
-  const c = finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 }, k: 200, h: { kind: 'uniform', h: 50 }, tip: { kind: 'adiabatic' }, ...TEMPERATURES_2D });
+  const c = finCase({
+    profile: { kind: 'rectangular', length: 0.02, thickness: 0.002, width: 0.05 },
+    k: 200,
+    h: { kind: 'uniform', h: 50 },
+    tip: { kind: 'adiabatic' },
+    ...TEMPERATURES_2D,
+  });
   it.each([
     [1, 5],
     [10, 1.5],

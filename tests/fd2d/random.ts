@@ -13,7 +13,12 @@ export function randomSpdStencil(nx: number, ny: number, seed: number, fivePoint
   };
   const a = emptyStencil9(nx, ny);
   const excess = new Float64Array(nx * ny);
-  const offsets: [number, number][] = [[1, 0], [0, 1], [1, 1], [1, -1]];
+  const offsets: [number, number][] = [
+    [1, 0],
+    [0, 1],
+    [1, 1],
+    [1, -1],
+  ];
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
       for (const [di, dj] of offsets) {

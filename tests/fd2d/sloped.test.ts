@@ -16,14 +16,42 @@ const b = 1e-3; // base half-thickness or base radius, m
 // Bessel I/K forms derived in profiles.py (as in Kraus, Aziz & Welty 2001 [from memory]).
 type Row = [name: string, profile: (L: number) => Profile, mL: number, eta: number, area: (L: number) => number, spine: boolean];
 const rows: Row[] = [
-  ['trapezoidal tau = 0.25', (L) => ({ kind: 'trapezoidal', length: L, baseThickness: 2 * b, tipThickness: 0.5 * b, width: 1 }), 1, 0.721468559, (L) => 2 * L, false],
-  ['trapezoidal tau = 0.5', (L) => ({ kind: 'trapezoidal', length: L, baseThickness: 2 * b, tipThickness: b, width: 1 }), 2, 0.4598840083, (L) => 2 * L, false],
-  ['trapezoidal tau = 0.75', (L) => ({ kind: 'trapezoidal', length: L, baseThickness: 2 * b, tipThickness: 1.5 * b, width: 1 }), 0.5, 0.9195561416, (L) => 2 * L, false],
+  [
+    'trapezoidal tau = 0.25',
+    (L) => ({ kind: 'trapezoidal', length: L, baseThickness: 2 * b, tipThickness: 0.5 * b, width: 1 }),
+    1,
+    0.721468559,
+    (L) => 2 * L,
+    false,
+  ],
+  [
+    'trapezoidal tau = 0.5',
+    (L) => ({ kind: 'trapezoidal', length: L, baseThickness: 2 * b, tipThickness: b, width: 1 }),
+    2,
+    0.4598840083,
+    (L) => 2 * L,
+    false,
+  ],
+  [
+    'trapezoidal tau = 0.75',
+    (L) => ({ kind: 'trapezoidal', length: L, baseThickness: 2 * b, tipThickness: 1.5 * b, width: 1 }),
+    0.5,
+    0.9195561416,
+    (L) => 2 * L,
+    false,
+  ],
   ['triangular', (L) => ({ kind: 'triangular', length: L, baseThickness: 2 * b, width: 1 }), 1, 0.697774658, (L) => 2 * L, false],
   ['concave parabolic', (L) => ({ kind: 'parabolic-concave', length: L, baseThickness: 2 * b, width: 1 }), 1, 0.6180339887, (L) => 2 * L, false],
   ['convex parabolic', (L) => ({ kind: 'parabolic-convex', length: L, baseThickness: 2 * b, width: 1 }), 1, 0.7325766848, (L) => 2 * L, false],
   ['cone', (L) => ({ kind: 'conical-pin', length: L, baseDiameter: 2 * b, tipDiameter: 0 }), 1, 0.8662548534, (L) => Math.PI * b * L, true],
-  ['truncated cone tau = 0.5', (L) => ({ kind: 'conical-pin', length: L, baseDiameter: 2 * b, tipDiameter: b }), 1, 0.7958160834, (L) => Math.PI * b * L * 1.5, true],
+  [
+    'truncated cone tau = 0.5',
+    (L) => ({ kind: 'conical-pin', length: L, baseDiameter: 2 * b, tipDiameter: b }),
+    1,
+    0.7958160834,
+    (L) => Math.PI * b * L * 1.5,
+    true,
+  ],
 ];
 
 describe.each(rows)('sloped faces in the thin limit: %s', (_, profile, mL, eta, area, spine) => {
@@ -76,8 +104,26 @@ describe('tabulated profiles', () => {
   it('a tabulated trapezoid (with an extra point on its face) gives the trapezoid', () => {
     const L = 0.02;
     const h = 2000;
-    const trapezoid = finCase({ profile: { kind: 'trapezoidal', length: L, baseThickness: 0.004, tipThickness: 0.001, width: 0.05 }, k: 50, h: { kind: 'uniform', h }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
-    const tabulated = finCase({ profile: { kind: 'tabulated', shape: 'straight', x: Float64Array.of(0, L / 4, L), size: Float64Array.of(0.004, 0.004 - 0.003 / 4, 0.001), width: 0.05 }, k: 50, h: { kind: 'uniform', h }, tip: { kind: 'convective', h: null }, ...TEMPERATURES_2D });
+    const trapezoid = finCase({
+      profile: { kind: 'trapezoidal', length: L, baseThickness: 0.004, tipThickness: 0.001, width: 0.05 },
+      k: 50,
+      h: { kind: 'uniform', h },
+      tip: { kind: 'convective', h: null },
+      ...TEMPERATURES_2D,
+    });
+    const tabulated = finCase({
+      profile: {
+        kind: 'tabulated',
+        shape: 'straight',
+        x: Float64Array.of(0, L / 4, L),
+        size: Float64Array.of(0.004, 0.004 - 0.003 / 4, 0.001),
+        width: 0.05,
+      },
+      k: 50,
+      h: { kind: 'uniform', h },
+      tip: { kind: 'convective', h: null },
+      ...TEMPERATURES_2D,
+    });
     const a = studyFin2D(trapezoid);
     const t = studyFin2D(tabulated);
     // Same geometry, different grid distribution (the table's point is a grid line): the extrapolated

@@ -30,7 +30,8 @@ describe('marching squares on structured grids', () => {
 
   it('f = x on a sheared, tapered (trapezoid) grid: still exactly x = level, spanning the local thickness', () => {
     // Boundary-fitted grid of a trapezoid: x = i h, y = eta * halfThickness(x) with a shear in x.
-    const ni = 41, nj = 9;
+    const ni = 41,
+      nj = 9;
     const g = grid(ni, nj, (i, j) => {
       const eta = -1 + (2 * j) / (nj - 1);
       const x = (i / (ni - 1)) * 30 + 0.4 * eta * (i / (ni - 1));
@@ -77,7 +78,8 @@ describe('marching squares on structured grids', () => {
   });
 
   it('skips cells with a NaN node, and follows strides (a transposed layout gives the same lines)', () => {
-    const ni = 6, nj = 5;
+    const ni = 6,
+      nj = 5;
     const g = grid(ni, nj, (i, j) => [i, j]);
     const f = Float64Array.from(g.x);
     f[2 + 2 * ni] = Number.NaN;
@@ -88,8 +90,13 @@ describe('marching squares on structured grids', () => {
     expect(total).toBeCloseTo(2, 12);
 
     // Same field stored j-fastest (strideI = nj, strideJ = 1).
-    const xT = new Float64Array(ni * nj), yT = new Float64Array(ni * nj);
-    for (let j = 0; j < nj; j++) for (let i = 0; i < ni; i++) { xT[i * nj + j] = i; yT[i * nj + j] = j; }
+    const xT = new Float64Array(ni * nj),
+      yT = new Float64Array(ni * nj);
+    for (let j = 0; j < nj; j++)
+      for (let i = 0; i < ni; i++) {
+        xT[i * nj + j] = i;
+        yT[i * nj + j] = j;
+      }
     const t = contourLines({ ni, nj, offset: 0, strideI: nj, strideJ: 1 }, xT, yT, xT, 3.25);
     expect(t).toHaveLength(1);
     for (const v of t[0]!.x) expect(v).toBeCloseTo(3.25, 12);

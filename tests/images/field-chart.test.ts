@@ -7,14 +7,17 @@ import { colourDistance, decodePng, isDark, isNotWhite, pixel, svgTexts, wellFor
 
 // Invented test field: T = x (a linear field, so iso-line positions are known exactly: T = c on x = c)
 // on a trapezoid section 30 mm long, half-thickness 1.5 mm at the base and 0.5 mm at the tip.
-const ni = 121, nj = 13;
+const ni = 121,
+  nj = 13;
 const halfThickness = (x: number): number => 1.5 - x / 30;
-const gx = new Float64Array(ni * nj), gy = new Float64Array(ni * nj);
-for (let j = 0; j < nj; j++) for (let i = 0; i < ni; i++) {
-  const x = (30 * i) / (ni - 1);
-  gx[i + j * ni] = x;
-  gy[i + j * ni] = (-1 + (2 * j) / (nj - 1)) * halfThickness(x);
-}
+const gx = new Float64Array(ni * nj),
+  gy = new Float64Array(ni * nj);
+for (let j = 0; j < nj; j++)
+  for (let i = 0; i < ni; i++) {
+    const x = (30 * i) / (ni - 1);
+    gx[i + j * ni] = x;
+    gy[i + j * ni] = (-1 + (2 * j) / (nj - 1)) * halfThickness(x);
+  }
 const spec: FieldChartSpec = {
   title: 'Temperature field — case demo',
   xLabel: 'x (mm)',

@@ -5,26 +5,33 @@ import { rasterizeStructuredField } from '../../src/images/field-raster.js';
 const grey = new Uint8Array(256 * 3).map((_, k) => Math.floor(k / 3));
 
 function gridOver(ni: number, nj: number, x0: number, x1: number, y0: number, y1: number) {
-  const px = new Float64Array(ni * nj), py = new Float64Array(ni * nj);
-  for (let j = 0; j < nj; j++) for (let i = 0; i < ni; i++) {
-    px[i + j * ni] = x0 + ((x1 - x0) * i) / (ni - 1);
-    py[i + j * ni] = y0 + ((y1 - y0) * j) / (nj - 1);
-  }
+  const px = new Float64Array(ni * nj),
+    py = new Float64Array(ni * nj);
+  for (let j = 0; j < nj; j++)
+    for (let i = 0; i < ni; i++) {
+      px[i + j * ni] = x0 + ((x1 - x0) * i) / (ni - 1);
+      py[i + j * ni] = y0 + ((y1 - y0) * j) / (nj - 1);
+    }
   return { layout: { ni, nj, offset: 0, strideI: 1, strideJ: ni }, px, py };
 }
 
 describe('structured-grid rasterisation', () => {
-  it.each([[2, 2], [5, 3], [41, 11]])('a %d x %d grid over [10,30] x [10,20] fills exactly its 200 pixel centres, no gaps', (ni, nj) => {
+  it.each([
+    [2, 2],
+    [5, 3],
+    [41, 11],
+  ])('a %d x %d grid over [10,30] x [10,20] fills exactly its 200 pixel centres, no gaps', (ni, nj) => {
     const g = gridOver(ni, nj, 10, 30, 10, 20);
     const values = new Float64Array(ni * nj).fill(1);
     const img = rasterizeStructuredField(g.layout, g.px, g.py, values, 40, 30, { lut: grey, low: 0, high: 2 });
     let filled = 0;
-    for (let y = 0; y < 30; y++) for (let x = 0; x < 40; x++) {
-      const inside = x >= 10 && x < 30 && y >= 10 && y < 20;
-      const alpha = img.data[4 * (y * 40 + x) + 3];
-      expect([x, y, alpha]).toEqual([x, y, inside ? 255 : 0]);
-      if (inside) filled++;
-    }
+    for (let y = 0; y < 30; y++)
+      for (let x = 0; x < 40; x++) {
+        const inside = x >= 10 && x < 30 && y >= 10 && y < 20;
+        const alpha = img.data[4 * (y * 40 + x) + 3];
+        expect([x, y, alpha]).toEqual([x, y, inside ? 255 : 0]);
+        if (inside) filled++;
+      }
     expect(filled).toBe(200);
   });
 

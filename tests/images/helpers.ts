@@ -113,7 +113,14 @@ export function svgTexts(svg: string): string[] {
   const out: string[] = [];
   const re = /<text[^>]*>([^<]*)<\/text>/g;
   for (let m = re.exec(svg); m; m = re.exec(svg)) {
-    out.push((m[1] ?? '').replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&quot;/g, '"').replace(/&apos;/g, "'").replace(/&amp;/g, '&'));
+    out.push(
+      (m[1] ?? '')
+        .replace(/&lt;/g, '<')
+        .replace(/&gt;/g, '>')
+        .replace(/&quot;/g, '"')
+        .replace(/&apos;/g, "'")
+        .replace(/&amp;/g, '&'),
+    );
   }
   return out;
 }

@@ -34,7 +34,15 @@ describe('line chart SVG', () => {
   it('is well-formed XML with the title, axis titles, legend entries and notes as text', () => {
     expect(wellFormednessError(chart.svg)).toBeNull();
     const texts = svgTexts(chart.svg);
-    for (const t of ['Temperature along the fin — case demo', 'Distance from base x (mm)', 'Temperature (°C)', 'fd-1d (reference)', 'flat 60 °C', 'drift +1.0 %', 'tip']) {
+    for (const t of [
+      'Temperature along the fin — case demo',
+      'Distance from base x (mm)',
+      'Temperature (°C)',
+      'fd-1d (reference)',
+      'flat 60 °C',
+      'drift +1.0 %',
+      'tip',
+    ]) {
       expect(texts).toContain(t);
     }
     expect(chart.svg).toContain('font-family="DejaVu Sans, sans-serif"');
@@ -60,7 +68,7 @@ describe('line chart SVG', () => {
       ],
     });
     expect(flux.panels).toHaveLength(2);
-    const [upper, lower] = flux.panels as [typeof flux.panels[0], typeof flux.panels[0]];
+    const [upper, lower] = flux.panels as [(typeof flux.panels)[0], (typeof flux.panels)[0]];
     expect(upper.x).toEqual(lower.x);
     expect(lower.plot.y).toBeGreaterThan(upper.plot.y + upper.plot.height);
     // includeZero: the heat-flow axis starts at 0 or below.
@@ -151,7 +159,8 @@ describe('legend placement', () => {
     // No data point of either series falls inside the box.
     for (const s of spec.panels[0]!.series) {
       for (let k = 0; k < s.x.length; k++) {
-        const px = project(g.x, s.x[k]!), py = project(g.y, s.y[k]!);
+        const px = project(g.x, s.x[k]!),
+          py = project(g.y, s.y[k]!);
         const inside = px > box.x && px < box.x + box.width && py > box.y && py < box.y + box.height;
         expect(inside).toBe(false);
       }

@@ -7,7 +7,8 @@ import { colourDistance, decodePng, hexRgb, isDark, pixel, svgTexts, wellFormedn
 
 // Invented test map: value = x - 3 (so the 0 and ±1 contours are the vertical lines x = 3, 3 ± 1),
 // x linear 1..5, y logarithmic 10..1000; the top-left point has no result (NaN).
-const nx = 9, ny = 9;
+const nx = 9,
+  ny = 9;
 const xs = Float64Array.from({ length: nx }, (_, i) => 1 + (4 * i) / (nx - 1));
 const ys = Float64Array.from({ length: ny }, (_, j) => 10 * 100 ** (j / (ny - 1)));
 const values = new Float64Array(nx * ny);

@@ -19,7 +19,10 @@ describe('embedded PNG rasters', () => {
     expect(chooseRowFilter(alongY)).toBe(1);
   });
 
-  it.each([['along x', alongX], ['along y', alongY]])('round-trips the pixels exactly (%s)', (_, img) => {
+  it.each([
+    ['along x', alongX],
+    ['along y', alongY],
+  ])('round-trips the pixels exactly (%s)', (_, img) => {
     const decoded = decodePng(encodePng(img));
     expect([decoded.width, decoded.height]).toEqual([img.width, img.height]);
     expect(Buffer.compare(decoded.data, Buffer.from(img.data))).toBe(0);

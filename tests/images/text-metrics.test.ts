@@ -21,7 +21,10 @@ function readFont(path: string) {
     if (buf.readUInt16BE(cmap + 4 + 8 * i) === 3 && buf.readUInt16BE(cmap + 6 + 8 * i) === 1) sub = cmap + buf.readUInt32BE(cmap + 8 + 8 * i);
   }
   const segX2 = buf.readUInt16BE(sub + 6);
-  const endO = sub + 14, startO = endO + segX2 + 2, deltaO = startO + segX2, rangeO = deltaO + segX2;
+  const endO = sub + 14,
+    startO = endO + segX2 + 2,
+    deltaO = startO + segX2,
+    rangeO = deltaO + segX2;
   const glyph = (cp: number): number => {
     for (let s = 0; s < segX2 / 2; s++) {
       if (cp > buf.readUInt16BE(endO + 2 * s)) continue;

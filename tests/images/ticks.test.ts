@@ -57,25 +57,26 @@ describe('Heckbert nice numbers', () => {
 
   // Property: over any finite range, ticks are multiples of a round step, cover the range (loose),
   // are evenly spaced, printable exactly with `decimals`, and not too many.
-  test.prop([
-    fc.double({ min: -1e6, max: 1e6, noNaN: true }),
-    fc.double({ min: 1e-6, max: 1e6, noNaN: true }),
-    fc.integer({ min: 2, max: 12 }),
-  ])('loose ticks are round and cover the range', (start, span, target) => {
-    const t = linearTicks(start, start + span, target);
-    expect(isRoundStep(t.step)).toBe(true);
-    const first = t.values[0] as number;
-    const last = t.values[t.values.length - 1] as number;
-    // Covering: 1e-9 of the step allows the rounding of k * step to `decimals` decimals.
-    expect(first).toBeLessThanOrEqual(start + 1e-9 * t.step + Math.abs(start) * 1e-12);
-    expect(last).toBeGreaterThanOrEqual(start + span - 1e-9 * t.step - Math.abs(start + span) * 1e-12);
-    // Heckbert's spacing gives at most about 2.5x the target ticks (5 / 2 between neighbouring nice steps), plus the two ends.
-    expect(t.values.length).toBeLessThanOrEqual(Math.ceil(2.5 * target) + 2);
-    for (let k = 1; k < t.values.length; k++) {
-      expect(Math.abs((t.values[k] as number) - (t.values[k - 1] as number) - t.step)).toBeLessThanOrEqual(1e-6 * t.step + 1e-9 * Math.abs(t.values[k] as number));
-    }
-    for (const v of t.values) expect(Number(formatTick(v, t.decimals).replace('\u2212', '-'))).toBeCloseTo(v, t.decimals);
-  });
+  test.prop([fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.double({ min: 1e-6, max: 1e6, noNaN: true }), fc.integer({ min: 2, max: 12 })])(
+    'loose ticks are round and cover the range',
+    (start, span, target) => {
+      const t = linearTicks(start, start + span, target);
+      expect(isRoundStep(t.step)).toBe(true);
+      const first = t.values[0] as number;
+      const last = t.values[t.values.length - 1] as number;
+      // Covering: 1e-9 of the step allows the rounding of k * step to `decimals` decimals.
+      expect(first).toBeLessThanOrEqual(start + 1e-9 * t.step + Math.abs(start) * 1e-12);
+      expect(last).toBeGreaterThanOrEqual(start + span - 1e-9 * t.step - Math.abs(start + span) * 1e-12);
+      // Heckbert's spacing gives at most about 2.5x the target ticks (5 / 2 between neighbouring nice steps), plus the two ends.
+      expect(t.values.length).toBeLessThanOrEqual(Math.ceil(2.5 * target) + 2);
+      for (let k = 1; k < t.values.length; k++) {
+        expect(Math.abs((t.values[k] as number) - (t.values[k - 1] as number) - t.step)).toBeLessThanOrEqual(
+          1e-6 * t.step + 1e-9 * Math.abs(t.values[k] as number),
+        );
+      }
+      for (const v of t.values) expect(Number(formatTick(v, t.decimals).replace('\u2212', '-'))).toBeCloseTo(v, t.decimals);
+    },
+  );
 
   test.prop([fc.double({ min: 1e-4, max: 1e4, noNaN: true }), fc.double({ min: 1.01, max: 1e5, noNaN: true })])(
     'log ticks: majors are 1, 2 or 5 x 10^k inside a domain covering the data, at least two of them',

@@ -28,7 +28,7 @@ describe('axis units and the case value in them', () => {
     expect(a.caseValue).toBeCloseTo(2 / 25.4, 14);
   });
 
-  it('a unit on TO alone applies to FROM too; TO in another unit is converted to FROM\'s', () => {
+  it("a unit on TO alone applies to FROM too; TO in another unit is converted to FROM's", () => {
     expect(Array.from(axis('fin.thickness=1:3 mm', 3).values)).toEqual([1, 2, 3]);
     const mixed = axis('fin.thickness=1 mm:0.2 in', 2);
     expect(mixed.unit).toBe('mm');
@@ -81,7 +81,7 @@ describe('what is refused before the run (UsageError naming the option)', () => 
     ['units of the wrong kind', 'fin.thickness=1 W:2 W', /--x: fin\.thickness takes a length; "W" is a power, not a length/],
     ['an unknown unit', 'convection.h=1 furlong:2 furlong', /--x: convection\.h takes a heat-transfer coefficient; unit "furlong" is not known/],
     ['FROM == TO', 'fin.thickness=2 mm:2 mm', /--x: fin\.thickness: FROM and TO are the same/],
-    ['an end outside the key\'s range', 'fin.thickness=-1:2 mm', /--x: fin\.thickness = -1 mm is outside its range: a length > 0/],
+    ["an end outside the key's range", 'fin.thickness=-1:2 mm', /--x: fin\.thickness = -1 mm is outside its range: a length > 0/],
     ['not a number', 'fin.thickness=thin:thick', /--x: fin\.thickness: got "thin"; expected a number/],
   ])('%s', (_name, spec, message) => {
     expect(() => axis(spec)).toThrow(UsageError);
@@ -94,8 +94,8 @@ describe('what is refused before the run (UsageError naming the option)', () => 
 
   it('a distribution, not a single value', () => {
     const t = text.replace('h: 45 W/(m^2*K)', 'h: { base: 60, tip: 20 }');
-    expect(() => parseMapAxis({ option: '--y', text: 'convection.h=10:100', steps: 3, log: false }, readDocument(t, 'd.yaml').raw, parseCaseText(t, 'd.yaml'))).toThrow(
-      /--y: convection\.h is not a single value in this case \(it is a mapping\); map one of its values instead, e\.g\. convection\.h\.base/,
-    );
+    expect(() =>
+      parseMapAxis({ option: '--y', text: 'convection.h=10:100', steps: 3, log: false }, readDocument(t, 'd.yaml').raw, parseCaseText(t, 'd.yaml')),
+    ).toThrow(/--y: convection\.h is not a single value in this case \(it is a mapping\); map one of its values instead, e\.g\. convection\.h\.base/);
   });
 });

@@ -78,7 +78,13 @@ describe.each([
     // The mark is a black disc 14 px across with a white disc 6 px across on top (map-chart.ts); the centre pixel is
     // white and a pixel 5 px off centre is black, to within anti-aliasing.
     expect(Math.min(...rgbAt(img, x, y))).toBeGreaterThan(230);
-    for (const [dx, dy] of [[5, 0], [-5, 0], [0, 5], [0, -5]] as const) expect(Math.max(...rgbAt(img, x + dx, y + dy))).toBeLessThan(60);
+    for (const [dx, dy] of [
+      [5, 0],
+      [-5, 0],
+      [0, 5],
+      [0, -5],
+    ] as const)
+      expect(Math.max(...rgbAt(img, x + dx, y + dy))).toBeLessThan(60);
   });
 
   it('draws the -2 % tolerance contour where the data cross it, and no line where they cross an undrawn level', () => {
@@ -96,7 +102,14 @@ describe.each([
 describe('overview PNG', () => {
   it('decodes and outlines the region where tanh-L is ok along the same -2 % crossing', async () => {
     const file = caseFile('charts-overview.yaml', text);
-    const run = await mapInProcess(file, { x: 'fin.length=30:130 mm', y: 'fin.thickness=2:12 mm', logX: false, logY: false, steps: [21, 11], reference: '1d' });
+    const run = await mapInProcess(file, {
+      x: 'fin.length=30:130 mm',
+      y: 'fin.thickness=2:12 mm',
+      logX: false,
+      logY: false,
+      steps: [21, 11],
+      reference: '1d',
+    });
     const overview = overviewChart(run);
     const img = decodePng(await svgToPng(overview.svg));
     expect([img.width, img.height]).toEqual([1200, 750]);

@@ -29,8 +29,10 @@ describe('fincheck map writes its files', () => {
     expect(r.stderr).toBe('');
     const shortcuts = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form'];
     expect(readdirSync(out).sort()).toEqual(['map.csv', 'map.json', ...shortcuts.map((m) => `map-${m}.png`), 'overview.png'].sort());
-    // eslint-disable-next-line no-regex-spaces -- the summary's two-space indentation, as printed
-    expect(r.stdout).toMatch(/^Map of cli plate\n  x: fin\.thickness from 1 mm to 4 mm, 5 values\n  y: convection\.h from 20 W\/\(m\^2\*K\) to 400 W\/\(m\^2\*K\), 4 values \(log spacing\)/);
+    expect(r.stdout).toMatch(
+      // eslint-disable-next-line no-regex-spaces -- the summary's two-space indentation, as printed
+      /^Map of cli plate\n  x: fin\.thickness from 1 mm to 4 mm, 5 values\n  y: convection\.h from 20 W\/\(m\^2\*K\) to 400 W\/\(m\^2\*K\), 4 values \(log spacing\)/,
+    );
     expect(r.stdout).toContain('reference fd-1d');
     for (const m of shortcuts) expect(r.stdout).toMatch(new RegExp(`\\n${m.replace(/-/g, '\\-')} +\\d`));
     expect(r.stdout).toContain(join(out, 'overview.png'));
@@ -39,7 +41,22 @@ describe('fincheck map writes its files', () => {
 
   it('--format svg writes SVG images; --models limits the maps; --json prints exactly one JSON document', async () => {
     const out = join(tmp, 'cli-svg');
-    const r = await cli('map', file, ...grid, '--steps', '3x3', '--jobs', '1', '--out', out, '--format', 'svg', '--models', 'tanh-Lc,convective-tip', '--json');
+    const r = await cli(
+      'map',
+      file,
+      ...grid,
+      '--steps',
+      '3x3',
+      '--jobs',
+      '1',
+      '--out',
+      out,
+      '--format',
+      'svg',
+      '--models',
+      'tanh-Lc,convective-tip',
+      '--json',
+    );
     expect(r.code, r.stderr).toBe(0);
     expect(readdirSync(out).sort()).toEqual(['map-convective-tip.svg', 'map-tanh-Lc.svg', 'map.csv', 'map.json', 'overview.svg']);
     expect(readFileSync(join(out, 'overview.svg'), 'utf8')).toMatch(/^<svg [^>]*>[\s\S]*<\/svg>\n$/);

@@ -42,12 +42,16 @@ describe('the built map command', () => {
 
   it('SIGINT ends a long map with exit 130, a message on stderr and no file or folder', async () => {
     const out = join(tmp, 'dist-interrupted');
-    const child = spawn(process.execPath, [bin, 'map', file, ...grid, '--steps', '200x200', '--jobs', '2', '--out', out], { stdio: ['ignore', 'pipe', 'pipe'] });
+    const child = spawn(process.execPath, [bin, 'map', file, ...grid, '--steps', '200x200', '--jobs', '2', '--out', out], {
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     let stdout = '';
     let stderr = '';
     child.stdout.on('data', (d: Buffer) => (stdout += d.toString()));
     child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
-    const ended = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) => child.on('exit', (code, signal) => resolve({ code, signal })));
+    const ended = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+      child.on('exit', (code, signal) => resolve({ code, signal })),
+    );
     // 40 000 points take well over a minute; 3 s is enough for the command to start and listen for SIGINT (a SIGINT
     // before that kills the process by the default action: signal SIGINT, no exit code, and this test fails).
     await new Promise((resolve) => setTimeout(resolve, 3000));

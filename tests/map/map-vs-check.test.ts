@@ -21,14 +21,23 @@ interface MapJson {
   x: { key: string; unit: string; values: number[] };
   y: { key: string; unit: string; values: number[] };
   models: string[];
-  summary: { points: number; solved: number; errors: number; errorGroups: { example: string; count: number }[]; references: { model: string; points: number }[] };
-  points: ({ x: number; y: number; error: string } | {
-    x: number;
-    y: number;
-    biot: number;
-    reference: CheckJson['reference'];
-    models: CheckJson['models'];
-  })[];
+  summary: {
+    points: number;
+    solved: number;
+    errors: number;
+    errorGroups: { example: string; count: number }[];
+    references: { model: string; points: number }[];
+  };
+  points: (
+    | { x: number; y: number; error: string }
+    | {
+        x: number;
+        y: number;
+        biot: number;
+        reference: CheckJson['reference'];
+        models: CheckJson['models'];
+      }
+  )[];
 }
 
 const plateFin = (thickness: string, h: string): string => `name: map check plate
@@ -55,7 +64,24 @@ describe('map points equal fincheck check on the same parameters', () => {
   it('plate fin over thickness (mm) and h (log axis): every point, every number', async () => {
     const file = caseFile('plate.yaml', plateFin('2 mm', '40 W/(m^2*K)'));
     const out = join(tmp, 'plate-out');
-    const r = await cli('map', file, '--x', 'fin.thickness=1:4 mm', '--y', 'convection.h=20:400 W/(m^2*K)', '--log-y', '--steps', '4x3', '--reference', '1d', '--jobs', '1', '--json', '--out', out);
+    const r = await cli(
+      'map',
+      file,
+      '--x',
+      'fin.thickness=1:4 mm',
+      '--y',
+      'convection.h=20:400 W/(m^2*K)',
+      '--log-y',
+      '--steps',
+      '4x3',
+      '--reference',
+      '1d',
+      '--jobs',
+      '1',
+      '--json',
+      '--out',
+      out,
+    );
     expect(r.code, r.stderr).toBe(0);
     const map = JSON.parse(r.stdout) as MapJson;
     expect(map.x).toMatchObject({ key: 'fin.thickness', unit: 'mm', values: [1, 2, 3, 4] });
@@ -92,7 +118,21 @@ describe('map points equal fincheck check on the same parameters', () => {
 
   it('with the default reference (fd-2d where the case allows, fd-1d shown beside it) the numbers equal check', async () => {
     const file = caseFile('plate2d.yaml', plateFin('2 mm', '40 W/(m^2*K)'));
-    const r = await cli('map', file, '--x', 'fin.thickness=2:6 mm', '--y', 'convection.h=200:2000 W/(m^2*K)', '--steps', '2x2', '--jobs', '1', '--json', '--out', join(tmp, 'plate2d-out'));
+    const r = await cli(
+      'map',
+      file,
+      '--x',
+      'fin.thickness=2:6 mm',
+      '--y',
+      'convection.h=200:2000 W/(m^2*K)',
+      '--steps',
+      '2x2',
+      '--jobs',
+      '1',
+      '--json',
+      '--out',
+      join(tmp, 'plate2d-out'),
+    );
     expect(r.code, r.stderr).toBe(0);
     const map = JSON.parse(r.stdout) as MapJson;
     // fd-2d once the 2-D reference is wired into check; fd-1d is mapped as a model exactly when it is not the reference.
@@ -113,7 +153,23 @@ describe('map points equal fincheck check on the same parameters', () => {
 
   it('material.k over a built-in material: each point is the case with material: { k: value }', async () => {
     const named = caseFile('named.yaml', taperedFin('3 mm', '1 mm'));
-    const r = await cli('map', named, '--x', 'material.k=50:200 W/(m*K)', '--y', 'convection.h=20:80', '--steps', '2x2', '--reference', '1d', '--jobs', '1', '--json', '--out', join(tmp, 'named-out'));
+    const r = await cli(
+      'map',
+      named,
+      '--x',
+      'material.k=50:200 W/(m*K)',
+      '--y',
+      'convection.h=20:80',
+      '--steps',
+      '2x2',
+      '--reference',
+      '1d',
+      '--jobs',
+      '1',
+      '--json',
+      '--out',
+      join(tmp, 'named-out'),
+    );
     expect(r.code, r.stderr).toBe(0);
     const map = JSON.parse(r.stdout) as MapJson;
     for (const p of map.points) {
@@ -128,12 +184,32 @@ describe('map points equal fincheck check on the same parameters', () => {
   it('a point where the case becomes invalid (tip thicker than base) is a marked cell, counted; the others equal check', async () => {
     const file = caseFile('taper.yaml', taperedFin('3 mm', '1 mm'));
     const out = join(tmp, 'taper-out');
-    const r = await cli('map', file, '--x', 'fin.tipThickness=0.5mm:2.5mm', '--y', 'fin.baseThickness=1mm:3mm', '--steps', '3x3', '--reference', '1d', '--jobs', '1', '--json', '--out', out);
+    const r = await cli(
+      'map',
+      file,
+      '--x',
+      'fin.tipThickness=0.5mm:2.5mm',
+      '--y',
+      'fin.baseThickness=1mm:3mm',
+      '--steps',
+      '3x3',
+      '--reference',
+      '1d',
+      '--jobs',
+      '1',
+      '--json',
+      '--out',
+      out,
+    );
     expect(r.code, r.stderr).toBe(0);
     const map = JSON.parse(r.stdout) as MapJson;
     // tip 0.5/1.5/2.5 mm against base 1/2/3 mm: tip > base at (1.5, 1), (2.5, 1) and (2.5, 2).
     const invalid = map.points.filter((p) => 'error' in p).map((p) => [p.x, p.y]);
-    expect(invalid).toEqual([[1.5, 1], [2.5, 1], [2.5, 2]]);
+    expect(invalid).toEqual([
+      [1.5, 1],
+      [2.5, 1],
+      [2.5, 2],
+    ]);
     expect(map.summary).toMatchObject({ points: 9, solved: 6, errors: 3, references: [{ model: 'fd-1d', points: 6 }] });
     expect(map.summary.errorGroups).toHaveLength(1);
     expect(map.summary.errorGroups[0]?.count).toBe(3);
@@ -166,14 +242,33 @@ convection: { ambient: 25 degC, h: { law: power, base: ${base}, exponent: 0.25 }
 base: { temperature: 75 degC }
 `;
     const file = caseFile('natural.yaml', text('40 mm', '6'));
-    const r = await cli('map', file, '--x', 'fin.length=20:60 mm', '--y', 'convection.h.base=4:8', '--steps', '2x2', '--reference', '1d', '--jobs', '1', '--json', '--out', join(tmp, 'natural-out'));
+    const r = await cli(
+      'map',
+      file,
+      '--x',
+      'fin.length=20:60 mm',
+      '--y',
+      'convection.h.base=4:8',
+      '--steps',
+      '2x2',
+      '--reference',
+      '1d',
+      '--jobs',
+      '1',
+      '--json',
+      '--out',
+      join(tmp, 'natural-out'),
+    );
     expect(r.code, r.stderr).toBe(0);
     const map = JSON.parse(r.stdout) as MapJson & { shortcutGuess: string | null };
     expect(map.shortcutGuess).toBe('base');
     expect(new Set(map.models).size).toBe(map.models.length);
     const p = map.points[3]!;
     if ('error' in p) throw new Error(p.error);
-    const check = (await checkJson('natural-60.yaml', text('60 mm', '8'))) as unknown as { reference: CheckJson['reference']; models: (CheckJson['models'][number] & { guess?: string })[] };
+    const check = (await checkJson('natural-60.yaml', text('60 mm', '8'))) as unknown as {
+      reference: CheckJson['reference'];
+      models: (CheckJson['models'][number] & { guess?: string })[];
+    };
     expect(p.reference.heatRate_W).toBe(check.reference.heatRate_W);
     const tanhL = check.models.find((m) => m.model === 'tanh-L' && m.guess === 'base')!;
     expect(p.models.find((m) => m.model === 'tanh-L')!.drift).toBe(tanhL.drift);

@@ -41,7 +41,14 @@ describe('overview and map charts of a 1-D map', () => {
   let overview: OverviewChart;
   beforeAll(async () => {
     const file = caseFile('overview-panels.yaml', text);
-    run = await mapInProcess(file, { x: 'fin.thickness=1:6 mm', y: 'convection.h=20:400 W/(m^2*K)', logX: false, logY: true, steps: [9, 7], reference: '1d' });
+    run = await mapInProcess(file, {
+      x: 'fin.thickness=1:6 mm',
+      y: 'convection.h=20:400 W/(m^2*K)',
+      logX: false,
+      logY: true,
+      steps: [9, 7],
+      reference: '1d',
+    });
     overview = overviewChart(run);
   });
 
@@ -56,7 +63,11 @@ describe('overview and map charts of a 1-D map', () => {
       expect(p.plot.x + p.plot.width).toBeLessThanOrEqual(1200);
       expect(p.plot.y + p.plot.height).toBeLessThanOrEqual(750);
       for (const q of overview.panels.slice(a + 1)) {
-        const apart = p.plot.x + p.plot.width < q.plot.x || q.plot.x + q.plot.width < p.plot.x || p.plot.y + p.plot.height < q.plot.y || q.plot.y + q.plot.height < p.plot.y;
+        const apart =
+          p.plot.x + p.plot.width < q.plot.x ||
+          q.plot.x + q.plot.width < p.plot.x ||
+          p.plot.y + p.plot.height < q.plot.y ||
+          q.plot.y + q.plot.height < p.plot.y;
         expect(apart).toBe(true);
       }
     }

@@ -31,7 +31,15 @@ describe('fincheck map into a folder an earlier map wrote', () => {
     expect(readdirSync(out)).toContain('map-tanh-Lc-thin.png');
     const second = await cli('map', file, ...grid, '--models', 'tanh-L,convective-tip', '--format', 'svg', '--out', out);
     expect(second.code, second.stderr).toBe(0);
-    expect(readdirSync(out).sort()).toEqual(['map-convective-tip.svg', 'map-mine.png', 'map-tanh-L.svg', 'map.csv', 'map.json', 'notes.txt', 'overview.svg']);
+    expect(readdirSync(out).sort()).toEqual([
+      'map-convective-tip.svg',
+      'map-mine.png',
+      'map-tanh-L.svg',
+      'map.csv',
+      'map.json',
+      'notes.txt',
+      'overview.svg',
+    ]);
     const json = JSON.parse(readFileSync(join(out, 'map.json'), 'utf8')) as { files: string[] };
     expect(json.files.sort()).toEqual(['map-convective-tip.svg', 'map-tanh-L.svg', 'map.csv', 'map.json', 'overview.svg']);
   });

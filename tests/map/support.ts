@@ -14,7 +14,10 @@ export function caseFile(name: string, text: string): string {
 }
 
 /** Runs a map in this thread (--jobs 1) through the library API. */
-export async function mapInProcess(file: string, request: Omit<MapRequest, 'caseText' | 'fileName' | 'tolerance' | 'reference'> & Partial<MapRequest>): Promise<MapRun> {
+export async function mapInProcess(
+  file: string,
+  request: Omit<MapRequest, 'caseText' | 'fileName' | 'tolerance' | 'reference'> & Partial<MapRequest>,
+): Promise<MapRun> {
   const prepared = await prepareMap({
     caseText: readFileSync(file, 'utf8'),
     fileName: file,

@@ -8,12 +8,7 @@
  * against the computed reference values of nonlinear.py (mpmath; tests/analytic/nonlinear.test.ts).
  */
 import { describe, expect, test } from 'vitest';
-import {
-  linearConductivityAdiabaticFin,
-  powerLawHAdiabaticFin,
-  radiatingAdiabaticFin,
-  radiatingInfiniteFin,
-} from '../../src/analytic/nonlinear.js';
+import { linearConductivityAdiabaticFin, powerLawHAdiabaticFin, radiatingAdiabaticFin, radiatingInfiniteFin } from '../../src/analytic/nonlinear.js';
 import { studyNonlinearFin1D } from '../../src/fd/one-d/nonlinear-solve.js';
 import { KELVIN, pinFin, plateFin, type UniformFin } from './support/cases.js';
 import { AMBIENT_DEGC, constantK, finCase, relative } from '../support/fin-case.js';
@@ -44,7 +39,13 @@ describe.each(FINS.flatMap(({ fin, k }) => [0.25, 1 / 3, 2].map((n) => ({ fin, k
       const m = Math.sqrt((hBase * fin.P) / (k * fin.A));
       const L = 3 / m;
       const oracle = powerLawHAdiabaticFin({ hBase, n, k, P: fin.P, A: fin.A, thetaBase, L });
-      const c = finCase({ profile: fin.profile(L), k: constantK(k), h: { kind: 'power', base: hBase, exponent: n }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + thetaBase });
+      const c = finCase({
+        profile: fin.profile(L),
+        k: constantK(k),
+        h: { kind: 'power', base: hBase, exponent: n },
+        tip: { kind: 'adiabatic' },
+        base_degC: AMBIENT_DEGC + thetaBase,
+      });
       const { result, study } = studyNonlinearFin1D(c);
       expectOracle(result, study, oracle.heatRate);
       // Nodal error ~1e-7 θ_b at mL = 3 on 4000 cells; 1e-6 θ_b.

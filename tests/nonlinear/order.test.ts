@@ -25,12 +25,24 @@ const K_SCALE = Math.sqrt(25 * plateFin.P * 100 * plateFin.A) * 50;
 const ORACLES: { id: string; c: Case; q: number }[] = [
   {
     id: 'power-law h, n = 1/3, mL = 1, adiabatic tip (Sen & Trinh 1986; nonlinear.py: Q = 0.7183075317)',
-    c: finCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 1 / 3 }, tip: { kind: 'adiabatic' }, base_degC: AMBIENT_DEGC + 60 }),
+    c: finCase({
+      profile: plateFin.profile(1 / M),
+      k: constantK(200),
+      h: { kind: 'power', base: 10, exponent: 1 / 3 },
+      tip: { kind: 'adiabatic' },
+      base_degC: AMBIENT_DEGC + 60,
+    }),
     q: 0.7183075317 * POWER_SCALE,
   },
   {
     id: 'power-law h, n = 2, infinite fin cut at mL = 1 (Sen & Trinh 1986; nonlinear.py: Q = 0.707106781187)',
-    c: finCase({ profile: plateFin.profile(1 / M), k: constantK(200), h: { kind: 'power', base: 10, exponent: 2 }, tip: { kind: 'infinite' }, base_degC: AMBIENT_DEGC + 60 }),
+    c: finCase({
+      profile: plateFin.profile(1 / M),
+      k: constantK(200),
+      h: { kind: 'power', base: 10, exponent: 2 },
+      tip: { kind: 'infinite' },
+      base_degC: AMBIENT_DEGC + 60,
+    }),
     q: 0.707106781187 * POWER_SCALE,
   },
   {
@@ -45,7 +57,7 @@ const ORACLES: { id: string; c: Case; q: number }[] = [
     q: 1.097974842 * K_SCALE,
   },
   {
-    id: 'radiation, T_b = 600 K, T_s = 300 K, L = 0.2 m (Bartas & Sellers 1960; nonlinear.py: q\' = 919.229832 W/m)',
+    id: "radiation, T_b = 600 K, T_s = 300 K, L = 0.2 m (Bartas & Sellers 1960; nonlinear.py: q' = 919.229832 W/m)",
     c: finCase({
       profile: plateFin.profile(0.2),
       k: constantK(180),
@@ -64,7 +76,10 @@ const CELLS = [50, 100, 200, 400];
 describe.each(ORACLES)('observed order: $id', ({ c, q }) => {
   test('slope of log|error| over 50..400 cells is 2 within 0.1', () => {
     const errors = CELLS.map((cells) => relative(solveNonlinearFin1D(c, { nodes: cells + 1 }).heatRate, q));
-    const { order } = fitObservedOrder(CELLS.map((n) => 1 / n), errors);
+    const { order } = fitObservedOrder(
+      CELLS.map((n) => 1 / n),
+      errors,
+    );
     expect(Math.abs(order - 2)).toBeLessThan(0.1);
   });
 });

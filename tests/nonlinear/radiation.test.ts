@@ -18,9 +18,33 @@ import { constantK, finCase, relative } from '../support/fin-case.js';
 
 /** Computed reference values (nonlinear.py): T_b, T_s (K), q'_inf, then for L = 0.05 and 0.2 m: T_tip (K), q' (W/m). */
 const TABLE: { Tb: number; Ts: number; infinite: number; rows: { L: number; tip: number; q: number }[] }[] = [
-  { Tb: 400, Ts: 0, infinite: 387.9478463, rows: [{ L: 0.05, tip: 391.5497438, q: 123.4494703 }, { L: 0.2, tip: 325.919814, q: 310.5687159 }] },
-  { Tb: 400, Ts: 250, infinite: 305.1081619, rows: [{ L: 0.05, tip: 392.8412605, q: 104.590532 }, { L: 0.2, tip: 338.570427, q: 259.7736084 }] },
-  { Tb: 600, Ts: 300, infinite: 963.6363583, rows: [{ L: 0.05, tip: 565.2043868, q: 523.8427201 }, { L: 0.2, tip: 419.21103, q: 919.229832 }] },
+  {
+    Tb: 400,
+    Ts: 0,
+    infinite: 387.9478463,
+    rows: [
+      { L: 0.05, tip: 391.5497438, q: 123.4494703 },
+      { L: 0.2, tip: 325.919814, q: 310.5687159 },
+    ],
+  },
+  {
+    Tb: 400,
+    Ts: 250,
+    infinite: 305.1081619,
+    rows: [
+      { L: 0.05, tip: 392.8412605, q: 104.590532 },
+      { L: 0.2, tip: 338.570427, q: 259.7736084 },
+    ],
+  },
+  {
+    Tb: 600,
+    Ts: 300,
+    infinite: 963.6363583,
+    rows: [
+      { L: 0.05, tip: 565.2043868, q: 523.8427201 },
+      { L: 0.2, tip: 419.21103, q: 919.229832 },
+    ],
+  },
 ];
 
 /** The fluid temperature only sets θ = T - T_amb here (h = 0); any value works. */

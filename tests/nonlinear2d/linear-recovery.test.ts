@@ -28,14 +28,48 @@ const linear = (profile: Profile, h: HDistribution, tip: TipCondition, contactRe
   finCase({ profile, k: constantK(50), h, tip, base_degC: BASE_DEGC, contactResistance });
 
 const CASES: [string, Case][] = [
-  ['plate, convective tip', linear({ kind: 'rectangular', length: 0.04, thickness: 0.003, width: 0.1 }, { kind: 'uniform', h: 80 }, { kind: 'convective', h: null })],
-  ['plate, linear h, own tip h, contact', linear({ kind: 'rectangular', length: 0.04, thickness: 0.003, width: 0.1 }, { kind: 'linear', base: 80, tip: 30 }, { kind: 'convective', h: 150 }, 2e-4)],
-  ['trapezoid, fixed tip temperature', linear({ kind: 'trapezoidal', length: 0.03, baseThickness: 0.004, tipThickness: 0.001, width: 0.1 }, { kind: 'uniform', h: 60 }, { kind: 'temperature', T_degC: 40 })],
-  ['triangle (sharp tip)', linear({ kind: 'triangular', length: 0.03, baseThickness: 0.004, width: 0.1 }, { kind: 'uniform', h: 60 }, { kind: 'adiabatic' })],
-  ['parabolic concave (cusped tip)', linear({ kind: 'parabolic-concave', length: 0.03, baseThickness: 0.004, width: 0.1 }, { kind: 'uniform', h: 60 }, { kind: 'adiabatic' })],
+  [
+    'plate, convective tip',
+    linear({ kind: 'rectangular', length: 0.04, thickness: 0.003, width: 0.1 }, { kind: 'uniform', h: 80 }, { kind: 'convective', h: null }),
+  ],
+  [
+    'plate, linear h, own tip h, contact',
+    linear(
+      { kind: 'rectangular', length: 0.04, thickness: 0.003, width: 0.1 },
+      { kind: 'linear', base: 80, tip: 30 },
+      { kind: 'convective', h: 150 },
+      2e-4,
+    ),
+  ],
+  [
+    'trapezoid, fixed tip temperature',
+    linear(
+      { kind: 'trapezoidal', length: 0.03, baseThickness: 0.004, tipThickness: 0.001, width: 0.1 },
+      { kind: 'uniform', h: 60 },
+      { kind: 'temperature', T_degC: 40 },
+    ),
+  ],
+  [
+    'triangle (sharp tip)',
+    linear({ kind: 'triangular', length: 0.03, baseThickness: 0.004, width: 0.1 }, { kind: 'uniform', h: 60 }, { kind: 'adiabatic' }),
+  ],
+  [
+    'parabolic concave (cusped tip)',
+    linear({ kind: 'parabolic-concave', length: 0.03, baseThickness: 0.004, width: 0.1 }, { kind: 'uniform', h: 60 }, { kind: 'adiabatic' }),
+  ],
   ['pin, infinite tip (cut and closed)', linear({ kind: 'pin', length: 0.05, diameter: 0.005 }, { kind: 'uniform', h: 100 }, { kind: 'infinite' })],
-  ['cone, tabulated h', linear({ kind: 'conical-pin', length: 0.04, baseDiameter: 0.006, tipDiameter: 0.002 }, { kind: 'points', x: Float64Array.from([0, 0.02, 0.04]), h: Float64Array.from([90, 60, 40]) }, { kind: 'convective', h: null })],
-  ['annular, contact', linear({ kind: 'annular', innerRadius: 0.01, outerRadius: 0.03, thickness: 0.002 }, { kind: 'uniform', h: 40 }, { kind: 'convective', h: null }, 1e-4)],
+  [
+    'cone, tabulated h',
+    linear(
+      { kind: 'conical-pin', length: 0.04, baseDiameter: 0.006, tipDiameter: 0.002 },
+      { kind: 'points', x: Float64Array.from([0, 0.02, 0.04]), h: Float64Array.from([90, 60, 40]) },
+      { kind: 'convective', h: null },
+    ),
+  ],
+  [
+    'annular, contact',
+    linear({ kind: 'annular', innerRadius: 0.01, outerRadius: 0.03, thickness: 0.002 }, { kind: 'uniform', h: 40 }, { kind: 'convective', h: null }, 1e-4),
+  ],
 ];
 
 function expectSame(a: ReturnType<typeof solveFin2D>, b: ReturnType<typeof solveNonlinearFin2D>): void {
@@ -68,7 +102,13 @@ describe('the nonlinear kinds with their nonlinearity switched off', () => {
   const a = solveFin2D(reference, { nx: 61, ny: 13 });
   it.each([
     ['power law with exponent 0', { ...reference, convection: { ...reference.convection, h: { kind: 'power', base: 80, exponent: 0 } } } as Case],
-    ['a flat conductivity table', { ...reference, material: { ...reference.material, k: { kind: 'table', T_degC: Float64Array.from([0, 200]), k: Float64Array.from([50, 50]) } } } as Case],
+    [
+      'a flat conductivity table',
+      {
+        ...reference,
+        material: { ...reference.material, k: { kind: 'table', T_degC: Float64Array.from([0, 200]), k: Float64Array.from([50, 50]) } },
+      } as Case,
+    ],
   ])('%s', (_name, c) => {
     // These take the nonlinear path (Kirchhoff table transform, power factor) and converge in a few steps.
     expectSame(a, solveNonlinearFin2D(c, { nx: 61, ny: 13 }));

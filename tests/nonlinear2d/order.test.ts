@@ -21,14 +21,97 @@ const BASE = 150;
 
 /** [name, case, Bi across the thickness at the base is small (thin) or not (thick)] */
 const CASES: [string, Case, 'thin' | 'thick'][] = [
-  ['plate, n = 1/4, convective tip', finCase({ profile: { kind: 'rectangular', length: 0.05, thickness: 0.002, width: 0.1 }, k: constantK(200), h: { kind: 'power', base: 20, exponent: 0.25 }, tip: { kind: 'convective', h: null }, base_degC: BASE }), 'thin'],
-  ['pin, radiation and k(T), own tip h', finCase({ profile: { kind: 'pin', length: 0.04, diameter: 0.008 }, k: table, h: { kind: 'uniform', h: 10 }, tip: { kind: 'convective', h: 30 }, base_degC: BASE, emissivity: 0.8 }), 'thin'],
-  ['annular, n = 1/3, radiation, contact', finCase({ profile: { kind: 'annular', innerRadius: 0.01, outerRadius: 0.04, thickness: 0.003 }, k: constantK(30), h: { kind: 'power', base: 15, exponent: 1 / 3 }, tip: { kind: 'convective', h: null }, base_degC: BASE, emissivity: 0.9, contactResistance: 2e-4 }), 'thin'],
-  ['plate, k(T), radiation to warm walls, fixed tip', finCase({ profile: { kind: 'rectangular', length: 0.03, thickness: 0.004, width: 0.1 }, k: table, h: { kind: 'uniform', h: 50 }, tip: { kind: 'temperature', T_degC: 60 }, base_degC: BASE, emissivity: 0.7, surroundings_degC: 100 }), 'thin'],
-  ['triangle, radiation', finCase({ profile: { kind: 'triangular', length: 0.03, baseThickness: 0.006, width: 0.1 }, k: constantK(15), h: { kind: 'uniform', h: 20 }, base_degC: BASE, emissivity: 0.9 }), 'thin'],
-  ['parabolic concave (cusped tip), n = 1/4', finCase({ profile: { kind: 'parabolic-concave', length: 0.03, baseThickness: 0.006, width: 0.1 }, k: constantK(50), h: { kind: 'power', base: 60, exponent: 0.25 }, base_degC: BASE }), 'thin'],
-  ['thick plate, n = 1/4, Bi = 0.5', finCase({ profile: { kind: 'rectangular', length: 0.02, thickness: 0.01, width: 0.1 }, k: constantK(20), h: { kind: 'power', base: 2000, exponent: 0.25 }, tip: { kind: 'convective', h: null }, base_degC: BASE }), 'thick'],
-  ['thick trapezoid, n = 2, Bi = 0.23', finCase({ profile: { kind: 'trapezoidal', length: 0.02, baseThickness: 0.006, tipThickness: 0.002, width: 0.1 }, k: constantK(40), h: { kind: 'power', base: 3000, exponent: 2 }, base_degC: BASE }), 'thick'],
+  [
+    'plate, n = 1/4, convective tip',
+    finCase({
+      profile: { kind: 'rectangular', length: 0.05, thickness: 0.002, width: 0.1 },
+      k: constantK(200),
+      h: { kind: 'power', base: 20, exponent: 0.25 },
+      tip: { kind: 'convective', h: null },
+      base_degC: BASE,
+    }),
+    'thin',
+  ],
+  [
+    'pin, radiation and k(T), own tip h',
+    finCase({
+      profile: { kind: 'pin', length: 0.04, diameter: 0.008 },
+      k: table,
+      h: { kind: 'uniform', h: 10 },
+      tip: { kind: 'convective', h: 30 },
+      base_degC: BASE,
+      emissivity: 0.8,
+    }),
+    'thin',
+  ],
+  [
+    'annular, n = 1/3, radiation, contact',
+    finCase({
+      profile: { kind: 'annular', innerRadius: 0.01, outerRadius: 0.04, thickness: 0.003 },
+      k: constantK(30),
+      h: { kind: 'power', base: 15, exponent: 1 / 3 },
+      tip: { kind: 'convective', h: null },
+      base_degC: BASE,
+      emissivity: 0.9,
+      contactResistance: 2e-4,
+    }),
+    'thin',
+  ],
+  [
+    'plate, k(T), radiation to warm walls, fixed tip',
+    finCase({
+      profile: { kind: 'rectangular', length: 0.03, thickness: 0.004, width: 0.1 },
+      k: table,
+      h: { kind: 'uniform', h: 50 },
+      tip: { kind: 'temperature', T_degC: 60 },
+      base_degC: BASE,
+      emissivity: 0.7,
+      surroundings_degC: 100,
+    }),
+    'thin',
+  ],
+  [
+    'triangle, radiation',
+    finCase({
+      profile: { kind: 'triangular', length: 0.03, baseThickness: 0.006, width: 0.1 },
+      k: constantK(15),
+      h: { kind: 'uniform', h: 20 },
+      base_degC: BASE,
+      emissivity: 0.9,
+    }),
+    'thin',
+  ],
+  [
+    'parabolic concave (cusped tip), n = 1/4',
+    finCase({
+      profile: { kind: 'parabolic-concave', length: 0.03, baseThickness: 0.006, width: 0.1 },
+      k: constantK(50),
+      h: { kind: 'power', base: 60, exponent: 0.25 },
+      base_degC: BASE,
+    }),
+    'thin',
+  ],
+  [
+    'thick plate, n = 1/4, Bi = 0.5',
+    finCase({
+      profile: { kind: 'rectangular', length: 0.02, thickness: 0.01, width: 0.1 },
+      k: constantK(20),
+      h: { kind: 'power', base: 2000, exponent: 0.25 },
+      tip: { kind: 'convective', h: null },
+      base_degC: BASE,
+    }),
+    'thick',
+  ],
+  [
+    'thick trapezoid, n = 2, Bi = 0.23',
+    finCase({
+      profile: { kind: 'trapezoidal', length: 0.02, baseThickness: 0.006, tipThickness: 0.002, width: 0.1 },
+      k: constantK(40),
+      h: { kind: 'power', base: 3000, exponent: 2 },
+      base_degC: BASE,
+    }),
+    'thick',
+  ],
 ];
 
 describe.each(CASES)('%s', (_name, c, thickness) => {
@@ -53,7 +136,7 @@ describe.each(CASES)('%s', (_name, c, thickness) => {
 });
 
 describe('the GCI bounds the error', () => {
-  it('thick plate: the three-grid GCI covers the distance to a fourth grid\'s extrapolation', () => {
+  it("thick plate: the three-grid GCI covers the distance to a fourth grid's extrapolation", () => {
     const c = (CASES[6] as [string, Case, string])[1];
     const four = studyNonlinearFin2D(c, { levels: 4 });
     const three = studyNonlinearFin2D(c);

@@ -20,9 +20,23 @@ import { solveNonlinearFin2D } from '../../src/fd/two-d/nonlinear-solve.js';
 import { AMBIENT_DEGC, constantK, finCase } from '../support/fin-case.js';
 
 const profileArbitrary: fc.Arbitrary<Profile> = fc.oneof(
-  fc.record({ kind: fc.constant('rectangular' as const), length: fc.double({ min: 0.01, max: 0.08, noNaN: true }), thickness: fc.double({ min: 0.001, max: 0.008, noNaN: true }), width: fc.constant(0.1) }),
-  fc.record({ kind: fc.constant('pin' as const), length: fc.double({ min: 0.01, max: 0.08, noNaN: true }), diameter: fc.double({ min: 0.002, max: 0.01, noNaN: true }) }),
-  fc.record({ kind: fc.constant('annular' as const), innerRadius: fc.constant(0.01), outerRadius: fc.double({ min: 0.015, max: 0.05, noNaN: true }), thickness: fc.double({ min: 0.001, max: 0.005, noNaN: true }) }),
+  fc.record({
+    kind: fc.constant('rectangular' as const),
+    length: fc.double({ min: 0.01, max: 0.08, noNaN: true }),
+    thickness: fc.double({ min: 0.001, max: 0.008, noNaN: true }),
+    width: fc.constant(0.1),
+  }),
+  fc.record({
+    kind: fc.constant('pin' as const),
+    length: fc.double({ min: 0.01, max: 0.08, noNaN: true }),
+    diameter: fc.double({ min: 0.002, max: 0.01, noNaN: true }),
+  }),
+  fc.record({
+    kind: fc.constant('annular' as const),
+    innerRadius: fc.constant(0.01),
+    outerRadius: fc.double({ min: 0.015, max: 0.05, noNaN: true }),
+    thickness: fc.double({ min: 0.001, max: 0.005, noNaN: true }),
+  }),
 );
 
 const hArbitrary: fc.Arbitrary<HDistribution> = fc.oneof(
@@ -49,7 +63,11 @@ const caseArbitrary = fc
     base: fc.double({ min: 40, max: 200, noNaN: true }),
     rise: fc.double({ min: 5, max: 50, noNaN: true }),
   })
-  .map((r) => ({ make: (base: number): Case => finCase({ profile: r.profile, k: r.k, h: r.h, tip: r.tip, base_degC: base, emissivity: r.emissivity }), base: r.base, rise: r.rise }));
+  .map((r) => ({
+    make: (base: number): Case => finCase({ profile: r.profile, k: r.k, h: r.h, tip: r.tip, base_degC: base, emissivity: r.emissivity }),
+    base: r.base,
+    rise: r.rise,
+  }));
 
 describe('comparison principle', () => {
   test.prop([caseArbitrary], { numRuns: 12 })('Q grows with the base temperature; ambient <= T <= base', ({ make, base, rise }) => {

@@ -172,10 +172,13 @@ describe('profile chart labels', () => {
     for (const s of spec.panels[0]?.series ?? []) {
       for (let i = 0; i + 1 < s.x.length; i++) {
         // Sample each segment finely in screen space.
-        const ax = project(g.x, s.x[i] as number), ay = project(g.y, s.y[i] as number);
-        const bx = project(g.x, s.x[i + 1] as number), by = project(g.y, s.y[i + 1] as number);
+        const ax = project(g.x, s.x[i] as number),
+          ay = project(g.y, s.y[i] as number);
+        const bx = project(g.x, s.x[i + 1] as number),
+          by = project(g.y, s.y[i + 1] as number);
         for (let t = 0; t <= 1; t += 0.1) {
-          const px = ax + t * (bx - ax), py = ay + t * (by - ay);
+          const px = ax + t * (bx - ax),
+            py = ay + t * (by - ay);
           const dx = Math.max(box.x0 - px, 0, px - box.x1);
           const dy = Math.max(box.y0 - py, 0, py - box.y1);
           nearest = Math.min(nearest, Math.hypot(dx, dy));

@@ -60,7 +60,16 @@ describe('profile chart: temperature along the fin', () => {
     expect([img.width, img.height]).toEqual([1200, 750]);
     const plot = chart.panels[0]?.plot ?? { x: 0, y: 0, width: 0, height: 0 };
     // Lines, markers and the legend cover well over 2 % of the plot (a blank plot has only grid lines).
-    expect(countPixels(img, plot.x + 2, plot.y + 2, plot.x + plot.width - 2, plot.y + plot.height - 2, (c) => isNotWhite(c) && colourDistance(c, [228, 228, 228]) > 20)).toBeGreaterThan(0.02 * plot.width * plot.height);
+    expect(
+      countPixels(
+        img,
+        plot.x + 2,
+        plot.y + 2,
+        plot.x + plot.width - 2,
+        plot.y + plot.height - 2,
+        (c) => isNotWhite(c) && colourDistance(c, [228, 228, 228]) > 20,
+      ),
+    ).toBeGreaterThan(0.02 * plot.width * plot.height);
     expectAxisText(img, plot);
   });
 

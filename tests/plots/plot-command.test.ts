@@ -59,7 +59,9 @@ describe('fincheck plot writes the chart asked for', () => {
     const svg = readFileSync(join(out, 'f.svg'), 'utf8');
     expect(wellFormednessError(svg)).toBeNull();
     const texts = svgTexts(svg);
-    expect(texts).toEqual(expect.arrayContaining(['Distance from the base x (mm)', 'Heat flow Q (W)', 'Heat lost q′ (W/m)', 'fd-2d (reference)', 'tanh-L', 'fd-1d']));
+    expect(texts).toEqual(
+      expect.arrayContaining(['Distance from the base x (mm)', 'Heat flow Q (W)', 'Heat lost q′ (W/m)', 'fd-2d (reference)', 'tanh-L', 'fd-1d']),
+    );
   });
 
   it('--kind heatmap draws the fd-2d field; --json describes the file', async () => {
@@ -90,7 +92,9 @@ describe('fincheck plot refuses bad requests with exit 2 and writes nothing', ()
   ];
   it.each(refusals)('%s', async (_what, args, message) => {
     const out = folder('refuse');
-    const argv = ['plot', demo, '--out', join(out, 'chart.png'), ...args].map((a) => (a === 'chart.jpg' || a === 'chart.svg' || a.startsWith('no-such') ? join(out, a) : a));
+    const argv = ['plot', demo, '--out', join(out, 'chart.png'), ...args].map((a) =>
+      a === 'chart.jpg' || a === 'chart.svg' || a.startsWith('no-such') ? join(out, a) : a,
+    );
     const r = await cli(...argv);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(message);
@@ -112,7 +116,9 @@ describe('fincheck plot refuses bad requests with exit 2 and writes nothing', ()
     );
     const r = await cli('plot', file, '--kind', 'heatmap', '--out', join(out, 'h.png'));
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/--kind heatmap: the 2-D model does not cover this rectangular fin: an infinite tip of a nonlinear fin is not modelled in 2-D/);
+    expect(r.stderr).toMatch(
+      /--kind heatmap: the 2-D model does not cover this rectangular fin: an infinite tip of a nonlinear fin is not modelled in 2-D/,
+    );
     expect(readdirSync(out)).toEqual(['natural.yaml']);
   });
 

@@ -59,14 +59,22 @@ describe('richardsonGci (Celik et al. 2008 procedure)', () => {
   });
 
   it('rejects fewer than three grids', () => {
-    expect(() => richardsonGci([{ size: 1, value: 1 }, { size: 2, value: 2 }])).toThrow(/at least 3/);
+    expect(() =>
+      richardsonGci([
+        { size: 1, value: 1 },
+        { size: 2, value: 2 },
+      ]),
+    ).toThrow(/at least 3/);
   });
 });
 
 describe('fitObservedOrder', () => {
   it('recovers the exponent of a synthetic power law e = C h^p exactly', () => {
     const sizes = [0.1, 0.05, 0.025, 0.0125];
-    const fit = fitObservedOrder(sizes, sizes.map((h) => 3 * h ** 2));
+    const fit = fitObservedOrder(
+      sizes,
+      sizes.map((h) => 3 * h ** 2),
+    );
     expect(fit.order).toBeCloseTo(2, 12);
     expect(fit.constant).toBeCloseTo(3, 10);
   });

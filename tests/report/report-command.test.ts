@@ -64,7 +64,17 @@ describe('fincheck report writes an HTML and a Markdown report with the charts b
 
   it('states the version, the date, the case inputs with units, and the cautions before any result', () => {
     has(html, `fincheck ${VERSION} · 2025-01-01 · case file inverter-plate-fin.yaml`);
-    for (const text of ['Traction-inverter sink, outer fin', '40 mm', '2 mm', '80 mm', 'h = 45 W/(m²·K) uniform', '85 °C', '35 °C', '5.00e-5 m²·K/W', '209 W/(m·K)']) {
+    for (const text of [
+      'Traction-inverter sink, outer fin',
+      '40 mm',
+      '2 mm',
+      '80 mm',
+      'h = 45 W/(m²·K) uniform',
+      '85 °C',
+      '35 °C',
+      '5.00e-5 m²·K/W',
+      '209 W/(m·K)',
+    ]) {
       has(html, text);
     }
     const cautions = html.indexOf('Cautions');
@@ -88,7 +98,8 @@ describe('fincheck report writes an HTML and a Markdown report with the charts b
 
   it('Markdown says the same with the PNGs linked beside it', () => {
     has(markdown, `fincheck ${VERSION} · 2025-01-01`);
-    for (const f of ['profile.png', 'flux.png', 'heatmap.png']) expect(new RegExp(`!\\[[^\\]]+\\]\\(${f.replace('.', '\\.')}\\)`).test(markdown)).toBe(true);
+    for (const f of ['profile.png', 'flux.png', 'heatmap.png'])
+      expect(new RegExp(`!\\[[^\\]]+\\]\\(${f.replace('.', '\\.')}\\)`).test(markdown)).toBe(true);
     has(markdown, '| Model | Q (W) | Efficiency (–) | Drift of Q | Verdict |');
     has(markdown, '> **Cautions**');
     for (const c of CAUTIONS) has(markdown, c.replace(/[\\`*_[\]<>|#]/g, '\\$&'));
@@ -124,7 +135,10 @@ describe('fincheck report refuses bad requests with exit 2 and writes nothing', 
 
   it('a check that refuses (2-D reference for a nonlinear fin with an infinite tip): its message, and no folder', async () => {
     const caseFile = join(root, 'natural.yaml');
-    writeFileSync(caseFile, 'name: natural\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: infinite }\nbase: { temperature: 80 degC }\n');
+    writeFileSync(
+      caseFile,
+      'name: natural\nfin: { profile: rectangular, length: 30 mm, thickness: 2 mm, width: 50 mm }\nmaterial: { k: 200 }\nconvection: { ambient: 20 degC, h: { law: power, base: 12, exponent: 0.25 }, tip: infinite }\nbase: { temperature: 80 degC }\n',
+    );
     const dir = join(root, 'nonlinear');
     const r = await cli('report', caseFile, '--out', dir, '--reference', '2d');
     expect(r.code).toBe(2);

@@ -39,7 +39,13 @@ describe('reportDate', () => {
 describe('writeFilesAtomically', () => {
   it('writes every file, creating the folder', () => {
     const dir = join(mkdtempSync(join(tmpdir(), 'fincheck-write-')), 'new', 'deeper');
-    writeFilesAtomically([{ path: join(dir, 'a.txt'), bytes: 'a' }, { path: join(dir, 'b.bin'), bytes: Buffer.from([1, 2, 3]) }], [dir]);
+    writeFilesAtomically(
+      [
+        { path: join(dir, 'a.txt'), bytes: 'a' },
+        { path: join(dir, 'b.bin'), bytes: Buffer.from([1, 2, 3]) },
+      ],
+      [dir],
+    );
     expect(readFileSync(join(dir, 'a.txt'), 'utf8')).toBe('a');
     expect([...readFileSync(join(dir, 'b.bin'))]).toEqual([1, 2, 3]);
     expect(readdirSync(dir).sort()).toEqual(['a.txt', 'b.bin']);

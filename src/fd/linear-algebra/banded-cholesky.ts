@@ -24,8 +24,7 @@ export function bandedCholeskyBytes(nodesX: number, nodesY: number): number {
 
 /** A Cholesky factor, or the pivot that showed the matrix is not positive definite. */
 export type CholeskyOutcome =
-  | { readonly ok: true; readonly factor: BandedCholesky }
-  | { readonly ok: false; readonly pivot: number; readonly unknown: number };
+  { readonly ok: true; readonly factor: BandedCholesky } | { readonly ok: false; readonly pivot: number; readonly unknown: number };
 
 /** The factor; a SolverError when the matrix is not positive definite. */
 export function factorBandedCholesky(a: Stencil9): BandedCholesky {

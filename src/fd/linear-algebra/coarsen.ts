@@ -43,7 +43,15 @@ export function linearTransfer(fine: number): Transfer1D {
 }
 
 export function identityTransfer(n: number): Transfer1D {
-  return { kind: 'identity', fine: n, coarse: n, p0: Int32Array.from({ length: n }, (_, f) => f), w0: new Float64Array(n).fill(1), p1: new Int32Array(n).fill(-1), w1: new Float64Array(n) };
+  return {
+    kind: 'identity',
+    fine: n,
+    coarse: n,
+    p0: Int32Array.from({ length: n }, (_, f) => f),
+    w0: new Float64Array(n).fill(1),
+    p1: new Int32Array(n).fill(-1),
+    w1: new Float64Array(n),
+  };
 }
 
 /**
@@ -141,7 +149,7 @@ export function galerkinAlongY(a: FullStencil, t: Transfer1D): FullStencil {
     const cs = i * nyc;
     for (let k = 0; k < 9; k++) {
       if (!a.diagonals && k !== 1 && k !== 3 && k !== 4 && k !== 5 && k !== 7) continue; // zero diagonal couplings
-      const diOffset = 3 * (Math.floor(k / 3));
+      const diOffset = 3 * Math.floor(k / 3);
       const dj = (k % 3) - 1;
       const coef = c[k] as Float64Array;
       for (let j = 0; j < ny; j++) {

@@ -35,11 +35,7 @@ function rowSumsOf(system: TridiagonalSystem): Float64Array {
 }
 
 /** One-sided row-sum elimination from the last row to the first (used for n < 3). */
-export function conservativeThomasFromTipInto(
-  system: TridiagonalSystem,
-  solution: Float64Array,
-  work: Float64Array,
-): Float64Array {
+export function conservativeThomasFromTipInto(system: TridiagonalSystem, solution: Float64Array, work: Float64Array): Float64Array {
   const { lower, upper, rhs } = system;
   const rowSum = system.rowSum ?? rowSumsOf(system);
   const n = rowSum.length;

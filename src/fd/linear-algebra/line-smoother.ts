@@ -92,28 +92,33 @@ function solveColumn(a: FullStencil, lines: LineFactors, b: Float64Array, x: Flo
       const t = p + ny;
       const rhs =
         (b[p] as number) -
-        (w[p] as number) * (x[q] as number) - (sw[p] as number) * (x[q - 1] as number) - (nw[p] as number) * (x[q + 1] as number) -
-        (e[p] as number) * (x[t] as number) - (se[p] as number) * (x[t - 1] as number) - (ne[p] as number) * (x[t + 1] as number);
+        (w[p] as number) * (x[q] as number) -
+        (sw[p] as number) * (x[q - 1] as number) -
+        (nw[p] as number) * (x[q + 1] as number) -
+        (e[p] as number) * (x[t] as number) -
+        (se[p] as number) * (x[t - 1] as number) -
+        (ne[p] as number) * (x[t + 1] as number);
       prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
       work[p - start] = prev;
     }
-  } else for (let p = start; p <= last; p++) {
-    let rhs = b[p] as number;
-    if (hasWest) {
-      const q = p - ny;
-      rhs -= (w[p] as number) * (x[q] as number);
-      if (p > start) rhs -= (sw[p] as number) * (x[q - 1] as number);
-      if (p < last) rhs -= (nw[p] as number) * (x[q + 1] as number);
+  } else
+    for (let p = start; p <= last; p++) {
+      let rhs = b[p] as number;
+      if (hasWest) {
+        const q = p - ny;
+        rhs -= (w[p] as number) * (x[q] as number);
+        if (p > start) rhs -= (sw[p] as number) * (x[q - 1] as number);
+        if (p < last) rhs -= (nw[p] as number) * (x[q + 1] as number);
+      }
+      if (hasEast) {
+        const q = p + ny;
+        rhs -= (e[p] as number) * (x[q] as number);
+        if (p > start) rhs -= (se[p] as number) * (x[q - 1] as number);
+        if (p < last) rhs -= (ne[p] as number) * (x[q + 1] as number);
+      }
+      prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
+      work[p - start] = prev;
     }
-    if (hasEast) {
-      const q = p + ny;
-      rhs -= (e[p] as number) * (x[q] as number);
-      if (p > start) rhs -= (se[p] as number) * (x[q - 1] as number);
-      if (p < last) rhs -= (ne[p] as number) * (x[q + 1] as number);
-    }
-    prev = (rhs - (south[p] as number) * prev) * (inversePivot[p] as number);
-    work[p - start] = prev;
-  }
   // Back substitution: x_j = d'_j - c'_j x_{j+1}.
   let next = prev;
   x[last] = next;

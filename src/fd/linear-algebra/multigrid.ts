@@ -14,7 +14,16 @@
  */
 import { factorBandedCholesky } from './banded-cholesky.js';
 import type { BandedFactor } from './banded-factor.js';
-import { galerkinAlongX, galerkinAlongY, identityTransfer, linearTransfer, prolongAdd, restrict, restrictEvenColumns, type Transfer1D } from './coarsen.js';
+import {
+  galerkinAlongX,
+  galerkinAlongY,
+  identityTransfer,
+  linearTransfer,
+  prolongAdd,
+  restrict,
+  restrictEvenColumns,
+  type Transfer1D,
+} from './coarsen.js';
 import { toFullStencil, toStencil9, type FullStencil } from './full-stencil.js';
 import { factorLines, zebraFromZero, zebraLineGaussSeidel, type LineFactors } from './line-smoother.js';
 import type { Stencil9 } from './stencil9.js';

@@ -58,7 +58,11 @@ const FAILURE = 1e-7;
 const UNIT_ROUNDOFF = 2 ** -53;
 
 /** MG-PCG; a SolverError when it does not reach its residual target (attemptMgPcg asks instead). */
-export function solveMgPcg(system: System2D, opts: PcgOptions = {}, mg: Multigrid = buildMultigrid(system.matrix)): { x: Float64Array; report: PcgReport } {
+export function solveMgPcg(
+  system: System2D,
+  opts: PcgOptions = {},
+  mg: Multigrid = buildMultigrid(system.matrix),
+): { x: Float64Array; report: PcgReport } {
   const attempt = attemptMgPcg(system, opts, mg);
   if (attempt.failure !== null) throw new SolverError(attempt.failure, 'another-2d-grid');
   return { x: attempt.x, report: attempt.report };

@@ -219,7 +219,10 @@ export function coupledRhsNorm1(system: System2D): number {
     for (let j = 0; j < ny; j++) {
       const p = i * ny + j;
       const coupled =
-        east[p] !== 0 || north[p] !== 0 || northEast[p] !== 0 || southEast[p] !== 0 ||
+        east[p] !== 0 ||
+        north[p] !== 0 ||
+        northEast[p] !== 0 ||
+        southEast[p] !== 0 ||
         (j > 0 && north[p - 1] !== 0) ||
         (i > 0 && (east[p - ny] !== 0 || (j > 0 && northEast[p - ny - 1] !== 0) || (j + 1 < ny && southEast[p - ny + 1] !== 0)));
       if (coupled) s += Math.abs(rhs[p] as number);

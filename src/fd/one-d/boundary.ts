@@ -88,13 +88,7 @@ export function applyBaseBoundary(system: RowSumSystem, base: BaseBoundary, mesh
 }
 
 /** Writes the tip condition into row n-1 of an assembled system. */
-export function applyTipBoundary(
-  system: RowSumSystem,
-  tip: TipBoundary,
-  mesh: Mesh1D,
-  conductivity: number,
-  hNodes: Float64Array,
-): void {
+export function applyTipBoundary(system: RowSumSystem, tip: TipBoundary, mesh: Mesh1D, conductivity: number, hNodes: Float64Array): void {
   const last = mesh.nodes - 1;
   if (tip.kind === 'temperature') {
     system.diag[last] = 1;
@@ -109,13 +103,7 @@ export function applyTipBoundary(
 }
 
 /** Q_base, W: heat entering the fin at its base (see the header for each condition). */
-export function baseHeatRate(
-  base: BaseBoundary,
-  mesh: Mesh1D,
-  conductivity: number,
-  hNodes: Float64Array,
-  field: ExcessField,
-): number {
+export function baseHeatRate(base: BaseBoundary, mesh: Mesh1D, conductivity: number, hNodes: Float64Array, field: ExcessField): number {
   const drop0 = field.drop[0] as number;
   switch (base.kind) {
     case 'temperature':
@@ -133,13 +121,7 @@ export function baseHeatRate(
 }
 
 /** Q_tip, W: heat leaving the fin through its tip section (see the header for each condition). */
-export function tipHeatLoss(
-  tip: TipBoundary,
-  mesh: Mesh1D,
-  conductivity: number,
-  hNodes: Float64Array,
-  field: ExcessField,
-): number {
+export function tipHeatLoss(tip: TipBoundary, mesh: Mesh1D, conductivity: number, hNodes: Float64Array, field: ExcessField): number {
   const last = mesh.nodes - 1;
   const dropTip = field.drop[last] as number;
   const thetaTip = field.reference - dropTip;

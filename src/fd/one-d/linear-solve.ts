@@ -123,7 +123,13 @@ function scratchFor(n: number): Scratch1D {
   let s = scratch.get(n);
   if (s === undefined) {
     if (scratch.size >= 8) scratch.clear();
-    s = { hNodes: new Float64Array(n), system: createTridiagonalSystem(n), rhs: new Float64Array(n), solution: new Float64Array(n), factor: new Float64Array(n) };
+    s = {
+      hNodes: new Float64Array(n),
+      system: createTridiagonalSystem(n),
+      rhs: new Float64Array(n),
+      solution: new Float64Array(n),
+      factor: new Float64Array(n),
+    };
     scratch.set(n, s);
   }
   return s;

@@ -63,12 +63,7 @@ export interface MeshSolve {
  * Solves the problem on a mesh from the drops `initial` (d = θ_b - θ, K; default 0: the whole fin at
  * the base temperature); throws SolverError when it cannot.
  */
-export function solveNonlinearOnMesh(
-  problem: FinProblem,
-  mesh: Mesh1D,
-  opts: NewtonOptions = {},
-  initial?: Float64Array,
-): MeshSolve {
+export function solveNonlinearOnMesh(problem: FinProblem, mesh: Mesh1D, opts: NewtonOptions = {}, initial?: Float64Array): MeshSolve {
   const setup = newtonSetup(problem, mesh);
   const start = initial ?? new Float64Array(mesh.nodes);
   const direct = newtonSolve(setup, start, opts);
@@ -104,7 +99,9 @@ function advice(problem: FinProblem): string {
   const items: string[] = [];
   if (problem.exponent > 0) items.push(`lower the exponent of the power-law h (now ${problem.exponent})`);
   if (problem.exponent < 0) {
-    items.push(`use an exponent closer to 0 or a shorter fin (now ${problem.exponent}: the fin reaches the fluid temperature, where h = base (θ/θ_b)^n is infinite)`);
+    items.push(
+      `use an exponent closer to 0 or a shorter fin (now ${problem.exponent}: the fin reaches the fluid temperature, where h = base (θ/θ_b)^n is infinite)`,
+    );
   }
   if (problem.radiation.emissivity !== 0) items.push(`give a smaller emissivity (now ${problem.radiation.emissivity})`);
   const k = problem.conductivity;

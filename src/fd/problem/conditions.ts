@@ -21,9 +21,7 @@ export type TipBoundary =
 /** The base condition of a case: contact when a contact resistance is given, else temperature. */
 export function baseBoundary(c: Case): BaseBoundary {
   const theta = c.base.T_degC - c.convection.ambient_degC;
-  return c.base.contactResistance > 0
-    ? { kind: 'contact', theta, resistance: c.base.contactResistance }
-    : { kind: 'temperature', theta };
+  return c.base.contactResistance > 0 ? { kind: 'contact', theta, resistance: c.base.contactResistance } : { kind: 'temperature', theta };
 }
 
 /** The tip condition of a case. */

@@ -109,7 +109,10 @@ function valueAt(f: PiecewiseLinear, s: number): number {
 
 function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: number, thetaBase: number): KirchhoffTransform {
   const count = k.length;
-  const byTheta = piecewiseLinear(Float64Array.from(T_degC, (T) => T - ambient_degC), k);
+  const byTheta = piecewiseLinear(
+    Float64Array.from(T_degC, (T) => T - ambient_degC),
+    k,
+  );
   // The same table over the drop e = θ_b - θ (ascending e: reversed order).
   const byDrop = piecewiseLinear(
     Float64Array.from({ length: count }, (_, j) => thetaBase - (T_degC[count - 1 - j] as number) + ambient_degC),

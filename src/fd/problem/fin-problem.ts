@@ -86,8 +86,7 @@ export function isLinearProblem(problem: FinProblem): boolean {
 export function scaleNonlinearity(problem: FinProblem, s: number, kRef: number): FinProblem {
   if (s === 1) return problem;
   const k = problem.conductivity;
-  const conductivity: Conductivity =
-    k.kind === 'constant' ? k : { kind: 'table', T_degC: k.T_degC, k: k.k.map((value) => kRef + s * (value - kRef)) };
+  const conductivity: Conductivity = k.kind === 'constant' ? k : { kind: 'table', T_degC: k.T_degC, k: k.k.map((value) => kRef + s * (value - kRef)) };
   return {
     ...problem,
     conductivity,

@@ -82,14 +82,7 @@ export function faceFluxSlope(law: FaceLaw, hx: number, theta: number): number {
  * Losses of every CV and their derivatives, W and W/K: loss_i = G_i g θ_i + ε σ S_i (T_i^4 - T_s^4).
  * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2).
  */
-export function cvLosses(
-  law: FaceLaw,
-  G: Float64Array,
-  S: Float64Array,
-  theta: Float64Array,
-  loss: Float64Array,
-  slope: Float64Array,
-): void {
+export function cvLosses(law: FaceLaw, G: Float64Array, S: Float64Array, theta: Float64Array, loss: Float64Array, slope: Float64Array): void {
   const n = theta.length;
   const { exponent, radiative, ambient_K: Ta, surroundings_K: Ts } = law;
   const scale = law.inverseBaseExcess;

@@ -21,7 +21,17 @@ export function finStudy1DFields(
   finest: Fin1DResult,
 ): Pick<
   FinStudy1D,
-  'model' | 'problem' | 'finest' | 'heatRate_W' | 'surfaceHeatRate_W' | 'energyBalance' | 'idealHeatRate_W' | 'efficiency' | 'effectiveness' | 'baseTemperature_degC' | 'tipTemperature_degC'
+  | 'model'
+  | 'problem'
+  | 'finest'
+  | 'heatRate_W'
+  | 'surfaceHeatRate_W'
+  | 'energyBalance'
+  | 'idealHeatRate_W'
+  | 'efficiency'
+  | 'effectiveness'
+  | 'baseTemperature_degC'
+  | 'tipTemperature_degC'
 > {
   return {
     model: 'fd-1d',
@@ -52,7 +62,10 @@ export function finStudy1DFrom(
 }
 
 /** A 2-D study (with Newton's step counts for a nonlinear fin) as a FinStudy2D. */
-export function finStudy2DFrom(problem: FinProblem, s: Fin2DStudy & { readonly finest: Fin2DResult & { readonly newton?: NewtonReport }; readonly iterations?: readonly number[] }): FinStudy2D {
+export function finStudy2DFrom(
+  problem: FinProblem,
+  s: Fin2DStudy & { readonly finest: Fin2DResult & { readonly newton?: NewtonReport }; readonly iterations?: readonly number[] },
+): FinStudy2D {
   const finest = s.finest;
   return {
     model: 'fd-2d',

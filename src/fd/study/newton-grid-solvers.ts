@@ -20,9 +20,5 @@ export const newtonGridSolvers: GridSolvers = {
   twoD: (problem, grid, previous) =>
     isLinearProblem(problem.physics)
       ? linearGridSolvers.twoD(problem, grid)
-      : solveNonlinearFin2DProblem(
-          problem,
-          { nx: grid.nx, ny: grid.ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face },
-          previous,
-        ),
+      : solveNonlinearFin2DProblem(problem, { nx: grid.nx, ny: grid.ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face }, previous),
 };

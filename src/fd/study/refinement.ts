@@ -74,8 +74,16 @@ export function richardsonGci(results: GridValue[], formalOrder = 2): Refinement
   if (Math.abs(eps21) <= ROUND_OFF * scale && Math.abs(eps32) <= ROUND_OFF * scale * r32 ** formalOrder * 4) {
     // Differences at round-off: the solution no longer changes with the grid.
     return {
-      sizes, values, observedOrder: null, orderUsed: formalOrder, safetyFactor: FS_FORMAL, extrapolated: p1,
-      gci: Math.max(Math.abs(eps21) / scale, ROUND_OFF), oscillatory: false, asymptoticRatio: null, converged: true,
+      sizes,
+      values,
+      observedOrder: null,
+      orderUsed: formalOrder,
+      safetyFactor: FS_FORMAL,
+      extrapolated: p1,
+      gci: Math.max(Math.abs(eps21) / scale, ROUND_OFF),
+      oscillatory: false,
+      asymptoticRatio: null,
+      converged: true,
       note: 'grid differences at round-off level; error bounded by round-off',
     };
   }
@@ -100,7 +108,19 @@ export function richardsonGci(results: GridValue[], formalOrder = 2): Refinement
     : oscillatory
       ? `oscillatory convergence; formal order ${formalOrder} with Fs = 3 (Roache 2011)`
       : `observed order ${observed === null ? 'undefined' : observed.toFixed(2)} not credible; formal order ${formalOrder} with Fs = 3 (Roache 2011)`;
-  return { sizes, values, observedOrder: observed, orderUsed: p, safetyFactor: fs, extrapolated, gci: gci21, oscillatory, asymptoticRatio, converged, note };
+  return {
+    sizes,
+    values,
+    observedOrder: observed,
+    orderUsed: p,
+    safetyFactor: fs,
+    extrapolated,
+    gci: gci21,
+    oscillatory,
+    asymptoticRatio,
+    converged,
+    note,
+  };
 }
 
 /** Fixed-point iteration for the observed order with unequal refinement ratios (Celik et al. 2008, eq. 3). */

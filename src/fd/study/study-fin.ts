@@ -113,7 +113,11 @@ function study1D(problem: FinProblem, results: GridSolution1D[], refinement: Ret
   };
 }
 
-function common2D(problem: FinProblem, finest: GridSolution2D, results: GridSolution2D[]): Omit<FinStudy2D, 'refinement' | 'discretizationError' | 'energyBalance' | 'grids' | 'efficiencyRefinement' | 'extrapolatedHeatRate_W'> {
+function common2D(
+  problem: FinProblem,
+  finest: GridSolution2D,
+  results: GridSolution2D[],
+): Omit<FinStudy2D, 'refinement' | 'discretizationError' | 'energyBalance' | 'grids' | 'efficiencyRefinement' | 'extrapolatedHeatRate_W'> {
   return {
     model: 'fd-2d',
     problem,

@@ -26,10 +26,7 @@ import { applyStencil9, couplingOf, type Stencil9, type System2D } from '../line
 export type LinearH = Exclude<HDistribution, { kind: 'power' }>;
 
 export type BoundaryCondition2D =
-  | { kind: 'adiabatic' }
-  | { kind: 'fixed'; theta: number }
-  | { kind: 'convective'; h: LinearH }
-  | { kind: 'contact'; resistance: number; theta: number };
+  { kind: 'adiabatic' } | { kind: 'fixed'; theta: number } | { kind: 'convective'; h: LinearH } | { kind: 'contact'; resistance: number; theta: number };
 
 /** Conditions on the named boundaries of the section (the symmetry boundary is always adiabatic). */
 export interface FinConditions2D {
@@ -85,7 +82,6 @@ function sideTerms(grid: Grid2D, name: 'base' | 'face' | 'tip', condition: Bound
   }
 }
 
-
 /**
  * Per boundary node: integral of c(x) r ds over the half-edges next to it (Simpson on each half-edge).
  * `c` receives the x coordinate of the point (m).
@@ -105,8 +101,7 @@ export function lumpedIntegral(grid: Grid2D, nodes: Int32Array, c: (x: number) =
     if (half === 0) continue;
     const xm = (xa + xb) / 2;
     const ym = (ya + yb) / 2;
-    const simpson = (x0: number, y0: number): number =>
-      (half / 6) * (f(x0, y0) + 4 * f((x0 + xm) / 2, (y0 + ym) / 2) + f(xm, ym));
+    const simpson = (x0: number, y0: number): number => (half / 6) * (f(x0, y0) + 4 * f((x0 + xm) / 2, (y0 + ym) / 2) + f(xm, ym));
     out[e] = (out[e] as number) + simpson(xa, ya);
     out[e + 1] = (out[e + 1] as number) + simpson(xb, yb);
   }

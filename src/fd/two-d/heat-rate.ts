@@ -30,9 +30,7 @@ export interface HeatRates2D {
 export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): HeatRates2D {
   // Boundary exchange G (theta - thetaFar) of every node of each non-fixed boundary.
   const exchangeOf = (side: SideTerms): Float64Array | null =>
-    side.kind === 'fixed'
-      ? null
-      : Float64Array.from(side.nodes, (p, e) => (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta));
+    side.kind === 'fixed' ? null : Float64Array.from(side.nodes, (p, e) => (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta));
   return heatRatesFromExchange(K, terms, theta, { base: exchangeOf(terms.base), face: exchangeOf(terms.face), tip: exchangeOf(terms.tip) });
 }
 

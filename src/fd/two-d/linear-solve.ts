@@ -133,7 +133,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   for (const side of [terms.face, terms.tip]) {
     if (side.kind === 'convective') for (const g of side.conductance) ideal += g * thetaBase;
   }
-  const efficiency = problem.truncatedInfinite ? null : (rates.base / ideal);
+  const efficiency = problem.truncatedInfinite ? null : rates.base / ideal;
   const baseArea = sum(lumpedIntegral(grid, terms.base.nodes, () => 1));
   const hBase = hAt(problem.h, 0, problem.section.length);
   const effectiveness = rates.base / (hBase * baseArea * thetaBase);
@@ -220,7 +220,10 @@ function hasFixedRows(system: System2D): boolean {
     for (let j = 0; j < ny; j++) {
       const p = i * ny + j;
       const coupled =
-        a.east[p] !== 0 || a.north[p] !== 0 || a.northEast[p] !== 0 || a.southEast[p] !== 0 ||
+        a.east[p] !== 0 ||
+        a.north[p] !== 0 ||
+        a.northEast[p] !== 0 ||
+        a.southEast[p] !== 0 ||
         (i > 0 && (a.east[p - ny] !== 0 || (j > 0 && a.northEast[p - ny - 1] !== 0) || (j + 1 < ny && a.southEast[p - ny + 1] !== 0))) ||
         (j > 0 && a.north[p - 1] !== 0);
       if (!coupled) return true;

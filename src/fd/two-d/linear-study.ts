@@ -64,7 +64,6 @@ export interface Fin2DStudy {
   energyBalance: number;
 }
 
-
 export function studyFin2D(c: Case, opts: Fin2DStudyOptions = {}): Fin2DStudy {
   return studyFin2DProblem(fin2dProblem(c), opts);
 }
@@ -101,8 +100,7 @@ export function summariseStudy2D(results: Fin2DResult[], values: Fin2DGridValue[
   values.reverse();
   const finest = results[results.length - 1] as Fin2DResult;
   const heatRate = richardsonGci(values.map((v) => ({ size: v.size, value: v.heatRate_W })));
-  const efficiency =
-    finest.efficiency === null ? null : richardsonGci(values.map((v) => ({ size: v.size, value: v.efficiency as number })));
+  const efficiency = finest.efficiency === null ? null : richardsonGci(values.map((v) => ({ size: v.size, value: v.efficiency as number })));
   return {
     model: 'fd-2d',
     finest,

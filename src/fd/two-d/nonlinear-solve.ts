@@ -73,7 +73,14 @@ export function solveNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
   const segments = problem.linear.section.breakpoints.length - 1;
   if (!setup.linear && start !== undefined) {
     initial = dropsOf(setup, interpolateField(start.grid, start.field, grid));
-  } else if (!setup.linear && (opts.nested ?? true) && nx * ny > NESTED_MIN_NODES && (nx - 1) % 2 === 0 && (ny - 1) % 2 === 0 && (nx - 1) / 2 >= segments) {
+  } else if (
+    !setup.linear &&
+    (opts.nested ?? true) &&
+    nx * ny > NESTED_MIN_NODES &&
+    (nx - 1) % 2 === 0 &&
+    (ny - 1) % 2 === 0 &&
+    (nx - 1) / 2 >= segments
+  ) {
     const coarse = solveNonlinearFin2DProblem(problem, { ...opts, nx: (nx - 1) / 2 + 1, ny: (ny - 1) / 2 + 1 });
     initial = dropsOf(setup, interpolateField(coarse.grid, coarse.field, grid));
     coarseGridIterations = coarse.newton.totalIterations + coarse.newton.coarseGridIterations;
@@ -142,7 +149,10 @@ function advice(problem: NonlinearFin2DProblem): string {
   const { physics } = problem;
   const items: string[] = [];
   if (physics.exponent > 0) items.push(`lower the exponent of the power-law h (now ${physics.exponent})`);
-  if (physics.exponent < 0) items.push(`use an exponent closer to 0 or a shorter fin (now ${physics.exponent}: h = base (θ/θ_b)^n is infinite where the fin reaches the fluid temperature)`);
+  if (physics.exponent < 0)
+    items.push(
+      `use an exponent closer to 0 or a shorter fin (now ${physics.exponent}: h = base (θ/θ_b)^n is infinite where the fin reaches the fluid temperature)`,
+    );
   if (physics.radiation.emissivity !== 0) items.push(`give a smaller emissivity (now ${physics.radiation.emissivity})`);
   const k = physics.conductivity;
   if (k.kind === 'table') items.push(`give a smoother conductivity table (k runs from ${Math.min(...k.k)} to ${Math.max(...k.k)} W/(m*K))`);
@@ -154,7 +164,9 @@ function advice(problem: NonlinearFin2DProblem): string {
 function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2DOutcome, reached: number): SolverError {
   const progress = reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '';
   const reason = outcome.failure ?? 'unknown reason';
-  const steps = reason.startsWith('no convergence') ? '' : ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})`;
+  const steps = reason.startsWith('no convergence')
+    ? ''
+    : ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})`;
   return new SolverError(
     `fd-2d (nonlinear fin) did not converge on ${grid.nodesX} x ${grid.nodesY} nodes: ${reason}${steps}${progress}. To get a solution: ${advice(problem)}.`,
     isLinearProblem(problem.physics) ? undefined : 'another-2d-grid',

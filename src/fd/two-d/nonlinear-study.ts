@@ -51,4 +51,3 @@ export function studyNonlinearFin2DProblem(problem: NonlinearFin2DProblem, opts:
     iterations: results.map((r) => r.newton.totalIterations + r.newton.coarseGridIterations),
   };
 }
-

@@ -40,9 +40,13 @@ const tabulated: fc.Arbitrary<Profile> = fc
 export const profileArbitrary: fc.Arbitrary<Profile> = fc.oneof(
   fc.record({ kind: fc.constant('rectangular' as const), length, thickness, width }),
   fc.record({ kind: fc.constant('pin' as const), length, diameter }),
-  fc
-    .record({ length, baseThickness: thickness, tau: fraction, width })
-    .map(({ length: L, baseThickness, tau, width: w }) => ({ kind: 'trapezoidal' as const, length: L, baseThickness, tipThickness: tau * baseThickness, width: w })),
+  fc.record({ length, baseThickness: thickness, tau: fraction, width }).map(({ length: L, baseThickness, tau, width: w }) => ({
+    kind: 'trapezoidal' as const,
+    length: L,
+    baseThickness,
+    tipThickness: tau * baseThickness,
+    width: w,
+  })),
   fc.record({ kind: fc.constant('triangular' as const), length, baseThickness: thickness, width }),
   fc.record({ kind: fc.constant('parabolic-concave' as const), length, baseThickness: thickness, width }),
   fc.record({ kind: fc.constant('parabolic-convex' as const), length, baseThickness: thickness, width }),
@@ -106,7 +110,7 @@ export const finCaseArbitrary: fc.Arbitrary<LinearFinCase> = fc
     contact: fc.oneof(fc.constant(0), fc.double({ min: 1e-5, max: 1e-3, noNaN: true })),
   })
   .chain(({ profile, thetaBase, k, edges, contact }) =>
-    fc.record({ h: hArbitrary(lengthOf(profile)), tip: tipArbitrary(thetaBase) }).map(({ h, tip }) =>
-      linearFinCase({ profile, thetaBase, k, edges, contactResistance: contact, h, tip }),
-    ),
+    fc
+      .record({ h: hArbitrary(lengthOf(profile)), tip: tipArbitrary(thetaBase) })
+      .map(({ h, tip }) => linearFinCase({ profile, thetaBase, k, edges, contactResistance: contact, h, tip })),
   );
