@@ -1,8 +1,9 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/index.js';
+import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, type Solve2DReport } from '../../src/compare/index.js';
 import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
+import { requireModel2D } from '../model-coverage.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
 import { UsageError } from '../../src/errors.js';
 import { grid2dIssue } from '../../src/fd/index.js';
@@ -38,13 +39,12 @@ Examples:
       const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);
       if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
-        const unsupported = solve2dUnsupported(c);
-        if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
-        const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
+        requireModel2D(c);
+        const { report } = await runSolve2D(c, grid === undefined ? {} : { grid });
         io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;
       }
-      const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
+      const { report } = await runSolve(c, nodes === undefined ? {} : { nodes });
       io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
 }

@@ -1,9 +1,8 @@
 /**
- * What the linear check (check.ts) and the nonlinear check (check-nonlinear.ts) share: the options and the
- * outcome of `check`, the fd-1d study as a judged reference, the dimensionless groups and the flags. Its own
- * module so that neither check imports the other.
+ * The parts of `check` (check.ts) beside its pipeline: the options and the outcome, the fd-1d study as a
+ * judged reference, the dimensionless groups and the flags.
  */
-import { type Fin1DStudy, type Resolution, type ResolutionBudget, type Fin2DStudy } from '../fd/index.js';
+import type { FinStudy1D, FinStudy2D, RefinementStudy, Resolution, ResolutionBudget } from '../fd/index.js';
 import type { FinGeometry1D } from '../mesh/index.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import { designFlags } from './flags.js';
@@ -23,15 +22,17 @@ export interface CheckOptions {
 
 export interface CheckOutcome {
   report: CheckReport;
-  /** The 1-D solution (the reference, or the fd-1d model beside a 2-D reference); profiles for plots. */
-  oneD: Fin1DStudy;
-  /** The 2-D study when fd-2d is the reference (field for heat maps). */
-  twoD: Fin2DStudy | null;
+  /** The fd-1d study (the reference, or the fd-1d model beside a 2-D reference); profiles for plots. */
+  oneD: FinStudy1D;
+  /** The fd-2d study when fd-2d is the reference (field for heat maps). */
+  twoD: FinStudy2D | null;
 }
 
 /** The fd-1d study as a reference, judged against the resolution it reached. */
-export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
-  const ref = oneD.result;
+export function reference1D(oneD: FinStudy1D, resolution: Resolution, basis: EfficiencyBasis, extraNote = ''): ReferenceResult {
+  const ref = oneD.finest;
+  // A study (never a single grid) has its refinement.
+  const refinement = oneD.refinement as RefinementStudy;
   const grids =
     resolution.refinements > 0 || resolution.grading !== 'default grading' ? ` (${resolution.nodes.join(', ')} nodes, ${resolution.grading})` : '';
   return judgedReference(
@@ -39,12 +40,12 @@ export function reference1D(oneD: Fin1DStudy, resolution: Resolution, basis: Eff
       model: 'fd-1d',
       heatRate_W: ref.heatRate,
       effectiveness: ref.effectiveness,
-      discretizationError: oneD.study.gci,
+      discretizationError: refinement.gci,
       energyBalance: ref.energyBalance,
-      observedOrder: oneD.study.observedOrder,
+      observedOrder: refinement.observedOrder,
       grid: { nodes: ref.mesh.nodes },
       tipTemperature_degC: ref.tipTemperature_degC,
-      note: `1-D finite volumes, ${oneD.study.sizes.length} grids${grids}; ${oneD.study.note}${extraNote}`,
+      note: `1-D finite volumes, ${refinement.sizes.length} grids${grids}; ${refinement.note}${extraNote}`,
     },
     resolution1D(resolution),
     basis,

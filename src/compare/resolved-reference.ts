@@ -5,11 +5,11 @@
  * 0.9 tolerance cannot be an `marginal` in truth by more than the last tenth (common practice, no source:
  * the usual advice is a numerical error an order of magnitude below the quantity one judges).
  *
- * fd-1d: the study is refined first (fd/resolve-study1d.ts: grading to the decay length 1/m, doubling
+ * fd-1d: the study is refined first (fd/study/resolve-study1d.ts, resolveFinStudy1D: grading to the decay length 1/m, doubling
  * within a budget). fd-2d: the study's own grids; where they do not reach the target the check falls back
  * to a resolved fd-1d reference (an automatic reference) or gives `unresolved` verdicts (a 2-D reference asked for).
  */
-import type { Fin2DStudy, Resolution } from '../fd/index.js';
+import type { FinStudy2D, Resolution } from '../fd/index.js';
 import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
 import type { ReferenceResolution, ReferenceResult, UnjudgedReference } from './types.js';
 
@@ -24,7 +24,7 @@ export function resolution1D(r: Resolution): ReferenceResolution {
   return { target: r.target, refinements: r.refinements, grids: r.nodes.map((n) => `${n}`), grading: r.grading, budget: r.budget };
 }
 
-export function resolution2D(study: Fin2DStudy, target: number): ReferenceResolution {
+export function resolution2D(study: FinStudy2D, target: number): ReferenceResolution {
   return {
     target,
     refinements: 0,
@@ -50,7 +50,7 @@ export function judgedReference(ref: UnjudgedReference, resolution: ReferenceRes
  * The fd-2d reference when it is resolved; under an automatic reference an unresolved 2-D study hands the
  * reference to fd-1d (the note says so), with a 2-D reference asked for it stays and its verdicts are unresolved.
  */
-export function choose2DReference<T extends { reference: UnjudgedReference; study: Fin2DStudy }>(
+export function choose2DReference<T extends { reference: UnjudgedReference; study: FinStudy2D }>(
   twoD: T | null,
   required: boolean,
   target: number,

@@ -5,7 +5,7 @@
  */
 import { INFINITE_TIP_NOTE, tipTemperatureNote } from './efficiency-basis.js';
 import type { Case } from '../case/index.js';
-import { solveFin1D, studyFin1D, type Fin1DResult, isLinearFinCase, solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/index.js';
+import { finProblem, solveFin, studyFin, type FinStudy1D } from '../fd/index.js';
 
 /**
  * One point of a temperature profile: x_m, the distance along the fin from the base (m), or for annular
@@ -46,16 +46,12 @@ export interface SolveReport {
 /** At most this many profile points in the output; every k-th node, never interpolated. */
 const MAX_PROFILE_POINTS = 401;
 
-export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; result: Fin1DResult } {
+export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ report: SolveReport; study: FinStudy1D }> {
   const single = opts.nodes !== undefined;
-  // Linear fins: one tridiagonal solve per grid; nonlinear fins (power-law h, radiation, k(T)): Newton.
-  const linear = isLinearFinCase(c);
-  const study = single ? null : linear ? studyFin1D(c) : studyNonlinearFin1D(c);
-  const result: Fin1DResult = study
-    ? study.result
-    : linear
-      ? solveFin1D(c, { nodes: opts.nodes as number })
-      : solveNonlinearFin1D(c, { nodes: opts.nodes as number });
+  // The one study: one direct solve per grid for a linear fin, Newton's method for a nonlinear one.
+  const problem = finProblem(c);
+  const study = (opts.nodes === undefined ? await studyFin(problem, { model: '1d' }) : await solveFin(problem, { model: '1d', nodes: opts.nodes })) as FinStudy1D;
+  const result = study.finest;
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;
@@ -70,7 +66,7 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
   for (let i = 0; i < n; i += stride) profile.push(point(i));
   if ((n - 1) % stride !== 0) profile.push(point(n - 1));
   return {
-    result,
+    study,
     report: {
       case: c.name,
       model: 'fd-1d',
@@ -82,8 +78,8 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
       baseTemperature_degC: (result.theta[0] as number) + ambient,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: study ? study.study.gci : null,
-      observedOrder: study ? study.study.observedOrder : null,
+      discretizationError: study.discretizationError,
+      observedOrder: study.refinement === null ? null : study.refinement.observedOrder,
       profileStride: stride,
       profile,
     },
