@@ -34,14 +34,7 @@ export interface Reference2D {
  * The fd-2d reference from the 2-D study of the case and its fd-1d study. `effectivenessScale` is the bare
  * base's heat (W), `solve1D` the check's fd-1d solve of a variant, `extraNote` is appended to the note.
  */
-export function reference2D(
-  c: Case,
-  oneD: FinStudy1D,
-  study: FinStudy2D,
-  effectivenessScale: number,
-  solve1D: Solve1D,
-  extraNote: string,
-): Reference2D {
+export function reference2D(c: Case, oneD: FinStudy1D, study: FinStudy2D, effectivenessScale: number, solve1D: Solve1D, extraNote: string): Reference2D {
   const edges = sideEdgeCorrection(c, oneD, solve1D);
   const { cooledEdges, insulatedHeatRate1D_W: insulated1d } = edges;
   const heatRate = study.heatRate_W + edges.edgeHeatRate_W;

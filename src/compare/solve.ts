@@ -50,7 +50,9 @@ export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ rep
   const single = opts.nodes !== undefined;
   // The one study: one direct solve per grid for a linear fin, Newton's method for a nonlinear one.
   const problem = finProblem(c);
-  const study = (opts.nodes === undefined ? await studyFin(problem, { model: '1d' }) : await solveFin(problem, { model: '1d', nodes: opts.nodes })) as FinStudy1D;
+  const study = (
+    opts.nodes === undefined ? await studyFin(problem, { model: '1d' }) : await solveFin(problem, { model: '1d', nodes: opts.nodes })
+  ) as FinStudy1D;
   const result = study.finest;
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));

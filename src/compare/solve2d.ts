@@ -70,7 +70,9 @@ function edgeCorrection(c: Case, solvers: GridSolvers): SideEdgeCorrection | nul
 export async function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): Promise<{ report: Solve2DReport; study: FinStudy2D }> {
   const problem = finProblem(c);
   const solvers = await gridSolvers(problem);
-  const study = (opts.grid ? solveFinWith(solvers, problem, { model: '2d', ...opts.grid }) : studyFinWith(solvers, problem, { model: '2d' })) as FinStudy2D;
+  const study = (
+    opts.grid ? solveFinWith(solvers, problem, { model: '2d', ...opts.grid }) : studyFinWith(solvers, problem, { model: '2d' })
+  ) as FinStudy2D;
   const result = study.finest;
   const radial = isRadial(c);
   // Annular fins: the 2-D grid's x is the radius already (from r1 to r2).
