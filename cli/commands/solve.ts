@@ -49,6 +49,11 @@ Examples:
     });
 }
 
+/** The effectiveness line of a solve: the number, or n/a with the reason. */
+function effectivenessLine(r: { effectiveness: number | null; effectivenessNote: string | null }): string {
+  return `  effectiveness  ${r.effectiveness === null ? `n/a (${r.effectivenessNote ?? ''})` : r.effectiveness.toPrecision(4)}`;
+}
+
 /** '  r1' on the first row and '  r2' on the last row of a radial profile table. */
 function radialMark(radial: boolean, row: number, rows: number): string {
   if (!radial) return '';
@@ -65,7 +70,7 @@ function formatSolve(r: SolveReport, description: string[]): string {
   lines.push(`Model ${r.model}, ${r.grid.nodes} nodes`);
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
   lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
-  lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
+  lines.push(effectivenessLine(r));
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   const pts = r.profile;
   const radial = pts[0] !== undefined && 'r_m' in pts[0];
@@ -94,8 +99,9 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
       `    side edges   ${r.edgesHeatRate_W >= 0 ? '+' : ''}${r.edgesHeatRate_W.toPrecision(4)} W  (the cooled side edges, from fd-1d: Q cooled / Q insulated = ${(r.heatRate_W / r.sectionHeatRate_W).toFixed(5)})`,
     );
   }
-  if (r.efficiency !== null) lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
-  lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
+  if (r.efficiency !== null || r.efficiencyNote !== null)
+    lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
+  lines.push(effectivenessLine(r));
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   if (r.newton) {
     const grids =

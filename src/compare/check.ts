@@ -42,6 +42,7 @@ import { nonlinearRows } from './nonlinear-ledger.js';
 import { reference2D, type Reference2D, type Solve1D } from './reference2d.js';
 import { evaluateShortcuts } from './shortcuts.js';
 import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './efficiency-basis.js';
+import { effectivenessBasisOf } from './effectiveness-basis.js';
 import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
 import type { NotApplicable } from './types.js';
 
@@ -93,7 +94,7 @@ function check(c: Case, problem: FinProblem, solvers: GridSolvers, opts: CheckOp
   }
   const eq = eqFirst as EquivalentUniformFin;
   // The heat the bare base area would lose at the base temperature (radiation as an equivalent h), W.
-  const effectivenessScale = eq.hBase * eq.baseArea * eq.thetaBase;
+  const effectiveness = effectivenessBasisOf(eq.hBase * eq.baseArea * eq.thetaBase);
 
   const solve1D: Solve1D = (variant, nodes) => solveFinWith(solvers, finProblem(variant), { model: '1d', nodes }) as FinStudy1D;
   let candidate: Reference2D | null = null;
@@ -104,7 +105,7 @@ function check(c: Case, problem: FinProblem, solvers: GridSolvers, opts: CheckOp
     if (coverage.ok && gridIssue === null) {
       const study = studyFinWith(solvers, problem, { model: '2d' }) as FinStudy2D;
       const steps = study.newton === null ? '' : `; ${study.newton.stepsPerGrid.join('/')} steps, coarsest to finest grid`;
-      candidate = reference2D(c, oneD, study, effectivenessScale, solve1D, `${newtonNote(study, '1e-10', steps)}${radiationNote}`);
+      candidate = reference2D(c, oneD, study, effectiveness, solve1D, `${newtonNote(study, '1e-10', steps)}${radiationNote}`);
     } else if (!coverage.ok) {
       if (opts.reference === '2d') throw new ModelNotApplicableError('fd-2d', coverage.reason);
       outside2D = `; the 2-D model does not cover this fin (${coverage.reason})`;
@@ -117,8 +118,8 @@ function check(c: Case, problem: FinProblem, solvers: GridSolvers, opts: CheckOp
   const basis = twoD ? efficiencyBasis(c, twoD.idealHeatRate, TWO_D_SURFACE) : efficiencyBasis(c, ref.idealHeatRate, ONE_D_SURFACE);
   const finestSteps = oneD.newton === null ? '' : `, ${oneD.newton.stepsPerGrid[oneD.newton.stepsPerGrid.length - 1] ?? 0} steps on the finest grid`;
   const reference = twoD
-    ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis)
-    : reference1D(oneD, resolution, basis, `${newtonNote(oneD, '1e-12', finestSteps)}${outside2D}${fallback}${radiationNote}`);
+    ? judgedReference(twoD.reference, resolution2D(twoD.study, target), basis, effectiveness)
+    : reference1D(oneD, resolution, basis, effectiveness, `${newtonNote(oneD, '1e-12', finestSteps)}${outside2D}${fallback}${radiationNote}`);
 
   const fd1d = twoD
     ? [
@@ -136,7 +137,7 @@ function check(c: Case, problem: FinProblem, solvers: GridSolvers, opts: CheckOp
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, basis, effectivenessScale, opts.tolerance);
+  const models = modelRows([...inputs, ...fd1d], reference, basis, effectiveness, opts.tolerance);
   reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
   const solveLedger = (variant: Case): number => solve1D(variant, LEDGER_NODES).heatRate_W;

@@ -13,6 +13,7 @@
  */
 import type { Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D, RefinementStudy } from '../fd/index.js';
+import { effectivenessOf, type EffectivenessBasis } from './effectiveness-basis.js';
 import type { AssumptionRow, UnjudgedReference } from './types.js';
 
 /** The fd-1d solution of a variant of the case on one grid of `nodes` nodes (the check's own solvers). */
@@ -31,10 +32,17 @@ export interface Reference2D {
 }
 
 /**
- * The fd-2d reference from the 2-D study of the case and its fd-1d study. `effectivenessScale` is the bare
+ * The fd-2d reference from the 2-D study of the case and its fd-1d study. `effectiveness` holds the bare
  * base's heat (W), `solve1D` the check's fd-1d solve of a variant, `extraNote` is appended to the note.
  */
-export function reference2D(c: Case, oneD: FinStudy1D, study: FinStudy2D, effectivenessScale: number, solve1D: Solve1D, extraNote: string): Reference2D {
+export function reference2D(
+  c: Case,
+  oneD: FinStudy1D,
+  study: FinStudy2D,
+  effectiveness: EffectivenessBasis,
+  solve1D: Solve1D,
+  extraNote: string,
+): Reference2D {
   const edges = sideEdgeCorrection(c, oneD, solve1D);
   const { cooledEdges, insulatedHeatRate1D_W: insulated1d } = edges;
   const heatRate = study.heatRate_W + edges.edgeHeatRate_W;
@@ -50,7 +58,7 @@ export function reference2D(c: Case, oneD: FinStudy1D, study: FinStudy2D, effect
   const reference: UnjudgedReference = {
     model: 'fd-2d',
     heatRate_W: heatRate,
-    effectiveness: heatRate / effectivenessScale,
+    effectiveness: effectivenessOf(heatRate, effectiveness),
     // The edge factor's own error is fd-1d's (GCI ~1e-8), added to the 2-D GCI.
     discretizationError: refinement.gci + edges.discretizationError,
     energyBalance: study.energyBalance,

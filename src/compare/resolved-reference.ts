@@ -11,6 +11,7 @@
  */
 import type { FinStudy2D, Resolution } from '../fd/index.js';
 import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
+import type { EffectivenessBasis } from './effectiveness-basis.js';
 import type { ReferenceResolution, ReferenceResult, UnjudgedReference } from './types.js';
 
 /** The share of the tolerance the reference's discretisation error may use. */
@@ -35,15 +36,29 @@ export function resolution2D(study: FinStudy2D, target: number): ReferenceResolu
 }
 
 /**
- * The reference with its resolution (resolved when its GCI is at most the target; a NaN GCI is not) and its
- * efficiency on the check's one surface (efficiency-basis.ts).
+ * The reference with its resolution (resolved when its GCI is at most the target; a NaN GCI is not), its
+ * efficiency on the check's one surface (efficiency-basis.ts) and why its effectiveness is null, if it is
+ * (effectiveness-basis.ts).
  */
-export function judgedReference(ref: UnjudgedReference, resolution: ReferenceResolution, basis: EfficiencyBasis): ReferenceResult {
+export function judgedReference(
+  ref: UnjudgedReference,
+  resolution: ReferenceResolution,
+  basis: EfficiencyBasis,
+  effectiveness: EffectivenessBasis,
+): ReferenceResult {
   const resolved = ref.discretizationError <= resolution.target;
   const words = resolved
     ? ''
     : `; NOT RESOLVED: estimated error ${ref.discretizationError.toExponential(1)} > ${resolution.target.toExponential(1)} (a tenth of the tolerance) after ${resolution.refinements} refinements (${resolution.budget}): verdicts are 'unresolved'`;
-  return { ...ref, efficiency: efficiencyOf(ref.heatRate_W, basis), efficiencyNote: basis.note, note: `${ref.note}${words}`, resolved, resolution };
+  return {
+    ...ref,
+    efficiency: efficiencyOf(ref.heatRate_W, basis),
+    efficiencyNote: basis.note,
+    effectivenessNote: effectiveness.note,
+    note: `${ref.note}${words}`,
+    resolved,
+    resolution,
+  };
 }
 
 /**

@@ -3,7 +3,8 @@
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
-import { INFINITE_TIP_NOTE, tipTemperatureNote } from './efficiency-basis.js';
+import { efficiencyBasis, ONE_D_SURFACE } from './efficiency-basis.js';
+import { definedEffectiveness, effectivenessBasis } from './effectiveness-basis.js';
 import type { Case } from '../case/index.js';
 import { finProblem, solveFin, studyFin, type FinStudy1D } from '../fd/index.js';
 
@@ -28,11 +29,14 @@ export interface SolveReport {
   model: 'fd-1d';
   grid: { nodes: number };
   heatRate_W: number;
-  /** Q / Q_ideal; null for an infinite tip (no finite surface, see efficiencyNote). */
+  /** Q / Q_ideal; null for an infinite tip (no finite surface) or a surface that would both lose and gain heat at the base temperature (see efficiencyNote). */
   efficiency: number | null;
   /** Why the efficiency is null or may exceed 1; null otherwise (efficiency-basis.ts). */
   efficiencyNote: string | null;
-  effectiveness: number;
+  /** Q / Q_bare; null where h is 0 at the base (see effectivenessNote). */
+  effectiveness: number | null;
+  /** Why the effectiveness is null; null otherwise (effectiveness-basis.ts). */
+  effectivenessNote: string | null;
   baseTemperature_degC: number;
   tipTemperature_degC: number;
   energyBalance: number;
@@ -54,6 +58,8 @@ export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ rep
     opts.nodes === undefined ? await studyFin(problem, { model: '1d' }) : await solveFin(problem, { model: '1d', nodes: opts.nodes })
   ) as FinStudy1D;
   const result = study.finest;
+  const efficiency = efficiencyBasis(c, result.idealHeatRate, ONE_D_SURFACE);
+  const effectiveness = effectivenessBasis(c);
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;
@@ -74,9 +80,10 @@ export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ rep
       model: 'fd-1d',
       grid: { nodes: n },
       heatRate_W: result.heatRate,
-      efficiency: c.convection.tip.kind === 'infinite' ? null : result.efficiency,
-      efficiencyNote: c.convection.tip.kind === 'infinite' ? INFINITE_TIP_NOTE : tipTemperatureNote(c),
-      effectiveness: result.effectiveness,
+      efficiency: efficiency.idealHeatRate === null ? null : result.efficiency,
+      efficiencyNote: efficiency.note,
+      effectiveness: definedEffectiveness(result.effectiveness, effectiveness),
+      effectivenessNote: effectiveness.note,
       baseTemperature_degC: (result.theta[0] as number) + ambient,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,

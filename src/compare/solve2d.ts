@@ -22,6 +22,8 @@ import {
 } from '../fd/index.js';
 import { isStraight, sideEdgeCorrection, type SideEdgeCorrection } from './reference2d.js';
 import { isRadial, type ProfilePoint } from './solve.js';
+import { efficiencyBasis, TWO_D_SURFACE } from './efficiency-basis.js';
+import { definedEffectiveness, effectivenessBasis } from './effectiveness-basis.js';
 
 /** Newton's method on the grids of a nonlinear fin: steps per grid, coarsest first, and the finest (or only) grid's report. */
 export type Solve2DNewton = NewtonStatistics;
@@ -40,9 +42,17 @@ export interface Solve2DReport {
   sectionHeatRate_W: number;
   /** heatRate_W - sectionHeatRate_W: the cooled side edges (fd-1d ratio, see reference2d.ts); 0 otherwise, W. */
   edgesHeatRate_W: number;
-  /** Whole fin (as heatRate_W): Q / Q with every cooled surface at the base temperature. */
+  /**
+   * Whole fin (as heatRate_W): Q / Q with every cooled surface at the base temperature; null for an infinite
+   * tip or a surface that would both lose and gain heat at the base temperature (see efficiencyNote).
+   */
   efficiency: number | null;
-  effectiveness: number;
+  /** Why the efficiency is null or may exceed 1; null otherwise (efficiency-basis.ts). */
+  efficiencyNote: string | null;
+  /** Q / Q_bare; null where h is 0 at the base (see effectivenessNote). */
+  effectiveness: number | null;
+  /** Why the effectiveness is null; null otherwise (effectiveness-basis.ts). */
+  effectivenessNote: string | null;
   baseTemperature_degC: number;
   tipTemperature_degC: number;
   energyBalance: number;
@@ -82,6 +92,9 @@ export async function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: numbe
   const heatRate = result.heatRate_W + (correction ? correction.edgeHeatRate_W : 0);
   const factor = heatRate / result.heatRate_W;
   const sectionIdeal = result.efficiency === null ? null : result.heatRate_W / result.efficiency;
+  // The whole fin's Q_ideal: the section's surface plus the cooled side edges' (check's basis).
+  const efficiency = efficiencyBasis(c, sectionIdeal === null ? null : sectionIdeal + (correction ? correction.edgesIdealHeatRate_W : 0), TWO_D_SURFACE);
+  const ideal = efficiency.idealHeatRate;
   const errors2D = study.discretizationError;
   return {
     study,
@@ -92,8 +105,10 @@ export async function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: numbe
       heatRate_W: heatRate,
       sectionHeatRate_W: result.heatRate_W,
       edgesHeatRate_W: heatRate - result.heatRate_W,
-      efficiency: sectionIdeal === null ? null : heatRate / (sectionIdeal + (correction ? correction.edgesIdealHeatRate_W : 0)),
-      effectiveness: result.effectiveness * factor,
+      efficiency: ideal === null ? null : heatRate / ideal,
+      efficiencyNote: efficiency.note,
+      effectiveness: definedEffectiveness(result.effectiveness * factor, effectivenessBasis(c)),
+      effectivenessNote: effectivenessBasis(c).note,
       baseTemperature_degC: result.baseTemperature_degC,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
