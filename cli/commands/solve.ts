@@ -40,11 +40,11 @@ Examples:
       if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
         requireModel2D(c);
-        const { report } = await runSolve2D(c, grid === undefined ? {} : { grid });
+        const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
         io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;
       }
-      const { report } = await runSolve(c, nodes === undefined ? {} : { nodes });
+      const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
       io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
 }

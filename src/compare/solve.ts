@@ -6,7 +6,7 @@
 import { efficiencyBasis, ONE_D_SURFACE } from './efficiency-basis.js';
 import { definedEffectiveness, effectivenessBasis } from './effectiveness-basis.js';
 import type { Case } from '../case/index.js';
-import { finProblem, solveFin, studyFin, type FinStudy1D } from '../fd/index.js';
+import { finProblem, gridSolversNow, solveFinWith, studyFinWith, type FinStudy1D } from '../fd/index.js';
 
 /**
  * One point of a temperature profile: x_m, the distance along the fin from the base (m), or for annular
@@ -50,12 +50,13 @@ export interface SolveReport {
 /** At most this many profile points in the output; every k-th node, never interpolated. */
 const MAX_PROFILE_POINTS = 401;
 
-export async function runSolve(c: Case, opts: { nodes?: number }): Promise<{ report: SolveReport; study: FinStudy1D }> {
+export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; study: FinStudy1D } {
   const single = opts.nodes !== undefined;
   // The one study: one direct solve per grid for a linear fin, Newton's method for a nonlinear one.
   const problem = finProblem(c);
+  const solvers = gridSolversNow(problem);
   const study = (
-    opts.nodes === undefined ? await studyFin(problem, { model: '1d' }) : await solveFin(problem, { model: '1d', nodes: opts.nodes })
+    opts.nodes === undefined ? studyFinWith(solvers, problem, { model: '1d' }) : solveFinWith(solvers, problem, { model: '1d', nodes: opts.nodes })
   ) as FinStudy1D;
   const result = study.finest;
   const efficiency = efficiencyBasis(c, result.idealHeatRate, ONE_D_SURFACE);

@@ -11,7 +11,7 @@
 import type { Case } from '../case/index.js';
 import {
   finProblem,
-  gridSolvers,
+  gridSolversNow,
   solveFinWith,
   studyFinWith,
   type Fin2DLine,
@@ -77,9 +77,9 @@ function edgeCorrection(c: Case, solvers: GridSolvers): SideEdgeCorrection | nul
   return sideEdgeCorrection(c, oneD, (variant, nodes) => solveFinWith(solvers, finProblem(variant), { model: '1d', nodes }) as FinStudy1D);
 }
 
-export async function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): Promise<{ report: Solve2DReport; study: FinStudy2D }> {
+export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } }): { report: Solve2DReport; study: FinStudy2D } {
   const problem = finProblem(c);
-  const solvers = await gridSolvers(problem);
+  const solvers = gridSolversNow(problem);
   const study = (
     opts.grid ? solveFinWith(solvers, problem, { model: '2d', ...opts.grid }) : studyFinWith(solvers, problem, { model: '2d' })
   ) as FinStudy2D;

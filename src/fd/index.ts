@@ -24,6 +24,7 @@ export type { FinGrid, FinStudyOptions } from './study/study-fin.js';
 export { alongFin, solveFin, solveFinWith, studyFin, studyFinWith, studyGridIssue } from './study/study-fin.js';
 export type { GridSolvers } from './study/grid-solvers.js';
 export { gridSolvers } from './study/grid-solvers.js';
+export { gridSolversNow } from './study/grid-solvers-now.js';
 export type { RefinementStudy } from './study/refinement.js';
 export { richardsonGci, fitObservedOrder } from './study/refinement.js';
 export type { NewtonReport } from './newton/newton-report.js';
