@@ -30,7 +30,17 @@ import type { Mesh1D } from '../../mesh/index.js';
 import { contactConductance, type BaseBoundary, type TipBoundary } from './boundary.js';
 import { hAt } from '../problem/convection.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
-import { convectedExcess, equilibriumExcess, faceFlux, faceFluxSlope, radiationGap, type FaceLaw } from '../problem/surface-law.js';
+import {
+  ambientSlope,
+  ambientVariable,
+  convectedExcess,
+  equilibriumExcess,
+  faceFlux,
+  faceFluxAmbientSlope,
+  faceFluxSlope,
+  radiationGap,
+  type FaceLaw,
+} from '../problem/surface-law.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 
 export interface NonlinearBoundaries {
@@ -69,8 +79,11 @@ export function nonlinearBoundaries(problem: FinProblem, mesh: Mesh1D, law: Face
   };
 }
 
-/** Q_tip and dQ_tip/dθ_{n-1} for the tips that are not a fixed temperature (0 for those). */
-export function tipLoss(b: NonlinearBoundaries, thetaTip: number, out: FlowAndSlope): FlowAndSlope {
+/**
+ * Q_tip and dQ_tip/dθ_{n-1} for the tips that are not a fixed temperature (0 for those); with `ambient` the
+ * derivative is taken with respect to the tip node's ambient variable u (problem/surface-law.ts) instead.
+ */
+export function tipLoss(b: NonlinearBoundaries, thetaTip: number, out: FlowAndSlope, ambient = false): FlowAndSlope {
   const tip = b.tip;
   switch (tip.kind) {
     case 'adiabatic':
@@ -82,16 +95,25 @@ export function tipLoss(b: NonlinearBoundaries, thetaTip: number, out: FlowAndSl
       const A = b.tipArea;
       if (tip.h === 'local') {
         out.value = A * faceFlux(b.law, b.hxTip, thetaTip);
-        out.slope = A * faceFluxSlope(b.law, b.hxTip, thetaTip);
+        out.slope = ambient
+          ? A * faceFluxAmbientSlope(b.law, b.hxTip, thetaTip, ambientVariable(b.law, thetaTip))
+          : A * faceFluxSlope(b.law, b.hxTip, thetaTip);
       } else {
         const radiated = b.law.radiative === 0 ? 0 : b.law.radiative * radiationGap(b.law, thetaTip);
         out.value = A * (tip.h * thetaTip + radiated);
         out.slope = A * (tip.h + faceFluxSlope(b.law, 0, thetaTip));
+        if (ambient) out.slope *= ambientSlope(b.law, ambientVariable(b.law, thetaTip));
       }
       return out;
     }
     case 'infinite':
-      return continuation(b, thetaTip, out);
+      continuation(b, thetaTip, out);
+      if (ambient) {
+        // dQ/du = dQ/dθ dθ/du: dθ/du -> 0 faster than dQ/dθ grows as θ -> 0 (n > -1); 0 when it underflows.
+        const chain = ambientSlope(b.law, ambientVariable(b.law, thetaTip));
+        out.slope = chain === 0 ? 0 : out.slope * chain;
+      }
+      return out;
     default: {
       const never: never = tip;
       throw new Error(`unknown tip condition ${JSON.stringify(never)}`);

@@ -40,6 +40,7 @@ export function newtonSetup(problem: FinProblem, mesh: Mesh1D): NewtonSetup {
     boundaries: nonlinearBoundaries(problem, mesh, law, kirchhoff),
     linear: isLinearProblem(problem),
     keepSign: problem.exponent < 0 && !sinkAcrossAmbient,
+    ambientVariables: problem.exponent < 0,
   };
 }
 

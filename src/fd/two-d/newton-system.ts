@@ -81,6 +81,8 @@ export interface Newton2DOutcome {
 }
 
 interface State {
+  /** The unknowns of the driver: the drops themselves. */
+  readonly unknowns: Float64Array;
   readonly drop: Float64Array;
   readonly theta: Float64Array;
   readonly potential: Float64Array;
@@ -105,8 +107,10 @@ function createState(setup: Newton2DSetup): State {
     const t = setup.ops.terms;
     return { base: new Float64Array(t.base.nodes.length), face: new Float64Array(t.face.nodes.length), tip: new Float64Array(t.tip.nodes.length) };
   };
+  const drop = new Float64Array(n);
   return {
-    drop: new Float64Array(n),
+    unknowns: drop,
+    drop,
     theta: new Float64Array(n),
     potential: new Float64Array(n),
     ratio: new Float64Array(n),
