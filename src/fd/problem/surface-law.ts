@@ -118,10 +118,19 @@ export function faceFluxAmbientSlope(law: FaceLaw, hx: number, theta: number, u:
   return convected + 4 * law.radiative * T * T * T * ambientSlope(law, u);
 }
 
+/** Nodes solved for their ambient variable (header): flag 1, the variable u, and the law that defines u. */
+export interface AmbientNodes {
+  readonly flags: Uint8Array;
+  readonly u: Float64Array;
+  readonly law: FaceLaw;
+}
+
 /**
  * Losses of every CV and their derivatives, W and W/K: loss_i = G_i g θ_i + ε σ S_i (T_i^4 - T_s^4).
- * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2). With `ambient`, a node
- * flagged 1 gets its derivative with respect to its ambient variable u instead (W), u_i = ambientVariable(θ_i).
+ * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2). With `ambient`, a flagged
+ * node's convective loss is formed from its u (G_i |θ_b| u_i: exact where θ = θ_b |u|^(1/(n+1)) underflows) and its
+ * derivative is taken with respect to u (W). `ambient.law` defines u (a 2-D tip with its own h has exponent 0 but
+ * the faces' variable); entries are index-aligned with `theta`.
  */
 export function cvLosses(
   law: FaceLaw,
@@ -130,32 +139,37 @@ export function cvLosses(
   theta: Float64Array,
   loss: Float64Array,
   slope: Float64Array,
-  ambient?: Uint8Array,
+  ambient?: AmbientNodes,
 ): void {
   const n = theta.length;
   const { exponent, radiative, ambient_K: Ta, surroundings_K: Ts } = law;
   const scale = law.inverseBaseExcess;
+  const sameVariable = ambient !== undefined && ambient.law.exponent === exponent;
   for (let i = 0; i < n; i++) {
     const t = theta[i] as number;
     const Gi = G[i] as number;
+    const inAmbient = ambient !== undefined && ambient.flags[i] === 1;
+    const u = inAmbient ? (ambient.u[i] as number) : 0;
+    const chain = inAmbient ? ambientSlope(ambient.law, u) : 1;
     // A CV without convective surface (G_i = 0: the node at a sharp or cusped tip) exchanges nothing: with
     // n < 0 at θ = 0, g is infinite and 0 * g would put NaN into the Newton matrix (fuzz finding: a convex
     // parabolic fin, n = -0.95, ended in a NaN pivot).
-    let value = exponent === 0 ? Gi * t : Gi === 0 ? 0 : Gi * convectedExcess(law, t);
-    const inAmbient = ambient !== undefined && ambient[i] === 1;
-    let derivative = inAmbient
-      ? Gi / scale
-      : exponent === 0
-        ? Gi
-        : Gi === 0
-          ? 0
-          : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * Math.pow(Math.abs(t) * scale, exponent));
+    let value: number;
+    let derivative: number;
+    if (inAmbient) {
+      // The law in u: G |θ_b| u (the faces' law), or G θ(u) (exponent 0: linear in θ).
+      value = sameVariable ? (Gi * u) / scale : Gi * t;
+      derivative = sameVariable ? Gi / scale : Gi * chain;
+    } else {
+      value = exponent === 0 ? Gi * t : Gi === 0 ? 0 : Gi * convectedExcess(law, t);
+      derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * Math.pow(Math.abs(t) * scale, exponent));
+    }
     if (radiative !== 0) {
       const T = Ta + t;
       const Si = radiative * (S[i] as number);
       value += Si * ((T - Ts) * (T + Ts) * (T * T + Ts * Ts));
       const radiationSlope = 4 * Si * T * T * T;
-      derivative += inAmbient ? radiationSlope * ambientSlope(law, ambientVariable(law, t)) : radiationSlope;
+      derivative += inAmbient ? radiationSlope * chain : radiationSlope;
     }
     loss[i] = value;
     slope[i] = derivative;
