@@ -20,10 +20,6 @@ const known: KnownClass[] = [
     matches: (p, f) => (f.h === 'linear' || f.h === 'points') && /effectiveness is null|effectiveness" contains|"Infinity"/.test(p),
   },
   {
-    file: 'power-law-near-minus-one-energy-balance.yaml',
-    matches: (p, f) => f.nonlinear && /energyBalance = .*not small|energyBalance = .* > 1e-8/.test(p),
-  },
-  {
     file: 'surroundings-hotter-annular.yaml',
     matches: (p, f) => f.radiates && (/^biot = .* < 0/.test(p) || /^mL is null/.test(p)),
   },
