@@ -27,6 +27,7 @@ export { gridSolvers } from './study/grid-solvers.js';
 export type { RefinementStudy } from './study/refinement.js';
 export { richardsonGci, fitObservedOrder } from './study/refinement.js';
 export type { NewtonReport } from './newton/newton-report.js';
+export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView } from './three-d/sink-study-types.js';
 
 export type { Fin1DResult } from './one-d/linear-solve.js';
 export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';
