@@ -12,7 +12,7 @@ import { ModelNotApplicableError } from '../../errors.js';
 import type { ConductanceBuilder } from '../linear-algebra/csr.js';
 import { hAt } from '../problem/convection.js';
 import { finIntegrals } from './fin-integrals.js';
-import type { FinAssembly, TermLists } from './sink-system.js';
+import type { FinAssembly, TermLists } from './heat-terms.js';
 import type { SinkProblem } from './sink-problem.js';
 
 export function assembleFinCells(problem: SinkProblem, grid: SinkGrid, firstNode: number, builder: ConductanceBuilder, terms: TermLists): FinAssembly {

@@ -17,7 +17,7 @@ import type { SinkGrid } from '../../mesh/index.js';
 import type { ConductanceBuilder } from '../linear-algebra/csr.js';
 import { hAt } from '../problem/convection.js';
 import { finIntegrals } from './fin-integrals.js';
-import type { FinAssembly, TermLists } from './sink-system.js';
+import type { FinAssembly, TermLists } from './heat-terms.js';
 import type { SinkProblem } from './sink-problem.js';
 
 export function assembleFinSheets(problem: SinkProblem, grid: SinkGrid, firstNode: number, builder: ConductanceBuilder, terms: TermLists): FinAssembly {

@@ -13,7 +13,8 @@
 import type { SinkGrid } from '../../mesh/index.js';
 import { sparsePcg } from '../linear-algebra/sparse-pcg.js';
 import { sinkMultigrid } from '../linear-algebra/sink-multigrid.js';
-import { PLATE_TOP, UNDERSIDE, type SinkSystem } from './sink-system.js';
+import { PLATE_TOP, UNDERSIDE } from './heat-terms.js';
+import type { SinkSystem } from './sink-system.js';
 import type { SinkProblem } from './sink-problem.js';
 
 /** Relative residual target: the energy balance of the result is below it (see sparse-pcg.ts). */

@@ -20,6 +20,7 @@
  */
 import type { SinkGrid } from '../../mesh/index.js';
 import { ConductanceBuilder, type CsrMatrix } from '../linear-algebra/csr.js';
+import { PLATE_TOP, TermLists, UNDERSIDE, type HeatTerms, type RootTerms } from './heat-terms.js';
 import type { SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { LineSet } from '../linear-algebra/line-relaxation.js';
 import type { Prolongation } from '../linear-algebra/prolongation.js';
@@ -28,27 +29,8 @@ import { assembleFinSheets } from './fin-sheet-assembly.js';
 import type { SinkProblem } from './sink-problem.js';
 
 export type FinRepresentation = 'sheet' | 'cells';
-
-/** Owners of loss terms that are not fins. */
-export const PLATE_TOP = -1;
-export const UNDERSIDE = -2;
-
-export interface HeatTerms {
-  node: Int32Array;
-  g: Float64Array;
-  /** theta of the fixed temperature the term leads to (0: the ambient; a prescribed tip: its excess). */
-  fixed: Float64Array;
-  owner: Int32Array;
-}
-
-export interface RootTerms {
-  plate: Int32Array;
-  fin: Int32Array;
-  /** The half plate cell's and the fin's half layer's conductances (in series). */
-  gPlate: Float64Array;
-  gFin: Float64Array;
-  owner: Int32Array;
-}
+export { PLATE_TOP, UNDERSIDE };
+export type { FinAssembly, HeatTerms, RootTerms } from './heat-terms.js';
 
 export interface SinkSystem {
   grid: SinkGrid;
@@ -69,45 +51,6 @@ export interface SinkSystem {
   footprintOwner: Int32Array;
   /** Heat put in by the sources, W. */
   heatIn: number;
-}
-
-/** Growing lists of heat terms during assembly. */
-export class TermLists {
-  readonly lossNode: number[] = [];
-  readonly lossG: number[] = [];
-  readonly lossFixed: number[] = [];
-  readonly lossOwner: number[] = [];
-  readonly rootPlate: number[] = [];
-  readonly rootFin: number[] = [];
-  readonly rootGPlate: number[] = [];
-  readonly rootGFin: number[] = [];
-  readonly rootOwner: number[] = [];
-
-  constructor(
-    private readonly builder: ConductanceBuilder,
-    private readonly rhs: Float64Array,
-  ) {}
-
-  /** A conductance g from `node` to the fixed excess `fixed` (0: ambient), counted as a loss of `owner`. */
-  loss(node: number, g: number, owner: number, fixed = 0): void {
-    if (!(g > 0)) return;
-    this.builder.addToDiagonal(node, g);
-    if (fixed !== 0) this.rhs[node] += g * fixed;
-    this.lossNode.push(node);
-    this.lossG.push(g);
-    this.lossFixed.push(fixed);
-    this.lossOwner.push(owner);
-  }
-
-  /** The series junction of a plate top cell and a fin's first node. */
-  root(plate: number, fin: number, gPlate: number, gFin: number, owner: number): void {
-    this.builder.couple(plate, fin, 1 / (1 / gPlate + 1 / gFin));
-    this.rootPlate.push(plate);
-    this.rootFin.push(fin);
-    this.rootGPlate.push(gPlate);
-    this.rootGFin.push(gFin);
-    this.rootOwner.push(owner);
-  }
 }
 
 /** Unknowns of a grid (for the memory estimate before anything is allocated). */
@@ -245,12 +188,6 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
     footprintOwner,
     heatIn,
   };
-}
-
-/** What a fin assembly hands back: its extra lines and the fin nodes that continue a plate column's line. */
-export interface FinAssembly {
-  lines: number[][];
-  columnAbove(i: number, j: number): number[] | null;
 }
 
 /** Fins as cells: plate cells onto themselves, fin f's cell (i, j, l) onto sheet node (j, l) of fin f. */
