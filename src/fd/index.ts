@@ -71,3 +71,8 @@ export { fin2dProblem } from './two-d/problem.js';
 export { studyFin2DProblem } from './two-d/linear-study.js';
 export { nonlinearFin2DProblem } from './two-d/nonlinear-problem.js';
 export { studyNonlinearFin2DProblem } from './two-d/nonlinear-study.js';
+export { studySink } from './three-d/study-sink.js';
+export type { SinkStudyOptions } from './three-d/study-sink.js';
+export { sinkModelApplies } from './three-d/sink-problem.js';
+export { sheetReductionDrift } from './three-d/sheet-drift.js';
+export type { SheetReductionDrift } from './three-d/sheet-drift.js';
