@@ -14,11 +14,17 @@ export interface CsrMatrix {
   readonly rowStart: Int32Array;
   readonly col: Int32Array;
   readonly val: Float64Array;
+  /**
+   * When present: each row's conductance to fixed temperatures (its row sum), with the diagonal stored first in
+   * every row; residuals are then evaluated in difference form (csrResidual).
+   */
+  readonly excess?: Float64Array;
 }
 
 /** Diagonal plus symmetric couplings, grown as the assembly adds them. */
 export class ConductanceBuilder {
   readonly diagonal: Float64Array;
+  private readonly excess: Float64Array;
   private p = new Int32Array(1024);
   private q = new Int32Array(1024);
   private g = new Float64Array(1024);
@@ -26,6 +32,7 @@ export class ConductanceBuilder {
 
   constructor(readonly n: number) {
     this.diagonal = new Float64Array(n);
+    this.excess = new Float64Array(n);
   }
 
   /** A conductance g (> 0) between unknowns p and q. */
@@ -42,6 +49,7 @@ export class ConductanceBuilder {
   /** A conductance g from unknown p to a fixed temperature (its value goes into the right-hand side). */
   addToDiagonal(p: number, g: number): void {
     this.diagonal[p] += g;
+    this.excess[p] += g;
   }
 
   get couplings(): number {
@@ -73,7 +81,7 @@ export class ConductanceBuilder {
       col[fill[q]] = p;
       val[fill[q]++] = -this.g[c];
     }
-    return { n, rowStart, col, val };
+    return { n, rowStart, col, val, excess: this.excess };
   }
 
   private grow(): void {
@@ -90,9 +98,18 @@ export class ConductanceBuilder {
   }
 }
 
-/** out = A x (out may not alias x). */
+/** out = A x (out may not alias x); in difference form when the matrix carries its `excess` (see csrResidual). */
 export function csrMultiply(a: CsrMatrix, x: Float64Array, out: Float64Array): void {
-  const { n, rowStart, col, val } = a;
+  const { n, rowStart, col, val, excess } = a;
+  if (excess !== undefined) {
+    for (let r = 0; r < n; r++) {
+      const xr = x[r];
+      let s = excess[r] * xr;
+      for (let e = rowStart[r] + 1; e < rowStart[r + 1]; e++) s += val[e] * (x[col[e]] - xr);
+      out[r] = s;
+    }
+    return;
+  }
   for (let r = 0; r < n; r++) {
     let s = 0;
     for (let e = rowStart[r]; e < rowStart[r + 1]; e++) s += val[e] * x[col[e]];
@@ -100,10 +117,25 @@ export function csrMultiply(a: CsrMatrix, x: Float64Array, out: Float64Array): v
   }
 }
 
-/** out = b − A x; returns |out|_1. */
+/**
+ * out = b − A x; returns |out|_1. With `excess` the difference form
+ *   (A x)_p = e_p x_p + sum_{q != p} A_pq (x_q − x_p),
+ * which keeps the small heat flows of a nearly isothermal region (a plate of high conductivity) above the
+ * round-off of its large couplings.
+ */
 export function csrResidual(a: CsrMatrix, x: Float64Array, b: Float64Array, out: Float64Array): number {
-  const { n, rowStart, col, val } = a;
+  const { n, rowStart, col, val, excess } = a;
   let norm = 0;
+  if (excess !== undefined) {
+    for (let r = 0; r < n; r++) {
+      const xr = x[r];
+      let s = b[r] - excess[r] * xr;
+      for (let e = rowStart[r] + 1; e < rowStart[r + 1]; e++) s -= val[e] * (x[col[e]] - xr);
+      out[r] = s;
+      norm += Math.abs(s);
+    }
+    return norm;
+  }
   for (let r = 0; r < n; r++) {
     let s = b[r];
     for (let e = rowStart[r]; e < rowStart[r + 1]; e++) s -= val[e] * x[col[e]];
