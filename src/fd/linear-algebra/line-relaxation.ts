@@ -51,25 +51,46 @@ export function buildLineRelaxation(a: CsrMatrix, lines: LineSet): LineRelaxatio
       cp[q] = upper[q] * inv[q];
     }
   }
-  const work = new Float64Array(longest);
+  // The couplings off each line, packed in line order: the relaxation reads them in one pass.
   const { rowStart, col, val } = a;
+  const offStart = new Int32Array(n + 1);
+  for (let l = 0; l < nLines; l++) {
+    for (let q = start[l]; q < start[l + 1]; q++) {
+      const r = order[q];
+      const prev = q > start[l] ? order[q - 1] : -1;
+      const next = q + 1 < start[l + 1] ? order[q + 1] : -1;
+      let count = 0;
+      for (let e = rowStart[r]; e < rowStart[r + 1]; e++) if (col[e] !== r && col[e] !== prev && col[e] !== next) count++;
+      offStart[q + 1] = offStart[q] + count;
+    }
+  }
+  const offCol = new Int32Array(offStart[n]);
+  const offVal = new Float64Array(offStart[n]);
+  for (let l = 0; l < nLines; l++) {
+    for (let q = start[l]; q < start[l + 1]; q++) {
+      const r = order[q];
+      const prev = q > start[l] ? order[q - 1] : -1;
+      const next = q + 1 < start[l + 1] ? order[q + 1] : -1;
+      let f = offStart[q];
+      for (let e = rowStart[r]; e < rowStart[r + 1]; e++) {
+        if (col[e] !== r && col[e] !== prev && col[e] !== next) {
+          offCol[f] = col[e];
+          offVal[f++] = val[e];
+        }
+      }
+    }
+  }
+  const work = new Float64Array(longest);
 
   const relaxLine = (l: number, b: Float64Array, x: Float64Array): void => {
     const q0 = start[l];
     const q1 = start[l + 1];
-    // Right-hand side with the off-line couplings at their current values (the in-line terms added back).
-    for (let q = q0; q < q1; q++) {
-      const r = order[q];
-      let s = b[r];
-      for (let e = rowStart[r]; e < rowStart[r + 1]; e++) s -= val[e] * x[col[e]];
-      s += diag[q] * x[r];
-      if (q > q0) s += lower[q] * x[order[q - 1]];
-      if (q + 1 < q1) s += upper[q] * x[order[q + 1]];
-      work[q - q0] = s;
-    }
+    // Forward elimination with the right-hand side b − (couplings off the line) x.
     let prev = 0;
     for (let q = q0; q < q1; q++) {
-      prev = (work[q - q0] - (q > q0 ? lower[q] * prev : 0)) * inv[q];
+      let s = b[order[q]];
+      for (let e = offStart[q]; e < offStart[q + 1]; e++) s -= offVal[e] * x[offCol[e]];
+      prev = (s - (q > q0 ? lower[q] * prev : 0)) * inv[q];
       work[q - q0] = prev;
     }
     let next = 0;

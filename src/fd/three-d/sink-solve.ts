@@ -24,6 +24,8 @@ const MAX_ITERATIONS = 400;
 export interface SinkGridResult {
   grid: SinkGrid;
   unknowns: number;
+  /** The solution: excess temperature of every unknown, K. */
+  theta: Float64Array;
   /** Per source: mean and maximum rise over the footprint including the contact drop, K. */
   sourceMeanRise: number[];
   sourceMaxRise: number[];
@@ -137,6 +139,7 @@ export function sinkQuantities(
   return {
     grid,
     unknowns: theta.length,
+    theta,
     sourceMeanRise,
     sourceMaxRise,
     finHeat,
