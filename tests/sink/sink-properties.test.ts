@@ -65,6 +65,8 @@ const plates: FinArray = { kind: 'plates', count: 5, pitch: 0.007 };
 const pin: ArrayFinProfile = { kind: 'pin', length: 0.02, diameter: 0.003 };
 const trapezoid: ArrayFinProfile = { kind: 'trapezoidal', length: 0.02, baseThickness: 0.002, tipThickness: 0.001, width: 0.03 };
 const linearH: HDistribution = { kind: 'linear', base: 50, tip: 25 };
+const pointsH: HDistribution = { kind: 'points', x: Float64Array.of(0, 0.007, 0.02), h: Float64Array.of(60, 30, 45) };
+const cone: ArrayFinProfile = { kind: 'conical-pin', length: 0.02, baseDiameter: 0.003, tipDiameter: 0.0012 };
 const convectiveTip: TipCondition = { kind: 'convective', h: null };
 
 describe.each([
@@ -73,6 +75,7 @@ describe.each([
   ['inline pins, cooled underside', { fin: pin, array: pins('inline'), hUnderside: 8 }],
   ['staggered pins, tip at a prescribed temperature', { fin: pin, array: pins('staggered'), tip: { kind: 'temperature', T_degC: 30 } as TipCondition }],
   ['rectangular plate fins as 3-D cells', { fin: plateFin(0.02, 0.0015, 0.03), array: plates, cells: true }],
+  ['conical pins, h by points along the height', { fin: cone, array: pins('inline'), h: pointsH }],
 ] as const)('%s', (_name, variant) => {
   const { cells, ...rest } = { cells: false, ...variant };
   const study = studySink(sinkCase({ ...base, ...rest }), { ...one, finRepresentation: cells ? 'cells' : 'sheet' });
