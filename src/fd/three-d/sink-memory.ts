@@ -3,7 +3,7 @@
  * BYTES_PER_UNKNOWN covers the CSR matrix (~8 entries a row, 12 bytes each) and its assembly lists, the line
  * factors, the multigrid levels (Galerkin operators up to ~36 entries a row on the first coarse level, 1/4 to 1/8
  * of the unknowns), the prolongations, the CG vectors and the heat terms. Measured: see bench/run.ts (the 1e6
- * unknowns row prints the peak resident set beside this estimate: 749 MB against 781 MB estimated at 1.02e6 unknowns, Node itself included).
+ * unknowns row prints the peak resident set beside this estimate: 536 to 749 MB measured against 781 MB estimated at 1.02e6 unknowns, Node itself included).
  */
 import { ModelNotApplicableError } from '../../errors.js';
 
