@@ -3,7 +3,7 @@
  *
  * Areas (one file each, each returns rows): oned.ts (tridiagonal solves), twod.ts (2-D grid solves
  * against a general banded LU), images.ts (PNG charts), process.ts (whole `fincheck check` runs).
- * nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
+ * sink.ts (fd-3d heat-sink solve and study), nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
  * (the 41x41 map with the 2-D reference, about a minute) runs only when named.
  * Run a subset by name: `npm run bench -- 1d images`. Nothing is written to disk: the table is printed.
  * Standalone timings with more detail, outside the table (`npx tsx bench/NAME.ts`): tridiagonal-solvers.ts,
@@ -20,6 +20,7 @@ import { benchOneD } from './oned.js';
 import { benchCommands, benchMap2D, benchProcess } from './process.js';
 import { benchNonlinear } from './nonlinear.js';
 import { benchTwoD } from './twod.js';
+import { benchSink } from './sink.js';
 
 const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   '1d': benchOneD,
@@ -29,10 +30,11 @@ const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   nonlinear: benchNonlinear,
   commands: benchCommands,
   map2d: benchMap2D,
+  sink: benchSink,
 };
 
 /** Areas run when none is named: all but the minute-long 2-D map. */
-const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands'];
+const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands', 'sink'];
 
 function loadText(): string {
   return loadavg()

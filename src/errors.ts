@@ -56,7 +56,7 @@ export class SolverError extends Error {
 export class ModelNotApplicableError extends UsageError {
   override name = 'ModelNotApplicableError';
   constructor(
-    readonly model: 'fd-1d' | 'fd-2d',
+    readonly model: 'fd-1d' | 'fd-2d' | 'fd-3d',
     readonly reason: string,
   ) {
     super(`${model}: ${reason}`);

@@ -16,7 +16,7 @@
  * degree <= 3 in x for every profile except the convex parabola, where the substitution
  * x = L(1 - s^2) makes g P dx a polynomial of degree 4 in s.
  */
-import type { Case, Edges, TabulatedProfile } from '../case/index.js';
+import type { Case, Edges, Profile, TabulatedProfile } from '../case/index.js';
 import { InputError } from '../errors.js';
 import type { FinGeometry1D } from './types.js';
 
@@ -209,8 +209,11 @@ function geometryKey(c: Case): string {
 }
 
 function profileGeometry(c: Case): FinGeometry1D {
-  const p = c.fin.profile;
-  const edges = c.fin.edges;
+  return geometryOfProfile(c.fin.profile, c.fin.edges);
+}
+
+/** The 1-D geometry of a profile with given side edges (the heat-sink model builds its fins from it). */
+export function geometryOfProfile(p: Profile, edges: Edges): FinGeometry1D {
   const straight = (length: number, baseSize: number, tipSize: number, exponent: TaperExponent, width: number) =>
     taperedGeometry({ shape: 'straight', length, baseSize, tipSize, exponent, width, edges });
   switch (p.kind) {

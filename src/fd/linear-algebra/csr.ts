@@ -1,0 +1,153 @@
+/**
+ * Compressed sparse row (CSR) matrices for the 3-D sink systems, and their symmetric assembly.
+ *
+ * A symmetric conduction matrix is assembled as a diagonal plus a list of couplings (p, q, g): each coupling
+ * adds g to A(p, p) and A(q, q) and −g to A(p, q) and A(q, p) (a conductance between two unknowns), so every
+ * row sum is the node's conductance to fixed temperatures, which `addToDiagonal` adds. The CSR form then holds
+ * both halves (row r: its diagonal, then its off-diagonal entries in the order the couplings were added).
+ * Units are those of the problem (conductances W/K); the module is plain linear algebra.
+ */
+
+export interface CsrMatrix {
+  readonly n: number;
+  /** Row r's entries are [rowStart[r], rowStart[r + 1]). */
+  readonly rowStart: Int32Array;
+  readonly col: Int32Array;
+  readonly val: Float64Array;
+  /**
+   * When present: each row's conductance to fixed temperatures (its row sum), with the diagonal stored first in
+   * every row; residuals are then evaluated in difference form (csrResidual).
+   */
+  readonly excess?: Float64Array;
+}
+
+/** Diagonal plus symmetric couplings, grown as the assembly adds them. */
+export class ConductanceBuilder {
+  readonly diagonal: Float64Array;
+  private readonly excess: Float64Array;
+  private p = new Int32Array(1024);
+  private q = new Int32Array(1024);
+  private g = new Float64Array(1024);
+  private count = 0;
+
+  constructor(readonly n: number) {
+    this.diagonal = new Float64Array(n);
+    this.excess = new Float64Array(n);
+  }
+
+  /** A conductance g (> 0) between unknowns p and q. */
+  couple(p: number, q: number, g: number): void {
+    if (this.count === this.p.length) this.grow();
+    this.p[this.count] = p;
+    this.q[this.count] = q;
+    this.g[this.count] = g;
+    this.count++;
+    this.diagonal[p] += g;
+    this.diagonal[q] += g;
+  }
+
+  /** A conductance g from unknown p to a fixed temperature (its value goes into the right-hand side). */
+  addToDiagonal(p: number, g: number): void {
+    this.diagonal[p] += g;
+    this.excess[p] += g;
+  }
+
+  get couplings(): number {
+    return this.count;
+  }
+
+  toCsr(): CsrMatrix {
+    const n = this.n;
+    const rowStart = new Int32Array(n + 1);
+    for (let r = 0; r < n; r++) rowStart[r + 1] = 1;
+    for (let c = 0; c < this.count; c++) {
+      rowStart[this.p[c] + 1]++;
+      rowStart[this.q[c] + 1]++;
+    }
+    for (let r = 0; r < n; r++) rowStart[r + 1] += rowStart[r];
+    const nnz = rowStart[n];
+    const col = new Int32Array(nnz);
+    const val = new Float64Array(nnz);
+    const fill = rowStart.slice(0, n);
+    for (let r = 0; r < n; r++) {
+      col[fill[r]] = r;
+      val[fill[r]++] = this.diagonal[r];
+    }
+    for (let c = 0; c < this.count; c++) {
+      const p = this.p[c];
+      const q = this.q[c];
+      col[fill[p]] = q;
+      val[fill[p]++] = -this.g[c];
+      col[fill[q]] = p;
+      val[fill[q]++] = -this.g[c];
+    }
+    return { n, rowStart, col, val, excess: this.excess };
+  }
+
+  private grow(): void {
+    const size = this.p.length * 2;
+    const p = new Int32Array(size);
+    const q = new Int32Array(size);
+    const g = new Float64Array(size);
+    p.set(this.p);
+    q.set(this.q);
+    g.set(this.g);
+    this.p = p;
+    this.q = q;
+    this.g = g;
+  }
+}
+
+/** out = A x (out may not alias x); in difference form when the matrix carries its `excess` (see csrResidual). */
+export function csrMultiply(a: CsrMatrix, x: Float64Array, out: Float64Array): void {
+  const { n, rowStart, col, val, excess } = a;
+  if (excess !== undefined) {
+    for (let r = 0; r < n; r++) {
+      const xr = x[r];
+      let s = excess[r] * xr;
+      for (let e = rowStart[r] + 1; e < rowStart[r + 1]; e++) s += val[e] * (x[col[e]] - xr);
+      out[r] = s;
+    }
+    return;
+  }
+  for (let r = 0; r < n; r++) {
+    let s = 0;
+    for (let e = rowStart[r]; e < rowStart[r + 1]; e++) s += val[e] * x[col[e]];
+    out[r] = s;
+  }
+}
+
+/**
+ * out = b − A x; returns |out|_1. With `excess` the difference form
+ *   (A x)_p = e_p x_p + sum_{q != p} A_pq (x_q − x_p),
+ * which keeps the small heat flows of a nearly isothermal region (a plate of high conductivity) above the
+ * round-off of its large couplings.
+ */
+export function csrResidual(a: CsrMatrix, x: Float64Array, b: Float64Array, out: Float64Array): number {
+  const { n, rowStart, col, val, excess } = a;
+  let norm = 0;
+  if (excess !== undefined) {
+    for (let r = 0; r < n; r++) {
+      const xr = x[r];
+      let s = b[r] - excess[r] * xr;
+      for (let e = rowStart[r] + 1; e < rowStart[r + 1]; e++) s -= val[e] * (x[col[e]] - xr);
+      out[r] = s;
+      norm += Math.abs(s);
+    }
+    return norm;
+  }
+  for (let r = 0; r < n; r++) {
+    let s = b[r];
+    for (let e = rowStart[r]; e < rowStart[r + 1]; e++) s -= val[e] * x[col[e]];
+    out[r] = s;
+    norm += Math.abs(s);
+  }
+  return norm;
+}
+
+/** A(r, c), summing repeated entries; 0 when absent. */
+export function csrEntry(a: CsrMatrix, r: number, c: number): number {
+  let s = 0;
+  for (let e = a.rowStart[r]; e < a.rowStart[r + 1]; e++) if (a.col[e] === c) s += a.val[e];
+  return s;
+}

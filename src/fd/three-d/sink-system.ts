@@ -1,0 +1,211 @@
+/**
+ * Assembly of the 3-D heat-sink system on one grid (cell-centred finite volumes), in excess temperature theta (K).
+ *
+ * Plate cell (i, j, k), volume dx_i dy_j dz_k, unknown index (i ny + j) nz + k. Between neighbouring cells the
+ * conductance k_p A / d (A the shared face, d the distance between the centres):
+ *   sum_nb G (theta_nb − theta_P) − G_b theta_P + Q_P = 0,
+ * with, on the underside, Q_P = q''_s dx dy in source s (q''_s = P_s / its cells' area, so the power is exact)
+ * and otherwise G_b = 1 / (1/(h_u dx dy) + (dz/2)/(k_p dx dy)) (h_u absent: adiabatic); on the exposed top the same
+ * with h_plate; narrow edges adiabatic. Every boundary conductance is a half cell in series with the surface.
+ *
+ * Fins, representation 'sheet' (fin-sheet-assembly.ts): a plate fin is a 2-D conducting sheet in (y, s) with
+ * the profile's thickness t(s) (temperature uniform across the thickness: thin fin), one node per (row j, layer l);
+ * a pin one node per layer. Representation 'cells' (fin-cell-assembly.ts, rectangular plate fins): the fin's own
+ * Cartesian cells on the plate's x and y lines, the plate's z columns continued up through the fin.
+ * Where a fin meets the plate, each plate top cell under its footprint is joined to the fin's first node by a
+ * half plate cell in series with the fin's share of its first half layer (conservative, continuous flux).
+ *
+ * The heat terms are kept as data so that every heat rate is computed from the same conductances as the
+ * matrix: losses (node, G, fixed theta, owner: fin index, or PLATE_TOP / UNDERSIDE) and root couplings.
+ */
+import type { SinkGrid } from '../../mesh/index.js';
+import { ConductanceBuilder, type CsrMatrix } from '../linear-algebra/csr.js';
+import { PLATE_TOP, TermLists, UNDERSIDE, type HeatTerms, type RootTerms } from './heat-terms.js';
+import type { SinkLevelGrid } from '../linear-algebra/aggregation.js';
+import type { LineSet } from '../linear-algebra/line-relaxation.js';
+import type { Prolongation } from '../linear-algebra/prolongation.js';
+import { assembleFinCells } from './fin-cell-assembly.js';
+import { assembleFinSheets } from './fin-sheet-assembly.js';
+import type { SinkProblem } from './sink-problem.js';
+
+export type FinRepresentation = 'sheet' | 'cells';
+export { PLATE_TOP, UNDERSIDE };
+export type { FinAssembly, HeatTerms, RootTerms } from './heat-terms.js';
+
+export interface SinkSystem {
+  grid: SinkGrid;
+  representation: FinRepresentation;
+  matrix: CsrMatrix;
+  rhs: Float64Array;
+  lines: LineSet;
+  /** The unknowns in the sheet layout, for the multigrid (fins as cells: after `fold`). */
+  levelGrid: SinkLevelGrid;
+  /** Fins as cells: each fin cell onto its sheet node (weight 1); null for sheets. */
+  fold: Prolongation | null;
+  plateUnknowns: number;
+  losses: HeatTerms;
+  roots: RootTerms;
+  /** Heat flux of each source on this grid, W/m^2. */
+  sourceFlux: Float64Array;
+  /** Fin covering each plate column (i ny + j), −1 where the top is exposed. */
+  footprintOwner: Int32Array;
+  /** Heat put in by the sources, W. */
+  heatIn: number;
+}
+
+/** Unknowns of a grid (for the memory estimate before anything is allocated). */
+export function sinkUnknowns(grid: SinkGrid, representation: FinRepresentation, finKind: 'plates' | 'pins' | 'bare'): number {
+  const plate = grid.nx * grid.ny * grid.nz;
+  let fins = 0;
+  for (const f of grid.fins) {
+    if (finKind === 'pins') fins += grid.ns;
+    else if (representation === 'cells') fins += (f.i1 - f.i0) * (f.j1 - f.j0) * grid.ns;
+    else fins += (f.j1 - f.j0) * grid.ns;
+  }
+  return plate + fins;
+}
+
+export function assembleSink(problem: SinkProblem, grid: SinkGrid, representation: FinRepresentation): SinkSystem {
+  const { nx, ny, nz, x, y, z } = grid;
+  const kp = problem.kPlate;
+  const plateUnknowns = nx * ny * nz;
+  const n = sinkUnknowns(grid, representation, problem.layout.finKind);
+  const builder = new ConductanceBuilder(n);
+  const rhs = new Float64Array(n);
+  const terms = new TermLists(builder, rhs);
+  const cell = (i: number, j: number, k: number): number => (i * ny + j) * nz + k;
+  const dx = (i: number) => x[i + 1] - x[i];
+  const dy = (j: number) => y[j + 1] - y[j];
+  const dz = (k: number) => z[k + 1] - z[k];
+
+  // Plate conduction.
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      for (let k = 0; k < nz; k++) {
+        const p = cell(i, j, k);
+        if (i + 1 < nx) builder.couple(p, cell(i + 1, j, k), (kp * dy(j) * dz(k)) / (0.5 * (dx(i) + dx(i + 1))));
+        if (j + 1 < ny) builder.couple(p, cell(i, j + 1, k), (kp * dx(i) * dz(k)) / (0.5 * (dy(j) + dy(j + 1))));
+        if (k + 1 < nz) builder.couple(p, p + 1, (kp * dx(i) * dy(j)) / (0.5 * (dz(k) + dz(k + 1))));
+      }
+    }
+  }
+
+  // Underside: sources (isoflux), elsewhere h_u or adiabatic.
+  const heated = new Uint8Array(nx * ny);
+  const sourceFlux = new Float64Array(grid.sources.length);
+  let heatIn = 0;
+  grid.sources.forEach((b, s) => {
+    let area = 0;
+    for (let i = b.i0; i < b.i1; i++) for (let j = b.j0; j < b.j1; j++) area += dx(i) * dy(j);
+    const flux = problem.sources[s].power / area;
+    sourceFlux[s] = flux;
+    for (let i = b.i0; i < b.i1; i++) {
+      for (let j = b.j0; j < b.j1; j++) {
+        rhs[cell(i, j, 0)] += flux * dx(i) * dy(j);
+        heated[i * ny + j] = 1;
+      }
+    }
+    heatIn += problem.sources[s].power;
+  });
+  const hu = problem.hUnderside;
+  if (hu !== null && hu > 0) {
+    for (let i = 0; i < nx; i++) {
+      for (let j = 0; j < ny; j++) {
+        if (heated[i * ny + j] === 1) continue;
+        const a = dx(i) * dy(j);
+        terms.loss(cell(i, j, 0), 1 / (1 / (hu * a) + (0.5 * dz(0)) / (kp * a)), UNDERSIDE);
+      }
+    }
+  }
+
+  // Fin footprints, then the exposed top.
+  const footprintOwner = new Int32Array(nx * ny).fill(-1);
+  grid.fins.forEach((b, f) => {
+    for (let i = b.i0; i < b.i1; i++) for (let j = b.j0; j < b.j1; j++) footprintOwner[i * ny + j] = f;
+  });
+  if (problem.hPlate > 0) {
+    for (let i = 0; i < nx; i++) {
+      for (let j = 0; j < ny; j++) {
+        if (footprintOwner[i * ny + j] >= 0) continue;
+        const a = dx(i) * dy(j);
+        terms.loss(cell(i, j, nz - 1), 1 / (1 / (problem.hPlate * a) + (0.5 * dz(nz - 1)) / (kp * a)), PLATE_TOP);
+      }
+    }
+  }
+
+  // Fins and the lines of the line relaxation.
+  const order = new Int32Array(n);
+  const start: number[] = [0];
+  let q = 0;
+  const finCells = representation === 'cells' && problem.layout.finKind === 'plates';
+  const fins = finCells ? assembleFinCells(problem, grid, plateUnknowns, builder, terms) : assembleFinSheets(problem, grid, plateUnknowns, builder, terms);
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      for (let k = 0; k < nz; k++) order[q++] = cell(i, j, k);
+      const above = fins.columnAbove(i, j);
+      if (above !== null) for (const node of above) order[q++] = node;
+      start.push(q);
+    }
+  }
+  for (const line of fins.lines) {
+    for (const node of line) order[q++] = node;
+    start.push(q);
+  }
+  if (q !== n) throw new Error(`assembleSink: ${q} unknowns on lines, ${n} expected`);
+
+  const levelGrid: SinkLevelGrid = {
+    nx,
+    ny,
+    nz,
+    dx: (x[nx] - x[0]) / nx,
+    dy: (y[ny] - y[0]) / ny,
+    dz: (z[nz] - z[0]) / nz,
+    fins: grid.fins.map((b) => ({ rows: problem.layout.finKind === 'pins' ? 1 : b.j1 - b.j0, layers: grid.ns })),
+  };
+  return {
+    grid,
+    representation: finCells ? 'cells' : 'sheet',
+    matrix: builder.toCsr(),
+    rhs,
+    lines: { order, start: Int32Array.from(start) },
+    levelGrid,
+    fold: finCells ? foldCells(grid, plateUnknowns) : null,
+    plateUnknowns,
+    losses: {
+      node: Int32Array.from(terms.lossNode),
+      g: Float64Array.from(terms.lossG),
+      fixed: Float64Array.from(terms.lossFixed),
+      owner: Int32Array.from(terms.lossOwner),
+    },
+    roots: {
+      plate: Int32Array.from(terms.rootPlate),
+      fin: Int32Array.from(terms.rootFin),
+      gPlate: Float64Array.from(terms.rootGPlate),
+      gFin: Float64Array.from(terms.rootGFin),
+      owner: Int32Array.from(terms.rootOwner),
+    },
+    sourceFlux,
+    footprintOwner,
+    heatIn,
+  };
+}
+
+/** Fins as cells: plate cells onto themselves, fin f's cell (i, j, l) onto sheet node (j, l) of fin f. */
+function foldCells(grid: SinkGrid, plateUnknowns: number): Prolongation {
+  const { ny, ns } = grid;
+  let fine = plateUnknowns;
+  for (const b of grid.fins) fine += (b.i1 - b.i0) * (b.j1 - b.j0) * ns;
+  const rowStart = new Int32Array(fine + 1);
+  const col = new Int32Array(fine);
+  for (let r = 0; r < fine; r++) rowStart[r + 1] = r + 1;
+  for (let p = 0; p < plateUnknowns; p++) col[p] = p;
+  let r = plateUnknowns;
+  let sheet = plateUnknowns;
+  for (const b of grid.fins) {
+    const rows = b.j1 - b.j0;
+    for (let i = b.i0; i < b.i1; i++)
+      for (let j = 0; j < ny; j++) for (let l = 0; l < ns; l++) if (j >= b.j0 && j < b.j1) col[r++] = sheet + (j - b.j0) * ns + l;
+    sheet += rows * ns;
+  }
+  return { rowStart, col, val: new Float64Array(fine).fill(1), coarse: sheet };
+}
