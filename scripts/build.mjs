@@ -17,6 +17,21 @@ await build({
   logLevel: 'warning',
 });
 
+// The library entry (package.json exports '.'): src/api, for `import { check } from 'fincheck'`. Its declarations
+// are written by `npm pack` (prepack: tsconfig.lib.json), not on every build.
+await build({
+  entryPoints: ['src/api/index.ts'],
+  outfile: 'dist/lib.js',
+  bundle: true,
+  platform: 'node',
+  format: 'esm',
+  target: 'node20',
+  sourcemap: true,
+  banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
+  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
+  logLevel: 'warning',
+});
+
 // The map command's worker thread (src/map/worker.ts) needs its own entry: dist/fincheck.js starts
 // dist/map-worker.js beside it (src/map/worker-start.ts).
 await build({

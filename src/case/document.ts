@@ -44,8 +44,13 @@ export function readDocument(text: string, fileName: string): ReadDocument {
     const at = position(error.pos[0]);
     const sourceLine = (lines[at.line - 1] ?? '').trim();
     const name = format === 'json' ? 'JSON' : 'YAML';
+    // The parser's advice for several documents names its own function; a case file is one document.
+    const reason =
+      error.code === 'MULTIPLE_DOCS'
+        ? 'one document per case file: remove the "---" and what follows, or split the file'
+        : error.message.replace(/\.$/, '');
     problems.push({
-      issue: { path: ['(syntax)'], accepted: `valid ${name} (${error.message.replace(/\.$/, '')})` },
+      issue: { path: ['(syntax)'], accepted: `valid ${name} (${reason})` },
       position: at,
       value: sourceLine === '' ? 'the end of the file' : quoted(sourceLine),
     });

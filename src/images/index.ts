@@ -42,7 +42,7 @@ export { drawAxes, xAxisMargin, yAxisMargin } from './axes.js';
 export { fieldImage } from './field-layer.js';
 export { drawHeader } from './layout.js';
 export { drawLegend, legendSize } from './legend.js';
-export { markerElement } from './markers.js';
+export { markerElement, markerPathData } from './markers.js';
 export { dashArray, defaultSeriesStyle, okabeItoColours } from './series-styles.js';
 export { el, fmt, polylinePathData, svgDocument, textEl } from './svg.js';
 export { textWidth, truncateToWidth } from './text-metrics.js';

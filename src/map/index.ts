@@ -1,6 +1,6 @@
 /** The map layer's public API: what the other layers import. */
 export { formatMapSummary } from './format.js';
-export { mapJsonText } from './json.js';
+export { mapJson, mapJsonText } from './json.js';
 export { OutputsInterrupted, renderMapFiles } from './outputs.js';
 export { MapInterrupted } from './pool.js';
 export { progressBar } from './progress.js';

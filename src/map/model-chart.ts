@@ -1,7 +1,7 @@
 /**
  * map-<model>.svg/png: one shortcut's drift over the map, in %, on a diverging colour map centred on zero (ColorBrewer
  * RdBu: blue below, red above the reference), the +/- tolerance contours drawn and labelled, the case's own point
- * marked, invalid points grey, axes in the user's units (log where asked), and iso-lines of Bi and mL where they
+ * marked, invalid points grey, points without a verdict (reference not resolved) crossed, axes in the user's units (log where asked), and iso-lines of Bi and mL where they
  * help (iso-lines.ts), under the case's mark.
  *
  * Colour range: +/- the largest |drift| on the map, but at least twice and at most five times the tolerance, so the
@@ -15,6 +15,7 @@ import { caseMarkSvg, casePointMark } from './case-mark.js';
 import { appendToSvg, biotCandidates, isoLinesSvg, mLCandidates } from './iso-lines.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapAxis, type MapModelId } from './types.js';
+import { unresolvedMarksSvg, unresolvedNote, unresolvedPoints } from './unresolved-marks.js';
 
 /** The axis title of a map chart: words and a unit set for print (axis-title.ts). */
 export function axisLabel(axis: MapAxis): string {
@@ -65,6 +66,12 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
     ? `within ±${percentText(tolerance)} at every valid point (no tolerance contour)`
     : `contours: the tolerance, ok within ±${percentText(tolerance)}`;
   const marks = casePointMark(run);
+  const unresolved = unresolvedPoints(run);
+  const notes = [
+    invalid > 0 ? `grey: ${invalid} of ${run.summary.points} points where the case is invalid (see map.csv)` : '',
+    unresolvedNote(unresolved.length),
+  ];
+  const note = notes.filter((n) => n !== '').join('; ');
   const chart = mapChart({
     title: `Drift of ${model} from ${reference}: ${run.caseName}`,
     subtitle: [`drift = (${model} − ${reference}) / ${reference} on the heat rate; ${band}`, CHART_CAUTION],
@@ -82,14 +89,15 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
       { value: -tolPercent, label: `−${percentText(tolerance)}`, colour: '#000000', dash: '8 5' },
     ],
     points: marks,
-    ...(invalid > 0 ? { invalidNote: `grey: ${invalid} of ${run.summary.points} points where the case is invalid (see map.csv)` } : {}),
+    ...(note !== '' ? { invalidNote: note } : {}),
   });
   const { biot, mL } = dimensionlessFields(run);
   const iso = isoLinesSvg(chart.plot, chart.x, chart.y, run.x.values, run.y.values, [
     { name: 'Bi', values: biot, candidates: biotCandidates, dash: '2 4' },
     { name: 'mL', values: mL, candidates: mLCandidates, dash: '7 4' },
   ]);
-  // The mark again on top of the iso-lines, which may run through it.
-  const onTop = iso === '' ? '' : caseMarkSvg(marks, chart.x, chart.y);
+  // The crosses over the iso-lines, and the mark again on top (the iso-lines may run through it).
+  const crosses = unresolvedMarksSvg(unresolved, chart.x, chart.y);
+  const onTop = iso === '' && crosses === '' ? '' : crosses + caseMarkSvg(marks, chart.x, chart.y);
   return { svg: appendToSvg(chart.svg, iso + onTop), chart, driftPercent };
 }

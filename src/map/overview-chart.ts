@@ -3,7 +3,8 @@
  * axes, in the order of the maps. In each panel the region where |drift| <= tolerance (its verdict `ok`) is filled
  * light green and outlined, and the panel's title gives the share of the map where it is ok. One panel per shortcut, because regions drawn over each other on one chart turned muddy where the
  * translucent fills overlapped and hid each other where outlines coincided (two shortcuts that agree). Invalid
- * points are grey (as on the per-shortcut maps), the case's own point is marked in every panel, and the axis titles
+ * points are grey (as on the per-shortcut maps), points without a verdict (reference not resolved) crossed and never
+ * inside a region, the case's own point is marked in every panel, and the axis titles
  * (words and units, axis-title.ts) are shared.
  *
  * Outline: the iso-line s = 0 of s = tolerance - |drift| by marching squares, on the grid padded with a ring of
@@ -32,6 +33,7 @@ import {
   ink,
 } from '../images/index.js';
 import { caseMarkSvg, casePointMark } from './case-mark.js';
+import { unresolvedMarksSvg, unresolvedNote, unresolvedPoints } from './unresolved-marks.js';
 import { axisLabel, percentText } from './model-chart.js';
 import type { MapRun } from './run-map.js';
 import { isPointError, type MapModelId } from './types.js';
@@ -69,14 +71,15 @@ export function overviewColumns(n: number): number {
 }
 
 /**
- * s = tolerance - |drift| of one model at the grid points; where it has no value, a large negative number, so that
- * the outline passes through the last point with a value (where the grey of the invalid cells begins).
+ * s = tolerance - |drift| of one model at the grid points; where it has no value or no verdict (reference not
+ * resolved), a large negative number, so that the outline passes through the last point with a verdict (where the
+ * grey of the invalid cells begins) and an unresolved point is never shown as ok.
  */
 export function safetyMargin(run: MapRun, model: MapModelId): Float64Array {
   const tolerance = run.job.check.tolerance;
   const s = new Float64Array(run.points.length).fill(-1e6);
   for (const p of run.points) {
-    if (isPointError(p)) continue;
+    if (isPointError(p) || !p.reference.resolved) continue;
     const m = p.models.find((r) => r.model === model);
     if (m) s[p.index] = tolerance - Math.abs(m.drift);
   }
@@ -114,11 +117,13 @@ export function overviewChart(run: MapRun): OverviewChart {
   const nx = run.x.values.length;
   const ny = run.y.values.length;
   const invalid = run.summary.errors;
+  const unresolved = unresolvedPoints(run);
   const header = drawHeader(
     `Where each shortcut holds: ${run.caseName}`,
     [
       `green, outlined: |drift| ≤ ${percentText(tolerance)} against ${run.casePoint.reference.model} (verdict ok); white: marginal or unsafe; one panel per shortcut, same axes` +
-        (invalid > 0 ? `; grey: ${invalid} points where the case is invalid` : ''),
+        (invalid > 0 ? `; grey: ${invalid} points where the case is invalid` : '') +
+        (unresolved.length > 0 ? `; ${unresolvedNote(unresolved.length)}` : ''),
       CHART_CAUTION,
     ],
     width,
@@ -181,6 +186,7 @@ export function overviewChart(run: MapRun): OverviewChart {
       layers.push(el('path', { d, fill: 'none', stroke: '#000000', 'stroke-width': 2, 'stroke-linejoin': 'round' }));
     }
     // "this case" written once, in the first panel; the others show the mark alone.
+    layers.push(unresolvedMarksSvg(unresolved, xAxis.scale, yAxis.scale));
     layers.push(caseMarkSvg(k === 0 ? marks : marks.map(({ x, y }) => ({ x, y })), xAxis.scale, yAxis.scale));
     body.push(el('g', { 'clip-path': `url(#${clipId})` }, layers));
     // x tick labels where no panel sits below.

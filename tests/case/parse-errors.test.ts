@@ -157,6 +157,14 @@ describe('one class of bad input per test', () => {
     expect(issue.value).toBe('"tip: convective"');
   });
 
+  it('several YAML documents in one file: the advice is about the file, not the parser', () => {
+    const issue = onlyIssue(`${valid}---\nname: second case\n`);
+    expect(issue.path).toBe('(syntax)');
+    expect(issue.value).toBe('"---"');
+    expect(issue.accepted).toContain('one document per case file');
+    expect(issue.accepted).not.toMatch(/parseAllDocuments|\(\)/);
+  });
+
   it('JSON syntax error, with its line', () => {
     const issue = onlyIssue('{\n  "name": "x",\n  "fin": {"profile": "pin",,}\n}\n', 'bad.json');
     expect(issue.path).toBe('(syntax)');

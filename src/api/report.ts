@@ -1,0 +1,35 @@
+/** The design-note report for the library: the same HTML and Markdown as `fincheck report`, with the PNG figures. */
+import type { Case } from '../case/index.js';
+import { makeReport, reportDate } from '../report/index.js';
+import { VERSION } from '../version.js';
+import { numberOf, referenceOf, toleranceOf, type ReferenceChoice } from './options.js';
+
+export interface ReportCallOptions {
+  tolerance?: number;
+  reference?: ReferenceChoice;
+  /** PNG resolution of the figures (default 96). */
+  dpi?: number;
+  /** The case file's name as the report shows it (default: the case's name). */
+  caseFile?: string;
+  /** The date printed on the report (default: today, YYYY-MM-DD). */
+  date?: string;
+}
+
+export interface ReportResult {
+  html: string;
+  markdown: string;
+  /** The figures the HTML and Markdown refer to by file name. */
+  figures: { file: string; png: Uint8Array }[];
+}
+
+export async function report(c: Case, options: ReportCallOptions = {}): Promise<ReportResult> {
+  const content = await makeReport(c, {
+    tolerance: toleranceOf(options.tolerance),
+    reference: referenceOf(options.reference),
+    dpi: numberOf('dpi', options.dpi, 48, 1200, 96),
+    caseFile: options.caseFile ?? c.name,
+    version: VERSION,
+    date: reportDate(options.date, undefined, new Date(), 'options.date'),
+  });
+  return { html: content.html, markdown: content.markdown, figures: content.figures.map((f) => ({ file: f.file, png: f.png })) };
+}
