@@ -33,7 +33,7 @@ export interface ParseOptions {
 export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
   if (isHeatSinkObject(raw)) {
     const accepted =
-      'a single-fin case (fin, material, convection, base): this reads one fin, and a case with an array key is a heat sink, which is read by the heat-sink reader';
+      'a single-fin case (keys fin, material, convection and base): a case with an array key is a heat sink, and only single-fin cases are taken here';
     throw new InputError(toInputIssues([{ path: ['array'], accepted }], raw, locate), options.file);
   }
   const lengthUnit = bareLengthUnit(raw);
