@@ -186,7 +186,9 @@ describe('single-fin readers and heat-sink readers refuse the other kind, naming
     const issues = (error as InputError).issues;
     expect(issues).toHaveLength(1);
     expect(issues[0]).toMatchObject({ path: 'array', line: 8 });
-    expect(issues[0]?.accepted).toMatch(/a single-fin case \(keys fin, material, convection and base\): a case with an array key is a heat sink, and only single-fin cases are taken here/);
+    expect(issues[0]?.accepted).toMatch(
+      /a single-fin case \(keys fin, material, convection and base\): a case with an array key is a heat sink, and only single-fin cases are taken here/,
+    );
   });
 
   it('parseHeatSinkText given a single fin: array', () => {
