@@ -2,7 +2,8 @@
  * The check of a heat sink (heat-sink.md): the array shortcuts (sink-models.ts) against the fd-3d reference, on
  * each source's mean temperature rise above ambient. drift_j = (rise_model,j - rise_ref,j) / rise_ref,j; the worst
  * source (largest |drift|) decides the verdict against the tolerance (ok, marginal up to twice, unsafe beyond);
- * no verdict (`unresolved`) while any source's GCI is above a tenth of the tolerance (resolved-reference.ts).
+ * no verdict (`unresolved`) while any source's GCI is above a tenth of the tolerance (resolved-reference.ts), nor
+ * for a model whose own error estimate (the series' truncation bound, the fin study's GCI) is.
  *
  * The reference is an argument: a SinkStudy, or a function that computes one (src/fd studySink), so the check
  * can be tested with a hand-built study.
@@ -71,7 +72,8 @@ function modelRow(c: HeatSinkCase, m: SinkShortcutResult, ref: SinkReferenceResu
     sourceDrift,
     drift,
     worstSource: c.sources[worst]?.name ?? `source ${worst}`,
-    verdict: verdictOf(drift, tolerance, ref.resolved),
+    // A model whose own solution is not accurate to a tenth of the tolerance (a truncated series) is not judged either.
+    verdict: verdictOf(drift, tolerance, ref.resolved && m.relativeError <= ref.target),
     sinkResistance_KperW: m.sinkResistance_KperW,
     overallEfficiency: m.overallEfficiency,
     finEfficiency: m.finEfficiency,

@@ -104,6 +104,13 @@ describe('no verdict on an unresolved reference', () => {
     expect(r.reference.note).toMatch(/NOT RESOLVED/);
   });
 
+  it('a model whose own error estimate is above a tenth of the tolerance (a truncated series) gets no verdict either', () => {
+    const loose = { ...shortcuts, models: shortcuts.models.map((m) => (m.model === 'spreading-series' ? { ...m, relativeError: 0.0021 } : m)) };
+    const r = sinkCheckFrom(c, study(rise('overall-efficiency-exact-fin'), [1e-4, 1e-4]), loose, { tolerance: 0.02 });
+    expect(r.models.find((m) => m.model === 'spreading-series')?.verdict).toBe('unresolved');
+    expect(r.models.find((m) => m.model === 'overall-efficiency-exact-fin')?.verdict).toBe('ok');
+  });
+
   it('resolved at exactly a tenth of the tolerance', () => {
     const r = sinkCheckFrom(c, study(rise('spreading-series'), [0.002, 0.002]), shortcuts, { tolerance: 0.02 });
     expect(r.reference.resolved).toBe(true);
