@@ -218,7 +218,10 @@ export async function sinkShortcuts(c: HeatSinkCase): Promise<SinkShortcuts> {
       baseRise_K: series.plateMeanRise_K,
       relativeError: seriesError + finError,
       accuracy: `series of ${series.terms[0]} x ${series.terms[1]} terms: truncation at most ${seriesError.toExponential(1)} of the rise${exactFin === null ? '' : `; fin heat from fd-1d (estimated error ${finError.toExponential(1)})`}`,
-      basis: `plate spreading (Muzychka, Culham & Yovanovich 2003), finned face as a uniform h_eff = ${hEff.toPrecision(4)} W/(m^2*K) with the exact 1-D fin`,
+      basis:
+        exactFin === null
+          ? `plate spreading (Muzychka, Culham & Yovanovich 2003), the top at h_plate = ${hEff.toPrecision(4)} W/(m^2*K)`
+          : `plate spreading (Muzychka, Culham & Yovanovich 2003), finned face as a uniform h_eff = ${hEff.toPrecision(4)} W/(m^2*K) with the exact 1-D fin`,
     }),
   );
 
