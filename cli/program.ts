@@ -9,6 +9,7 @@ import { registerDemo } from './commands/demo.js';
 import { registerPlot } from './commands/plot.js';
 import { registerReport } from './commands/report.js';
 import { registerMap } from './commands/map.js';
+import { registerOptimize } from './commands/optimize.js';
 import { VERSION } from '../src/version.js';
 
 export function buildProgram(io: Io, setExit: SetExit): Command {
@@ -24,7 +25,17 @@ export function buildProgram(io: Io, setExit: SetExit): Command {
     .exitOverride()
     .showHelpAfterError('fincheck: run with --help for usage and examples')
     .configureOutput(output(io));
-  for (const register of [registerCheck, registerSolve, registerMaterials, registerSchema, registerPlot, registerReport, registerDemo, registerMap]) {
+  for (const register of [
+    registerCheck,
+    registerSolve,
+    registerMaterials,
+    registerSchema,
+    registerPlot,
+    registerReport,
+    registerDemo,
+    registerMap,
+    registerOptimize,
+  ]) {
     const cmd = register(program, io, setExit);
     cmd.exitOverride().configureOutput(output(io));
   }

@@ -1,5 +1,6 @@
 // Bundles the CLI into one ESM file so `fincheck` starts fast (no TypeScript at run time,
-// tree-shaken mathjs). Native or WASM packages stay external and load lazily.
+// tree-shaken mathjs). Native or WASM packages, and PDFKit (it reads its font metrics from its own folder at run
+// time), stay external and load lazily.
 import { build } from 'esbuild';
 
 await build({
@@ -13,7 +14,7 @@ await build({
   banner: {
     js: "#!/usr/bin/env node\nimport { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);",
   },
-  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
+  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core', 'pdfkit', 'svg-to-pdfkit'],
   logLevel: 'warning',
 });
 
@@ -28,7 +29,7 @@ await build({
   target: 'node20',
   sourcemap: true,
   banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
-  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
+  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core', 'pdfkit', 'svg-to-pdfkit'],
   logLevel: 'warning',
 });
 
@@ -43,6 +44,6 @@ await build({
   target: 'node20',
   sourcemap: true,
   banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
-  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core'],
+  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core', 'pdfkit', 'svg-to-pdfkit'],
   logLevel: 'warning',
 });

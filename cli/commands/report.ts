@@ -29,6 +29,8 @@ export interface ReportRequest {
   reference: 'auto' | '1d' | '2d';
   dpi: number;
   date: string;
+  /** Also write report.pdf (A4, vector charts). */
+  pdf?: boolean;
   /** Asked between the charts and before anything is written: throws (Interrupted) to stop with nothing on disk. */
   beforeWrite?: () => void;
 }
@@ -46,6 +48,8 @@ export interface WrittenReport {
   check: CheckReport;
   html: string;
   markdown: string;
+  /** report.pdf when asked for, else null. */
+  pdf: string | null;
   images: string[];
   heatmapUnavailable: string | null;
   worstVerdict: 'ok' | 'marginal' | 'unsafe' | 'unresolved';
@@ -62,6 +66,7 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
     caseFile: request.caseFile,
     version: VERSION,
     date: request.date,
+    pdf: request.pdf === true,
     ...(request.beforeWrite ? { checkpoint: request.beforeWrite } : {}),
   });
   const html = join(request.outDir, REPORT_FILES.html);
@@ -72,6 +77,8 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
     { path: markdown, bytes: content.markdown },
     { path: html, bytes: content.html },
   ];
+  const pdf = content.pdf === null ? null : join(request.outDir, REPORT_FILES.pdf);
+  if (pdf !== null && content.pdf !== null) files.push({ path: pdf, bytes: content.pdf });
   request.beforeWrite?.();
   writeFilesAtomically(files, [request.outDir]);
   const verdicts = content.check.report.models.map((m) => m.verdict);
@@ -82,7 +89,7 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
       : verdicts.includes('marginal')
         ? 'marginal'
         : 'ok';
-  return { case: c, check: content.check.report, html, markdown, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
+  return { case: c, check: content.check.report, html, markdown, pdf, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
 }
 
 interface ReportCliOptions {
@@ -91,6 +98,7 @@ interface ReportCliOptions {
   reference: string;
   dpi: string;
   date?: string;
+  pdf?: boolean;
   json?: boolean;
 }
 
@@ -104,12 +112,14 @@ export function registerReport(program: Command, io: Io, setExit: SetExit): Comm
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--dpi <dpi>', 'resolution of the PNG charts (96: 1200 x 750 px)', '96')
     .option('--date <yyyy-mm-dd>', 'date printed in the report (default: SOURCE_DATE_EPOCH when set, else today)')
+    .option('--pdf', 'also write report.pdf: the same report on A4 pages, charts as vector graphics, font embedded')
     .option('--json', 'print one JSON document listing the files written')
     .addHelpText(
       'after',
       `
 Examples:
   fincheck report demo/inverter-plate-fin.yaml --out report/
+  fincheck report demo/led-pin-fin.yaml --out report/ --pdf       # and report.pdf for the design note
   fincheck report my-fin.yaml --out out/my-fin --tolerance 5% --dpi 200
   SOURCE_DATE_EPOCH=1735689600 fincheck report my-fin.yaml --out out/   # same input, same bytes`,
     )
@@ -132,6 +142,7 @@ Examples:
           reference,
           dpi,
           date,
+          pdf: o.pdf === true,
           beforeWrite: interrupt.check,
         });
       } catch (err) {
@@ -143,13 +154,16 @@ Examples:
         interrupt.dispose();
       }
       if (o.json) {
-        const { html, markdown, images, heatmapUnavailable, worstVerdict } = written;
-        io.out(`${JSON.stringify({ case: written.case.name, file, date, html, markdown, images, heatmapUnavailable, worstVerdict }, null, 2)}\n`);
+        const { html, markdown, pdf, images, heatmapUnavailable, worstVerdict } = written;
+        io.out(
+          `${JSON.stringify({ case: written.case.name, file, date, html, markdown, ...(pdf === null ? {} : { pdf }), images, heatmapUnavailable, worstVerdict }, null, 2)}\n`,
+        );
         return;
       }
       io.out(`wrote the report of ${file} (${date}):\n`);
       io.out(`  ${written.html}   (self-contained HTML, prints to A4)\n`);
       io.out(`  ${written.markdown}   (Markdown; the PNG charts beside it)\n`);
+      if (written.pdf !== null) io.out(`  ${written.pdf}   (A4 PDF, vector charts)\n`);
       for (const image of written.images) io.out(`  ${image}\n`);
       if (written.heatmapUnavailable) io.out(`  no temperature field: ${written.heatmapUnavailable}\n`);
     });

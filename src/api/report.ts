@@ -13,13 +13,17 @@ export interface ReportCallOptions {
   caseFile?: string;
   /** The date printed on the report (default: today, YYYY-MM-DD). */
   date?: string;
+  /** Also lay it out as an A4 PDF (vector charts, font embedded). */
+  pdf?: boolean;
 }
 
 export interface ReportResult {
   html: string;
   markdown: string;
-  /** The figures the HTML and Markdown refer to by file name. */
+  /** The figures the Markdown refers to by file name (the HTML has them inline). */
   figures: { file: string; png: Uint8Array }[];
+  /** The A4 PDF when asked for, else null. */
+  pdf: Uint8Array | null;
 }
 
 export async function report(c: Case, options: ReportCallOptions = {}): Promise<ReportResult> {
@@ -30,6 +34,7 @@ export async function report(c: Case, options: ReportCallOptions = {}): Promise<
     caseFile: options.caseFile ?? c.name,
     version: VERSION,
     date: reportDate(options.date, undefined, new Date(), 'options.date'),
+    pdf: options.pdf === true,
   });
-  return { html: content.html, markdown: content.markdown, figures: content.figures.map((f) => ({ file: f.file, png: f.png })) };
+  return { html: content.html, markdown: content.markdown, figures: content.figures.map((f) => ({ file: f.file, png: f.png })), pdf: content.pdf };
 }

@@ -10,9 +10,12 @@ import { caseInputRows, prettyUnits } from './case-inputs.js';
 import { discretisationSection } from './discretisation.js';
 import type { Block, ReportDocument, Section, Tone } from './document.js';
 import { figureSection, type ReportFigure } from './figures.js';
+import type { FinStudy2D } from '../fd/index.js';
 
 export interface ReportInputs {
   check: CheckPlotInput;
+  /** The fd-2d study behind the heat map (the check's own when fd-2d is its reference), or null. */
+  field: FinStudy2D | null;
   /** The case file's name as given (the report shows its base name only). */
   caseFile: string;
   figures: ReportFigure[];
@@ -214,7 +217,7 @@ export function buildReport(inputs: ReportInputs): ReportDocument {
     { id: 'check', title: 'Shortcuts against the reference', blocks: checkTable(r) },
     { id: 'ledger', title: 'Where the drift comes from', blocks: ledger(r) },
     { id: 'flags', title: 'Flags', blocks: flags(r) },
-    figureSection(check, inputs.figures, inputs.heatmapUnavailable),
+    figureSection(check, inputs.field, inputs.figures, inputs.heatmapUnavailable),
     discretisationSection(check),
   ];
   return {

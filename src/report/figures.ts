@@ -7,6 +7,8 @@ export interface ReportFigure {
   kind: PlotKind;
   /** File name beside the Markdown report, e.g. profile.png. */
   file: string;
+  /** The chart as drawn (the PDF embeds it as vector graphics). */
+  svg: string;
   png: Buffer;
   width_px: number;
   height_px: number;
@@ -30,7 +32,7 @@ function caption(kind: PlotKind, check: CheckPlotInput, field: FinStudy2D | null
     case 'flux':
       return `Heat flowing along the fin Q (W, top) and heat lost per unit length q′ = h P θ (W/m, bottom) against ${along.toLowerCase()} (mm). The dotted line marks where ${Math.round(100 * (1 - REMAINING_FRACTION))} % of the reference's heat has left the fin: beyond it the fin carries little. fd-1d's Q(x) is the scheme's own interface flux; fd-2d's is its base heat rate minus the face losses summed along the face.${omitted}`;
     case 'heatmap':
-      return `Temperature T (°C) in the fin's section, both halves, on its true outline (a thin section is stretched across its thickness by the factor the axis states); isotherms labelled in °C. ${field ? twoDWords(field) : ''}.`;
+      return `Temperature T (°C) in the fin's section, both halves, on its true outline (a thin section is stretched across its thickness by the factor the axis states); isotherms labelled in °C.${field ? ` ${twoDWords(field)}.` : ''}`;
     default: {
       const never: never = kind;
       return never;
@@ -44,14 +46,19 @@ const TITLES: Record<PlotKind, string> = {
   heatmap: 'Temperature field in the fin section (fd-2d)',
 };
 
-export function figureSection(check: CheckPlotInput, figures: readonly ReportFigure[], heatmapUnavailable: string | null): Section {
+export function figureSection(
+  check: CheckPlotInput,
+  field: FinStudy2D | null,
+  figures: readonly ReportFigure[],
+  heatmapUnavailable: string | null,
+): Section {
   const blocks: Block[] = [];
   figures.forEach((f, k) => {
     blocks.push({
       kind: 'figure',
       file: f.file,
       alt: `${TITLES[f.kind]}: ${check.case.name}`,
-      caption: `Figure ${k + 1}. ${caption(f.kind, check, check.twoD)}`,
+      caption: `Figure ${k + 1}. ${caption(f.kind, check, field)}`,
       png: f.png,
       width_px: f.width_px,
       height_px: f.height_px,

@@ -13,9 +13,10 @@ import type { ReportDocument } from './document.js';
 import { FIGURE_FILES, type ReportFigure } from './figures.js';
 import { reportHtml } from './html.js';
 import { reportMarkdown } from './markdown.js';
+import { reportPdf } from './pdf.js';
 
 /** File names in the output folder. */
-export const REPORT_FILES = { html: 'report.html', markdown: 'report.md' } as const;
+export const REPORT_FILES = { html: 'report.html', markdown: 'report.md', pdf: 'report.pdf' } as const;
 
 /** Chart size in the report: the default canvas, which fills the A4 text width at about 170 dpi. */
 export const REPORT_CHART: ChartSize = { width: 1200, height: 750 };
@@ -28,6 +29,8 @@ export interface ReportOptions extends CheckOptions {
   dpi: number;
   /** Called between the charts (the slow part); may throw to stop the report early (an interrupt). */
   checkpoint?: () => void;
+  /** Also lay the report out as an A4 PDF (pdf.ts). */
+  pdf?: boolean;
 }
 
 export interface ReportContent {
@@ -37,6 +40,8 @@ export interface ReportContent {
   document: ReportDocument;
   html: string;
   markdown: string;
+  /** The A4 PDF when asked for (ReportOptions.pdf), else null. */
+  pdf: Buffer | null;
 }
 
 async function field(c: Case, check: CheckPlotInput): Promise<{ study: FinStudy2D | null; unavailable: string | null }> {
@@ -57,11 +62,22 @@ export async function makeReport(c: Case, opts: ReportOptions): Promise<ReportCo
     figures.push({
       kind,
       file: FIGURE_FILES[kind],
+      svg,
       png: await svgToPng(svg, { dpi: opts.dpi }),
       width_px: REPORT_CHART.width,
       height_px: REPORT_CHART.height,
     });
   }
-  const document = buildReport({ check, caseFile: opts.caseFile, figures, heatmapUnavailable: unavailable, version: opts.version, date: opts.date });
-  return { check, figures, heatmapUnavailable: unavailable, document, html: reportHtml(document), markdown: reportMarkdown(document) };
+  const document = buildReport({
+    check,
+    field: study,
+    caseFile: opts.caseFile,
+    figures,
+    heatmapUnavailable: unavailable,
+    version: opts.version,
+    date: opts.date,
+  });
+  opts.checkpoint?.();
+  const pdf = opts.pdf === true ? await reportPdf(document, { date: opts.date, figureSvgs: new Map(figures.map((f) => [f.file, f.svg])) }) : null;
+  return { check, figures, heatmapUnavailable: unavailable, document, html: reportHtml(document), markdown: reportMarkdown(document), pdf };
 }
