@@ -30,6 +30,10 @@ export type { AnnularFinInput } from './annular.js';
 
 export { finArray } from './array.js';
 export type { FinArrayInput, FinArrayResult } from './array.js';
+export { tanhEfficiency, uniformBaseSink } from './overall-efficiency.js';
+export type { UniformBaseInput, UniformBaseResult, UniformBaseSource } from './overall-efficiency.js';
+export { spreadingSeries } from './spreading-series.js';
+export type { SpreadingPlate, SpreadingSeriesInput, SpreadingSeriesResult, SpreadingSource } from './spreading-series.js';
 
 export { finHFallingToTip, finHRisingFromBase } from './nonuniform-h.js';
 export type { PowerLawHInput, PowerLawHResult } from './nonuniform-h.js';

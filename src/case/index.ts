@@ -22,6 +22,9 @@ export {
 export { finExtent, uniformProfiles } from './checks.js';
 export type * from './types.js';
 export type * from './heat-sink-types.js';
+export { isHeatSinkObject } from './heat-sink-detect.js';
+export { loadAnyCase, parseAnyCaseObject, parseAnyCaseText, parseHeatSinkObject, parseHeatSinkText, type AnyCase } from './heat-sink-parse.js';
+export { heatSinkJsonSchema, heatSinkSchema, heatSinkSchemaFor, type ValidatedHeatSink } from './heat-sink-schema.js';
 export {
   aboveAbsoluteZero,
   coefficientRange,

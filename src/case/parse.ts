@@ -14,6 +14,7 @@ import { caseName } from './case-name.js';
 import { getByKeyPath } from './key-path.js';
 import { dimensionWarnings } from './plausibility.js';
 import { caseSchemaFor } from './schema.js';
+import { isHeatSinkObject } from './heat-sink-detect.js';
 import { isLengthUnit, type LengthUnit } from './units.js';
 import type { Case } from './types.js';
 
@@ -30,6 +31,11 @@ export interface ParseOptions {
  * Throws InputError listing every issue.
  */
 export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
+  if (isHeatSinkObject(raw)) {
+    const accepted =
+      'a single-fin case (keys fin, material, convection and base): a case with an array key is a heat sink, and only single-fin cases are taken here';
+    throw new InputError(toInputIssues([{ path: ['array'], accepted }], raw, locate), options.file);
+  }
   const lengthUnit = bareLengthUnit(raw);
   const result = caseSchemaFor(lengthUnit).safeParse(raw);
   const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
@@ -54,6 +60,11 @@ export function bareLengthUnit(raw: unknown): LengthUnit {
 
 /** Parses case text, YAML or JSON (by the file name's extension, else by content). Throws InputError. */
 export function parseCaseText(text: string, fileName: string): Case {
+  return parseTextWith(text, fileName, parseCaseObject);
+}
+
+/** Reads case text with `parseObject` (a single-fin or any case), document and case issues reported together. */
+export function parseTextWith<T>(text: string, fileName: string, parseObject: (raw: unknown, locate: Locate, options: ParseOptions) => T): T {
   const document = readDocument(text, fileName);
   const defaultName = basename(fileName, extname(fileName)) || 'unnamed case';
   const options: ParseOptions = { defaultName, file: fileName };
@@ -66,10 +77,10 @@ export function parseCaseText(text: string, fileName: string): Case {
   if (document.problems.some((p) => p.issue.path[0] === '(syntax)')) {
     throw new InputError(documentIssues, fileName);
   }
-  let parsed: Case | undefined;
+  let parsed: T | undefined;
   let caseIssues: InputIssue[] = [];
   try {
-    parsed = parseCaseObject(document.raw, document.locate, options);
+    parsed = parseObject(document.raw, document.locate, options);
   } catch (err) {
     if (!(err instanceof InputError)) throw err;
     caseIssues = err.issues;
@@ -87,7 +98,7 @@ export function loadCase(path: string): Case {
 }
 
 /** Issues in file order (those without a position keep their order, after the located ones). */
-function sortByPosition(issues: InputIssue[]): InputIssue[] {
+export function sortByPosition(issues: InputIssue[]): InputIssue[] {
   const line = (i: InputIssue) => i.line ?? Number.MAX_SAFE_INTEGER;
   return issues
     .map((issue, index) => ({ issue, index }))

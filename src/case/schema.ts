@@ -331,40 +331,56 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
     'The fin base',
   );
 
-  return mapping(
+  const nameSchema = z
+    .union([z.string(), z.number().transform(String)], { error: () => 'free text' })
+    .optional()
+    .describe('Free text shown in every output (default: the file name without extension)');
+  const unitsSchema = mapping(
     {
-      name: z
-        .union([z.string(), z.number().transform(String)], { error: () => 'free text' })
-        .optional()
-        .describe('Free text shown in every output (default: the file name without extension)'),
+      length: word(lengthUnits, 'Unit of every length given as a bare number in this case (default m); a length with its own unit keeps it'),
+    },
+    'units',
+    'Units of bare numbers in this case; default SI (m)',
+  ).optional();
+  // The keys a heat-sink case shares with a single-fin case (heat-sink-schema.ts).
+  const shared = { name: nameSchema, units: unitsSchema, material: materialSchema, h: hSchema, tip: tipSchema, coefficient };
+
+  const caseMapping = mapping(
+    {
+      name: nameSchema,
       fin: finSchema,
       material: materialSchema,
       convection: convectionSchema,
       base: baseSchema,
-      units: mapping(
-        {
-          length: word(lengthUnits, 'Unit of every length given as a bare number in this case (default m); a length with its own unit keeps it'),
-        },
-        'units',
-        'Units of bare numbers in this case; default SI (m)',
-      ).optional(),
+      units: unitsSchema,
     },
     'a case',
     'A fincheck case (format 1): one fin and its surroundings. A bare number is SI (m, W/(m*K), W/(m^2*K), ' +
       'm^2*K/W; lengths in units.length when given); a bare temperature is degC; a string carries its unit.',
   );
+  return { caseMapping, shared };
 }
 
-const schemas = new Map<LengthUnit, ReturnType<typeof buildCaseSchema>>();
+type BuiltSchema = ReturnType<typeof buildCaseSchema>;
+const schemas = new Map<LengthUnit, BuiltSchema>();
+
+function builtFor(lengthUnit: LengthUnit): BuiltSchema {
+  let built = schemas.get(lengthUnit);
+  if (built === undefined) {
+    built = buildCaseSchema(lengthUnit);
+    schemas.set(lengthUnit, built);
+  }
+  return built;
+}
 
 /** The schema for a case whose bare lengths are in `lengthUnit`. */
-export function caseSchemaFor(lengthUnit: LengthUnit): ReturnType<typeof buildCaseSchema> {
-  let schema = schemas.get(lengthUnit);
-  if (schema === undefined) {
-    schema = buildCaseSchema(lengthUnit);
-    schemas.set(lengthUnit, schema);
-  }
-  return schema;
+export function caseSchemaFor(lengthUnit: LengthUnit): BuiltSchema['caseMapping'] {
+  return builtFor(lengthUnit).caseMapping;
+}
+
+/** The parts a heat-sink case shares with a single-fin case (name, units, material, h, tip, a coefficient). */
+export function sharedSchemaFor(lengthUnit: LengthUnit): BuiltSchema['shared'] {
+  return builtFor(lengthUnit).shared;
 }
 
 /** The schema of a case without `units` (bare lengths in m): its types, and what `fincheck schema` prints. */

@@ -25,7 +25,7 @@ import type { Unit } from 'mathjs';
 import { clip, quoted } from './clip-text.js';
 
 export type QuantityKind =
-  'length' | 'conductivity' | 'heatTransferCoefficient' | 'contactResistance' | 'temperature' | 'temperatureDifference' | 'dimensionless';
+  'length' | 'conductivity' | 'heatTransferCoefficient' | 'contactResistance' | 'temperature' | 'temperatureDifference' | 'power' | 'dimensionless';
 
 export type QuantityResult = { ok: true; value: number } | { ok: false; problem: string };
 
@@ -49,6 +49,7 @@ export const quantityKinds: Record<QuantityKind, KindInfo> = {
   contactResistance: { noun: 'a contact resistance', bareUnit: 'm^2*K/W', examples: ['1.5e-4 m^2*K/W'] },
   temperature: { noun: 'a temperature', bareUnit: 'degC', examples: ['85 degC', '185 degF', '358.15 K'] },
   temperatureDifference: { noun: 'a temperature difference', bareUnit: 'K', examples: ['10 K', '18 degF'] },
+  power: { noun: 'a power', bareUnit: 'W', examples: ['60 W', '0.5 kW'] },
   dimensionless: { noun: 'a plain number', bareUnit: '', examples: ['0.9', '1/4'] },
 };
 
@@ -186,6 +187,7 @@ const siReference: Partial<Record<QuantityKind, string>> = {
   conductivity: 'W/(m*K)',
   heatTransferCoefficient: 'W/(m^2*K)',
   contactResistance: 'm^2*K/W',
+  power: 'W',
 };
 
 /** Names of common dimensions, to say what a wrong unit is ("W is a power, not a length"). */

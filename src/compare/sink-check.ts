@@ -1,0 +1,121 @@
+/**
+ * The check of a heat sink (heat-sink.md): the array shortcuts (sink-models.ts) against the fd-3d reference, on
+ * each source's mean temperature rise above ambient. drift_j = (rise_model,j - rise_ref,j) / rise_ref,j; the worst
+ * source (largest |drift|) decides the verdict against the tolerance (ok, marginal up to twice, unsafe beyond);
+ * no verdict (`unresolved`) while any source's GCI is above a tenth of the tolerance (resolved-reference.ts), nor
+ * for a model whose own error estimate (the series' truncation bound, the fin study's GCI) is.
+ *
+ * The reference is an argument: a SinkStudy, or a function that computes one (src/fd studySink), so the check
+ * can be tested with a hand-built study.
+ */
+import type { HeatSinkCase } from '../case/index.js';
+import type { SinkStudy } from '../fd/index.js';
+import { CAUTIONS } from './cautions.js';
+import { resolutionTarget } from './resolved-reference.js';
+import { sinkCautions, sinkFlags } from './sink-flags.js';
+import { exposedPlateArea, finCount } from './sink-geometry.js';
+import { sinkLedger } from './sink-ledger.js';
+import { sinkShortcuts, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
+import type { SinkCheckReport, SinkModelRow, SinkReferenceResult } from './sink-types.js';
+import { verdictOf } from './types.js';
+
+export interface SinkCheckOptions {
+  /** Relative tolerance on each source's mean rise (e.g. 0.02). */
+  tolerance: number;
+}
+
+export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | Promise<SinkStudy>);
+
+/** Runs the array shortcuts and judges them against the reference. */
+export async function runSinkCheck(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckReport> {
+  const study = typeof reference === 'function' ? await reference(c) : reference;
+  return sinkCheckFrom(c, study, await sinkShortcuts(c), options);
+}
+
+/** The reference's per-source rises and whether it is resolved enough to judge on. */
+export function judgeSinkReference(study: SinkStudy, tolerance: number): SinkReferenceResult {
+  const target = resolutionTarget(tolerance);
+  const errors = study.sources.map((s) => s.discretizationError);
+  const known = errors.every((e): e is number => e !== null && Number.isFinite(e));
+  const worst = known ? Math.max(...errors) : null;
+  const resolved = worst !== null && worst <= target;
+  const grids = study.unknowns.length;
+  const words = resolved
+    ? `estimated error at most ${worst.toExponential(1)} of each source's rise (GCI over ${grids} grids)`
+    : worst === null
+      ? "NOT RESOLVED: no error estimate (a single grid): verdicts are 'unresolved'"
+      : `NOT RESOLVED: estimated error ${worst.toExponential(1)} > ${target.toExponential(1)} (a tenth of the tolerance): verdicts are 'unresolved'`;
+  return {
+    model: 'fd-3d',
+    sourceRise_K: study.sources.map((s) => s.meanRise_K),
+    sourceDiscretizationError: errors,
+    discretizationError: worst,
+    energyBalance: study.energyBalance,
+    resolved,
+    target,
+    unknowns: study.unknowns,
+    finModel: study.finModel,
+    note: `fd-3d: ${study.finModel}; ${words}`,
+  };
+}
+
+function modelRow(c: HeatSinkCase, m: SinkShortcutResult, ref: SinkReferenceResult, tolerance: number): SinkModelRow {
+  const sourceDrift = m.sourceRise_K.map((rise, j) => (rise - (ref.sourceRise_K[j] ?? NaN)) / (ref.sourceRise_K[j] ?? NaN));
+  let worst = 0;
+  sourceDrift.forEach((d, j) => {
+    if (Math.abs(d) > Math.abs(sourceDrift[worst] ?? 0)) worst = j;
+  });
+  const drift = sourceDrift[worst] ?? NaN;
+  return {
+    model: m.model,
+    sourceRise_K: m.sourceRise_K,
+    sourceDrift,
+    drift,
+    worstSource: c.sources[worst]?.name ?? `source ${worst}`,
+    // A model whose own solution is not accurate to a tenth of the tolerance (a truncated series) is not judged either.
+    verdict: verdictOf(drift, tolerance, ref.resolved && m.relativeError <= ref.target),
+    sinkResistance_KperW: m.sinkResistance_KperW,
+    overallEfficiency: m.overallEfficiency,
+    finEfficiency: m.finEfficiency,
+    basis: m.basis,
+    accuracy: m.accuracy,
+  };
+}
+
+/** The check report from a reference study and the shortcuts already computed. */
+export function sinkCheckFrom(c: HeatSinkCase, study: SinkStudy, shortcuts: SinkShortcuts, options: SinkCheckOptions): SinkCheckReport {
+  if (study.sources.length !== c.sources.length) {
+    throw new Error(`sinkCheckFrom: the reference has ${study.sources.length} sources, the case ${c.sources.length}`);
+  }
+  const reference = judgeSinkReference(study, options.tolerance);
+  const ambient = c.convection.ambient_degC;
+  const idealFin = shortcuts.exactFin === null ? 0 : shortcuts.exactFin.conductance_WperK / shortcuts.exactFin.efficiency;
+  const idealConductance = finCount(c) * idealFin + c.convection.plate * exposedPlateArea(c);
+  const topRise = study.plateTopMean_degC - ambient;
+  return {
+    case: c.name,
+    kind: 'heat-sink',
+    tolerance: options.tolerance,
+    reference,
+    sources: study.sources.map((s, j) => {
+      const limit = c.sources[j]?.limit_degC ?? null;
+      return {
+        name: s.name,
+        power_W: s.power_W,
+        meanTemperature_degC: s.meanTemperature_degC,
+        maxTemperature_degC: s.maxTemperature_degC,
+        meanRise_K: s.meanRise_K,
+        discretizationError: s.discretizationError,
+        limit_degC: limit,
+        margin_K: limit === null ? null : limit - s.maxTemperature_degC,
+      };
+    }),
+    sinkResistance_KperW: study.sinkResistance_KperW,
+    overallEfficiency: idealConductance > 0 && topRise > 0 ? study.totalHeat_W / (idealConductance * topRise) : Number.NaN,
+    fins: study.fins.map((f) => ({ index: f.index, heatRate_W: f.heatRate_W, rootTemperature_degC: f.rootTemperature_degC })),
+    models: shortcuts.models.map((m) => modelRow(c, m, reference, options.tolerance)),
+    assumptions: sinkLedger(c, study, shortcuts),
+    flags: sinkFlags(c, study, reference),
+    cautions: sinkCautions(CAUTIONS),
+  };
+}

@@ -1,0 +1,33 @@
+/**
+ * A heat-sink case given to a command that takes single-fin cases: exit 2, naming the key that makes it a heat
+ * sink and what the command accepts, nothing on stdout. The sink is invented.
+ */
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { cli } from './run.js';
+
+const sink = `name: invented sink
+fin: { profile: rectangular, length: 30 mm, thickness: 1.5 mm }
+material: aluminium-6063
+array: { count: 10, pitch: 8 mm }
+plate: { width: 80 mm, length: 60 mm, thickness: 5 mm }
+sources:
+  - { power: 30 W, centre: [40 mm, 30 mm], size: [20 mm, 20 mm] }
+convection: { ambient: 25 degC, h: 40 W/(m^2*K) }
+`;
+
+describe('single-fin commands given a heat sink', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'fincheck-sink-cli-'));
+  const file = join(dir, 'sink.yaml');
+  writeFileSync(file, sink);
+  it.each([['solve'], ['plot']])('%s: exit 2 naming array and single-fin cases', async (command) => {
+    const run = await cli(command, file, ...(command === 'plot' ? ['--out', join(dir, 'plot.png')] : []));
+    expect(run.code).toBe(2);
+    expect(run.stdout).toBe('');
+    expect(run.stderr).toMatch(
+      /sink\.yaml:4:\d+: array: got .*; expected a single-fin case \(keys fin, material, convection and base\): a case with an array key is a heat sink/,
+    );
+  });
+});
