@@ -1,7 +1,9 @@
 /** `fincheck check CASE`: the reference solution against every applicable shortcut. */
 import type { Command } from 'commander';
-import { runCheck, formatCheck } from '../../src/compare/index.js';
-import { loadCaseInput } from '../case-input.js';
+import { parseAnyCaseText } from '../../src/case/index.js';
+import { UsageError } from '../../src/errors.js';
+import { formatCheck, formatSinkCheck, resolvedSinkStudy, runCheck, runSinkCheck } from '../../src/compare/index.js';
+import { printWarnings, readCaseInput } from '../case-input.js';
 import type { Io, SetExit } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { parseOption, referenceOption, toleranceOption } from '../options.js';
@@ -26,7 +28,22 @@ Examples:
     .action(async (file: string, o: { tolerance: string; reference: string; json?: boolean; strict?: boolean }) => {
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
-      const c = await loadCaseInput(file, io);
+      const { text, fileName } = await readCaseInput(file, io);
+      const any = parseAnyCaseText(text, fileName);
+      printWarnings(any.case.warnings ?? [], io);
+      if (any.kind === 'heat-sink') {
+        // A heat sink: the fd-3d reference (resolved to a tenth of the tolerance where the budget allows) and the array shortcuts.
+        if (reference !== 'auto')
+          throw new UsageError(
+            `--reference ${reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
+          );
+        const sink = any.case;
+        const report = await runSinkCheck(sink, (s) => resolvedSinkStudy(s, tolerance), { tolerance });
+        io.out(o.json ? `${JSON.stringify({ ...report, warnings: sink.warnings ?? [] }, null, 2)}\n` : formatSinkCheck(sink, report));
+        if (o.strict && report.models.some((m) => m.verdict === 'unsafe')) setExit(1);
+        return;
+      }
+      const c = any.case;
       requireReference(c, reference);
       const { report } = await runCheck(c, { tolerance, reference });
       io.out(o.json ? `${JSON.stringify({ ...report, warnings: c.warnings ?? [] }, null, 2)}\n` : formatCheck(c, report));

@@ -15,4 +15,5 @@ export { signedPercentText } from './percent-text.js';
 export { runSinkCheck, sinkCheckFrom, judgeSinkReference, type SinkCheckOptions, type SinkReferenceSource } from './sink-check.js';
 export { sinkShortcuts, SINK_SHORTCUT_IDS, type SinkShortcutId, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
 export { formatSinkCheck, describeSink } from './format-sink-check.js';
+export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
