@@ -410,7 +410,7 @@ interface RatedState extends State {
 }
 
 /** The 2-D fin as a model of the damped Newton driver (newton/damped-newton.ts); `method`: the linear solver of the last step. */
-export function newtonModel(setup: Newton2DSetup, n: number, requested: SolverMethod | 'auto', method: { last: SolverMethod }): NewtonModel<RatedState> {
+function newtonModel(setup: Newton2DSetup, n: number, requested: SolverMethod | 'auto', method: { last: SolverMethod }): NewtonModel<RatedState> {
   // 1: the node is solved for its ambient variable (shared by every state; changed only in `correction`).
   const ambient = new Uint8Array(n);
   const powerG = powerConductance(setup, n);
