@@ -1,8 +1,9 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, solve2dUnsupported, type Solve2DReport } from '../../src/compare/index.js';
+import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, type Solve2DReport } from '../../src/compare/index.js';
 import { loadCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
+import { requireModel2D } from '../model-coverage.js';
 import { gridOption, modelOption, nodesOption, parseOption } from '../options.js';
 import { UsageError } from '../../src/errors.js';
 import { grid2dIssue } from '../../src/fd/index.js';
@@ -38,8 +39,7 @@ Examples:
       const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);
       if (gridIssue !== null) throw new UsageError(`--grid: ${gridIssue}`);
       if (model === '2d') {
-        const unsupported = solve2dUnsupported(c);
-        if (unsupported !== null) throw new UsageError(`--model 2d: ${unsupported}; \`fincheck check\` solves this fin with fd-1d`);
+        requireModel2D(c);
         const { report } = runSolve2D(c, grid === undefined ? {} : { grid });
         io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve2D(report, describeCase(c)));
         return;
@@ -47,6 +47,11 @@ Examples:
       const { report } = runSolve(c, nodes === undefined ? {} : { nodes });
       io.out(o.json ? `${JSON.stringify({ ...report, warnings }, null, 2)}\n` : formatSolve(report, describeCase(c)));
     });
+}
+
+/** The effectiveness line of a solve: the number, or n/a with the reason. */
+function effectivenessLine(r: { effectiveness: number | null; effectivenessNote: string | null }): string {
+  return `  effectiveness  ${r.effectiveness === null ? `n/a (${r.effectivenessNote ?? ''})` : r.effectiveness.toPrecision(4)}`;
 }
 
 /** '  r1' on the first row and '  r2' on the last row of a radial profile table. */
@@ -65,7 +70,7 @@ function formatSolve(r: SolveReport, description: string[]): string {
   lines.push(`Model ${r.model}, ${r.grid.nodes} nodes`);
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (discretisation error ${err})`);
   lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
-  lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
+  lines.push(effectivenessLine(r));
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   const pts = r.profile;
   const radial = pts[0] !== undefined && 'r_m' in pts[0];
@@ -94,8 +99,9 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
       `    side edges   ${r.edgesHeatRate_W >= 0 ? '+' : ''}${r.edgesHeatRate_W.toPrecision(4)} W  (the cooled side edges, from fd-1d: Q cooled / Q insulated = ${(r.heatRate_W / r.sectionHeatRate_W).toFixed(5)})`,
     );
   }
-  if (r.efficiency !== null) lines.push(`  efficiency     ${r.efficiency.toFixed(5)}`);
-  lines.push(`  effectiveness  ${r.effectiveness.toPrecision(4)}`);
+  if (r.efficiency !== null || r.efficiencyNote !== null)
+    lines.push(`  efficiency     ${r.efficiency === null ? 'n/a' : r.efficiency.toFixed(5)}${r.efficiencyNote === null ? '' : ` (${r.efficiencyNote})`}`);
+  lines.push(effectivenessLine(r));
   lines.push(`  energy balance ${r.energyBalance.toExponential(1)} (|Q_base - Q_surfaces| / Q_base)`);
   if (r.newton) {
     const grids =

@@ -7,12 +7,12 @@ import type { Flag } from './types.js';
 
 export interface FlagInputs {
   family: 'straight' | 'pin' | 'annular';
-  /** Biot number across the thickness at the base: h (t/2) / k, or h (D/2) / k for pins. */
-  biot: number;
-  /** m L of the equivalent uniform fin (mean section, mean h). */
-  mL: number;
-  /** Effectiveness of the fin from the reference solution. */
-  effectiveness: number;
+  /** Biot number across the thickness at the base: h (t/2) / k, or h (D/2) / k for pins; null where the single h is negative. */
+  biot: number | null;
+  /** m L of the equivalent uniform fin (mean section, mean h); null where the single h is negative. */
+  mL: number | null;
+  /** Effectiveness of the fin from the reference solution; null where the bare base would exchange no heat. */
+  effectiveness: number | null;
   /** h A / (k P) at the base: a fin of any length helps only when this is below 1. */
   hAoverkP: number;
   tolerance: number;
@@ -33,22 +33,24 @@ export function designFlags(f: FlagInputs): Flag[] {
   const flags: Flag[] = [];
   const pct = (x: number): string => `${(100 * x).toFixed(x < 0.01 ? 2 : 1)} %`;
 
-  const est = estimateOneDError(f.family, f.biot, f.mL);
+  // Without Bi and mL (a negative single h) there is no table estimate; a measured 1-D drift still counts.
+  const est = f.biot === null || f.mL === null ? null : estimateOneDError(f.family, f.biot, f.mL);
   const biotName = f.family === 'pin' ? 'Bi = h(D/2)/k' : 'Bi = h(t/2)/k';
-  const oneDError = f.measuredOneDDrift ?? est.error;
-  if (oneDError > f.tolerance / 4 || f.biot > BIOT_RULE) {
+  const oneDError = f.measuredOneDDrift ?? est?.error ?? 0;
+  if (oneDError > f.tolerance / 4 || (f.biot !== null && f.biot > BIOT_RULE)) {
     const measured =
       f.measuredOneDDrift !== null
         ? `the 2-D solution shows the 1-D model over-predicting by ${pct(f.measuredOneDDrift)}`
-        : `the 1-D model over-predicts by about ${est.withinTable ? '' : 'at least '}${pct(est.error)} (${est.basis}, at this Bi and mL)`;
+        : `the 1-D model over-predicts by about ${est?.withinTable ? '' : 'at least '}${pct(est?.error ?? 0)} (${est?.basis ?? ''}, at this Bi and mL)`;
+    const where = f.biot === null ? 'no Bi (the single h is negative)' : `${biotName} = ${f.biot.toPrecision(3)}`;
     flags.push({
       flag: 'thick-fin',
       severity: oneDError > f.tolerance ? 'warning' : 'info',
-      value: f.biot,
-      message: `${biotName} = ${f.biot.toPrecision(3)} across the thickness: ${measured}; rule of thumb (common practice): 1-D is fine below Bi ~ ${BIOT_RULE}.`,
+      value: f.biot ?? oneDError,
+      message: `${where} across the thickness: ${measured}; rule of thumb (common practice): 1-D is fine below Bi ~ ${BIOT_RULE}.`,
     });
   }
-  if (f.effectiveness < EFFECTIVENESS_MIN) {
+  if (f.effectiveness !== null && f.effectiveness < EFFECTIVENESS_MIN) {
     flags.push({
       flag: 'low-effectiveness',
       severity: 'warning',
@@ -56,7 +58,7 @@ export function designFlags(f: FlagInputs): Flag[] {
       message: `effectiveness ${f.effectiveness.toFixed(2)} < ${EFFECTIVENESS_MIN}: the fin barely beats the bare base it covers; a fin is usually worth adding only above about 2 (textbook guidance, Incropera et al., from memory).`,
     });
   }
-  if (f.mL > ML_LONG) {
+  if (f.mL !== null && f.mL > ML_LONG) {
     flags.push({
       flag: 'long-fin',
       severity: 'info',

@@ -20,7 +20,7 @@ export function formatCheck(c: Case, r: CheckReport): string {
   const ref = r.reference;
   const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} nodes`;
   out.push(
-    `Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`,
+    `Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`,
   );
   out.push(
     `  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`,
@@ -55,6 +55,7 @@ export function formatCheck(c: Case, r: CheckReport): string {
   for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);
   out.push('  (efficiency of every row = Q / Q with the whole cooled surface at base temperature, the surface of the reference model;');
   if (ref.efficiencyNote !== null) out.push(`   efficiency: ${ref.efficiencyNote};`);
+  if (ref.effectivenessNote !== null) out.push(`   effectiveness: ${ref.effectivenessNote};`);
   out.push("   formula eff. = the shortcut's own textbook efficiency on the area its formula assumes, e.g. tanh(mLc)/(mLc)");
   out.push('   on the corrected length: compare it with a textbook; it differs from the common efficiency by that area;');
   out.push(`   the shortcuts are closed forms, exact for their own assumptions, so their error for this fin is the drift,`);

@@ -5,7 +5,7 @@ export { describeCase, describeH, describeTip } from './describe-case.js';
 export { formatCheck } from './format-check.js';
 export { modelProfiles } from './model-profiles.js';
 export { pointPosition, runSolve } from './solve.js';
-export { runSolve2D, solve2dUnsupported } from './solve2d.js';
+export { runSolve2D } from './solve2d.js';
 export type { CheckOptions } from './check.js';
 export type { ModelProfile, ModelProfiles } from './model-profiles.js';
 export type { SolveReport } from './solve.js';

@@ -9,29 +9,17 @@
 import type { Case, HDistribution, Profile } from '../case/index.js';
 import { uniformFin } from '../analytic/index.js';
 import { unusableEquivalent } from './shortcuts.js';
-import { solveFin1D, isLinearFinCase } from '../fd/index.js';
 import type { FinGeometry1D } from '../mesh/index.js';
 import type { EquivalentUniformFin } from './equivalent.js';
 import type { AssumptionRow, ModelId } from './types.js';
 
 export const LEDGER_NODES = 4001;
 
-/** fd-1d heat rate of a linear case on the ledger grid. */
-export function linearLedgerSolve(variant: Case): number {
-  if (!isLinearFinCase(variant)) throw new Error('linearLedgerSolve: the variant is not linear');
-  return solveFin1D(variant, { nodes: LEDGER_NODES }).heatRate;
-}
-
 /**
  * Rows for the geometric and boundary assumptions. `solve` is the fd-1d heat rate of a variant case on
- * one fixed grid (linear or nonlinear solver); `eq` the equivalent uniform fin the shortcuts used.
+ * one fixed grid (LEDGER_NODES; the check's own solvers); `eq` the equivalent uniform fin the shortcuts used.
  */
-export function assumptionLedger(
-  c: Case,
-  geometry: FinGeometry1D,
-  eq: EquivalentUniformFin,
-  solve: (variant: Case) => number = linearLedgerSolve,
-): AssumptionRow[] {
+export function assumptionLedger(c: Case, geometry: FinGeometry1D, eq: EquivalentUniformFin, solve: (variant: Case) => number): AssumptionRow[] {
   const rows: AssumptionRow[] = [];
   // The fin as given, on the same grid as every variant (so discretisation errors cancel).
   const actualHeatRate = solve(c);

@@ -133,3 +133,18 @@ export function shortcutCase(c: Case, guess: HGuess | null, ref: Fin1DResult): L
   if (!isLinearFinCase(c)) throw new Error('shortcutCase: a nonlinear fin needs a guess (guessesFor)');
   return c;
 }
+
+/**
+ * The single h (W/(m^2*K)) of the base guess at the base temperature, over the cooled surface: its least
+ * and largest value on the faces and a convective tip, and its value at the base. h θ_b is each surface's
+ * flux at the base temperature (convection plus radiation as an equivalent h), so a negative h marks a
+ * surface that would gain heat there: radiation from surroundings hotter than the fin outweighs convection.
+ */
+export function baseTemperatureH(c: Case): { least: number; largest: number; atBase: number } {
+  const s = linearSurrogate(c, 'base', null);
+  const h = s.convection.h;
+  const faces = h.kind === 'uniform' ? [h.h] : h.kind === 'linear' ? [h.base, h.tip] : [...h.h];
+  const tip = s.convection.tip;
+  const values = tip.kind === 'convective' && tip.h !== null ? [...faces, tip.h] : faces;
+  return { least: Math.min(...values), largest: Math.max(...values), atBase: faces[0] as number };
+}

@@ -1,5 +1,6 @@
 /** Turns model heat rates into the rows of the check table: efficiency, effectiveness, drift, verdict. */
 import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
+import { effectivenessOf, type EffectivenessBasis } from './effectiveness-basis.js';
 import type { ShortcutValue } from './shortcuts.js';
 import { verdictOf, type AssumptionRow, type ModelResult, type ReferenceResult } from './types.js';
 
@@ -16,13 +17,13 @@ export function shortcutInputs(
 
 /**
  * basis: Q with every cooled surface at the base temperature (the efficiency denominator of every row), W;
- * effectivenessScale: bare-base heat at the base temperature, W.
+ * effectiveness: the bare base's heat at the base temperature (the effectiveness denominator of every row).
  */
 export function modelRows(
   inputs: (Omit<ModelInput, 'model'> & { model: ModelResult['model'] })[],
   reference: ReferenceResult,
   basis: EfficiencyBasis,
-  effectivenessScale: number,
+  effectiveness: EffectivenessBasis,
   tolerance: number,
 ): ModelResult[] {
   return inputs.map((v) => {
@@ -31,7 +32,7 @@ export function modelRows(
       model: v.model,
       heatRate_W: v.heatRate_W,
       efficiency: efficiencyOf(v.heatRate_W, basis),
-      effectiveness: v.heatRate_W / effectivenessScale,
+      effectiveness: effectivenessOf(v.heatRate_W, effectiveness),
       drift,
       verdict: verdictOf(drift, tolerance, reference.resolved),
       formulaEfficiency: v.formulaEfficiency,

@@ -7,38 +7,21 @@
  * adds the edges' heat measured by fd-1d on one grid (Q_1D,cooled - Q_1D,insulated), a correction of order
  * t/w; the note says how large it is. The one-dimensional conduction drift compares fd-1d with fd-2d on
  * the same idealisation (insulated edges in both): (Q_1D - Q_2D) / Q_2D.
- * Nonlinear fins (check-nonlinear.ts) use the same construction with their own solvers (Newton in 1-D and
- * 2-D): `reference2DWith` takes the models as functions.
+ * Linear and nonlinear fins alike: the studies come from the one study (studyFin), which solves a
+ * nonlinear fin by Newton's method; the caller asks modelApplies(problem, '2d') before it studies the fin.
  * Units: W, K.
  */
 import type { Case } from '../case/index.js';
-import { UsageError } from '../errors.js';
-import { solveFin1D, type Fin1DStudy, type LinearFinCase, tipBoundary, idealHeatRate, studyFin2D, type Fin2DStudy } from '../fd/index.js';
-import { finGeometry } from '../mesh/index.js';
+import type { FinStudy1D, FinStudy2D, RefinementStudy } from '../fd/index.js';
+import { effectivenessOf, type EffectivenessBasis } from './effectiveness-basis.js';
 import type { AssumptionRow, UnjudgedReference } from './types.js';
 
-/** The solvers behind a 2-D reference. */
-export interface Reference2DModels<C extends Case> {
-  /** fd-2d refinement study of the case (a UsageError when the 2-D model does not cover it). */
-  study2D: (c: C) => Fin2DStudy;
-  /** fd-1d heat rate of a variant of the case on `nodes` nodes, W. */
-  heatRate1D: (variant: C, nodes: number) => number;
-  /** fd-1d Q_ideal of a variant of the case (every cooled surface at the base temperature), W. */
-  idealHeatRate1D: (variant: C) => number;
-  /** Words appended to the reference note. */
-  note?: (study: Fin2DStudy) => string;
-}
-
-const LINEAR_MODELS: Reference2DModels<LinearFinCase> = {
-  study2D: (c) => studyFin2D(c),
-  heatRate1D: (variant, nodes) => solveFin1D(variant, { nodes }).heatRate,
-  idealHeatRate1D: (variant) =>
-    idealHeatRate(finGeometry(variant), variant.convection.h, tipBoundary(variant), variant.base.T_degC - variant.convection.ambient_degC),
-};
+/** The fd-1d solution of a variant of the case on one grid of `nodes` nodes (the check's own solvers). */
+export type Solve1D = (variant: Case, nodes: number) => FinStudy1D;
 
 export interface Reference2D {
   reference: UnjudgedReference;
-  study: Fin2DStudy;
+  study: FinStudy2D;
   /** The ledger row "one-dimensional conduction". */
   oneDRow: AssumptionRow;
   /**
@@ -49,52 +32,40 @@ export interface Reference2D {
 }
 
 /**
- * fd-2d reference, or null when the case is outside the 2-D model and `required` is false
- * (then an automatic reference keeps fd-1d).
+ * The fd-2d reference from the 2-D study of the case and its fd-1d study. `effectiveness` holds the bare
+ * base's heat (W), `solve1D` the check's fd-1d solve of a variant, `extraNote` is appended to the note.
  */
-export function reference2D(c: LinearFinCase, oneD: Fin1DStudy, ideal1D: number, effectivenessScale: number, required: boolean): Reference2D | null {
-  return reference2DWith(c, oneD, ideal1D, effectivenessScale, required, LINEAR_MODELS);
-}
-
-/** reference2D with the given solvers (any case they accept). */
-export function reference2DWith<C extends Case>(
-  c: C,
-  oneD: Fin1DStudy,
-  idealHeatRate: number,
-  effectivenessScale: number,
-  required: boolean,
-  models: Reference2DModels<C>,
-): Reference2D | null {
-  let study: Fin2DStudy;
-  try {
-    study = models.study2D(c);
-  } catch (e) {
-    if (!required && e instanceof UsageError) return null;
-    throw e;
-  }
-  const edges = sideEdgeCorrection(c, oneD, models.heatRate1D);
+export function reference2D(
+  c: Case,
+  oneD: FinStudy1D,
+  study: FinStudy2D,
+  effectiveness: EffectivenessBasis,
+  solve1D: Solve1D,
+  extraNote: string,
+): Reference2D {
+  const edges = sideEdgeCorrection(c, oneD, solve1D);
   const { cooledEdges, insulatedHeatRate1D_W: insulated1d } = edges;
   const heatRate = study.heatRate_W + edges.edgeHeatRate_W;
   const edgeFactor = heatRate / study.heatRate_W;
   const finest = study.finest;
+  // A study (never a single grid) has its refinement.
+  const refinement = study.refinement as RefinementStudy;
   const grids = study.grids.map((g) => `${g.nx}x${g.ny}`).join(', ');
-  const order = study.heatRate.observedOrder;
   const section = finest.grid.section === 'planar' ? 'longitudinal section x width' : 'axisymmetric section';
   const edgeNote = cooledEdges ? `; side edges' cooling added from fd-1d (${pct(edgeFactor - 1)})` : '';
   const sectionIdeal = finest.efficiency === null ? null : finest.heatRate_W / finest.efficiency;
-  const edgesIdeal = cooledEdges ? idealHeatRate - models.idealHeatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }) : 0;
-  const ideal2D = sectionIdeal === null ? null : sectionIdeal + edgesIdeal;
+  const ideal2D = sectionIdeal === null ? null : sectionIdeal + edges.edgesIdealHeatRate_W;
   const reference: UnjudgedReference = {
     model: 'fd-2d',
     heatRate_W: heatRate,
-    effectiveness: heatRate / effectivenessScale,
+    effectiveness: effectivenessOf(heatRate, effectiveness),
     // The edge factor's own error is fd-1d's (GCI ~1e-8), added to the 2-D GCI.
-    discretizationError: study.discretizationError + edges.discretizationError,
+    discretizationError: refinement.gci + edges.discretizationError,
     energyBalance: study.energyBalance,
-    observedOrder: order,
+    observedOrder: refinement.observedOrder,
     grid: { nx: finest.grid.nodesX, ny: finest.grid.nodesY },
     tipTemperature_degC: finest.tipTemperature_degC,
-    note: `2-D finite volumes, ${section}, nodes ${grids}; ${study.heatRate.note}${edgeNote}${models.note ? models.note(study) : ''}`,
+    note: `2-D finite volumes, ${section}, nodes ${grids}; ${refinement.note}${edgeNote}${extraNote}`,
   };
   const oneDRow: AssumptionRow = {
     assumption: 'one-dimensional conduction (uniform temperature across the thickness)',
@@ -104,6 +75,9 @@ export function reference2DWith<C extends Case>(
   };
   return { reference, study, oneDRow, idealHeatRate: ideal2D };
 }
+
+/** Q_ideal does not depend on the grid (exact integrals of the geometry): the coarsest grid gives it. */
+const IDEAL_NODES = 3;
 
 /**
  * The side edges of a straight fin, which fd-2d (a section times the width) sees insulated: when the case
@@ -121,19 +95,23 @@ export interface SideEdgeCorrection {
   edgeHeatRate_W: number;
   /** fd-1d heat rate with the edges insulated (the fd-1d heat rate itself when not cooledEdges), W. */
   insulatedHeatRate1D_W: number;
+  /** fd-1d's Q_ideal of the edges alone, Q_ideal,1D(cooled) - Q_ideal,1D(insulated), W (0 when not cooledEdges). */
+  edgesIdealHeatRate_W: number;
   /** Error the edges' heat adds: fd-1d's GCI when cooledEdges, else 0. */
   discretizationError: number;
 }
 
-export function sideEdgeCorrection<C extends Case>(c: C, oneD: Fin1DStudy, heatRate1D: (variant: C, nodes: number) => number): SideEdgeCorrection {
-  const ref1d = oneD.result;
+export function sideEdgeCorrection(c: Case, oneD: FinStudy1D, solve1D: Solve1D): SideEdgeCorrection {
+  const ref1d = oneD.finest;
   const cooledEdges = ref1d.mesh.baseArea > 0 && c.fin.edges === 'cooled' && isStraight(c);
-  const insulated = cooledEdges ? heatRate1D({ ...c, fin: { ...c.fin, edges: 'insulated' } }, ref1d.mesh.nodes) : ref1d.heatRate;
+  const insulatedCase: Case = { ...c, fin: { ...c.fin, edges: 'insulated' } };
+  const insulated = cooledEdges ? solve1D(insulatedCase, ref1d.mesh.nodes).heatRate_W : ref1d.heatRate;
   return {
     cooledEdges,
     edgeHeatRate_W: ref1d.heatRate - insulated,
     insulatedHeatRate1D_W: insulated,
-    discretizationError: cooledEdges ? oneD.study.gci : 0,
+    edgesIdealHeatRate_W: cooledEdges ? ref1d.idealHeatRate - solve1D(insulatedCase, IDEAL_NODES).idealHeatRate_W : 0,
+    discretizationError: cooledEdges ? (oneD.discretizationError ?? Number.NaN) : 0,
   };
 }
 

@@ -5,12 +5,13 @@
  * 0.9 tolerance cannot be an `marginal` in truth by more than the last tenth (common practice, no source:
  * the usual advice is a numerical error an order of magnitude below the quantity one judges).
  *
- * fd-1d: the study is refined first (fd/resolve-study1d.ts: grading to the decay length 1/m, doubling
+ * fd-1d: the study is refined first (fd/study/resolve-study1d.ts, resolveFinStudy1D: grading to the decay length 1/m, doubling
  * within a budget). fd-2d: the study's own grids; where they do not reach the target the check falls back
  * to a resolved fd-1d reference (an automatic reference) or gives `unresolved` verdicts (a 2-D reference asked for).
  */
-import type { Fin2DStudy, Resolution } from '../fd/index.js';
+import type { FinStudy2D, Resolution } from '../fd/index.js';
 import { efficiencyOf, type EfficiencyBasis } from './efficiency-basis.js';
+import type { EffectivenessBasis } from './effectiveness-basis.js';
 import type { ReferenceResolution, ReferenceResult, UnjudgedReference } from './types.js';
 
 /** The share of the tolerance the reference's discretisation error may use. */
@@ -24,7 +25,7 @@ export function resolution1D(r: Resolution): ReferenceResolution {
   return { target: r.target, refinements: r.refinements, grids: r.nodes.map((n) => `${n}`), grading: r.grading, budget: r.budget };
 }
 
-export function resolution2D(study: Fin2DStudy, target: number): ReferenceResolution {
+export function resolution2D(study: FinStudy2D, target: number): ReferenceResolution {
   return {
     target,
     refinements: 0,
@@ -35,22 +36,36 @@ export function resolution2D(study: Fin2DStudy, target: number): ReferenceResolu
 }
 
 /**
- * The reference with its resolution (resolved when its GCI is at most the target; a NaN GCI is not) and its
- * efficiency on the check's one surface (efficiency-basis.ts).
+ * The reference with its resolution (resolved when its GCI is at most the target; a NaN GCI is not), its
+ * efficiency on the check's one surface (efficiency-basis.ts) and why its effectiveness is null, if it is
+ * (effectiveness-basis.ts).
  */
-export function judgedReference(ref: UnjudgedReference, resolution: ReferenceResolution, basis: EfficiencyBasis): ReferenceResult {
+export function judgedReference(
+  ref: UnjudgedReference,
+  resolution: ReferenceResolution,
+  basis: EfficiencyBasis,
+  effectiveness: EffectivenessBasis,
+): ReferenceResult {
   const resolved = ref.discretizationError <= resolution.target;
   const words = resolved
     ? ''
     : `; NOT RESOLVED: estimated error ${ref.discretizationError.toExponential(1)} > ${resolution.target.toExponential(1)} (a tenth of the tolerance) after ${resolution.refinements} refinements (${resolution.budget}): verdicts are 'unresolved'`;
-  return { ...ref, efficiency: efficiencyOf(ref.heatRate_W, basis), efficiencyNote: basis.note, note: `${ref.note}${words}`, resolved, resolution };
+  return {
+    ...ref,
+    efficiency: efficiencyOf(ref.heatRate_W, basis),
+    efficiencyNote: basis.note,
+    effectivenessNote: effectiveness.note,
+    note: `${ref.note}${words}`,
+    resolved,
+    resolution,
+  };
 }
 
 /**
  * The fd-2d reference when it is resolved; under an automatic reference an unresolved 2-D study hands the
  * reference to fd-1d (the note says so), with a 2-D reference asked for it stays and its verdicts are unresolved.
  */
-export function choose2DReference<T extends { reference: UnjudgedReference; study: Fin2DStudy }>(
+export function choose2DReference<T extends { reference: UnjudgedReference; study: FinStudy2D }>(
   twoD: T | null,
   required: boolean,
   target: number,

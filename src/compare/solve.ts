@@ -3,9 +3,10 @@
  * By default a refinement study (discretizationError from the GCI); with `nodes` exactly one grid
  * (discretizationError null).
  */
-import { INFINITE_TIP_NOTE, tipTemperatureNote } from './efficiency-basis.js';
+import { efficiencyBasis, ONE_D_SURFACE } from './efficiency-basis.js';
+import { definedEffectiveness, effectivenessBasis } from './effectiveness-basis.js';
 import type { Case } from '../case/index.js';
-import { solveFin1D, studyFin1D, type Fin1DResult, isLinearFinCase, solveNonlinearFin1D, studyNonlinearFin1D } from '../fd/index.js';
+import { finProblem, gridSolversNow, solveFinWith, studyFinWith, type FinStudy1D } from '../fd/index.js';
 
 /**
  * One point of a temperature profile: x_m, the distance along the fin from the base (m), or for annular
@@ -28,11 +29,14 @@ export interface SolveReport {
   model: 'fd-1d';
   grid: { nodes: number };
   heatRate_W: number;
-  /** Q / Q_ideal; null for an infinite tip (no finite surface, see efficiencyNote). */
+  /** Q / Q_ideal; null for an infinite tip (no finite surface) or a surface that would both lose and gain heat at the base temperature (see efficiencyNote). */
   efficiency: number | null;
   /** Why the efficiency is null or may exceed 1; null otherwise (efficiency-basis.ts). */
   efficiencyNote: string | null;
-  effectiveness: number;
+  /** Q / Q_bare; null where h is 0 at the base (see effectivenessNote). */
+  effectiveness: number | null;
+  /** Why the effectiveness is null; null otherwise (effectiveness-basis.ts). */
+  effectivenessNote: string | null;
   baseTemperature_degC: number;
   tipTemperature_degC: number;
   energyBalance: number;
@@ -46,16 +50,17 @@ export interface SolveReport {
 /** At most this many profile points in the output; every k-th node, never interpolated. */
 const MAX_PROFILE_POINTS = 401;
 
-export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; result: Fin1DResult } {
+export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveReport; study: FinStudy1D } {
   const single = opts.nodes !== undefined;
-  // Linear fins: one tridiagonal solve per grid; nonlinear fins (power-law h, radiation, k(T)): Newton.
-  const linear = isLinearFinCase(c);
-  const study = single ? null : linear ? studyFin1D(c) : studyNonlinearFin1D(c);
-  const result: Fin1DResult = study
-    ? study.result
-    : linear
-      ? solveFin1D(c, { nodes: opts.nodes as number })
-      : solveNonlinearFin1D(c, { nodes: opts.nodes as number });
+  // The one study: one direct solve per grid for a linear fin, Newton's method for a nonlinear one.
+  const problem = finProblem(c);
+  const solvers = gridSolversNow(problem);
+  const study = (
+    opts.nodes === undefined ? studyFinWith(solvers, problem, { model: '1d' }) : solveFinWith(solvers, problem, { model: '1d', nodes: opts.nodes })
+  ) as FinStudy1D;
+  const result = study.finest;
+  const efficiency = efficiencyBasis(c, result.idealHeatRate, ONE_D_SURFACE);
+  const effectiveness = effectivenessBasis(c);
   const n = result.mesh.nodes;
   const stride = single ? 1 : Math.max(1, Math.ceil((n - 1) / (MAX_PROFILE_POINTS - 1)));
   const ambient = c.convection.ambient_degC;
@@ -70,20 +75,21 @@ export function runSolve(c: Case, opts: { nodes?: number }): { report: SolveRepo
   for (let i = 0; i < n; i += stride) profile.push(point(i));
   if ((n - 1) % stride !== 0) profile.push(point(n - 1));
   return {
-    result,
+    study,
     report: {
       case: c.name,
       model: 'fd-1d',
       grid: { nodes: n },
       heatRate_W: result.heatRate,
-      efficiency: c.convection.tip.kind === 'infinite' ? null : result.efficiency,
-      efficiencyNote: c.convection.tip.kind === 'infinite' ? INFINITE_TIP_NOTE : tipTemperatureNote(c),
-      effectiveness: result.effectiveness,
+      efficiency: efficiency.idealHeatRate === null ? null : result.efficiency,
+      efficiencyNote: efficiency.note,
+      effectiveness: definedEffectiveness(result.effectiveness, effectiveness),
+      effectivenessNote: effectiveness.note,
       baseTemperature_degC: (result.theta[0] as number) + ambient,
       tipTemperature_degC: result.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: study ? study.study.gci : null,
-      observedOrder: study ? study.study.observedOrder : null,
+      discretizationError: study.discretizationError,
+      observedOrder: study.refinement === null ? null : study.refinement.observedOrder,
       profileStride: stride,
       profile,
     },

@@ -33,7 +33,10 @@ export interface ReferenceResult {
   efficiency: number | null;
   /** Why the efficiency is null (infinite tip) or may exceed 1 (prescribed tip temperature); null otherwise. */
   efficiencyNote: string | null;
-  effectiveness: number;
+  /** Q / Q_bare (effectiveness-basis.ts); null where the bare base would exchange no heat (h = 0 at the base, see effectivenessNote). */
+  effectiveness: number | null;
+  /** Why the effectiveness is null; null otherwise. */
+  effectivenessNote: string | null;
   /** Estimated relative discretisation error of heatRate_W (GCI of the finest grid). */
   discretizationError: number;
   energyBalance: number;
@@ -48,7 +51,7 @@ export interface ReferenceResult {
 }
 
 /** A reference before its resolution is judged (resolved-reference.ts adds it). */
-export type UnjudgedReference = Omit<ReferenceResult, 'resolved' | 'resolution' | 'efficiency' | 'efficiencyNote'>;
+export type UnjudgedReference = Omit<ReferenceResult, 'resolved' | 'resolution' | 'efficiency' | 'efficiencyNote' | 'effectivenessNote'>;
 
 export interface ModelResult {
   model: ShortcutId | 'fd-1d';
@@ -58,7 +61,8 @@ export interface ModelResult {
    * comparable; null for an infinite tip (reference.efficiencyNote says why).
    */
   efficiency: number | null;
-  effectiveness: number;
+  /** Q / Q_bare with the reference's Q_bare; null where it is 0 (reference.effectivenessNote says why). */
+  effectiveness: number | null;
   drift: number;
   verdict: Verdict;
   /** The shortcut's own efficiency formula value (e.g. tanh(mLc)/(mLc)), where it has one. */
@@ -104,9 +108,11 @@ export interface CheckReport {
   case: string;
   tolerance: number;
   /** Biot number h_b (t/2)/k across the thickness at the base (pins h_b (D/2)/k); nonlinear fins: h and k at the base temperature. */
-  biot: number;
+  biot: number | null;
   /** mL of the equivalent uniform fin the shortcuts use (nonlinear fins: the base-temperature guess). */
-  mL: number;
+  mL: number | null;
+  /** Why biot or mL is null (a negative single h: surroundings hotter than the fin); null otherwise. */
+  dimensionlessNote: string | null;
   reference: ReferenceResult;
   models: ModelResult[];
   notApplicable: NotApplicable[];

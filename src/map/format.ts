@@ -61,7 +61,7 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     lines.push('');
     const where = `${run.x.key} = ${value(own.x, run.x)}, ${run.y.key} = ${value(own.y, run.y)}`;
     lines.push(
-      `This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot.toPrecision(3)}, mL = ${own.mL.toPrecision(3)}`,
+      `This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot === null ? 'n/a' : own.biot.toPrecision(3)}, mL = ${own.mL === null ? 'n/a' : own.mL.toPrecision(3)}`,
     );
     for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(signedPercentText(m.drift), 10)}${m.verdict}`);
   }

@@ -32,8 +32,8 @@ export function dimensionlessFields(run: MapRun): { biot: Float64Array; mL: Floa
   const mL = new Float64Array(run.points.length).fill(Number.NaN);
   for (const p of run.points) {
     if (isPointError(p)) continue;
-    biot[p.index] = p.biot;
-    mL[p.index] = p.mL;
+    biot[p.index] = p.biot ?? Number.NaN;
+    mL[p.index] = p.mL ?? Number.NaN;
   }
   return { biot, mL };
 }

@@ -76,10 +76,10 @@ export interface PointResult {
   index: number;
   x: number;
   y: number;
-  /** Biot number across the thickness at the base, h (t/2)/k (pins h (D/2)/k). */
-  biot: number;
-  /** m L of the equivalent uniform fin (mean section, mean h), as `check` computes it. */
-  mL: number;
+  /** Biot number across the thickness at the base, h (t/2)/k (pins h (D/2)/k); null where check gives none (a negative single h). */
+  biot: number | null;
+  /** m L of the equivalent uniform fin (mean section, mean h), as `check` computes it; null as biot. */
+  mL: number | null;
   reference: PointReference;
   /** The requested models that apply at this point. */
   models: PointModel[];

@@ -5,7 +5,7 @@
  */
 import type { Case } from '../case/index.js';
 import { runCheck, type CheckOptions, modelProfiles } from '../compare/index.js';
-import { finProblem, finStudy1DFrom, finStudy2DFrom, modelApplies, studyFin, type FinStudy2D } from '../fd/index.js';
+import { finProblem, modelApplies, studyFin, type FinStudy2D } from '../fd/index.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
 export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;
@@ -32,9 +32,6 @@ export async function fieldStudy(c: Case): Promise<FinStudy2D> {
 
 /** The check and every model's profile (a '2d' reference the 2-D model does not cover throws the check's ModelNotApplicableError). */
 export async function checkPlotInput(c: Case, opts: CheckOptions): Promise<CheckPlotInput> {
-  const { report, oneD: oneDStudy, twoD: twoDStudy } = await runCheck(c, opts);
-  const problem = finProblem(c);
-  const oneD = finStudy1DFrom(problem, oneDStudy);
-  const twoD = twoDStudy === null ? null : finStudy2DFrom(problem, twoDStudy);
+  const { report, oneD, twoD } = await runCheck(c, opts);
   return { case: c, report, profiles: modelProfiles(c, report, oneD, twoD), oneD, twoD };
 }

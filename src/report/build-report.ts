@@ -55,7 +55,7 @@ function summary(r: CheckReport): Block[] {
   const worst = [...r.models].sort((a, b) => Math.abs(b.drift) - Math.abs(a.drift))[0];
   const tone: Tone = !ref.resolved ? 'warning' : counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
   const items = [
-    `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
+    `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
     ref.resolved
       ? `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`
       : `The reference is not resolved (estimated discretisation error above a tenth of the tolerance, ${relativeError(ref.resolution.target)}): no verdicts are given (${counts.unresolved} models unresolved).`,
@@ -91,7 +91,10 @@ function referenceFacts(r: CheckReport): Block {
         'Efficiency',
         `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)${ref.efficiencyNote !== null ? `; ${ref.efficiencyNote}` : ''}`,
       ],
-      ['Effectiveness', `${sig(ref.effectiveness)} (Q over the bare base area's heat rate)`],
+      [
+        'Effectiveness',
+        ref.effectiveness === null ? `n/a: ${ref.effectivenessNote ?? ''}` : `${sig(ref.effectiveness)} (Q over the bare base area's heat rate)`,
+      ],
       ['Tip temperature', `${ref.tipTemperature_degC.toFixed(2)} °C${ref.model === 'fd-2d' ? ' (centre of the tip)' : ''}`],
       [
         'Estimated discretisation error of Q',

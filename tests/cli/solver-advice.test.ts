@@ -15,18 +15,23 @@ import { randomSpdStencil } from '../fd2d/random.js';
 import { cli } from './run.js';
 
 // The 2-D study of the one case below fails as a real solver failure would (a stand-in for the fin
-// that made the multigrid CG fail before fin2d.ts solved for the departure from the lumped level).
-vi.mock('../../src/fd/two-d/linear-study.js', async (importOriginal) => {
-  const original = await importOriginal<typeof import('../../src/fd/two-d/linear-study.js')>();
+// that made the multigrid CG fail before fin2d.ts solved for the departure from the lumped level). The
+// one study (studyFin) solves each 2-D grid of a linear fin through linearGridSolvers.twoD.
+vi.mock('../../src/fd/study/linear-grid-solvers.js', async (importOriginal) => {
+  const original = await importOriginal<typeof import('../../src/fd/study/linear-grid-solvers.js')>();
+  const solvers = original.linearGridSolvers;
   return {
     ...original,
-    studyFin2D: (c: { name: string }, ...rest: unknown[]) => {
-      if (c.name === 'failing 2-D solve')
-        throw new SolverError(
-          'multigrid-preconditioned CG did not converge: relative residual 1.2e-7 after 7 iterations on a 153 x 33 grid',
-          'another-2d-grid',
-        );
-      return (original.studyFin2D as (...a: unknown[]) => unknown)(c, ...rest);
+    linearGridSolvers: {
+      ...solvers,
+      twoD: (...args: Parameters<typeof solvers.twoD>) => {
+        if (args[0].physics.name === 'failing 2-D solve')
+          throw new SolverError(
+            'multigrid-preconditioned CG did not converge: relative residual 1.2e-7 after 7 iterations on a 153 x 33 grid',
+            'another-2d-grid',
+          );
+        return solvers.twoD(...args);
+      },
     },
   };
 });

@@ -22,7 +22,7 @@ function biotAtCrossing(run: MapRun, model: MapModelId, level: number, mL = 1): 
     for (let i = 0; i + 1 < nx; i++) {
       const a = row[i];
       const b = row[i + 1];
-      if (!a || !b || isPointError(a) || isPointError(b) || !(a.mL <= mL && b.mL > mL)) continue;
+      if (!a || !b || isPointError(a) || isPointError(b) || a.mL === null || b.mL === null || a.biot === null || !(a.mL <= mL && b.mL > mL)) continue;
       const da = a.models.find((m) => m.model === model)?.drift;
       const db = b.models.find((m) => m.model === model)?.drift;
       if (da === undefined || db === undefined) throw new Error(`${model} missing at row ${j}`);

@@ -11,6 +11,11 @@
  * solver forms row 0 as θ_b (G_0 + C_b) - C_b θ_b, which cancels to G_0 θ_b with an absolute error
  * ~ ε C_b θ_b (this solver forms G_0 θ_b directly): measured <= 12 ε (1 + C_b θ_b / Q) over 3000
  * random cases, hence the factor 32.
+ * The surface heat rate Σ G_i θ_i + Q_tip adds one more term. Both solvers carry drops d_i = θ_b - θ_i, so a
+ * θ_i far below θ_b is known only to ~ε θ_b (absolute), and the sum to ~ε θ_b Σ G_i = ε Q_ideal: relative to Q
+ * that is ε / efficiency. A fin of low efficiency (fast-check seed -1581458057: an annular fin with h rising
+ * from 0 at its root to 412 W/(m^2 K) at an infinite tip, efficiency 0.006, 11 nodes) differed by 1.5e-14
+ * relative, 0.4 ε Q_ideal / Q. Hence 32 ε (1 + C_b θ_b / Q + Q_ideal / Q) for the surface heat rate.
  */
 import { fc, test } from '@fast-check/vitest';
 import { describe, expect } from 'vitest';
@@ -28,6 +33,11 @@ function allowance(c: Case, heatRate: number): number {
   return 32 * Number.EPSILON * (1 + (contact * thetaBase) / Math.abs(heatRate));
 }
 
+/** The surface heat rate's allowance: that of the base heat rate plus 32 ε Q_ideal / Q (header). */
+function surfaceAllowance(c: Case, heatRate: number, idealHeatRate: number): number {
+  return allowance(c, heatRate) + 32 * Number.EPSILON * Math.abs(idealHeatRate / heatRate);
+}
+
 /** Equal, or both the same non-finite value (effectiveness is +Infinity when h(0) = 0). */
 function expectSameFigure(a: number, b: number, tolerance: number): void {
   if (!Number.isFinite(a) || !Number.isFinite(b)) expect(Object.is(a, b)).toBe(true);
@@ -41,7 +51,9 @@ describe('linear fins through the nonlinear solver (fast-check: every profile, h
     const tolerance = allowance(fin, linear.heatRate);
     expect(nonlinear.mesh.nodes).toBe(linear.mesh.nodes);
     expect(Math.abs(relative(nonlinear.heatRate, linear.heatRate))).toBeLessThanOrEqual(tolerance);
-    expect(Math.abs(relative(nonlinear.surfaceHeatRate, linear.surfaceHeatRate))).toBeLessThanOrEqual(tolerance);
+    expect(Math.abs(relative(nonlinear.surfaceHeatRate, linear.surfaceHeatRate))).toBeLessThanOrEqual(
+      surfaceAllowance(fin, linear.heatRate, linear.idealHeatRate),
+    );
     const thetaBase = fin.base.T_degC - fin.convection.ambient_degC;
     for (let i = 0; i < linear.theta.length; i++) {
       expect(Math.abs((nonlinear.theta[i] as number) - (linear.theta[i] as number))).toBeLessThanOrEqual(tolerance * thetaBase);

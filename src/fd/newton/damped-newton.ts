@@ -1,7 +1,7 @@
 /**
  * The damped Newton iteration of every nonlinear fin model (1-D: one-d/newton-system.ts, 2-D:
- * two-d/newton-system.ts). The model supplies its state (unknowns d = θ_b - θ in K, residual in W), the
- * Newton correction of a state and the constrained step; this driver owns the iteration:
+ * two-d/newton-system.ts). The model supplies its state (its unknowns, residual in W), the Newton correction
+ * of a state and the constrained step; this driver owns the iteration:
  *
  * Damping: backtracking line search on ||R||_2 (Armijo condition with c = 1e-4, halving the step;
  * Dennis & Schnabel 1983, Numerical Methods for Unconstrained Optimization and Nonlinear Equations,
@@ -16,8 +16,8 @@
 
 /** What the driver reads of a state. */
 export interface NewtonState {
-  /** The unknowns: drops d = θ_b - θ, K. */
-  readonly drop: Float64Array;
+  /** The unknowns the steps are taken in (the model's choice: drops, potential drops, ambient variables). */
+  readonly unknowns: Float64Array;
   /** ||R||_2 and the model's relative residual. */
   norm: number;
   relative: number;
@@ -32,13 +32,13 @@ export interface NewtonModel<S extends NewtonState> {
   /** Relative residual below which only full steps are taken. */
   readonly roundOffRegime: number;
   createState(): S;
-  /** Writes the starting unknowns (from `initial`, constraints applied) into `into`. */
+  /** Writes the starting unknowns (from the drops `initial`, constraints applied) into `into`. */
   start(initial: Float64Array, into: Float64Array): void;
   /** Fills a state from its drops: residual, norms, validity. */
   evaluate(s: S): void;
-  /** The Newton correction δd of an evaluated state, into `delta`. */
+  /** The Newton correction of an evaluated state's unknowns, into `delta` (the model may re-express the state's unknowns first). */
   correction(s: S, delta: Float64Array): void;
-  /** d_trial = d + λ δd with the model's constraints, into `into`. */
+  /** Unknowns of the trial state, z + λ δz with the model's constraints, into `into`. */
   step(from: Float64Array, delta: Float64Array, lambda: number, into: Float64Array): void;
   /** Base heat rate of an evaluated state, W (per unit depth in 2-D). */
   heatRate(s: S): number;
@@ -74,7 +74,7 @@ export function dampedNewton<S extends NewtonState>(model: NewtonModel<S>, initi
   let current = model.createState();
   let trial = model.createState();
   const delta = new Float64Array(initial.length);
-  model.start(initial, current.drop);
+  model.start(initial, current.unknowns);
   model.evaluate(current);
   let heatRate = model.heatRate(current);
   let halvings = 0;
@@ -93,7 +93,7 @@ export function dampedNewton<S extends NewtonState>(model: NewtonModel<S>, initi
     let lambda = 1;
     const fullStepOnly = current.relative <= model.roundOffRegime;
     for (;;) {
-      model.step(current.drop, delta, lambda, trial.drop);
+      model.step(current.unknowns, delta, lambda, trial.unknowns);
       model.evaluate(trial);
       if (trial.valid && (fullStepOnly || trial.norm <= (1 - ARMIJO * lambda) * current.norm)) break;
       if (fullStepOnly && !trial.valid) return outcome(false, iteration, 'the Newton step gave non-finite temperatures');

@@ -30,7 +30,16 @@ import type { Mesh1D } from '../../mesh/index.js';
 import { contactConductance, type BaseBoundary, type TipBoundary } from './boundary.js';
 import { hAt } from '../problem/convection.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
-import { convectedExcess, equilibriumExcess, faceFlux, faceFluxSlope, radiationGap, type FaceLaw } from '../problem/surface-law.js';
+import {
+  ambientSlope,
+  convectedExcess,
+  equilibriumExcess,
+  faceFlux,
+  faceFluxAmbientSlope,
+  faceFluxSlope,
+  radiationGap,
+  type FaceLaw,
+} from '../problem/surface-law.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 
 export interface NonlinearBoundaries {
@@ -69,8 +78,12 @@ export function nonlinearBoundaries(problem: FinProblem, mesh: Mesh1D, law: Face
   };
 }
 
-/** Q_tip and dQ_tip/dθ_{n-1} for the tips that are not a fixed temperature (0 for those). */
-export function tipLoss(b: NonlinearBoundaries, thetaTip: number, out: FlowAndSlope): FlowAndSlope {
+/**
+ * Q_tip and dQ_tip/dθ_{n-1} for the tips that are not a fixed temperature (0 for those); with `ambientU` (the tip
+ * node's ambient variable u, problem/surface-law.ts) the derivative is taken with respect to u instead, and the
+ * face law's convection formed from u (exact where θ(u) underflows).
+ */
+export function tipLoss(b: NonlinearBoundaries, thetaTip: number, out: FlowAndSlope, ambientU: number | null = null): FlowAndSlope {
   const tip = b.tip;
   switch (tip.kind) {
     case 'adiabatic':
@@ -81,17 +94,30 @@ export function tipLoss(b: NonlinearBoundaries, thetaTip: number, out: FlowAndSl
     case 'convective': {
       const A = b.tipArea;
       if (tip.h === 'local') {
-        out.value = A * faceFlux(b.law, b.hxTip, thetaTip);
-        out.slope = A * faceFluxSlope(b.law, b.hxTip, thetaTip);
+        if (ambientU !== null) {
+          const radiated = b.law.radiative === 0 ? 0 : b.law.radiative * radiationGap(b.law, thetaTip);
+          out.value = A * ((b.hxTip * ambientU) / b.law.inverseBaseExcess + radiated);
+          out.slope = A * faceFluxAmbientSlope(b.law, b.hxTip, thetaTip, ambientU);
+        } else {
+          out.value = A * faceFlux(b.law, b.hxTip, thetaTip);
+          out.slope = A * faceFluxSlope(b.law, b.hxTip, thetaTip);
+        }
       } else {
         const radiated = b.law.radiative === 0 ? 0 : b.law.radiative * radiationGap(b.law, thetaTip);
         out.value = A * (tip.h * thetaTip + radiated);
         out.slope = A * (tip.h + faceFluxSlope(b.law, 0, thetaTip));
+        if (ambientU !== null) out.slope *= ambientSlope(b.law, ambientU);
       }
       return out;
     }
     case 'infinite':
-      return continuation(b, thetaTip, out);
+      continuation(b, thetaTip, out);
+      if (ambientU !== null) {
+        // dQ/du = dQ/dθ dθ/du: dθ/du -> 0 faster than dQ/dθ grows as θ -> 0 (n > -1); 0 when it underflows.
+        const chain = ambientSlope(b.law, ambientU);
+        out.slope = chain === 0 ? 0 : out.slope * chain;
+      }
+      return out;
     default: {
       const never: never = tip;
       throw new Error(`unknown tip condition ${JSON.stringify(never)}`);

@@ -30,13 +30,15 @@ import { cvLosses, radiationGap } from '../problem/surface-law.js';
 import type { NewtonSetup } from './newton-system.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 
-/** Base and surface heat rates of a solution given by its drops d = θ_b - θ (K), and their energy balance. */
-export function nonlinearHeatRates(setup: NewtonSetup, drop: Float64Array): FinHeatRates1D {
+/**
+ * Base and surface heat rates of a solution given by its drops d = θ_b - θ and its excess temperatures θ (K;
+ * both from the solve: θ near the ambient is carried to full relative precision, not as θ_b - d), and their
+ * energy balance.
+ */
+export function nonlinearHeatRates(setup: NewtonSetup, drop: Float64Array, theta: Float64Array): FinHeatRates1D {
   const n = drop.length;
   const last = n - 1;
   const b = setup.boundaries;
-  const reference = b.base.theta;
-  const theta = drop.map((d) => reference - d);
   const potential = new Float64Array(n);
   const ratio = new Float64Array(n);
   const loss = new Float64Array(n);

@@ -40,6 +40,7 @@ export function newtonSetup(problem: FinProblem, mesh: Mesh1D): NewtonSetup {
     boundaries: nonlinearBoundaries(problem, mesh, law, kirchhoff),
     linear: isLinearProblem(problem),
     keepSign: problem.exponent < 0 && !sinkAcrossAmbient,
+    ambientVariables: problem.exponent < 0,
   };
 }
 
@@ -75,7 +76,7 @@ export function solveNonlinearOnMesh(problem: FinProblem, mesh: Mesh1D, opts: Ne
     direct,
     (target, from) =>
       newtonSolve(target === 1 ? setup : newtonSetup(scaleNonlinearity(problem, target, kRef), mesh), from ?? new Float64Array(mesh.nodes), opts),
-    (attempt, reached) => failure(problem, mesh, attempt, reached),
+    (attempt, reached, budget) => failure(problem, mesh, attempt, reached, budget),
   );
   return summary(setup, c.outcome, c.totalIterations, c.halvings, c.stages);
 }
@@ -115,8 +116,10 @@ function advice(problem: FinProblem): string {
   return items.join(', ');
 }
 
-function failure(problem: FinProblem, mesh: Mesh1D, outcome: NewtonOutcome, reached: number): SolverError {
-  const progress = reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '';
+function failure(problem: FinProblem, mesh: Mesh1D, outcome: NewtonOutcome, reached: number, budget: string | null = null): SolverError {
+  const progress =
+    (reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '') +
+    (budget === null ? '' : `; ${budget}`);
   return new SolverError(
     `fd-1d (nonlinear fin) did not converge on ${mesh.nodes} nodes: ${outcome.failure ?? 'unknown reason'}` +
       ` after ${outcome.iterations} Newton steps (relative residual ${outcome.residual.toExponential(2)})${progress}. ` +

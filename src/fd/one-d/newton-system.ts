@@ -18,6 +18,21 @@
  * (same matrix; the right-hand side θ_b G_i of its rows, formed in the same order except at a
  * convective or infinite tip), so it reproduces the linear solution to the last bit or so.
  *
+ * Variables of the steps (the unknowns z the driver steps in; the drops d and θ follow from them):
+ * - the potential drop D (K) at most nodes: conduction is linear in D, so a step of the linearised
+ *   system is taken where it is exact, and mapped back by d = D^-1(D) (problem/conductivity.ts, dropAt).
+ *   For a constant k, D = d: the steps are those of d, bit for bit. Taken in d instead (as before), a step
+ *   of a k(T) table that changes k 2000-fold within a few kelvin turned w/κ into a jump across the table
+ *   (the line search halved ~18 times a step, and continuation crawled: fuzz case
+ *   wild-conductivity-table-hang.yaml).
+ * - the ambient variable u = sign(θ) |θ/θ_b|^(n+1) when n < 0 at nodes with |θ| < |θ_b|/4 (chooseVariables):
+ *   the convective loss is linear in u, and θ keeps its relative precision down to the underflow, so a fin
+ *   that reaches the fluid temperature (dead zone) converges to it (problem/surface-law.ts).
+ * With J = Ĵ diag(c) for the column scales c = dU/dz (1 for D up to sign, κ dθ/du for u, floored at
+ * COLUMN_FLOOR κ |θ_b| so that nothing under- or overflows; below the floor the coupling it scales is under
+ * 1e-20 of the conduction's round-off), the solve stays Ĵ w = -R with tangents (∂loss/∂z)/c; then
+ * δD = -w and δu = w / c.
+ *
  * Damping and stopping: the shared driver (newton/damped-newton.ts: Armijo line search, full steps near
  * round-off, here a relative residual <= 1e-10); trial states with non-finite values or a negative
  * absolute temperature are rejected.
@@ -31,7 +46,7 @@ import type { Mesh1D } from '../../mesh/index.js';
 import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js';
 import { tipLoss, type FlowAndSlope, type NonlinearBoundaries } from './newton-boundary.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
-import { cvLosses, type FaceLaw } from '../problem/surface-law.js';
+import { ambientSlope, ambientVariable, cvLosses, thetaOfAmbient, type FaceLaw } from '../problem/surface-law.js';
 import { createTridiagonalSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
 import { dampedNewton, type NewtonModel } from '../newton/damped-newton.js';
 
@@ -53,6 +68,8 @@ export interface NewtonSetup {
    * and no radiation sink on the other side of the ambient, so θ cannot legitimately cross 0.
    */
   readonly keepSign: boolean;
+  /** True when nodes near the ambient are solved for their ambient variable (n < 0; header). */
+  readonly ambientVariables: boolean;
 }
 
 export interface NewtonOptions {
@@ -68,6 +85,10 @@ export const DEFAULT_RESIDUAL_TOLERANCE = 1e-12;
 export const DEFAULT_HEAT_RATE_TOLERANCE = 1e-12;
 const ROUND_OFF_REGIME = 1e-10;
 const HEAT_RATE_FLOOR_FACTOR = 16 * Number.EPSILON;
+/** Smallest column scale of an ambient-variable node, relative to κ |θ_b| (header). */
+const COLUMN_FLOOR = 1e-20;
+/** A node switches to its ambient variable below this fraction of |θ_b|, and back above twice it. */
+const AMBIENT_FRACTION = 0.25;
 
 export interface NewtonOutcome {
   readonly converged: boolean;
@@ -86,14 +107,18 @@ export interface NewtonOutcome {
   readonly failure: string | null;
 }
 
-/** State of one iterate: drops, temperatures, potential drops, losses, residual and its norms. */
+/** State of one iterate: unknowns, drops, temperatures, potential drops, losses, residual and its norms. */
 interface State {
-  /** d_i = θ_b - θ_i, K: the unknowns. */
+  /** The unknowns z_i (header): D_i, or u_i at an ambient-variable node. */
+  readonly unknowns: Float64Array;
+  /** d_i = θ_b - θ_i, K. */
   readonly drop: Float64Array;
   readonly theta: Float64Array;
   /** Potential drops D_i = U(θ_b) - U(θ_i), K. */
   readonly potential: Float64Array;
   readonly ratio: Float64Array;
+  /** Column scale c_i = |dU_i/dz_i| / k_ref-free: κ_i at a potential node, κ_i dθ/du floored at an ambient one. */
+  readonly column: Float64Array;
   readonly loss: Float64Array;
   readonly lossSlope: Float64Array;
   readonly residual: Float64Array;
@@ -107,10 +132,12 @@ interface State {
 
 function createState(n: number): State {
   return {
+    unknowns: new Float64Array(n),
     drop: new Float64Array(n),
     theta: new Float64Array(n),
     potential: new Float64Array(n),
     ratio: new Float64Array(n),
+    column: new Float64Array(n),
     loss: new Float64Array(n),
     lossSlope: new Float64Array(n),
     residual: new Float64Array(n),
@@ -123,17 +150,41 @@ function createState(n: number): State {
   };
 }
 
-/** Fills a state from its drops: θ, D, κ, losses, residual, norms and the base heat rate. */
-function evaluate(setup: NewtonSetup, s: State): void {
+/** Fills a state from its unknowns: d, θ, D, κ, column scales, losses, residual, norms and the base heat rate. */
+function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   const { K, G, law, kirchhoff, boundaries: b } = setup;
-  const { drop, theta, potential: D, loss, residual: R } = s;
+  const { unknowns: z, drop, theta, potential: D, loss, residual: R } = s;
   const n = drop.length;
   const last = n - 1;
   const reference = b.base.theta;
-  for (let i = 0; i < n; i++) theta[i] = reference - (drop[i] as number);
+  for (let i = 0; i < n; i++) {
+    if (ambient[i] === 1) {
+      const t = thetaOfAmbient(law, z[i] as number);
+      theta[i] = t;
+      drop[i] = reference - t;
+    } else {
+      const d = kirchhoff.dropAt(z[i] as number);
+      drop[i] = d;
+      theta[i] = reference - d;
+    }
+  }
+  // Fixed temperatures exactly (not through D^-1).
+  if (b.base.kind === 'temperature') {
+    drop[0] = 0;
+    theta[0] = reference;
+  }
+  if (b.tip.kind === 'temperature') {
+    drop[last] = reference - b.tip.theta;
+    theta[last] = reference - (drop[last] as number);
+  }
   kirchhoff.evaluate(drop, D, s.ratio);
-  cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope);
-  tipLoss(b, theta[last] as number, s.tip);
+  const floorScale = COLUMN_FLOOR * Math.abs(reference);
+  for (let i = 0; i < n; i++) {
+    const kappa = s.ratio[i] as number;
+    s.column[i] = ambient[i] === 1 ? kappa * Math.max(ambientSlope(law, z[i] as number), floorScale) : kappa;
+  }
+  cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope, { flags: ambient, u: z, law });
+  tipLoss(b, theta[last] as number, s.tip, ambient[last] === 1 ? (z[last] as number) : null);
   let norm2 = 0;
   let maxResidual = 0;
   let maxScale = 0;
@@ -193,7 +244,10 @@ function evaluate(setup: NewtonSetup, s: State): void {
     let relative = 0;
     for (let i = 0; i < n; i++) {
       const radiationT = law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
-      const rowFloor = Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
+      // At an ambient-variable node the slope is d loss/du, and u carries its own relative precision: only
+      // radiation's ε T remains (its θ-slope, 4 ε σ S T^3, times T).
+      const radiationSlope = law.radiative !== 0 ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT ** 3 : 0;
+      const rowFloor = ambient[i] === 1 ? radiationSlope * radiationT : Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
       relative = Math.max(relative, Math.abs(R[i] as number) / Math.max(maxScale, rowFloor));
     }
     s.relative = relative;
@@ -214,11 +268,11 @@ function evaluate(setup: NewtonSetup, s: State): void {
 function assembleNewton(setup: NewtonSetup, s: State, system: ReturnType<typeof createTridiagonalSystem>): void {
   const { K, boundaries: b } = setup;
   const { lower, diag, upper, rhs, rowSum } = system;
-  const { drop, ratio, lossSlope, residual } = s;
+  const { drop, ratio, column, lossSlope, residual } = s;
   const n = drop.length;
   const last = n - 1;
   for (let i = 0; i < n; i++) {
-    const tangent = (lossSlope[i] as number) / (ratio[i] as number);
+    const tangent = (lossSlope[i] as number) / (column[i] as number);
     diag[i] = tangent;
     rowSum[i] = tangent;
     rhs[i] = -(residual[i] as number);
@@ -248,27 +302,67 @@ function assembleNewton(setup: NewtonSetup, s: State, system: ReturnType<typeof 
     rowSum[last] = 1;
     rhs[last] = (ratio[last] as number) * ((drop[last] as number) - (b.base.theta - b.tip.theta)); // κ (θ_L - θ)
   } else {
-    const tip = s.tip.slope / (ratio[last] as number);
+    const tip = s.tip.slope / (column[last] as number);
     diag[last] = (diag[last] as number) + tip;
     rowSum[last] = (rowSum[last] as number) + tip;
   }
 }
 
 /**
- * d_trial = d + λ δd, keeping fixed temperatures exact; with keepSign, a node whose θ would reach or
- * cross 0 goes to a tenth of its θ instead (approaching 0 geometrically, as the exact solution does).
+ * z_trial = z + λ δz, keeping fixed temperatures exact; with keepSign, a node whose θ would reach or cross 0
+ * goes to a tenth of its θ instead at a potential node (approaching 0 geometrically, as the exact solution
+ * does), and to u = 0 at an ambient node (the loss is linear in u: 0 is an ordinary point there).
  */
-function step(setup: NewtonSetup, from: Float64Array, delta: Float64Array, lambda: number, into: Float64Array): void {
+function step(setup: NewtonSetup, ambient: Uint8Array, from: Float64Array, delta: Float64Array, lambda: number, into: Float64Array): void {
   const n = from.length;
   const b = setup.boundaries;
+  const kirchhoff = setup.kirchhoff;
   const reference = b.base.theta;
   for (let i = 0; i < n; i++) {
-    const d = (from[i] as number) + lambda * (delta[i] as number);
-    const before = reference - (from[i] as number);
-    into[i] = setup.keepSign && before !== 0 && (reference - d) * before <= 0 ? reference - 0.1 * before : d;
+    const z = (from[i] as number) + lambda * (delta[i] as number);
+    into[i] = z;
+    if (!setup.keepSign) continue;
+    if (ambient[i] === 1) {
+      // u has the sign of θ, which keeps that of θ_b: a step across 0 stops at 0 (the loss is linear in u, so
+      // u = 0 is an ordinary point; in a dead zone the root is within round-off of it).
+      if (z * reference < 0) into[i] = 0;
+      continue;
+    }
+    const before = reference - kirchhoff.dropAt(from[i] as number);
+    if (before !== 0 && (reference - kirchhoff.dropAt(z)) * before <= 0) into[i] = kirchhoff.potentialDropAt(reference - 0.1 * before);
   }
   if (b.base.kind === 'temperature') into[0] = 0;
-  if (b.tip.kind === 'temperature') into[n - 1] = b.base.theta - b.tip.theta;
+  if (b.tip.kind === 'temperature') into[n - 1] = kirchhoff.potentialDropAt(b.base.theta - b.tip.theta);
+}
+
+/**
+ * Chooses the variable of every free node with a convective surface (G_i > 0: a node without one, at a sharp
+ * tip, has no term linear in u, and its step w / c would be unbounded) from its θ (header), and re-expresses
+ * the state's unknowns in it; true when any changed (the state is then re-evaluated). A fixed fraction of θ_b
+ * puts every row near the ambient in u, where its residual can vanish (measured: energy balance 2e-15 on a
+ * 4001-node cone with n = -1/2; the 2-D rule, loss slope above conduction, left rows in D whose loss is
+ * quantised by θ = θ_b - d, and 1e-10). In 2-D the large couplings across a thin section need that rule.
+ */
+function chooseVariables(setup: NewtonSetup, ambient: Uint8Array, s: State): boolean {
+  if (!setup.ambientVariables) return false;
+  const b = setup.boundaries;
+  const n = ambient.length;
+  const threshold = AMBIENT_FRACTION * Math.abs(b.base.theta);
+  let changed = false;
+  for (let i = 0; i < n; i++) {
+    if ((i === 0 && b.base.kind === 'temperature') || (i === n - 1 && b.tip.kind === 'temperature') || !((setup.G[i] as number) > 0)) continue;
+    const t = s.theta[i] as number;
+    if (ambient[i] === 0 && Math.abs(t) < threshold) {
+      ambient[i] = 1;
+      s.unknowns[i] = ambientVariable(setup.law, t);
+      changed = true;
+    } else if (ambient[i] === 1 && Math.abs(t) > 2 * threshold) {
+      ambient[i] = 0;
+      s.unknowns[i] = s.potential[i] as number;
+      changed = true;
+    }
+  }
+  return changed;
 }
 
 /** The 1-D fin as a model of the damped Newton driver (newton/damped-newton.ts). */
@@ -276,19 +370,28 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
   const system = createTridiagonalSystem(n);
   const w = new Float64Array(n);
   const work = new Float64Array(n);
+  // 1: the node is solved for its ambient variable (shared by every state; changed only in `correction`).
+  const ambient = new Uint8Array(n);
   return {
     linear: setup.linear,
     roundOffRegime: ROUND_OFF_REGIME,
     createState: () => createState(n),
-    start: (initial, into) => into.set(initial),
-    evaluate: (s) => evaluate(setup, s),
+    start: (initial, into) => {
+      ambient.fill(0);
+      for (let i = 0; i < n; i++) into[i] = setup.kirchhoff.potentialDropAt(initial[i] as number);
+    },
+    evaluate: (s) => evaluate(setup, ambient, s),
     correction: (s, delta) => {
+      if (chooseVariables(setup, ambient, s)) evaluate(setup, ambient, s);
       assembleNewton(setup, s, system);
       const solution = solver ? solver(system) : conservativeThomasInto(system, w, work);
-      // Ĵ w = -R gives δθ = w / κ, so δd = -w / κ.
-      for (let i = 0; i < n; i++) delta[i] = -(solution[i] as number) / (s.ratio[i] as number);
+      // Ĵ w = -R with w = δU: δD = -w at a potential node, δu = w / c at an ambient one.
+      for (let i = 0; i < n; i++) {
+        const wi = solution[i] as number;
+        delta[i] = ambient[i] === 1 ? wi / (s.column[i] as number) : -wi;
+      }
     },
-    step: (from, delta, lambda, into) => step(setup, from, delta, lambda, into),
+    step: (from, delta, lambda, into) => step(setup, ambient, from, delta, lambda, into),
     heatRate: (s) => s.heatRate,
     heatRateFloor: (s, heatRate) => s.heatRateFloor / Math.abs(heatRate),
   };

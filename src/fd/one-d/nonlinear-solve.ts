@@ -122,7 +122,7 @@ function dropsOf(problem: FinProblem, theta: Float64Array): Float64Array {
 function finish(problem: FinProblem, solved: MeshSolve, coarseGridIterations: number): NonlinearFin1DResult {
   const { setup, theta, drop } = solved;
   const mesh = setup.mesh;
-  const rates = nonlinearHeatRates(setup, drop);
+  const rates = nonlinearHeatRates(setup, drop, theta);
   const ideal = nonlinearIdealHeatRate(problem, setup);
   return {
     model: 'fd-1d',

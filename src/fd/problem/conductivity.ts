@@ -13,6 +13,9 @@
  * For a table, k is piecewise linear in e, so D is integrated exactly (trapezoids from e = 0 to the
  * last table point before d, then to d), every piece formed from drops, never from differences of
  * large potentials. For a constant k, D = d and κ = 1 exactly (the linear scheme, bit for bit).
+ * Inverse (dropAt, for Newton steps taken in D): on the piece of k that holds D, k_ref D - I_0 = k_0 x + s x^2/2
+ * with x = d - e_0 from the same start point (e_0, I_0 = ∫_0^{e_0} k de, k_0) as the forward trapezoid, solved
+ * as x = 2 q / (k_0 + sqrt(k_0^2 + 2 s q)), q = k_ref D - I_0 (no cancellation; k_0^2 + 2 s q = k(d)^2 > 0).
  */
 import type { Conductivity } from '../../case/index.js';
 
@@ -33,6 +36,10 @@ export interface KirchhoffTransform {
   readonly kRef: number;
   /** k at excess temperature θ (K), W/(m K). */
   readonly conductivityAt: (theta: number) => number;
+  /** The drop d (K) whose potential drop is D (K): the inverse of D(d). */
+  readonly dropAt: (potentialDrop: number) => number;
+  /** D(d) of one drop d, K. */
+  readonly potentialDropAt: (drop: number) => number;
   /** Writes D(d_i) (K) and κ_i = k(T_i)/k_ref for the drops d_i (K) of every node. */
   readonly evaluate: (drop: Float64Array, potentialDrop: Float64Array, ratio: Float64Array) => void;
   /** The linear pieces of k between θ = lo and θ = hi (lo < hi), in order. */
@@ -60,6 +67,8 @@ function constantTransform(k: number): KirchhoffTransform {
     constant: true,
     kRef: k,
     conductivityAt: () => k,
+    dropAt: (potentialDrop) => potentialDrop,
+    potentialDropAt: (drop) => drop,
     evaluate: (drop, potentialDrop, ratio) => {
       potentialDrop.set(drop);
       ratio.fill(1);
@@ -145,10 +154,31 @@ function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: num
     const e = byDrop.at[from] as number;
     return ((pointIntegral[from] as number) + 0.5 * (d - e) * ((byDrop.values[from] as number) + kd)) / kRef;
   };
+  // The integral at every table point is increasing in e (k > 0): the piece of a potential drop is found on it.
+  const integralAt = piecewiseLinear(pointIntegral, new Float64Array(count));
+  const dropAt = (D: number): number => {
+    const target = D * kRef;
+    const j = segmentOf(integralAt, target);
+    // Start point and slope of the piece, as in potentialDrop.
+    let e0 = 0;
+    let I0 = 0;
+    let k0 = kRef;
+    if (j !== zeroSegment) {
+      const from = j > zeroSegment ? j : j + 1;
+      e0 = byDrop.at[from] as number;
+      I0 = pointIntegral[from] as number;
+      k0 = byDrop.values[from] as number;
+    }
+    const slope = j < 0 || j === count - 1 ? 0 : (byDrop.slopes[j] as number);
+    const q = target - I0;
+    return e0 + (2 * q) / (k0 + Math.sqrt(Math.max(0, k0 * k0 + 2 * slope * q)));
+  };
   return {
     constant: false,
     kRef,
     conductivityAt: (theta) => valueAt(byTheta, theta),
+    dropAt,
+    potentialDropAt: (d) => potentialDrop(d, valueAt(byDrop, d)),
     evaluate: (drop, potential, ratio) => {
       for (let i = 0; i < drop.length; i++) {
         const d = drop[i] as number;

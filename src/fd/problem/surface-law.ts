@@ -14,6 +14,17 @@
  * scheme, θ taken at the node over its CV,
  *   loss_i = G_i g(θ_i) θ_i + ε σ S_i (T_i^4 - T_s^4),   G_i = ∫_CV h_x P dx,   S_i = ∫_CV P dx,
  * so that with n = 0 and ε = 0 it is the linear scheme's G_i θ_i exactly. The derivative is diagonal.
+ * g θ is formed as |θ_b| sign(θ) |θ/θ_b|^(n+1) (one power, finite for every θ when n > -1; g alone overflows
+ * for n < 0 as θ -> 0).
+ *
+ * Near the ambient with n < 0 the loss ~ |θ|^(n+1) has an infinite slope at θ = 0, and for n -> -1 it is
+ * nearly a step: the fin reaches the fluid temperature at a finite distance and stays there (a dead zone,
+ * θ = 0 exactly). Newton in θ cannot get there (each step from θ > 0 overshoots to -θ n/(n+1)), and θ carried
+ * as a drop θ_b - d cannot hold a θ below ε |θ_b|, whose loss |θ_b| (ε)^(n+1) G is still ~16 % of the base
+ * CV's for n = -0.95. Nodes near the ambient are therefore solved for the ambient variable
+ *   u = sign(θ) |θ/θ_b|^(n+1),   θ(u) = |θ_b| sign(u) |u|^(1/(n+1)),   g θ = |θ_b| u,
+ * in which the convective loss is linear (d(G g θ)/du = G |θ_b|) and θ has full relative precision down to
+ * the underflow (`ambientVariable`, `thetaOfAmbient`, `ambientSlope`).
  */
 import type { FinProblem } from './fin-problem.js';
 import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from './fin-problem.js';
@@ -59,9 +70,30 @@ export function radiationGap(law: FaceLaw, theta: number): number {
  */
 const LARGEST_SLOPE = 1e300;
 
-/** g(θ) θ, K: 0 at θ = 0 also for n < 0 (where g itself is infinite). */
+/** g(θ) θ = |θ_b| sign(θ) |θ/θ_b|^(n+1), K (θ when n = 0; 0 at θ = 0 also for n < 0, where g is infinite). */
 export function convectedExcess(law: FaceLaw, theta: number): number {
-  return theta === 0 ? 0 : powerFactor(law, theta) * theta;
+  if (law.exponent === 0) return theta;
+  if (theta === 0) return 0;
+  const magnitude = Math.pow(Math.abs(theta) * law.inverseBaseExcess, law.exponent + 1) / law.inverseBaseExcess;
+  return theta > 0 ? magnitude : -magnitude;
+}
+
+/** The ambient variable u = sign(θ) |θ/θ_b|^(n+1) of a node at excess θ (header; dimensionless). */
+export function ambientVariable(law: FaceLaw, theta: number): number {
+  return convectedExcess(law, theta) * law.inverseBaseExcess;
+}
+
+/** θ(u) = |θ_b| sign(u) |u|^(1/(n+1)), K. */
+export function thetaOfAmbient(law: FaceLaw, u: number): number {
+  if (u === 0) return 0;
+  const magnitude = Math.pow(Math.abs(u), 1 / (law.exponent + 1)) / law.inverseBaseExcess;
+  return u > 0 ? magnitude : -magnitude;
+}
+
+/** dθ/du = |θ_b| |u|^(1/(n+1) - 1) / (n + 1), K (0 at u = 0 for n < 0). */
+export function ambientSlope(law: FaceLaw, u: number): number {
+  const p = law.exponent + 1;
+  return Math.pow(Math.abs(u), 1 / p - 1) / law.inverseBaseExcess / p;
 }
 
 /** Face flux q(θ), W/m^2, for position part hx, W/(m^2 K). */
@@ -78,28 +110,66 @@ export function faceFluxSlope(law: FaceLaw, hx: number, theta: number): number {
   return convected + 4 * law.radiative * T * T * T;
 }
 
+/** dq/du at the ambient variable u of excess θ (header), W/m^2: hx |θ_b| + 4 ε σ T^3 dθ/du. */
+export function faceFluxAmbientSlope(law: FaceLaw, hx: number, theta: number, u: number): number {
+  const convected = hx / law.inverseBaseExcess;
+  if (law.radiative === 0) return convected;
+  const T = law.ambient_K + theta;
+  return convected + 4 * law.radiative * T * T * T * ambientSlope(law, u);
+}
+
+/** Nodes solved for their ambient variable (header): flag 1, the variable u, and the law that defines u. */
+export interface AmbientNodes {
+  readonly flags: Uint8Array;
+  readonly u: Float64Array;
+  readonly law: FaceLaw;
+}
+
 /**
  * Losses of every CV and their derivatives, W and W/K: loss_i = G_i g θ_i + ε σ S_i (T_i^4 - T_s^4).
- * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2).
+ * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2). With `ambient`, a flagged
+ * node's convective loss is formed from its u (G_i |θ_b| u_i: exact where θ = θ_b |u|^(1/(n+1)) underflows) and its
+ * derivative is taken with respect to u (W). `ambient.law` defines u (a 2-D tip with its own h has exponent 0 but
+ * the faces' variable); entries are index-aligned with `theta`.
  */
-export function cvLosses(law: FaceLaw, G: Float64Array, S: Float64Array, theta: Float64Array, loss: Float64Array, slope: Float64Array): void {
+export function cvLosses(
+  law: FaceLaw,
+  G: Float64Array,
+  S: Float64Array,
+  theta: Float64Array,
+  loss: Float64Array,
+  slope: Float64Array,
+  ambient?: AmbientNodes,
+): void {
   const n = theta.length;
   const { exponent, radiative, ambient_K: Ta, surroundings_K: Ts } = law;
   const scale = law.inverseBaseExcess;
+  const sameVariable = ambient !== undefined && ambient.law.exponent === exponent;
   for (let i = 0; i < n; i++) {
     const t = theta[i] as number;
-    const g = exponent === 0 ? 1 : Math.pow(Math.abs(t) * scale, exponent);
     const Gi = G[i] as number;
+    const inAmbient = ambient !== undefined && ambient.flags[i] === 1;
+    const u = inAmbient ? (ambient.u[i] as number) : 0;
+    const chain = inAmbient ? ambientSlope(ambient.law, u) : 1;
     // A CV without convective surface (G_i = 0: the node at a sharp or cusped tip) exchanges nothing: with
     // n < 0 at θ = 0, g is infinite and 0 * g would put NaN into the Newton matrix (fuzz finding: a convex
     // parabolic fin, n = -0.95, ended in a NaN pivot).
-    let value = t === 0 || Gi === 0 ? 0 : Gi * g * t;
-    let derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
+    let value: number;
+    let derivative: number;
+    if (inAmbient) {
+      // The law in u: G |θ_b| u (the faces' law), or G θ(u) (exponent 0: linear in θ).
+      value = sameVariable ? (Gi * u) / scale : Gi * t;
+      derivative = sameVariable ? Gi / scale : Gi * chain;
+    } else {
+      value = exponent === 0 ? Gi * t : Gi === 0 ? 0 : Gi * convectedExcess(law, t);
+      derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * Math.pow(Math.abs(t) * scale, exponent));
+    }
     if (radiative !== 0) {
       const T = Ta + t;
       const Si = radiative * (S[i] as number);
       value += Si * ((T - Ts) * (T + Ts) * (T * T + Ts * Ts));
-      derivative += 4 * Si * T * T * T;
+      const radiationSlope = 4 * Si * T * T * T;
+      derivative += inAmbient ? radiationSlope * chain : radiationSlope;
     }
     loss[i] = value;
     slope[i] = derivative;

@@ -2,16 +2,18 @@
  * What solves a fin on one grid of a model (grid-solvers.ts chooses them per fin): the grids and the
  * solution on one grid.
  */
+import type { Grading } from '../../mesh/index.js';
 import type { Fin1DResult } from '../one-d/linear-solve.js';
 import type { NewtonReport } from '../newton/newton-report.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 import type { Fin2DResult } from '../two-d/linear-solve.js';
 import type { NonlinearFin2DProblem } from '../two-d/nonlinear-problem.js';
 
-/** A 1-D grid: nodes, and the refinement factor of a nested grid (1 otherwise). */
+/** A 1-D grid: nodes, the refinement factor of a nested grid (1 otherwise), and the node distribution ('auto': one-d/linear-solve.ts, autoGrading). */
 export interface Grid1D {
   readonly nodes: number;
   readonly refine?: number;
+  readonly grading?: Grading | 'auto';
 }
 
 /** A 2-D grid: nodes along the fin and across the half-thickness (or radius). */

@@ -20,7 +20,7 @@ export function linearProblem1D(problem: FinProblem): FinProblem1D {
 
 export const linearGridSolvers: GridSolvers = {
   nonlinear: false,
-  oneD: (problem, grid) => solveFinProblem1D(linearProblem1D(problem), { nodes: grid.nodes, refine: grid.refine ?? 1, grading: 'auto' }),
+  oneD: (problem, grid) => solveFinProblem1D(linearProblem1D(problem), { nodes: grid.nodes, refine: grid.refine ?? 1, grading: grid.grading ?? 'auto' }),
   twoD: (problem, grid) =>
     solveFin2DProblem(problem.linear, { nx: grid.nx, ny: grid.ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face }),
 };

@@ -16,7 +16,7 @@ export const newtonGridSolvers: GridSolvers = {
   oneD: (problem, grid, previous) =>
     isLinearProblem(problem)
       ? linearGridSolvers.oneD(problem, grid)
-      : solveNonlinearProblem1D(problem, { nodes: grid.nodes, refine: grid.refine ?? 1, grading: 'auto' }, previous),
+      : solveNonlinearProblem1D(problem, { nodes: grid.nodes, refine: grid.refine ?? 1, grading: grid.grading ?? 'auto' }, previous),
   twoD: (problem, grid, previous) =>
     isLinearProblem(problem.physics)
       ? linearGridSolvers.twoD(problem, grid)

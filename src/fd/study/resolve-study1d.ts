@@ -22,9 +22,13 @@
  */
 import type { FinGeometry1D, Grading } from '../../mesh/index.js';
 import { hAt, hBreakpoints } from '../problem/convection.js';
-import { DEFAULT_STUDY_NODES, studyFinProblem1D, type Fin1DStudy } from '../one-d/linear-solve.js';
-import type { FinProblem1D } from '../one-d/problem.js';
+import { DEFAULT_STUDY_NODES } from '../one-d/linear-solve.js';
+import type { FinProblem } from '../problem/fin-problem.js';
+import type { FinStudy1D } from './fin-study.js';
+import type { GridSolvers } from './grid-solver.js';
+import { linearProblem1D } from './linear-grid-solvers.js';
 import type { RefinementStudy } from './refinement.js';
+import { studyFinWith } from './study-fin.js';
 
 /** How far the study may refine. */
 export interface ResolutionBudget {
@@ -140,20 +144,30 @@ export function resolveStudy1D<S extends { readonly study: RefinementStudy }>(
   };
 }
 
-/** The resolved refinement study of a linear 1-D problem (decay grading from its own h, P, k, A). */
-export function resolveFinProblem1D(
-  problem: FinProblem1D,
+/**
+ * The resolved refinement study of a fin with the 1-D model (studyFinWith: the direct solve per grid of a
+ * linear fin, Newton's method for a nonlinear one). `decayFrom` is the linear fin whose h and k set the
+ * decay length near the base: the fin itself when it is linear, else a linear surrogate of it (h and k at
+ * the base temperature, radiation as an equivalent h).
+ */
+export function resolveFinStudy1D(
+  solvers: GridSolvers,
+  problem: FinProblem,
+  decayFrom: FinProblem,
   target: number,
   budget: ResolutionBudget = DEFAULT_RESOLUTION_BUDGET,
-): { study: Fin1DStudy; resolution: Resolution } {
-  return resolveStudy1D((nodes, g) => studyFinProblem1D(problem, { nodes, grading: g }), decayGradingOf(problem), target, budget);
+): { study: FinStudy1D; resolution: Resolution } {
+  const run = (nodes: readonly number[], grading: Grading | 'auto'): { study: RefinementStudy; fin: FinStudy1D } => {
+    const fin = studyFinWith(solvers, problem, { model: '1d', nodes, grading }) as FinStudy1D;
+    return { study: fin.refinement as RefinementStudy, fin };
+  };
+  const { study, resolution } = resolveStudy1D(run, decayGradingOf(decayFrom), target, budget);
+  return { study: study.fin, resolution };
 }
 
-/**
- * The decay grading of a linear problem (nonlinear fins: of their linear surrogate with h and k at the
- * base temperature, which sets the decay length near the base), or null.
- */
-export function decayGradingOf(problem: FinProblem1D): DecayGrading | null {
+/** The decay grading of a linear fin (constant k, h independent of temperature, no radiation), or null. */
+export function decayGradingOf(fin: FinProblem): DecayGrading | null {
+  const problem = linearProblem1D(fin);
   const L = problem.geometry.length;
   const m = baseDecayParameter(problem.geometry, problem.conductivity, (x) => hAt(problem.h, x, L));
   return decayGrading(problem.geometry, m, problem.tip.kind === 'temperature', hBreakpoints(problem.h, L));

@@ -13,6 +13,7 @@
  * The model must cover the fin (problem/model-applies.ts): ask modelApplies first; a model that does not
  * cover it throws ModelNotApplicableError with the reason.
  */
+import type { Grading } from '../../mesh/index.js';
 import { DEFAULT_STUDY_NODES, studyGrids } from '../one-d/linear-solve.js';
 import { alongFin1D } from '../one-d/along-fin.js';
 import type { FinProblem } from '../problem/fin-problem.js';
@@ -20,18 +21,21 @@ import { requireModel, type FinModel } from '../problem/model-applies.js';
 import { alongFin2D } from '../two-d/along-fin.js';
 import { gridFamily2D, gridValues, summariseStudy2D, type Fin2DStudyOptions } from '../two-d/linear-study.js';
 import { twoDFinProblem } from '../two-d/nonlinear-problem.js';
+import { grid2dIssue } from '../two-d/linear-solve.js';
 import { sizingProblem } from '../two-d/linear-study.js';
 import type { AlongFin } from './along-fin.js';
 import type { FinStudy, FinStudy1D, FinStudy2D, NewtonStatistics } from './fin-study.js';
+import type { Fin1DResult } from '../one-d/linear-solve.js';
 import { gridSolvers, type Grid1D, type Grid2D, type GridSolution1D, type GridSolution2D, type GridSolvers } from './grid-solvers.js';
 import { richardsonGci } from './refinement.js';
 import { solveGrids } from './refinement-loop.js';
-import { finStudy1DFields } from './from-studies.js';
 
 export interface FinStudyOptions {
   readonly model: FinModel;
   /** 1-D: node counts of the grids (>= 3; default DEFAULT_STUDY_NODES). */
   readonly nodes?: readonly number[];
+  /** 1-D: the node distribution of every grid (default 'auto': one-d/linear-solve.ts, autoGrading). */
+  readonly grading?: Grading | 'auto';
   /** 2-D: the grid family (number of grids, coarsest cells across, aspect; two-d/linear-study.ts). */
   readonly family?: Pick<Fin2DStudyOptions, 'levels' | 'coarseCellsAcross' | 'aspect'>;
 }
@@ -53,7 +57,8 @@ export async function solveFin(problem: FinProblem, grid: FinGrid): Promise<FinS
 export function studyFinWith(solvers: GridSolvers, problem: FinProblem, opts: FinStudyOptions): FinStudy {
   requireModel(problem, opts.model);
   if (opts.model === '1d') {
-    const grids = studyGrids(opts.nodes ?? DEFAULT_STUDY_NODES, 'studyFin');
+    const grading = opts.grading ?? 'auto';
+    const grids = studyGrids(opts.nodes ?? DEFAULT_STUDY_NODES, 'studyFin').map((g) => ({ ...g, grading }));
     const results = solveGrids(grids, (g: Grid1D, previous: GridSolution1D | undefined) => solvers.oneD(problem, g, previous));
     const refinement = richardsonGci(results.map((r) => ({ size: r.mesh.cellSize, value: r.heatRate })));
     return study1D(problem, results, refinement);
@@ -72,6 +77,21 @@ export function studyFinWith(solvers: GridSolvers, problem: FinProblem, opts: Fi
     efficiencyRefinement: summary.efficiency,
     extrapolatedHeatRate_W: summary.extrapolatedHeatRate_W,
   };
+}
+
+/**
+ * Why the grids of a study of the fin cannot be used (in the problem's words), or null when they can: the
+ * 1-D grids always can; the finest 2-D grid of the family may hold more nodes than fit in memory (a fin
+ * hundreds of decay lengths long). Ask before studying: studyFin throws GridError otherwise. The model must
+ * cover the fin (modelApplies).
+ */
+export function studyGridIssue(problem: FinProblem, opts: FinStudyOptions): string | null {
+  if (opts.model === '1d') return null;
+  const twoD = twoDFinProblem(problem);
+  const grids = gridFamily2D(sizingProblem(twoD), opts.family ?? {});
+  const finest = grids[grids.length - 1] as Grid2D;
+  const issue = grid2dIssue(twoD.linear.section, finest.nx, finest.ny);
+  return issue === null ? null : `the finest grid of the 2-D study: ${issue}`;
 }
 
 /** solveFin with grid solvers already loaded. */
@@ -129,5 +149,38 @@ function common2D(
     baseTemperature_degC: finest.baseTemperature_degC,
     tipTemperature_degC: finest.tipTemperature_degC,
     newton: newtonOf(results),
+  };
+}
+
+/** The fields of a FinStudy1D that its finest grid's solution gives. */
+function finStudy1DFields(
+  problem: FinProblem,
+  finest: Fin1DResult,
+): Pick<
+  FinStudy1D,
+  | 'model'
+  | 'problem'
+  | 'finest'
+  | 'heatRate_W'
+  | 'surfaceHeatRate_W'
+  | 'energyBalance'
+  | 'idealHeatRate_W'
+  | 'efficiency'
+  | 'effectiveness'
+  | 'baseTemperature_degC'
+  | 'tipTemperature_degC'
+> {
+  return {
+    model: 'fd-1d',
+    problem,
+    finest,
+    heatRate_W: finest.heatRate,
+    surfaceHeatRate_W: finest.surfaceHeatRate,
+    energyBalance: finest.energyBalance,
+    idealHeatRate_W: finest.idealHeatRate,
+    efficiency: finest.efficiency,
+    effectiveness: finest.effectiveness,
+    baseTemperature_degC: (finest.theta[0] as number) + problem.ambient_degC,
+    tipTemperature_degC: finest.tipTemperature_degC,
   };
 }

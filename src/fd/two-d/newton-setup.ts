@@ -55,6 +55,8 @@ export interface Newton2DSetup {
   readonly linear: boolean;
   /** No node may change the sign of its θ in one step (one-d/newton-system.ts, keepSign). */
   readonly keepSign: boolean;
+  /** Nodes near the ambient are solved for their ambient variable (n < 0; one-d/newton-system.ts). */
+  readonly ambientVariables: boolean;
 }
 
 export function gridOperators2D(problem: NonlinearFin2DProblem, grid: Grid2D): GridOperators2D {
@@ -93,5 +95,6 @@ export function newton2DSetup(problem: NonlinearFin2DProblem, physics: FinProble
     thetaBase: physics.base.theta,
     linear: isLinearProblem(physics),
     keepSign: physics.exponent < 0 && !sinkAcrossAmbient,
+    ambientVariables: physics.exponent < 0 && process.env['NOAMB'] !== '1',
   };
 }

@@ -20,6 +20,10 @@
  * For a linear problem started from d = 0, Ĵ is the linear system's matrix and -R(θ_b) its right-hand
  * side minus A θ_b, so the first step gives the linear solution (to the linear solver's residual).
  *
+ * Variables of the steps as in 1-D (one-d/newton-system.ts): the potential drop D at most nodes (δD = -w, mapped
+ * back by D^-1), the ambient variable u near the fluid temperature when n < 0 (δu = w / c, c = κ dθ/du floored);
+ * the tangent conductances are then (de/dz) / c, the matrix stays symmetric positive definite.
+ *
  * Damping and stopping: the driver shared with 1-D (newton/damped-newton.ts: Armijo line search, full
  * steps near round-off, here a relative residual <= 1e-8), non-finite trial states and negative absolute
  * temperatures rejected. Converged when the relative
@@ -30,7 +34,7 @@
  */
 import { buildSystem2D, type BoundaryTerms2D, type SideTerms } from './boundary.js';
 import { heatRatesFromExchange, type HeatRates2D } from './heat-rate.js';
-import { cvLosses } from '../problem/surface-law.js';
+import { ambientSlope, ambientVariable, cvLosses, thetaOfAmbient } from '../problem/surface-law.js';
 import { SIDE_NAMES, type Newton2DSetup, type SideName } from './newton-setup.js';
 import { chooseSolverMethod, MAX_BANDED_BYTES, prepareSolver2D, type SolverMethod } from '../linear-algebra/auto-solver.js';
 import { bandedCholeskyBytes } from '../linear-algebra/banded-cholesky.js';
@@ -61,6 +65,10 @@ const HEAT_RATE_FLOOR_FACTOR = 16 * Number.EPSILON;
  * hides under the floor: the energy balance stays at round-off (measured 5e-16 on such grids).
  */
 const RESIDUAL_FLOOR_FACTOR = 16 * Number.EPSILON;
+/** Smallest column scale of an ambient-variable node, relative to κ |θ_b| (one-d/newton-system.ts). */
+const COLUMN_FLOOR = 1e-20;
+/** A node in its ambient variable goes back to D when its loss slope falls below this fraction of its conduction. */
+const AMBIENT_HYSTERESIS = 0.25;
 
 export interface Newton2DOutcome {
   readonly converged: boolean;
@@ -81,10 +89,14 @@ export interface Newton2DOutcome {
 }
 
 interface State {
+  /** The unknowns z of the driver: D, or u at an ambient-variable node (header). */
+  readonly unknowns: Float64Array;
   readonly drop: Float64Array;
   readonly theta: Float64Array;
   readonly potential: Float64Array;
   readonly ratio: Float64Array;
+  /** Column scale c_p: κ_p, or κ_p dθ/du floored at an ambient-variable node. */
+  readonly column: Float64Array;
   readonly residual: Float64Array;
   readonly scale: Float64Array;
   /** Round-off scale of each row: sum_q |K_pq| (|D_p| + |D_q|), W per depth. */
@@ -92,8 +104,10 @@ interface State {
   /** Per side: exchange and its slope de/dθ at the side's nodes. */
   readonly exchange: Record<SideName, Float64Array>;
   readonly slope: Record<SideName, Float64Array>;
-  /** θ gathered at each side's nodes (work array of cvLosses). */
+  /** θ gathered at each side's nodes (work array of cvLosses), and their ambient-variable flags. */
   readonly sideTheta: Record<SideName, Float64Array>;
+  readonly sideAmbient: Record<SideName, Uint8Array>;
+  readonly sideU: Record<SideName, Float64Array>;
   norm: number;
   relative: number;
   valid: boolean;
@@ -105,25 +119,30 @@ function createState(setup: Newton2DSetup): State {
     const t = setup.ops.terms;
     return { base: new Float64Array(t.base.nodes.length), face: new Float64Array(t.face.nodes.length), tip: new Float64Array(t.tip.nodes.length) };
   };
+  const t = setup.ops.terms;
   return {
+    unknowns: new Float64Array(n),
     drop: new Float64Array(n),
     theta: new Float64Array(n),
     potential: new Float64Array(n),
     ratio: new Float64Array(n),
+    column: new Float64Array(n),
     residual: new Float64Array(n),
     scale: new Float64Array(n),
     floor: new Float64Array(n),
     exchange: perSide(),
     slope: perSide(),
     sideTheta: perSide(),
+    sideAmbient: { base: new Uint8Array(t.base.nodes.length), face: new Uint8Array(t.face.nodes.length), tip: new Uint8Array(t.tip.nodes.length) },
+    sideU: perSide(),
     norm: 0,
     relative: 0,
     valid: true,
   };
 }
 
-/** Exchange and slope of one side at the state's temperatures (header). */
-function sideExchange(setup: Newton2DSetup, side: SideTerms, s: State): void {
+/** Exchange and slope (per θ, or per u at an ambient-variable node) of one side at the state's temperatures (header). */
+function sideExchange(setup: Newton2DSetup, ambient: Uint8Array, side: SideTerms, s: State): void {
   const name = side.name as SideName;
   const out = s.exchange[name];
   const slope = s.slope[name];
@@ -135,18 +154,22 @@ function sideExchange(setup: Newton2DSetup, side: SideTerms, s: State): void {
       return;
     case 'convective': {
       const theta = s.sideTheta[name];
+      const flags = s.sideAmbient[name];
+      const u = s.sideU[name];
       side.nodes.forEach((p, e) => {
         theta[e] = s.theta[p] as number;
+        flags[e] = ambient[p] as number;
+        u[e] = s.unknowns[p] as number;
       });
       const law = name === 'tip' ? setup.tipLaw : setup.faceLaw;
-      cvLosses(law, side.conductance, setup.ops.surfaces[name], theta, out, slope);
+      cvLosses(law, side.conductance, setup.ops.surfaces[name], theta, out, slope, { flags, u, law: setup.faceLaw });
       return;
     }
     case 'contact':
       side.nodes.forEach((p, e) => {
         const c = side.conductance[e] as number;
         out[e] = -c * (s.drop[p] as number);
-        slope[e] = c;
+        slope[e] = ambient[p] === 1 ? c * ambientSlope(setup.faceLaw, s.unknowns[p] as number) : c;
       });
       return;
     default: {
@@ -156,29 +179,52 @@ function sideExchange(setup: Newton2DSetup, side: SideTerms, s: State): void {
   }
 }
 
-/** Fills a state from its drops: θ, D, κ, exchanges, residual, row scales and norms. */
-function evaluate(setup: Newton2DSetup, s: State): void {
-  const { K, terms, fixed } = setup.ops;
-  const { drop, theta, potential: D, residual: R, scale, floor } = s;
+/** Fills a state from its unknowns: d, θ, D, κ, column scales, exchanges, residual, row scales and norms. */
+function evaluate(setup: Newton2DSetup, ambient: Uint8Array, s: State): void {
+  const { K, terms, fixed, fixedDrop } = setup.ops;
+  const { unknowns: z, drop, theta, potential: D, residual: R, scale, floor } = s;
   const n = drop.length;
   const thetaBase = setup.thetaBase;
-  for (let p = 0; p < n; p++) theta[p] = thetaBase - (drop[p] as number);
-  setup.kirchhoff.evaluate(drop, D, s.ratio);
+  const kirchhoff = setup.kirchhoff;
+  for (let p = 0; p < n; p++) {
+    if (fixed[p] === 1) {
+      drop[p] = fixedDrop[p] as number;
+      theta[p] = thetaBase - (drop[p] as number);
+    } else if (ambient[p] === 1) {
+      const t = thetaOfAmbient(setup.faceLaw, z[p] as number);
+      theta[p] = t;
+      drop[p] = thetaBase - t;
+    } else {
+      const d = kirchhoff.dropAt(z[p] as number);
+      drop[p] = d;
+      theta[p] = thetaBase - d;
+    }
+  }
+  kirchhoff.evaluate(drop, D, s.ratio);
+  const floorScale = COLUMN_FLOOR * Math.abs(thetaBase);
+  for (let p = 0; p < n; p++) {
+    const kappa = s.ratio[p] as number;
+    s.column[p] = ambient[p] === 1 ? kappa * Math.max(ambientSlope(setup.faceLaw, z[p] as number), floorScale) : kappa;
+  }
   conductionInto(K, D, R, scale, floor);
   for (const name of SIDE_NAMES) {
     const side = terms[name];
-    sideExchange(setup, side, s);
+    sideExchange(setup, ambient, side, s);
     const values = s.exchange[name];
     const slopes = s.slope[name];
     // An exchange steep in θ (h ~ θ^n with n < 0 near the ambient; radiation, whose T = T_amb + θ carries
     // ε_mach T) is known only to its slope times the round-off of θ: part of the row's floor.
     const law = name === 'tip' ? setup.tipLaw : setup.faceLaw;
+    const surfaces = setup.ops.surfaces[name];
     side.nodes.forEach((p, e) => {
       const v = values[e] as number;
       R[p] = (R[p] as number) + v;
       scale[p] = (scale[p] as number) + Math.abs(v);
-      const roundOffT = Math.abs(thetaBase) + (law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[p] as number)) : 0);
-      floor[p] = (floor[p] as number) + Math.abs(slopes[e] as number) * roundOffT;
+      const radiationT = law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[p] as number)) : 0;
+      // At an ambient-variable node the slope is per u, which carries its own precision: only radiation's ε T.
+      floor[p] =
+        (floor[p] as number) +
+        (ambient[p] === 1 ? 4 * law.radiative * (surfaces[e] ?? 0) * radiationT ** 4 : Math.abs(slopes[e] as number) * (Math.abs(thetaBase) + radiationT));
     });
   }
   let norm2 = 0;
@@ -261,7 +307,7 @@ function newtonSystem(setup: Newton2DSetup, s: State): System2D {
     const side = terms[name];
     if (side.kind === 'adiabatic' || side.kind === 'fixed') return { ...side, farTheta: 0 };
     const slope = s.slope[name];
-    const conductance = Float64Array.from(side.nodes, (p, e) => (slope[e] as number) / (s.ratio[p] as number));
+    const conductance = Float64Array.from(side.nodes, (p, e) => (slope[e] as number) / (s.column[p] as number));
     return { ...side, conductance, farTheta: 0 };
   };
   const tangentTerms: BoundaryTerms2D = { base: tangent('base'), face: tangent('face'), tip: tangent('tip') };
@@ -272,21 +318,74 @@ function newtonSystem(setup: Newton2DSetup, s: State): System2D {
 }
 
 /**
- * d_trial = d + λ δd, fixed nodes exact; with keepSign a node whose θ would reach or cross 0 goes to a
- * tenth of its θ instead (as in 1-D).
+ * z_trial = z + λ δz, fixed nodes exact; with keepSign a node whose θ would reach or cross 0 goes to a tenth
+ * of its θ (potential node) or to u = 0 (ambient node) instead (as in 1-D).
  */
-function step(setup: Newton2DSetup, from: Float64Array, delta: Float64Array, lambda: number, into: Float64Array): void {
+function step(setup: Newton2DSetup, ambient: Uint8Array, from: Float64Array, delta: Float64Array, lambda: number, into: Float64Array): void {
   const { fixed, fixedDrop } = setup.ops;
+  const kirchhoff = setup.kirchhoff;
   const reference = setup.thetaBase;
   for (let p = 0; p < from.length; p++) {
     if (fixed[p] === 1) {
-      into[p] = fixedDrop[p] as number;
+      into[p] = kirchhoff.potentialDropAt(fixedDrop[p] as number);
       continue;
     }
-    const d = (from[p] as number) + lambda * (delta[p] as number);
-    const before = reference - (from[p] as number);
-    into[p] = setup.keepSign && before !== 0 && (reference - d) * before <= 0 ? reference - 0.1 * before : d;
+    const z = (from[p] as number) + lambda * (delta[p] as number);
+    into[p] = z;
+    if (!setup.keepSign || ambient[p] === 1) continue;
+    const before = reference - kirchhoff.dropAt(from[p] as number);
+    if (before !== 0 && (reference - kirchhoff.dropAt(z)) * before <= 0) into[p] = kirchhoff.potentialDropAt(reference - 0.1 * before);
   }
+}
+
+/**
+ * Power-law conductance of every node, W/K per depth: the G_p of the cooled sides whose law has n < 0 (0 where
+ * none: inside the section, on an adiabatic side, at a node without surface). Only such a node has a term linear
+ * in u; for any other its column would be the vanishing conduction scale alone, and the step w / c unbounded.
+ */
+function powerConductance(setup: Newton2DSetup, n: number): Float64Array {
+  const G = new Float64Array(n);
+  if (!setup.ambientVariables) return G;
+  for (const name of SIDE_NAMES) {
+    const side = setup.ops.terms[name];
+    const law = name === 'tip' ? setup.tipLaw : setup.faceLaw;
+    if (side.kind !== 'convective' || law.exponent >= 0) continue;
+    side.nodes.forEach((p, e) => {
+      if (setup.ops.fixed[p] !== 1) G[p] = (G[p] as number) + (side.conductance[e] as number);
+    });
+  }
+  return G;
+}
+
+/**
+ * Chooses the variable of every node with a power-law loss, and re-expresses the state's unknowns; true when any
+ * changed. A row is solved in the variable in which its dominant term is linear: u once the loss's θ-slope
+ * (n + 1) G |θ/θ_b|^n exceeds the conduction's κ |K_pp| (on a thin section the couplings across it are large,
+ * and a face node put in u while its neighbour inside stays in D made the step strongly nonlinear there),
+ * back to D below a quarter of it.
+ */
+function chooseVariables(setup: Newton2DSetup, G: Float64Array, ambient: Uint8Array, s: State): boolean {
+  if (!setup.ambientVariables) return false;
+  const law = setup.faceLaw;
+  const diag = setup.ops.K.diag;
+  let changed = false;
+  for (let p = 0; p < ambient.length; p++) {
+    const Gp = G[p] as number;
+    if (!(Gp > 0)) continue;
+    const t = s.theta[p] as number;
+    const lossSlope = t === 0 ? Infinity : (law.exponent + 1) * Gp * Math.pow(Math.abs(t) * law.inverseBaseExcess, law.exponent);
+    const conduction = (s.ratio[p] as number) * Math.abs(diag[p] as number);
+    if (ambient[p] === 0 && lossSlope > conduction) {
+      ambient[p] = 1;
+      s.unknowns[p] = ambientVariable(law, t);
+      changed = true;
+    } else if (ambient[p] === 1 && lossSlope < AMBIENT_HYSTERESIS * conduction) {
+      ambient[p] = 0;
+      s.unknowns[p] = s.potential[p] as number;
+      changed = true;
+    }
+  }
+  return changed;
 }
 
 /**
@@ -311,21 +410,30 @@ interface RatedState extends State {
 }
 
 /** The 2-D fin as a model of the damped Newton driver (newton/damped-newton.ts); `method`: the linear solver of the last step. */
-function newtonModel(setup: Newton2DSetup, n: number, requested: SolverMethod | 'auto', method: { last: SolverMethod }): NewtonModel<RatedState> {
+export function newtonModel(setup: Newton2DSetup, n: number, requested: SolverMethod | 'auto', method: { last: SolverMethod }): NewtonModel<RatedState> {
+  // 1: the node is solved for its ambient variable (shared by every state; changed only in `correction`).
+  const ambient = new Uint8Array(n);
+  const powerG = powerConductance(setup, n);
   return {
     linear: setup.linear,
     roundOffRegime: ROUND_OFF_REGIME,
     createState: () => ({ ...createState(setup), rates: null }),
-    // The initial drops with the fixed nodes reset.
-    start: (initial, into) => step(setup, initial, new Float64Array(n), 0, into),
-    evaluate: (s) => evaluate(setup, s),
+    // The initial drops as potential drops, with the fixed nodes reset.
+    start: (initial, into) => {
+      ambient.fill(0);
+      for (let p = 0; p < n; p++) into[p] = setup.kirchhoff.potentialDropAt(initial[p] as number);
+      step(setup, ambient, into, new Float64Array(n), 0, into);
+    },
+    evaluate: (s) => evaluate(setup, ambient, s),
     correction: (s, delta) => {
+      if (chooseVariables(setup, powerG, ambient, s)) evaluate(setup, ambient, s);
       const solved = solveStep(newtonSystem(setup, s), requested);
       method.last = solved.method;
       const w = solved.w;
-      for (let p = 0; p < w.length; p++) delta[p] = -(w[p] as number) / (s.ratio[p] as number);
+      // Ĵ w = -R with w = δU: δD = -w at a potential node, δu = w / c at an ambient one.
+      for (let p = 0; p < w.length; p++) delta[p] = ambient[p] === 1 ? (w[p] as number) / (s.column[p] as number) : -(w[p] as number);
     },
-    step: (from, delta, lambda, into) => step(setup, from, delta, lambda, into),
+    step: (from, delta, lambda, into) => step(setup, ambient, from, delta, lambda, into),
     heatRate: (s) => {
       const rates = stateHeatRates(setup, s.potential, s.exchange);
       s.rates = rates;

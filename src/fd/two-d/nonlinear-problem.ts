@@ -21,7 +21,7 @@
 import type { Case } from '../../case/index.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { finProblem, type FinProblem } from '../problem/fin-problem.js';
-import { modelApplies, requireModel } from '../problem/model-applies.js';
+import { requireModel } from '../problem/model-applies.js';
 import { twoDProblem, type Fin2DProblem } from './problem.js';
 
 export interface NonlinearFin2DProblem {
@@ -34,12 +34,6 @@ export interface NonlinearFin2DProblem {
   readonly physics: FinProblem;
   /** How a convective tip loses heat: the face law at x = L, or its own constant h plus radiation. */
   readonly tipLaw: 'face' | 'own-h';
-}
-
-/** Why the 2-D model cannot solve this case, or null when it can (modelApplies). */
-export function nonlinear2dUnsupported(c: Case): string | null {
-  const coverage = modelApplies(finProblem(c), '2d');
-  return coverage.ok ? null : coverage.reason;
 }
 
 /** The 2-D problem of any case the 2-D model covers; ModelNotApplicableError naming the reason otherwise. */

@@ -139,7 +139,7 @@ function solveOnGrid(problem: NonlinearFin2DProblem, ops: GridOperators2D, setup
   const c = continueFromLinear<Float64Array, Newton2DOutcome>(
     direct,
     (target, from) => newtonSolve2D(stage(target), from ?? new Float64Array(initial.length), opts),
-    (attempt, reached) => failure(problem, ops.grid, attempt, reached),
+    (attempt, reached, budget) => failure(problem, ops.grid, attempt, reached, budget),
   );
   return { outcome: c.outcome, totalIterations: c.totalIterations, halvings: c.halvings, continuationStages: c.stages };
 }
@@ -161,8 +161,10 @@ function advice(problem: NonlinearFin2DProblem): string {
   return items.join(', ');
 }
 
-function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2DOutcome, reached: number): SolverError {
-  const progress = reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '';
+function failure(problem: NonlinearFin2DProblem, grid: Grid2D, outcome: Newton2DOutcome, reached: number, budget: string | null = null): SolverError {
+  const progress =
+    (reached > 0 ? `; continuation from the linear fin reached ${(100 * reached).toFixed(1)} % of the nonlinearity` : '') +
+    (budget === null ? '' : `; ${budget}`);
   const reason = outcome.failure ?? 'unknown reason';
   const steps = reason.startsWith('no convergence')
     ? ''

@@ -205,7 +205,7 @@ const materialArbitrary: fc.Arbitrary<{ material: unknown; kTable: boolean }> = 
   fc.tuple(logUniform(0.2, 430), fc.constantFrom(...conductivityForms)).map(([k, form]) => ({ material: { k: conductivity(k, form) }, kTable: false })),
   // k(T) as materials have it: a base k and each point within a factor of 2 of it (metals and polymers change
   // by tens of percent over a fin's range). A table whose k jumps 2000-fold within a few kelvin is valid too,
-  // but not a material, and hangs the nonlinear solvers today: drawn only on request (wildConductivityTable).
+  // but not a material: drawn only on request (wildConductivityTable).
   fc
     .record({
       t0: uniform(-50, 100),
@@ -224,8 +224,9 @@ const materialArbitrary: fc.Arbitrary<{ material: unknown; kTable: boolean }> = 
 
 /**
  * A k(T) table whose points are drawn independently over 0.2..430 W/(m*K): k may jump 2000-fold within a few
- * kelvin. Valid input, but such cases ran for minutes in the nonlinear solvers (a finding of issue 9's fuzz
- * run, tests/fuzz/cases/wild-conductivity-table-*.json); drawn only with FUZZ_WILD_K=1.
+ * kelvin. Valid input; such cases ran for minutes in the nonlinear solvers (a finding of issue 9's fuzz run,
+ * tests/fuzz/cases/wild-conductivity-table-hang.yaml; fixed: Newton steps in the Kirchhoff potential and a work
+ * bound on continuation). Not a material, so drawn only with FUZZ_WILD_K=1.
  */
 function wildConductivityTable(): fc.Arbitrary<{ material: unknown; kTable: boolean }> {
   return fc

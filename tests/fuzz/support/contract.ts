@@ -143,6 +143,48 @@ export function checkNullRules(facts: CaseFacts): NullRule[] {
   return rules;
 }
 
+/**
+ * Nulls the README documents with a reason printed beside them (README "JSON output"), allowed only for the
+ * cases that can have them: `effectivenessNote` where h can be 0 at the base (a linear or tabulated h),
+ * `efficiencyNote` "no efficiency" and `dimensionlessNote` where radiation can outweigh convection. The notes
+ * sit in `reference` (check) or at the top (solve).
+ */
+export function notedNullRules(json: Json, facts: CaseFacts, at: 'check' | 'solve'): NullRule[] {
+  const rules: NullRule[] = [];
+  if (!isObject(json)) return rules;
+  const holder = at === 'check' ? json['reference'] : json;
+  if (!isObject(holder)) return rules;
+  const numbers = (key: string): RegExp => (at === 'check' ? new RegExp(String.raw`^(reference|models\[i\])\.${key}$`) : new RegExp(`^${key}$`));
+  if (
+    (facts.h === 'linear' || facts.h === 'points') &&
+    typeof holder['effectivenessNote'] === 'string' &&
+    /h is 0 at the base/.test(holder['effectivenessNote'])
+  ) {
+    rules.push({
+      path: numbers('effectiveness'),
+      reason: 'README "JSON output": effectiveness is null where h is 0 at the base (Q_bare = 0), effectivenessNote says so',
+    });
+  }
+  if (
+    facts.radiates &&
+    typeof holder['efficiencyNote'] === 'string' &&
+    /^no efficiency: at the base temperature part of the surface/.test(holder['efficiencyNote'])
+  ) {
+    rules.push({
+      path: numbers('efficiency'),
+      reason:
+        'README "JSON output": no efficiency where the surface at the base temperature both loses and gains heat (hot surroundings), efficiencyNote says so',
+    });
+  }
+  if (at === 'check' && facts.radiates && typeof json['dimensionlessNote'] === 'string') {
+    rules.push({
+      path: /^(biot|mL)$/,
+      reason: 'README "JSON output": no Bi or mL where the single h is negative (hot surroundings), dimensionlessNote says so',
+    });
+  }
+  return rules;
+}
+
 /** Nulls documented in `solve --json`. `single`: --nodes or --grid (one grid, no error estimate). */
 export function solveNullRules(facts: CaseFacts, single: boolean): NullRule[] {
   const rules: NullRule[] = [];
@@ -214,7 +256,9 @@ const tolerated = (drift: number, tolerance: number) => (Math.abs(drift) <= tole
 export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { reference: 'auto' | '1d'; tolerance: number }): string[] {
   const problems: string[] = [];
   if (!isObject(json)) return ['check --json did not print a JSON object'];
-  problems.push(...strayNulls(json, checkNullRules(facts)));
+  const noted = notedNullRules(json, facts, 'check');
+  const nullable = (path: string): boolean => noted.some((r) => r.path.test(path));
+  problems.push(...strayNulls(json, [...checkNullRules(facts), ...noted]));
   for (const key of ['case', 'tolerance', 'reference', 'models', 'assumptions', 'flags', 'cautions']) {
     if (!(key in json)) problems.push(`missing key ${key}`);
   }
@@ -223,7 +267,7 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
   if (tolerance !== undefined && Math.abs(tolerance - expected.tolerance) > 1e-12)
     problems.push(`tolerance ${tolerance}, asked for ${expected.tolerance}`);
   if ('biot' in json) {
-    const biot = finite(json, 'biot', '', problems);
+    const biot = finite(json, 'biot', '', problems, nullable('biot'));
     if (biot !== undefined && !(biot >= 0)) problems.push(`biot = ${biot} < 0`);
   }
 
@@ -239,9 +283,14 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
   }
   const refError = finite(ref, 'discretizationError', 'reference', problems);
   problems.push(
-    ...efficiencyProblems(finite(ref, 'efficiency', 'reference', problems, facts.tip === 'infinite'), 'reference', facts, 1e-9 + (refError ?? 0) * 4),
+    ...efficiencyProblems(
+      finite(ref, 'efficiency', 'reference', problems, facts.tip === 'infinite' || nullable('reference.efficiency')),
+      'reference',
+      facts,
+      1e-9 + (refError ?? 0) * 4,
+    ),
   );
-  finite(ref, 'effectiveness', 'reference', problems);
+  finite(ref, 'effectiveness', 'reference', problems, nullable('reference.effectiveness'));
   const balance = finite(ref, 'energyBalance', 'reference', problems);
 
   const flags = Array.isArray(json['flags']) ? json['flags'].filter(isObject) : [];
@@ -294,7 +343,8 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
     if (typeof id !== 'string' || !(modelIds as readonly string[]).includes(id))
       problems.push(`${where}.model ${JSON.stringify(id)} is not a documented model id`);
     finite(row, 'heatRate_W', where, problems);
-    const eta = finite(row, 'efficiency', where, problems, facts.tip === 'infinite');
+    const eta = finite(row, 'efficiency', where, problems, facts.tip === 'infinite' || nullable('models[i].efficiency'));
+    finite(row, 'effectiveness', where, problems, nullable('models[i].effectiveness'));
     const named =
       typeof id === 'string' && !id.startsWith('fd-') && new RegExp(`(^|[\\s,])${id}[\\s,]`).test(efficiencyNote) && /above 1/.test(efficiencyNote);
     if (!named) problems.push(...efficiencyProblems(eta, `${where} (${String(id)})`, facts, 1e-9 + (refError ?? 0) * 4));
@@ -324,13 +374,22 @@ export function checkJsonProblems(json: Json, facts: CaseFacts, expected: { refe
 export function solveJsonProblems(json: Json, facts: CaseFacts, expected: { model: 'fd-1d' | 'fd-2d'; single: boolean }): string[] {
   const problems: string[] = [];
   if (!isObject(json)) return ['solve --json did not print a JSON object'];
-  problems.push(...strayNulls(json, solveNullRules(facts, expected.single)));
+  const noted = notedNullRules(json, facts, 'solve');
+  const nullable = (path: string): boolean => noted.some((r) => r.path.test(path));
+  problems.push(...strayNulls(json, [...solveNullRules(facts, expected.single), ...noted]));
   if (json['model'] !== expected.model) problems.push(`model ${JSON.stringify(json['model'])}, expected ${expected.model}`);
   const q = finite(json, 'heatRate_W', '', problems);
   if (q === 0) problems.push('heatRate_W is 0');
   const error = finite(json, 'discretizationError', '', problems, expected.single);
-  problems.push(...efficiencyProblems(finite(json, 'efficiency', '', problems, facts.tip === 'infinite'), 'solve', facts, 1e-9 + (error ?? 0) * 4));
-  finite(json, 'effectiveness', '', problems);
+  problems.push(
+    ...efficiencyProblems(
+      finite(json, 'efficiency', '', problems, facts.tip === 'infinite' || nullable('efficiency')),
+      'solve',
+      facts,
+      1e-9 + (error ?? 0) * 4,
+    ),
+  );
+  finite(json, 'effectiveness', '', problems, nullable('effectiveness'));
   const balance = finite(json, 'energyBalance', '', problems);
   // Conservative schemes: heat in = heat out to round-off (README "How accurate"); nonlinear solves stop at a
   // relative residual of 1e-10 (2-D) or 1e-12 (1-D), far below 1e-6.
