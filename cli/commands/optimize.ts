@@ -156,8 +156,7 @@ Examples:
         labels: { vary: '--vary', keep: '--keep', bounds: '--bounds', heat: '--heat' },
       });
       if (o.json) {
-        const { curve: _curve, ...json } = result;
-        io.out(`${JSON.stringify(json, null, 2)}\n`);
+        io.out(`${JSON.stringify(result, null, 2)}\n`);
         return;
       }
       io.out(formatOptimize(result));

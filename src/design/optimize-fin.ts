@@ -19,10 +19,10 @@
  * fin at constant profile area; the optimum triangular, parabolic and pin fins; optimum.ts), else the tanh-Lc
  * shortcut optimised the same way as the reference.
  */
-import { type Case, formatKeyPath, parseCaseObject, parseKeyPath, readDocument, setByKeyPath, type Locate, type ParseOptions } from '../case/index.js';
+import { formatKeyPath, parseKeyPath } from '../case/index.js';
 import { brentRoot, initBessel } from '../analytic/index.js';
-import { runCheck, type CheckReport } from '../compare/index.js';
-import { InputError, UsageError } from '../errors.js';
+import { UsageError } from '../errors.js';
+import { caseValue, FinOptimizer, shortcutHeat, type Evaluation } from './fin-candidates.js';
 import { brentMinimize } from './brent-minimize.js';
 import { amountOf, type Keep } from './fin-amount.js';
 import { closedFormOptimum } from './closed-form-optimum.js';
@@ -70,8 +70,6 @@ export interface OptimizeResult {
   shortcutAtReference_W: number;
   /** 1 − shortcutAtReference_W / reference.heatRate_W (max-heat); for required heat, the shortcut's dimension over the reference's minus 1. */
   loss: number;
-  /** Heat rate along the constraint for the chart: the varied key's values (m) and both models' Q (W); one varied key only. */
-  curve: { x: number[]; reference_W: number[]; shortcut_W: number[]; model: string } | null;
   notes: string[];
   cautions: string[];
 }
@@ -89,67 +87,6 @@ const SIZE_KEYS: Record<string, string> = {
 };
 
 const VARIABLE = /^fin\.(length|thickness|width|diameter|baseThickness|tipThickness|baseDiameter|tipDiameter|outerRadius)$/;
-
-interface Evaluation {
-  c: Case;
-  report: CheckReport;
-}
-
-class FinOptimizer {
-  private readonly raw: unknown;
-  private readonly locate: Locate;
-  private readonly parseOptions: ParseOptions;
-  readonly base: Case;
-  private readonly cache = new Map<string, Evaluation | null>();
-  evaluations = 0;
-
-  constructor(private readonly request: OptimizeRequest) {
-    const document = readDocument(request.caseText, request.fileName);
-    this.raw = document.raw;
-    this.locate = document.locate;
-    this.parseOptions = { file: request.fileName };
-    this.base = parseCaseObject(this.raw, this.locate, this.parseOptions);
-  }
-
-  /** The case with `values` (m) written in, or null where the case becomes invalid (a tip thicker than the base...). */
-  caseWith(values: ReadonlyMap<string, number>): Case | null {
-    let raw = this.raw;
-    for (const [key, v] of values) raw = setByKeyPath(raw, parseKeyPath(key), `${v} m`);
-    try {
-      return parseCaseObject(raw, this.locate, this.parseOptions);
-    } catch (e) {
-      if (e instanceof InputError) return null;
-      throw e;
-    }
-  }
-
-  async evaluate(values: ReadonlyMap<string, number>, reference: 'auto' | '1d' | '2d'): Promise<Evaluation | null> {
-    const id = `${reference}|${[...values].map(([k, v]) => `${k}=${v}`).join(',')}`;
-    if (this.cache.has(id)) return this.cache.get(id) ?? null;
-    const c = this.caseWith(values);
-    let result: Evaluation | null = null;
-    if (c !== null) {
-      this.evaluations++;
-      const { report } = await runCheck(c, { tolerance: this.request.tolerance, reference, ledger: false });
-      result = { c, report };
-    }
-    this.cache.set(id, result);
-    return result;
-  }
-}
-
-function caseValue(c: Case, key: string): number | undefined {
-  const name = key.replace(/^fin\./, '');
-  const v = (c.fin.profile as unknown as Record<string, unknown>)[name];
-  return typeof v === 'number' ? v : undefined;
-}
-
-/** The heat of the tanh(mLc)/(mLc) shortcut in a check (tanh(mL)/(mL) for an adiabatic tip, where Lc = L), or NaN. */
-function shortcutHeat(report: CheckReport): number {
-  const rows = report.models.filter((m) => m.guess === undefined || m.guess === 'base');
-  const row = rows.find((m) => m.model === 'tanh-Lc') ?? rows.find((m) => m.model === 'tanh-L');
-  return row ? row.heatRate_W : Number.NaN;
-}
 
 export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeResult> {
   await initBessel();
@@ -267,7 +204,6 @@ export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeRes
   let refX: number;
   let shortX: number;
   let method: string;
-  let curve: OptimizeResult['curve'] = null;
   let secondValues: { reference: number; shortcut: number } | null = null;
   /** The shortcut's own heat at its optimum when the published solution gives it. */
   let shortHeatOwn: number | null = null;
@@ -295,15 +231,6 @@ export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeRes
         shortX = (await brentMinimize(fs, as, bs, { relTol: 1e-4 })).x;
         method = 'the tanh(mLc)/(mLc) shortcut on the equivalent uniform fin, maximised numerically (no published optimum covers this case)';
       }
-      // The curve along the constraint for the chart: 25 values on a log grid over the bounds.
-      const xs = Array.from({ length: 25 }, (_, i) => lo * (hi / lo) ** (i / 24));
-      const reference_W: number[] = [];
-      const shortcut_W: number[] = [];
-      for (const x of xs) {
-        reference_W.push(await referenceHeat(x, '1d'));
-        shortcut_W.push(await shortcutHeatAt(x));
-      }
-      curve = { x: xs, reference_W, shortcut_W, model: 'fd-1d' };
       break;
     }
     case 'required': {
@@ -439,7 +366,6 @@ export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeRes
     },
     shortcutAtReference_W,
     loss,
-    curve,
     notes,
     cautions: [...refPoint.e.report.cautions],
   };
