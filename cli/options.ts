@@ -21,6 +21,8 @@ export const toleranceOption = z
   });
 
 export const referenceOption = z.enum(['auto', '1d', '2d']);
+/** check --sample: when the uncertainty band is confirmed by a Latin-hypercube sample. */
+export const sampleOption = z.enum(['auto', 'always', 'never']);
 
 /** An integer node count for a single 1-D solve (3 .. 1e7). */
 export const nodesOption = z.coerce.number().int().min(3).max(10_000_000);

@@ -6,7 +6,7 @@ import { formatCheck, formatSinkCheck, resolvedSinkStudy, runCheck, runSinkCheck
 import { printWarnings, readCaseInput } from '../case-input.js';
 import type { Io, SetExit } from '../io.js';
 import { requireReference } from '../model-coverage.js';
-import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import { parseOption, referenceOption, sampleOption, toleranceOption } from '../options.js';
 
 export function registerCheck(program: Command, io: Io, setExit: SetExit): Command {
   return program
@@ -17,6 +17,7 @@ export function registerCheck(program: Command, io: Io, setExit: SetExit): Comma
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--json', 'print one JSON document instead of the table (its keys: README, "JSON output")')
     .option('--strict', 'exit with code 1 when any shortcut is unsafe')
+    .option('--sample <when>', 'confirm the uncertainty band by a Latin-hypercube sample: auto (nonlinear fins, bands over 20 %), always or never', 'auto')
     .addHelpText(
       'after',
       `
@@ -25,9 +26,10 @@ Examples:
   fincheck check demo/polymer-fin-liquid-cooled.yaml --tolerance 5% --json
   fincheck check my-fin.yaml --strict        # exit 1 when a shortcut is unsafe`,
     )
-    .action(async (file: string, o: { tolerance: string; reference: string; json?: boolean; strict?: boolean }) => {
+    .action(async (file: string, o: { tolerance: string; reference: string; json?: boolean; strict?: boolean; sample: string }) => {
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
+      const sample = parseOption('--sample', sampleOption, o.sample, 'auto, always or never');
       const { text, fileName } = await readCaseInput(file, io);
       const any = parseAnyCaseText(text, fileName);
       printWarnings(any.case.warnings ?? [], io);
@@ -45,7 +47,7 @@ Examples:
       }
       const c = any.case;
       requireReference(c, reference);
-      const { report } = await runCheck(c, { tolerance, reference });
+      const { report } = await runCheck(c, { tolerance, reference, sample });
       io.out(o.json ? `${JSON.stringify({ ...report, warnings: c.warnings ?? [] }, null, 2)}\n` : formatCheck(c, report));
       if (o.strict && report.models.some((m) => m.verdict === 'unsafe')) setExit(1);
     });

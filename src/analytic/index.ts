@@ -71,3 +71,4 @@ export { brentRoot } from './roots.js';
 export type { RootOptions } from './roots.js';
 export { integrate } from './quadrature.js';
 export type { QuadratureOptions } from './quadrature.js';
+export { normalCdf, normalQuantile } from './normal.js';

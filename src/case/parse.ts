@@ -14,6 +14,7 @@ import { caseName } from './case-name.js';
 import { getByKeyPath } from './key-path.js';
 import { dimensionWarnings } from './plausibility.js';
 import { caseSchemaFor } from './schema.js';
+import { readUncertainty } from './uncertainty.js';
 import { isHeatSinkObject } from './heat-sink-detect.js';
 import { isLengthUnit, type LengthUnit } from './units.js';
 import type { Case } from './types.js';
@@ -44,9 +45,11 @@ export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOpt
   }
   const defaultName = options.defaultName ?? 'unnamed case';
   const c = toCase(result.data, defaultName);
+  const { uncertainty, issues } = readUncertainty(result.data.uncertainty, c);
+  if (issues.length > 0) throw new InputError(sortByPosition(toInputIssues(issues, raw, locate)), options.file);
   const nameWarning = caseName(result.data.name, defaultName).warning;
   const warnings = [...(nameWarning ? [nameWarning] : []), ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined)];
-  return { ...c, warnings };
+  return { ...c, warnings, uncertainty };
 }
 
 /**

@@ -342,8 +342,25 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
     'units',
     'Units of bare numbers in this case; default SI (m)',
   ).optional();
+  const uncertaintySchema = z
+    .record(z.string(), z.union([z.string(), z.number()], { error: () => 'a standard uncertainty such as "25 %" or "0.05 mm"' }), {
+      error: () => 'a mapping from input key paths to standard uncertainties, e.g. { convection.h: 25 %, fin.thickness: 0.05 mm }',
+    })
+    .optional()
+    .describe(
+      'Standard uncertainty (one standard deviation) of inputs, by key path: relative with % or absolute with the unit, ' +
+        'e.g. { convection.h: 25 %, material.k: 5 %, fin.thickness: 0.05 mm }; default convection.h: 25 %, the rest 0',
+    );
   // The keys a heat-sink case shares with a single-fin case (heat-sink-schema.ts).
-  const shared = { name: nameSchema, units: unitsSchema, material: materialSchema, h: hSchema, tip: tipSchema, coefficient };
+  const shared = {
+    name: nameSchema,
+    units: unitsSchema,
+    material: materialSchema,
+    h: hSchema,
+    tip: tipSchema,
+    coefficient,
+    uncertainty: uncertaintySchema,
+  };
 
   const caseMapping = mapping(
     {
@@ -353,6 +370,7 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
       convection: convectionSchema,
       base: baseSchema,
       units: unitsSchema,
+      uncertainty: uncertaintySchema,
     },
     'a case',
     'A fincheck case (format 1): one fin and its surroundings. A bare number is SI (m, W/(m*K), W/(m^2*K), ' +

@@ -94,6 +94,15 @@ export interface CaseWarning {
   message: string;
 }
 
+/** One input's standard uncertainty, relative to its nominal value (uncertainty.ts reads it). */
+export interface InputUncertainty {
+  /** Key path of the input, e.g. `fin.thickness`. */
+  key: string;
+  relative: number;
+  /** As written in the case (`25 %`, `0.05 mm`), or `default`. */
+  given: string;
+}
+
 export interface Case {
   /** One line of at most 120 characters, without control characters (src/case/clip-text.ts). */
   name: string;
@@ -103,4 +112,9 @@ export interface Case {
   base: BaseSpec;
   /** Warnings found while reading the case (a parsed case always has the list; cases built in code may omit it). */
   warnings?: readonly CaseWarning[];
+  /**
+   * Standard uncertainties of inputs, relative to their nominal values (uncertainty.ts); a parsed case always
+   * has the list (with the default for h); cases built in code may omit it (the default then applies).
+   */
+  uncertainty?: readonly InputUncertainty[];
 }

@@ -9,6 +9,7 @@ import { designFlags } from './flags.js';
 import type { EfficiencyBasis } from './efficiency-basis.js';
 import { definedEffectiveness, type EffectivenessBasis } from './effectiveness-basis.js';
 import { judgedReference, resolution1D } from './resolved-reference.js';
+import type { SampleWhen } from './uncertainty-band.js';
 import type { CheckReport, Flag, ReferenceResult } from './types.js';
 
 export interface CheckOptions {
@@ -19,6 +20,13 @@ export interface CheckOptions {
   ledger?: boolean;
   /** How far the fd-1d reference may be refined to reach tolerance / 10 (default DEFAULT_RESOLUTION_BUDGET). */
   resolutionBudget?: ResolutionBudget;
+  /** Compute the sensitivities and the uncertainty band (default true); maps skip them. */
+  sensitivities?: boolean;
+  /** When to confirm the first-order band by a Latin-hypercube sample (default 'auto': uncertainty-band.ts). */
+  sample?: SampleWhen;
+  /** Size and seed of that sample (default 200 and 1). */
+  sampleSize?: number;
+  sampleSeed?: number;
 }
 
 export interface CheckOutcome {

@@ -45,6 +45,7 @@ import { efficiencyBasis, ONE_D_SURFACE, TWO_D_SURFACE, withRowsNote } from './e
 import { effectivenessBasisOf } from './effectiveness-basis.js';
 import { choose2DReference, judgedReference, resolution2D, resolutionTarget } from './resolved-reference.js';
 import type { NotApplicable } from './types.js';
+import { referenceSensitivity, withDriftOverUncertainty } from './reference-sensitivity.js';
 
 export type { CheckOptions, CheckOutcome } from './check-common.js';
 
@@ -137,7 +138,10 @@ function check(c: Case, problem: FinProblem, solvers: GridSolvers, opts: CheckOp
         },
       ]
     : [];
-  const models = modelRows([...inputs, ...fd1d], reference, basis, effectiveness, opts.tolerance);
+  const rows = modelRows([...inputs, ...fd1d], reference, basis, effectiveness, opts.tolerance);
+  const sensitivity =
+    opts.sensitivities === false ? null : referenceSensitivity(c, solvers, opts, twoD ? twoD.study : null, oneD, resolution, reference.heatRate_W);
+  const models = sensitivity === null ? rows : withDriftOverUncertainty(rows, sensitivity.uncertainty);
   reference.efficiencyNote = withRowsNote(reference.efficiencyNote, models);
 
   const solveLedger = (variant: Case): number => solve1D(variant, LEDGER_NODES).heatRate_W;
@@ -158,6 +162,7 @@ function check(c: Case, problem: FinProblem, solvers: GridSolvers, opts: CheckOp
       assumptions: madeByReported(assumptions, models),
       flags,
       cautions: cautionsFor(c.convection.emissivity),
+      ...(sensitivity ?? {}),
     },
     oneD,
     twoD: twoD ? twoD.study : null,

@@ -78,6 +78,55 @@ export interface ModelResult {
   guess?: 'base' | 'mean';
   /** The single h (W/(m^2*K)) and k (W/(m*K)) of that guess. */
   guessValues?: { h_W_per_m2K: number; k_W_per_mK: number; description: string };
+  /** |drift| / uncertainty.relative (null when the band is 0); absent when the check computed no uncertainty. */
+  driftOverUncertainty?: number | null;
+}
+
+/** d ln Q / d ln x of the reference heat rate for one input x (sensitivities.ts). */
+export interface Sensitivity {
+  /** Key path of the input in the case file. */
+  key: string;
+  dlnQ_dlnx: number;
+  /** How it was computed: central differences of the reference on its finest grid (sensitivityMethod says more). */
+  method: 'central-difference' | 'exact';
+  /** Nominal value of the input, SI (base.temperature: its rise over the fluid, K). */
+  value: number;
+  /** Relative standard uncertainty of the input (the case's `uncertainty`, default h 25 %); 0 when not stated. */
+  uncertainty: number;
+}
+
+/** The uncertainty band of the reference heat rate (uncertainty-band.ts). */
+export interface UncertaintyBand {
+  /** `first-order`, or `latin-hypercube` where the sample disagrees with first order (the sample's band is then given). */
+  method: 'first-order' | 'latin-hypercube';
+  /** Relative standard uncertainty of the heat rate (one standard deviation over Q). */
+  relative: number;
+  /** Q (1 -+ relative), or the sample's 15.9 and 84.1 percentiles, W. */
+  low_W: number;
+  high_W: number;
+  /** The first-order value: sqrt(sum (dlnQ/dlnx u_x)^2). */
+  firstOrder: number;
+  /** What h's uncertainty alone gives, first order. */
+  fromH: number;
+  sample: UncertaintySample | null;
+  /** How the band was computed, in words (and why no sample was drawn, when none was). */
+  note: string;
+}
+
+export interface UncertaintySample {
+  method: 'latin-hypercube';
+  n: number;
+  seed: number;
+  /** Standard deviation of the sampled heat rates over the nominal heat rate on the sample's grid. */
+  relative: number;
+  /** Standard error of `relative` from the sample size, sqrt(1 / (2 (n - 1))) relative (normal theory). */
+  samplingError: number;
+  /** True when |relative - firstOrder| is at most twice samplingError. */
+  agrees: boolean;
+  /** The grid the sample was solved on. */
+  grid: string;
+  low_W: number;
+  high_W: number;
 }
 
 export interface NotApplicable {
@@ -119,6 +168,11 @@ export interface CheckReport {
   assumptions: AssumptionRow[];
   flags: Flag[];
   cautions: string[];
+  /** d ln Q / d ln x of the reference for every numeric input; absent when not computed (maps). */
+  sensitivities?: Sensitivity[];
+  /** How the sensitivities were computed (central differences on the reference's finest grid). */
+  sensitivityMethod?: string;
+  uncertainty?: UncertaintyBand;
 }
 
 /** The verdict of a drift against a reference; `unresolved` whenever the reference is not resolved. */

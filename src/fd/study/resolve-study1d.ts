@@ -58,6 +58,8 @@ export interface Resolution {
   readonly refinements: number;
   /** The grading of the grids, in words. */
   readonly grading: string;
+  /** The grading of the grids as data (solve a variant of the fin on the same grid with it). */
+  readonly gridGrading: Grading | 'auto';
   /** The budget, in words. */
   readonly budget: string;
 }
@@ -126,7 +128,7 @@ export function resolveStudy1D<S extends { readonly study: RefinementStudy }>(
       ? 'default grading'
       : `graded to the decay length 1/m at the ${g.toward === 'both' ? 'base and tip' : 'base'} (geometric, stretch ${g.stretch.toPrecision(3)})`;
   if (study.study.gci <= target) {
-    return { study, resolution: { target, resolved: true, nodes, refinements: 0, grading: 'default grading', budget: budgetWords } };
+    return { study, resolution: { target, resolved: true, nodes, refinements: 0, grading: 'default grading', gridGrading: 'auto', budget: budgetWords } };
   }
   const chosen: Grading | 'auto' = grading ?? 'auto';
   let refinements = 0;
@@ -140,7 +142,7 @@ export function resolveStudy1D<S extends { readonly study: RefinementStudy }>(
   }
   return {
     study,
-    resolution: { target, resolved: study.study.gci <= target, nodes, refinements, grading: words(grading), budget: budgetWords },
+    resolution: { target, resolved: study.study.gci <= target, nodes, refinements, grading: words(grading), gridGrading: chosen, budget: budgetWords },
   };
 }
 

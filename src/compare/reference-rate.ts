@@ -1,0 +1,39 @@
+/**
+ * The reference heat rate of a variant of the case (one input changed) on fixed grids of the reference model:
+ * the functions that sensitivities (central differences) and the uncertainty sample evaluate.
+ *
+ * fd-1d: one solve on the given node count and grading (the finest grid of the resolved study, or its
+ * coarsest for the sample). fd-2d: one solve of the section on the given nx x ny grid, plus the side edges'
+ * heat from fd-1d on the 1-D grid, Q_1D(edges cooled) - Q_1D(edges insulated), exactly as the reference adds
+ * it (reference2d.ts). Keeping the grids fixed makes the discrete heat rate a smooth function of every input
+ * (node positions move continuously with the dimensions), so its central differences converge like the step
+ * squared. Units: W.
+ */
+import type { Case } from '../case/index.js';
+import { finProblem, solveFinWith, type FinGrid, type GridSolvers } from '../fd/index.js';
+import type { Grading } from '../mesh/index.js';
+import { isStraight } from './reference2d.js';
+
+export type ReferenceGrid =
+  | { model: 'fd-1d'; nodes: number; grading: Grading | 'auto' }
+  | { model: 'fd-2d'; nx: number; ny: number; edges: { nodes: number; grading: Grading | 'auto' } };
+
+/** The grid in words, for notes. */
+export function referenceGridText(grid: ReferenceGrid): string {
+  return grid.model === 'fd-1d' ? `fd-1d on ${grid.nodes} nodes` : `fd-2d on ${grid.nx} x ${grid.ny} nodes`;
+}
+
+/** Q(variant) of the reference model on `grid`, W. */
+export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid): (variant: Case) => number {
+  const oneD = (variant: Case, nodes: number, grading: Grading | 'auto'): number => {
+    const g: FinGrid = { model: '1d', nodes, grading };
+    return solveFinWith(solvers, finProblem(variant), g).heatRate_W;
+  };
+  if (grid.model === 'fd-1d') return (variant) => oneD(variant, grid.nodes, grid.grading);
+  return (variant) => {
+    const section = solveFinWith(solvers, finProblem(variant), { model: '2d', nx: grid.nx, ny: grid.ny }).heatRate_W;
+    if (!(variant.fin.edges === 'cooled' && isStraight(variant))) return section;
+    const insulated: Case = { ...variant, fin: { ...variant.fin, edges: 'insulated' } };
+    return section + oneD(variant, grid.edges.nodes, grid.edges.grading) - oneD(insulated, grid.edges.nodes, grid.edges.grading);
+  };
+}
