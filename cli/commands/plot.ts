@@ -73,6 +73,7 @@ const DESCRIPTIONS: Record<PlotKind, string> = {
   profile: 'temperature along the fin, every model',
   flux: 'heat flow along the fin and heat lost per unit length, every model',
   heatmap: 'fd-2d temperature field on the fin section',
+  sensitivity: 'tornado chart of d ln Q / d ln x of the reference for every input, with the uncertainty band',
 };
 
 export function registerPlot(program: Command, io: Io): Command {
@@ -81,7 +82,11 @@ export function registerPlot(program: Command, io: Io): Command {
     .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('draw one chart of the check: temperature profiles, heat flow, or the 2-D temperature field')
     .option('--out <file>', 'output file: .png (rendered with the bundled font) or .svg')
-    .option('--kind <kind>', `profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}) or heatmap (${DESCRIPTIONS.heatmap})`, 'profile')
+    .option(
+      '--kind <kind>',
+      `profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}), heatmap (${DESCRIPTIONS.heatmap}) or sensitivity (${DESCRIPTIONS.sensitivity})`,
+      'profile',
+    )
     .option('--width <px>', 'chart width in px at 96 dpi', '1200')
     .option('--height <px>', 'chart height in px at 96 dpi', '750')
     .option('--dpi <dpi>', 'PNG resolution: the image has width x dpi/96 pixels (300 for print)', '96')
@@ -112,7 +117,7 @@ Examples:
       const sources: PlotSources =
         kind === 'heatmap'
           ? { case: c, check: null, field: await fieldStudy(c) }
-          : { case: c, check: await checkPlotInput(c, { tolerance, reference, ledger: false }), field: null };
+          : { case: c, check: await checkPlotInput(c, { tolerance, reference, ledger: false, sensitivities: kind === 'sensitivity' }), field: null };
       const svg = plotSvg(kind, sources, image, image.dpi / 96);
       const bytes = await chartBytes(svg, out.format, { dpi: image.dpi });
       writeFilesAtomically([{ path: out.path, bytes }]);

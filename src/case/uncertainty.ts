@@ -13,7 +13,6 @@ import { numericInputs, type NumericInput } from './numeric-inputs.js';
 import type { Case, InputUncertainty } from './types.js';
 import { parseQuantity, quantityKinds, type QuantityKind } from './units.js';
 
-
 /** Used when a case says nothing about h. */
 export const DEFAULT_UNCERTAINTY: readonly InputUncertainty[] = [{ key: 'convection.h', relative: 0.25, given: 'default' }];
 

@@ -2,6 +2,7 @@
 import type { Case } from '../case/index.js';
 import { describeCase } from './describe-case.js';
 import { signedPercentText } from './percent-text.js';
+import { fincheckUncertaintyLines } from './format-fin-uncertainty.js';
 import type { CheckReport, Flag } from './types.js';
 
 /** Signed percentage, the same as `map` prints (percent-text.ts). */
@@ -61,6 +62,7 @@ export function formatCheck(c: Case, r: CheckReport): string {
   out.push(`   the shortcuts are closed forms, exact for their own assumptions, so their error for this fin is the drift,`);
   out.push(`   known to about the reference's discretisation error, ${ref.discretizationError.toExponential(1)})`);
   out.push('');
+  out.push(...fincheckUncertaintyLines(r, label));
   if (r.assumptions.length > 0) {
     out.push('Where the drift comes from (one assumption at a time):');
     const methods = [...new Set(r.assumptions.map((a) => a.method))];

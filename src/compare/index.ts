@@ -17,3 +17,5 @@ export { sinkShortcuts, SINK_SHORTCUT_IDS, type SinkShortcutId, type SinkShortcu
 export { formatSinkCheck, describeSink } from './format-sink-check.js';
 export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
+export { fractionWords, uncertaintyLines, type UncertaintyText } from './format-uncertainty.js';
+export type { Sensitivity, UncertaintyBand, UncertaintySample } from './types.js';

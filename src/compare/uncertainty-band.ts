@@ -62,8 +62,8 @@ export function uncertaintyBand(c: Case, sens: readonly Sensitivity[], heatRate:
           ? 'no sample drawn (switched off)'
           : `first order only: the fin is linear and the band is within ${100 * SAMPLE_THRESHOLD} %`
         : sample.agrees
-          ? `confirmed by a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}): ${pctText(sample.relative)} +- ${pctText(sample.samplingError)}`
-          : `a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}) gives ${pctText(sample.relative)} +- ${pctText(sample.samplingError)}, more than twice its sampling error from first order (${pctText(firstOrder)}): the band is the sample's`;
+          ? `confirmed by a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}): ${pctText(sample.relative)} +/- ${pctText(sample.samplingError)}`
+          : `a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}) gives ${pctText(sample.relative)} +/- ${pctText(sample.samplingError)}, more than twice its sampling error from first order (${pctText(firstOrder)}): the band is the sample's`;
   return {
     method: useSample ? 'latin-hypercube' : 'first-order',
     relative,
@@ -72,7 +72,7 @@ export function uncertaintyBand(c: Case, sens: readonly Sensitivity[], heatRate:
     firstOrder,
     fromH,
     sample,
-    note: `one standard uncertainty of the reference heat rate from ${uncertain.map((s) => `${s.key} ${pctText(s.uncertainty)}`).join(', ') || 'nothing'}; first order, sqrt(sum (S u)^2) = ${pctText(firstOrder)}; ${why}`,
+    note: `One standard uncertainty of the reference heat rate from ${uncertain.map((s) => `${s.key} ${pctText(s.uncertainty)}`).join(', ') || 'nothing'}; first order, sqrt(sum (S u)^2) = ${pctText(firstOrder)}; ${why}`,
   };
 }
 

@@ -47,7 +47,7 @@ export class FinOptimizer {
     let result: Evaluation | null = null;
     if (c !== null) {
       this.evaluations++;
-      const { report } = await runCheck(c, { tolerance: this.request.tolerance, reference, ledger: false });
+      const { report } = await runCheck(c, { tolerance: this.request.tolerance, reference, ledger: false, sensitivities: false });
       result = { c, report };
     }
     this.cache.set(id, result);

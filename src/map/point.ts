@@ -68,7 +68,7 @@ export async function evaluatePoint(context: PointContext, index: number, x: num
   try {
     const raw = substituteAxis(substituteAxis(context.raw, job.x, x), job.y, y);
     const c = parseCaseObject(raw, context.locate, context.parseOptions);
-    const { report } = await runCheck(c, { tolerance: job.check.tolerance, reference: job.check.reference, ledger: false });
+    const { report } = await runCheck(c, { tolerance: job.check.tolerance, reference: job.check.reference, ledger: false, sensitivities: false });
     return pointFromReport(index, x, y, report, job.check.models);
   } catch (err) {
     const error = pointMessage(err);

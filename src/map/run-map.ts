@@ -72,7 +72,7 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
     if (!coverage.ok) throw new UsageError(`${labels.reference} 2d: ${coverage.reason}; use ${labels.reference} 1d or auto`);
   }
 
-  const { report } = await runCheck(c, { tolerance: request.tolerance, reference: request.reference, ledger: false });
+  const { report } = await runCheck(c, { tolerance: request.tolerance, reference: request.reference, ledger: false, sensitivities: false });
   // Unique ids: a nonlinear fin lists each shortcut once per single-h guess; the map shows the base-temperature guess.
   const applicable: MapModelId[] = [...new Set(report.models.map((m) => m.model))];
   for (const id of request.models ?? []) {

@@ -1,6 +1,7 @@
 /** One chart of a kind as SVG text, from the sources it needs (sources.ts). */
 import type { FinStudy2D } from '../fd/index.js';
-import { fieldChart, lineChart } from '../images/index.js';
+import { barChart, fieldChart, lineChart } from '../images/index.js';
+import { finSensitivityInput, sensitivityChartSpec } from './sensitivity-chart.js';
 import { fluxChartSpec } from './flux-chart.js';
 import { heatmapChartSpec } from './heatmap-chart.js';
 import { profileChartSpec, type ChartSize, type CheckPlotInput } from './profile-chart.js';
@@ -20,6 +21,10 @@ export function plotSvg(kind: PlotKind, sources: PlotSources, size: ChartSize, r
       return lineChart(profileChartSpec(need(sources.check, kind), size)).svg;
     case 'flux':
       return lineChart(fluxChartSpec(need(sources.check, kind), size)).svg;
+    case 'sensitivity': {
+      const input = finSensitivityInput(need(sources.check, kind).report);
+      return barChart(sensitivityChartSpec(need(input, kind), size)).svg;
+    }
     case 'heatmap':
       return fieldChart(heatmapChartSpec(sources.case, need(sources.field ?? sources.check?.twoD ?? null, kind), size, rasterScale)).svg;
     default: {

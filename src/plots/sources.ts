@@ -8,7 +8,7 @@ import { runCheck, type CheckOptions, modelProfiles } from '../compare/index.js'
 import { finProblem, modelApplies, studyFin, type FinStudy2D } from '../fd/index.js';
 import type { CheckPlotInput } from './profile-chart.js';
 
-export const PLOT_KINDS = ['profile', 'flux', 'heatmap'] as const;
+export const PLOT_KINDS = ['profile', 'flux', 'heatmap', 'sensitivity'] as const;
 export type PlotKind = (typeof PLOT_KINDS)[number];
 
 export type HeatmapAvailability = { ok: true } | { ok: false; reason: string };

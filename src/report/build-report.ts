@@ -10,6 +10,7 @@ import { caseInputRows, prettyUnits } from './case-inputs.js';
 import { discretisationSection } from './discretisation.js';
 import type { Block, ReportDocument, Section, Tone } from './document.js';
 import { figureSection, type ReportFigure } from './figures.js';
+import { uncertaintySection } from './uncertainty-section.js';
 import type { FinStudy2D } from '../fd/index.js';
 
 export interface ReportInputs {
@@ -218,6 +219,7 @@ export function buildReport(inputs: ReportInputs): ReportDocument {
       ],
     },
     { id: 'check', title: 'Shortcuts against the reference', blocks: checkTable(r) },
+    ...[uncertaintySection(r, modelName)].filter((x): x is Section => x !== null),
     { id: 'ledger', title: 'Where the drift comes from', blocks: ledger(r) },
     { id: 'flags', title: 'Flags', blocks: flags(r) },
     figureSection(check, inputs.field, inputs.figures, inputs.heatmapUnavailable),

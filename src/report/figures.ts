@@ -15,7 +15,7 @@ export interface ReportFigure {
 }
 
 /** File name of each chart beside the reports. */
-export const FIGURE_FILES: Record<PlotKind, string> = { profile: 'profile.png', flux: 'flux.png', heatmap: 'heatmap.png' };
+export const FIGURE_FILES: Record<PlotKind, string> = { profile: 'profile.png', flux: 'flux.png', heatmap: 'heatmap.png', sensitivity: 'sensitivity.png' };
 
 function twoDWords(study: FinStudy2D): string {
   const g = study.finest.grid;
@@ -33,6 +33,8 @@ function caption(kind: PlotKind, check: CheckPlotInput, field: FinStudy2D | null
       return `Heat flowing along the fin Q (W, top) and heat lost per unit length q′ = h P θ (W/m, bottom) against ${along.toLowerCase()} (mm). The dotted line marks where ${Math.round(100 * (1 - REMAINING_FRACTION))} % of the reference's heat has left the fin: beyond it the fin carries little. fd-1d's Q(x) is the scheme's own interface flux; fd-2d's is its base heat rate minus the face losses summed along the face.${omitted}`;
     case 'heatmap':
       return `Temperature T (°C) in the fin's section, both halves, on its true outline (a thin section is stretched across its thickness by the factor the axis states); isotherms labelled in °C.${field ? ` ${twoDWords(field)}.` : ''}`;
+    case 'sensitivity':
+      return `Sensitivities d ln Q / d ln x of the reference heat rate (${ref.model}) to every input, largest at the top; inputs with a stated uncertainty in orange, with the part of the band each gives (|S| u, one standard uncertainty). ${check.report.sensitivityMethod ?? ''}.`;
     default: {
       const never: never = kind;
       return never;
@@ -44,6 +46,7 @@ const TITLES: Record<PlotKind, string> = {
   profile: 'Temperature along the fin',
   flux: 'Heat flow along the fin and heat lost per unit length',
   heatmap: 'Temperature field in the fin section (fd-2d)',
+  sensitivity: 'Sensitivities of the heat rate',
 };
 
 export function figureSection(

@@ -53,7 +53,8 @@ async function field(c: Case, check: CheckPlotInput): Promise<{ study: FinStudy2
 export async function makeReport(c: Case, opts: ReportOptions): Promise<ReportContent> {
   const check = await checkPlotInput(c, { tolerance: opts.tolerance, reference: opts.reference });
   const { study, unavailable } = await field(c, check);
-  const kinds: PlotKind[] = study ? ['profile', 'flux', 'heatmap'] : ['profile', 'flux'];
+  const kinds: PlotKind[] = [...(study ? (['profile', 'flux', 'heatmap'] as const) : (['profile', 'flux'] as const))];
+  if (check.report.sensitivities !== undefined) kinds.push('sensitivity');
   const scale = opts.dpi / 96;
   const figures: ReportFigure[] = [];
   for (const kind of kinds) {
