@@ -49,7 +49,9 @@ describe('HTML report in headless Chromium', () => {
         const images = JSON.parse(
           (await page.evaluate('JSON.stringify(Array.from(document.images).map((i) => [i.complete, i.naturalWidth, i.naturalHeight]))')) as string,
         ) as [boolean, number, number][];
+        // profile, flux, heat map and (issue 12) the sensitivities.
         expect(images).toEqual([
+          [true, 1200, 750],
           [true, 1200, 750],
           [true, 1200, 750],
           [true, 1200, 750],

@@ -53,10 +53,11 @@ describe('fincheck report writes an HTML and a Markdown report with the charts b
     for (const f of ['profile.png', 'flux.png', 'heatmap.png']) expect(decodePng(readFileSync(join(out, f)))).toMatchObject({ width: 1200, height: 750 });
   });
 
-  it('HTML is self-contained: the three PNGs inline (the same bytes as the files), no scripts, no outside links', () => {
+  it('HTML is self-contained: the four PNGs inline (the same bytes as the files), no scripts, no outside links', () => {
     const images = [...html.matchAll(/<img src="data:image\/png;base64,([A-Za-z0-9+/=]+)"/g)].map((m) => Buffer.from(m[1] ?? '', 'base64'));
-    expect(images).toHaveLength(3);
-    ['profile.png', 'flux.png', 'heatmap.png'].forEach((f, k) => expect(images[k]?.equals(readFileSync(join(out, f)))).toBe(true));
+    // profile, flux, heat map and (issue 12) the sensitivities.
+    expect(images).toHaveLength(4);
+    ['profile.png', 'flux.png', 'heatmap.png', 'sensitivity.png'].forEach((f, k) => expect(images[k]?.equals(readFileSync(join(out, f)))).toBe(true));
     expect(/<script|<link|src="http|url\(http/i.test(html)).toBe(false);
     has(html, '@page { size: A4;');
     has(html, '@media print');
