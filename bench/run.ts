@@ -3,7 +3,7 @@
  *
  * Areas (one file each, each returns rows): oned.ts (tridiagonal solves), twod.ts (2-D grid solves
  * against a general banded LU), images.ts (PNG charts), process.ts (whole `fincheck check` runs).
- * sink.ts (fd-3d heat-sink solve and study), nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
+ * sink.ts (fd-3d heat-sink solve and study), uncertainty.ts (check's sensitivities and sample), nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
  * (the 41x41 map with the 2-D reference, about a minute) runs only when named.
  * Run a subset by name: `npm run bench -- 1d images`. Nothing is written to disk: the table is printed.
  * Standalone timings with more detail, outside the table (`npx tsx bench/NAME.ts`): tridiagonal-solvers.ts,
@@ -21,6 +21,7 @@ import { benchCommands, benchMap2D, benchProcess } from './process.js';
 import { benchNonlinear } from './nonlinear.js';
 import { benchTwoD } from './twod.js';
 import { benchSink } from './sink.js';
+import { benchUncertainty } from './uncertainty.js';
 
 const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   '1d': benchOneD,
@@ -31,10 +32,11 @@ const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   commands: benchCommands,
   map2d: benchMap2D,
   sink: benchSink,
+  uncertainty: benchUncertainty,
 };
 
 /** Areas run when none is named: all but the minute-long 2-D map. */
-const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands', 'sink'];
+const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands', 'sink', 'uncertainty'];
 
 function loadText(): string {
   return loadavg()

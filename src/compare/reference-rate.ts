@@ -7,10 +7,11 @@
  * heat from fd-1d on the 1-D grid, Q_1D(edges cooled) - Q_1D(edges insulated), exactly as the reference adds
  * it (reference2d.ts). Keeping the grids fixed makes the discrete heat rate a smooth function of every input
  * (node positions move continuously with the dimensions), so its central differences converge like the step
- * squared. Units: W.
+ * squared. A nonlinear fin's Newton solves start from the case's own solution on the same grid (solved once,
+ * on the first call), which the variants differ from by the perturbation only. Units: W.
  */
 import type { Case } from '../case/index.js';
-import { finProblem, solveFinWith, type FinGrid, type GridSolvers } from '../fd/index.js';
+import { finProblem, solveFinWith, type FinGrid, type FinStudy, type GridSolvers } from '../fd/index.js';
 import type { Grading } from '../mesh/index.js';
 import { isStraight } from './reference2d.js';
 
@@ -23,17 +24,30 @@ export function referenceGridText(grid: ReferenceGrid): string {
   return grid.model === 'fd-1d' ? `fd-1d on ${grid.nodes} nodes` : `fd-2d on ${grid.nx} x ${grid.ny} nodes`;
 }
 
-/** Q(variant) of the reference model on `grid`, W. */
-export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid): (variant: Case) => number {
-  const oneD = (variant: Case, nodes: number, grading: Grading | 'auto'): number => {
-    const g: FinGrid = { model: '1d', nodes, grading };
-    return solveFinWith(solvers, finProblem(variant), g).heatRate_W;
+/** Q(variant) of the reference model on `grid`, W; `c` is the case the variants are made from (their Newton start). */
+export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid, c: Case): (variant: Case) => number {
+  const starts = new Map<string, FinStudy>();
+  const solve = (variant: Case, g: FinGrid, id: string): number => {
+    let start = starts.get(id);
+    if (solvers.nonlinear && start === undefined) {
+      start = solveFinWith(solvers, finProblem(variant === c ? c : withEdges(c, variant)), g);
+      starts.set(id, start);
+    }
+    return solveFinWith(solvers, finProblem(variant), g, start).heatRate_W;
   };
-  if (grid.model === 'fd-1d') return (variant) => oneD(variant, grid.nodes, grid.grading);
+  const oneD = (variant: Case, id: string, nodes: number, grading: Grading | 'auto'): number => solve(variant, { model: '1d', nodes, grading }, id);
+  if (grid.model === 'fd-1d') return (variant) => oneD(variant, '1d', grid.nodes, grid.grading);
   return (variant) => {
-    const section = solveFinWith(solvers, finProblem(variant), { model: '2d', nx: grid.nx, ny: grid.ny }).heatRate_W;
+    const section = solve(variant, { model: '2d', nx: grid.nx, ny: grid.ny }, '2d');
     if (!(variant.fin.edges === 'cooled' && isStraight(variant))) return section;
     const insulated: Case = { ...variant, fin: { ...variant.fin, edges: 'insulated' } };
-    return section + oneD(variant, grid.edges.nodes, grid.edges.grading) - oneD(insulated, grid.edges.nodes, grid.edges.grading);
+    return (
+      section + oneD(variant, '1d cooled', grid.edges.nodes, grid.edges.grading) - oneD(insulated, '1d insulated', grid.edges.nodes, grid.edges.grading)
+    );
   };
+}
+
+/** The case with the variant's edges (the Newton start of the insulated-edge solve has insulated edges too). */
+function withEdges(c: Case, variant: Case): Case {
+  return { ...c, fin: { ...c.fin, edges: variant.fin.edges } };
 }

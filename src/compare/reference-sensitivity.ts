@@ -39,7 +39,7 @@ export function referenceSensitivity(
     finest = { model: 'fd-2d', nx: twoD.finest.grid.nodesX, ny: twoD.finest.grid.nodesY, edges: oneDFinest };
     coarsest = { model: 'fd-2d', nx: coarse.nx, ny: coarse.ny, edges: oneDCoarsest };
   }
-  const rate = referenceRate(solvers, finest);
+  const rate = referenceRate(solvers, finest, c);
   const nominal = rate(c);
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
   const sens = sensitivities(c, rate, nominal, given, !solvers.nonlinear);
@@ -48,7 +48,7 @@ export function referenceSensitivity(
     n: opts.sampleSize ?? DEFAULT_SAMPLE_SIZE,
     seed: opts.sampleSeed ?? DEFAULT_SAMPLE_SEED,
     nonlinear: solvers.nonlinear,
-    rate: referenceRate(solvers, coarsest),
+    rate: referenceRate(solvers, coarsest, c),
     grid: `${referenceGridText(coarsest)}, the coarsest grid of the study`,
   });
   return {

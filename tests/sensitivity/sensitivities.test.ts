@@ -90,3 +90,40 @@ describe('against finite differences of the whole check', () => {
     expect(Math.abs(sum - sensitivityOf(report, 'base.contactResistance') - 1)).toBeLessThan(1e-6);
   }, 60_000);
 });
+
+describe('a nonlinear fin (power-law h and radiation) against finite differences of the whole check', () => {
+  const raw = {
+    fin: { profile: 'rectangular', length: 0.05, thickness: 0.002, width: 0.06, edges: 'cooled' },
+    material: { k: 150 },
+    convection: { ambient: 25, h: { law: 'power', base: 8, exponent: 0.25 }, tip: 'adiabatic', emissivity: 0.8 },
+    base: { temperature: 90 },
+  };
+  const d = 1e-4;
+  const fullCheck = async (variant: unknown): Promise<number> =>
+    (await runCheck(parseCaseObject(variant), { tolerance: 0.02, reference: '1d', sensitivities: false })).report.reference.heatRate_W;
+
+  it('the Newton re-solves (started from the case) equal central differences of full checks to 1e-6 relative', async () => {
+    const { report } = await runCheck(parseCaseObject(raw), { tolerance: 0.02, reference: '1d', sample: 'never' });
+    const Q = report.reference.heatRate_W;
+    const keys: [string, string][] = [
+      ['convection.h', 'convection.h.base'],
+      ['convection.h.exponent', 'convection.h.exponent'],
+      ['convection.emissivity', 'convection.emissivity'],
+      ['material.k', 'material.k'],
+      ['fin.length', 'fin.length'],
+    ];
+    for (const [key, path] of keys) {
+      const value = getByKeyPath(raw, path) as number;
+      const fd = ((await fullCheck(setByKeyPath(raw, path, value * (1 + d)))) - (await fullCheck(setByKeyPath(raw, path, value * (1 - d))))) / (2 * d * Q);
+      // Newton stops at a residual of 1e-12 relative: over the step 1e-4 that is ~1e-8 of S, well within 1e-6.
+      expect(Math.abs(sensitivityOf(report, key) / fd - 1), key).toBeLessThan(1e-6);
+    }
+    // The base temperature: the full check moves T_b by d times the rise.
+    const rise = raw.base.temperature - raw.convection.ambient;
+    const at = (f: number) => fullCheck(setByKeyPath(raw, 'base.temperature', raw.convection.ambient + rise * f));
+    const fd = ((await at(1 + d)) - (await at(1 - d))) / (2 * d * Q);
+    expect(Math.abs(sensitivityOf(report, 'base.temperature') / fd - 1)).toBeLessThan(1e-6);
+    // Radiation and h rising with theta: Q grows faster than theta_b.
+    expect(sensitivityOf(report, 'base.temperature')).toBeGreaterThan(1);
+  }, 60_000);
+});

@@ -94,11 +94,15 @@ export function studyGridIssue(problem: FinProblem, opts: FinStudyOptions): stri
   return issue === null ? null : `the finest grid of the 2-D study: ${issue}`;
 }
 
-/** solveFin with grid solvers already loaded. */
-export function solveFinWith(solvers: GridSolvers, problem: FinProblem, grid: FinGrid): FinStudy {
+/**
+ * solveFin with grid solvers already loaded. `start`: a solution of a nearby fin (the same model; e.g. the
+ * fin before one input was changed) that Newton's method starts from, interpolated onto this grid; a linear
+ * fin ignores it.
+ */
+export function solveFinWith(solvers: GridSolvers, problem: FinProblem, grid: FinGrid, start?: FinStudy): FinStudy {
   requireModel(problem, grid.model);
-  if (grid.model === '1d') return study1D(problem, [solvers.oneD(problem, grid)], null);
-  const r = solvers.twoD(twoDFinProblem(problem), grid);
+  if (grid.model === '1d') return study1D(problem, [solvers.oneD(problem, grid, start?.model === 'fd-1d' ? start.finest : undefined)], null);
+  const r = solvers.twoD(twoDFinProblem(problem), grid, start?.model === 'fd-2d' ? start.finest : undefined);
   return {
     ...common2D(problem, r, [r]),
     refinement: null,
