@@ -15,6 +15,8 @@ import { bareLengthUnit, parseCaseObject, parseTextWith, sortByPosition, type Pa
 import { dimensionWarnings } from './plausibility.js';
 import { readCaseFile } from './read-input.js';
 import type { Case } from './types.js';
+import { sinkNumericInputs } from './sink-numeric-inputs.js';
+import { readUncertaintyOf } from './uncertainty.js';
 
 /** A case of either kind, told apart by `kind`. */
 export type AnyCase = { kind: 'fin'; case: Case } | { kind: 'heat-sink'; case: HeatSinkCase };
@@ -28,9 +30,11 @@ export function parseHeatSinkObject(raw: unknown, locate?: Locate, options: Pars
   }
   const defaultName = options.defaultName ?? 'unnamed case';
   const c = toHeatSinkCase(result.data, defaultName);
+  const { uncertainty, issues } = readUncertaintyOf(result.data.uncertainty, sinkNumericInputs(c));
+  if (issues.length > 0) throw new InputError(sortByPosition(toInputIssues(issues, raw, locate)), options.file);
   const nameWarning = caseName(result.data.name, defaultName).warning;
   const finWarnings = result.data.fin ? dimensionWarnings(result.data.fin, raw, result.data.units !== undefined) : [];
-  return { ...c, warnings: [...(nameWarning ? [nameWarning] : []), ...finWarnings] };
+  return { ...c, warnings: [...(nameWarning ? [nameWarning] : []), ...finWarnings], uncertainty };
 }
 
 /** A raw case object of either kind (a heat sink when it has an `array` key). Throws InputError. */

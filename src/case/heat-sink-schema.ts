@@ -275,6 +275,7 @@ function buildHeatSinkSchema(lengthUnit: LengthUnit) {
       sources: sourcesSchema,
       convection: convectionSchema,
       units: shared.units,
+      uncertainty: shared.uncertainty,
     },
     'a heat-sink case',
     'A fincheck heat-sink case (format 1): identical fins on a rectangular plate heated by sources on its underside; ' +

@@ -7,7 +7,7 @@
  * Units as in types.ts: SI lengths (m), W, W/(m*K), W/(m^2*K), m^2*K/W; absolute temperatures in degC with the
  * suffix `_degC`.
  */
-import type { CaseWarning, HDistribution, Material, Profile, TipCondition } from './types.js';
+import type { CaseWarning, HDistribution, InputUncertainty, Material, Profile, TipCondition } from './types.js';
 
 /** Fin profiles an array may use: the straight ones (running the whole plate length) and the pins. */
 export type ArrayFinProfile = Exclude<Profile, { kind: 'annular' }>;
@@ -72,4 +72,6 @@ export interface HeatSinkCase {
   sources: readonly HeatSource[];
   convection: SinkConvection;
   warnings?: readonly CaseWarning[];
+  /** Standard uncertainties of inputs (sink-numeric-inputs.ts keys), relative; absent in cases built in code (default h 25 %). */
+  uncertainty?: readonly InputUncertainty[];
 }

@@ -44,5 +44,6 @@ export type { Range } from './fields.js';
 export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
 export type { CaseWarning } from './types.js';
 export { numericInputs, type NumericInput } from './numeric-inputs.js';
-export { DEFAULT_UNCERTAINTY, readUncertainty } from './uncertainty.js';
+export { DEFAULT_UNCERTAINTY, readUncertainty, readUncertaintyOf } from './uncertainty.js';
+export { sinkNumericInputs } from './sink-numeric-inputs.js';
 export type { InputUncertainty } from './types.js';

@@ -19,7 +19,7 @@
 import type { Case, HDistribution, Profile } from './types.js';
 import type { QuantityKind } from './units.js';
 
-export interface NumericInput {
+export interface NumericInput<C = Case> {
   /** Key path as written in a case file, e.g. `fin.thickness`. */
   key: string;
   /** The kind of an absolute uncertainty of this input (its unit). */
@@ -30,19 +30,26 @@ export interface NumericInput {
   minFactor: number;
   maxFactor: number;
   /** The case with this input multiplied by `factor`. */
-  scale(factor: number): Case;
+  scale(factor: number): C;
 }
 
-type Build = (key: string, kind: QuantityKind, nominal: number, scale: (f: number) => Case, range?: [number, number]) => NumericInput;
-
-const make: Build = (key, kind, nominal, scale, range = [0, Number.POSITIVE_INFINITY]) => ({
-  key,
-  kind,
-  nominal,
-  minFactor: range[0],
-  maxFactor: range[1],
-  scale,
-});
+/** A numeric input (range: of the scale factor; default all positive factors). */
+export function make<C>(
+  key: string,
+  kind: QuantityKind,
+  nominal: number,
+  scale: (f: number) => C,
+  range: [number, number] = [0, Number.POSITIVE_INFINITY],
+): NumericInput<C> {
+  return {
+    key,
+    kind,
+    nominal,
+    minFactor: range[0],
+    maxFactor: range[1],
+    scale,
+  };
+}
 
 /** Every numeric input of the case its heat rate depends on, in a fixed order (convection, material, fin, base). */
 export function numericInputs(c: Case): NumericInput[] {
@@ -53,7 +60,7 @@ function withH(c: Case, h: HDistribution): Case {
   return { ...c, convection: { ...c.convection, h } };
 }
 
-function scaleH(h: HDistribution, f: number): HDistribution {
+export function scaleH(h: HDistribution, f: number): HDistribution {
   switch (h.kind) {
     case 'uniform':
       return { kind: 'uniform', h: h.h * f };
@@ -134,7 +141,7 @@ function materialInputs(c: Case): NumericInput[] {
 }
 
 /** The profile's dimensions by their case-file keys (a zero tip size is no input: scaling 0 changes nothing). */
-function dimensions(p: Profile): [string, number][] {
+export function dimensions(p: Profile): [string, number][] {
   switch (p.kind) {
     case 'rectangular':
       return [
@@ -184,7 +191,7 @@ function dimensions(p: Profile): [string, number][] {
 }
 
 /** The factor range that keeps a tapered profile's tip no thicker than its base, and an annulus's radii in order. */
-function dimensionRange(p: Profile, name: string): [number, number] {
+export function dimensionRange(p: Profile, name: string): [number, number] {
   const ordered = (small: number, large: number, isSmall: boolean): [number, number] =>
     isSmall ? [0, large / small] : [small / large, Number.POSITIVE_INFINITY];
   if (p.kind === 'trapezoidal' && (name === 'tipThickness' || name === 'baseThickness'))

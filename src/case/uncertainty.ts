@@ -41,7 +41,14 @@ export function readUncertainty(
   raw: Readonly<Record<string, string | number>> | undefined,
   c: Case,
 ): { uncertainty: InputUncertainty[]; issues: PendingIssue[] } {
-  const inputs = numericInputs(c);
+  return readUncertaintyOf(raw, numericInputs(c));
+}
+
+/** readUncertainty against a list of inputs (a heat sink's: sink-numeric-inputs.ts). */
+export function readUncertaintyOf<C>(
+  raw: Readonly<Record<string, string | number>> | undefined,
+  inputs: readonly NumericInput<C>[],
+): { uncertainty: InputUncertainty[]; issues: PendingIssue[] } {
   const byKey = new Map(inputs.map((i) => [i.key, i]));
   const issues: PendingIssue[] = [];
   const out: InputUncertainty[] = [];
@@ -56,12 +63,13 @@ export function readUncertainty(
     if (typeof read === 'string') issues.push({ path, accepted: read });
     else out.push({ key, relative: read, given: String(value) });
   }
-  if (!out.some((u) => u.key === 'convection.h') && !issues.some((i) => i.path[1] === 'convection.h')) out.unshift(...DEFAULT_UNCERTAINTY);
+  const hasH = inputs.some((i) => i.key === 'convection.h');
+  if (hasH && !out.some((u) => u.key === 'convection.h') && !issues.some((i) => i.path[1] === 'convection.h')) out.unshift(...DEFAULT_UNCERTAINTY);
   return { uncertainty: out, issues };
 }
 
 /** The relative uncertainty `value` gives `input`, or what is accepted instead. */
-function relativeOf(value: string | number, input: NumericInput): number | string {
+function relativeOf<C>(value: string | number, input: NumericInput<C>): number | string {
   const absoluteWords =
     input.kind === 'dimensionless'
       ? 'as a plain number such as 0.05'

@@ -3,6 +3,7 @@
  * shortcuts' rises and drifts per source with their verdicts, the ledger, the flags and the cautions. Every number
  * names its model and how accurate it is.
  */
+import { uncertaintyLines } from './format-uncertainty.js';
 import type { HeatSinkCase } from '../case/index.js';
 import { describeH, describeProfile, describeTip } from './describe-case.js';
 import { signedPercentText } from './percent-text.js';
@@ -103,6 +104,7 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport): string {
     out.push('');
   }
 
+  out.push(...sinkUncertaintyLines(r));
   if (r.flags.length > 0) {
     out.push('Flags:');
     for (const f of r.flags) out.push(`  [${MARK[f.severity]}] ${f.flag}: ${f.message}`);
@@ -111,4 +113,26 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport): string {
   out.push('Cautions:');
   for (const caution of r.cautions) out.push(`  - ${caution}`);
   return `${out.join('\n')}\n`;
+}
+
+/** The uncertainty section of a sink's check (format-uncertainty.ts); none when it was not computed. */
+function sinkUncertaintyLines(r: SinkCheckReport): string[] {
+  const u = r.uncertainty;
+  if (u === undefined || r.sensitivities === undefined) return [];
+  const uncertain = r.sensitivities.filter((s) => s.uncertainty > 0);
+  const source = r.sources.find((s) => s.name === u.source);
+  return uncertaintyLines({
+    quantity: `${u.source}'s mean rise ${source ? Number(source.meanRise_K.toPrecision(4)) : '?'} K`,
+    unit: 'K',
+    relative: u.relative,
+    low: u.low_K,
+    high: u.high_K,
+    fromH: u.fromH,
+    hOnly: uncertain.length === 1 && uncertain[0]?.key === 'convection.h',
+    note: u.note,
+    derivative: 'd ln rise / d ln x',
+    sensitivityMethod: r.sensitivityMethod ?? '',
+    sensitivities: r.sensitivities.map((s) => ({ key: s.key, value: s.dlnRise_dlnx, uncertainty: s.uncertainty })),
+    rows: r.models.map((m) => ({ label: m.model, verdict: m.verdict, drift: m.drift })),
+  });
 }

@@ -18,10 +18,13 @@ import { sinkLedger } from './sink-ledger.js';
 import { sinkShortcuts, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
 import type { SinkCheckReport, SinkModelRow, SinkReferenceResult } from './sink-types.js';
 import { verdictOf } from './types.js';
+import { sinkRowsWithBand, sinkSensitivity } from './sink-sensitivity.js';
 
 export interface SinkCheckOptions {
   /** Relative tolerance on each source's mean rise (e.g. 0.02). */
   tolerance: number;
+  /** Compute the sensitivities and the band (default true; needs a study with its finest grid, as studySink gives). */
+  sensitivities?: boolean;
 }
 
 export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | Promise<SinkStudy>);
@@ -29,7 +32,9 @@ export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | 
 /** Runs the array shortcuts and judges them against the reference. */
 export async function runSinkCheck(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckReport> {
   const study = typeof reference === 'function' ? await reference(c) : reference;
-  return sinkCheckFrom(c, study, await sinkShortcuts(c), options);
+  const report = sinkCheckFrom(c, study, await sinkShortcuts(c), options);
+  const sensitivity = options.sensitivities === false ? null : sinkSensitivity(c, study);
+  return sensitivity === null ? report : { ...report, models: sinkRowsWithBand(report.models, sensitivity.uncertainty), ...sensitivity };
 }
 
 /** The reference's per-source rises and whether it is resolved enough to judge on. */

@@ -6,6 +6,30 @@
 import type { SinkShortcutId } from './sink-models.js';
 import type { Flag, Verdict } from './types.js';
 
+/** d ln rise / d ln x of the hottest source's mean rise for one input (sink-sensitivity.ts). */
+export interface SinkSensitivity {
+  key: string;
+  dlnRise_dlnx: number;
+  method: 'central-difference';
+  value: number;
+  uncertainty: number;
+}
+
+export interface SinkUncertaintyBand {
+  method: 'first-order';
+  /** Relative standard uncertainty of the hottest source's mean rise. */
+  relative: number;
+  /** The rise (1 -+ relative), K. */
+  low_K: number;
+  high_K: number;
+  firstOrder: number;
+  fromH: number;
+  sample: null;
+  /** Which source, and how the band was found. */
+  source: string;
+  note: string;
+}
+
 export interface SinkReferenceResult {
   model: 'fd-3d';
   /** Mean rise of each source, K (the reference's finest grid). */
@@ -67,6 +91,8 @@ export interface SinkModelRow {
   basis: string;
   /** How accurate the number is as a solution of its own model. */
   accuracy: string;
+  /** |drift| / uncertainty.relative (null when the band is 0); absent when no uncertainty was computed. */
+  driftOverUncertainty?: number | null;
 }
 
 export interface SinkAssumptionRow {
@@ -92,4 +118,8 @@ export interface SinkCheckReport {
   assumptions: SinkAssumptionRow[];
   flags: Flag[];
   cautions: string[];
+  /** d ln rise / d ln x of the hottest source's mean rise for every numeric input (sink-sensitivity.ts); absent when not computed. */
+  sensitivities?: SinkSensitivity[];
+  sensitivityMethod?: string;
+  uncertainty?: SinkUncertaintyBand;
 }

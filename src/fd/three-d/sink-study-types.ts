@@ -41,8 +41,19 @@ export interface SinkPlateView {
   top_degC: Float64Array;
 }
 
+/** One fd-3d grid: coarsest cell size in x and y (m), plate and fin layers, the refinement factor, the fin model. */
+export interface SinkGridSpec {
+  cellSize: number;
+  plateLayers: number;
+  finLayers: number;
+  refine: number;
+  finRepresentation: 'sheet' | 'cells';
+}
+
 export interface SinkStudy {
   model: 'fd-3d';
+  /** The finest grid's spec (solveSinkOnGrid solves a variant of the sink on it); absent in studies built by hand. */
+  finestGrid?: SinkGridSpec;
   sources: SinkSourceResult[];
   fins: SinkFinResult[];
   /** Heat put in by the sources, W. */

@@ -51,7 +51,8 @@ export function studySink(c: HeatSinkCase, options: SinkStudyOptions = {}): Sink
   checkSinkMemory(sinkUnknowns(finest, representation, problem.layout.finKind), options.memoryLimit_bytes ?? DEFAULT_MEMORY_LIMIT);
   const results = meshes.map((grid) => solveSinkSystem(problem, assembleSink(problem, grid, representation))).reverse();
   const sizes = refines.map((r) => cellSize / r).reverse();
-  return sinkStudyFrom(problem, results, sizes, representation);
+  const last = refines[refines.length - 1] as number;
+  return { ...sinkStudyFrom(problem, results, sizes, representation), finestGrid: { ...spec(last), finRepresentation: representation } };
 }
 
 /** The SinkStudy of grid results given finest first, with their representative cell sizes. */

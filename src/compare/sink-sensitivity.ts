@@ -1,0 +1,76 @@
+/**
+ * How sure a heat sink's check is of its inputs: S_x = d ln rise / d ln x of the hottest source's mean rise over
+ * ambient (fd-3d) for every numeric input of the case (src/case sink-numeric-inputs.ts), by central differences on
+ * the second-finest grid of the reference's study held fixed (the finest costs about 8 times as much: 22 s against
+ * 2.5 s for the 4-fin sink of tests/sensitivity, where the S of the two grids differ by 0.2 % (h) to 3 % (plate
+ * thickness) of themselves, far below what an uncertainty band needs):
+ *   S_x = (rise(x (1 + d)) - rise(x (1 - d))) / (2 d rise(x)),   d = 1e-3 (SINK_SENSITIVITY_STEP),
+ * each re-solve started from the case's own solution on that grid (CG to a relative residual of 1e-10: its error
+ * over the step is ~1e-7 of S; the truncation error d^2 S'''/6 ~ 1e-7 too). The rise is linear in the sources'
+ * powers, so every S of a power is the share of the rise that source causes (a single source: 1).
+ * The band: first order (uncertainty-band.ts, JCGM 100:2008 eq. 10), sqrt(sum (S u)^2) of the rise, one standard
+ * uncertainty each side. No Latin-hypercube sample for a sink: 200 fd-3d solves of ~1 s each are not a check's
+ * cost; the note says so, and that first order is the linearisation of the rise about the case.
+ */
+import { DEFAULT_UNCERTAINTY, sinkNumericInputs, type HeatSinkCase } from '../case/index.js';
+import { solveSinkOnGrid, type SinkStudy } from '../fd/index.js';
+import type { SinkModelRow, SinkSensitivity, SinkUncertaintyBand } from './sink-types.js';
+
+export const SINK_SENSITIVITY_STEP = 1e-3;
+
+export interface SinkSensitivityResult {
+  sensitivities: SinkSensitivity[];
+  sensitivityMethod: string;
+  uncertainty: SinkUncertaintyBand;
+}
+
+const pct = (x: number): string => `${Number((100 * x).toPrecision(3))} %`;
+
+/** null when the study carries no grid to re-solve on (a study built by hand). */
+export function sinkSensitivity(c: HeatSinkCase, study: SinkStudy): SinkSensitivityResult | null {
+  const finest = study.finestGrid;
+  if (finest === undefined) return null;
+  const spec = { ...finest, refine: Math.max(1, finest.refine / 2) };
+  const unknowns = study.unknowns[finest.refine > 1 ? 1 : 0] ?? '?';
+  let hottest = 0;
+  study.sources.forEach((s, j) => {
+    if (s.meanRise_K > (study.sources[hottest]?.meanRise_K ?? -Infinity)) hottest = j;
+  });
+  const nominal = solveSinkOnGrid(c, spec);
+  const rise0 = nominal.sourceMeanRise[hottest] as number;
+  const d = SINK_SENSITIVITY_STEP;
+  const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
+  const rise = (variant: HeatSinkCase): number => solveSinkOnGrid(variant, spec, nominal.theta).sourceMeanRise[hottest] as number;
+  const sensitivities = sinkNumericInputs(c).map((input) => ({
+    key: input.key,
+    dlnRise_dlnx: (rise(input.scale(1 + d)) - rise(input.scale(1 - d))) / (2 * d * rise0),
+    method: 'central-difference' as const,
+    value: input.nominal,
+    uncertainty: given.get(input.key) ?? 0,
+  }));
+  const firstOrder = Math.sqrt(sensitivities.reduce((sum, s) => sum + (s.dlnRise_dlnx * s.uncertainty) ** 2, 0));
+  const h = sensitivities.find((s) => s.key === 'convection.h');
+  const uncertain = sensitivities.filter((s) => s.uncertainty > 0);
+  const riseRef = study.sources[hottest]?.meanRise_K ?? rise0;
+  const name = study.sources[hottest]?.name ?? `source ${hottest}`;
+  return {
+    sensitivities,
+    sensitivityMethod: `central differences of fd-3d on the study's second-finest grid (${unknowns} unknowns, held fixed), relative step ${d}, each re-solve started from the case's solution: two re-solves per input`,
+    uncertainty: {
+      method: 'first-order',
+      relative: firstOrder,
+      low_K: riseRef * (1 - firstOrder),
+      high_K: riseRef * (1 + firstOrder),
+      firstOrder,
+      fromH: h === undefined ? 0 : Math.abs(h.dlnRise_dlnx * h.uncertainty),
+      sample: null,
+      source: name,
+      note: `One standard uncertainty of ${name}'s mean rise from ${uncertain.map((s) => `${s.key} ${pct(s.uncertainty)}`).join(', ') || 'nothing'}; first order, sqrt(sum (S u)^2) = ${pct(firstOrder)}; no sample for a heat sink (200 fd-3d solves): first order is the rise linearised about the case`,
+    },
+  };
+}
+
+/** Each model row's |drift| (its worst source) over the band of the hottest source's rise. */
+export function sinkRowsWithBand(rows: SinkModelRow[], band: SinkUncertaintyBand): (SinkModelRow & { driftOverUncertainty: number | null })[] {
+  return rows.map((r) => ({ ...r, driftOverUncertainty: band.relative > 0 ? Math.abs(r.drift) / band.relative : null }));
+}
