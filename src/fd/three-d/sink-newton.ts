@@ -124,7 +124,9 @@ export function solveSinkNewton(
       return { phi, faces, thetaRoot: law ? thetaRoot : null, steps: step, cgIterations, relativeResidual: norm / scale };
     }
     for (let q = 0; q < n; q++) jacobianVal[rowStart[q]] = diagonalOfC[q] + slope[q];
-    const inner = Math.min(1e-2, Math.max(0.1 * tolerance, norm / scale));
+    // Inexact Newton: the step's own residual need not fall below |R| (quadratic convergence) nor below what the
+    // target still asks of it (half of tolerance |b|); at most 1e-2 of |R|.
+    const inner = Math.min(1e-2, Math.max(norm / scale, (0.5 * tolerance * scale) / norm));
     const { x: delta, report } = sparsePcg(jacobian, r, pre, inner, maxCg);
     cgIterations += report.iterations;
     let lambda = 1;
