@@ -11,6 +11,8 @@
  *   dq/dphi_P = G_h q'/(G_h κ + q'),   q' = dq/dθ_f = (n + 1) G_s g,   κ = k(θ_f)/k_ref,
  * and with no half cell (a thin fin's sheet node on its face, G_h infinite) θ_f = θ(phi_P), dq/dphi_P = q'/κ.
  * A prescribed temperature (G_s infinite) is linear in phi: q = G_h (phi_P − phi(θ_fixed)).
+ * The law's reference enters as dq/dθ_root = q_r G_h κ/(G_h κ + q'), q_r = ∂q/∂θ_root at fixed θ_f = −n q/θ_root
+ * (the half cell shares the change; without one, q_r itself).
  * g θ is formed as θ_root sign(θ)|θ/θ_root|^(n+1) (finite for every θ when n > −1).
  * With a constant k and g = 1 the face is linear: θ_f = G_h phi_P/(G_h + G_s) and q = θ_f G_s (the assembled
  * series conductance), so a linear sink goes through this module unchanged.
@@ -24,6 +26,8 @@ export interface FaceState {
   q: number;
   /** dq/dphi_P, W/K. */
   dq: number;
+  /** dq/dθ_root at fixed phi_P, W/K (0 off the power law). */
+  dRef: number;
 }
 
 export interface SinkFaces {
@@ -31,6 +35,8 @@ export interface SinkFaces {
   thetaOf(phi: number): number;
   /** phi of an excess temperature, K. */
   phiOf(theta: number): number;
+  /** dphi/dθ = k(θ)/k_ref. */
+  kappaOf(theta: number): number;
   /**
    * The face of a loss term at node potential phiP: surface conductance gS, half cell gH (Infinity: none),
    * `law` 1 for the fins' power law, fixed θ for a prescribed temperature (gS infinite).
@@ -54,16 +60,18 @@ export function sinkFaces(k: KirchhoffTransform, exponent: number, thetaRoot: ()
   return {
     thetaOf,
     phiOf,
+    kappaOf: kappa,
     face(phiP, gS, gH, law, fixed) {
-      if (gS === Infinity) return { theta: fixed, q: gH * (phiP - phiOf(fixed)), dq: gH };
+      if (gS === Infinity) return { theta: fixed, q: gH * (phiP - phiOf(fixed)), dq: gH, dRef: 0 };
+      const ofRef = (q: number) => (law === 0 || exponent === 0 ? 0 : (-exponent * q) / thetaRoot());
       if (gH === Infinity) {
         const theta = thetaOf(phiP);
         const [f, df] = flux(theta, law);
-        return { theta, q: gS * f, dq: (gS * df) / kappa(theta) };
+        return { theta, q: gS * f, dq: (gS * df) / kappa(theta), dRef: ofRef(gS * f) };
       }
       if (k.constant && (law === 0 || exponent === 0)) {
         const theta = (gH * phiP) / (gH + gS);
-        return { theta, q: gS * theta, dq: (gH * gS) / (gH + gS) };
+        return { theta, q: gS * theta, dq: (gH * gS) / (gH + gS), dRef: 0 };
       }
       const thetaP = thetaOf(phiP);
       let lo = Math.min(0, thetaP);
@@ -84,7 +92,8 @@ export function sinkFaces(k: KirchhoffTransform, exponent: number, thetaRoot: ()
       }
       const [f, df] = flux(theta, law);
       const dqTheta = gS * df;
-      return { theta, q: gS * f, dq: (gH * dqTheta) / (gH * kappa(theta) + dqTheta) };
+      const share = (gH * kappa(theta)) / (gH * kappa(theta) + dqTheta);
+      return { theta, q: gS * f, dq: (gH * dqTheta) / (gH * kappa(theta) + dqTheta), dRef: ofRef(gS * f) * share };
     },
   };
 }

@@ -13,12 +13,12 @@
  * (J differs from that matrix on the diagonal only, and stays symmetric positive definite). Start: that linear
  * system's solution. Steps are damped (halved, at most 20 times, until |R|_1 falls).
  * The power law's reference θ_root, the fins' mean root rise (junction temperatures weighted by the plate
- * cells' conductances, i.e. by area), is taken from the current iterate before every step (lagged: a
- * reference, not a variable of the Jacobian), with a secant correction of the fixed-point map once two values
- * exist, which keeps the update convergent for exponents above 1 (boiling), where the plain map may not be.
+ * cells' conductances, i.e. by area), is a function of phi: every face of the law depends on it, so the exact
+ * Jacobian is J + u v^T with u = dL/dθ_root and v = dθ_root/dphi, a rank-one term solved by Sherman-Morrison
+ * (Sherman & Morrison 1950, Ann. Math. Statist. 21(1):124-127): a second CG solve J y = u per step. (Lagging
+ * θ_root instead converges with the factor n f, f the fins' share of the cooling: 0.9 a step at n = −0.9.)
  * Converged when |R|_1 <= RESIDUAL_TARGET |b|_1 (the energy balance then holds to that; or below the rounding
- * floor of evaluating R, as in sparse-pcg.ts, for plates of very high conductivity) and θ_root moved by less than
- * 1e-10 of itself in the last step.
+ * floor of evaluating R, as in sparse-pcg.ts, for plates of very high conductivity).
  */
 import { SolverError } from '../../errors.js';
 import type { CsrMatrix } from '../linear-algebra/csr.js';
@@ -31,7 +31,6 @@ import type { SinkSystem } from './sink-system.js';
 
 const MAX_STEPS = 60;
 const MAX_HALVINGS = 20;
-const ROOT_TOLERANCE = 1e-10;
 
 export interface SinkNewtonResult {
   /** Kirchhoff potential of every node, K. */
@@ -76,26 +75,47 @@ export function solveSinkNewton(
   const slope = new Float64Array(n);
   const jacobian: CsrMatrix = { n, rowStart, col, val: jacobianVal, excess: slope };
 
-  const rootMean = (phi: Float64Array): number => {
+  const law = problem.powerLaw !== null && exponent !== 0;
+  /** θ_root of phi; with `gradient`, d θ_root/d phi into it (nonzero at the roots' plate and fin nodes). */
+  const rootMean = (phi: Float64Array, gradient: Float64Array | null): number => {
     let s = 0;
     let w = 0;
+    for (let r = 0; r < roots.plate.length; r++) w += roots.gPlate[r];
+    gradient?.fill(0);
     for (let r = 0; r < roots.plate.length; r++) {
       const gp = roots.gPlate[r];
       const gf = roots.gFin[r];
-      s += gp * faces.thetaOf((gp * phi[roots.plate[r]] + gf * phi[roots.fin[r]]) / (gp + gf));
-      w += gp;
+      const theta = faces.thetaOf((gp * phi[roots.plate[r]] + gf * phi[roots.fin[r]]) / (gp + gf));
+      s += gp * theta;
+      if (gradient !== null) {
+        const d = gp / w / faces.kappaOf(theta) / (gp + gf);
+        gradient[roots.plate[r]] += d * gp;
+        gradient[roots.fin[r]] += d * gf;
+      }
     }
-    return s / w;
+    const t = s / w;
+    if (!(t > 0))
+      throw new SolverError(`3-D sink solve: the fins' mean root rise is ${t.toPrecision(3)} K; a power-law h needs the fins above the ambient`);
+    return t;
   };
-  /** R into `out`, dL/dphi into `slope`; returns |R|_1. */
+  const slopeOfRoot = new Float64Array(law ? n : 0);
+  const gradientOfRoot = new Float64Array(law ? n : 0);
+  /** R into `out` (θ_root from phi), dL/dphi into `slope` and dL/dθ_root into `slopeOfRoot`; returns |R|_1. */
   const residual = (phi: Float64Array, out: Float64Array, withSlope: boolean): number => {
+    if (law) thetaRoot = rootMean(phi, withSlope ? gradientOfRoot : null);
     csrResidual(conduction, phi, b, out);
-    if (withSlope) slope.fill(0);
+    if (withSlope) {
+      slope.fill(0);
+      slopeOfRoot.fill(0);
+    }
     for (let t = 0; t < losses.node.length; t++) {
       const p = losses.node[t];
       const f = faces.face(phi[p], losses.surface[t], losses.half[t], losses.law[t], losses.fixed[t]);
       out[p] -= f.q;
-      if (withSlope) slope[p] += f.dq;
+      if (withSlope) {
+        slope[p] += f.dq;
+        if (law) slopeOfRoot[p] += f.dRef;
+      }
     }
     let s = 0;
     for (let r = 0; r < n; r++) s += Math.abs(out[r]);
@@ -106,29 +126,33 @@ export function solveSinkNewton(
   const trial = new Float64Array(n);
   const r = new Float64Array(n);
   const rTrial = new Float64Array(n);
-  const law = problem.powerLaw !== null;
-  let previous: { t: number; f: number } | null = null;
-  const checkedRoot = (t: number): number => {
-    if (!(t > 0))
-      throw new SolverError(`3-D sink solve: the fins' mean root rise is ${t.toPrecision(3)} K; a power-law h needs the fins above the ambient`);
-    return t;
-  };
-  if (law) thetaRoot = checkedRoot(rootMean(phi));
-  let rootMoved = law ? Infinity : 0;
   let norm = residual(phi, r, true);
   let cgIterations = 0;
   // Below the rounding floor of evaluating R itself (sparse-pcg.ts) no step can show progress.
   const target = () => Math.max(tolerance * scale, roundingFloor(matrix, phi));
   for (let step = 0; step < MAX_STEPS; step++) {
-    if (norm <= target() && rootMoved <= ROOT_TOLERANCE) {
+    if (norm <= target()) {
       return { phi, faces, thetaRoot: law ? thetaRoot : null, steps: step, cgIterations, relativeResidual: norm / scale };
     }
     for (let q = 0; q < n; q++) jacobianVal[rowStart[q]] = diagonalOfC[q] + slope[q];
     // Inexact Newton: the step's own residual need not fall below |R| (quadratic convergence) nor below what the
     // target still asks of it (half of tolerance |b|); at most 1e-2 of |R|.
     const inner = Math.min(1e-2, Math.max(norm / scale, (0.5 * tolerance * scale) / norm));
-    const { x: delta, report } = sparsePcg(jacobian, r, pre, inner, maxCg);
-    cgIterations += report.iterations;
+    const solved = sparsePcg(jacobian, r, pre, inner, maxCg);
+    cgIterations += solved.report.iterations;
+    const delta = solved.x;
+    if (law) {
+      // Full Jacobian J + u v^T (u = dL/dθ_root, v = dθ_root/dphi): Sherman-Morrison with a second solve J y = u,
+      // delta = x − y (v.x)/(1 + v.y). A denominator near 0 would make the rank-one term unreliable: then the
+      // step keeps J alone (θ_root lagged), which still converges, linearly.
+      const y = sparsePcg(jacobian, slopeOfRoot, pre, 1e-6, maxCg);
+      cgIterations += y.report.iterations;
+      const denominator = 1 + dot(gradientOfRoot, y.x);
+      if (denominator > 0.05) {
+        const c = dot(gradientOfRoot, delta) / denominator;
+        for (let q = 0; q < n; q++) delta[q] -= c * y.x[q];
+      }
+    }
     let lambda = 1;
     let accepted = false;
     for (let h = 0; h <= MAX_HALVINGS; h++, lambda *= 0.5) {
@@ -140,29 +164,23 @@ export function solveSinkNewton(
         break;
       }
     }
-    if (!accepted && norm <= target()) accepted = true; // at the floor: only θ_root is still moving
+    if (!accepted && norm <= target()) accepted = true;
     if (!accepted) {
       throw new SolverError(
         `3-D sink solve: Newton made no progress at step ${step + 1} (relative residual ${(norm / scale).toExponential(2)}, target ${tolerance.toExponential(0)})`,
       );
-    }
-    if (law) {
-      const mapped = checkedRoot(rootMean(phi));
-      let next = mapped;
-      if (previous !== null && previous.t !== thetaRoot) {
-        // Secant on the fixed-point map t -> mapped(t): its slope s, the root t + (mapped − t)/(1 − s).
-        const s = Math.min(0.9, Math.max(-1, (mapped - previous.f) / (thetaRoot - previous.t)));
-        next = thetaRoot + (mapped - thetaRoot) / (1 - s);
-      }
-      previous = { t: thetaRoot, f: mapped };
-      rootMoved = Math.abs(next - thetaRoot) / Math.abs(next);
-      thetaRoot = checkedRoot(next);
     }
     norm = residual(phi, r, true);
   }
   throw new SolverError(
     `3-D sink solve: Newton did not converge in ${MAX_STEPS} steps (relative residual ${(norm / scale).toExponential(2)}, target ${tolerance.toExponential(0)})`,
   );
+}
+
+function dot(a: Float64Array, b: Float64Array): number {
+  let s = 0;
+  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
+  return s;
 }
 
 function norm1(v: Float64Array): number {
