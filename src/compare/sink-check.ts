@@ -28,8 +28,20 @@ export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | 
 
 /** Runs the array shortcuts and judges them against the reference. */
 export async function runSinkCheck(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckReport> {
+  return (await runSinkCheckWith(c, reference, options)).report;
+}
+
+/** The check and what it was computed from (the reference study and the shortcuts), for charts and reports. */
+export interface SinkCheckRun {
+  report: SinkCheckReport;
+  study: SinkStudy;
+  shortcuts: SinkShortcuts;
+}
+
+export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckRun> {
   const study = typeof reference === 'function' ? await reference(c) : reference;
-  return sinkCheckFrom(c, study, await sinkShortcuts(c), options);
+  const shortcuts = await sinkShortcuts(c);
+  return { report: sinkCheckFrom(c, study, shortcuts, options), study, shortcuts };
 }
 
 /** The reference's per-source rises and whether it is resolved enough to judge on. */

@@ -28,7 +28,7 @@ export { gridSolversNow } from './study/grid-solvers-now.js';
 export type { RefinementStudy } from './study/refinement.js';
 export { richardsonGci, fitObservedOrder } from './study/refinement.js';
 export type { NewtonReport } from './newton/newton-report.js';
-export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView } from './three-d/sink-study-types.js';
+export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView, SinkFinProfiles } from './three-d/sink-study-types.js';
 
 export type { Fin1DResult } from './one-d/linear-solve.js';
 export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';

@@ -13,6 +13,7 @@ import { buildSinkGrid, type SinkGrid } from '../../mesh/index.js';
 import { richardsonGci } from '../study/refinement.js';
 import { assembleSink, sinkUnknowns, type FinRepresentation } from './sink-system.js';
 import { checkSinkMemory, DEFAULT_MEMORY_LIMIT } from './sink-memory.js';
+import { sinkFinProfiles } from './sink-fin-profiles.js';
 import { sinkPlateView } from './sink-plate-view.js';
 import { sinkProblem, type SinkProblem } from './sink-problem.js';
 import { solveSinkSystem, type SinkGridResult } from './sink-solve.js';
@@ -71,6 +72,9 @@ export function sinkStudyFrom(problem: SinkProblem, results: SinkGridResult[], s
     };
   });
   const maxRise = Math.max(...fine.sourceMaxRise);
+  // The GCI of every other reported quantity (relative, on rises above ambient and on heat), null below three grids.
+  const gci = (value: (r: SinkGridResult) => number): number | null =>
+    results.length >= 3 ? richardsonGci(results.map((r, g) => ({ size: sizes[g], value: value(r) }))).gci : null;
   return {
     model: 'fd-3d',
     sources,
@@ -84,6 +88,13 @@ export function sinkStudyFrom(problem: SinkProblem, results: SinkGridResult[], s
     unknowns: results.map((r) => r.unknowns),
     finModel: finModelText(problem, representation),
     plate: sinkPlateView(fine, ambient),
+    errors: {
+      sourceMaxRise: problem.sources.map((_, k) => gci((r) => r.sourceMaxRise[k])),
+      plateTopMeanRise: gci((r) => r.topMeanRise),
+      finHeat: fine.finHeat.map((_, f) => gci((r) => r.finHeat[f])),
+      sinkResistance: gci((r) => Math.max(...r.sourceMaxRise) / r.totalHeat),
+    },
+    finProfiles: sinkFinProfiles(fine, problem.layout.finKind, representation, ambient),
     solver: { method: fine.method, iterations: fine.iterations, relativeResidual: fine.relativeResidual },
   };
 }
