@@ -24,6 +24,7 @@ export {
 export { sinkShortcuts, SINK_SHORTCUT_IDS, type SinkShortcutId, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
 export { formatSinkCheck, describeSink } from './format-sink-check.js';
 export { formatSinkSolve } from './format-sink-solve.js';
+export { sinkFinPrediction, type SinkFinPrediction } from './sink-fin-prediction.js';
 export { sinkSolveReport, type SinkSolveFin, type SinkSolveReport, type SinkSolveSource } from './sink-solve.js';
 export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
