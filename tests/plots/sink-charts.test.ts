@@ -30,7 +30,7 @@ const sink = {
     array: { kind: 'plates', count: 4, pitch: 0.01 },
     hPlate: 30,
     h: { kind: 'uniform', h: 40 },
-    tip: { kind: 'convective' },
+    tip: { kind: 'convective', h: null },
     sources: [
       { name: 'chip', centre: [0.013, 0.02], size: [0.01, 0.01], power: 12, contactResistance: 2e-5 },
       { name: 'driver', centre: [0.03, 0.012], size: [0.006, 0.008], power: 4 },
