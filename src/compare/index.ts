@@ -27,4 +27,5 @@ export { formatSinkSolve } from './format-sink-solve.js';
 export { sinkFinPrediction, type SinkFinPrediction } from './sink-fin-prediction.js';
 export { sinkSolveReport, type SinkSolveFin, type SinkSolveReport, type SinkSolveSource } from './sink-solve.js';
 export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
+export { sheetReductionRow, SHEET_DRIFT_BUDGET } from './sink-sheet-row.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';

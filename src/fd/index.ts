@@ -55,7 +55,7 @@ export type { FinHeatRates1D } from './one-d/heat-rate.js';
 export { finHeatRates, finEffectiveness } from './one-d/heat-rate.js';
 export type { Fin1DOptions } from './one-d/linear-solve.js';
 export { solveOnMesh1D } from './one-d/linear-solve.js';
-export { studySink } from './three-d/study-sink.js';
+export { studySink, sinkStudyUnknowns } from './three-d/study-sink.js';
 export type { SinkStudyOptions } from './three-d/study-sink.js';
 export { sinkModelApplies } from './three-d/sink-problem.js';
 export { sheetReductionDrift } from './three-d/sheet-drift.js';

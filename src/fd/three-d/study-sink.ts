@@ -55,6 +55,20 @@ export function studySink(c: HeatSinkCase, options: SinkStudyOptions = {}): Sink
   return sinkStudyFrom(problem, results, sizes, representation);
 }
 
+/** Unknowns of the finest grid a study with these options would solve (nothing is allocated). */
+export function sinkStudyUnknowns(c: HeatSinkCase, options: SinkStudyOptions = {}): number {
+  const problem = sinkProblem(c);
+  const grids = options.grids ?? DEFAULT_GRIDS;
+  const cellSize = options.cellSize ?? Math.min(c.plate.width, c.plate.length) / CELLS_PER_SIDE;
+  const finest = buildSinkGrid(problem.layout, {
+    cellSize,
+    plateLayers: options.plateLayers ?? PLATE_LAYERS,
+    finLayers: options.finLayers ?? FIN_LAYERS,
+    refine: 2 ** (grids - 1),
+  });
+  return sinkUnknowns(finest, options.finRepresentation ?? 'sheet', problem.layout.finKind);
+}
+
 /** The SinkStudy of grid results given finest first, with their representative cell sizes. */
 export function sinkStudyFrom(problem: SinkProblem, results: SinkGridResult[], sizes: number[], representation: FinRepresentation): SinkStudy {
   const fine = results[0];
