@@ -28,7 +28,7 @@ export { gridSolversNow } from './study/grid-solvers-now.js';
 export type { RefinementStudy } from './study/refinement.js';
 export { richardsonGci, fitObservedOrder } from './study/refinement.js';
 export type { NewtonReport } from './newton/newton-report.js';
-export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView, SinkGridSpec } from './three-d/sink-study-types.js';
+export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView, SinkFinProfiles, SinkGridSpec } from './three-d/sink-study-types.js';
 export { solveSinkOnGrid, type SinkGridSolution } from './three-d/sink-grid-solve.js';
 
 export type { Fin1DResult } from './one-d/linear-solve.js';
@@ -56,7 +56,7 @@ export type { FinHeatRates1D } from './one-d/heat-rate.js';
 export { finHeatRates, finEffectiveness } from './one-d/heat-rate.js';
 export type { Fin1DOptions } from './one-d/linear-solve.js';
 export { solveOnMesh1D } from './one-d/linear-solve.js';
-export { studySink } from './three-d/study-sink.js';
+export { studySink, sinkStudyUnknowns } from './three-d/study-sink.js';
 export type { SinkStudyOptions } from './three-d/study-sink.js';
 export { sinkModelApplies } from './three-d/sink-problem.js';
 export { sheetReductionDrift } from './three-d/sheet-drift.js';

@@ -1,113 +1,137 @@
 /**
- * Horizontal bar charts (tornado style): one bar per labelled category from 0 to its value, largest |value|
- * at the top, positive to the right of a zero line and negative to the left, a note beside each bar's end.
- * Plain data in, SVG text out; the module knows nothing about fins beyond the labels it is given.
+ * Bar chart: one bar per category (e.g. heat per fin, fins numbered), a value axis from 0, optional horizontal
+ * reference lines (e.g. a shortcut's value for every bar) with a label each, a title and a subtitle.
+ * Categories are labelled under their bars; when there are more than fit, every k-th label is printed (the
+ * first and the last always).
  */
-import { drawAxes, drawGrid, xAxisMargin, yAxisMargin } from './axes.js';
-import { drawHeader } from './layout.js';
-import { makeAxis, project, type Axis } from './scales.js';
-import { okabeItoColours } from './series-styles.js';
-import { el, svgDocument, textEl } from './svg.js';
-import { capHeight, textWidth } from './text-metrics.js';
-import { defaultHeight, defaultWidth, fontSize, gap, ink, stroke } from './theme.js';
 
-export interface Bar {
-  label: string;
+import { el, fmt, svgDocument, textEl } from './svg.js';
+import { defaultHeight, defaultWidth, fontSize, gap, ink, stroke } from './theme.js';
+import { makeAxis, project, type Axis, type Scale } from './scales.js';
+import { drawAxes, drawGrid, xAxisMargin, yAxisMargin } from './axes.js';
+import { drawHeader, type Rect } from './layout.js';
+import { dashArray, okabeItoColours } from './series-styles.js';
+import { capHeight, textWidth } from './text-metrics.js';
+
+export interface BarReferenceLine {
   value: number;
-  /** Text beside the bar's end, e.g. "+0.83 (h 25 % -> +-21 %)". */
-  note?: string;
-  /** Drawn in the accent colour (e.g. the inputs with a stated uncertainty). */
-  highlight?: boolean;
+  label: string;
 }
 
 export interface BarChartSpec {
   title: string;
   subtitle?: string | readonly string[];
-  /** Axis title of the values, with its unit. */
   xLabel: string;
-  bars: readonly Bar[];
-  /** Legend words of the two colours, e.g. { plain: 'no stated uncertainty', highlight: 'stated uncertainty' }. */
-  legend?: { plain: string; highlight: string };
+  yLabel: string;
+  /** One label per bar, in order. */
+  categories: readonly string[];
+  values: ArrayLike<number>;
+  /** Bars to draw in the highlight colour (e.g. the hottest and the coolest fin). */
+  highlight?: readonly number[];
+  lines?: readonly BarReferenceLine[];
   width?: number;
   height?: number;
 }
 
-const PLAIN = okabeItoColours[1] ?? '#0072B2';
-const ACCENT = okabeItoColours[2] ?? '#D55E00';
+export interface BarChartResult {
+  svg: string;
+  plot: Rect;
+  y: Scale;
+  /** Screen rectangle of each bar, in the order of the categories. */
+  bars: Rect[];
+  /** The categories whose labels were printed. */
+  labelled: number[];
+}
 
-/** The chart as SVG text (bars sorted by |value|, largest on top). */
-export function barChart(spec: BarChartSpec): { svg: string } {
+const BAR_FILL = '#56B4E9';
+const HIGHLIGHT_FILL = '#E69F00';
+
+export function barChart(spec: BarChartSpec): BarChartResult {
+  const n = spec.categories.length;
+  if (n === 0 || spec.values.length !== n)
+    throw new RangeError(`barChart: ${n} categories and ${spec.values.length} values; need the same number, at least 1`);
   const width = spec.width ?? defaultWidth;
   const height = spec.height ?? defaultHeight;
   const header = drawHeader(spec.title, spec.subtitle, width);
-  const bars = [...spec.bars].sort((a, b) => Math.abs(b.value) - Math.abs(a.value));
-  const n = Math.max(1, bars.length);
-  const legendHeight = spec.legend ? fontSize.legend + 2 * gap.legendRow : 0;
-  const top = header.bottom + legendHeight;
+  const values = Array.from({ length: n }, (_, k) => spec.values[k] as number);
+  const lineValues = (spec.lines ?? []).map((l) => l.value);
+  const finite = [...values, ...lineValues].filter(Number.isFinite);
+  const high = Math.max(0, ...finite);
+  const low = Math.min(0, ...finite);
+  const top = header.bottom + 6;
   const bottom = height - gap.outer - xAxisMargin(true, true);
-  // Categories: bar k at y = n - 1 - k (largest at the top).
-  const yAxis: Axis = {
-    scale: { kind: 'linear', domain: [-0.5, n - 0.5], range: [bottom, top] },
-    ticks: bars.map((_, k) => n - 1 - k),
-    labels: bars.map((b) => b.label),
-    minorTicks: [],
-  };
-  const left = gap.outer + yAxisMargin(yAxis, false);
-  const right = width - gap.outer - 12;
-  // Room for the notes: the axis reaches past the longest bar by the widest note.
-  const values = bars.map((b) => b.value);
-  const low = Math.min(0, ...values);
-  const high = Math.max(0, ...values);
-  const span = high - low || 1;
-  const widestNote = Math.max(0, ...bars.map((b) => textWidth(b.note ?? '', fontSize.annotation)));
-  const share = Math.min(0.6, (widestNote + 16) / Math.max(1, right - left));
-  const pad = (span * share) / (1 - share);
-  const xAxis = makeAxis(
-    'linear',
-    low < 0 ? low - pad : 0,
-    high > 0 ? high + pad : 0,
-    left,
-    right,
-    Math.max(3, Math.round((right - left) / 110)),
-    'loose',
-  );
-  const plot = { x: left, y: top, width: right - left, height: bottom - top };
-  const body: string[] = [...header.elements];
-  if (spec.legend) {
-    const y = header.bottom + fontSize.legend;
-    let x = left;
-    for (const [colour, words] of [
-      [ACCENT, spec.legend.highlight],
-      [PLAIN, spec.legend.plain],
-    ] as const) {
-      body.push(el('rect', { x, y: y - fontSize.legend + 3, width: 18, height: fontSize.legend - 2, fill: colour }));
-      body.push(textEl(words, { x: x + 24, y, 'font-size': fontSize.legend, fill: ink.text }));
-      x += 24 + textWidth(words, fontSize.legend) + 30;
-    }
-  }
-  body.push(drawGrid(plot, xAxis, { ...yAxis, ticks: [] }));
-  const zero = project(xAxis.scale, 0);
-  const slot = plot.height / n;
-  bars.forEach((b, k) => {
-    const yc = project(yAxis.scale, n - 1 - k);
-    const end = project(xAxis.scale, b.value);
-    const x0 = Math.min(zero, end);
-    const h = Math.max(4, slot * 0.62);
-    body.push(el('rect', { x: x0, y: yc - h / 2, width: Math.max(1, Math.abs(end - zero)), height: h, fill: b.highlight ? ACCENT : PLAIN }));
-    if (b.note) {
-      const after = b.value >= 0;
-      body.push(
-        textEl(b.note, {
-          x: end + (after ? 8 : -8),
-          y: yc + capHeight(fontSize.annotation) / 2,
-          'font-size': fontSize.annotation,
-          'text-anchor': after ? 'start' : 'end',
-          fill: ink.text,
-        }),
-      );
-    }
+  const yAxis: Axis = makeAxis('linear', low, high > low ? high : low + 1, bottom, top, Math.max(3, Math.round((bottom - top) / 70)), 'loose');
+  const left = gap.outer + yAxisMargin(yAxis, true);
+  const right = width - gap.outer;
+  const plot: Rect = { x: left, y: top, width: right - left, height: bottom - top };
+  const slot = plot.width / n;
+  const barWidth = Math.max(1, 0.7 * slot);
+  const zero = project(yAxis.scale, 0);
+  const highlighted = new Set(spec.highlight ?? []);
+  const bars: Rect[] = values.map((v, k) => {
+    const y = Number.isFinite(v) ? project(yAxis.scale, v) : zero;
+    return { x: plot.x + (k + 0.5) * slot - barWidth / 2, y: Math.min(y, zero), width: barWidth, height: Math.abs(zero - y) };
   });
-  body.push(el('path', { d: `M${zero} ${plot.y}V${plot.y + plot.height}`, stroke: ink.axis, 'stroke-width': stroke.axis, fill: 'none' }));
-  body.push(...drawAxes(plot, xAxis, yAxis, { xLabel: spec.xLabel, grid: true, xTickLabels: true }));
-  return { svg: svgDocument(width, height, body) };
+
+  // Labels under the bars: every k-th so that they do not touch, always the first and the last.
+  const widest = Math.max(...spec.categories.map((c) => textWidth(c, fontSize.tick)));
+  const every = Math.max(1, Math.ceil((widest + 8) / slot));
+  const labelled = spec.categories.map((_, k) => k).filter((k) => k % every === 0 || k === n - 1);
+  if (labelled.length >= 2 && (labelled[labelled.length - 1] as number) - (labelled[labelled.length - 2] as number) < every)
+    labelled.splice(labelled.length - 2, 1);
+
+  const body: string[] = [...header.elements];
+  const xAxis: Axis = { scale: { kind: 'linear', domain: [0, n], range: [plot.x, plot.x + plot.width] }, ticks: [], labels: [], minorTicks: [] };
+  body.push(drawGrid(plot, xAxis, yAxis));
+  body.push(
+    el(
+      'g',
+      { class: 'bars' },
+      bars.map((b, k) =>
+        el('rect', {
+          x: b.x,
+          y: b.y,
+          width: b.width,
+          height: b.height,
+          fill: highlighted.has(k) ? HIGHLIGHT_FILL : BAR_FILL,
+          stroke: ink.frame,
+          'stroke-width': 1,
+        }),
+      ),
+    ),
+  );
+  const tickY = plot.y + plot.height + gap.tickLength + gap.tickLabel + capHeight(fontSize.tick);
+  for (const k of labelled) {
+    const x = plot.x + (k + 0.5) * slot;
+    body.push(el('path', { d: `M${fmt(x)} ${fmt(plot.y + plot.height)}v${gap.tickLength}`, stroke: ink.axis, 'stroke-width': stroke.axis }));
+    body.push(textEl(spec.categories[k] ?? '', { x, y: tickY, 'font-size': fontSize.tick, 'text-anchor': 'middle', fill: ink.text }));
+  }
+  (spec.lines ?? []).forEach((line, k) => {
+    if (!Number.isFinite(line.value)) return;
+    const y = project(yAxis.scale, line.value);
+    const colour = okabeItoColours[(k + 2) % okabeItoColours.length] ?? ink.text;
+    body.push(
+      el('path', {
+        d: `M${fmt(plot.x)} ${fmt(y)}H${fmt(plot.x + plot.width)}`,
+        stroke: colour,
+        'stroke-width': stroke.series,
+        'stroke-dasharray': dashArray('dashed'),
+        fill: 'none',
+      }),
+    );
+    body.push(
+      textEl(line.label, {
+        x: plot.x + plot.width - 8,
+        y: y - 8,
+        'font-size': fontSize.annotation,
+        'text-anchor': 'end',
+        fill: colour,
+        stroke: ink.halo,
+        'stroke-width': 4,
+        'paint-order': 'stroke',
+      }),
+    );
+  });
+  body.push(...drawAxes(plot, { ...xAxis, ticks: [] }, yAxis, { xLabel: spec.xLabel, yLabel: spec.yLabel, grid: false, xTickLabels: true }));
+  return { svg: svgDocument(width, height, body), plot, y: yAxis.scale, bars, labelled };
 }

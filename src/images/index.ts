@@ -15,7 +15,9 @@ export { fieldChart, gridLayout } from './field-chart.js';
 export type { FieldChartSpec, FieldChartResult, StructuredGrid, EdgeLabels } from './field-chart.js';
 
 export { barChart } from './bar-chart.js';
-export type { Bar, BarChartSpec } from './bar-chart.js';
+export type { BarChartSpec, BarChartResult, BarReferenceLine } from './bar-chart.js';
+export { tornadoChart } from './tornado-chart.js';
+export type { TornadoBar, TornadoChartSpec } from './tornado-chart.js';
 
 export { mapChart } from './map-chart.js';
 export type { MapChartSpec, MapChartResult, MapLevel, MapPoint } from './map-chart.js';

@@ -1,6 +1,6 @@
 /** One chart of a kind as SVG text, from the sources it needs (sources.ts). */
 import type { FinStudy2D } from '../fd/index.js';
-import { barChart, fieldChart, lineChart } from '../images/index.js';
+import { fieldChart, lineChart, tornadoChart } from '../images/index.js';
 import { finSensitivityInput, sensitivityChartSpec } from './sensitivity-chart.js';
 import { fluxChartSpec } from './flux-chart.js';
 import { heatmapChartSpec } from './heatmap-chart.js';
@@ -23,7 +23,7 @@ export function plotSvg(kind: PlotKind, sources: PlotSources, size: ChartSize, r
       return lineChart(fluxChartSpec(need(sources.check, kind), size)).svg;
     case 'sensitivity': {
       const input = finSensitivityInput(need(sources.check, kind).report);
-      return barChart(sensitivityChartSpec(need(input, kind), size)).svg;
+      return tornadoChart(sensitivityChartSpec(need(input, kind), size)).svg;
     }
     case 'heatmap':
       return fieldChart(heatmapChartSpec(sources.case, need(sources.field ?? sources.check?.twoD ?? null, kind), size, rasterScale)).svg;

@@ -4,7 +4,7 @@
  * a stated uncertainty in the accent colour, with the share of the band each gives (|S| u).
  */
 import { CHART_CAUTION, type CheckReport } from '../compare/index.js';
-import type { BarChartSpec } from '../images/index.js';
+import type { TornadoChartSpec } from '../images/index.js';
 import type { ChartSize } from './profile-chart.js';
 import { sig } from './labels.js';
 
@@ -23,7 +23,7 @@ export interface SensitivityChartInput {
 
 const pct = (x: number): string => `${Number((100 * x).toPrecision(2))} %`;
 
-export function sensitivityChartSpec(input: SensitivityChartInput, size: ChartSize): BarChartSpec {
+export function sensitivityChartSpec(input: SensitivityChartInput, size: ChartSize): TornadoChartSpec {
   const band = input.band === null ? '' : `; band +/-${pct(input.band.relative)} (${input.band.method}, one standard uncertainty)`;
   return {
     title: `Sensitivities of the ${input.quantity}: ${input.caseName}`,

@@ -3,7 +3,7 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { barChart } from '../../src/images/index.js';
+import { tornadoChart } from '../../src/images/index.js';
 import { cli } from '../cli/run.js';
 import { decodePng, svgTexts, wellFormednessError } from '../images/helpers.js';
 
@@ -49,7 +49,7 @@ describe('tornado chart', () => {
   }, 60_000);
 
   it('draws the largest |value| on top, negative bars left of zero, well-formed SVG', () => {
-    const { svg } = barChart({
+    const { svg } = tornadoChart({
       title: 't',
       xLabel: 'x',
       bars: [
