@@ -5,6 +5,10 @@
 import type { Command } from 'commander';
 import { z } from 'zod';
 import { parseQuantity } from '../../src/case/index.js';
+import { chartBytes, lineChart } from '../../src/images/index.js';
+import { optimizeChartSpec } from '../../src/plots/index.js';
+import { writeFilesAtomically } from '../../src/report/index.js';
+import { parseOutFile } from './plot.js';
 import { optimizeFin, type Keep, type Objective, type OptimizeResult } from '../../src/design/index.js';
 import { UsageError } from '../../src/errors.js';
 import { readCaseInput } from '../case-input.js';
@@ -24,6 +28,7 @@ interface OptimizeCliOptions {
   reference: string;
   tolerance: string;
   json?: boolean;
+  out?: string;
 }
 
 /** "12 W", "12W", "0.5 kW", "12": a heat rate in W. */
@@ -119,6 +124,7 @@ export function registerOptimize(program: Command, io: Io): Command {
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--tolerance <t>', 'tolerance of the reference studies (resolved to a tenth of it), e.g. 2%', '2%')
     .option('--json', 'print one JSON document')
+    .option('--out <file>', 'also draw the heat rate against the varied key along the constraint, both curves and both optima: .png or .svg')
     .addHelpText(
       'after',
       `
@@ -126,7 +132,8 @@ Examples:
   fincheck optimize demo/inverter-plate-fin.yaml --vary fin.thickness --keep profile-area --for max-heat
   fincheck optimize demo/led-pin-fin.yaml --vary fin.diameter --keep volume --bounds fin.diameter=1mm:8mm
   fincheck optimize my-fin.yaml --vary fin.length --for required --heat 12W
-  fincheck optimize my-fin.yaml --vary fin.thickness,fin.length --keep none --for min-material --heat 12W`,
+  fincheck optimize my-fin.yaml --vary fin.thickness,fin.length --keep none --for min-material --heat 12W
+  fincheck optimize demo/inverter-plate-fin.yaml --vary fin.thickness --out optimum.png`,
     )
     .action(async (file: string, o: OptimizeCliOptions) => {
       if (o.vary === undefined || o.vary.trim() === '') throw new UsageError('--vary: a dimension to vary is required, e.g. --vary fin.thickness');
@@ -143,6 +150,7 @@ Examples:
         throw new UsageError('--heat: --for max-heat takes no required heat rate (use --for required or min-material)');
       const objective: Objective = goal === 'max-heat' ? { kind: 'max-heat' } : { kind: goal, heat_W: parseHeat(o.heat as string) };
       const bounds = parseBounds(o.bounds);
+      const out = o.out === undefined ? null : parseOutFile(o.out);
       const { text, fileName } = await readCaseInput(file, io);
       const result = await optimizeFin({
         caseText: text,
@@ -153,12 +161,43 @@ Examples:
         bounds,
         reference,
         tolerance,
-        labels: { vary: '--vary', keep: '--keep', bounds: '--bounds', heat: '--heat' },
+        labels: { vary: '--vary', keep: '--keep', bounds: '--bounds', heat: '--heat', out: '--out' },
+        curve: out !== null,
       });
+      if (out !== null && result.curve !== undefined) {
+        const c = result.curve;
+        const at = (p: { values: Record<string, number> }): number => p.values[c.key] ?? Number.NaN;
+        const svg = lineChart(
+          optimizeChartSpec(
+            {
+              caseName: result.case,
+              objective: result.objective,
+              keep: result.keep,
+              key: c.key,
+              x_m: c.x_m,
+              reference_W: c.reference_W,
+              shortcut_W: c.shortcut_W,
+              curveNote: c.note,
+              reference: { x_m: at(result.reference), heatRate_W: result.reference.heatRate_W, model: result.reference.model },
+              shortcut: {
+                x_m: at(result.shortcut),
+                heatRate_W: result.shortcut.heatRate_W,
+                referenceHeatRate_W: result.shortcutAtReference_W,
+                method: result.shortcut.method,
+              },
+              bounds_m: result.bounds[c.key] ?? [c.x_m[0] ?? 0, c.x_m[c.x_m.length - 1] ?? 1],
+              requiredHeat_W: result.requiredHeat_W,
+            },
+            { width: 1200, height: 750 },
+          ),
+        ).svg;
+        writeFilesAtomically([{ path: out.path, bytes: await chartBytes(svg, out.format, { dpi: 96 }) }]);
+      }
       if (o.json) {
-        io.out(`${JSON.stringify(result, null, 2)}\n`);
+        io.out(`${JSON.stringify(out === null ? result : { ...result, chartFile: out.path }, null, 2)}\n`);
         return;
       }
       io.out(formatOptimize(result));
+      if (out !== null) io.out(`wrote ${out.path}: heat rate against ${result.vary[0] ?? ''} along the constraint, both curves and both optima\n`);
     });
 }

@@ -1,4 +1,4 @@
 /** The design layer's public API (design-questions.md): optimum dimensions of a fin against the reference. */
-export { optimizeFin, type Objective, type OptimizeRequest, type OptimizeResult, type OptimumPoint } from './optimize-fin.js';
+export { optimizeFin, type Objective, type OptimizeCurve, type OptimizeRequest, type OptimizeResult, type OptimumPoint } from './optimize-fin.js';
 export { amountOf, finVolume, profileArea, type Keep } from './fin-amount.js';
 export { brentMinimize, type MinimizeOptions, type MinimizeResult } from './brent-minimize.js';

@@ -44,7 +44,22 @@ export interface OptimizeRequest {
   reference: 'auto' | '1d' | '2d';
   tolerance: number;
   /** How the caller names its inputs in messages (the command line: its options). */
-  labels: { vary: string; keep: string; bounds: string; heat: string };
+  labels: { vary: string; keep: string; bounds: string; heat: string; out?: string };
+  /** Also compute the heat rate along the constraint over the bounds, for a chart (one varied key). */
+  curve?: boolean;
+}
+
+/** Heat rate against the varied dimension along the constraint (the chart of `optimize --out`). */
+export interface OptimizeCurve {
+  key: string;
+  /** Values of the varied key, m (a log grid over the bounds). */
+  x_m: number[];
+  /** The reference's heat rate (fd-1d: one resolved study a value), W; NaN where the case is invalid. */
+  reference_W: number[];
+  /** The tanh(mLc)/(mLc) shortcut's, W. */
+  shortcut_W: number[];
+  model: 'fd-1d';
+  note: string;
 }
 
 export interface OptimumPoint {
@@ -72,7 +87,12 @@ export interface OptimizeResult {
   loss: number;
   notes: string[];
   cautions: string[];
+  /** Only when asked (request.curve). */
+  curve?: OptimizeCurve;
 }
+
+/** Points of the chart's curves: a log grid over the bounds (common practice, no source: enough to show the hump). */
+const CURVE_POINTS = 25;
 
 /** Which key holds the amount for a profile: the length unless it is varied, then the section size. */
 const SIZE_KEYS: Record<string, string> = {
@@ -102,6 +122,8 @@ export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeRes
       `${labels.vary}: two keys are taken for min-material only (the least material for a required heat); vary one key for ${request.objective.kind}`,
     );
   }
+  if (request.curve === true && request.vary.length !== 1)
+    throw new UsageError(`${labels.out ?? 'curve'}: the chart shows one varied key; vary one key to draw it`);
   const vary = request.vary.map((k) => formatKeyPath(parseKeyPath(k)));
   for (const key of vary) {
     if (!VARIABLE.test(key))
@@ -311,6 +333,25 @@ export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeRes
     if (r === null) throw new UsageError(`${labels.vary}: the optimum (${fmtMm(x)}) makes the case invalid; narrow ${labels.bounds}`);
     return r;
   };
+  let curve: OptimizeCurve | undefined;
+  if (request.curve === true) {
+    const x_m = Array.from({ length: CURVE_POINTS }, (_, i) => lo * (hi / lo) ** (i / (CURVE_POINTS - 1)));
+    const reference_W: number[] = [];
+    const shortcut_W: number[] = [];
+    for (const x of x_m) {
+      reference_W.push(await referenceHeat(x, '1d'));
+      shortcut_W.push(await shortcutHeatAt(x));
+    }
+    const along = dependent === null ? '' : `, ${dependent} solved to keep the ${keep}`;
+    curve = {
+      key,
+      x_m,
+      reference_W,
+      shortcut_W,
+      model: 'fd-1d',
+      note: `${CURVE_POINTS} values of ${key} on a log grid over the bounds${along}; the curves are fd-1d (a resolved study each) and the tanh(mLc)/(mLc) shortcut`,
+    };
+  }
   const refPoint = await pointAt(refX, secondValues?.reference ?? null, request.reference);
   const shortPoint = await pointAt(shortX, secondValues?.shortcut ?? null, request.reference);
   const shortOwn = await pointAt(shortX, secondValues?.shortcut ?? null, '1d');
@@ -368,5 +409,6 @@ export async function optimizeFin(request: OptimizeRequest): Promise<OptimizeRes
     loss,
     notes,
     cautions: [...refPoint.e.report.cautions],
+    ...(curve === undefined ? {} : { curve }),
   };
 }

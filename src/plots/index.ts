@@ -13,3 +13,4 @@ export { sinkPlotAvailability, sinkPlotSvg } from './sink-draw.js';
 export { sinkPlateChart, sinkPlateChartSpec } from './sink-plate-chart.js';
 export { sinkFinHeatChartSpec } from './sink-fin-heat-chart.js';
 export { sinkFinProfileChartSpec } from './sink-fin-profile-chart.js';
+export { optimizeChartSpec, type OptimizeChartInput } from './optimize-chart.js';
