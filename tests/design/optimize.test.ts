@@ -77,6 +77,40 @@ describe('optimum fins at a given profile area (h = 40, k = 180, A_p = 6e-5 m^2,
     expect(Math.abs(r.reference.heatRate_W / (3.673862171 * 0.1 * 60) - 1)).toBeLessThan(1e-6);
   });
 
+  // Optimum mL of the other published profiles at a fixed amount of material (1-D, adiabatic tip), m from the base
+  // thickness (straight fins, m^2 = 2h/(k t_b)) or the diameter (pin, m^2 = 4h/(kD)): tests/reference/optimum.py
+  // (shared references sheet, section 5): concave parabolic sqrt(2) exactly (stationarity gives 1 + 4z^2 =
+  // (1 + z^2)^2; Schmidt's least-material profile, Jany & Bejan 1988, IJHMT 31(8), 1635), convex parabolic
+  // 1.35395663795, pin at fixed volume 0.919296357325 (sinh 2z = (10/3) z). Brent stops at 1e-4 relative in the
+  // varied size and mL goes as its -3/2 power along the constraint: 3e-4 relative holds.
+  it.each([
+    ['parabolic-concave', 'profile: parabolic-concave, length: 60 mm, baseThickness: 2 mm', 'fin.baseThickness', 'profile-area', Math.SQRT2],
+    ['parabolic-convex', 'profile: parabolic-convex, length: 60 mm, baseThickness: 2 mm', 'fin.baseThickness', 'profile-area', 1.35395663795],
+  ] as const)(
+    '%s: the fd-1d optimum has the published mL',
+    async (_name, profile, key, keep, mL) => {
+      const r = await optimizeFin(request(fin(profile), { vary: [key], keep }));
+      const t = r.reference.values[key] as number;
+      const L = r.reference.values['fin.length'] as number;
+      expect(Math.abs((Math.sqrt((2 * 40) / (180 * t)) * L) / mL - 1)).toBeLessThan(3e-4);
+    },
+    60_000,
+  );
+
+  it('pin at a given volume: the fd-1d optimum has mL = 0.919296357325', async () => {
+    const text = `name: optimum pin
+fin: { profile: pin, length: 40 mm, diameter: 3 mm }
+material: { k: 180 W/(m*K) }
+convection: { ambient: 25 degC, h: 40 W/(m^2*K), tip: adiabatic }
+base: { temperature: 85 degC }
+`;
+    const r = await optimizeFin(request(text, { vary: ['fin.diameter'], keep: 'volume' }));
+    const D = r.reference.values['fin.diameter'] as number;
+    const L = r.reference.values['fin.length'] as number;
+    expect(Math.abs((Math.sqrt((4 * 40) / (180 * D)) * L) / 0.919296357325 - 1)).toBeLessThan(3e-4);
+    expect(r.shortcut.method).toMatch(/pin/i);
+  }, 60_000);
+
   it('the reference optimum is stationary: 1 % either side gives less heat', async () => {
     const text = fin('profile: rectangular, length: 40 mm, thickness: 2 mm');
     const r = await optimizeFin(request(text.replace('tip: adiabatic', 'tip: convective'), {}));
