@@ -12,12 +12,19 @@
  *   what the heat rate is proportional to, and a log-derivative of a temperature in degC would mean nothing.
  * - `fin.length` moves the points of an h table with it (h given as a function of x / L), so that a table
  *   ending at the tip still ends there.
- * - `material.k` scales a conductivity table as a whole; each table point is also an input.
+ * - `material.k` scales a conductivity table as a whole; each table point is also an input (tables of at most
+ *   MAX_TABLE_POINT_INPUTS points; the same for an h table).
  * Tabulated profiles: only the width is an input (the points are a shape, not one dimension).
  * Units: SI (m, W/(m*K), W/(m^2*K), m^2*K/W); `nominal` of base.temperature is the rise in K.
  */
 import type { Case, HDistribution, Profile } from './types.js';
 import type { QuantityKind } from './units.js';
+
+/**
+ * A table's points are inputs of their own only up to this many points (each costs two re-solves in check's
+ * sensitivities; a long measured table is one input as a whole). Common practice, no source.
+ */
+export const MAX_TABLE_POINT_INPUTS = 8;
 
 export interface NumericInput<C = Case> {
   /** Key path as written in a case file, e.g. `fin.thickness`. */
@@ -100,7 +107,7 @@ function convectionInputs(c: Case): NumericInput[] {
   if (h.kind === 'linear') {
     out.push(make('convection.h.base', 'heatTransferCoefficient', h.base, (f) => withH(c, { ...h, base: h.base * f })));
     out.push(make('convection.h.tip', 'heatTransferCoefficient', h.tip, (f) => withH(c, { ...h, tip: h.tip * f })));
-  } else if (h.kind === 'points') {
+  } else if (h.kind === 'points' && h.h.length <= MAX_TABLE_POINT_INPUTS) {
     for (let i = 0; i < h.h.length; i++) {
       const value = h.h[i] as number;
       if (value === 0) continue;
@@ -133,7 +140,7 @@ function materialInputs(c: Case): NumericInput[] {
   const withK = (next: Case['material']['k']): Case => ({ ...c, material: { ...c.material, k: next } });
   if (k.kind === 'constant') return [make('material.k', 'conductivity', k.k, (f) => withK({ kind: 'constant', k: k.k * f }))];
   const out = [make('material.k', 'conductivity', Number.NaN, (f) => withK({ kind: 'table', T_degC: k.T_degC, k: k.k.map((v) => v * f) }))];
-  for (let i = 0; i < k.k.length; i++) {
+  for (let i = 0; i < (k.k.length <= MAX_TABLE_POINT_INPUTS ? k.k.length : 0); i++) {
     const scaled = (f: number): Case => withK({ kind: 'table', T_degC: k.T_degC, k: k.k.map((v, j) => (j === i ? v * f : v)) });
     out.push(make(`material.k.points[${i}][1]`, 'conductivity', k.k[i] as number, scaled));
   }

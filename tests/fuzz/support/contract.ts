@@ -123,6 +123,18 @@ export function checkNullRules(facts: CaseFacts): NullRule[] {
         'a numerical model has no formula efficiency, fin parameter or formula length (README: formulaEfficiency is the shortcut\u2019s own formula value)',
     },
   ];
+  rules.push(
+    { path: /^uncertainty\.sample$/, reason: 'README "JSON output": uncertainty.sample is null when no Latin-hypercube sample was drawn (issue 12)' },
+    {
+      path: /^models\[i\]\.driftOverUncertainty$/,
+      reason: 'README "JSON output": driftOverUncertainty is null when the uncertainty band is 0 (issue 12)',
+    },
+    {
+      path: /^sensitivities\[i\]\.value$/,
+      when: (s) => s['key'] === 'convection.h' || s['key'] === 'material.k',
+      reason: 'README "JSON output": an h or k given as a table has no single nominal value (issue 12)',
+    },
+  );
   rules.push({
     path: /^reference\.observedOrder$/,
     when: (ref) => typeof ref['discretizationError'] === 'number',
