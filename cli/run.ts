@@ -9,9 +9,13 @@ import { buildProgram } from './program.js';
 
 export async function runCli(argv: string[], io: Io): Promise<number> {
   let exitCode = 0;
-  const program: Command = buildProgram(io, (code) => {
-    exitCode = Math.max(exitCode, code);
-  });
+  const program: Command = await buildProgram(
+    io,
+    (code) => {
+      exitCode = Math.max(exitCode, code);
+    },
+    argv,
+  );
   let command = '';
   program.hook('preAction', (_, action) => {
     command = action.name();

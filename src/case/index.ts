@@ -1,6 +1,6 @@
 /** The case layer's public API: reading, units, validation and the built-in materials. */
 export { bareLengthUnit, loadCase, maxCaseBytes, parseCaseObject, parseCaseText, readCaseFile, readCaseStream, type ParseOptions } from './parse.js';
-export { caseJsonSchema, caseSchema, caseSchemaFor, profileNames, type ValidatedCase } from './schema.js';
+export { caseJsonSchema, caseSchemaFor, profileNames, type ValidatedCase } from './schema.js';
 export { dimensionWarning, dimensionWarnings } from './plausibility.js';
 export { clip, cleanFreeText, quoted } from './clip-text.js';
 export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './key-path.js';
@@ -24,7 +24,7 @@ export type * from './types.js';
 export type * from './heat-sink-types.js';
 export { isHeatSinkObject } from './heat-sink-detect.js';
 export { loadAnyCase, parseAnyCaseObject, parseAnyCaseText, parseHeatSinkObject, parseHeatSinkText, type AnyCase } from './heat-sink-parse.js';
-export { heatSinkJsonSchema, heatSinkSchema, heatSinkSchemaFor, type ValidatedHeatSink } from './heat-sink-schema.js';
+export { heatSinkJsonSchema, heatSinkSchemaFor, type ValidatedHeatSink } from './heat-sink-schema.js';
 export {
   aboveAbsoluteZero,
   coefficientRange,

@@ -383,13 +383,12 @@ export function sharedSchemaFor(lengthUnit: LengthUnit): BuiltSchema['shared'] {
   return builtFor(lengthUnit).shared;
 }
 
-/** The schema of a case without `units` (bare lengths in m): its types, and what `fincheck schema` prints. */
-export const caseSchema = caseSchemaFor('m');
-
 /** The validated case file: SI numbers, temperatures degC, built-in materials resolved. */
-export type ValidatedCase = z.output<typeof caseSchema>;
+export type ValidatedCase = z.output<BuiltSchema['caseMapping']>;
 
 /** JSON Schema (draft 2020-12) of the case file, with the meaning and unit of every key. */
 export function caseJsonSchema(): Record<string, unknown> {
-  return z.toJSONSchema(caseSchema, { io: 'input' }) as Record<string, unknown>;
+  // The schema of a case without `units` (bare lengths in m). Schemas are built when first asked for (not at
+  // import: start-up), once per unit.
+  return z.toJSONSchema(caseSchemaFor('m'), { io: 'input' }) as Record<string, unknown>;
 }
