@@ -37,7 +37,8 @@ export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOpt
     throw new InputError(toInputIssues([{ path: ['array'], accepted }], raw, locate), options.file);
   }
   const lengthUnit = bareLengthUnit(raw);
-  const result = caseSchemaFor(lengthUnit).safeParse(raw);
+  // jitless: one case is parsed per run, and compiling zod's fast path (new Function) costs more than it saves.
+  const result = caseSchemaFor(lengthUnit).safeParse(raw, { jitless: true });
   const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
   if (pending.length > 0 || !result.success) {
     throw new InputError(sortByPosition(toInputIssues(pending, raw, locate)), options.file);
