@@ -89,7 +89,9 @@ function formatSolve2D(r: Solve2DReport, description: string[]): string {
   const err =
     r.discretizationError === null
       ? 'not estimated (single grid)'
-      : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
+      : r.heatRateFrom === 'extrapolated'
+        ? `${r.discretizationError.toExponential(1)} relative, of the Richardson-extrapolated value (finest grid ${r.finestGridHeatRate_W.toPrecision(6)} W, GCI ${(r.finestGridDiscretizationError ?? Number.NaN).toExponential(1)}${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`
+        : `${r.discretizationError.toExponential(1)} relative (GCI${r.observedOrder === null ? '' : `, observed order ${r.observedOrder.toFixed(2)}`})`;
   lines.push(`Model ${r.model}, ${r.grid.nx} x ${r.grid.ny} nodes (along x across)`);
   const edges = r.edgesHeatRate_W !== 0;
   lines.push(`  heat rate      ${r.heatRate_W.toPrecision(6)} W  (${edges ? 'whole fin, as check reports it; ' : ''}discretisation error ${err})`);

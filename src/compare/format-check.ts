@@ -12,6 +12,13 @@ const lpad = (s: string, n: number): string => (s.length >= n ? s : ' '.repeat(n
 
 const MARK: Record<Flag['severity'], string> = { error: 'x', warning: '!', info: 'i' };
 
+/** What the reference's error estimate is of: the extrapolated value (with the finest grid's GCI beside it) or the finest grid. */
+function errorBasis(ref: CheckReport['reference']): string {
+  return ref.heatRateFrom === 'extrapolated'
+    ? `(relative, of the extrapolated value; finest grid ${sig(ref.finestGridHeatRate_W)} W, GCI ${ref.finestGridDiscretizationError.toExponential(1)})`
+    : '(relative, GCI)';
+}
+
 export function formatCheck(c: Case, r: CheckReport): string {
   const out: string[] = [];
   out.push(`fincheck check: ${r.case}`);
@@ -23,7 +30,7 @@ export function formatCheck(c: Case, r: CheckReport): string {
     `Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`,
   );
   out.push(
-    `  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`,
+    `  estimated discretisation error ${ref.discretizationError.toExponential(1)} ${errorBasis(ref)}; energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`,
   );
   out.push(`  ${ref.note}`);
   out.push('');

@@ -33,7 +33,7 @@ export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView } from '
 export type { Fin1DResult } from './one-d/linear-solve.js';
 export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';
 export type { Fin2DLine, Fin2DResult } from './two-d/linear-solve.js';
-export type { Fin2DGridValue } from './two-d/linear-study.js';
+export type { Extrapolated2D, Fin2DGridValue } from './two-d/linear-study.js';
 export type { Fin2DFieldViews } from './two-d/field-views.js';
 export { fieldViews } from './two-d/field-views.js';
 export { resolveFinStudy1D } from './study/resolve-study1d.js';

@@ -55,7 +55,7 @@ function summary(r: CheckReport): Block[] {
   const worst = [...r.models].sort((a, b) => Math.abs(b.drift) - Math.abs(a.drift))[0];
   const tone: Tone = !ref.resolved ? 'warning' : counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
   const items = [
-    `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
+    `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} ${ref.heatRateFrom === 'extrapolated' ? `(relative, of the Richardson-extrapolated value; the finest grid's value ${sig(ref.finestGridHeatRate_W, 5)} W has GCI ${relativeError(ref.finestGridDiscretizationError)})` : '(relative, GCI)'}.`,
     ref.resolved
       ? `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`
       : `The reference is not resolved (estimated discretisation error above a tenth of the tolerance, ${relativeError(ref.resolution.target)}): no verdicts are given (${counts.unresolved} models unresolved).`,
