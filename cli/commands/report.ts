@@ -7,12 +7,12 @@
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { type Case, cleanFreeText } from '../../src/case/index.js';
-import type { CheckReport } from '../../src/compare/index.js';
+import { type Case, cleanFreeText, type HeatSinkCase } from '../../src/case/index.js';
+import type { CheckReport, SinkCheckReport } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
-import { makeReport, REPORT_FILES, reportDate, writeFilesAtomically, type OutputFile } from '../../src/report/index.js';
+import { makeReport, makeSinkReport, REPORT_FILES, reportDate, writeFilesAtomically, type OutputFile } from '../../src/report/index.js';
 import { VERSION } from '../../src/version.js';
-import { loadCaseInput } from '../case-input.js';
+import { loadAnyCaseInput } from '../case-input.js';
 import type { Io, SetExit } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
@@ -92,6 +92,51 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
   return { case: c, check: content.check.report, html, markdown, pdf, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
 }
 
+export interface SinkReportRequest extends Omit<ReportRequest, 'case' | 'reference'> {
+  case: HeatSinkCase;
+}
+
+export interface WrittenSinkReport {
+  case: HeatSinkCase;
+  check: SinkCheckReport;
+  html: string;
+  markdown: string;
+  pdf: string | null;
+  images: string[];
+  worstVerdict: 'ok' | 'marginal' | 'unsafe' | 'unresolved';
+}
+
+/** The report of a heat sink, computed and written into `outDir` (also what `fincheck demo` uses). */
+export async function writeSinkReport(request: SinkReportRequest): Promise<WrittenSinkReport> {
+  const c = request.case;
+  const content = await makeSinkReport(c, {
+    tolerance: request.tolerance,
+    dpi: request.dpi,
+    caseFile: request.caseFile,
+    version: VERSION,
+    date: request.date,
+    pdf: request.pdf === true,
+    ...(request.beforeWrite ? { checkpoint: request.beforeWrite } : {}),
+  });
+  const html = join(request.outDir, REPORT_FILES.html);
+  const markdown = join(request.outDir, REPORT_FILES.markdown);
+  const images = content.figures.map((f) => join(request.outDir, f.file));
+  const files: OutputFile[] = [
+    ...content.figures.map((f, k) => ({ path: images[k] as string, bytes: f.png })),
+    { path: markdown, bytes: content.markdown },
+    { path: html, bytes: content.html },
+  ];
+  const pdf = content.pdf === null ? null : join(request.outDir, REPORT_FILES.pdf);
+  if (pdf !== null && content.pdf !== null) files.push({ path: pdf, bytes: content.pdf });
+  request.beforeWrite?.();
+  writeFilesAtomically(files, [request.outDir]);
+  return { case: c, check: content.input.report, html, markdown, pdf, images, worstVerdict: worstOf(content.input.report.models.map((m) => m.verdict)) };
+}
+
+function worstOf(verdicts: readonly ('ok' | 'marginal' | 'unsafe' | 'unresolved')[]): 'ok' | 'marginal' | 'unsafe' | 'unresolved' {
+  return verdicts.includes('unresolved') ? 'unresolved' : verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
+}
+
 interface ReportCliOptions {
   out?: string;
   tolerance: string;
@@ -120,6 +165,7 @@ export function registerReport(program: Command, io: Io, setExit: SetExit): Comm
 Examples:
   fincheck report demo/inverter-plate-fin.yaml --out report/
   fincheck report demo/led-pin-fin.yaml --out report/ --pdf       # and report.pdf for the design note
+  fincheck report demo/motor-drive-sink.yaml --out sink-report/   # a heat sink: fd-3d, three sink charts
   fincheck report my-fin.yaml --out out/my-fin --tolerance 5% --dpi 200
   SOURCE_DATE_EPOCH=1735689600 fincheck report my-fin.yaml --out out/   # same input, same bytes`,
     )
@@ -129,22 +175,26 @@ Examples:
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
       const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
-      const c = await loadCaseInput(file, io);
+      const any = await loadAnyCaseInput(file, io);
+      if (any.kind === 'heat-sink' && reference !== 'auto')
+        throw new UsageError(
+          `--reference ${reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
+        );
       // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
       const interrupt = listenForInterrupt();
-      let written: WrittenReport;
+      let written: WrittenReport | WrittenSinkReport;
       try {
-        written = await writeReport({
-          case: c,
+        const common = {
           caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text,
           outDir,
           tolerance,
-          reference,
           dpi,
           date,
           pdf: o.pdf === true,
           beforeWrite: interrupt.check,
-        });
+        };
+        written =
+          any.kind === 'heat-sink' ? await writeSinkReport({ ...common, case: any.case }) : await writeReport({ ...common, case: any.case, reference });
       } catch (err) {
         if (!(err instanceof Interrupted)) throw err;
         io.err(`fincheck: interrupted (${err.by}); no report files were written\n`);
@@ -153,8 +203,9 @@ Examples:
       } finally {
         interrupt.dispose();
       }
+      const heatmapUnavailable = 'heatmapUnavailable' in written ? written.heatmapUnavailable : null;
       if (o.json) {
-        const { html, markdown, pdf, images, heatmapUnavailable, worstVerdict } = written;
+        const { html, markdown, pdf, images, worstVerdict } = written;
         io.out(
           `${JSON.stringify({ case: written.case.name, file, date, html, markdown, ...(pdf === null ? {} : { pdf }), images, heatmapUnavailable, worstVerdict }, null, 2)}\n`,
         );
@@ -165,6 +216,6 @@ Examples:
       io.out(`  ${written.markdown}   (Markdown; the PNG charts beside it)\n`);
       if (written.pdf !== null) io.out(`  ${written.pdf}   (A4 PDF, vector charts)\n`);
       for (const image of written.images) io.out(`  ${image}\n`);
-      if (written.heatmapUnavailable) io.out(`  no temperature field: ${written.heatmapUnavailable}\n`);
+      if (heatmapUnavailable) io.out(`  no temperature field: ${heatmapUnavailable}\n`);
     });
 }

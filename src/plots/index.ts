@@ -6,3 +6,9 @@ export { PLOT_KINDS, checkPlotInput, fieldStudy, heatmapAvailability } from './s
 export type { PlotSources } from './draw.js';
 export type { ChartSize, CheckPlotInput } from './profile-chart.js';
 export type { PlotKind } from './sources.js';
+export { SINK_PLOT_KINDS, hottestAndCoolestFins, sinkPlotInput } from './sink-input.js';
+export type { SinkPlotInput, SinkPlotKind } from './sink-input.js';
+export { sinkPlotAvailability, sinkPlotSvg } from './sink-draw.js';
+export { sinkPlateChart, sinkPlateChartSpec } from './sink-plate-chart.js';
+export { sinkFinHeatChartSpec } from './sink-fin-heat-chart.js';
+export { sinkFinProfileChartSpec } from './sink-fin-profile-chart.js';
