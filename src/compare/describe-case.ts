@@ -29,7 +29,8 @@ export function describeProfile(p: Profile): string {
   }
 }
 
-export function describeH(h: HDistribution): string {
+/** h as a sentence; `reference` names the power law's reference excess (a single fin's base, a sink's fin roots). */
+export function describeH(h: HDistribution, reference = 'theta_base'): string {
   switch (h.kind) {
     case 'uniform':
       return `h = ${num(h.h)} W/(m^2*K) uniform`;
@@ -38,7 +39,7 @@ export function describeH(h: HDistribution): string {
     case 'points':
       return `h tabulated at ${h.x.length} points, ${num(Math.min(...h.h))} to ${num(Math.max(...h.h))} W/(m^2*K)`;
     case 'power':
-      return `h = ${num(h.base)} W/(m^2*K) x (theta/theta_base)^${num(h.exponent)}`;
+      return `h = ${num(h.base)} W/(m^2*K) x (theta/${reference})^${num(h.exponent)}`;
     default: {
       const never: never = h;
       return never;

@@ -39,7 +39,9 @@ export function describeSink(c: HeatSinkCase): string[] {
       `source ${s.name}: ${sig(s.power)} W over ${mm(s.size[0])} x ${mm(s.size[1])} at (${mm(s.centre[0])}, ${mm(s.centre[1])})${extra.length > 0 ? `, ${extra.join(', ')}` : ''}`,
     );
   }
-  const fins = c.fin === null ? '' : `fins: ${describeH(c.convection.h)}, ${describeTip(c.convection.tip)}; `;
+  const h = c.convection.h;
+  const finH = h.kind === 'power' ? `${describeH(h, 'theta_root')}, theta_root the fins' mean root rise` : describeH(h);
+  const fins = c.fin === null ? '' : `fins: ${finH}, ${describeTip(c.convection.tip)}; `;
   const underside = c.convection.underside === null ? 'adiabatic' : `${c.convection.underside} W/(m^2*K)`;
   lines.push(`ambient ${c.convection.ambient_degC} degC; ${fins}exposed plate ${c.convection.plate} W/(m^2*K); underside ${underside}`);
   return lines;
