@@ -132,7 +132,7 @@ Examples:
   fincheck map demo/inverter-plate-fin.yaml --x fin.thickness=0.5:5mm --y convection.h=10:500 --log-y
   fincheck map my-fin.yaml --x fin.length=10mm:80mm --y material.k=15:400 --steps 21x21 --models tanh-Lc,convective-tip
   fincheck map my-fin.yaml --x fin.thickness=1mm:4mm --y convection.h=20:2000 --log-y --json > map.json
-  fincheck map demo/motor-drive-sink.yaml --x array.count=3:9 --y plate.thickness=2mm:8mm   # a heat sink, 7x7 points`,
+  fincheck map demo/motor-drive-sink.yaml --x "sources[0].size[0]=6mm:24mm" --y plate.thickness=2mm:8mm   # a heat sink, 7x7 points`,
     )
     .action(async (file: string, o: MapOptions) => {
       const givenSteps = o.steps === undefined ? undefined : parseOption('--steps', stepsOption, o.steps);
