@@ -17,3 +17,12 @@ export { sinkShortcuts, SINK_SHORTCUT_IDS, type SinkShortcutId, type SinkShortcu
 export { formatSinkCheck, describeSink } from './format-sink-check.js';
 export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
+export {
+  comparisonCsv,
+  comparisonTable,
+  formatComparison,
+  type CaseOutcome,
+  type ComparisonCell,
+  type ComparisonRow,
+  type ComparisonTable,
+} from './compare-cases.js';
