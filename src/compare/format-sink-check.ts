@@ -69,14 +69,17 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport, u: DisplayU
   out.push(`  energy balance ${ref.energyBalance.toExponential(1)}${grid}`);
   out.push(`  ${ref.note}`);
   const nameWidth = Math.max(10, ...r.sources.map((s) => s.name.length + 2));
-  const sourceHead = `  ${pad('source', nameWidth)}${lpad(`power [${W}]`, 11)}${lpad(`mean [${T}]`, 13)}${lpad(`max [${T}]`, 12)}${lpad(`rise [${dT}]`, 10)}${lpad('GCI', 10)}  limit`;
+  // Each column two wider than its header (11, 13, 12, 10 in W, degC and K).
+  const heads = [`power [${W}]`, `mean [${T}]`, `max [${T}]`, `rise [${dT}]`] as const;
+  const widths = heads.map((h) => h.length + 2) as [number, number, number, number];
+  const sourceHead = `  ${pad('source', nameWidth)}${lpad(heads[0], widths[0])}${lpad(heads[1], widths[1])}${lpad(heads[2], widths[2])}${lpad(heads[3], widths[3])}${lpad('GCI', 10)}  limit`;
   out.push(sourceHead);
   out.push(`  ${'-'.repeat(sourceHead.length - 2)}`);
   for (const s of r.sources) {
     const limit =
       s.limit_degC === null || s.margin_K === null ? '-' : `${asGiven(u.temperature, s.limit_degC)} ${T} (margin ${rise(s.margin_K, 3)} ${dT})`;
     out.push(
-      `  ${pad(s.name, nameWidth)}${lpad(heat(s.power_W), 11)}${lpad(temp(s.meanTemperature_degC), 13)}${lpad(temp(s.maxTemperature_degC), 12)}${lpad(rise(s.meanRise_K), 10)}${lpad(s.discretizationError === null ? 'n/a' : s.discretizationError.toExponential(1), 10)}  ${limit}`,
+      `  ${pad(s.name, nameWidth)}${lpad(heat(s.power_W), widths[0])}${lpad(temp(s.meanTemperature_degC), widths[1])}${lpad(temp(s.maxTemperature_degC), widths[2])}${lpad(rise(s.meanRise_K), widths[3])}${lpad(s.discretizationError === null ? 'n/a' : s.discretizationError.toExponential(1), 10)}  ${limit}`,
     );
   }
   out.push('');
