@@ -10,7 +10,8 @@
  * a degF difference = 5/9 K; T[degF] = 1.8 T[degC] + 32, T[K] = T[degC] + 273.15, T[degR] = 1.8 T[K].
  * Derived: 1 Btu_IT/h = 0.2930711 W; 1 Btu_IT/(h*ft^2*degF) = 5.678263 W/(m^2*K); 1 Btu_IT/(h*ft*degF) =
  * 1.730735 W/(m*K); 1 Btu_IT/(h*ft^2) = 3.154591 W/m^2; 1 degF*h/Btu_IT = 1.895634 K/W; 1 Btu_IT/(h*ft) =
- * 0.9615171 W/m (the values NIST SP 811 Appendix B.8 lists to 7 digits; tests/case/display-units.test.ts checks them).
+ * 0.9615171 W/m (NIST SP 811 Appendix B.8 lists the first five to 7 digits; recalled from memory, not checked against
+ * the document; tests/case/display-units.test.ts checks the factors against them).
  */
 
 export const displayKinds = ['length', 'temperature', 'heat', 'h', 'k', 'flux', 'resistance'] as const;
