@@ -54,6 +54,11 @@ export const unitsHelp = 'units shown: si (lengths in m), mm (lengths in mm, the
  * The display units of a run: --units when given, else the case's own (its `display` key over what its inputs
  * suggest), else the default (mm and SI).
  */
+/** The case with --units as its display units (charts and reports read them from the case); unchanged without --units. */
+export function withDisplayUnits<C extends { display?: DisplayUnits }>(c: C, flag: string | undefined): C {
+  return flag === undefined ? c : { ...c, display: displayUnitsOf(flag, undefined) };
+}
+
 export function displayUnitsOf(flag: string | undefined, caseUnits: DisplayUnits | undefined): DisplayUnits {
   if (flag !== undefined) return displaySystem(parseOption('--units', unitsOption, flag, 'si, mm or us'));
   return caseUnits ?? defaultDisplayUnits;

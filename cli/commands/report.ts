@@ -16,7 +16,7 @@ import { loadCaseInput } from '../case-input.js';
 import type { Io, SetExit } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
-import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp, withDisplayUnits } from '../options.js';
 import { dpiOption } from './plot.js';
 
 export interface ReportRequest {
@@ -100,6 +100,7 @@ interface ReportCliOptions {
   date?: string;
   pdf?: boolean;
   json?: boolean;
+  units?: string;
 }
 
 export function registerReport(program: Command, io: Io, setExit: SetExit): Command {
@@ -114,6 +115,7 @@ export function registerReport(program: Command, io: Io, setExit: SetExit): Comm
     .option('--date <yyyy-mm-dd>', 'date printed in the report (default: SOURCE_DATE_EPOCH when set, else today)')
     .option('--pdf', 'also write report.pdf: the same report on A4 pages, charts as vector graphics, font embedded')
     .option('--json', 'print one JSON document listing the files written')
+    .option('--units <system>', unitsHelp)
     .addHelpText(
       'after',
       `
@@ -129,7 +131,8 @@ Examples:
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const dpi = parseOption('--dpi', dpiOption, o.dpi, 'a resolution from 48 to 1200 dots per inch');
       const date = reportDate(o.date, process.env.SOURCE_DATE_EPOCH, new Date(), '--date');
-      const c = await loadCaseInput(file, io);
+      displayUnitsOf(o.units, undefined);
+      const c = withDisplayUnits(await loadCaseInput(file, io), o.units);
       // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
       const interrupt = listenForInterrupt();
       let written: WrittenReport;

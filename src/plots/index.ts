@@ -1,7 +1,7 @@
 /** The plots layer's public API: what the other layers import. */
 export { plotSvg } from './draw.js';
 export { REMAINING_FRACTION } from './flux-chart.js';
-export { alongAxisLabel, referenceWords, relativeError, sig, signedPercent } from './labels.js';
+export { alongAxisLabel, referenceWords, relativeError, sig, signedPercent, unitsOf } from './labels.js';
 export { PLOT_KINDS, checkPlotInput, fieldStudy, heatmapAvailability } from './sources.js';
 export type { PlotSources } from './draw.js';
 export type { ChartSize, CheckPlotInput } from './profile-chart.js';
