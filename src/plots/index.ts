@@ -6,3 +6,4 @@ export { PLOT_KINDS, checkPlotInput, fieldStudy, heatmapAvailability } from './s
 export type { PlotSources } from './draw.js';
 export type { ChartSize, CheckPlotInput } from './profile-chart.js';
 export type { PlotKind } from './sources.js';
+export { overlaidProfilesSvg, type OverlaidCase } from './overlay-chart.js';

@@ -3,3 +3,10 @@ export { REPORT_FILES, makeReport } from './make-report.js';
 export { reportDate } from './report-date.js';
 export { asUsageError, writeFilesAtomically } from './write-files.js';
 export type { OutputFile } from './write-files.js';
+export {
+  COMPARISON_FIGURE,
+  makeComparisonReport,
+  type ComparedCase,
+  type ComparisonReportContent,
+  type ComparisonReportOptions,
+} from './compare-report.js';
