@@ -143,3 +143,27 @@ describe('check with several cases', () => {
     expect(r.stdout).toContain('Reference (fd-1d): heat rate 7.2037 W');
   });
 });
+
+describe('report with several cases', () => {
+  it('writes one report comparing them: the cases and verdicts side by side, the profiles overlaid', async () => {
+    const out = join(tmp, 'compare-report');
+    const r = await cli('report', base, thin, '--reference', '1d', '--out', out, '--date', '2026-01-01');
+    expect(r.code).toBe(0);
+    const md = readFileSync(join(out, 'report.md'), 'utf8');
+    expect(md).toContain('# Fin check: 2 cases compared');
+    expect(md).toMatch(/\| plate 2 mm \| .*a-base\.yaml \| fd-1d \| 7\.2037 \|/);
+    expect(md).toContain('| Model | plate 2 mm | plate 1 mm |');
+    expect(md).toContain('profiles.png');
+    expect(existsSync(join(out, 'profiles.png'))).toBe(true);
+    expect(readFileSync(join(out, 'report.html'), 'utf8')).toContain('Verdicts side by side');
+  });
+
+  it('a bad case: exit 2 naming it, and no report written', async () => {
+    const out = join(tmp, 'compare-bad');
+    const r = await cli('report', base, bad, '--reference', '1d', '--out', out);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain(`${bad}:3:19: fin.thickness`);
+    expect(r.stderr).toContain('no report written: 1 of 2 cases could not be checked');
+    expect(existsSync(out)).toBe(false);
+  });
+});
