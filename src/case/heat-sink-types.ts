@@ -52,7 +52,7 @@ export interface HeatSource {
 
 export interface SinkConvection {
   ambient_degC: number;
-  /** On the fins' faces: every form of the single-fin format (the power law's theta_base is the fin root's). */
+  /** On the fins' faces: every form of the single-fin format (the power law's reference theta is the fins' mean root rise). */
   h: HDistribution;
   /** On the fins' tips. */
   tip: TipCondition;

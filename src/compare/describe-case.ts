@@ -40,7 +40,8 @@ export function describeProfile(p: Profile, u: DisplayUnits = defaultDisplayUnit
   }
 }
 
-export function describeH(h: HDistribution, u: DisplayUnits = defaultDisplayUnits): string {
+/** h as a sentence; `reference` names the power law's reference excess (a single fin's base, a sink's fin roots). */
+export function describeH(h: HDistribution, u: DisplayUnits = defaultDisplayUnits, reference = 'theta_base'): string {
   const H = u.h;
   switch (h.kind) {
     case 'uniform':
@@ -50,7 +51,7 @@ export function describeH(h: HDistribution, u: DisplayUnits = defaultDisplayUnit
     case 'points':
       return `h tabulated at ${h.x.length} points, ${shown(H, Math.min(...h.h))} to ${shown(H, Math.max(...h.h))} ${H.ascii}`;
     case 'power':
-      return `h = ${shown(H, h.base)} ${H.ascii} x (theta/theta_base)^${num(h.exponent)}`;
+      return `h = ${shown(H, h.base)} ${H.ascii} x (theta/${reference})^${num(h.exponent)}`;
     default: {
       const never: never = h;
       return never;

@@ -44,7 +44,9 @@ export function describeSink(c: HeatSinkCase, u: DisplayUnits = defaultDisplayUn
       `source ${s.name}: ${sig(inUnit(u.heat, s.power))} ${u.heat.ascii} over ${mm(s.size[0])} x ${mm(s.size[1])} at (${mm(s.centre[0])}, ${mm(s.centre[1])})${extra.length > 0 ? `, ${extra.join(', ')}` : ''}`,
     );
   }
-  const fins = c.fin === null ? '' : `fins: ${describeH(c.convection.h, u)}, ${describeTip(c.convection.tip, u)}; `;
+  const h = c.convection.h;
+  const finH = h.kind === 'power' ? `${describeH(h, u, 'theta_root')}, theta_root the fins' mean root rise` : describeH(h, u);
+  const fins = c.fin === null ? '' : `fins: ${finH}, ${describeTip(c.convection.tip, u)}; `;
   const underside = c.convection.underside === null ? 'adiabatic' : H(c.convection.underside);
   lines.push(`ambient ${T(c.convection.ambient_degC)}; ${fins}exposed plate ${H(c.convection.plate)}; underside ${underside}`);
   return lines;

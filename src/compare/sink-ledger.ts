@@ -68,7 +68,10 @@ export function sinkLedger(c: HeatSinkCase, reference: SinkStudy, shortcuts: Sin
       drift: (oneD - finHeat) / finHeat,
       madeBy: ['overall-efficiency', 'overall-efficiency-exact-fin', 'spreading-series'],
       method:
-        "on the fins' total heat: the exact 1-D fin at each fin's fd-3d mean root temperature against the fd-3d fins' heat (linear in the root excess)",
+        "on the fins' total heat: the exact 1-D fin at each fin's fd-3d mean root temperature against the fd-3d fins' heat (linear in the root excess)" +
+        (c.convection.h.kind === 'power' || c.plate.material.k.kind !== 'constant'
+          ? "; the fin's conductance is taken at the shortcut's base temperature, so with a power-law h or k(T) this row also holds their nonlinearity"
+          : ''),
     });
   }
   const single = shortcuts.singleH;

@@ -79,7 +79,7 @@ export function sparsePcg(
  * below it a computed residual cannot show progress. It matters where couplings dwarf the losses (a plate of
  * very high conductivity: k = 1e4 W/(m K) put it at 2e-10 x the heat).
  */
-function roundingFloor(a: CsrMatrix, x: Float64Array): number {
+export function roundingFloor(a: CsrMatrix, x: Float64Array): number {
   let s = 0;
   for (let r = 0; r < a.n; r++) {
     let row = 0;

@@ -47,9 +47,8 @@ export function assembleFinCells(problem: SinkProblem, grid: SinkGrid, firstNode
           if (j + 1 < b.j1) builder.couple(p, node(i, j + 1, l), (kf * dx(i) * ds(l)) / (0.5 * (dy(j) + dy(j + 1))));
           const face = 0.5 * dy(j) * integrals.convection(s[l], s[l + 1]);
           const half = (0.5 * dx(i)) / (kf * dy(j) * ds(l));
-          const side = face > 0 ? 1 / (1 / face + half) : 0;
-          if (i === b.i0) terms.loss(p, side, f);
-          if (i === b.i1 - 1) terms.loss(p, side, f);
+          if (i === b.i0) terms.loss(p, face, 1 / half, f, 'fin-h');
+          if (i === b.i1 - 1) terms.loss(p, face, 1 / half, f, 'fin-h');
         }
         const top = node(i, j, ns - 1);
         const tipHalf = (kf * a) / (0.5 * ds(ns - 1));
@@ -58,11 +57,11 @@ export function assembleFinCells(problem: SinkProblem, grid: SinkGrid, firstNode
             break;
           case 'convective': {
             const hTip = tip.h ?? hAt(problem.h, L, L);
-            if (hTip > 0) terms.loss(top, 1 / (1 / (hTip * a) + 1 / tipHalf), f);
+            if (hTip > 0) terms.loss(top, hTip * a, tipHalf, f, tip.h === null ? 'fin-h' : 'linear');
             break;
           }
           case 'temperature':
-            terms.loss(top, tipHalf, f, theta(tip.T_degC));
+            terms.loss(top, Infinity, tipHalf, f, 'linear', theta(tip.T_degC));
             break;
           default: {
             const never: never = tip;

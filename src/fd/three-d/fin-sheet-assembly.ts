@@ -53,7 +53,7 @@ export function assembleFinSheets(problem: SinkProblem, grid: SinkGrid, firstNod
     for (let l = 0; l < ns; l++) {
       const node = first + l;
       if (l + 1 < ns) builder.couple(node, node + 1, along[l] * w);
-      terms.loss(node, layerConvection[l] * w, owner);
+      terms.loss(node, layerConvection[l] * w, Infinity, owner, 'fin-h');
     }
     const last = first + ns - 1;
     switch (tip.kind) {
@@ -61,11 +61,11 @@ export function assembleFinSheets(problem: SinkProblem, grid: SinkGrid, firstNod
         break;
       case 'convective': {
         const hTip = tip.h ?? hAt(problem.h, L, L);
-        if (tipArea > 0 && hTip > 0) terms.loss(last, 1 / (1 / (hTip * tipArea * w) + 1 / (tipHalf * w)), owner);
+        if (tipArea > 0 && hTip > 0) terms.loss(last, hTip * tipArea * w, tipHalf * w, owner, tip.h === null ? 'fin-h' : 'linear');
         break;
       }
       case 'temperature':
-        terms.loss(last, tipHalf * w, owner, theta(tip.T_degC));
+        terms.loss(last, Infinity, tipHalf * w, owner, 'linear', theta(tip.T_degC));
         break;
       default: {
         const never: never = tip;

@@ -7,13 +7,15 @@
  *   fins:   div(k_f grad theta) = 0 in every fin, h(s) on its faces, the tip condition at its tip, its end faces
  *           adiabatic; temperature and heat flux continuous where it stands on the plate.
  * Linear when h does not depend on temperature (uniform, linear, points) and both conductivities are
- * constant: one symmetric positive definite solve. The power law and k(T) tables would need Newton: the model
- * refuses them (ModelNotApplicableError), and an infinite tip has no meaning on a sink of finite fins.
+ * constant: one symmetric positive definite solve. A power-law h on the fins or a k(T) table (one for plate and
+ * fins) makes it nonlinear: sink-newton.ts solves it by Newton in the Kirchhoff potential. An infinite tip has
+ * no meaning on a sink of finite fins (ModelNotApplicableError).
  */
-import type { HeatSinkCase, TipCondition } from '../../case/index.js';
+import type { Conductivity, HeatSinkCase, TipCondition } from '../../case/index.js';
 import { ModelNotApplicableError } from '../../errors.js';
 import { geometryOfProfile, isPinProfile, sinkLayout, type FinGeometry1D, type SinkLayout } from '../../mesh/index.js';
 import type { LinearHDistribution } from '../problem/linear-case.js';
+import { kirchhoffTransform, type KirchhoffTransform } from '../problem/conductivity.js';
 
 export type SinkTip = Exclude<TipCondition, { kind: 'infinite' }>;
 
@@ -24,8 +26,19 @@ export interface SinkProblem {
   kFin: number;
   /** One fin of unit width (straight fins) or one pin; null for a bare plate. */
   finGeometry: FinGeometry1D | null;
-  /** h on the fins' faces along the height, W/(m^2 K). */
+  /**
+   * The plate's conductivity law and its Kirchhoff potential phi(theta) = (1/k_ref) ∫_0^theta k dθ' (measured
+   * from the ambient, k_ref = k at the ambient; identity for a constant k). A table requires the fins' law to be
+   * the same (sinkModelApplies), so one potential serves the whole sink.
+   */
+  conductivity: KirchhoffTransform;
+  /** h on the fins' faces along the height, W/(m^2 K) (a power law: its base value, the law in `powerLaw`). */
   h: LinearHDistribution;
+  /**
+   * The fins' power law h = base (theta/theta_root)^exponent, theta_root the mean rise of all the fins' roots
+   * (so `base` is h at the fins' mean root temperature, as it is h at the base for a single fin); null: linear h.
+   */
+  powerLaw: { base: number; exponent: number } | null;
   tip: SinkTip;
   /** W/(m^2 K); underside null = adiabatic. */
   hPlate: number;
@@ -36,24 +49,15 @@ export interface SinkProblem {
 
 /** Whether fd-3d covers a sink, and why not in the problem's words. */
 export function sinkModelApplies(c: HeatSinkCase): { applies: true } | { applies: false; reason: string } {
-  if (c.plate.material.k.kind !== 'constant') {
-    return {
-      applies: false,
-      reason: 'a temperature-dependent plate conductivity (k(T) table) needs a nonlinear 3-D solve, which fd-3d does not have yet',
-    };
-  }
   const hasFins = c.fin !== null && (c.array.kind === 'plates' ? c.array.count : c.array.rows * c.array.columns) > 0;
   if (hasFins && c.fin !== null) {
-    if (c.fin.material.k.kind !== 'constant') {
+    const plateK = c.plate.material.k;
+    const finK = c.fin.material.k;
+    if ((plateK.kind !== 'constant' || finK.kind !== 'constant') && !sameConductivity(plateK, finK)) {
       return {
         applies: false,
-        reason: 'a temperature-dependent fin conductivity (k(T) table) needs a nonlinear 3-D solve, which fd-3d does not have yet',
-      };
-    }
-    if (c.convection.h.kind === 'power') {
-      return {
-        applies: false,
-        reason: 'a power-law h on the fins makes the sink nonlinear, and fd-3d solves linear sinks only (h uniform, linear or by points)',
+        reason:
+          'a k(T) table with plate and fins of different materials: fd-3d carries one Kirchhoff potential for the whole sink, so a table needs one conductivity for plate and fins',
       };
     }
     if (c.convection.tip.kind === 'infinite')
@@ -66,9 +70,12 @@ export function sinkProblem(c: HeatSinkCase): SinkProblem {
   const coverage = sinkModelApplies(c);
   if (!coverage.applies) throw new ModelNotApplicableError('fd-3d', coverage.reason);
   const layout = sinkLayout(c);
-  const kPlate = constantK(c.plate.material.k);
   const fin = layout.finKind === 'bare' ? null : c.fin;
-  const h: LinearHDistribution = c.convection.h.kind === 'power' ? { kind: 'uniform', h: 0 } : c.convection.h;
+  const conductivity = kirchhoffTransform(c.plate.material.k, c.convection.ambient_degC, 0);
+  const kPlate = conductivity.kRef;
+  const law = c.convection.h;
+  const powerLaw = fin !== null && law.kind === 'power' ? { base: law.base, exponent: law.exponent } : null;
+  const h: LinearHDistribution = law.kind === 'power' ? { kind: 'uniform', h: law.base } : law;
   const tip = c.convection.tip;
   let finGeometry: FinGeometry1D | null = null;
   if (fin !== null) {
@@ -80,7 +87,9 @@ export function sinkProblem(c: HeatSinkCase): SinkProblem {
   return {
     layout,
     kPlate,
-    kFin: fin === null ? kPlate : constantK(fin.material.k),
+    kFin: fin === null || fin.material.k.kind !== 'constant' ? kPlate : fin.material.k.k,
+    conductivity,
+    powerLaw,
     finGeometry,
     h,
     tip: tip.kind === 'infinite' ? { kind: 'adiabatic' } : tip,
@@ -91,9 +100,11 @@ export function sinkProblem(c: HeatSinkCase): SinkProblem {
   };
 }
 
-function constantK(k: HeatSinkCase['plate']['material']['k']): number {
-  if (k.kind !== 'constant') throw new ModelNotApplicableError('fd-3d', 'a temperature-dependent conductivity needs a nonlinear 3-D solve');
-  return k.k;
+/** Two conductivity laws that are the same function of temperature. */
+function sameConductivity(a: Conductivity, b: Conductivity): boolean {
+  if (a.kind === 'constant' && b.kind === 'constant') return a.k === b.k;
+  if (a.kind !== 'table' || b.kind !== 'table' || a.k.length !== b.k.length) return false;
+  return a.k.every((k, j) => k === b.k[j] && a.T_degC[j] === b.T_degC[j]);
 }
 
 /** Fins must stand on the plate and not overlap (the case checks say so first; this guards the model). */

@@ -1,5 +1,6 @@
 /**
- * One grid of the fd-3d model: assemble, solve A theta = b by preconditioned CG (two-level.ts) to a relative
+ * One grid of the fd-3d model (a nonlinear sink: Newton from the linear solution, sink-newton.ts, and every
+ * quantity below formed in the Kirchhoff potential and mapped to temperature through sink-faces.ts): assemble, solve A theta = b by preconditioned CG (two-level.ts) to a relative
  * residual of 1e-10 (|b − A theta|_1 / |b|_1), and derive every reported quantity from the solution and the
  * scheme's own conductances:
  *   face temperatures: underside in a source theta_P + q'' (dz/2)/k_p; underside or top with h through the
@@ -16,6 +17,8 @@ import { sinkMultigrid } from '../linear-algebra/sink-multigrid.js';
 import { PLATE_TOP, UNDERSIDE } from './heat-terms.js';
 import type { SinkSystem } from './sink-system.js';
 import type { SinkProblem } from './sink-problem.js';
+import type { SinkFaces } from './sink-faces.js';
+import { solveSinkNewton } from './sink-newton.js';
 
 /** Relative residual target: the energy balance of the result is below it (see sparse-pcg.ts). */
 export const RESIDUAL_TARGET = 1e-10;
@@ -49,7 +52,15 @@ export interface SinkGridResult {
 export function solveSinkSystem(problem: SinkProblem, system: SinkSystem): SinkGridResult {
   const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
-  return sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
+  if (!isNonlinearSink(problem)) return sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
+  const newton = solveSinkNewton(problem, system, theta, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
+  const method = `Newton in the Kirchhoff potential (${newton.steps} steps from the linear solve at the base h), each step by ${pre.method}`;
+  return sinkQuantities(problem, system, newton.phi, method, report.iterations + newton.cgIterations, newton.relativeResidual, newton.faces);
+}
+
+/** A sink that needs Newton: a power-law h on the fins or a k(T) table. */
+export function isNonlinearSink(problem: SinkProblem): boolean {
+  return problem.powerLaw !== null || !problem.conductivity.constant;
 }
 
 export function sinkQuantities(
@@ -59,6 +70,7 @@ export function sinkQuantities(
   method: string,
   iterations: number,
   relativeResidual: number,
+  faces: SinkFaces | null = null,
 ): SinkGridResult {
   const { grid, losses, roots } = system;
   const { nx, ny, nz, x, y, z } = grid;
@@ -75,7 +87,12 @@ export function sinkQuantities(
   // Underside faces.
   const undersideRise = new Float64Array(cols);
   const hu = problem.hUnderside;
-  for (let c = 0; c < cols; c++) undersideRise[c] = theta[c * nz] * (hu !== null && hu > 0 ? kp / (kp + 0.5 * hu * dz0) : 1);
+  for (let c = 0; c < cols; c++) {
+    if (faces === null) undersideRise[c] = theta[c * nz] * (hu !== null && hu > 0 ? kp / (kp + 0.5 * hu * dz0) : 1);
+    else
+      undersideRise[c] =
+        hu !== null && hu > 0 ? faces.face(theta[c * nz], hu * area(c), (kp * area(c)) / (0.5 * dz0), 0, 0).theta : faces.thetaOf(theta[c * nz]);
+  }
   const sourceMeanRise: number[] = [];
   const sourceMaxRise: number[] = [];
   grid.sources.forEach((b, s) => {
@@ -87,7 +104,7 @@ export function sinkQuantities(
     for (let i = b.i0; i < b.i1; i++) {
       for (let j = b.j0; j < b.j1; j++) {
         const c = i * ny + j;
-        const rise = theta[c * nz] + (flux * 0.5 * dz0) / kp;
+        const rise = faces === null ? theta[c * nz] + (flux * 0.5 * dz0) / kp : faces.thetaOf(theta[c * nz] + (flux * 0.5 * dz0) / kp);
         undersideRise[c] = rise;
         const a = area(c);
         sum += a * rise;
@@ -101,7 +118,11 @@ export function sinkQuantities(
 
   // Top faces: exposed through h_plate, under fins the junction temperature.
   const topRise = new Float64Array(cols);
-  for (let c = 0; c < cols; c++) topRise[c] = theta[c * nz + nz - 1] * (problem.hPlate > 0 ? kp / (kp + 0.5 * problem.hPlate * dzTop) : 1);
+  for (let c = 0; c < cols; c++) {
+    const top = theta[c * nz + nz - 1];
+    if (faces === null) topRise[c] = top * (problem.hPlate > 0 ? kp / (kp + 0.5 * problem.hPlate * dzTop) : 1);
+    else topRise[c] = problem.hPlate > 0 ? faces.face(top, problem.hPlate * area(c), (kp * area(c)) / (0.5 * dzTop), 0, 0).theta : faces.thetaOf(top);
+  }
   const nFins = grid.fins.length;
   const finHeat = new Array<number>(nFins).fill(0);
   const rootSum = new Array<number>(nFins).fill(0);
@@ -114,7 +135,7 @@ export function sinkQuantities(
     const gf = roots.gFin[r];
     const f = roots.owner[r];
     finHeat[f] += (tp - tf) / (1 / gp + 1 / gf);
-    const junction = (gp * tp + gf * tf) / (gp + gf);
+    const junction = faces === null ? (gp * tp + gf * tf) / (gp + gf) : faces.thetaOf((gp * tp + gf * tf) / (gp + gf));
     const c = Math.floor(p / nz);
     topRise[c] = junction;
     rootSum[f] += area(c) * junction;
@@ -130,7 +151,10 @@ export function sinkQuantities(
   let finsHeat = 0;
   let plateHeat = 0;
   for (let t = 0; t < losses.node.length; t++) {
-    const q = losses.g[t] * (theta[losses.node[t]] - losses.fixed[t]);
+    const q =
+      faces === null
+        ? losses.g[t] * (theta[losses.node[t]] - losses.fixed[t])
+        : faces.face(theta[losses.node[t]], losses.surface[t], losses.half[t], losses.law[t], losses.fixed[t]).q;
     const owner = losses.owner[t];
     if (owner === PLATE_TOP || owner === UNDERSIDE) plateHeat += q;
     else finsHeat += q;
@@ -139,7 +163,7 @@ export function sinkQuantities(
   return {
     grid,
     unknowns: theta.length,
-    theta,
+    theta: faces === null ? theta : theta.map((phi) => faces.thetaOf(phi)),
     sourceMeanRise,
     sourceMaxRise,
     finHeat,

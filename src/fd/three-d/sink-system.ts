@@ -113,7 +113,7 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
       for (let j = 0; j < ny; j++) {
         if (heated[i * ny + j] === 1) continue;
         const a = dx(i) * dy(j);
-        terms.loss(cell(i, j, 0), 1 / (1 / (hu * a) + (0.5 * dz(0)) / (kp * a)), UNDERSIDE);
+        terms.loss(cell(i, j, 0), hu * a, (kp * a) / (0.5 * dz(0)), UNDERSIDE, 'linear');
       }
     }
   }
@@ -128,7 +128,7 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
       for (let j = 0; j < ny; j++) {
         if (footprintOwner[i * ny + j] >= 0) continue;
         const a = dx(i) * dy(j);
-        terms.loss(cell(i, j, nz - 1), 1 / (1 / (problem.hPlate * a) + (0.5 * dz(nz - 1)) / (kp * a)), PLATE_TOP);
+        terms.loss(cell(i, j, nz - 1), problem.hPlate * a, (kp * a) / (0.5 * dz(nz - 1)), PLATE_TOP, 'linear');
       }
     }
   }
@@ -176,6 +176,9 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
       g: Float64Array.from(terms.lossG),
       fixed: Float64Array.from(terms.lossFixed),
       owner: Int32Array.from(terms.lossOwner),
+      surface: Float64Array.from(terms.lossSurface),
+      half: Float64Array.from(terms.lossHalf),
+      law: Uint8Array.from(terms.lossLaw),
     },
     roots: {
       plate: Int32Array.from(terms.rootPlate),

@@ -15,7 +15,7 @@ import { assembleSink, sinkUnknowns, type FinRepresentation } from './sink-syste
 import { checkSinkMemory, DEFAULT_MEMORY_LIMIT } from './sink-memory.js';
 import { sinkPlateView } from './sink-plate-view.js';
 import { sinkProblem, type SinkProblem } from './sink-problem.js';
-import { solveSinkSystem, type SinkGridResult } from './sink-solve.js';
+import { isNonlinearSink, solveSinkSystem, type SinkGridResult } from './sink-solve.js';
 import type { SinkStudy } from './sink-study-types.js';
 
 export interface SinkStudyOptions {
@@ -48,7 +48,11 @@ export function studySink(c: HeatSinkCase, options: SinkStudyOptions = {}): Sink
   const refines = Array.from({ length: grids }, (_, g) => 2 ** g);
   const meshes: SinkGrid[] = refines.map((r) => buildSinkGrid(problem.layout, spec(r)));
   const finest = meshes[meshes.length - 1];
-  checkSinkMemory(sinkUnknowns(finest, representation, problem.layout.finKind), options.memoryLimit_bytes ?? DEFAULT_MEMORY_LIMIT);
+  checkSinkMemory(
+    sinkUnknowns(finest, representation, problem.layout.finKind),
+    options.memoryLimit_bytes ?? DEFAULT_MEMORY_LIMIT,
+    isNonlinearSink(problem),
+  );
   const results = meshes.map((grid) => solveSinkSystem(problem, assembleSink(problem, grid, representation))).reverse();
   const sizes = refines.map((r) => cellSize / r).reverse();
   return sinkStudyFrom(problem, results, sizes, representation);
