@@ -3,7 +3,7 @@
  * size cap as a file). Warnings about the case (src/case: implausible dimensions, a shortened name) go to stderr
  * here, once, whatever the output format; commands with --json also put them in their document.
  */
-import { parseCaseText, readCaseFile, readCaseStream, type Case, type CaseWarning } from '../src/case/index.js';
+import { parseAnyCaseText, parseCaseText, readCaseFile, readCaseStream, type AnyCase, type Case, type CaseWarning } from '../src/case/index.js';
 import type { Io } from './io.js';
 
 /** How standard input is named in messages ("stdin:5:14: fin.thickness: ...") and as the default case name. */
@@ -27,6 +27,14 @@ export async function loadCaseInput(file: string, io: Io): Promise<Case> {
   const c = parseCaseText(text, fileName);
   printWarnings(c.warnings ?? [], io);
   return c;
+}
+
+/** Reads and parses a case of either kind (a single fin or a heat sink), printing its warnings on stderr. */
+export async function loadAnyCaseInput(file: string, io: Io): Promise<AnyCase> {
+  const { text, fileName } = await readCaseInput(file, io);
+  const any = parseAnyCaseText(text, fileName);
+  printWarnings(any.case.warnings ?? [], io);
+  return any;
 }
 
 /** One line a warning on stderr: `fincheck: warning: fin.length: 40 m ...`. */

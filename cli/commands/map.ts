@@ -19,12 +19,29 @@ import {
   runInDisplayUnits,
 } from '../../src/map/index.js';
 import { asUsageError } from '../../src/report/index.js';
+import { parseAnyCaseText } from '../../src/case/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
 import type { Io, SetExit } from '../io.js';
 import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp } from '../options.js';
 
-const modelIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'] as const satisfies readonly MapModelId[];
+const modelIds = [
+  'tanh-L',
+  'tanh-Lc',
+  'tanh-Lc-thin',
+  'convective-tip',
+  'closed-form',
+  'fd-1d',
+  'overall-efficiency',
+  'overall-efficiency-exact-fin',
+  'spreading-series',
+] as const satisfies readonly MapModelId[];
+
+/**
+ * Default grid of a heat-sink map: every point is an fd-3d study (about a second on the default grids, on one
+ * core), so 7 x 7 = 49 points take about half a minute on two cores, where 41 x 41 would take half an hour.
+ */
+export const SINK_DEFAULT_STEPS = '7x7';
 
 /** "41x41" (NX x NY) or "41" (both): at least 2 and at most 1000 values per axis. */
 const stepsOption = z
@@ -57,7 +74,7 @@ const formatOption = z.enum(['png', 'svg']);
 interface MapOptions {
   x: string;
   y: string;
-  steps: string;
+  steps?: string;
   logX?: boolean;
   logY?: boolean;
   models?: string;
@@ -84,10 +101,13 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
   return program
     .command('map')
     .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
-    .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point)')
-    .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm')
+    .description('map where each textbook shortcut holds as two case parameters vary (drift, verdict, Bi at every point); heat sinks too')
+    .requiredOption('--x <KEY=FROM:TO>', 'case key swept along x with its range, e.g. fin.thickness=1mm:5mm (a heat sink: array.count=4:16)')
     .requiredOption('--y <KEY=FROM:TO>', 'case key swept along y, e.g. "convection.h=10:1000 W/(m^2*K)"')
-    .option('--steps <NXxNY>', 'grid points along x and y: NXxNY, or N for N x N (9 is 9x9)', '41x41')
+    .option(
+      '--steps <NXxNY>',
+      `grid points along x and y: NXxNY, or N for N x N (9 is 9x9); default 41x41, a heat sink ${SINK_DEFAULT_STEPS} (an fd-3d study a point)`,
+    )
     .option('--log-x', 'space the x values geometrically and draw a log axis')
     .option('--log-y', 'space the y values geometrically and draw a log axis')
     .option(
@@ -114,10 +134,11 @@ and this one does not (map.json lists them); other files in the folder are never
 Examples:
   fincheck map demo/inverter-plate-fin.yaml --x fin.thickness=0.5:5mm --y convection.h=10:500 --log-y
   fincheck map my-fin.yaml --x fin.length=10mm:80mm --y material.k=15:400 --steps 21x21 --models tanh-Lc,convective-tip
-  fincheck map my-fin.yaml --x fin.thickness=1mm:4mm --y convection.h=20:2000 --log-y --json > map.json`,
+  fincheck map my-fin.yaml --x fin.thickness=1mm:4mm --y convection.h=20:2000 --log-y --json > map.json
+  fincheck map demo/motor-drive-sink.yaml --x array.count=3:9 --y plate.thickness=2mm:8mm   # a heat sink, 7x7 points`,
     )
     .action(async (file: string, o: MapOptions) => {
-      const steps = parseOption('--steps', stepsOption, o.steps);
+      const givenSteps = o.steps === undefined ? undefined : parseOption('--steps', stepsOption, o.steps);
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const models =
@@ -129,6 +150,8 @@ Examples:
 
       // prepareMap parses and validates the text (InputError with positions, as check reports them).
       const { text: caseText, fileName } = await readCaseInput(file, io);
+      const sink = parseAnyCaseText(caseText, fileName).kind === 'heat-sink';
+      const steps = givenSteps ?? parseOption('--steps', stepsOption, sink ? SINK_DEFAULT_STEPS : '41x41');
       const prepared = await prepareMap({
         caseText,
         fileName,
@@ -148,6 +171,8 @@ Examples:
       // about a millisecond each, so that starting and warming up workers (module load, JIT) costs more
       // than they save (41x41, 2 cores: 1.95 s in-process, 2.2 s on two workers).
       const jobs = askedJobs ?? (prepared.casePoint.reference.model === 'fd-1d' ? 1 : availableParallelism());
+      if (sink && givenSteps === undefined)
+        io.err(`fincheck: a heat-sink map solves an fd-3d study at every point: ${SINK_DEFAULT_STEPS} points by default (--steps sets more)\n`);
       const interrupt = listenForInterrupt();
       const total = steps[0] * steps[1];
       const progress = progressBar((t) => io.err(t), io.errIsTTY, total);

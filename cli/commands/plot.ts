@@ -9,9 +9,23 @@ import type { Command } from 'commander';
 import { z } from 'zod';
 import { UsageError } from '../../src/errors.js';
 import { chartBytes, type ChartFormat } from '../../src/images/index.js';
-import { plotSvg, type PlotSources, checkPlotInput, fieldStudy, heatmapAvailability, PLOT_KINDS, type PlotKind } from '../../src/plots/index.js';
+import {
+  plotSvg,
+  type PlotSources,
+  checkPlotInput,
+  fieldStudy,
+  heatmapAvailability,
+  PLOT_KINDS,
+  type PlotKind,
+  SINK_PLOT_KINDS,
+  type SinkPlotKind,
+  sinkPlotAvailability,
+  sinkPlotInput,
+  sinkPlotSvg,
+} from '../../src/plots/index.js';
+import type { HeatSinkCase } from '../../src/case/index.js';
 import { writeFilesAtomically } from '../../src/report/index.js';
-import { loadCaseInput } from '../case-input.js';
+import { loadAnyCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
 import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp, withDisplayUnits } from '../options.js';
@@ -22,6 +36,9 @@ export const heightOption = z.coerce.number().int().min(300).max(8000);
 /** Raster resolution: the PNG has width x dpi/96 pixels and records the dpi. */
 export const dpiOption = z.coerce.number().min(48).max(1200);
 export const kindOption = z.enum(PLOT_KINDS);
+export const sinkKindOption = z.enum(SINK_PLOT_KINDS);
+/** Every kind of either family, checked before the case is read; the case's family is checked after. */
+export const anyKindOption = z.enum([...new Set([...PLOT_KINDS, ...SINK_PLOT_KINDS])] as [string, ...string[]]);
 
 /** Largest PNG accepted, pixels (a 300 dpi A3 page is about 17 Mpx; resvg needs 4 bytes a pixel). */
 export const MAX_PIXELS = 60e6;
@@ -76,13 +93,23 @@ const DESCRIPTIONS: Record<PlotKind, string> = {
   heatmap: 'fd-2d temperature field on the fin section',
 };
 
+const SINK_DESCRIPTIONS: Record<SinkPlotKind, string> = {
+  profile: 'temperature up the hottest and the coolest fin against the uniform-base shortcut',
+  plate: 'plate underside temperature seen from above, sources and fin footprints drawn',
+  'fin-heat': 'heat per fin (bars)',
+};
+
 export function registerPlot(program: Command, io: Io): Command {
   return program
     .command('plot')
     .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('draw one chart of the check: temperature profiles, heat flow, or the 2-D temperature field')
     .option('--out <file>', 'output file: .png (rendered with the bundled font) or .svg')
-    .option('--kind <kind>', `profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}) or heatmap (${DESCRIPTIONS.heatmap})`, 'profile')
+    .option(
+      '--kind <kind>',
+      `a fin: profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}) or heatmap (${DESCRIPTIONS.heatmap}); a heat sink: profile (${SINK_DESCRIPTIONS.profile}), plate (${SINK_DESCRIPTIONS.plate}) or fin-heat (${SINK_DESCRIPTIONS['fin-heat']})`,
+      'profile',
+    )
     .option('--width <px>', 'chart width in px at 96 dpi', '1200')
     .option('--height <px>', 'chart height in px at 96 dpi', '750')
     .option('--dpi <dpi>', 'PNG resolution: the image has width x dpi/96 pixels (300 for print)', '96')
@@ -96,17 +123,33 @@ export function registerPlot(program: Command, io: Io): Command {
 Examples:
   fincheck plot demo/inverter-plate-fin.yaml --out profile.png
   fincheck plot demo/motor-housing-tapered-fin.yaml --kind heatmap --out field.svg
-  fincheck plot demo/led-pin-fin.yaml --kind flux --out flux.png --dpi 300   # 3750 x 2344 px for print`,
+  fincheck plot demo/led-pin-fin.yaml --kind flux --out flux.png --dpi 300   # 3750 x 2344 px for print
+  fincheck plot demo/motor-drive-sink.yaml --kind plate --out plate.png      # a heat sink`,
     )
     .action(async (file: string, o: PlotCliOptions) => {
-      const kind = parseOption('--kind', kindOption, o.kind, PLOT_KINDS.join(', '));
+      const anyKind = parseOption('--kind', anyKindOption, o.kind, `${PLOT_KINDS.join(', ')} (a fin) or ${SINK_PLOT_KINDS.join(', ')} (a heat sink)`);
       const out = parseOutFile(o.out);
       const image = parseImageOptions(o);
       if (out.format === 'svg' && image.dpi !== 96) throw new UsageError('--dpi: applies to PNG output only (an SVG scales without loss)');
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       displayUnitsOf(o.units, undefined);
-      const c = withDisplayUnits(await loadCaseInput(file, io), o.units);
+      const any = await loadAnyCaseInput(file, io);
+      if (any.kind === 'heat-sink') {
+        if (reference !== 'auto') throw new UsageError(`--reference ${reference}: a heat sink's reference is fd-3d; leave --reference at auto`);
+        await plotSink(
+          any.case,
+          parseOption('--kind', sinkKindOption, anyKind, `${SINK_PLOT_KINDS.join(', ')} for a heat sink`),
+          out,
+          image,
+          tolerance,
+          o.json === true,
+          io,
+        );
+        return;
+      }
+      const c = withDisplayUnits(any.case, o.units);
+      const kind = parseOption('--kind', kindOption, anyKind, `${PLOT_KINDS.join(', ')} for a single fin (plate and fin-heat are heat-sink charts)`);
       if (kind === 'heatmap') {
         const available = heatmapAvailability(c);
         if (!available.ok) throw new UsageError(`--kind heatmap: ${available.reason}`);
@@ -146,4 +189,42 @@ Examples:
       io.out(`wrote ${out.path} (${size}): ${DESCRIPTIONS[kind]} for ${c.name}\n`);
       io.out(`  models: ${models.join(', ')}${omitted.length > 0 ? `; not drawn: ${omitted.map((m) => `${m.model} (${m.reason})`).join('; ')}` : ''}\n`);
     });
+}
+
+/** `plot` on a heat sink: the check's fd-3d reference and shortcuts, one of the sink charts. */
+async function plotSink(
+  c: HeatSinkCase,
+  kind: SinkPlotKind,
+  out: { path: string; format: ChartFormat },
+  image: ImageOptions,
+  tolerance: number,
+  json: boolean,
+  io: Io,
+) {
+  const available = sinkPlotAvailability({ case: c }, kind);
+  if (!available.ok) throw new UsageError(`--kind ${kind}: ${available.reason}; --kind plate draws it`);
+  const input = await sinkPlotInput(c, tolerance);
+  const svg = sinkPlotSvg(kind, input, image, image.dpi / 96);
+  const bytes = await chartBytes(svg, out.format, { dpi: image.dpi });
+  writeFilesAtomically([{ path: out.path, bytes }]);
+  const pixels =
+    out.format === 'png'
+      ? { width_px: Math.round((image.width * image.dpi) / 96), height_px: Math.round((image.height * image.dpi) / 96) }
+      : { width_px: image.width, height_px: image.height };
+  if (json) {
+    const summary = {
+      case: c.name,
+      kind,
+      file: out.path,
+      format: out.format,
+      ...pixels,
+      dpi: out.format === 'png' ? image.dpi : null,
+      bytes: bytes.length,
+      reference: 'fd-3d',
+    };
+    io.out(`${JSON.stringify(summary, null, 2)}\n`);
+    return;
+  }
+  const size = out.format === 'png' ? `PNG ${pixels.width_px} x ${pixels.height_px} px, ${image.dpi} dpi` : `SVG ${image.width} x ${image.height}`;
+  io.out(`wrote ${out.path} (${size}): ${SINK_DESCRIPTIONS[kind]} for ${c.name}\n`);
 }

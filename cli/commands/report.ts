@@ -7,12 +7,13 @@
 import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { type Case, cleanFreeText, parseAnyCaseText, type DisplayUnits } from '../../src/case/index.js';
-import { resolvedSinkStudy, runSinkCheck, type CheckReport } from '../../src/compare/index.js';
+import { type Case, cleanFreeText, parseAnyCaseText, type DisplayUnits, type HeatSinkCase } from '../../src/case/index.js';
+import { resolvedSinkStudy, runSinkCheck, type CheckReport, type SinkCheckReport } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
 import {
   makeComparisonReport,
   makeReport,
+  makeSinkReport,
   REPORT_FILES,
   reportDate,
   writeFilesAtomically,
@@ -21,7 +22,7 @@ import {
 } from '../../src/report/index.js';
 import { checkPlotInput } from '../../src/plots/index.js';
 import { VERSION } from '../../src/version.js';
-import { loadCaseInput, readCaseInput } from '../case-input.js';
+import { loadAnyCaseInput, readCaseInput } from '../case-input.js';
 import { caseList } from '../case-list.js';
 import { errorLines, knownFailure } from '../failure.js';
 import type { Io, SetExit } from '../io.js';
@@ -103,6 +104,51 @@ export async function writeReport(request: ReportRequest): Promise<WrittenReport
   return { case: c, check: content.check.report, html, markdown, pdf, images, heatmapUnavailable: content.heatmapUnavailable, worstVerdict };
 }
 
+export interface SinkReportRequest extends Omit<ReportRequest, 'case' | 'reference'> {
+  case: HeatSinkCase;
+}
+
+export interface WrittenSinkReport {
+  case: HeatSinkCase;
+  check: SinkCheckReport;
+  html: string;
+  markdown: string;
+  pdf: string | null;
+  images: string[];
+  worstVerdict: 'ok' | 'marginal' | 'unsafe' | 'unresolved';
+}
+
+/** The report of a heat sink, computed and written into `outDir` (also what `fincheck demo` uses). */
+export async function writeSinkReport(request: SinkReportRequest): Promise<WrittenSinkReport> {
+  const c = request.case;
+  const content = await makeSinkReport(c, {
+    tolerance: request.tolerance,
+    dpi: request.dpi,
+    caseFile: request.caseFile,
+    version: VERSION,
+    date: request.date,
+    pdf: request.pdf === true,
+    ...(request.beforeWrite ? { checkpoint: request.beforeWrite } : {}),
+  });
+  const html = join(request.outDir, REPORT_FILES.html);
+  const markdown = join(request.outDir, REPORT_FILES.markdown);
+  const images = content.figures.map((f) => join(request.outDir, f.file));
+  const files: OutputFile[] = [
+    ...content.figures.map((f, k) => ({ path: images[k] as string, bytes: f.png })),
+    { path: markdown, bytes: content.markdown },
+    { path: html, bytes: content.html },
+  ];
+  const pdf = content.pdf === null ? null : join(request.outDir, REPORT_FILES.pdf);
+  if (pdf !== null && content.pdf !== null) files.push({ path: pdf, bytes: content.pdf });
+  request.beforeWrite?.();
+  writeFilesAtomically(files, [request.outDir]);
+  return { case: c, check: content.input.report, html, markdown, pdf, images, worstVerdict: worstOf(content.input.report.models.map((m) => m.verdict)) };
+}
+
+function worstOf(verdicts: readonly ('ok' | 'marginal' | 'unsafe' | 'unresolved')[]): 'ok' | 'marginal' | 'unsafe' | 'unresolved' {
+  return verdicts.includes('unresolved') ? 'unresolved' : verdicts.includes('unsafe') ? 'unsafe' : verdicts.includes('marginal') ? 'marginal' : 'ok';
+}
+
 interface ReportCliOptions {
   out?: string;
   tolerance: string;
@@ -133,6 +179,7 @@ export function registerReport(program: Command, io: Io, setExit: SetExit): Comm
 Examples:
   fincheck report demo/inverter-plate-fin.yaml --out report/
   fincheck report demo/led-pin-fin.yaml --out report/ --pdf       # and report.pdf for the design note
+  fincheck report demo/motor-drive-sink.yaml --out sink-report/   # a heat sink: fd-3d, three sink charts
   fincheck report my-fin.yaml --out out/my-fin --tolerance 5% --dpi 200
   SOURCE_DATE_EPOCH=1735689600 fincheck report my-fin.yaml --out out/   # same input, same bytes
   fincheck report a.yaml b.yaml c.yaml --out compare/ --units us        # one report comparing the cases
@@ -154,22 +201,28 @@ one is bad (exit 2) or cannot be solved (exit 3), each problem is reported and n
         return;
       }
       const file = list.files[0] as string;
-      const c = withDisplayUnits(await loadCaseInput(file, io), o.units);
+      const any = await loadAnyCaseInput(file, io);
+      if (any.kind === 'heat-sink' && reference !== 'auto')
+        throw new UsageError(
+          `--reference ${reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
+        );
       // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
       const interrupt = listenForInterrupt();
-      let written: WrittenReport;
+      let written: WrittenReport | WrittenSinkReport;
       try {
-        written = await writeReport({
-          case: c,
+        const common = {
           caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text,
           outDir,
           tolerance,
-          reference,
           dpi,
           date,
           pdf: o.pdf === true,
           beforeWrite: interrupt.check,
-        });
+        };
+        written =
+          any.kind === 'heat-sink'
+            ? await writeSinkReport({ ...common, case: any.case })
+            : await writeReport({ ...common, case: withDisplayUnits(any.case, o.units), reference });
       } catch (err) {
         if (!(err instanceof Interrupted)) throw err;
         io.err(`fincheck: interrupted (${err.by}); no report files were written\n`);
@@ -178,8 +231,9 @@ one is bad (exit 2) or cannot be solved (exit 3), each problem is reported and n
       } finally {
         interrupt.dispose();
       }
+      const heatmapUnavailable = 'heatmapUnavailable' in written ? written.heatmapUnavailable : null;
       if (o.json) {
-        const { html, markdown, pdf, images, heatmapUnavailable, worstVerdict } = written;
+        const { html, markdown, pdf, images, worstVerdict } = written;
         io.out(
           `${JSON.stringify({ case: written.case.name, file, date, html, markdown, ...(pdf === null ? {} : { pdf }), images, heatmapUnavailable, worstVerdict }, null, 2)}\n`,
         );
@@ -190,7 +244,7 @@ one is bad (exit 2) or cannot be solved (exit 3), each problem is reported and n
       io.out(`  ${written.markdown}   (Markdown; the PNG charts beside it)\n`);
       if (written.pdf !== null) io.out(`  ${written.pdf}   (A4 PDF, vector charts)\n`);
       for (const image of written.images) io.out(`  ${image}\n`);
-      if (written.heatmapUnavailable) io.out(`  no temperature field: ${written.heatmapUnavailable}\n`);
+      if (heatmapUnavailable) io.out(`  no temperature field: ${heatmapUnavailable}\n`);
     });
 }
 

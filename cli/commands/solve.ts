@@ -1,7 +1,17 @@
 /** `fincheck solve CASE`: the numerical solution alone, with its discretisation error. */
 import type { Command } from 'commander';
-import { pointPosition, runSolve, type SolveReport, describeCase, runSolve2D, type Solve2DReport } from '../../src/compare/index.js';
-import { loadCaseInput } from '../case-input.js';
+import {
+  describeCase,
+  formatSinkSolve,
+  pointPosition,
+  runSolve,
+  runSolve2D,
+  sinkSolveReport,
+  type Solve2DReport,
+  type SolveReport,
+} from '../../src/compare/index.js';
+import { studySink } from '../../src/fd/index.js';
+import { loadAnyCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { requireModel2D } from '../model-coverage.js';
 import { displayUnitsOf, gridOption, modelOption, nodesOption, parseOption, unitsHelp } from '../options.js';
@@ -14,7 +24,7 @@ export function registerSolve(program: Command, io: Io): Command {
   return program
     .command('solve')
     .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
-    .description('solve the fin with finite volumes; by default a refinement study gives the discretisation error')
+    .description('solve the fin (or the heat sink, fd-3d) with finite volumes; a refinement study gives the discretisation error')
     .option('--model <m>', '1d (finite volumes along the fin) or 2d (across the thickness too)', '1d')
     .option('--nodes <n>', '1-D: solve once on exactly n nodes (no refinement study, discretisation error null)')
     .option('--grid <NXxNY>', '2-D: solve once on exactly NX x NY nodes (no refinement study)')
@@ -28,16 +38,30 @@ Examples:
   fincheck solve demo/motor-housing-tapered-fin.yaml --nodes 200 --json
   fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d
   fincheck solve demo/polymer-fin-liquid-cooled.yaml --model 2d --grid 400x40 --json
-  fincheck solve demo/enclosure-fin-natural-convection.yaml --model 2d   # nonlinear: Newton on each grid`,
+  fincheck solve demo/enclosure-fin-natural-convection.yaml --model 2d   # nonlinear: Newton on each grid
+  fincheck solve demo/motor-drive-sink.yaml --json                       # a heat sink: fd-3d, three grids`,
     )
-    .action(async (file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean; units?: string }) => {
+    .action(async (file: string, o: { model: string; nodes?: string; grid?: string; json?: boolean; units?: string }, command: Command) => {
       const model = parseOption('--model', modelOption, o.model, '1d or 2d');
       const nodes = o.nodes === undefined ? undefined : parseOption('--nodes', nodesOption, o.nodes, 'a whole number of nodes from 3 to 10000000');
       const grid = o.grid === undefined ? undefined : parseOption('--grid', gridOption, o.grid, 'NXxNY with whole numbers from 2 to 20000, e.g. 400x40');
       if (model === '1d' && grid !== undefined) throw new UsageError('--grid goes with --model 2d; use --nodes N for the 1-D model');
       if (model === '2d' && nodes !== undefined) throw new UsageError('--nodes goes with --model 1d; use --grid NXxNY for the 2-D model');
       displayUnitsOf(o.units, undefined);
-      const c = await loadCaseInput(file, io);
+      const any = await loadAnyCaseInput(file, io);
+      if (any.kind === 'heat-sink') {
+        // A heat sink: fd-3d on its three nested grids; the fin models' options do not apply.
+        const given = ['model', 'nodes', 'grid'].filter((name) => command.getOptionValueSource(name) === 'cli');
+        if (given.length > 0)
+          throw new UsageError(
+            `--${given[0]}: a heat sink is solved by fd-3d (the plate in 3-D, every fin conducting) on three nested grids; leave out --model, --nodes and --grid`,
+          );
+        const sink = any.case;
+        const report = sinkSolveReport(sink, studySink(sink));
+        io.out(o.json ? `${JSON.stringify({ ...report, warnings: sink.warnings ?? [] }, null, 2)}\n` : formatSinkSolve(sink, report));
+        return;
+      }
+      const c = any.case;
       const u = displayUnitsOf(o.units, c.display);
       const warnings = c.warnings ?? [];
       const gridIssue = grid === undefined ? null : grid2dIssue(sectionOf(c.fin.profile), grid.nx, grid.ny);

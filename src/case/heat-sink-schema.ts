@@ -37,12 +37,12 @@ export const maxFinsPerRow = 1000;
 export const maxSources = 100;
 
 /** A whole number of fins, 0 (a bare plate) to maxFinsPerRow. */
-const finCount: Range = {
+export const finCount: Range = {
   test: (v) => Number.isInteger(v) && v >= 0 && v <= maxFinsPerRow,
   text: '>= 0, a whole number',
   limit: `at most ${maxFinsPerRow}`,
 };
-const rowCount: Range = {
+export const rowCount: Range = {
   test: (v) => Number.isInteger(v) && v >= 1 && v <= maxFinsPerRow,
   text: '>= 1, a whole number',
   limit: `at most ${maxFinsPerRow}`,

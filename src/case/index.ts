@@ -24,7 +24,15 @@ export type * from './types.js';
 export type * from './heat-sink-types.js';
 export { isHeatSinkObject } from './heat-sink-detect.js';
 export { loadAnyCase, parseAnyCaseObject, parseAnyCaseText, parseHeatSinkObject, parseHeatSinkText, type AnyCase } from './heat-sink-parse.js';
-export { heatSinkJsonSchema, heatSinkSchema, heatSinkSchemaFor, type ValidatedHeatSink } from './heat-sink-schema.js';
+export {
+  finCount as sinkFinCountRange,
+  heatSinkJsonSchema,
+  heatSinkSchema,
+  heatSinkSchemaFor,
+  rowCount as sinkRowCountRange,
+  sourcePower as sourcePowerRange,
+  type ValidatedHeatSink,
+} from './heat-sink-schema.js';
 export {
   aboveAbsoluteZero,
   coefficientRange,

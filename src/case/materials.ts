@@ -63,6 +63,8 @@ export const builtInMaterials: readonly BuiltInMaterial[] = [
     provenance: 'ASM Handbook Vol. 2 (1990), 6063-T5 at 25 degC (from memory)',
   },
   { name: 'copper-pure', description: 'pure copper', k: 401, source: incroperaA1, provenance: compared },
+  // `copper` is the plain name the heat-sink format's example uses (heat-sink.md: `plate.material: copper`): pure copper.
+  { name: 'copper', description: 'pure copper (the same value as copper-pure)', k: 401, source: incroperaA1, provenance: compared },
   {
     name: 'copper-c110',
     description: 'copper C11000, electrolytic tough pitch',

@@ -12,10 +12,22 @@ export type { SolveReport } from './solve.js';
 export type { Solve2DReport } from './solve2d.js';
 export type { CheckReport, Flag, ModelId, ModelResult, NotApplicable, ReferenceResult, ShortcutId, Verdict } from './types.js';
 export { signedPercentText } from './percent-text.js';
-export { runSinkCheck, sinkCheckFrom, judgeSinkReference, type SinkCheckOptions, type SinkReferenceSource } from './sink-check.js';
+export {
+  runSinkCheck,
+  runSinkCheckWith,
+  type SinkCheckRun,
+  sinkCheckFrom,
+  judgeSinkReference,
+  type SinkCheckOptions,
+  type SinkReferenceSource,
+} from './sink-check.js';
 export { sinkShortcuts, SINK_SHORTCUT_IDS, type SinkShortcutId, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
 export { formatSinkCheck, describeSink } from './format-sink-check.js';
+export { formatSinkSolve } from './format-sink-solve.js';
+export { sinkFinPrediction, type SinkFinPrediction } from './sink-fin-prediction.js';
+export { sinkSolveReport, type SinkSolveFin, type SinkSolveReport, type SinkSolveSource } from './sink-solve.js';
 export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
+export { sheetReductionRow, SHEET_DRIFT_BUDGET } from './sink-sheet-row.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
 export {
   comparisonCsv,

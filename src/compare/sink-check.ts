@@ -15,6 +15,7 @@ import { resolutionTarget } from './resolved-reference.js';
 import { sinkCautions, sinkFlags } from './sink-flags.js';
 import { exposedPlateArea, finCount } from './sink-geometry.js';
 import { sinkLedger } from './sink-ledger.js';
+import { sheetReductionRow } from './sink-sheet-row.js';
 import { sinkShortcuts, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
 import type { SinkCheckReport, SinkModelRow, SinkReferenceResult } from './sink-types.js';
 import { verdictOf } from './types.js';
@@ -22,14 +23,33 @@ import { verdictOf } from './types.js';
 export interface SinkCheckOptions {
   /** Relative tolerance on each source's mean rise (e.g. 0.02). */
   tolerance: number;
+  /**
+   * Measure the reference's sheet reduction against full 3-D fin cells for the ledger (sink-sheet-row.ts: one more
+   * study). Default true; false leaves that row unmeasured (map points, which show no ledger).
+   */
+  sheetDrift?: boolean;
 }
 
 export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | Promise<SinkStudy>);
 
 /** Runs the array shortcuts and judges them against the reference. */
 export async function runSinkCheck(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckReport> {
+  return (await runSinkCheckWith(c, reference, options)).report;
+}
+
+/** The check and what it was computed from (the reference study and the shortcuts), for charts and reports. */
+export interface SinkCheckRun {
+  report: SinkCheckReport;
+  study: SinkStudy;
+  shortcuts: SinkShortcuts;
+}
+
+export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckRun> {
   const study = typeof reference === 'function' ? await reference(c) : reference;
-  return sinkCheckFrom(c, study, await sinkShortcuts(c), options);
+  const shortcuts = await sinkShortcuts(c);
+  const report = sinkCheckFrom(c, study, shortcuts, options);
+  const sheet = options.sheetDrift === false ? null : sheetReductionRow(c, study);
+  return { report: sheet === null ? report : { ...report, assumptions: [...report.assumptions, sheet] }, study, shortcuts };
 }
 
 /** The reference's per-source rises and whether it is resolved enough to judge on. */

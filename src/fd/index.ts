@@ -28,7 +28,7 @@ export { gridSolversNow } from './study/grid-solvers-now.js';
 export type { RefinementStudy } from './study/refinement.js';
 export { richardsonGci, fitObservedOrder } from './study/refinement.js';
 export type { NewtonReport } from './newton/newton-report.js';
-export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView } from './three-d/sink-study-types.js';
+export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView, SinkFinProfiles } from './three-d/sink-study-types.js';
 
 export type { Fin1DResult } from './one-d/linear-solve.js';
 export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';
@@ -55,7 +55,7 @@ export type { FinHeatRates1D } from './one-d/heat-rate.js';
 export { finHeatRates, finEffectiveness } from './one-d/heat-rate.js';
 export type { Fin1DOptions } from './one-d/linear-solve.js';
 export { solveOnMesh1D } from './one-d/linear-solve.js';
-export { studySink } from './three-d/study-sink.js';
+export { studySink, sinkStudyUnknowns } from './three-d/study-sink.js';
 export type { SinkStudyOptions } from './three-d/study-sink.js';
 export { sinkModelApplies } from './three-d/sink-problem.js';
 export { sheetReductionDrift } from './three-d/sheet-drift.js';

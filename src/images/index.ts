@@ -14,6 +14,9 @@ export type { LineChartSpec, LinePanel, LineSeries, PointAnnotation, LegendPlace
 export { fieldChart, gridLayout } from './field-chart.js';
 export type { FieldChartSpec, FieldChartResult, StructuredGrid, EdgeLabels } from './field-chart.js';
 
+export { barChart } from './bar-chart.js';
+export type { BarChartSpec, BarChartResult, BarReferenceLine } from './bar-chart.js';
+
 export { mapChart } from './map-chart.js';
 export type { MapChartSpec, MapChartResult, MapLevel, MapPoint } from './map-chart.js';
 

@@ -23,6 +23,8 @@ export interface AxisKeyInfo {
   range: Range;
   /** Value when the key is absent from the case (optional keys), in SI; undefined when the key must be present. */
   absentDefault?: number;
+  /** A count: the axis values are rounded to whole numbers. */
+  integer?: boolean;
 }
 
 interface KeyPattern extends AxisKeyInfo {

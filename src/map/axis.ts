@@ -18,12 +18,14 @@ import {
   parseQuantity,
   quantityKinds,
   type Case,
+  type HeatSinkCase,
   type KeyPath,
   type QuantityKind,
   rangeText,
 } from '../case/index.js';
 import { UsageError } from '../errors.js';
 import { axisKeyInfo, mappableKeyExamples, type AxisKeyInfo } from './axis-keys.js';
+import { mappableSinkKeyExamples, sinkAxisKeyInfo } from './sink-axis-keys.js';
 import { axisValues } from './spacing.js';
 import { rawAxisValue } from './substitute.js';
 import type { MapAxis } from './types.js';
@@ -59,12 +61,17 @@ function keyOf(option: string, keyText: string): { path: KeyPath; key: string } 
   }
 }
 
+/** The material a `material.k` (or a sink's `plate.material.k`) key stands for when the case names a built-in one. */
+function namedMaterialK(key: string, c: Case | HeatSinkCase): number {
+  const material = 'array' in c ? (key === 'plate.material.k' ? c.plate.material : (c.fin?.material ?? c.plate.material)) : c.material;
+  if (material.k.kind !== 'constant') throw new Error('built-in material without a constant k');
+  return material.k.k;
+}
+
 /** The SI value of the key in the case (its default when absent and optional), or throws when it is not there. */
-function caseValueSI(option: string, key: string, path: KeyPath, info: AxisKeyInfo, raw: unknown, c: Case): number {
-  if (key === 'material.k' && typeof getByKeyPath(raw, ['material']) === 'string') {
-    if (c.material.k.kind !== 'constant') throw new Error('built-in material without a constant k');
-    return c.material.k.k;
-  }
+function caseValueSI(option: string, key: string, path: KeyPath, info: AxisKeyInfo, raw: unknown, c: Case | HeatSinkCase): number {
+  const examples = 'array' in c ? mappableSinkKeyExamples : mappableKeyExamples;
+  if ((key === 'material.k' || key === 'plate.material.k') && typeof getByKeyPath(raw, path.slice(0, -1)) === 'string') return namedMaterialK(key, c);
   const current = getByKeyPath(raw, path);
   if (current === undefined) {
     if (info.absentDefault !== undefined) return info.absentDefault;
@@ -73,7 +80,7 @@ function caseValueSI(option: string, key: string, path: KeyPath, info: AxisKeyIn
       typeof parent === 'object' && parent !== null && !Array.isArray(parent)
         ? ` (${formatKeyPath(path.slice(0, -1))} has ${Object.keys(parent).join(', ')})`
         : '';
-    throw new UsageError(`${option}: ${key} is not in this case${present}; map a key the case has, e.g. ${mappableKeyExamples}`);
+    throw new UsageError(`${option}: ${key} is not in this case${present}; map a key the case has, e.g. ${examples}`);
   }
   if (typeof current !== 'number' && typeof current !== 'string') {
     throw new UsageError(
@@ -93,14 +100,19 @@ function unitProblem(kind: QuantityKind, unit: string): string | undefined {
   return probe.ok ? undefined : probe.problem;
 }
 
-/** Parses and checks one axis option against the case (raw object as read, and its validated form). */
-export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAxis {
+/** Parses and checks one axis option against the case (raw object as read, and its validated form: a fin or a heat sink). */
+export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case | HeatSinkCase): MapAxis {
   const { option, text } = request;
+  const sink = 'array' in c;
   const eq = text.indexOf('=');
-  if (eq < 0) throw new UsageError(`${option}: got "${text}"; expected KEY=FROM:TO such as fin.thickness=1mm:3mm`);
+  if (eq < 0)
+    throw new UsageError(`${option}: got "${text}"; expected KEY=FROM:TO such as ${sink ? 'plate.thickness=3mm:10mm' : 'fin.thickness=1mm:3mm'}`);
   const { path, key } = keyOf(option, text.slice(0, eq).trim());
-  const info = axisKeyInfo(key);
-  if (!info) throw new UsageError(`${option}: ${key} is not a numeric key of a case; map one of ${mappableKeyExamples}`);
+  const info = sink ? sinkAxisKeyInfo(key) : axisKeyInfo(key);
+  if (!info)
+    throw new UsageError(
+      `${option}: ${key} is not a numeric key of a ${sink ? 'heat-sink case' : 'case'}; map one of ${sink ? mappableSinkKeyExamples : mappableKeyExamples}`,
+    );
   const own = caseValueSI(option, key, path, info, raw, c);
 
   const ends = text.slice(eq + 1).split(':');
@@ -143,6 +155,16 @@ export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAx
     throw new RangeError(`parseMapAxis: ${option} needs at least 2 steps; got ${request.steps}`);
   }
   const caseValue = unit === '' ? own : fromSI(own, info.kind, unit);
+  let values = axisValues(lo, hi, request.steps, request.log);
+  if (info.integer === true) {
+    // A count: whole numbers, each once.
+    values = Float64Array.from(values, (v) => Math.round(v));
+    if (new Set(values).size !== values.length) {
+      throw new UsageError(
+        `${option}: ${key} is a whole number: ${lo}:${hi} holds ${Math.floor(hi) - Math.ceil(lo) + 1} of them${request.log ? ' (fewer distinct on a log axis)' : ''}, fewer than the ${request.steps} steps asked; give fewer steps or a wider range`,
+      );
+    }
+  }
   return {
     key,
     path,
@@ -150,7 +172,7 @@ export function parseMapAxis(request: AxisRequest, raw: unknown, c: Case): MapAx
     unit,
     displayUnit: unit !== '' ? unit : quantityKinds[info.kind].bareUnit,
     log: request.log,
-    values: axisValues(lo, hi, request.steps, request.log),
+    values,
     caseValue: Number.isFinite(caseValue) ? caseValue : null,
   };
 }

@@ -50,20 +50,33 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     lines.push('  nonlinear fin: the shortcuts use h and k at the base temperature (check also shows the fin-averaged guess)');
   }
   lines.push('');
-  lines.push(`${pad('shortcut', 16)}${pad('ok', 10)}${pad('marginal', 10)}${pad('unsafe', 10)}drift over the map`);
+  const w = run.job.kind === 'heat-sink' ? 30 : 16;
+  lines.push(
+    `${pad('shortcut', w)}${pad('ok', 10)}${pad('marginal', 10)}${pad('unsafe', 10)}drift over the map${run.job.kind === 'heat-sink' ? " (worst source's mean rise)" : ''}`,
+  );
   for (const m of summary.models) {
     const share = (n: number): string => pct(n / summary.points);
     const range = Number.isFinite(m.minDrift) ? `${signedPercentText(m.minDrift)} .. ${signedPercentText(m.maxDrift)}` : 'no value';
-    lines.push(`${pad(m.model, 16)}${pad(share(m.ok), 10)}${pad(share(m.marginal), 10)}${pad(share(m.unsafe), 10)}${range}`);
+    lines.push(`${pad(m.model, w)}${pad(share(m.ok), 10)}${pad(share(m.marginal), 10)}${pad(share(m.unsafe), 10)}${range}`);
   }
   const own = run.casePoint;
   if (own.models.length > 0) {
     lines.push('');
     const where = `${run.x.key} = ${value(own.x, run.x)}, ${run.y.key} = ${value(own.y, run.y)}`;
-    lines.push(
-      `This case (${Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map'}): Bi = ${own.biot === null ? 'n/a' : own.biot.toPrecision(3)}, mL = ${own.mL === null ? 'n/a' : own.mL.toPrecision(3)}`,
-    );
-    for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(signedPercentText(m.drift), 10)}${m.verdict}`);
+    const at = Number.isFinite(own.x) && Number.isFinite(own.y) ? where : 'not on the map';
+    if (run.job.kind === 'heat-sink') {
+      const r = own.reference;
+      lines.push(
+        `This case (${at}): fd-3d sink resistance ${r.sinkResistance_KperW?.toPrecision(4) ?? 'n/a'} K/W, hottest point ${r.maxTemperature_degC?.toFixed(1) ?? 'n/a'} degC`,
+      );
+      for (const m of own.models)
+        lines.push(`  ${pad(m.model, 30)}drift ${pad(signedPercentText(m.drift), 10)}${pad(m.verdict, 11)}(worst source: ${m.worstSource ?? 'n/a'})`);
+    } else {
+      lines.push(
+        `This case (${at}): Bi = ${own.biot === null ? 'n/a' : own.biot.toPrecision(3)}, mL = ${own.mL === null ? 'n/a' : own.mL.toPrecision(3)}`,
+      );
+      for (const m of own.models) lines.push(`  ${pad(m.model, 16)}drift ${pad(signedPercentText(m.drift), 10)}${m.verdict}`);
+    }
   }
   if (summary.errors > 0) {
     lines.push('');
@@ -74,7 +87,11 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
   let worstError = 0;
   for (const p of run.points) if (!isPointError(p)) worstError = Math.max(worstError, p.reference.discretizationError);
   lines.push('');
-  lines.push(`Reference accuracy: estimated discretisation error of Q (GCI) at most ${worstError.toExponential(1)} (relative) over the map.`);
+  lines.push(
+    run.job.kind === 'heat-sink'
+      ? `Reference accuracy: fd-3d on its default three grids at every point (not refined further); estimated error of a source's mean rise (GCI) at most ${worstError.toExponential(1)} (relative) over the map.`
+      : `Reference accuracy: estimated discretisation error of Q (GCI) at most ${worstError.toExponential(1)} (relative) over the map.`,
+  );
   lines.push('Cautions: estimates of the stated model, to be confirmed by test; h is usually the largest uncertainty;');
   lines.push('  follow the applicable codes, standards and licensed practice (overheated electronics fail, hot surfaces burn).');
   if (files.length > 0) {

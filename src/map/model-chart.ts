@@ -74,7 +74,10 @@ export function modelChart(run: MapRun, model: MapModelId): ModelChart {
   const note = notes.filter((n) => n !== '').join('; ');
   const chart = mapChart({
     title: `Drift of ${model} from ${reference}: ${run.caseName}`,
-    subtitle: [`drift = (${model} − ${reference}) / ${reference} on the heat rate; ${band}`, CHART_CAUTION],
+    subtitle: [
+      `drift = (${model} − ${reference}) / ${reference} ${run.job.kind === 'heat-sink' ? "on each source's mean rise, the worst source's shown" : 'on the heat rate'}; ${band}`,
+      CHART_CAUTION,
+    ],
     xLabel: axisLabel(run.x),
     yLabel: axisLabel(run.y),
     valueLabel: `Drift of ${model} (%)`,

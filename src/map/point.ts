@@ -4,10 +4,11 @@
  * invalid, or where the solver fails, gives its message instead of results; every other error is a bug and is
  * thrown. The same function runs in-process (one job) and in each worker, so both give the same numbers.
  */
-import { parseCaseObject, readDocument, type Locate, type ParseOptions } from '../case/index.js';
+import { parseAnyCaseObject, readDocument, type Locate, type ParseOptions } from '../case/index.js';
 import { basename, extname } from 'node:path';
 import { runCheck, type CheckReport } from '../compare/index.js';
 import { InputError, SolverError, UsageError } from '../errors.js';
+import { pointFromSinkReport, sinkPointReport } from './sink-point.js';
 import { substituteAxis } from './substitute.js';
 import type { MapJob, MapModelId, MapPoint, PointModel, PointResult } from './types.js';
 
@@ -67,8 +68,9 @@ export async function evaluatePoint(context: PointContext, index: number, x: num
   const { job } = context;
   try {
     const raw = substituteAxis(substituteAxis(context.raw, job.x, x), job.y, y);
-    const c = parseCaseObject(raw, context.locate, context.parseOptions);
-    const { report } = await runCheck(c, { tolerance: job.check.tolerance, reference: job.check.reference, ledger: false });
+    const any = parseAnyCaseObject(raw, context.locate, context.parseOptions);
+    if (any.kind === 'heat-sink') return pointFromSinkReport(index, x, y, await sinkPointReport(any.case, job.check.tolerance), job.check.models);
+    const { report } = await runCheck(any.case, { tolerance: job.check.tolerance, reference: job.check.reference, ledger: false });
     return pointFromReport(index, x, y, report, job.check.models);
   } catch (err) {
     const error = pointMessage(err);

@@ -3,14 +3,15 @@
  * reference and the shortcuts asked for, on the case's own point), then solve every grid point (pool.ts) and
  * return plain data. Files and text are written by the caller (outputs.ts, format.ts).
  */
-import { bareLengthUnit, dimensionWarning, parseCaseText, parseQuantity, readDocument, type CaseWarning } from '../case/index.js';
+import { bareLengthUnit, dimensionWarning, parseAnyCaseText, parseQuantity, readDocument, type CaseWarning, type HeatSinkCase } from '../case/index.js';
 import { rawAxisValue } from './substitute.js';
-import { runCheck, type NotApplicable } from '../compare/index.js';
+import { runCheck, SINK_SHORTCUT_IDS, type NotApplicable } from '../compare/index.js';
 import { UsageError } from '../errors.js';
 import { finProblem, modelApplies } from '../fd/index.js';
 import { parseMapAxis } from './axis.js';
 import { solvePoints } from './pool.js';
 import { pointFromReport } from './point.js';
+import { pointFromSinkReport, sinkPointReport } from './sink-point.js';
 import { summariseMap, type MapSummary } from './summary.js';
 import type { MapAxis, MapJob, MapModelId, MapPoint, PointCheckOptions, PointResult } from './types.js';
 
@@ -61,12 +62,14 @@ export interface MapRun extends PreparedMap {
 
 /** Every check that does not need the grid; throws InputError or UsageError (exit 2). */
 export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
-  const c = parseCaseText(request.caseText, request.fileName);
+  const any = parseAnyCaseText(request.caseText, request.fileName);
   const { raw } = readDocument(request.caseText, request.fileName);
   const labels = request.labels ?? DEFAULT_LABELS;
-  const x = parseMapAxis({ option: labels.x, text: request.x, steps: request.steps[0], log: request.logX }, raw, c);
-  const y = parseMapAxis({ option: labels.y, text: request.y, steps: request.steps[1], log: request.logY }, raw, c);
+  const x = parseMapAxis({ option: labels.x, text: request.x, steps: request.steps[0], log: request.logX }, raw, any.case);
+  const y = parseMapAxis({ option: labels.y, text: request.y, steps: request.steps[1], log: request.logY }, raw, any.case);
   if (x.key === y.key) throw new UsageError(`${labels.x} and ${labels.y} both sweep ${x.key}; give two different keys`);
+  if (any.kind === 'heat-sink') return prepareSinkMap(request, any.case, raw, x, y, labels);
+  const c = any.case;
   if (request.reference === '2d') {
     const coverage = modelApplies(finProblem(c), '2d');
     if (!coverage.ok) throw new UsageError(`${labels.reference} 2d: ${coverage.reason}; use ${labels.reference} 1d or auto`);
@@ -87,6 +90,7 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
   const guess = report.models.some((m) => m.guess !== undefined) ? 'base' : null;
   const check: PointCheckOptions = { tolerance: request.tolerance, reference: request.reference, models, guess };
   const job: MapJob = {
+    kind: 'fin',
     caseText: request.caseText,
     fileName: request.fileName,
     x: { path: x.path, unit: x.unit },
@@ -97,6 +101,31 @@ export async function prepareMap(request: MapRequest): Promise<PreparedMap> {
   const bareUnitChosen = bareLengthUnit(raw) !== 'm';
   const warnings = [...(c.warnings ?? []), ...axisWarnings(x, labels.x, bareUnitChosen), ...axisWarnings(y, labels.y, bareUnitChosen)];
   return { caseName: c.name, x, y, job, casePoint, notApplicable: report.notApplicable, warnings };
+}
+
+/** prepareMap of a heat sink: the array shortcuts against fd-3d on the default study at every point (sink-point.ts). */
+async function prepareSinkMap(request: MapRequest, c: HeatSinkCase, raw: unknown, x: MapAxis, y: MapAxis, labels: MapLabels): Promise<PreparedMap> {
+  if (request.reference !== 'auto')
+    throw new UsageError(`${labels.reference} ${request.reference}: a heat sink's reference is fd-3d; leave ${labels.reference} at auto`);
+  const report = await sinkPointReport(c, request.tolerance);
+  const applicable: MapModelId[] = [...SINK_SHORTCUT_IDS];
+  for (const id of request.models ?? []) {
+    if (!applicable.includes(id)) throw new UsageError(`${labels.models}: ${id} is a single-fin model; a heat sink maps ${applicable.join(', ')}`);
+  }
+  const models = request.models ? [...new Set(request.models)] : applicable;
+  const check: PointCheckOptions = { tolerance: request.tolerance, reference: 'auto', models, guess: null };
+  const job: MapJob = {
+    kind: 'heat-sink',
+    caseText: request.caseText,
+    fileName: request.fileName,
+    x: { path: x.path, unit: x.unit },
+    y: { path: y.path, unit: y.unit },
+    check,
+  };
+  const casePoint = pointFromSinkReport(-1, x.caseValue ?? Number.NaN, y.caseValue ?? Number.NaN, report, models);
+  const bareUnitChosen = bareLengthUnit(raw) !== 'm';
+  const warnings = [...(c.warnings ?? []), ...axisWarnings(x, labels.x, bareUnitChosen), ...axisWarnings(y, labels.y, bareUnitChosen)];
+  return { caseName: c.name, x, y, job, casePoint, notApplicable: [], warnings };
 }
 
 /** A warning when a length axis reaches a value implausible for a fin (its largest end is checked). */

@@ -3,7 +3,8 @@
  * path, exactly as if the user had typed them into the file (`thickness: 1.5 mm`), so that the point's numbers
  * are those `fincheck check` prints for that file. The object is validated again by the case layer afterwards.
  *
- * A built-in material name (`material: aluminium-6063`) swept over `material.k` becomes `material: { k: value }`.
+ * A built-in material name (`material: aluminium-6063`) swept over `material.k` becomes `material: { k: value }`
+ * (a heat sink's `plate.material` likewise).
  */
 import { formatKeyPath, getByKeyPath, setByKeyPath } from '../case/index.js';
 import type { AxisSubstitution } from './types.js';
@@ -16,8 +17,9 @@ export function rawAxisValue(axis: AxisSubstitution, value: number): number | st
 /** A copy of `raw` with `value` (in the axis unit) at the axis key; `raw` is not changed. */
 export function substituteAxis(raw: unknown, axis: AxisSubstitution, value: number): unknown {
   const written = rawAxisValue(axis, value);
-  if (formatKeyPath(axis.path) === 'material.k' && typeof getByKeyPath(raw, ['material']) === 'string') {
-    return setByKeyPath(raw, ['material'], { k: written });
+  const key = formatKeyPath(axis.path);
+  if ((key === 'material.k' || key === 'plate.material.k') && typeof getByKeyPath(raw, axis.path.slice(0, -1)) === 'string') {
+    return setByKeyPath(raw, axis.path.slice(0, -1), { k: written });
   }
   return setByKeyPath(raw, axis.path, written);
 }

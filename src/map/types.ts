@@ -4,10 +4,13 @@
  * heat rates in W; drift = (shortcut - reference) / reference on the heat rate, as `fincheck check` reports it.
  */
 import type { KeyPath, QuantityKind } from '../case/index.js';
-import type { ModelId, ShortcutId, Verdict } from '../compare/index.js';
+import type { ModelId, ShortcutId, SinkShortcutId, Verdict } from '../compare/index.js';
 
-/** What a map can show the drift of: the shortcuts, and the 1-D model when fd-2d is the reference. */
-export type MapModelId = ShortcutId | 'fd-1d';
+/**
+ * What a map can show the drift of: a fin's shortcuts, and the 1-D model when fd-2d is the reference; a heat sink's
+ * array shortcuts (their drift: the worst source's, on its mean rise, as `check` judges them).
+ */
+export type MapModelId = ShortcutId | 'fd-1d' | SinkShortcutId;
 
 /** One axis of the map: a case key swept from `from` to `to` in the user's unit. */
 export interface MapAxis {
@@ -45,6 +48,8 @@ export interface PointCheckOptions {
 
 /** Everything a point needs besides its two values: the case text (re-read in each worker) and the axes. */
 export interface MapJob {
+  /** 'fin' (a single-fin case, runCheck) or 'heat-sink' (runSinkCheck on the default fd-3d study). */
+  kind: 'fin' | 'heat-sink';
   caseText: string;
   fileName: string;
   x: AxisSubstitution;
@@ -54,21 +59,30 @@ export interface MapJob {
 
 export interface PointModel {
   model: MapModelId;
+  /** A fin: the model's heat rate. A heat sink: the total power (every array shortcut carries all of it). */
   heatRate_W: number;
   /** null for an infinite tip (no finite surface; check's reference.efficiencyNote). */
   efficiency: number | null;
   drift: number;
   verdict: Verdict;
+  /** A heat sink: the model's sink resistance (largest predicted mean rise over the total power), K/W. */
+  sinkResistance_KperW?: number;
+  /** A heat sink: the source whose drift decides (the worst). */
+  worstSource?: string;
 }
 
 export interface PointReference {
-  model: Extract<ModelId, 'fd-1d' | 'fd-2d'>;
+  model: Extract<ModelId, 'fd-1d' | 'fd-2d'> | 'fd-3d';
+  /** A fin: the reference's heat rate. A heat sink: the total power of its sources. */
   heatRate_W: number;
   /** null for an infinite tip (no finite surface; check's reference.efficiencyNote). */
   efficiency: number | null;
   discretizationError: number;
   /** True when discretizationError <= tolerance / 10; else the point's verdicts are `unresolved`. */
   resolved: boolean;
+  /** A heat sink: fd-3d's sink resistance (hottest point over the total power), K/W, and its hottest source temperature, degC. */
+  sinkResistance_KperW?: number;
+  maxTemperature_degC?: number;
 }
 
 /** A grid point where the check ran. */

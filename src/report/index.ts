@@ -10,3 +10,5 @@ export {
   type ComparisonReportContent,
   type ComparisonReportOptions,
 } from './compare-report.js';
+export { makeSinkReport, SINK_FIGURE_FILES } from './make-sink-report.js';
+export type { SinkReportContent, SinkReportOptions } from './make-sink-report.js';

@@ -63,6 +63,8 @@ function study(rises: number[], gci: (number | null)[], fins: { heat: number; ro
     unknowns: [800000, 100000, 12500],
     finModel: 'hand-built for a test',
     plate: { nx: 1, ny: 1, x: new Float64Array(1), y: new Float64Array(1), underside_degC: new Float64Array(1), top_degC: new Float64Array(1) },
+    errors: { sourceMaxRise: c.sources.map(() => null), plateTopMeanRise: null, finHeat: fins.map(() => null), sinkResistance: null },
+    finProfiles: null,
     solver: { method: 'none', iterations: 0, relativeResidual: 0 },
   };
 }

@@ -156,5 +156,8 @@ describe('fincheck demo (npm start)', () => {
     expect(r.stdout).toContain('Charts and report of this check');
     for (const f of ['report.html', 'report.md', 'profile.png', 'flux.png', 'heatmap.png']) expect(existsSync(join(dir, f))).toBe(true);
     expect(r.stdout.indexOf('Cautions:')).toBeLessThan(r.stdout.indexOf('report.html'));
-  });
+    // The heat-sink demo next to it: its check printed, its report and three charts in heat-sink/.
+    expect(r.stdout).toContain('fincheck check (heat sink): Motor-drive module on an extruded sink');
+    for (const f of ['report.html', 'report.md', 'plate.png', 'fin-heat.png', 'fin-profile.png']) expect(existsSync(join(dir, 'heat-sink', f))).toBe(true);
+  }, 180_000);
 });

@@ -6,6 +6,7 @@
  * caller can tell a drift from discretisation error. For a ledger row and the tests; costs two studies.
  */
 import type { HeatSinkCase } from '../../case/index.js';
+import type { SinkStudy } from './sink-study-types.js';
 import { studySink, type SinkStudyOptions } from './study-sink.js';
 
 export interface SheetReductionDrift {
@@ -13,8 +14,16 @@ export interface SheetReductionDrift {
   sources: { name: string; drift: number; sheetGci: number | null; cellsGci: number | null }[];
 }
 
-export function sheetReductionDrift(c: HeatSinkCase, options: Omit<SinkStudyOptions, 'finRepresentation'> = {}): SheetReductionDrift {
-  const sheet = studySink(c, { ...options, finRepresentation: 'sheet' });
+/**
+ * `sheet`: a sheet study already made (e.g. a check's reference, perhaps on finer grids); its extrapolated rises
+ * are compared with a cells study on `options`' grids. Without it both studies are made on the same grids.
+ */
+export function sheetReductionDrift(
+  c: HeatSinkCase,
+  options: Omit<SinkStudyOptions, 'finRepresentation'> = {},
+  sheetStudy?: SinkStudy,
+): SheetReductionDrift {
+  const sheet = sheetStudy ?? studySink(c, { ...options, finRepresentation: 'sheet' });
   const cells = studySink(c, { ...options, finRepresentation: 'cells' });
   return {
     sources: sheet.sources.map((s, k) => {

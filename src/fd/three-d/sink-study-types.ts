@@ -41,6 +41,14 @@ export interface SinkPlateView {
   top_degC: Float64Array;
 }
 
+/** Temperature up every fin (finest grid): the root (junction mean) at height 0, then each layer's centre. */
+export interface SinkFinProfiles {
+  /** Heights above the plate top, m: 0 (the root), then the layer centres. */
+  height_m: Float64Array;
+  /** Per fin (in the order of `fins`), the mean temperature over its section at each height, degC. */
+  temperature_degC: Float64Array[];
+}
+
 export interface SinkStudy {
   model: 'fd-3d';
   sources: SinkSourceResult[];
@@ -63,6 +71,14 @@ export interface SinkStudy {
   finModel: string;
   /** Plan view of the plate on the finest grid. */
   plate: SinkPlateView;
+  /**
+   * Estimated relative discretisation error (Celik et al. 2008 GCI over the study's grids) of the other reported
+   * quantities: each source's maximum rise, the plate top's mean rise, each fin's heat, the sink resistance;
+   * null for a single grid (or fewer than three).
+   */
+  errors: { sourceMaxRise: (number | null)[]; plateTopMeanRise: number | null; finHeat: (number | null)[]; sinkResistance: number | null };
+  /** Temperature up each fin on the finest grid; null for a bare plate. */
+  finProfiles: SinkFinProfiles | null;
   /** Iterative solver statistics of the finest grid. */
   solver: { method: string; iterations: number; relativeResidual: number };
 }

@@ -13,6 +13,7 @@ import { buildSinkGrid, type SinkGrid } from '../../mesh/index.js';
 import { richardsonGci } from '../study/refinement.js';
 import { assembleSink, sinkUnknowns, type FinRepresentation } from './sink-system.js';
 import { checkSinkMemory, DEFAULT_MEMORY_LIMIT } from './sink-memory.js';
+import { sinkFinProfiles } from './sink-fin-profiles.js';
 import { sinkPlateView } from './sink-plate-view.js';
 import { sinkProblem, type SinkProblem } from './sink-problem.js';
 import { isNonlinearSink, solveSinkSystem, type SinkGridResult } from './sink-solve.js';
@@ -58,6 +59,20 @@ export function studySink(c: HeatSinkCase, options: SinkStudyOptions = {}): Sink
   return sinkStudyFrom(problem, results, sizes, representation);
 }
 
+/** Unknowns of the finest grid a study with these options would solve (nothing is allocated). */
+export function sinkStudyUnknowns(c: HeatSinkCase, options: SinkStudyOptions = {}): number {
+  const problem = sinkProblem(c);
+  const grids = options.grids ?? DEFAULT_GRIDS;
+  const cellSize = options.cellSize ?? Math.min(c.plate.width, c.plate.length) / CELLS_PER_SIDE;
+  const finest = buildSinkGrid(problem.layout, {
+    cellSize,
+    plateLayers: options.plateLayers ?? PLATE_LAYERS,
+    finLayers: options.finLayers ?? FIN_LAYERS,
+    refine: 2 ** (grids - 1),
+  });
+  return sinkUnknowns(finest, options.finRepresentation ?? 'sheet', problem.layout.finKind);
+}
+
 /** The SinkStudy of grid results given finest first, with their representative cell sizes. */
 export function sinkStudyFrom(problem: SinkProblem, results: SinkGridResult[], sizes: number[], representation: FinRepresentation): SinkStudy {
   const fine = results[0];
@@ -75,6 +90,9 @@ export function sinkStudyFrom(problem: SinkProblem, results: SinkGridResult[], s
     };
   });
   const maxRise = Math.max(...fine.sourceMaxRise);
+  // The GCI of every other reported quantity (relative, on rises above ambient and on heat), null below three grids.
+  const gci = (value: (r: SinkGridResult) => number): number | null =>
+    results.length >= 3 ? richardsonGci(results.map((r, g) => ({ size: sizes[g], value: value(r) }))).gci : null;
   return {
     model: 'fd-3d',
     sources,
@@ -88,6 +106,13 @@ export function sinkStudyFrom(problem: SinkProblem, results: SinkGridResult[], s
     unknowns: results.map((r) => r.unknowns),
     finModel: finModelText(problem, representation),
     plate: sinkPlateView(fine, ambient),
+    errors: {
+      sourceMaxRise: problem.sources.map((_, k) => gci((r) => r.sourceMaxRise[k])),
+      plateTopMeanRise: gci((r) => r.topMeanRise),
+      finHeat: fine.finHeat.map((_, f) => gci((r) => r.finHeat[f])),
+      sinkResistance: gci((r) => Math.max(...r.sourceMaxRise) / r.totalHeat),
+    },
+    finProfiles: sinkFinProfiles(fine, problem.layout.finKind, representation, ambient),
     solver: { method: fine.method, iterations: fine.iterations, relativeResidual: fine.relativeResidual },
   };
 }
