@@ -218,23 +218,69 @@ function solveSchema(): Schema {
     centreline: arr(profilePoint),
     surface: arr(profilePoint),
   });
-  return { oneOf: [oneD, twoD] };
+  // A heat sink (fd-3d on its three nested grids).
+  const sink = obj({
+    case: str,
+    kind: { const: 'heat-sink' },
+    model: { const: 'fd-3d' },
+    finModel: str,
+    unknowns: arr(int),
+    sources: arr(
+      obj({
+        name: str,
+        power_W: num,
+        meanTemperature_degC: num,
+        meanDiscretizationError: nullable(num),
+        observedOrder: nullable(num),
+        maxTemperature_degC: num,
+        maxDiscretizationError: nullable(num),
+      }),
+    ),
+    fins: arr(obj({ index: int, heatRate_W: num, heatRateDiscretizationError: nullable(num), rootTemperature_degC: num })),
+    plateTopMeanTemperature_degC: num,
+    plateTopMeanDiscretizationError: nullable(num),
+    sinkResistance_KperW: num,
+    sinkResistanceDiscretizationError: nullable(num),
+    totalHeat_W: num,
+    finsHeat_W: num,
+    plateHeat_W: num,
+    energyBalance: num,
+    solver: obj({ method: str, iterations: int, relativeResidual: num }),
+    cautions: arr(str),
+    warnings: arr(warning),
+  });
+  return { oneOf: [oneD, twoD, sink] };
 }
 
 /** `map --json` (the content of map.json). */
 function mapSchema(): Schema {
   const axis = obj({ key: str, unit: str, log: bool, values: arr(num), caseValue: nullable(num) });
-  const reference = obj({ model: oneOfWords('fd-1d', 'fd-2d'), heatRate_W: num, efficiency: nullable(num), discretizationError: num, resolved: bool });
-  const model = obj({ model: oneOfWords(...shortcutIds, 'fd-1d'), heatRate_W: num, efficiency: nullable(num), drift: num, verdict });
+  // A heat-sink map adds the sink's resistance and hottest temperature (reference) and each model's resistance and worst source.
+  const reference = obj(
+    {
+      model: oneOfWords('fd-1d', 'fd-2d', 'fd-3d'),
+      heatRate_W: num,
+      efficiency: nullable(num),
+      discretizationError: num,
+      resolved: bool,
+      sinkResistance_KperW: num,
+      maxTemperature_degC: num,
+    },
+    ['sinkResistance_KperW', 'maxTemperature_degC'],
+  );
+  const model = obj({ model: str, heatRate_W: num, efficiency: nullable(num), drift: num, verdict, sinkResistance_KperW: num, worstSource: str }, [
+    'sinkResistance_KperW',
+    'worstSource',
+  ]);
   const solved = obj({ x: nullable(num), y: nullable(num), biot: nullable(num), mL: nullable(num), reference, models: arr(model) });
   return obj(
     {
       case: str,
-      reference: oneOfWords('fd-1d', 'fd-2d'),
+      reference: oneOfWords('fd-1d', 'fd-2d', 'fd-3d'),
       tolerance: num,
       x: axis,
       y: axis,
-      models: arr(oneOfWords(...shortcutIds, 'fd-1d')),
+      models: arr(str),
       shortcutGuess: nullable(oneOfWords('base')),
       casePoint: solved,
       summary: obj({

@@ -145,6 +145,28 @@ describe('solve, map, optimize', () => {
     await expectExtraKeyRefused('solve', await jsonOf('solve', plate, '--json'), (d) => d);
   });
 
+  it('a heat sink: solve and map (a sink key swept) match the solve and map schemas', async () => {
+    const solved = (await jsonOf('solve', sink, '--json')) as { model: string };
+    expect(solved.model).toBe('fd-3d');
+    await expectValid('solve', solved);
+    await expectExtraKeyRefused('solve', solved, (d) => d.solver as Record<string, unknown>);
+    const mapped = (await jsonOf(
+      'map',
+      sink,
+      '--x',
+      'array.count=3:4',
+      '--y',
+      'convection.h=20:60',
+      '--steps',
+      '2',
+      '--json',
+      '--out',
+      join(tmp, 'sink-map'),
+    )) as { reference: string };
+    expect(mapped.reference).toBe('fd-3d');
+    await expectValid('map', mapped);
+  });
+
   it('map matches the map schema', async () => {
     const out = join(tmp, 'map');
     const doc = await jsonOf(
