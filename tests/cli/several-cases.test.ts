@@ -144,6 +144,16 @@ describe('check with several cases', () => {
   });
 });
 
+describe('the demo variants (README)', () => {
+  it('check demo/inverter-plate-fin.yaml demo/variants/ compares the demo fin and its two variants', async () => {
+    const r = await cli('check', 'demo/inverter-plate-fin.yaml', 'demo/variants/', '--reference', '1d');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('3 cases');
+    expect(r.stdout).toContain('Inverter fin, 1.5 mm');
+    expect(r.stdout).toContain('Inverter fin, 60 mm long');
+  });
+});
+
 describe('report with several cases', () => {
   it('writes one report comparing them: the cases and verdicts side by side, the profiles overlaid', async () => {
     const out = join(tmp, 'compare-report');
