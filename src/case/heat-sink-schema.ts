@@ -275,6 +275,8 @@ function buildHeatSinkSchema(lengthUnit: LengthUnit) {
       sources: sourcesSchema,
       convection: convectionSchema,
       units: shared.units,
+      display: shared.display,
+      extends: shared.extends,
     },
     'a heat-sink case',
     'A fincheck heat-sink case (format 1): identical fins on a rectangular plate heated by sources on its underside; ' +

@@ -7,6 +7,7 @@
  * Units as in types.ts: SI lengths (m), W, W/(m*K), W/(m^2*K), m^2*K/W; absolute temperatures in degC with the
  * suffix `_degC`.
  */
+import type { DisplayUnits } from './display-units.js';
 import type { CaseWarning, HDistribution, Material, Profile, TipCondition } from './types.js';
 
 /** Fin profiles an array may use: the straight ones (running the whole plate length) and the pins. */
@@ -72,4 +73,6 @@ export interface HeatSinkCase {
   sources: readonly HeatSource[];
   convection: SinkConvection;
   warnings?: readonly CaseWarning[];
+  /** The units to show numbers in: the case's `display` key over what its inputs suggest (absent: the default, mm and SI). */
+  display?: DisplayUnits;
 }

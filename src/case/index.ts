@@ -50,3 +50,20 @@ export {
 export type { Range } from './fields.js';
 export type { Case, HDistribution, Profile, TipCondition, Conductivity, Edges, Convection, Material, TabulatedProfile } from './types.js';
 export type { CaseWarning } from './types.js';
+export {
+  arrayInUnit,
+  defaultDisplayUnits,
+  detectDisplaySystem,
+  displayKinds,
+  displaySystem,
+  displaySystems,
+  displayUnitChoices,
+  inUnit,
+  isDisplaySystem,
+  resolveDisplayUnits,
+  type DisplayKind,
+  type DisplaySystem,
+  type DisplayUnit,
+  type DisplayUnits,
+} from './display-units.js';
+export { deepMerge, hasExtends, maxExtendsDepth, resolveExtends } from './extends.js';

@@ -15,6 +15,8 @@ import { getByKeyPath } from './key-path.js';
 import { dimensionWarnings } from './plausibility.js';
 import { caseSchemaFor } from './schema.js';
 import { isHeatSinkObject } from './heat-sink-detect.js';
+import { resolveExtends } from './extends.js';
+import { detectDisplaySystem, resolveDisplayUnits } from './display-units.js';
 import { isLengthUnit, type LengthUnit } from './units.js';
 import type { Case } from './types.js';
 
@@ -30,7 +32,8 @@ export interface ParseOptions {
  * `locate` maps a key path to its line and column in the source, when there is one.
  * Throws InputError listing every issue.
  */
-export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
+export function parseCaseObject(given: unknown, givenLocate?: Locate, options: ParseOptions = {}): Case {
+  const { raw, locate } = resolveExtends(given, options.file, givenLocate);
   if (isHeatSinkObject(raw)) {
     const accepted =
       'a single-fin case (keys fin, material, convection and base): a case with an array key is a heat sink, and only single-fin cases are taken here';
@@ -47,7 +50,7 @@ export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOpt
   const c = toCase(result.data, defaultName);
   const nameWarning = caseName(result.data.name, defaultName).warning;
   const warnings = [...(nameWarning ? [nameWarning] : []), ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined)];
-  return { ...c, warnings };
+  return { ...c, warnings, display: resolveDisplayUnits(result.data.display, detectDisplaySystem(raw)) };
 }
 
 /**

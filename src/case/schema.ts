@@ -27,6 +27,17 @@ import {
 import { nearWords } from './spelling.js';
 import { findMaterial, materialNames, similarMaterialNames } from './materials.js';
 import { lengthUnits, type LengthUnit } from './units.js';
+import { displayKinds, displayUnitChoices, type DisplayKind } from './display-units.js';
+
+const displayDescriptions: Record<DisplayKind, string> = {
+  length: 'Lengths shown in',
+  temperature: 'Temperatures shown in (differences follow: K, or degF for degF)',
+  heat: 'Heat rates shown in',
+  h: 'Heat-transfer coefficients shown in',
+  k: 'Thermal conductivities shown in',
+  flux: 'Heat fluxes shown in',
+  resistance: 'Thermal resistances (a heat sink) shown in',
+};
 
 export const profileNames = [
   'rectangular',
@@ -342,8 +353,31 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
     'units',
     'Units of bare numbers in this case; default SI (m)',
   ).optional();
+  const displaySchema = mapping(
+    Object.fromEntries(
+      displayKinds.map((kind) => [kind, word(Object.keys(displayUnitChoices[kind]) as [string, ...string[]], displayDescriptions[kind]).optional()]),
+    ) as Record<DisplayKind, z.ZodOptional<ReturnType<typeof word<[string, ...string[]]>>>>,
+    'display',
+    'Units the text, charts, maps and reports show (JSON stays SI). Default: lengths in mm and SI, or US units ' +
+      '(in, degF, BTU/h) when the inputs are written mostly in US units; a units option of the command line overrides it',
+  ).optional();
+  const extendsSchema = z
+    .string()
+    .optional()
+    .describe(
+      'A case file this case inherits from, relative to this file: its keys are merged under this one (mappings key by key, lists and values replace; name is not inherited)',
+    );
   // The keys a heat-sink case shares with a single-fin case (heat-sink-schema.ts).
-  const shared = { name: nameSchema, units: unitsSchema, material: materialSchema, h: hSchema, tip: tipSchema, coefficient };
+  const shared = {
+    name: nameSchema,
+    units: unitsSchema,
+    display: displaySchema,
+    extends: extendsSchema,
+    material: materialSchema,
+    h: hSchema,
+    tip: tipSchema,
+    coefficient,
+  };
 
   const caseMapping = mapping(
     {
@@ -353,6 +387,8 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
       convection: convectionSchema,
       base: baseSchema,
       units: unitsSchema,
+      display: displaySchema,
+      extends: extendsSchema,
     },
     'a case',
     'A fincheck case (format 1): one fin and its surroundings. A bare number is SI (m, W/(m*K), W/(m^2*K), ' +

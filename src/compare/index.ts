@@ -29,3 +29,12 @@ export { sinkSolveReport, type SinkSolveFin, type SinkSolveReport, type SinkSolv
 export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
 export { sheetReductionRow, SHEET_DRIFT_BUDGET } from './sink-sheet-row.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
+export {
+  comparisonCsv,
+  comparisonTable,
+  formatComparison,
+  type CaseOutcome,
+  type ComparisonCell,
+  type ComparisonRow,
+  type ComparisonTable,
+} from './compare-cases.js';

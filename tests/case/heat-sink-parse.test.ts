@@ -471,7 +471,19 @@ describe('a bare plate', () => {
 describe('the heat-sink JSON schema', () => {
   it('describes every top-level key of the contract', () => {
     const schema = heatSinkJsonSchema() as { properties: Record<string, unknown>; required: string[] };
-    expect(Object.keys(schema.properties).sort()).toEqual(['array', 'convection', 'fin', 'material', 'name', 'plate', 'sources', 'units']);
+    // display and extends: issue 13.
+    expect(Object.keys(schema.properties).sort()).toEqual([
+      'array',
+      'convection',
+      'display',
+      'extends',
+      'fin',
+      'material',
+      'name',
+      'plate',
+      'sources',
+      'units',
+    ]);
     expect(schema.required.sort()).toEqual(['array', 'convection', 'plate', 'sources']);
   });
 });

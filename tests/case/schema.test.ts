@@ -31,8 +31,8 @@ describe('caseJsonSchema', () => {
 
   it('is a draft 2020-12 schema of a strict mapping with the contract keys', () => {
     expect((schema as Record<string, unknown>)['$schema']).toBe('https://json-schema.org/draft/2020-12/schema');
-    // units (bare-length unit, issue 9) was added after the contract's five keys.
-    expect(Object.keys(schema.properties ?? {})).toEqual(['name', 'fin', 'material', 'convection', 'base', 'units']);
+    // units (bare-length unit, issue 9) was added after the contract's five keys; display and extends by issue 13.
+    expect(Object.keys(schema.properties ?? {})).toEqual(['name', 'fin', 'material', 'convection', 'base', 'units', 'display', 'extends']);
     expect(schema.required).toEqual(['fin', 'material', 'convection', 'base']);
     expect(schema.additionalProperties).toBe(false);
   });
