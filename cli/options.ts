@@ -3,7 +3,7 @@
  * names the option, the value and what is accepted (exit 2).
  */
 import { z } from 'zod';
-import { clip, quoted } from '../src/case/index.js';
+import { clip, defaultDisplayUnits, displaySystem, displaySystems, quoted, type DisplayUnits } from '../src/case/index.js';
 import { UsageError } from '../src/errors.js';
 
 /** "2%", "2 %", "0.02": a relative tolerance in (0, 1). */
@@ -47,3 +47,21 @@ export const gridOption = z
     return { nx, ny };
   })
   .refine((g) => g.nx >= 2 && g.ny >= 2 && g.nx <= 20000 && g.ny <= 20000);
+
+/** --units si|mm|us: the units text, charts, maps and reports show (JSON stays SI). */
+export const unitsOption = z.enum(displaySystems);
+export const unitsHelp = 'units shown: si (lengths in m), mm (lengths in mm, the rest SI) or us (in, degF, BTU/h); JSON stays SI';
+
+/**
+ * The display units of a run: --units when given, else the case's own (its `display` key over what its inputs
+ * suggest), else the default (mm and SI).
+ */
+/** The case with --units as its display units (charts and reports read them from the case); unchanged without --units. */
+export function withDisplayUnits<C extends { display?: DisplayUnits }>(c: C, flag: string | undefined): C {
+  return flag === undefined ? c : { ...c, display: displayUnitsOf(flag, undefined) };
+}
+
+export function displayUnitsOf(flag: string | undefined, caseUnits: DisplayUnits | undefined): DisplayUnits {
+  if (flag !== undefined) return displaySystem(parseOption('--units', unitsOption, flag, 'si, mm or us'));
+  return caseUnits ?? defaultDisplayUnits;
+}

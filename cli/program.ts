@@ -1,18 +1,35 @@
-/** The `fincheck` program: one command a file under cli/commands/. */
+/**
+ * The `fincheck` program: one command a file under cli/commands/. A run loads only the command it names (each
+ * command file and what it imports is its own chunk of the bundle, scripts/build.mjs): `fincheck check` does not
+ * load the report, the charts or the 2-D and 3-D solvers' callers of other commands. Help on the whole program, `help`, or a
+ * name that is no command load them all (commander lists them, or suggests the nearest).
+ */
 import { Command, type OutputConfiguration } from 'commander';
 import type { Io, SetExit } from './io.js';
-import { registerCheck } from './commands/check.js';
-import { registerSolve } from './commands/solve.js';
-import { registerMaterials } from './commands/materials.js';
-import { registerSchema } from './commands/schema.js';
-import { registerDemo } from './commands/demo.js';
-import { registerPlot } from './commands/plot.js';
-import { registerReport } from './commands/report.js';
-import { registerMap } from './commands/map.js';
-import { registerOptimize } from './commands/optimize.js';
 import { VERSION } from '../src/version.js';
 
-export function buildProgram(io: Io, setExit: SetExit): Command {
+type Register = (program: Command, io: Io, setExit: SetExit) => Command;
+
+/** The commands in the order help lists them, each loaded on demand. */
+const COMMANDS: ReadonlyArray<readonly [name: string, load: () => Promise<Register>]> = [
+  ['check', async () => (await import('./commands/check.js')).registerCheck],
+  ['solve', async () => (await import('./commands/solve.js')).registerSolve],
+  ['materials', async () => (await import('./commands/materials.js')).registerMaterials],
+  ['schema', async () => (await import('./commands/schema.js')).registerSchema],
+  ['plot', async () => (await import('./commands/plot.js')).registerPlot],
+  ['report', async () => (await import('./commands/report.js')).registerReport],
+  ['demo', async () => (await import('./commands/demo.js')).registerDemo],
+  ['map', async () => (await import('./commands/map.js')).registerMap],
+  ['optimize', async () => (await import('./commands/optimize.js')).registerOptimize],
+];
+
+/** The command `argv` names (its first word that is not an option), when it is one of ours; else null. */
+function namedCommand(argv: readonly string[]): string | null {
+  const word = argv.find((a) => !a.startsWith('-'));
+  return word !== undefined && COMMANDS.some(([name]) => name === word) ? word : null;
+}
+
+export async function buildProgram(io: Io, setExit: SetExit, argv: readonly string[]): Promise<Command> {
   const program = new Command();
   program
     .name('fincheck')
@@ -25,17 +42,10 @@ export function buildProgram(io: Io, setExit: SetExit): Command {
     .exitOverride()
     .showHelpAfterError('fincheck: run with --help for usage and examples')
     .configureOutput(output(io));
-  for (const register of [
-    registerCheck,
-    registerSolve,
-    registerMaterials,
-    registerSchema,
-    registerPlot,
-    registerReport,
-    registerDemo,
-    registerMap,
-    registerOptimize,
-  ]) {
+  const named = namedCommand(argv);
+  const wanted = COMMANDS.filter(([name]) => named === null || name === named);
+  const registers = await Promise.all(wanted.map(([, load]) => load()));
+  for (const register of registers) {
     const cmd = register(program, io, setExit);
     cmd.exitOverride().configureOutput(output(io));
   }

@@ -16,13 +16,14 @@ import {
   removeFiles,
   staleFiles,
   StagedFiles,
+  runInDisplayUnits,
 } from '../../src/map/index.js';
 import { asUsageError } from '../../src/report/index.js';
 import { parseAnyCaseText } from '../../src/case/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { Interrupted, interruptExitCode, listenForInterrupt } from '../interrupt.js';
 import type { Io, SetExit } from '../io.js';
-import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp } from '../options.js';
 
 const modelIds = [
   'tanh-L',
@@ -83,6 +84,7 @@ interface MapOptions {
   out?: string;
   format: string;
   json?: boolean;
+  units?: string;
 }
 
 /** ./fincheck-map-<file name as a slug>. */
@@ -118,6 +120,7 @@ export function registerMap(program: Command, io: Io, setExit: SetExit): Command
     .option('--out <dir>', 'folder for map.csv, map.json and the images (default ./fincheck-map-<case>)')
     .option('--format <png|svg>', 'image format', 'png')
     .option('--json', 'print the map as one JSON document (the content of map.json) instead of the summary')
+    .option('--units <system>', `${unitsHelp}; here the charts' axes and the summary (map.csv and map.json keep the units of --x and --y)`)
     .addHelpText(
       'after',
       `
@@ -132,7 +135,7 @@ Examples:
   fincheck map demo/inverter-plate-fin.yaml --x fin.thickness=0.5:5mm --y convection.h=10:500 --log-y
   fincheck map my-fin.yaml --x fin.length=10mm:80mm --y material.k=15:400 --steps 21x21 --models tanh-Lc,convective-tip
   fincheck map my-fin.yaml --x fin.thickness=1mm:4mm --y convection.h=20:2000 --log-y --json > map.json
-  fincheck map demo/motor-drive-sink.yaml --x array.count=3:9 --y plate.thickness=2mm:8mm   # a heat sink, 7x7 points`,
+  fincheck map demo/motor-drive-sink.yaml --x "sources[0].size[0]=6mm:24mm" --y plate.thickness=2mm:8mm   # a heat sink, 7x7 points`,
     )
     .action(async (file: string, o: MapOptions) => {
       const givenSteps = o.steps === undefined ? undefined : parseOption('--steps', stepsOption, o.steps);
@@ -143,6 +146,7 @@ Examples:
       const askedJobs = o.jobs === undefined ? undefined : parseOption('--jobs', jobsOption, o.jobs, 'a whole number of threads from 1 to 256');
       const format = parseOption('--format', formatOption, o.format, 'png or svg');
       const outDir = o.out ?? defaultOutDir(file);
+      const units = o.units === undefined ? null : displayUnitsOf(o.units, undefined);
 
       // prepareMap parses and validates the text (InputError with positions, as check reports them).
       const { text: caseText, fileName } = await readCaseInput(file, io);
@@ -184,7 +188,9 @@ Examples:
           },
         });
         progress.finish();
-        const files = await renderMapFiles(run, format, () => interrupt.signal.aborted);
+        // --units shows the axes in display units; without it, in the units --x and --y were written in.
+        const shown = units === null ? run : runInDisplayUnits(run, units);
+        const files = await renderMapFiles(run, format, () => interrupt.signal.aborted, shown);
         interrupt.check();
         // Staging, committing and pruning are synchronous: a signal that arrives meanwhile waits until they end.
         // Files an earlier map listed in this folder's map.json and this one does not write go (never others).
@@ -196,7 +202,7 @@ Examples:
         const written = staged.commit();
         removeFiles(outDir, stale);
         const json = files.find((f) => f.name === MANIFEST_NAME)?.data;
-        io.out(o.json && typeof json === 'string' ? json : formatMapSummary(run, written));
+        io.out(o.json && typeof json === 'string' ? json : formatMapSummary(shown, written));
       } catch (err) {
         progress.finish();
         staged.discard();

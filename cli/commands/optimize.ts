@@ -4,16 +4,16 @@
  */
 import type { Command } from 'commander';
 import { z } from 'zod';
-import { parseQuantity } from '../../src/case/index.js';
 import { chartBytes, lineChart } from '../../src/images/index.js';
 import { optimizeChartSpec } from '../../src/plots/index.js';
 import { writeFilesAtomically } from '../../src/report/index.js';
 import { parseOutFile } from './plot.js';
+import { defaultDisplayUnits, inUnit, parseAnyCaseText, parseQuantity, type DisplayUnits } from '../../src/case/index.js';
 import { optimizeFin, type Keep, type Objective, type OptimizeResult } from '../../src/design/index.js';
 import { UsageError } from '../../src/errors.js';
 import { readCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
-import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp } from '../options.js';
 
 const keepOption = z.enum(['profile-area', 'volume', 'mass', 'none']);
 const forOption = z.enum(['max-heat', 'min-material', 'required']);
@@ -29,6 +29,7 @@ interface OptimizeCliOptions {
   tolerance: string;
   json?: boolean;
   out?: string;
+  units?: string;
 }
 
 /** "12 W", "12W", "0.5 kW", "12": a heat rate in W. */
@@ -58,18 +59,18 @@ function parseBounds(list: readonly string[]): Map<string, [number, number]> {
   return bounds;
 }
 
-function mm(x: number): string {
-  return `${Number((x * 1000).toPrecision(5))} mm`;
-}
-
-export function formatOptimize(r: OptimizeResult): string {
+/** `u`: the units numbers are shown in (the JSON output stays SI). */
+export function formatOptimize(r: OptimizeResult, u: DisplayUnits = defaultDisplayUnits): string {
+  const mm = (x: number): string => `${Number(inUnit(u.length, x).toPrecision(5))} ${u.length.ascii}`;
+  const heat = (q: number): string => `${inUnit(u.heat, q).toPrecision(6)} ${u.heat.ascii}`;
+  const required = r.requiredHeat_W === null ? '' : u.heat.scale === 1 ? `${r.requiredHeat_W} W` : heat(r.requiredHeat_W);
   const lines = [`fincheck optimize: ${r.case}`];
   const goal =
     r.objective === 'max-heat'
       ? `the most heat for the ${r.keep} kept (${r.dependent} follows ${r.vary.join(', ')})`
       : r.objective === 'required'
-        ? `${r.vary.join(', ')} that removes ${r.requiredHeat_W} W`
-        : `the least material that removes ${r.requiredHeat_W} W (varying ${r.vary.join(', ')})`;
+        ? `${r.vary.join(', ')} that removes ${required}`
+        : `the least material that removes ${required} (varying ${r.vary.join(', ')})`;
   lines.push(`  goal: ${goal}`);
   lines.push(
     `  bounds: ${Object.entries(r.bounds)
@@ -84,13 +85,13 @@ export function formatOptimize(r: OptimizeResult): string {
   const err = r.reference.discretizationError === null ? 'not estimated' : `${r.reference.discretizationError.toExponential(1)} (GCI)`;
   lines.push(`Reference ${r.reference.model} (${r.reference.evaluations} refinement studies)`);
   lines.push(`  optimum     ${dims(r.reference.values)}`);
-  lines.push(`  heat rate   ${r.reference.heatRate_W.toPrecision(6)} W  (discretisation error ${err}${r.reference.resolved ? '' : ', NOT resolved'})`);
+  lines.push(`  heat rate   ${heat(r.reference.heatRate_W)}  (discretisation error ${err}${r.reference.resolved ? '' : ', NOT resolved'})`);
   lines.push('Shortcut');
   lines.push(`  optimum     ${dims(r.shortcut.values)}`);
-  lines.push(`  heat rate   ${r.shortcut.heatRate_W.toPrecision(6)} W  (the shortcut's own value)`);
+  lines.push(`  heat rate   ${heat(r.shortcut.heatRate_W)}  (the shortcut's own value)`);
   lines.push(`  method      ${r.shortcut.method}`);
   lines.push('');
-  lines.push(`The reference at the shortcut's dimensions: ${r.shortcutAtReference_W.toPrecision(6)} W`);
+  lines.push(`The reference at the shortcut's dimensions: ${heat(r.shortcutAtReference_W)}`);
   const tiny = r.reference.discretizationError !== null && Math.abs(r.loss) < 2 * r.reference.discretizationError;
   const lossWords =
     r.objective === 'max-heat'
@@ -125,6 +126,7 @@ export function registerOptimize(program: Command, io: Io): Command {
     .option('--tolerance <t>', 'tolerance of the reference studies (resolved to a tenth of it), e.g. 2%', '2%')
     .option('--json', 'print one JSON document')
     .option('--out <file>', 'also draw the heat rate against the varied key along the constraint, both curves and both optima: .png or .svg')
+    .option('--units <system>', unitsHelp)
     .addHelpText(
       'after',
       `
@@ -151,6 +153,7 @@ Examples:
       const objective: Objective = goal === 'max-heat' ? { kind: 'max-heat' } : { kind: goal, heat_W: parseHeat(o.heat as string) };
       const bounds = parseBounds(o.bounds);
       const out = o.out === undefined ? null : parseOutFile(o.out);
+      displayUnitsOf(o.units, undefined);
       const { text, fileName } = await readCaseInput(file, io);
       const result = await optimizeFin({
         caseText: text,
@@ -197,7 +200,7 @@ Examples:
         io.out(`${JSON.stringify(out === null ? result : { ...result, chartFile: out.path }, null, 2)}\n`);
         return;
       }
-      io.out(formatOptimize(result));
+      io.out(formatOptimize(result, displayUnitsOf(o.units, parseAnyCaseText(text, fileName).case.display)));
       if (out !== null) io.out(`wrote ${out.path}: heat rate against ${result.vary[0] ?? ''} along the constraint, both curves and both optima\n`);
     });
 }

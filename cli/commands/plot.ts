@@ -28,7 +28,7 @@ import { writeFilesAtomically } from '../../src/report/index.js';
 import { loadAnyCaseInput } from '../case-input.js';
 import type { Io } from '../io.js';
 import { requireReference } from '../model-coverage.js';
-import { parseOption, referenceOption, toleranceOption } from '../options.js';
+import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp, withDisplayUnits } from '../options.js';
 
 /** Canvas width and height in px at 96 dpi (the chart's layout size). */
 export const widthOption = z.coerce.number().int().min(400).max(8000);
@@ -84,6 +84,7 @@ interface PlotCliOptions {
   tolerance: string;
   reference: string;
   json?: boolean;
+  units?: string;
 }
 
 const DESCRIPTIONS: Record<PlotKind, string> = {
@@ -116,6 +117,7 @@ export function registerPlot(program: Command, io: Io): Command {
     .option('--tolerance <t>', 'drift accepted as ok, e.g. 2% or 0.02 (verdicts in the legend)', '2%')
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--json', 'print one JSON document describing the file written')
+    .option('--units <system>', unitsHelp)
     .addHelpText(
       'after',
       `
@@ -132,6 +134,7 @@ Examples:
       if (out.format === 'svg' && image.dpi !== 96) throw new UsageError('--dpi: applies to PNG output only (an SVG scales without loss)');
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
+      displayUnitsOf(o.units, undefined);
       const any = await loadAnyCaseInput(file, io);
       if (any.kind === 'heat-sink') {
         if (reference !== 'auto') throw new UsageError(`--reference ${reference}: a heat sink's reference is fd-3d; leave --reference at auto`);
@@ -146,7 +149,7 @@ Examples:
         );
         return;
       }
-      const c = any.case;
+      const c = withDisplayUnits(any.case, o.units);
       const kind = parseOption('--kind', kindOption, anyKind, `${PLOT_KINDS.join(', ')} for a single fin (plate and fin-heat are heat-sink charts)`);
       if (kind === 'heatmap') {
         const available = heatmapAvailability(c);

@@ -15,7 +15,7 @@
  *
  * For z <= 25 the two power series are divided directly; for z > 25 the correction 2 sin(mu pi) e^{-2z}
  * is below 4e-22, so 1/(1 + 2 sin(mu pi) e^{-2z}) is exact to double precision and cannot overflow.
- * Needs `await initBessel()` first (Gamma from Cephes).
+ * Gamma comes from Cephes (loaded on first use, cephes-runtime.ts).
  */
 import { gammaFunction } from './gamma.js';
 

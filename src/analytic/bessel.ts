@@ -12,7 +12,7 @@
  * Cephes `iv`/`kn` are not used: `iv` fails for some negative orders and returns 0 where I overflows,
  * and `kn` throws on underflow.
  *
- * Call `await initBessel()` once before using any function here.
+ * The Cephes library loads on the first call (cephes-runtime.ts).
  */
 import { cephesLibrary } from './cephes-runtime.js';
 import { besselIRatio } from './bessel-ratio.js';

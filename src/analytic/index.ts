@@ -1,6 +1,6 @@
 /**
  * Public API of src/analytic: every published closed form fincheck compares against, plus the special
- * functions and small numerical tools they need. Call `await initBessel()` once before using any of it.
+ * functions and small numerical tools they need. The Bessel library loads on its first use (`initBessel()` loads it ahead).
  */
 export { initBessel, isBesselReady, I0, I1, K0, K1, I0e, I1e, K0e, K1e, I2, K2, I2e, K2e, In, Kn, Ine, Kne } from './bessel.js';
 export { besselIRatio } from './bessel-ratio.js';

@@ -7,7 +7,7 @@ import type { Case } from '../case/index.js';
 import { UsageError } from '../errors.js';
 import { chartBytes } from '../images/index.js';
 import { checkPlotInput, fieldStudy, heatmapAvailability, PLOT_KINDS, plotSvg, type PlotKind, type PlotSources } from '../plots/index.js';
-import { numberOf, referenceOf, toleranceOf, wholeNumberOf, type ReferenceChoice } from './options.js';
+import { numberOf, referenceOf, toleranceOf, wholeNumberOf, withUnitsOf, type ReferenceChoice, type UnitsChoice } from './options.js';
 
 export interface ChartCallOptions {
   /** Layout size in px at 96 dpi (default 1200 x 750). */
@@ -15,6 +15,8 @@ export interface ChartCallOptions {
   height?: number;
   tolerance?: number;
   reference?: ReferenceChoice;
+  /** Display units of the axes, labels and legend (default: the case's own, mm and SI unless it says otherwise). */
+  units?: UnitsChoice;
 }
 
 /** The chart as an SVG document. */
@@ -37,7 +39,8 @@ export async function chartPng(c: Case, kind: PlotKind, options: ChartCallOption
   return new Uint8Array(await chartBytes(svg, 'png', { dpi }));
 }
 
-async function drawn(c: Case, kind: PlotKind, size: { width: number; height: number }, scale: number, options: ChartCallOptions): Promise<string> {
+async function drawn(given: Case, kind: PlotKind, size: { width: number; height: number }, scale: number, options: ChartCallOptions): Promise<string> {
+  const c = withUnitsOf(given, options.units);
   const tolerance = toleranceOf(options.tolerance);
   const reference = referenceOf(options.reference);
   let sources: PlotSources;

@@ -2,7 +2,7 @@
  * The library's options, checked the way the command line checks its flags, but named by their property
  * (`tolerance`, `reference`, ...): a UsageError says which property, the value and what is accepted.
  */
-import { clip } from '../case/index.js';
+import { clip, displaySystem, isDisplaySystem, type DisplaySystem, type DisplayUnits } from '../case/index.js';
 import { UsageError } from '../errors.js';
 
 export type ReferenceChoice = 'auto' | '1d' | '2d';
@@ -24,6 +24,15 @@ export function referenceOf(value: unknown): ReferenceChoice {
   if (value !== 'auto' && value !== '1d' && value !== '2d') refuse('reference', value, "'auto', '1d' or '2d'");
   return value;
 }
+
+/** The case with the display units asked for ('si', 'mm' or 'us'); unchanged when none is asked. */
+export function withUnitsOf<C extends { display?: DisplayUnits }>(c: C, value: unknown): C {
+  if (value === undefined) return c;
+  if (!isDisplaySystem(value)) refuse('units', value, "'si', 'mm' or 'us'");
+  return { ...c, display: displaySystem(value) };
+}
+
+export type UnitsChoice = DisplaySystem;
 
 /** A whole number in [min, max], or undefined when not given. */
 export function wholeNumberOf(name: string, value: unknown, min: number, max: number): number | undefined {

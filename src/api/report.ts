@@ -2,7 +2,7 @@
 import type { Case } from '../case/index.js';
 import { makeReport, reportDate } from '../report/index.js';
 import { VERSION } from '../version.js';
-import { numberOf, referenceOf, toleranceOf, type ReferenceChoice } from './options.js';
+import { numberOf, referenceOf, toleranceOf, withUnitsOf, type ReferenceChoice, type UnitsChoice } from './options.js';
 
 export interface ReportCallOptions {
   tolerance?: number;
@@ -15,6 +15,8 @@ export interface ReportCallOptions {
   date?: string;
   /** Also lay it out as an A4 PDF (vector charts, font embedded). */
   pdf?: boolean;
+  /** Display units (default: the case's own, mm and SI unless it says otherwise). */
+  units?: UnitsChoice;
 }
 
 export interface ReportResult {
@@ -26,7 +28,8 @@ export interface ReportResult {
   pdf: Uint8Array | null;
 }
 
-export async function report(c: Case, options: ReportCallOptions = {}): Promise<ReportResult> {
+export async function report(given: Case, options: ReportCallOptions = {}): Promise<ReportResult> {
+  const c = withUnitsOf(given, options.units);
   const content = await makeReport(c, {
     tolerance: toleranceOf(options.tolerance),
     reference: referenceOf(options.reference),

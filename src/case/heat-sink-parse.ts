@@ -6,6 +6,8 @@
 import { InputError } from '../errors.js';
 import { caseName } from './case-name.js';
 import { isHeatSinkObject } from './heat-sink-detect.js';
+import { resolveExtends } from './extends.js';
+import { detectDisplaySystem, resolveDisplayUnits } from './display-units.js';
 import { checkHeatSink } from './heat-sink-checks.js';
 import { toHeatSinkCase } from './heat-sink-normalise.js';
 import { heatSinkSchemaFor } from './heat-sink-schema.js';
@@ -22,7 +24,8 @@ import { readUncertaintyOf } from './uncertainty.js';
 export type AnyCase = { kind: 'fin'; case: Case } | { kind: 'heat-sink'; case: HeatSinkCase };
 
 /** Validates and normalises a raw heat-sink case object. Throws InputError listing every issue. */
-export function parseHeatSinkObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): HeatSinkCase {
+export function parseHeatSinkObject(given: unknown, givenLocate?: Locate, options: ParseOptions = {}): HeatSinkCase {
+  const { raw, locate } = resolveExtends(given, options.file, givenLocate);
   const result = heatSinkSchemaFor(bareLengthUnit(raw)).safeParse(raw);
   const pending = result.success ? checkHeatSink(result.data) : fromZodIssues(result.error.issues, raw);
   if (pending.length > 0 || !result.success) {
@@ -34,11 +37,17 @@ export function parseHeatSinkObject(raw: unknown, locate?: Locate, options: Pars
   if (issues.length > 0) throw new InputError(sortByPosition(toInputIssues(issues, raw, locate)), options.file);
   const nameWarning = caseName(result.data.name, defaultName).warning;
   const finWarnings = result.data.fin ? dimensionWarnings(result.data.fin, raw, result.data.units !== undefined) : [];
-  return { ...c, warnings: [...(nameWarning ? [nameWarning] : []), ...finWarnings], uncertainty };
+  return {
+    ...c,
+    warnings: [...(nameWarning ? [nameWarning] : []), ...finWarnings],
+    uncertainty,
+    display: resolveDisplayUnits(result.data.display, detectDisplaySystem(raw)),
+  };
 }
 
 /** A raw case object of either kind (a heat sink when it has an `array` key). Throws InputError. */
-export function parseAnyCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): AnyCase {
+export function parseAnyCaseObject(given: unknown, givenLocate?: Locate, options: ParseOptions = {}): AnyCase {
+  const { raw, locate } = resolveExtends(given, options.file, givenLocate);
   return isHeatSinkObject(raw)
     ? { kind: 'heat-sink', case: parseHeatSinkObject(raw, locate, options) }
     : { kind: 'fin', case: parseCaseObject(raw, locate, options) };
@@ -57,10 +66,11 @@ export function loadAnyCase(path: string): AnyCase {
 /** Parses heat-sink case text; a single-fin case is an InputError naming what is accepted. */
 export function parseHeatSinkText(text: string, fileName: string): HeatSinkCase {
   return parseTextWith(text, fileName, (raw, locate, options) => {
-    if (!isHeatSinkObject(raw)) {
+    const resolved = resolveExtends(raw, options.file, locate);
+    if (!isHeatSinkObject(resolved.raw)) {
       const accepted = 'a heat-sink case: one with an array key (array.count, or array.pins) beside plate, sources and convection';
       throw new InputError(toInputIssues([{ path: ['array'], accepted }], raw, locate), options.file);
     }
-    return parseHeatSinkObject(raw, locate, options);
+    return parseHeatSinkObject(resolved.raw, resolved.locate, options);
   });
 }

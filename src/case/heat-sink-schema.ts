@@ -276,6 +276,8 @@ function buildHeatSinkSchema(lengthUnit: LengthUnit) {
       convection: convectionSchema,
       units: shared.units,
       uncertainty: shared.uncertainty,
+      display: shared.display,
+      extends: shared.extends,
     },
     'a heat-sink case',
     'A fincheck heat-sink case (format 1): identical fins on a rectangular plate heated by sources on its underside; ' +
@@ -295,12 +297,11 @@ export function heatSinkSchemaFor(lengthUnit: LengthUnit): ReturnType<typeof bui
   return schema;
 }
 
-export const heatSinkSchema = heatSinkSchemaFor('m');
-
 /** A validated heat-sink case file: SI numbers, temperatures degC, built-in materials resolved. */
-export type ValidatedHeatSink = z.output<typeof heatSinkSchema>;
+export type ValidatedHeatSink = z.output<ReturnType<typeof buildHeatSinkSchema>>;
 
 /** JSON Schema (draft 2020-12) of the heat-sink case file. */
 export function heatSinkJsonSchema(): Record<string, unknown> {
-  return z.toJSONSchema(heatSinkSchema, { io: 'input' }) as Record<string, unknown>;
+  // Built when first asked for (not at import: a single fin's run never builds it).
+  return z.toJSONSchema(heatSinkSchemaFor('m'), { io: 'input' }) as Record<string, unknown>;
 }

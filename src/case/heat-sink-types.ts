@@ -7,6 +7,7 @@
  * Units as in types.ts: SI lengths (m), W, W/(m*K), W/(m^2*K), m^2*K/W; absolute temperatures in degC with the
  * suffix `_degC`.
  */
+import type { DisplayUnits } from './display-units.js';
 import type { CaseWarning, HDistribution, InputUncertainty, Material, Profile, TipCondition } from './types.js';
 
 /** Fin profiles an array may use: the straight ones (running the whole plate length) and the pins. */
@@ -74,4 +75,6 @@ export interface HeatSinkCase {
   warnings?: readonly CaseWarning[];
   /** Standard uncertainties of inputs (sink-numeric-inputs.ts keys), relative; absent in cases built in code (default h 25 %). */
   uncertainty?: readonly InputUncertainty[];
+  /** The units to show numbers in: the case's `display` key over what its inputs suggest (absent: the default, mm and SI). */
+  display?: DisplayUnits;
 }

@@ -1,6 +1,6 @@
 /** The case layer's public API: reading, units, validation and the built-in materials. */
 export { bareLengthUnit, loadCase, maxCaseBytes, parseCaseObject, parseCaseText, readCaseFile, readCaseStream, type ParseOptions } from './parse.js';
-export { caseJsonSchema, caseSchema, caseSchemaFor, profileNames, type ValidatedCase } from './schema.js';
+export { caseJsonSchema, caseSchemaFor, profileNames, type ValidatedCase } from './schema.js';
 export { dimensionWarning, dimensionWarnings } from './plausibility.js';
 export { clip, cleanFreeText, quoted } from './clip-text.js';
 export { formatKeyPath, getByKeyPath, parseKeyPath, setByKeyPath, type KeyPath } from './key-path.js';
@@ -27,7 +27,6 @@ export { loadAnyCase, parseAnyCaseObject, parseAnyCaseText, parseHeatSinkObject,
 export {
   finCount as sinkFinCountRange,
   heatSinkJsonSchema,
-  heatSinkSchema,
   heatSinkSchemaFor,
   rowCount as sinkRowCountRange,
   sourcePower as sourcePowerRange,
@@ -55,3 +54,20 @@ export { numericInputs, type NumericInput } from './numeric-inputs.js';
 export { DEFAULT_UNCERTAINTY, readUncertainty, readUncertaintyOf } from './uncertainty.js';
 export { sinkNumericInputs } from './sink-numeric-inputs.js';
 export type { InputUncertainty } from './types.js';
+export {
+  arrayInUnit,
+  defaultDisplayUnits,
+  detectDisplaySystem,
+  displayKinds,
+  displaySystem,
+  displaySystems,
+  displayUnitChoices,
+  inUnit,
+  isDisplaySystem,
+  resolveDisplayUnits,
+  type DisplayKind,
+  type DisplaySystem,
+  type DisplayUnit,
+  type DisplayUnits,
+} from './display-units.js';
+export { deepMerge, hasExtends, maxExtendsDepth, resolveExtends } from './extends.js';

@@ -16,6 +16,8 @@ import { dimensionWarnings } from './plausibility.js';
 import { caseSchemaFor } from './schema.js';
 import { readUncertainty } from './uncertainty.js';
 import { isHeatSinkObject } from './heat-sink-detect.js';
+import { resolveExtends } from './extends.js';
+import { detectDisplaySystem, resolveDisplayUnits } from './display-units.js';
 import { isLengthUnit, type LengthUnit } from './units.js';
 import type { Case } from './types.js';
 
@@ -31,14 +33,16 @@ export interface ParseOptions {
  * `locate` maps a key path to its line and column in the source, when there is one.
  * Throws InputError listing every issue.
  */
-export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOptions = {}): Case {
+export function parseCaseObject(given: unknown, givenLocate?: Locate, options: ParseOptions = {}): Case {
+  const { raw, locate } = resolveExtends(given, options.file, givenLocate);
   if (isHeatSinkObject(raw)) {
     const accepted =
       'a single-fin case (keys fin, material, convection and base): a case with an array key is a heat sink, and only single-fin cases are taken here';
     throw new InputError(toInputIssues([{ path: ['array'], accepted }], raw, locate), options.file);
   }
   const lengthUnit = bareLengthUnit(raw);
-  const result = caseSchemaFor(lengthUnit).safeParse(raw);
+  // jitless: one case is parsed per run, and compiling zod's fast path (new Function) costs more than it saves.
+  const result = caseSchemaFor(lengthUnit).safeParse(raw, { jitless: true });
   const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
   if (pending.length > 0 || !result.success) {
     throw new InputError(sortByPosition(toInputIssues(pending, raw, locate)), options.file);
@@ -49,7 +53,7 @@ export function parseCaseObject(raw: unknown, locate?: Locate, options: ParseOpt
   if (issues.length > 0) throw new InputError(sortByPosition(toInputIssues(issues, raw, locate)), options.file);
   const nameWarning = caseName(result.data.name, defaultName).warning;
   const warnings = [...(nameWarning ? [nameWarning] : []), ...dimensionWarnings(result.data.fin, raw, result.data.units !== undefined)];
-  return { ...c, warnings, uncertainty };
+  return { ...c, warnings, uncertainty, display: resolveDisplayUnits(result.data.display, detectDisplaySystem(raw)) };
 }
 
 /**

@@ -27,6 +27,17 @@ import {
 import { nearWords } from './spelling.js';
 import { findMaterial, materialNames, similarMaterialNames } from './materials.js';
 import { lengthUnits, type LengthUnit } from './units.js';
+import { displayKinds, displayUnitChoices, type DisplayKind } from './display-units.js';
+
+const displayDescriptions: Record<DisplayKind, string> = {
+  length: 'Lengths shown in',
+  temperature: 'Temperatures shown in (differences follow: K, or degF for degF)',
+  heat: 'Heat rates shown in',
+  h: 'Heat-transfer coefficients shown in',
+  k: 'Thermal conductivities shown in',
+  flux: 'Heat fluxes shown in',
+  resistance: 'Thermal resistances (a heat sink) shown in',
+};
 
 export const profileNames = [
   'rectangular',
@@ -351,10 +362,26 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
       'Standard uncertainty (one standard deviation) of inputs, by key path: relative with % or absolute with the unit, ' +
         'e.g. { convection.h: 25 %, material.k: 5 %, fin.thickness: 0.05 mm }; default convection.h: 25 %, the rest 0',
     );
+  const displaySchema = mapping(
+    Object.fromEntries(
+      displayKinds.map((kind) => [kind, word(Object.keys(displayUnitChoices[kind]) as [string, ...string[]], displayDescriptions[kind]).optional()]),
+    ) as Record<DisplayKind, z.ZodOptional<ReturnType<typeof word<[string, ...string[]]>>>>,
+    'display',
+    'Units the text, charts, maps and reports show (JSON stays SI). Default: lengths in mm and SI, or US units ' +
+      '(in, degF, BTU/h) when the inputs are written mostly in US units; a units option of the command line overrides it',
+  ).optional();
+  const extendsSchema = z
+    .string()
+    .optional()
+    .describe(
+      'A case file this case inherits from, relative to this file: its keys are merged under this one (mappings key by key, lists and values replace; name is not inherited)',
+    );
   // The keys a heat-sink case shares with a single-fin case (heat-sink-schema.ts).
   const shared = {
     name: nameSchema,
     units: unitsSchema,
+    display: displaySchema,
+    extends: extendsSchema,
     material: materialSchema,
     h: hSchema,
     tip: tipSchema,
@@ -370,6 +397,8 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
       convection: convectionSchema,
       base: baseSchema,
       units: unitsSchema,
+      display: displaySchema,
+      extends: extendsSchema,
       uncertainty: uncertaintySchema,
     },
     'a case',
@@ -401,13 +430,12 @@ export function sharedSchemaFor(lengthUnit: LengthUnit): BuiltSchema['shared'] {
   return builtFor(lengthUnit).shared;
 }
 
-/** The schema of a case without `units` (bare lengths in m): its types, and what `fincheck schema` prints. */
-export const caseSchema = caseSchemaFor('m');
-
 /** The validated case file: SI numbers, temperatures degC, built-in materials resolved. */
-export type ValidatedCase = z.output<typeof caseSchema>;
+export type ValidatedCase = z.output<BuiltSchema['caseMapping']>;
 
 /** JSON Schema (draft 2020-12) of the case file, with the meaning and unit of every key. */
 export function caseJsonSchema(): Record<string, unknown> {
-  return z.toJSONSchema(caseSchema, { io: 'input' }) as Record<string, unknown>;
+  // The schema of a case without `units` (bare lengths in m). Schemas are built when first asked for (not at
+  // import: start-up), once per unit.
+  return z.toJSONSchema(caseSchemaFor('m'), { io: 'input' }) as Record<string, unknown>;
 }

@@ -5,6 +5,7 @@
  * Celsius and carry the suffix `_degC`; temperature differences are kelvin. The parser
  * (src/case/parse.ts) is the only place that knows about units and file formats.
  */
+import type { DisplayUnits } from './display-units.js';
 
 /** Fin shapes of the case-file contract (`fin.profile`). Lengths in m. */
 export type Profile =
@@ -117,4 +118,6 @@ export interface Case {
    * has the list (with the default for h); cases built in code may omit it (the default then applies).
    */
   uncertainty?: readonly InputUncertainty[];
+  /** The units to show numbers in: the case's `display` key over what its inputs suggest (absent: the default, mm and SI). */
+  display?: DisplayUnits;
 }

@@ -14,7 +14,6 @@
  * exchange with the base or neighbours).
  */
 import type { Case } from '../case/index.js';
-import { initBessel } from '../analytic/index.js';
 import { GridError, ModelNotApplicableError } from '../errors.js';
 import {
   finProblem,
@@ -54,7 +53,6 @@ export type { CheckOptions, CheckOutcome } from './check-common.js';
  * (ask modelApplies(finProblem(c), '2d') first).
  */
 export async function runCheck(c: Case, opts: CheckOptions): Promise<CheckOutcome> {
-  await initBessel();
   const problem = finProblem(c);
   return check(c, problem, await gridSolvers(problem), opts);
 }

@@ -1,10 +1,21 @@
 /** One-line, unit-bearing descriptions of a case's inputs, for terminal output and reports. */
-import type { Case, HDistribution, Profile, TipCondition } from '../case/index.js';
+import {
+  defaultDisplayUnits,
+  inUnit,
+  type Case,
+  type DisplayUnit,
+  type DisplayUnits,
+  type HDistribution,
+  type Profile,
+  type TipCondition,
+} from '../case/index.js';
 
-const mm = (m: number): string => `${+(m * 1000).toPrecision(4)} mm`;
 const num = (x: number): string => `${+x.toPrecision(4)}`;
+/** A value in SI shown in `unit`, 4 significant figures, without its unit. */
+const shown = (unit: DisplayUnit, si: number): string => num(inUnit(unit, si));
 
-export function describeProfile(p: Profile): string {
+export function describeProfile(p: Profile, u: DisplayUnits = defaultDisplayUnits): string {
+  const mm = (m: number): string => `${shown(u.length, m)} ${u.length.ascii}`;
   switch (p.kind) {
     case 'rectangular':
       return `rectangular fin, length ${mm(p.length)}, thickness ${mm(p.thickness)}, width ${mm(p.width)}`;
@@ -30,16 +41,17 @@ export function describeProfile(p: Profile): string {
 }
 
 /** h as a sentence; `reference` names the power law's reference excess (a single fin's base, a sink's fin roots). */
-export function describeH(h: HDistribution, reference = 'theta_base'): string {
+export function describeH(h: HDistribution, u: DisplayUnits = defaultDisplayUnits, reference = 'theta_base'): string {
+  const H = u.h;
   switch (h.kind) {
     case 'uniform':
-      return `h = ${num(h.h)} W/(m^2*K) uniform`;
+      return `h = ${shown(H, h.h)} ${H.ascii} uniform`;
     case 'linear':
-      return `h = ${num(h.base)} W/(m^2*K) at the base to ${num(h.tip)} at the tip (linear)`;
+      return `h = ${shown(H, h.base)} ${H.ascii} at the base to ${shown(H, h.tip)} at the tip (linear)`;
     case 'points':
-      return `h tabulated at ${h.x.length} points, ${num(Math.min(...h.h))} to ${num(Math.max(...h.h))} W/(m^2*K)`;
+      return `h tabulated at ${h.x.length} points, ${shown(H, Math.min(...h.h))} to ${shown(H, Math.max(...h.h))} ${H.ascii}`;
     case 'power':
-      return `h = ${num(h.base)} W/(m^2*K) x (theta/${reference})^${num(h.exponent)}`;
+      return `h = ${shown(H, h.base)} ${H.ascii} x (theta/${reference})^${num(h.exponent)}`;
     default: {
       const never: never = h;
       return never;
@@ -47,14 +59,14 @@ export function describeH(h: HDistribution, reference = 'theta_base'): string {
   }
 }
 
-export function describeTip(t: TipCondition): string {
+export function describeTip(t: TipCondition, u: DisplayUnits = defaultDisplayUnits): string {
   switch (t.kind) {
     case 'adiabatic':
       return 'adiabatic tip';
     case 'convective':
-      return t.h === null ? 'convective tip (local h)' : `convective tip, h = ${num(t.h)} W/(m^2*K)`;
+      return t.h === null ? 'convective tip (local h)' : `convective tip, h = ${shown(u.h, t.h)} ${u.h.ascii}`;
     case 'temperature':
-      return `tip held at ${num(t.T_degC)} degC`;
+      return `tip held at ${shown(u.temperature, t.T_degC)} ${u.temperature.ascii}`;
     case 'infinite':
       return 'infinitely long fin';
     default: {
@@ -65,24 +77,25 @@ export function describeTip(t: TipCondition): string {
 }
 
 /** Grey radiation of a radiating fin: emissivity and the surroundings' temperature (none when emissivity is 0). */
-function describeRadiation(c: Case): string {
+function describeRadiation(c: Case, u: DisplayUnits): string {
   const { emissivity, surroundings_degC, ambient_degC } = c.convection;
   if (!(emissivity > 0)) return '';
   const same = surroundings_degC === ambient_degC ? ' (the ambient)' : '';
-  return `; radiation, emissivity ${num(emissivity)}, surroundings ${num(surroundings_degC)} degC${same}`;
+  return `; radiation, emissivity ${num(emissivity)}, surroundings ${shown(u.temperature, surroundings_degC)} ${u.temperature.ascii}${same}`;
 }
 
-export function describeCase(c: Case): string[] {
+export function describeCase(c: Case, u: DisplayUnits = defaultDisplayUnits): string[] {
   const k = c.material.k;
-  const kText = k.kind === 'constant' ? `k = ${num(k.k)} W/(m*K)` : `k tabulated over temperature`;
+  const kText = k.kind === 'constant' ? `k = ${shown(u.k, k.k)} ${u.k.ascii}` : `k tabulated over temperature`;
+  const T = (t: number): string => `${shown(u.temperature, t)} ${u.temperature.ascii}`;
   const p = c.fin.profile;
   const straight = !(p.kind === 'pin' || p.kind === 'conical-pin' || p.kind === 'annular' || (p.kind === 'tabulated' && p.shape === 'pin'));
   const edges = straight ? `, ${c.fin.edges} edges` : '';
   const contact = c.base.contactResistance > 0 ? `, contact resistance ${c.base.contactResistance.toExponential(2)} m^2*K/W` : '';
   return [
-    `${describeProfile(c.fin.profile)}${edges}`,
+    `${describeProfile(c.fin.profile, u)}${edges}`,
     `${c.material.name}, ${kText} (${c.material.source})`,
-    `${describeH(c.convection.h)}${describeRadiation(c)}; ${describeTip(c.convection.tip)}`,
-    `base ${num(c.base.T_degC)} degC${contact}; ambient ${num(c.convection.ambient_degC)} degC`,
+    `${describeH(c.convection.h, u)}${describeRadiation(c, u)}; ${describeTip(c.convection.tip, u)}`,
+    `base ${T(c.base.T_degC)}${contact}; ambient ${T(c.convection.ambient_degC)}`,
   ];
 }

@@ -1,5 +1,5 @@
 /** Plain-text rendering of a check report for the terminal (the default output of `fincheck check`). */
-import type { Case } from '../case/index.js';
+import { defaultDisplayUnits, inUnit, type Case, type DisplayUnits } from '../case/index.js';
 import { describeCase } from './describe-case.js';
 import { signedPercentText } from './percent-text.js';
 import { fincheckUncertaintyLines } from './format-fin-uncertainty.js';
@@ -13,31 +13,40 @@ const lpad = (s: string, n: number): string => (s.length >= n ? s : ' '.repeat(n
 
 const MARK: Record<Flag['severity'], string> = { error: 'x', warning: '!', info: 'i' };
 
-export function formatCheck(c: Case, r: CheckReport): string {
+/** What the reference's error estimate is of: the extrapolated value (with the finest grid's GCI beside it) or the finest grid. */
+function errorBasis(ref: CheckReport['reference'], u: DisplayUnits): string {
+  return ref.heatRateFrom === 'extrapolated'
+    ? `(relative, of the extrapolated value; finest grid ${sig(inUnit(u.heat, ref.finestGridHeatRate_W))} ${u.heat.ascii}, GCI ${ref.finestGridDiscretizationError.toExponential(1)})`
+    : '(relative, GCI)';
+}
+
+/** `u`: the units numbers are shown in (the JSON output stays SI). */
+export function formatCheck(c: Case, r: CheckReport, u: DisplayUnits = defaultDisplayUnits): string {
   const out: string[] = [];
+  const heat = (q: number): string => sig(inUnit(u.heat, q));
   out.push(`fincheck check: ${r.case}`);
-  for (const line of describeCase(c)) out.push(`  ${line}`);
+  for (const line of describeCase(c, u)) out.push(`  ${line}`);
   out.push('');
   const ref = r.reference;
   const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} x ${ref.grid.ny} nodes`;
   out.push(
-    `Reference (${ref.model}): heat rate ${sig(ref.heatRate_W)} W, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness, 4)}, tip at ${ref.tipTemperature_degC.toFixed(2)} degC`,
+    `Reference (${ref.model}): heat rate ${heat(ref.heatRate_W)} ${u.heat.ascii}, efficiency ${ref.efficiency === null ? 'n/a' : ref.efficiency.toFixed(4)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness, 4)}, tip at ${inUnit(u.temperature, ref.tipTemperature_degC).toFixed(2)} ${u.temperature.ascii}`,
   );
   out.push(
-    `  estimated discretisation error ${ref.discretizationError.toExponential(1)} (relative, GCI); energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`,
+    `  estimated discretisation error ${ref.discretizationError.toExponential(1)} ${errorBasis(ref, u)}; energy balance ${ref.energyBalance.toExponential(1)}; finest grid ${grid}`,
   );
   out.push(`  ${ref.note}`);
   out.push('');
   out.push(`Shortcuts against the reference (tolerance +/-${(100 * r.tolerance).toFixed(1)} %):`);
   const label = (m: CheckReport['models'][number]): string => (m.guess ? `${m.model} (${m.guess} h)` : m.model);
   const w = Math.max(16, ...r.models.map((m) => label(m).length + 2));
-  const head = `  ${pad('model', w)}${lpad('Q [W]', 12)}${lpad('efficiency', 12)}${lpad('formula eff.', 14)}${lpad('drift', 11)}  verdict`;
+  const head = `  ${pad('model', w)}${lpad(`Q [${u.heat.ascii}]`, 12)}${lpad('efficiency', 12)}${lpad('formula eff.', 14)}${lpad('drift', 11)}  verdict`;
   out.push(head);
   out.push(`  ${'-'.repeat(head.length - 2)}`);
   for (const m of r.models) {
     const formula = m.formulaEfficiency === null ? '-' : m.formulaEfficiency.toFixed(4);
     out.push(
-      `  ${pad(label(m), w)}${lpad(sig(m.heatRate_W), 12)}${lpad(m.efficiency === null ? 'n/a' : m.efficiency.toFixed(4), 12)}${lpad(formula, 14)}${lpad(pct(m.drift), 11)}  ${m.verdict}`,
+      `  ${pad(label(m), w)}${lpad(heat(m.heatRate_W), 12)}${lpad(m.efficiency === null ? 'n/a' : m.efficiency.toFixed(4), 12)}${lpad(formula, 14)}${lpad(pct(m.drift), 11)}  ${m.verdict}`,
     );
   }
   const seen = new Set<string>();
@@ -50,7 +59,7 @@ export function formatCheck(c: Case, r: CheckReport): string {
   for (const [g, v] of guesses) {
     if (v)
       out.push(
-        `    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(v.h_W_per_m2K, 4)} W/(m^2*K), k = ${sig(v.k_W_per_mK, 4)} W/(m*K)`,
+        `    (${g} h)${' '.repeat(Math.max(1, 9 - (g ?? '').length))}${v.description}: h = ${sig(inUnit(u.h, v.h_W_per_m2K), 4)} ${u.h.ascii}, k = ${sig(inUnit(u.k, v.k_W_per_mK), 4)} ${u.k.ascii}`,
       );
   }
   for (const n of r.notApplicable) out.push(`    ${pad(n.model, 14)} not applicable: ${n.reason}`);

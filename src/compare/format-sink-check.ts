@@ -4,7 +4,7 @@
  * names its model and how accurate it is.
  */
 import { uncertaintyLines } from './format-uncertainty.js';
-import type { HeatSinkCase } from '../case/index.js';
+import { defaultDisplayUnits, inUnit, type DisplayUnit, type DisplayUnits, type HeatSinkCase } from '../case/index.js';
 import { describeH, describeProfile, describeTip } from './describe-case.js';
 import { signedPercentText } from './percent-text.js';
 import type { SinkCheckReport } from './sink-types.js';
@@ -13,14 +13,19 @@ import type { Flag } from './types.js';
 const pct = signedPercentText;
 const sig = (x: number, n = 4): string =>
   !Number.isFinite(x) ? 'n/a' : Math.abs(x) >= 1e5 || (Math.abs(x) < 1e-3 && x !== 0) ? x.toExponential(n - 1) : x.toPrecision(n);
-const mm = (x: number): string => `${Number((x * 1000).toPrecision(4))} mm`;
+/** An input value as the case gave it (SI units: the number itself; others: converted, 6 significant figures). */
+const asGiven = (unit: DisplayUnit, si: number): string =>
+  unit.scale === 1 && unit.offset === 0 ? String(si) : String(Number(inUnit(unit, si).toPrecision(6)));
 const pad = (s: string, n: number): string => (s.length >= n ? s : s + ' '.repeat(n - s.length));
 const lpad = (s: string, n: number): string => (s.length >= n ? s : ' '.repeat(n - s.length) + s);
 const MARK: Record<Flag['severity'], string> = { error: 'x', warning: '!', info: 'i' };
 
 /** The sink in a few lines: fins, plate, sources, convection. */
-export function describeSink(c: HeatSinkCase): string[] {
+export function describeSink(c: HeatSinkCase, u: DisplayUnits = defaultDisplayUnits): string[] {
   const lines: string[] = [];
+  const mm = (x: number): string => `${Number(inUnit(u.length, x).toPrecision(4))} ${u.length.ascii}`;
+  const T = (t: number): string => `${asGiven(u.temperature, t)} ${u.temperature.ascii}`;
+  const H = (h: number): string => `${asGiven(u.h, h)} ${u.h.ascii}`;
   const a = c.array;
   if (c.fin === null) lines.push('bare plate (no fins)');
   else {
@@ -28,47 +33,56 @@ export function describeSink(c: HeatSinkCase): string[] {
       a.kind === 'plates'
         ? `${a.count} plate fins at ${mm(a.pitch)} pitch`
         : `${a.rows} x ${a.columns} pins (${a.pattern}) at ${mm(a.pitch[0])} x ${mm(a.pitch[1])} pitch`;
-    lines.push(`${layout}: ${describeProfile(c.fin.profile)}, ${c.fin.material.name}`);
+    lines.push(`${layout}: ${describeProfile(c.fin.profile, u)}, ${c.fin.material.name}`);
   }
   lines.push(`plate ${mm(c.plate.width)} x ${mm(c.plate.length)} x ${mm(c.plate.thickness)}, ${c.plate.material.name}`);
   for (const s of c.sources) {
     const extra = [
       s.contactResistance > 0 ? `interface ${s.contactResistance} m^2*K/W` : '',
-      s.limit_degC !== null ? `limit ${s.limit_degC} degC` : '',
+      s.limit_degC !== null ? `limit ${T(s.limit_degC)}` : '',
     ].filter((t) => t !== '');
     lines.push(
-      `source ${s.name}: ${sig(s.power)} W over ${mm(s.size[0])} x ${mm(s.size[1])} at (${mm(s.centre[0])}, ${mm(s.centre[1])})${extra.length > 0 ? `, ${extra.join(', ')}` : ''}`,
+      `source ${s.name}: ${sig(inUnit(u.heat, s.power))} ${u.heat.ascii} over ${mm(s.size[0])} x ${mm(s.size[1])} at (${mm(s.centre[0])}, ${mm(s.centre[1])})${extra.length > 0 ? `, ${extra.join(', ')}` : ''}`,
     );
   }
   const h = c.convection.h;
-  const finH = h.kind === 'power' ? `${describeH(h, 'theta_root')}, theta_root the fins' mean root rise` : describeH(h);
-  const fins = c.fin === null ? '' : `fins: ${finH}, ${describeTip(c.convection.tip)}; `;
-  const underside = c.convection.underside === null ? 'adiabatic' : `${c.convection.underside} W/(m^2*K)`;
-  lines.push(`ambient ${c.convection.ambient_degC} degC; ${fins}exposed plate ${c.convection.plate} W/(m^2*K); underside ${underside}`);
+  const finH = h.kind === 'power' ? `${describeH(h, u, 'theta_root')}, theta_root the fins' mean root rise` : describeH(h, u);
+  const fins = c.fin === null ? '' : `fins: ${finH}, ${describeTip(c.convection.tip, u)}; `;
+  const underside = c.convection.underside === null ? 'adiabatic' : H(c.convection.underside);
+  lines.push(`ambient ${T(c.convection.ambient_degC)}; ${fins}exposed plate ${H(c.convection.plate)}; underside ${underside}`);
   return lines;
 }
 
-export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport): string {
+/** `u`: the units numbers are shown in (the JSON output stays SI). */
+export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport, u: DisplayUnits = defaultDisplayUnits): string {
   const out: string[] = [];
+  const [W, T, dT] = [u.heat.ascii, u.temperature.ascii, u.temperatureDifference.ascii];
+  const heat = (q: number): string => sig(inUnit(u.heat, q));
+  const temp = (t: number): string => inUnit(u.temperature, t).toFixed(2);
+  const rise = (d: number, n?: number): string => sig(inUnit(u.temperatureDifference, d), n);
   out.push(`fincheck check (heat sink): ${r.case}`);
-  for (const line of describeSink(c)) out.push(`  ${line}`);
+  for (const line of describeSink(c, u)) out.push(`  ${line}`);
   out.push('');
 
   const ref = r.reference;
   const grid = ref.unknowns[0] === undefined ? '' : `; finest grid ${ref.unknowns[0].toLocaleString('en-US')} unknowns`;
   out.push(
-    `Reference (fd-3d): sink resistance ${sig(r.sinkResistance_KperW)} K/W (hottest point), realised overall efficiency ${sig(r.overallEfficiency)}`,
+    `Reference (fd-3d): sink resistance ${sig(inUnit(u.resistance, r.sinkResistance_KperW))} ${u.resistance.ascii} (hottest point), realised overall efficiency ${sig(r.overallEfficiency)}`,
   );
   out.push(`  energy balance ${ref.energyBalance.toExponential(1)}${grid}`);
   out.push(`  ${ref.note}`);
   const nameWidth = Math.max(10, ...r.sources.map((s) => s.name.length + 2));
-  const sourceHead = `  ${pad('source', nameWidth)}${lpad('power [W]', 11)}${lpad('mean [degC]', 13)}${lpad('max [degC]', 12)}${lpad('rise [K]', 10)}${lpad('GCI', 10)}  limit`;
+  // Each column two wider than its header (11, 13, 12, 10 in W, degC and K).
+  const heads = [`power [${W}]`, `mean [${T}]`, `max [${T}]`, `rise [${dT}]`] as const;
+  const widths = heads.map((h) => h.length + 2) as [number, number, number, number];
+  const sourceHead = `  ${pad('source', nameWidth)}${lpad(heads[0], widths[0])}${lpad(heads[1], widths[1])}${lpad(heads[2], widths[2])}${lpad(heads[3], widths[3])}${lpad('GCI', 10)}  limit`;
   out.push(sourceHead);
   out.push(`  ${'-'.repeat(sourceHead.length - 2)}`);
   for (const s of r.sources) {
-    const limit = s.limit_degC === null || s.margin_K === null ? '-' : `${s.limit_degC} degC (margin ${sig(s.margin_K, 3)} K)`;
+    const limit =
+      s.limit_degC === null || s.margin_K === null ? '-' : `${asGiven(u.temperature, s.limit_degC)} ${T} (margin ${rise(s.margin_K, 3)} ${dT})`;
     out.push(
-      `  ${pad(s.name, nameWidth)}${lpad(sig(s.power_W), 11)}${lpad(s.meanTemperature_degC.toFixed(2), 13)}${lpad(s.maxTemperature_degC.toFixed(2), 12)}${lpad(sig(s.meanRise_K), 10)}${lpad(s.discretizationError === null ? 'n/a' : s.discretizationError.toExponential(1), 10)}  ${limit}`,
+      `  ${pad(s.name, nameWidth)}${lpad(heat(s.power_W), widths[0])}${lpad(temp(s.meanTemperature_degC), widths[1])}${lpad(temp(s.maxTemperature_degC), widths[2])}${lpad(rise(s.meanRise_K), widths[3])}${lpad(s.discretizationError === null ? 'n/a' : s.discretizationError.toExponential(1), 10)}  ${limit}`,
     );
   }
   out.push('');
@@ -76,11 +90,11 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport): string {
   out.push(`Array shortcuts against fd-3d, on each source's mean rise (tolerance +/-${(100 * r.tolerance).toFixed(1)} %; the worst source decides):`);
   const modelWidth = Math.max(30, ...r.models.map((m) => m.model.length + 2));
   const cells = r.sources.map((s) => Math.max(18, s.name.length + 2));
-  const head = `  ${pad('model', modelWidth)}${r.sources.map((s, j) => lpad(`${s.name} [K]`, cells[j] ?? 18)).join('')}${lpad('worst drift', 13)}  verdict`;
+  const head = `  ${pad('model', modelWidth)}${r.sources.map((s, j) => lpad(`${s.name} [${dT}]`, cells[j] ?? 18)).join('')}${lpad('worst drift', 13)}  verdict`;
   out.push(head);
   out.push(`  ${'-'.repeat(head.length - 2)}`);
   for (const m of r.models) {
-    const perSource = m.sourceRise_K.map((rise, j) => lpad(`${sig(rise)} (${pct(m.sourceDrift[j] ?? NaN)})`, cells[j] ?? 18)).join('');
+    const perSource = m.sourceRise_K.map((r_, j) => lpad(`${rise(r_)} (${pct(m.sourceDrift[j] ?? NaN)})`, cells[j] ?? 18)).join('');
     out.push(`  ${pad(m.model, modelWidth)}${perSource}${lpad(pct(m.drift), 13)}  ${m.verdict}`);
   }
   for (const m of r.models) {
@@ -101,7 +115,7 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport): string {
     const hottest = r.fins.reduce((best, f) => (f.rootTemperature_degC > best.rootTemperature_degC ? f : best));
     const coolest = r.fins.reduce((best, f) => (f.rootTemperature_degC < best.rootTemperature_degC ? f : best));
     out.push(
-      `Fins (fd-3d): ${r.fins.length} fins carry ${sig(heats.reduce((s, q) => s + q, 0))} W, from ${sig(Math.min(...heats))} to ${sig(Math.max(...heats))} W each; roots from ${coolest.rootTemperature_degC.toFixed(2)} degC (fin ${coolest.index}) to ${hottest.rootTemperature_degC.toFixed(2)} degC (fin ${hottest.index})`,
+      `Fins (fd-3d): ${r.fins.length} fins carry ${heat(heats.reduce((s, q) => s + q, 0))} ${W}, from ${heat(Math.min(...heats))} to ${heat(Math.max(...heats))} ${W} each; roots from ${temp(coolest.rootTemperature_degC)} ${T} (fin ${coolest.index}) to ${temp(hottest.rootTemperature_degC)} ${T} (fin ${hottest.index})`,
     );
     out.push('');
   }

@@ -31,3 +31,12 @@ export { sheetReductionRow, SHEET_DRIFT_BUDGET } from './sink-sheet-row.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
 export { fractionWords, uncertaintyLines, type UncertaintyText } from './format-uncertainty.js';
 export type { Sensitivity, UncertaintyBand, UncertaintySample } from './types.js';
+export {
+  comparisonCsv,
+  comparisonTable,
+  formatComparison,
+  type CaseOutcome,
+  type ComparisonCell,
+  type ComparisonRow,
+  type ComparisonTable,
+} from './compare-cases.js';

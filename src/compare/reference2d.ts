@@ -45,8 +45,12 @@ export function reference2D(
 ): Reference2D {
   const edges = sideEdgeCorrection(c, oneD, solve1D);
   const { cooledEdges, insulatedHeatRate1D_W: insulated1d } = edges;
-  const heatRate = study.heatRate_W + edges.edgeHeatRate_W;
-  const edgeFactor = heatRate / study.heatRate_W;
+  // The study's best value: Richardson-extrapolated where the grids give it an error estimate of its own
+  // (fd/study/refinement.ts, extrapolationError), else the finest grid's with its GCI.
+  const extrapolated = study.extrapolated;
+  const section2D = extrapolated === null ? study.heatRate_W : extrapolated.heatRate_W;
+  const heatRate = section2D + edges.edgeHeatRate_W;
+  const edgeFactor = heatRate / section2D;
   const finest = study.finest;
   // A study (never a single grid) has its refinement.
   const refinement = study.refinement as RefinementStudy;
@@ -59,21 +63,31 @@ export function reference2D(
     model: 'fd-2d',
     heatRate_W: heatRate,
     effectiveness: effectivenessOf(heatRate, effectiveness),
-    // The edge factor's own error is fd-1d's (GCI ~1e-8), added to the 2-D GCI.
-    discretizationError: refinement.gci + edges.discretizationError,
+    // The edge factor's own error is fd-1d's (GCI ~1e-8), added to the 2-D estimate.
+    discretizationError: (extrapolated === null ? refinement.gci : extrapolated.error) + edges.discretizationError,
+    heatRateFrom: extrapolated === null ? 'finest-grid' : 'extrapolated',
+    finestGridHeatRate_W: study.heatRate_W + edges.edgeHeatRate_W,
+    finestGridDiscretizationError: refinement.gci + edges.discretizationError,
     energyBalance: study.energyBalance,
     observedOrder: refinement.observedOrder,
     grid: { nx: finest.grid.nodesX, ny: finest.grid.nodesY },
-    tipTemperature_degC: finest.tipTemperature_degC,
-    note: `2-D finite volumes, ${section}, nodes ${grids}; ${refinement.note}${edgeNote}${extraNote}`,
+    tipTemperature_degC: extrapolated === null ? finest.tipTemperature_degC : extrapolated.tipTemperature_degC,
+    note: `2-D finite volumes, ${section}, nodes ${grids}; ${refinement.note}${extrapolationNote(extrapolated !== null)}${edgeNote}${extraNote}`,
   };
   const oneDRow: AssumptionRow = {
     assumption: 'one-dimensional conduction (uniform temperature across the thickness)',
-    drift: (insulated1d - study.heatRate_W) / study.heatRate_W,
+    drift: (insulated1d - section2D) / section2D,
     madeBy: ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'closed-form', 'fd-1d'],
     method: 'fd-1d vs fd-2d on the same idealisation (side edges insulated in both)',
   };
   return { reference, study, oneDRow, idealHeatRate: ideal2D };
+}
+
+/** How the reference's value was obtained, for its note. */
+function extrapolationNote(extrapolated: boolean): string {
+  return extrapolated
+    ? '; Richardson-extrapolated value, its error estimated from one more, coarser grid (Roache 1998)'
+    : '; finest-grid value (the grids support no error estimate of the extrapolated value)';
 }
 
 /** Q_ideal does not depend on the grid (exact integrals of the geometry): the coarsest grid gives it. */

@@ -56,7 +56,16 @@ export interface Solve2DReport {
   baseTemperature_degC: number;
   tipTemperature_degC: number;
   energyBalance: number;
+  /**
+   * Estimated relative error of heatRate_W: of the Richardson-extrapolated value when heatRateFrom is 'extrapolated',
+   * else the finest grid's GCI; null for one grid.
+   */
   discretizationError: number | null;
+  /** Which value heatRate_W (and the base and tip temperatures) is: the study's Richardson-extrapolated one, or the finest grid's. */
+  heatRateFrom: 'extrapolated' | 'finest-grid';
+  /** The finest grid's whole-fin heat rate, W, and its GCI (null for one grid), whichever value heatRate_W is. */
+  finestGridHeatRate_W: number;
+  finestGridDiscretizationError: number | null;
   observedOrder: number | null;
   /** Nonlinear fins only (null for a linear fin). */
   newton: Solve2DNewton | null;
@@ -89,7 +98,11 @@ export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } })
   const line = (l: Fin2DLine): ProfilePoint[] =>
     Array.from(l.x_m, (x, i) => (radial ? { r_m: x, T_degC: l.T_degC[i] as number } : { x_m: x, T_degC: l.T_degC[i] as number }));
   const correction = edgeCorrection(c, solvers);
-  const heatRate = result.heatRate_W + (correction ? correction.edgeHeatRate_W : 0);
+  const edges = correction ? correction.edgeHeatRate_W : 0;
+  // check's reference value (reference2d.ts): extrapolated where the study gives it an error estimate of its own.
+  const extrapolated = study.extrapolated;
+  const section = extrapolated === null ? result.heatRate_W : extrapolated.heatRate_W;
+  const heatRate = section + edges;
   const factor = heatRate / result.heatRate_W;
   const sectionIdeal = result.efficiency === null ? null : result.heatRate_W / result.efficiency;
   // The whole fin's Q_ideal: the section's surface plus the cooled side edges' (check's basis).
@@ -103,16 +116,20 @@ export function runSolve2D(c: Case, opts: { grid?: { nx: number; ny: number } })
       model: 'fd-2d',
       grid: { nx: result.grid.nodesX, ny: result.grid.nodesY },
       heatRate_W: heatRate,
-      sectionHeatRate_W: result.heatRate_W,
-      edgesHeatRate_W: heatRate - result.heatRate_W,
+      sectionHeatRate_W: section,
+      edgesHeatRate_W: edges,
       efficiency: ideal === null ? null : heatRate / ideal,
       efficiencyNote: efficiency.note,
       effectiveness: definedEffectiveness(result.effectiveness * factor, effectivenessBasis(c)),
       effectivenessNote: effectivenessBasis(c).note,
-      baseTemperature_degC: result.baseTemperature_degC,
-      tipTemperature_degC: result.tipTemperature_degC,
+      baseTemperature_degC: extrapolated === null ? result.baseTemperature_degC : extrapolated.baseTemperature_degC,
+      tipTemperature_degC: extrapolated === null ? result.tipTemperature_degC : extrapolated.tipTemperature_degC,
       energyBalance: result.energyBalance,
-      discretizationError: errors2D === null ? null : errors2D + (correction ? correction.discretizationError : 0),
+      discretizationError:
+        errors2D === null ? null : (extrapolated === null ? errors2D : extrapolated.error) + (correction ? correction.discretizationError : 0),
+      heatRateFrom: extrapolated === null ? 'finest-grid' : 'extrapolated',
+      finestGridHeatRate_W: result.heatRate_W + edges,
+      finestGridDiscretizationError: errors2D === null ? null : errors2D + (correction ? correction.discretizationError : 0),
       observedOrder: study.refinement === null ? null : study.refinement.observedOrder,
       newton: study.newton,
       centreline: line(result.centreline),

@@ -37,8 +37,16 @@ export interface ReferenceResult {
   effectiveness: number | null;
   /** Why the effectiveness is null; null otherwise. */
   effectivenessNote: string | null;
-  /** Estimated relative discretisation error of heatRate_W (GCI of the finest grid). */
+  /**
+   * Estimated relative discretisation error of heatRate_W: of the Richardson-extrapolated value when heatRateFrom is
+   * 'extrapolated' (from a fourth, coarser grid), else the GCI of the finest grid.
+   */
   discretizationError: number;
+  /** Which value heatRate_W (and tipTemperature_degC) is: the Richardson-extrapolated one of the study, or the finest grid's. */
+  heatRateFrom: 'extrapolated' | 'finest-grid';
+  /** The finest grid's heat rate, W, and its GCI (Celik et al. 2008), whichever value heatRate_W is. */
+  finestGridHeatRate_W: number;
+  finestGridDiscretizationError: number;
   energyBalance: number;
   observedOrder: number | null;
   /** Grid of the finest solve: nodes (1-D) or nx, ny (2-D). */

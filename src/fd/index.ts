@@ -34,7 +34,7 @@ export { solveSinkOnGrid, type SinkGridSolution } from './three-d/sink-grid-solv
 export type { Fin1DResult } from './one-d/linear-solve.js';
 export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';
 export type { Fin2DLine, Fin2DResult } from './two-d/linear-solve.js';
-export type { Fin2DGridValue } from './two-d/linear-study.js';
+export type { Extrapolated2D, Fin2DGridValue } from './two-d/linear-study.js';
 export type { Fin2DFieldViews } from './two-d/field-views.js';
 export { fieldViews } from './two-d/field-views.js';
 export { resolveFinStudy1D } from './study/resolve-study1d.js';

@@ -8,3 +8,4 @@ export { prepareMap, runMap } from './run-map.js';
 export { StagedFiles } from './staged-files.js';
 export type { MapModelId } from './types.js';
 export { MANIFEST_NAME, removeFiles, staleFiles } from './manifest.js';
+export { runInDisplayUnits } from './display-axis.js';

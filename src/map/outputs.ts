@@ -19,10 +19,16 @@ export class OutputsInterrupted extends Error {
   override name = 'OutputsInterrupted';
 }
 
-export async function renderMapFiles(run: MapRun, format: ChartFormat, shouldStop: () => boolean = () => false): Promise<OutputFile[]> {
+/** `shown`: the run as the charts show it (runInDisplayUnits); map.csv and map.json are always of `run`. */
+export async function renderMapFiles(
+  run: MapRun,
+  format: ChartFormat,
+  shouldStop: () => boolean = () => false,
+  shown: MapRun = run,
+): Promise<OutputFile[]> {
   const charts: { name: string; svg: () => string }[] = [
-    ...run.job.check.models.map((model) => ({ name: `map-${model}.${format}`, svg: () => modelChart(run, model).svg })),
-    { name: `overview.${format}`, svg: () => overviewChart(run).svg },
+    ...run.job.check.models.map((model) => ({ name: `map-${model}.${format}`, svg: () => modelChart(shown, model).svg })),
+    { name: `overview.${format}`, svg: () => overviewChart(shown).svg },
   ];
   // map.json lists every file of the set (itself included), so a later run into this folder knows what was ours.
   const names = ['map.csv', 'map.json', ...charts.map((c) => c.name)];

@@ -7,7 +7,7 @@
  */
 import type { LineChartSpec, LineSeries } from '../images/index.js';
 import type { ModelProfile } from '../compare/index.js';
-import { alongAxisTitle, lineLabel, modelStyle, thinSeries, toMillimetres } from './labels.js';
+import { alongAxisTitle, inDisplay, lineLabel, modelStyle, thinSeries, toMillimetres, unitsOf } from './labels.js';
 import { checkSubtitle, legendNote, type ChartSize, type CheckPlotInput } from './profile-chart.js';
 
 /** Fraction of the base heat rate still flowing at the marked point. */
@@ -32,14 +32,15 @@ export function positionOfRemainingFlow(p: ModelProfile, fraction = REMAINING_FR
 export function fluxChartSpec(input: CheckPlotInput, size: ChartSize): LineChartSpec {
   const { case: c, report, profiles } = input;
   const offset = profiles.baseX_m;
+  const u = unitsOf(c);
   const flow: LineSeries[] = [];
   const loss: LineSeries[] = [];
   for (const p of profiles.profiles) {
     const label = lineLabel(c, p.model, report.reference, false);
     const note = legendNote(input, p.model, false);
     const look = modelStyle(p.model, report.reference.model);
-    const f = thinSeries(toMillimetres(p.flow.x_m, offset), p.flow.values);
-    const l = thinSeries(toMillimetres(p.loss.x_m, offset), p.loss.values);
+    const f = thinSeries(toMillimetres(p.flow.x_m, offset, u), inDisplay(u.heat, p.flow.values));
+    const l = thinSeries(toMillimetres(p.loss.x_m, offset, u), inDisplay(u.heatPerLength, p.loss.values));
     flow.push({ label, x: f.x, y: f.y, note, ...look });
     loss.push({ label, x: l.x, y: l.y, note, ...look });
   }
@@ -50,12 +51,28 @@ export function fluxChartSpec(input: CheckPlotInput, size: ChartSize): LineChart
     const pct = Math.round(100 * (1 - REMAINING_FRACTION));
     if (at !== null) {
       // A vertical line through both panels: beyond it the fin carries less than a tenth of its heat.
-      const xMm = (offset + at) * 1000;
-      const where = `${c.fin.profile.kind === 'annular' ? 'r' : 'x'} = ${xMm.toFixed(1)} mm`;
+      const xMm = (offset + at) * u.length.scale;
+      const where = `${c.fin.profile.kind === 'annular' ? 'r' : 'x'} = ${xMm.toFixed(u.length.scale > 100 ? 1 : 3)} ${u.length.pretty}`;
       const label = `${pct} % of Q gone (${reference.model})`;
       const peak = (values: ArrayLike<number>): number => Math.max(0, ...Array.from(values));
-      flow.push({ label, x: [xMm, xMm], y: [0, peak(reference.flow.values)], note: where, colour: '#555555', style: 'dotted', marker: 'none' });
-      loss.push({ label, x: [xMm, xMm], y: [0, peak(reference.loss.values)], note: where, colour: '#555555', style: 'dotted', marker: 'none' });
+      flow.push({
+        label,
+        x: [xMm, xMm],
+        y: [0, peak(inDisplay(u.heat, reference.flow.values))],
+        note: where,
+        colour: '#555555',
+        style: 'dotted',
+        marker: 'none',
+      });
+      loss.push({
+        label,
+        x: [xMm, xMm],
+        y: [0, peak(inDisplay(u.heatPerLength, reference.loss.values))],
+        note: where,
+        colour: '#555555',
+        style: 'dotted',
+        marker: 'none',
+      });
     } else {
       const tip = reference.flow.values[reference.flow.values.length - 1] as number;
       // Before the caution line, which stays last.
@@ -71,8 +88,8 @@ export function fluxChartSpec(input: CheckPlotInput, size: ChartSize): LineChart
     subtitle,
     xLabel: alongAxisTitle(c),
     panels: [
-      { yLabel: 'Heat flow Q (W)', series: flow, includeZero: true },
-      { yLabel: 'Heat lost q′ (W/m)', series: loss, includeZero: true },
+      { yLabel: `Heat flow Q (${u.heat.pretty})`, series: flow, includeZero: true },
+      { yLabel: `Heat lost q′ (${u.heatPerLength.pretty})`, series: loss, includeZero: true },
     ],
     legend: 'below',
     width: size.width,

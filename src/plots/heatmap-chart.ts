@@ -7,10 +7,10 @@
  * chart of the Newton study (two-d/nonlinear-study.ts), its steps per grid in the header.
  */
 import { CHART_CAUTION } from '../compare/index.js';
-import type { Case } from '../case/index.js';
+import { arrayInUnit, inUnit, type Case } from '../case/index.js';
 import type { FinStudy2D } from '../fd/index.js';
 import type { FieldChartSpec } from '../images/index.js';
-import { alongAxisTitle, relativeError, sig } from './labels.js';
+import { alongAxisTitle, relativeError, sig, unitsOf } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
 
 export interface MirroredField {
@@ -48,11 +48,12 @@ export function mirroredField(study: FinStudy2D): MirroredField {
 
 function axisWords(c: Case): { x: string; y: string; symmetry: string; tip: string; base: string } {
   const kind = c.fin.profile.kind;
-  if (kind === 'annular') return { x: alongAxisTitle(c), y: 'Axial position z (mm)', symmetry: 'mid-plane', tip: 'r2 (rim)', base: 'r1 (tube)' };
+  const mm = unitsOf(c).length.pretty;
+  if (kind === 'annular') return { x: alongAxisTitle(c), y: `Axial position z (${mm})`, symmetry: 'mid-plane', tip: 'r2 (rim)', base: 'r1 (tube)' };
   if (kind === 'pin' || kind === 'conical-pin' || (kind === 'tabulated' && c.fin.profile.shape === 'pin')) {
-    return { x: 'Distance from the base x (mm)', y: 'Across the diameter (mm)', symmetry: 'axis', tip: 'tip', base: 'base' };
+    return { x: `Distance from the base x (${mm})`, y: `Across the diameter (${mm})`, symmetry: 'axis', tip: 'tip', base: 'base' };
   }
-  return { x: 'Distance from the base x (mm)', y: 'Across the thickness y (mm)', symmetry: 'mid-plane', tip: 'tip', base: 'base' };
+  return { x: `Distance from the base x (${mm})`, y: `Across the thickness y (${mm})`, symmetry: 'mid-plane', tip: 'tip', base: 'base' };
 }
 
 /** Newton steps per grid (coarsest first) of a nonlinear fin's study; null for a linear fin. */
@@ -63,12 +64,15 @@ function newtonSteps(study: FinStudy2D): number[] | null {
 export function heatmapChartSpec(c: Case, study: FinStudy2D, size: ChartSize, rasterScale = 1): FieldChartSpec {
   const field = mirroredField(study);
   const words = axisWords(c);
+  const u = unitsOf(c);
+  // The field's coordinates are in mm and its temperatures in °C: shown in the display units.
+  const fromMm = { ...u.length, scale: u.length.scale / 1000 };
   const r = study.finest;
   const planar = r.grid.section === 'planar';
   const steps = newtonSteps(study);
   const subtitle = [
     `fd-2d on ${r.grid.nodesX} × ${r.grid.nodesY} nodes over one half, mirrored about the ${words.symmetry}; estimated discretisation error of Q ${relativeError(study.discretizationError ?? Number.NaN)} (GCI, ${study.grids.length} grids).`,
-    `Q = ${sig(study.heatRate_W, 5)} W${planar ? ' for the section with insulated side edges' : ''}; ${c.fin.profile.kind === 'annular' ? 'rim' : 'tip'} centre ${r.tipTemperature_degC.toFixed(2)} °C.`,
+    `Q = ${sig(inUnit(u.heat, study.heatRate_W), 5)} ${u.heat.pretty}${planar ? ' for the section with insulated side edges' : ''}; ${c.fin.profile.kind === 'annular' ? 'rim' : 'tip'} centre ${inUnit(u.temperature, r.tipTemperature_degC).toFixed(2)} ${u.temperature.pretty}.`,
     r.truncatedInfinite ? 'Infinite fin: the section is cut where the field has decayed and closed by its exact slowest mode.' : '',
     steps ? `Nonlinear fin: Newton's method on every grid (${steps.join('/')} steps, coarsest to finest; relative residual ≤ 1e-10).` : '',
     CHART_CAUTION,
@@ -78,10 +82,10 @@ export function heatmapChartSpec(c: Case, study: FinStudy2D, size: ChartSize, ra
     subtitle,
     xLabel: words.x,
     yLabel: words.y,
-    valueLabel: 'Temperature T (°C)',
-    valueUnit: ' °C',
-    grid: { ni: field.ni, nj: field.nj, x: field.x_mm, y: field.y_mm, strideI: field.nj, strideJ: 1 },
-    values: field.T_degC,
+    valueLabel: `Temperature T (${u.temperature.pretty})`,
+    valueUnit: ` ${u.temperature.pretty}`,
+    grid: { ni: field.ni, nj: field.nj, x: arrayInUnit(fromMm, field.x_mm), y: arrayInUnit(fromMm, field.y_mm), strideI: field.nj, strideJ: 1 },
+    values: arrayInUnit(u.temperature, field.T_degC),
     colormap: 'viridis',
     edgeLabels: { iMin: words.base, iMax: words.tip },
     width: size.width,

@@ -2,7 +2,7 @@
  * Words and numbers on fincheck's charts: axis titles in the units engineers read (mm, °C, W, W/m),
  * model labels and legend notes, and the thinning of long node arrays into chart series.
  */
-import type { Case } from '../case/index.js';
+import { arrayInUnit, defaultDisplayUnits, inUnit, type Case, type DisplayUnits } from '../case/index.js';
 import type { ModelId, ReferenceResult } from '../compare/index.js';
 import type { LineSeries } from '../images/index.js';
 import { defaultSeriesStyle } from '../images/index.js';
@@ -31,9 +31,15 @@ export function relativeError(x: number): string {
   return Number.isFinite(x) ? x.toExponential(1) : 'not estimated';
 }
 
+/** The units a case's charts show (its display units; by default mm, °C, W). */
+export function unitsOf(c: Case): DisplayUnits {
+  return c.display ?? defaultDisplayUnits;
+}
+
 /** Title of the x axis: distance from the base, or the radius for annular fins (plots show r). */
 export function alongAxisLabel(c: Case): string {
-  return c.fin.profile.kind === 'annular' ? 'Radius r (mm)' : 'Distance from the base x (mm)';
+  const unit = unitsOf(c).length.pretty;
+  return c.fin.profile.kind === 'annular' ? `Radius r (${unit})` : `Distance from the base x (${unit})`;
 }
 
 /**
@@ -43,12 +49,13 @@ export function alongAxisLabel(c: Case): string {
 export function alongAxisTitle(c: Case): string {
   const p = c.fin.profile;
   if (p.kind !== 'annular') return alongAxisLabel(c);
-  return `${alongAxisLabel(c)}: r1 = ${millimetres(p.innerRadius)} at the tube, r2 = ${millimetres(p.outerRadius)} at the rim`;
+  const u = unitsOf(c);
+  return `${alongAxisLabel(c)}: r1 = ${shownLength(u, p.innerRadius)} at the tube, r2 = ${shownLength(u, p.outerRadius)} at the rim`;
 }
 
-/** A length in mm for a label, to 4 significant figures without trailing zeros (3.1, 12.5, 0.05). */
-function millimetres(m: number): string {
-  return String(Number((m * 1000).toPrecision(4)));
+/** A length in the display unit for a label, to 4 significant figures without trailing zeros (3.1, 12.5, 0.05). */
+function shownLength(u: DisplayUnits, m: number): string {
+  return String(Number(inUnit(u.length, m).toPrecision(4)));
 }
 
 /** The label of a model's line: the reference says so; fd-2d's temperature line is its mid-plane (pins: axis). */
@@ -73,12 +80,15 @@ export function referenceWords(reference: ReferenceResult): string {
   return `${reference.model} on ${grid}, estimated discretisation error of Q ${relativeError(reference.discretizationError)} (GCI)`;
 }
 
-/** Metres to millimetres for a whole array, shifted by `offset_m` first (annular fins: r = r1 + x). */
-export function toMillimetres(x_m: ArrayLike<number>, offset_m = 0): Float64Array {
+/** Metres to the display length unit (mm by default) for a whole array, shifted by `offset_m` first (annular fins: r = r1 + x). */
+export function toMillimetres(x_m: ArrayLike<number>, offset_m = 0, u: DisplayUnits = defaultDisplayUnits): Float64Array {
   const out = new Float64Array(x_m.length);
-  for (let i = 0; i < x_m.length; i++) out[i] = ((x_m[i] as number) + offset_m) * 1000;
+  for (let i = 0; i < x_m.length; i++) out[i] = ((x_m[i] as number) + offset_m) * u.length.scale;
   return out;
 }
+
+/** SI values of a chart series in a display unit (temperatures, heat rates). */
+export const inDisplay = arrayInUnit;
 
 /**
  * Keeps at most about `maxPoints` of a node series (every k-th node, always the first and the last),

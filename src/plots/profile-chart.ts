@@ -5,11 +5,24 @@
  * temperature is marked. Axes in mm and °C.
  */
 import { CHART_CAUTION, type ModelProfiles, type CheckReport } from '../compare/index.js';
-import type { Case } from '../case/index.js';
+import { inUnit, type Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D } from '../fd/index.js';
 import type { LineChartSpec, LineSeries, PointAnnotation } from '../images/index.js';
 import { withPointLabels, type PointLabel } from './point-labels.js';
-import { alongAxisTitle, faceLabel, isPin, lineLabel, modelStyle, referenceWords, sig, signedPercent, thinSeries, toMillimetres } from './labels.js';
+import {
+  alongAxisTitle,
+  faceLabel,
+  inDisplay,
+  isPin,
+  lineLabel,
+  modelStyle,
+  referenceWords,
+  sig,
+  signedPercent,
+  thinSeries,
+  toMillimetres,
+  unitsOf,
+} from './labels.js';
 
 export interface ChartSize {
   /** Canvas in CSS px (96 per inch). */
@@ -30,12 +43,14 @@ export interface CheckPlotInput {
 /** Legend note of a model: its heat rate, and for a shortcut its drift and verdict. */
 export function legendNote(input: CheckPlotInput, model: string, withHeatRate = true): string {
   const { report } = input;
-  if (model === report.reference.model) return withHeatRate ? `Q ${sig(report.reference.heatRate_W)} W` : 'reference';
+  const heat = unitsOf(input.case).heat;
+  const q = (w: number): string => `Q ${sig(inUnit(heat, w))} ${heat.pretty}`;
+  if (model === report.reference.model) return withHeatRate ? q(report.reference.heatRate_W) : 'reference';
   // Nonlinear fins list each shortcut twice (two guesses of h and k); the lines show the base guess.
   const row = report.models.find((m) => m.model === model && (m.guess === undefined || m.guess === 'base'));
   if (!row) return '';
   const drift = `drift ${signedPercent(row.drift)} (${row.verdict})`;
-  return withHeatRate ? `Q ${sig(row.heatRate_W)} W, ${drift}` : drift;
+  return withHeatRate ? `${q(row.heatRate_W)}, ${drift}` : drift;
 }
 
 /** Subtitle lines shared by the profile and flux charts. */
@@ -58,9 +73,11 @@ export function checkSubtitle(input: CheckPlotInput): string[] {
 
 export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineChartSpec {
   const { case: c, report, profiles } = input;
+  const u = unitsOf(c);
+  const T = u.temperature;
   const series: LineSeries[] = [];
   for (const p of profiles.profiles) {
-    const line = thinSeries(toMillimetres(p.temperature.x_m, profiles.baseX_m), p.temperature.values);
+    const line = thinSeries(toMillimetres(p.temperature.x_m, profiles.baseX_m, u), inDisplay(T, p.temperature.values));
     series.push({
       label: lineLabel(c, p.model, report.reference),
       x: line.x,
@@ -70,7 +87,7 @@ export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineCh
     });
     if (p.faceTemperature) {
       // The face of the 2-D solution: grey long dashes, so the mid-plane-to-face drop reads as a band.
-      const face = thinSeries(toMillimetres(p.faceTemperature.x_m, profiles.baseX_m), p.faceTemperature.values);
+      const face = thinSeries(toMillimetres(p.faceTemperature.x_m, profiles.baseX_m, u), inDisplay(T, p.faceTemperature.values));
       series.push({ label: faceLabel(p.model), x: face.x, y: face.y, colour: '#555555', style: 'longdash', marker: 'none' });
     }
   }
@@ -78,23 +95,28 @@ export function profileChartSpec(input: CheckPlotInput, size: ChartSize): LineCh
   const labels: PointLabel[] = [];
   const reference = profiles.profiles.find((p) => p.model === report.reference.model);
   if (reference) {
-    const tipX = (profiles.baseX_m + profiles.length_m) * 1000;
-    const tipT = reference.tipTemperature_degC;
+    const tipX = (profiles.baseX_m + profiles.length_m) * u.length.scale;
+    const tipT = inUnit(T, reference.tipTemperature_degC);
     points.push({ x: tipX, y: tipT, marker: 'circle' });
     const tipWords = c.fin.profile.kind === 'annular' ? 'rim (r2)' : 'tip';
-    labels.push({ panel: 0, x: tipX, y: tipT, text: `${tipWords} ${tipT.toFixed(2)} °C (${reference.model})` });
+    labels.push({ panel: 0, x: tipX, y: tipT, text: `${tipWords} ${tipT.toFixed(2)} ${T.pretty} (${reference.model})` });
     if (c.base.contactResistance > 0) {
-      const baseX = profiles.baseX_m * 1000;
-      const baseT = reference.temperature.values[0] as number;
+      const baseX = profiles.baseX_m * u.length.scale;
+      const baseT = inUnit(T, reference.temperature.values[0] as number);
       points.push({ x: baseX, y: baseT, marker: 'square' });
-      labels.push({ panel: 0, x: baseX, y: baseT, text: `fin base ${baseT.toFixed(2)} °C (wall ${c.base.T_degC} °C behind the contact resistance)` });
+      labels.push({
+        panel: 0,
+        x: baseX,
+        y: baseT,
+        text: `fin base ${baseT.toFixed(2)} ${T.pretty} (wall ${T.scale === 1 && T.offset === 0 ? c.base.T_degC : Number(inUnit(T, c.base.T_degC).toPrecision(6))} ${T.pretty} behind the contact resistance)`,
+      });
     }
   }
   const spec: LineChartSpec = {
     title: `Temperature along the fin: ${c.name}`,
     subtitle: checkSubtitle(input),
     xLabel: alongAxisTitle(c),
-    panels: [{ yLabel: 'Temperature T (°C)', series, points }],
+    panels: [{ yLabel: `Temperature T (${T.pretty})`, series, points }],
     width: size.width,
     height: size.height,
   };

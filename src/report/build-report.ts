@@ -3,7 +3,7 @@
  * case, the result, the check table, the assumption ledger, the flags, the plots and the
  * discretisation error. Every number names its model, its unit and its error estimate.
  */
-import type { Case } from '../case/index.js';
+import { defaultDisplayUnits, inUnit, type Case, type DisplayUnits } from '../case/index.js';
 import type { CheckReport, Flag, ModelResult } from '../compare/index.js';
 import { relativeError, sig, signedPercent, type CheckPlotInput } from '../plots/index.js';
 import { caseInputRows, prettyUnits } from './case-inputs.js';
@@ -49,19 +49,20 @@ export function flagSummary(flags: readonly Flag[]): string {
   return flags.length > 0 ? `${warned}; ${noted}; see Flags.` : `${warned}; ${noted}.`;
 }
 
-function summary(r: CheckReport): Block[] {
+function summary(r: CheckReport, u: DisplayUnits): Block[] {
+  const q = (w: number): string => `${sig(inUnit(u.heat, w), 5)} ${u.heat.pretty}`;
   const ref = r.reference;
   const counts = { ok: 0, marginal: 0, unsafe: 0, unresolved: 0 };
   for (const m of r.models) counts[m.verdict]++;
   const worst = [...r.models].sort((a, b) => Math.abs(b.drift) - Math.abs(a.drift))[0];
   const tone: Tone = !ref.resolved ? 'warning' : counts.unsafe > 0 ? 'unsafe' : counts.marginal > 0 ? 'marginal' : 'ok';
   const items = [
-    `Reference ${ref.model}: heat rate Q = ${sig(ref.heatRate_W, 5)} W, efficiency ${efficiency(ref.efficiency)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness)}, tip ${ref.tipTemperature_degC.toFixed(2)} °C; estimated discretisation error of Q ${relativeError(ref.discretizationError)} (relative, GCI).`,
+    `Reference ${ref.model}: heat rate Q = ${q(ref.heatRate_W)}, efficiency ${efficiency(ref.efficiency)}, effectiveness ${ref.effectiveness === null ? 'n/a' : sig(ref.effectiveness)}, tip ${inUnit(u.temperature, ref.tipTemperature_degC).toFixed(2)} ${u.temperature.pretty}; estimated discretisation error of Q ${relativeError(ref.discretizationError)} ${ref.heatRateFrom === 'extrapolated' ? `(relative, of the Richardson-extrapolated value; the finest grid's value ${q(ref.finestGridHeatRate_W)} has GCI ${relativeError(ref.finestGridDiscretizationError)})` : '(relative, GCI)'}.`,
     ref.resolved
       ? `${r.models.length} models checked against it at a tolerance of ±${(100 * r.tolerance).toFixed(1)} %: ${counts.ok} ok, ${counts.marginal} marginal, ${counts.unsafe} unsafe.`
       : `The reference is not resolved (estimated discretisation error above a tenth of the tolerance, ${relativeError(ref.resolution.target)}): no verdicts are given (${counts.unresolved} models unresolved).`,
   ];
-  if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${sig(worst.heatRate_W, 5)} W, ${worst.verdict}).`);
+  if (worst) items.push(`Largest drift: ${modelName(worst)}, ${signedPercent(worst.drift)} (Q = ${q(worst.heatRate_W)}, ${worst.verdict}).`);
   items.push(flagSummary(r.flags));
   return [
     {
@@ -80,14 +81,15 @@ function summary(r: CheckReport): Block[] {
   ];
 }
 
-function referenceFacts(r: CheckReport): Block {
+function referenceFacts(r: CheckReport, u: DisplayUnits): Block {
+  const W = u.heat;
   const ref = r.reference;
   const grid = 'nodes' in ref.grid ? `${ref.grid.nodes} nodes` : `${ref.grid.nx} × ${ref.grid.ny} nodes`;
   return {
     kind: 'facts',
     caption: `Reference model ${ref.model}`,
     items: [
-      ['Heat rate Q', `${sig(ref.heatRate_W, 6)} W (whole fin)`],
+      ['Heat rate Q', `${sig(inUnit(W, ref.heatRate_W), 6)} ${W.pretty} (whole fin)`],
       [
         'Efficiency',
         `${efficiency(ref.efficiency)} (Q over Q with every cooled surface at the base temperature)${ref.efficiencyNote !== null ? `; ${ref.efficiencyNote}` : ''}`,
@@ -96,10 +98,13 @@ function referenceFacts(r: CheckReport): Block {
         'Effectiveness',
         ref.effectiveness === null ? `n/a: ${ref.effectivenessNote ?? ''}` : `${sig(ref.effectiveness)} (Q over the bare base area's heat rate)`,
       ],
-      ['Tip temperature', `${ref.tipTemperature_degC.toFixed(2)} °C${ref.model === 'fd-2d' ? ' (centre of the tip)' : ''}`],
+      [
+        'Tip temperature',
+        `${inUnit(u.temperature, ref.tipTemperature_degC).toFixed(2)} ${u.temperature.pretty}${ref.model === 'fd-2d' ? ' (centre of the tip)' : ''}`,
+      ],
       [
         'Estimated discretisation error of Q',
-        `${relativeError(ref.discretizationError)} relative = ±${sig(ref.discretizationError * ref.heatRate_W, 2)} W (GCI, Celik et al. 2008)`,
+        `${relativeError(ref.discretizationError)} relative = ±${sig(ref.discretizationError * inUnit(W, ref.heatRate_W), 2)} ${W.pretty} (GCI, Celik et al. 2008)`,
       ],
       ['Observed order of accuracy', ref.observedOrder === null ? 'not determined' : ref.observedOrder.toFixed(2)],
       ['Energy balance', `${ref.energyBalance.toExponential(1)} (|Q_base − Q_surfaces| / Q_base)`],
@@ -109,19 +114,19 @@ function referenceFacts(r: CheckReport): Block {
   };
 }
 
-function checkTable(r: CheckReport): Block[] {
+function checkTable(r: CheckReport, u: DisplayUnits): Block[] {
   const row = (m: ModelResult): { cells: string[]; tone: Tone } => ({
-    cells: [modelName(m), sig(m.heatRate_W, 5), efficiency(m.efficiency), signedPercent(m.drift), m.verdict, prettyUnits(m.accuracy)],
+    cells: [modelName(m), sig(inUnit(u.heat, m.heatRate_W), 5), efficiency(m.efficiency), signedPercent(m.drift), m.verdict, prettyUnits(m.accuracy)],
     tone: m.verdict === 'unresolved' ? 'warning' : m.verdict,
   });
   const blocks: Block[] = [
-    referenceFacts(r),
+    referenceFacts(r, u),
     {
       kind: 'table',
       caption: `Models against the reference ${r.reference.model} (tolerance ±${(100 * r.tolerance).toFixed(1)} %)`,
       columns: [
         { title: 'Model', align: 'left' },
-        { title: 'Q (W)', align: 'right' },
+        { title: `Q (${u.heat.pretty})`, align: 'right' },
         { title: 'Efficiency (–)', align: 'right' },
         { title: 'Drift of Q', align: 'right' },
         { title: 'Verdict', align: 'left' },
@@ -198,9 +203,10 @@ export function buildReport(inputs: ReportInputs): ReportDocument {
   const { check, version, date } = inputs;
   const c: Case = check.case;
   const r = check.report;
+  const u = c.display ?? defaultDisplayUnits;
   const fileName = inputs.caseFile.split(/[\\/]/).pop() ?? inputs.caseFile;
   const sections: Section[] = [
-    { id: 'summary', title: 'Summary', blocks: summary(r) },
+    { id: 'summary', title: 'Summary', blocks: summary(r, u) },
     {
       id: 'case',
       title: 'The case',
@@ -218,7 +224,7 @@ export function buildReport(inputs: ReportInputs): ReportDocument {
         },
       ],
     },
-    { id: 'check', title: 'Shortcuts against the reference', blocks: checkTable(r) },
+    { id: 'check', title: 'Shortcuts against the reference', blocks: checkTable(r, u) },
     ...[uncertaintySection(r, modelName)].filter((x): x is Section => x !== null),
     { id: 'ledger', title: 'Where the drift comes from', blocks: ledger(r) },
     { id: 'flags', title: 'Flags', blocks: flags(r) },

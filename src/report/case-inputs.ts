@@ -2,20 +2,21 @@
  * The case's inputs as table rows (quantity, value with its unit, note): what the report states before
  * any result, in the units engineers read (mm, °C, W/(m²·K), W/(m·K), m²·K/W).
  */
-import type { Case, Profile } from '../case/index.js';
+import { defaultDisplayUnits, inUnit, type Case, type DisplayUnits, type Profile } from '../case/index.js';
 import { describeH, describeTip } from '../compare/index.js';
 import type { TableRow } from './document.js';
 
-const mm = (m: number): string => `${+(m * 1000).toPrecision(4)} mm`;
 const num = (x: number): string => `${+x.toPrecision(4)}`;
 /** Units written for people: W/(m^2*K) becomes W/(m²·K). */
 export const prettyUnits = (s: string): string =>
   s
     .replace(/\^2\b/g, '²')
     .replace(/([\w)²])\*(?=[\w(])/g, '$1·')
-    .replace(/\bdegC\b/g, '°C');
+    .replace(/\bdegC\b/g, '°C')
+    .replace(/\bdegF\b/g, '°F');
 
-function geometryRows(p: Profile): [string, string][] {
+function geometryRows(p: Profile, u: DisplayUnits): [string, string][] {
+  const mm = (m: number): string => `${+inUnit(u.length, m).toPrecision(4)} ${u.length.pretty}`;
   switch (p.kind) {
     case 'rectangular':
       return [
@@ -80,22 +81,25 @@ function hasEdges(p: Profile): boolean {
 /** Rows: quantity | value (with unit) | note. */
 export function caseInputRows(c: Case): TableRow[] {
   const p = c.fin.profile;
+  const u = c.display ?? defaultDisplayUnits;
+  const T = (t: number): string => `${num(inUnit(u.temperature, t))} ${u.temperature.pretty}`;
+  const k_ = (k: number): string => num(inUnit(u.k, k));
   const rows: [string, string, string][] = [['Profile', p.kind, p.kind === 'tabulated' ? `${p.shape}, linear between points` : '']];
-  for (const [q, v] of geometryRows(p)) rows.push([q, v, '']);
+  for (const [q, v] of geometryRows(p, u)) rows.push([q, v, '']);
   if (hasEdges(p))
     rows.push(['Side edges', c.fin.edges, c.fin.edges === 'cooled' ? 'the two narrow edges lose heat' : 'the two narrow edges lose no heat']);
   const k = c.material.k;
   rows.push(['Material', c.material.name, prettyUnits(c.material.source)]);
   rows.push([
     'Conductivity k',
-    k.kind === 'constant' ? `${num(k.k)} W/(m·K)` : `table of ${k.k.length} points, ${num(Math.min(...k.k))} to ${num(Math.max(...k.k))} W/(m·K)`,
+    k.kind === 'constant' ? `${k_(k.k)} ${u.k.pretty}` : `table of ${k.k.length} points, ${k_(Math.min(...k.k))} to ${k_(Math.max(...k.k))} ${u.k.pretty}`,
     '',
   ]);
-  rows.push(['Convection h', prettyUnits(describeH(c.convection.h)), '']);
-  rows.push(['Tip', prettyUnits(describeTip(c.convection.tip)), '']);
-  rows.push(['Ambient (fluid) temperature', `${num(c.convection.ambient_degC)} °C`, '']);
-  if (c.convection.emissivity > 0) rows.push(['Emissivity', num(c.convection.emissivity), `surroundings at ${num(c.convection.surroundings_degC)} °C`]);
-  rows.push(['Base temperature', `${num(c.base.T_degC)} °C`, c.base.contactResistance > 0 ? 'of the wall, behind the contact resistance' : '']);
+  rows.push(['Convection h', prettyUnits(describeH(c.convection.h, u)), '']);
+  rows.push(['Tip', prettyUnits(describeTip(c.convection.tip, u)), '']);
+  rows.push(['Ambient (fluid) temperature', T(c.convection.ambient_degC), '']);
+  if (c.convection.emissivity > 0) rows.push(['Emissivity', num(c.convection.emissivity), `surroundings at ${T(c.convection.surroundings_degC)}`]);
+  rows.push(['Base temperature', T(c.base.T_degC), c.base.contactResistance > 0 ? 'of the wall, behind the contact resistance' : '']);
   rows.push([
     'Contact resistance at the base',
     c.base.contactResistance > 0 ? `${c.base.contactResistance.toExponential(2)} m²·K/W` : 'none',

@@ -1,6 +1,7 @@
 /** The report's figures: the PNG of each chart with a caption naming its models, units and errors. */
 import type { FinStudy2D } from '../fd/index.js';
-import { alongAxisLabel, referenceWords, relativeError, sig, type CheckPlotInput, type PlotKind, REMAINING_FRACTION } from '../plots/index.js';
+import { inUnit, type DisplayUnits } from '../case/index.js';
+import { alongAxisLabel, unitsOf, referenceWords, relativeError, sig, type CheckPlotInput, type PlotKind, REMAINING_FRACTION } from '../plots/index.js';
 import type { Block, Section } from './document.js';
 
 export interface ReportFigure {
@@ -17,22 +18,24 @@ export interface ReportFigure {
 /** File name of each chart beside the reports. */
 export const FIGURE_FILES: Record<PlotKind, string> = { profile: 'profile.png', flux: 'flux.png', heatmap: 'heatmap.png', sensitivity: 'sensitivity.png' };
 
-function twoDWords(study: FinStudy2D): string {
+function twoDWords(study: FinStudy2D, u: DisplayUnits): string {
   const g = study.finest.grid;
-  return `fd-2d on ${g.nodesX} × ${g.nodesY} nodes, Q = ${sig(study.heatRate_W, 5)} W${g.section === 'planar' ? ' (section with insulated side edges)' : ''}, estimated discretisation error of Q ${relativeError(study.discretizationError ?? Number.NaN)} (GCI, ${study.grids.length} grids)`;
+  return `fd-2d on ${g.nodesX} × ${g.nodesY} nodes, Q = ${sig(inUnit(u.heat, study.heatRate_W), 5)} ${u.heat.pretty}${g.section === 'planar' ? ' (section with insulated side edges)' : ''}, estimated discretisation error of Q ${relativeError(study.discretizationError ?? Number.NaN)} (GCI, ${study.grids.length} grids)`;
 }
 
 function caption(kind: PlotKind, check: CheckPlotInput, field: FinStudy2D | null): string {
   const ref = check.report.reference;
-  const along = alongAxisLabel(check.case).replace(/ \(mm\)$/, '');
+  const u = unitsOf(check.case);
+  const [L, T, W] = [u.length.pretty, u.temperature.pretty, u.heat.pretty];
+  const along = alongAxisLabel(check.case).replace(/ \([^()]*\)$/, '');
   const omitted = check.profiles.omitted.map((o) => ` ${o.model} is not drawn: ${o.reason}.`).join('');
   switch (kind) {
     case 'profile':
-      return `Temperature T (°C) against ${along.toLowerCase()} (mm) for every model. Reference ${referenceWords(ref)}.${ref.model === 'fd-2d' ? ' fd-2d is drawn on its mid-plane (solid black) and its cooled face (grey long dashes).' : ''} The shortcuts are closed forms on the equivalent uniform fin, exact for their own assumptions; the legend gives each model's Q (W), drift and verdict.${omitted}`;
+      return `Temperature T (${T}) against ${along.toLowerCase()} (${L}) for every model. Reference ${referenceWords(ref)}.${ref.model === 'fd-2d' ? ' fd-2d is drawn on its mid-plane (solid black) and its cooled face (grey long dashes).' : ''} The shortcuts are closed forms on the equivalent uniform fin, exact for their own assumptions; the legend gives each model's Q (${W}), drift and verdict.${omitted}`;
     case 'flux':
-      return `Heat flowing along the fin Q (W, top) and heat lost per unit length q′ = h P θ (W/m, bottom) against ${along.toLowerCase()} (mm). The dotted line marks where ${Math.round(100 * (1 - REMAINING_FRACTION))} % of the reference's heat has left the fin: beyond it the fin carries little. fd-1d's Q(x) is the scheme's own interface flux; fd-2d's is its base heat rate minus the face losses summed along the face.${omitted}`;
+      return `Heat flowing along the fin Q (${W}, top) and heat lost per unit length q′ = h P θ (${u.heatPerLength.pretty}, bottom) against ${along.toLowerCase()} (${L}). The dotted line marks where ${Math.round(100 * (1 - REMAINING_FRACTION))} % of the reference's heat has left the fin: beyond it the fin carries little. fd-1d's Q(x) is the scheme's own interface flux; fd-2d's is its base heat rate minus the face losses summed along the face.${omitted}`;
     case 'heatmap':
-      return `Temperature T (°C) in the fin's section, both halves, on its true outline (a thin section is stretched across its thickness by the factor the axis states); isotherms labelled in °C.${field ? ` ${twoDWords(field)}.` : ''}`;
+      return `Temperature T (${T}) in the fin's section, both halves, on its true outline (a thin section is stretched across its thickness by the factor the axis states); isotherms labelled in ${T}.${field ? ` ${twoDWords(field, u)}.` : ''}`;
     case 'sensitivity':
       return `Sensitivities d ln Q / d ln x of the reference heat rate (${ref.model}) to every input, largest at the top; inputs with a stated uncertainty in orange, with the part of the band each gives (|S| u, one standard uncertainty). ${check.report.sensitivityMethod ?? ''}.`;
     default: {

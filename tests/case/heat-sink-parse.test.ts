@@ -471,8 +471,20 @@ describe('a bare plate', () => {
 describe('the heat-sink JSON schema', () => {
   it('describes every top-level key of the contract', () => {
     const schema = heatSinkJsonSchema() as { properties: Record<string, unknown>; required: string[] };
-    // uncertainty: added by design-questions.md (issue 12).
-    expect(Object.keys(schema.properties).sort()).toEqual(['array', 'convection', 'fin', 'material', 'name', 'plate', 'sources', 'uncertainty', 'units']);
+    // display and extends: issue 13; uncertainty: design-questions.md (issue 12).
+    expect(Object.keys(schema.properties).sort()).toEqual([
+      'array',
+      'convection',
+      'display',
+      'extends',
+      'fin',
+      'material',
+      'name',
+      'plate',
+      'sources',
+      'uncertainty',
+      'units',
+    ]);
     expect(schema.required.sort()).toEqual(['array', 'convection', 'plate', 'sources']);
   });
 });

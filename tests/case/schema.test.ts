@@ -31,8 +31,9 @@ describe('caseJsonSchema', () => {
 
   it('is a draft 2020-12 schema of a strict mapping with the contract keys', () => {
     expect((schema as Record<string, unknown>)['$schema']).toBe('https://json-schema.org/draft/2020-12/schema');
-    // units (bare-length unit, issue 9) and uncertainty (design-questions.md, issue 12) were added after the contract's five keys.
-    expect(Object.keys(schema.properties ?? {})).toEqual(['name', 'fin', 'material', 'convection', 'base', 'units', 'uncertainty']);
+    // units (bare-length unit, issue 9) was added after the contract's five keys; display and extends by issue 13;
+    // uncertainty by design-questions.md (issue 12).
+    expect(Object.keys(schema.properties ?? {})).toEqual(['name', 'fin', 'material', 'convection', 'base', 'units', 'display', 'extends', 'uncertainty']);
     expect(schema.required).toEqual(['fin', 'material', 'convection', 'base']);
     expect(schema.additionalProperties).toBe(false);
   });

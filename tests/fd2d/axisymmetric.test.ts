@@ -26,6 +26,11 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
     // Requirement 1e-4 after extrapolation; measured 4e-9 to 1.1e-5. The table has 8 digits (1e-8).
     expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(1e-4);
     expect(Math.abs(s.heatRate_W / exact - 1)).toBeLessThan(s.discretizationError);
+    // The reported extrapolated value's own error estimate (refinement.ts, extrapolationError) covers its true
+    // error; the table's 8 digits add up to 1e-8 / eta, allowed for.
+    const e = s.extrapolated;
+    expect(e).not.toBeNull();
+    expect(Math.abs((e?.heatRate_W ?? Number.NaN) / exact - 1)).toBeLessThan((e?.error ?? Number.NaN) + 1e-8 / eta);
     expect(s.heatRate.observedOrder).toBeGreaterThan(1.7);
     expect(s.energyBalance).toBeLessThan(1e-9);
   });
@@ -47,6 +52,8 @@ describe('pin fin, axisymmetric (x, r), adiabatic tip, against the exact 2-D ser
     const exact = q1d / (1 + errPercent / 100);
     // The table rounds to 0.001 % (5e-6 relative) and the extrapolation is good to ~1e-5.
     expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(2e-5);
+    // The reported extrapolated value's own error estimate covers its true error, up to the table's rounding.
+    expect(Math.abs((s.extrapolated?.heatRate_W ?? Number.NaN) / exact - 1)).toBeLessThan((s.extrapolated?.error ?? Number.NaN) + 5e-6);
     expect(s.energyBalance).toBeLessThan(1e-9);
   });
 });

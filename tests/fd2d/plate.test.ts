@@ -40,6 +40,12 @@ describe.each([
     expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(1e-4);
     // The GCI must cover the finest grid's true error (Celik et al. 2008: the purpose of Fs = 1.25).
     expect(Math.abs(s.heatRate_W / exact - 1)).toBeLessThan(s.discretizationError);
+    // The extrapolated value is the reported one: its own error estimate (one more, coarser grid; refinement.ts,
+    // extrapolationError, after Roache 1998) must cover its true error, and be tighter than the finest grid's GCI.
+    const e = s.extrapolated;
+    expect(e).not.toBeNull();
+    expect(Math.abs((e?.heatRate_W ?? Number.NaN) / exact - 1)).toBeLessThan(e?.error ?? Number.NaN);
+    expect(e?.error).toBeLessThan(s.discretizationError);
     // Observed order: formally 2, reduced by the base corner's log singularity (an independent FV check
     // in fin2d_series.py shows 1.7-1.85 on uniform grids); the default grading lifts it to 1.85-1.99.
     expect(s.heatRate.observedOrder).toBeGreaterThan(1.7);
@@ -64,6 +70,8 @@ describe('plate fin, infinite tip (exact slowest-mode closure at the cut)', () =
     const perWidth = 2 * k * THETA_B * sInf;
     // 1e-4: the requirement; the cut adds < 4e-13 (fin2dCase.ts).
     expect(Math.abs(s.extrapolatedHeatRate_W / perWidth - 1)).toBeLessThan(1e-4);
+    // The extrapolated value's own error estimate covers its true error (see above; the cut adds < 4e-13).
+    expect(Math.abs((s.extrapolated?.heatRate_W ?? Number.NaN) / perWidth - 1)).toBeLessThan(s.extrapolated?.error ?? Number.NaN);
     expect(s.finest.efficiency).toBeNull();
     expect(s.energyBalance).toBeLessThan(1e-9);
   });

@@ -76,3 +76,24 @@ describe('several sources on a bare plate', () => {
     }
   });
 });
+
+describe('special cases with a closed form of their own', () => {
+  it('a strip across the whole plate matches the strip series (Yovanovich, Muzychka & Culham 1999)', () => {
+    // The strip special case (d = b: the field depends on x and z only), a single series summed to 2e6 terms by
+    // tests/reference/strip_spreading.py: 22.512852434 K, independent of the double series above (which gives
+    // 22.512852). 1e-3: the contract's tolerance for the bare plate.
+    const strip = studySink(bare([{ centre: [0.02, 0.02], size: [0.004, 0.04], power: 10 }])).sources[0]!.refinement!.extrapolated;
+    expect(Math.abs(strip - 22.512852434) / 22.512852434).toBeLessThan(1e-3);
+  });
+
+  it('a source over the whole underside is 1-D: theta = Q (t/k + 1/h) / (a b) on every grid', () => {
+    // The series' A0 term alone (Muzychka, Culham & Yovanovich 2003: every other coefficient vanishes when the
+    // source covers the plate). The cell-centred scheme is exact for a field linear in z (the half cell in
+    // series with h at the top), so every grid gives it to the solver's precision (relative residual 1e-10).
+    const [a, b, t] = plate;
+    const exact = (10 * (t / 170 + 1 / 300)) / (a * b);
+    const study = studySink(bare([{ centre: [a / 2, b / 2], size: [a, b], power: 10 }]));
+    for (const v of study.sources[0]!.refinement!.values) expect(Math.abs(v - exact) / exact).toBeLessThan(1e-9);
+    expect(Math.abs(study.sources[0]!.maxTemperature_degC - 20 - exact) / exact).toBeLessThan(1e-9);
+  });
+});

@@ -9,7 +9,7 @@ import type { Fin1DResult } from '../one-d/linear-solve.js';
 import type { NewtonReport } from '../newton/newton-report.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 import type { Fin2DResult } from '../two-d/linear-solve.js';
-import type { Fin2DGridValue } from '../two-d/linear-study.js';
+import type { Extrapolated2D, Fin2DGridValue } from '../two-d/linear-study.js';
 import type { RefinementStudy } from './refinement.js';
 
 /** Newton's method on the grids of a nonlinear fin. */
@@ -60,6 +60,12 @@ export interface FinStudy2D extends FinStudyCommon {
   readonly efficiencyRefinement: RefinementStudy | null;
   /** Richardson-extrapolated heat rate, W (the finest heat rate for a single grid). */
   readonly extrapolatedHeatRate_W: number;
+  /**
+   * The extrapolated heat rate, efficiency and temperatures with an error estimate of the extrapolated heat rate
+   * itself (a fourth, coarser grid: refinement.ts, extrapolationError); null for a single grid or when the grids
+   * support no such estimate (then heatRate_W and discretizationError, the finest grid's, are the best known).
+   */
+  readonly extrapolated: Extrapolated2D | null;
 }
 
 export type FinStudy = FinStudy1D | FinStudy2D;

@@ -7,7 +7,8 @@
  * Newton's method for a nonlinear one, from the previous grid's solution) -> Richardson extrapolation and
  * GCI of the heat rate (refinement.ts; Celik et al. 2008, J. Fluids Eng. 130(7), 078001) -> one result.
  * Grids: 1-D, the nested node counts of DEFAULT_STUDY_NODES with grading toward a sharp tip
- * (one-d/linear-solve.ts, autoGrading); 2-D, three grids refined by 2 in both directions, sized by the
+ * (one-d/linear-solve.ts, autoGrading); 2-D, three grids refined by 2 in both directions (and one coarser grid
+ * for the error of the extrapolated values, refinement.ts extrapolationError), sized by the
  * fin's decay length (two-d/linear-study.ts, gridFamily2D; a radiating fin adds its radiative coefficient,
  * two-d/nonlinear-study.ts, sizingProblem).
  * The model must cover the fin (problem/model-applies.ts): ask modelApplies first; a model that does not
@@ -76,6 +77,7 @@ export function studyFinWith(solvers: GridSolvers, problem: FinProblem, opts: Fi
     grids: summary.grids,
     efficiencyRefinement: summary.efficiency,
     extrapolatedHeatRate_W: summary.extrapolatedHeatRate_W,
+    extrapolated: summary.extrapolated,
   };
 }
 
@@ -108,9 +110,21 @@ export function solveFinWith(solvers: GridSolvers, problem: FinProblem, grid: Fi
     refinement: null,
     discretizationError: null,
     energyBalance: r.energyBalance,
-    grids: [{ nx: grid.nx, ny: grid.ny, size: Number.NaN, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance }],
+    grids: [
+      {
+        nx: grid.nx,
+        ny: grid.ny,
+        size: Number.NaN,
+        heatRate_W: r.heatRate_W,
+        efficiency: r.efficiency,
+        energyBalance: r.energyBalance,
+        baseTemperature_degC: r.baseTemperature_degC,
+        tipTemperature_degC: r.tipTemperature_degC,
+      },
+    ],
     efficiencyRefinement: null,
     extrapolatedHeatRate_W: r.heatRate_W,
+    extrapolated: null,
   };
 }
 
@@ -141,7 +155,10 @@ function common2D(
   problem: FinProblem,
   finest: GridSolution2D,
   results: GridSolution2D[],
-): Omit<FinStudy2D, 'refinement' | 'discretizationError' | 'energyBalance' | 'grids' | 'efficiencyRefinement' | 'extrapolatedHeatRate_W'> {
+): Omit<
+  FinStudy2D,
+  'refinement' | 'discretizationError' | 'energyBalance' | 'grids' | 'efficiencyRefinement' | 'extrapolatedHeatRate_W' | 'extrapolated'
+> {
   return {
     model: 'fd-2d',
     problem,

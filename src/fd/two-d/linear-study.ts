@@ -16,7 +16,7 @@ import { fin2dProblem, type Fin2DProblem } from './problem.js';
 import { DEFAULT_GRADING, solveFin2DProblem, type Fin2DResult } from './linear-solve.js';
 import { KELVIN_OFFSET, STEFAN_BOLTZMANN } from '../problem/fin-problem.js';
 import type { NonlinearFin2DProblem } from './nonlinear-problem.js';
-import { richardsonGci, type RefinementStudy } from '../study/refinement.js';
+import { extrapolationError, richardsonGci, type RefinementStudy } from '../study/refinement.js';
 import { solveGrids } from '../study/refinement-loop.js';
 import type { SolverMethod } from '../linear-algebra/auto-solver.js';
 import type { Solver2D } from '../linear-algebra/stencil9.js';
@@ -43,6 +43,24 @@ export interface Fin2DGridValue {
   heatRate_W: number;
   efficiency: number | null;
   energyBalance: number;
+  baseTemperature_degC: number;
+  tipTemperature_degC: number;
+}
+
+/**
+ * The Richardson-extrapolated values of a study (three finest grids) with an error estimate of the extrapolated
+ * heat rate itself (one more, coarser grid: refinement.ts, extrapolationError).
+ */
+export interface Extrapolated2D {
+  /** Extrapolated heat rate, W (the study's extrapolatedHeatRate_W). */
+  heatRate_W: number;
+  /** Estimated relative error of heatRate_W (not the finest grid's GCI). */
+  error: number;
+  /** Extrapolated efficiency (null for an infinite tip). */
+  efficiency: number | null;
+  /** Base and tip temperatures, each extrapolated from its own three-grid study where that has a credible order (else the finest grid's), degC. */
+  baseTemperature_degC: number;
+  tipTemperature_degC: number;
 }
 
 export interface Fin2DStudy {
@@ -60,6 +78,12 @@ export interface Fin2DStudy {
   discretizationError: number;
   /** Richardson-extrapolated heat rate, W. */
   extrapolatedHeatRate_W: number;
+  /**
+   * The extrapolated values with an error estimate of their own, or null when the grids do not support one (no
+   * credible order on either triplet, or an estimate no better than the finest grid's GCI): then the finest grid's
+   * values and GCI are the study's best.
+   */
+  extrapolated: Extrapolated2D | null;
   /** Largest energy balance over the grids. */
   energyBalance: number;
 }
@@ -87,20 +111,59 @@ export function studyFin2DProblem(problem: Fin2DProblem, opts: Fin2DStudyOptions
 export function gridValues(grids: readonly { nx: number; ny: number; size: number }[], results: readonly Fin2DResult[]): Fin2DGridValue[] {
   return results.map((r, k) => {
     const g = grids[k] as { nx: number; ny: number; size: number };
-    return { nx: g.nx, ny: g.ny, size: g.size, heatRate_W: r.heatRate_W, efficiency: r.efficiency, energyBalance: r.energyBalance };
+    return {
+      nx: g.nx,
+      ny: g.ny,
+      size: g.size,
+      heatRate_W: r.heatRate_W,
+      efficiency: r.efficiency,
+      energyBalance: r.energyBalance,
+      baseTemperature_degC: r.baseTemperature_degC,
+      tipTemperature_degC: r.tipTemperature_degC,
+    };
   });
 }
 
 /**
  * The study of solved grids: `results` and their `values` (nx, ny, size, heat rate...) coarsest first
  * (`values` is reversed in place, finest first). Richardson extrapolation and GCI of the heat rate and
- * the efficiency.
+ * the efficiency on the three finest grids; with a fourth grid, the error of the extrapolated values.
  */
 export function summariseStudy2D(results: Fin2DResult[], values: Fin2DGridValue[]): Fin2DStudy {
   values.reverse();
   const finest = results[results.length - 1] as Fin2DResult;
   const heatRate = richardsonGci(values.map((v) => ({ size: v.size, value: v.heatRate_W })));
   const efficiency = finest.efficiency === null ? null : richardsonGci(values.map((v) => ({ size: v.size, value: v.efficiency as number })));
+  return {
+    ...studyOf(finest, values, heatRate, efficiency),
+    extrapolated: values.length < 4 ? null : extrapolated2D(values, heatRate, efficiency),
+  };
+}
+
+/** The extrapolated values of a study of four or more grids (finest first), or null (Fin2DStudy.extrapolated). */
+function extrapolated2D(values: readonly Fin2DGridValue[], heatRate: RefinementStudy, efficiency: RefinementStudy | null): Extrapolated2D | null {
+  const coarser = richardsonGci(values.slice(1).map((v) => ({ size: v.size, value: v.heatRate_W })));
+  const error = extrapolationError(heatRate, coarser);
+  if (error === null) return null;
+  const temperature = (of: (v: Fin2DGridValue) => number): number => {
+    const s = richardsonGci(values.map((v) => ({ size: v.size, value: of(v) })));
+    return s.observedOrder !== null && s.orderUsed === s.observedOrder ? s.extrapolated : of(values[0] as Fin2DGridValue);
+  };
+  return {
+    heatRate_W: heatRate.extrapolated,
+    error,
+    efficiency: efficiency === null ? null : efficiency.extrapolated,
+    baseTemperature_degC: temperature((v) => v.baseTemperature_degC),
+    tipTemperature_degC: temperature((v) => v.tipTemperature_degC),
+  };
+}
+
+function studyOf(
+  finest: Fin2DResult,
+  values: Fin2DGridValue[],
+  heatRate: RefinementStudy,
+  efficiency: RefinementStudy | null,
+): Omit<Fin2DStudy, 'extrapolated'> {
   return {
     model: 'fd-2d',
     finest,
@@ -118,6 +181,8 @@ export function summariseStudy2D(results: Fin2DResult[], values: Fin2DGridValue[
  * The grids of a study, coarsest first: nodes (nx, ny) and representative size. Cells across double
  * from `coarseCellsAcross`; cells along keep the cells near the base about `aspect` times longer than
  * high, and resolve the decay length 1/m (8 coarse cells per unit of mL, m from the base section).
+ * Below the `levels` grids one more grid with half the coarsest grid's cells each way (rounded up) gives the
+ * error estimate of the extrapolated values (summariseStudy2D; a quarter of the coarsest grid's work).
  */
 export function gridFamily2D(problem: Fin2DProblem, opts: Fin2DStudyOptions = {}): { nx: number; ny: number; size: number }[] {
   const levels = opts.levels ?? 3;
@@ -134,7 +199,9 @@ export function gridFamily2D(problem: Fin2DProblem, opts: Fin2DStudyOptions = {}
   // accuracy, because the thickness effects they blur are weighted by Bi << 1.
   const byAspect = Math.min(Math.ceil((across0 * L) / (aspect * b)), Math.ceil(32 * (1 + m * L)));
   const along0 = Math.max(2, section.breakpoints.length - 1, byAspect, Math.ceil(8 * m * L));
-  const out: { nx: number; ny: number; size: number }[] = [];
+  const checkX = Math.max(section.breakpoints.length - 1, Math.ceil(along0 / 2));
+  const checkY = Math.ceil(across0 / 2);
+  const out: { nx: number; ny: number; size: number }[] = [{ nx: checkX + 1, ny: checkY + 1, size: Math.sqrt((L * b) / (checkX * checkY)) }];
   for (let l = 0; l < levels; l++) {
     const cx = along0 * 2 ** l;
     const cy = across0 * 2 ** l;

@@ -202,8 +202,8 @@ export function solveNullRules(facts: CaseFacts, single: boolean): NullRule[] {
   const rules: NullRule[] = [];
   if (single) {
     rules.push({
-      path: /^(discretizationError|observedOrder)$/,
-      reason: 'one grid: no refinement study (outputs.md: --nodes/--grid give discretizationError null)',
+      path: /^(discretizationError|observedOrder|finestGridDiscretizationError)$/,
+      reason: 'one grid: no refinement study (outputs.md: --nodes/--grid give discretizationError null; README: finestGridDiscretizationError too)',
     });
   }
   rules.push({
