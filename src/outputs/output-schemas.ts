@@ -35,6 +35,44 @@ const shortcutIds = ['tanh-L', 'tanh-Lc', 'tanh-Lc-thin', 'convective-tip', 'clo
 const warning = obj({ path: str, message: str });
 const flag = obj({ flag: str, severity: oneOfWords('info', 'warning', 'error'), value: num, message: str });
 
+// Design questions (design-questions.md): the sensitivities of the reference and its uncertainty band.
+const driftOverUncertainty = described(nullable(num), '|drift| over the relative uncertainty band of the reference (null when the band is 0)');
+const finSensitivity = obj({ key: str, dlnQ_dlnx: num, method: oneOfWords('central-difference', 'exact'), value: num, uncertainty: num });
+const finUncertainty = obj({
+  method: oneOfWords('first-order', 'latin-hypercube'),
+  relative: num,
+  low_W: num,
+  high_W: num,
+  firstOrder: num,
+  fromH: num,
+  sample: nullable(
+    obj({
+      method: { const: 'latin-hypercube' },
+      n: int,
+      seed: int,
+      relative: num,
+      samplingError: num,
+      agrees: bool,
+      grid: str,
+      low_W: num,
+      high_W: num,
+    }),
+  ),
+  note: str,
+});
+const sinkSensitivity = obj({ key: str, dlnRise_dlnx: num, method: { const: 'central-difference' }, value: num, uncertainty: num });
+const sinkUncertainty = obj({
+  method: { const: 'first-order' },
+  relative: num,
+  low_K: num,
+  high_K: num,
+  firstOrder: num,
+  fromH: num,
+  sample: { type: 'null' },
+  source: str,
+  note: str,
+});
+
 const fincheckId = 'https://fincheck.invalid/schema/output';
 
 function document(id: string, title: string, body: Schema): Schema {
@@ -77,78 +115,95 @@ function finCheck(): Schema {
       accuracy: str,
       guess: oneOfWords('base', 'mean'),
       guessValues: obj({ h_W_per_m2K: num, k_W_per_mK: num, description: str }),
+      driftOverUncertainty,
     },
-    ['guess', 'guessValues'],
+    ['guess', 'guessValues', 'driftOverUncertainty'],
   );
-  return obj({
-    case: str,
-    tolerance: num,
-    biot: nullable(num),
-    mL: nullable(num),
-    dimensionlessNote: nullable(str),
-    reference,
-    models: arr(model),
-    notApplicable: arr(obj({ model: oneOfWords(...shortcutIds), reason: str })),
-    assumptions: arr(obj({ assumption: str, drift: num, madeBy: arr(oneOfWords(...finModelIds)), method: str })),
-    flags: arr(flag),
-    cautions: arr(str),
-    warnings: arr(warning),
-  });
+  return obj(
+    {
+      case: str,
+      tolerance: num,
+      biot: nullable(num),
+      mL: nullable(num),
+      dimensionlessNote: nullable(str),
+      reference,
+      models: arr(model),
+      notApplicable: arr(obj({ model: oneOfWords(...shortcutIds), reason: str })),
+      assumptions: arr(obj({ assumption: str, drift: num, madeBy: arr(oneOfWords(...finModelIds)), method: str })),
+      flags: arr(flag),
+      cautions: arr(str),
+      warnings: arr(warning),
+      sensitivities: arr(finSensitivity),
+      sensitivityMethod: str,
+      uncertainty: finUncertainty,
+    },
+    ['sensitivities', 'sensitivityMethod', 'uncertainty'],
+  );
 }
 
 /** `check --json` of a heat sink (heat-sink.md "What check reports for a heat sink"). */
 function sinkCheck(): Schema {
-  return obj({
-    case: str,
-    kind: { const: 'heat-sink' },
-    tolerance: num,
-    reference: obj({
-      model: { const: 'fd-3d' },
-      sourceRise_K: arr(num),
-      sourceDiscretizationError: arr(nullable(num)),
-      discretizationError: nullable(num),
-      energyBalance: num,
-      resolved: bool,
-      target: num,
-      unknowns: arr(int),
-      finModel: str,
-      note: str,
-    }),
-    sources: arr(
-      obj({
-        name: str,
-        power_W: num,
-        meanTemperature_degC: num,
-        maxTemperature_degC: num,
-        meanRise_K: num,
-        discretizationError: nullable(num),
-        limit_degC: nullable(num),
-        margin_K: nullable(num),
-      }),
-    ),
-    sinkResistance_KperW: num,
-    overallEfficiency: num,
-    fins: arr(obj({ index: int, heatRate_W: num, rootTemperature_degC: num })),
-    models: arr(
-      obj({
-        model: str,
+  return obj(
+    {
+      case: str,
+      kind: { const: 'heat-sink' },
+      tolerance: num,
+      reference: obj({
+        model: { const: 'fd-3d' },
         sourceRise_K: arr(num),
-        sourceDrift: arr(num),
-        drift: num,
-        worstSource: str,
-        verdict,
-        sinkResistance_KperW: num,
-        overallEfficiency: num,
-        finEfficiency: nullable(num),
-        basis: str,
-        accuracy: str,
+        sourceDiscretizationError: arr(nullable(num)),
+        discretizationError: nullable(num),
+        energyBalance: num,
+        resolved: bool,
+        target: num,
+        unknowns: arr(int),
+        finModel: str,
+        note: str,
       }),
-    ),
-    assumptions: arr(obj({ assumption: str, drift: nullable(num), madeBy: arr(str), method: str })),
-    flags: arr(flag),
-    cautions: arr(str),
-    warnings: arr(warning),
-  });
+      sources: arr(
+        obj({
+          name: str,
+          power_W: num,
+          meanTemperature_degC: num,
+          maxTemperature_degC: num,
+          meanRise_K: num,
+          discretizationError: nullable(num),
+          limit_degC: nullable(num),
+          margin_K: nullable(num),
+        }),
+      ),
+      sinkResistance_KperW: num,
+      overallEfficiency: num,
+      fins: arr(obj({ index: int, heatRate_W: num, rootTemperature_degC: num })),
+      models: arr(
+        obj(
+          {
+            model: str,
+            sourceRise_K: arr(num),
+            sourceDrift: arr(num),
+            drift: num,
+            worstSource: str,
+            verdict,
+            sinkResistance_KperW: num,
+            overallEfficiency: num,
+            finEfficiency: nullable(num),
+            basis: str,
+            accuracy: str,
+            driftOverUncertainty,
+          },
+          ['driftOverUncertainty'],
+        ),
+      ),
+      assumptions: arr(obj({ assumption: str, drift: nullable(num), madeBy: arr(str), method: str })),
+      flags: arr(flag),
+      cautions: arr(str),
+      warnings: arr(warning),
+      sensitivities: arr(sinkSensitivity),
+      sensitivityMethod: str,
+      uncertainty: sinkUncertainty,
+    },
+    ['sensitivities', 'sensitivityMethod', 'uncertainty'],
+  );
 }
 
 function checkSchema(): Schema {
@@ -325,21 +380,26 @@ function optimizeSchema(): Schema {
     heatRate_W: num,
     amount: described(nullable(num), 'The material kept or minimised, m^2 (profile area) or m^3 (volume); null for keep none'),
   };
-  return obj({
-    case: str,
-    objective: oneOfWords('max-heat', 'min-material', 'required'),
-    requiredHeat_W: nullable(num),
-    keep: oneOfWords('profile-area', 'volume', 'mass', 'none'),
-    vary: arr(str),
-    dependent: nullable(str),
-    bounds: { type: 'object', additionalProperties: { type: 'array', items: num, minItems: 2, maxItems: 2 } },
-    shortcut: obj({ ...point, method: str }),
-    reference: obj({ ...point, model: str, discretizationError: nullable(num), resolved: bool, evaluations: int }),
-    shortcutAtReference_W: num,
-    loss: num,
-    notes: arr(str),
-    cautions: arr(str),
-  });
+  return obj(
+    {
+      case: str,
+      objective: oneOfWords('max-heat', 'min-material', 'required'),
+      requiredHeat_W: nullable(num),
+      keep: oneOfWords('profile-area', 'volume', 'mass', 'none'),
+      vary: arr(str),
+      dependent: nullable(str),
+      bounds: { type: 'object', additionalProperties: { type: 'array', items: num, minItems: 2, maxItems: 2 } },
+      shortcut: obj({ ...point, method: str }),
+      reference: obj({ ...point, model: str, discretizationError: nullable(num), resolved: bool, evaluations: int }),
+      shortcutAtReference_W: num,
+      loss: num,
+      notes: arr(str),
+      cautions: arr(str),
+      curve: obj({ key: str, x_m: arr(num), reference_W: arr(num), shortcut_W: arr(num), model: { const: 'fd-1d' }, note: str }),
+      chartFile: described(str, 'The chart written by --out'),
+    },
+    ['curve', 'chartFile'],
+  );
 }
 
 /** The outputs that have a schema (printed by the schema command). */
