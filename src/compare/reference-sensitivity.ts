@@ -1,16 +1,38 @@
 /**
  * The part of `check` that says how sure the reference is of its inputs: the sensitivities of the reference
- * heat rate to every numeric input (sensitivities.ts, on the reference's finest grid), the uncertainty band
- * they give with the case's `uncertainty` (uncertainty-band.ts, its sample on the study's coarsest grid), and
- * each model row's drift over that band.
+ * heat rate to every numeric input (sensitivities.ts), the uncertainty band they give with the case's
+ * `uncertainty` (uncertainty-band.ts, its sample on the study's coarsest grid), and each model row's drift over
+ * that band.
+ *
+ * Work budgets. The sensitivities take two re-solves per input, on the finest grid of the study whose work
+ * 2 n_inputs N (N unknowns; a Newton solve of a nonlinear fin counted NEWTON_WEIGHT times) stays within
+ * SENSITIVITY_WORK, else on the coarsest grid: a refined study of a thick or long fin reaches 1e6 unknowns, and
+ * two dozen solves there would take minutes for a number needed to a few per cent (an uncertainty estimate). A
+ * grid one level coarser changes S by about the discretisation error of that grid (relative; below 1e-3 on
+ * the study's grids), which the method text states by naming the grid. The automatic Latin-hypercube sample
+ * (the automatic choice) is drawn only when n_sample N_coarsest (Newton weighted) stays within SAMPLE_WORK;
+ * otherwise the note says it was not drawn and why, and a sample asked for explicitly is drawn whatever its cost. Both budgets are chosen so
+ * that the sensitivities and the sample each add at most a few seconds on a 2-core machine (measured: about
+ * 1e6 unknowns per second in linear fd-2d solves, a third of that in Newton solves); common practice, no source.
  */
-import { DEFAULT_UNCERTAINTY, type Case } from '../case/index.js';
+import { DEFAULT_UNCERTAINTY, numericInputs, type Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D, GridSolvers, Resolution } from '../fd/index.js';
 import type { CheckOptions } from './check-common.js';
 import { referenceGridText, referenceRate, type ReferenceGrid } from './reference-rate.js';
 import { SENSITIVITY_STEP, sensitivities } from './sensitivities.js';
 import type { ModelResult, Sensitivity, UncertaintyBand } from './types.js';
 import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, uncertaintyBand } from './uncertainty-band.js';
+
+/** Budgets of the sensitivities and the automatic sample, in unknowns x solves (module header). */
+export const SENSITIVITY_WORK = 2e6;
+export const SAMPLE_WORK = 4e6;
+/** A Newton solve counted as this many linear solves (its 2-4 steps, each a linear solve and an assembly). */
+export const NEWTON_WEIGHT = 4;
+
+/** Unknowns of a reference grid (the 2-D section's nodes; the side edges' 1-D solves are small beside it). */
+function unknownsOf(g: ReferenceGrid): number {
+  return g.model === 'fd-1d' ? g.nodes : g.nx * g.ny;
+}
 
 export interface ReferenceSensitivity {
   sensitivities: Sensitivity[];
@@ -29,18 +51,32 @@ export function referenceSensitivity(
 ): ReferenceSensitivity {
   const oneDFinest = { nodes: oneD.finest.mesh.nodes, grading: resolution.gridGrading };
   const oneDCoarsest = { nodes: resolution.nodes[0] ?? oneDFinest.nodes, grading: resolution.gridGrading };
-  let finest: ReferenceGrid;
-  let coarsest: ReferenceGrid;
-  if (twoD === null) {
-    finest = { model: 'fd-1d', ...oneDFinest };
-    coarsest = { model: 'fd-1d', ...oneDCoarsest };
-  } else {
-    const coarse = twoD.grids.reduce((a, b) => (b.nx < a.nx ? b : a));
-    finest = { model: 'fd-2d', nx: twoD.finest.grid.nodesX, ny: twoD.finest.grid.nodesY, edges: oneDFinest };
-    coarsest = { model: 'fd-2d', nx: coarse.nx, ny: coarse.ny, edges: oneDCoarsest };
-  }
+  // The study's grids, finest first.
+  const grids: ReferenceGrid[] =
+    twoD === null
+      ? [oneDFinest.nodes, ...[...resolution.nodes].reverse()]
+          .filter((n, i, all) => all.indexOf(n) === i)
+          .map((nodes) => ({ model: 'fd-1d' as const, nodes, grading: resolution.gridGrading }))
+      : [
+          { model: 'fd-2d' as const, nx: twoD.finest.grid.nodesX, ny: twoD.finest.grid.nodesY, edges: oneDFinest },
+          ...[...twoD.grids]
+            .sort((a, b) => b.nx * b.ny - a.nx * a.ny)
+            .filter((g) => g.nx * g.ny < twoD.finest.grid.nodesX * twoD.finest.grid.nodesY)
+            .map((g) => ({ model: 'fd-2d' as const, nx: g.nx, ny: g.ny, edges: oneDCoarsest })),
+        ];
+  const weight = solvers.nonlinear ? NEWTON_WEIGHT : 1;
+  const coarsest = grids[grids.length - 1] as ReferenceGrid;
+  const solvesPerInput = 2;
+  const inputs = Math.max(1, numericInputs(c).length);
+  const within = grids.find((g) => solvesPerInput * inputs * unknownsOf(g) * weight <= SENSITIVITY_WORK);
+  const finest = within ?? coarsest;
+  const gridWords =
+    finest === grids[0]
+      ? 'its finest grid'
+      : `the finest grid of the study within the work budget of ${SENSITIVITY_WORK.toExponential(0)} unknowns x solves (the finest, ${referenceGridText(grids[0] as ReferenceGrid)}, would take ${(solvesPerInput * inputs * unknownsOf(grids[0] as ReferenceGrid) * weight).toExponential(1)})`;
   const rate = referenceRate(solvers, finest, c);
   const nominal = rate(c);
+  const sampleWork = (opts.sampleSize ?? DEFAULT_SAMPLE_SIZE) * unknownsOf(coarsest) * weight;
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
   const sens = sensitivities(c, rate, nominal, given, !solvers.nonlinear);
   const uncertainty = uncertaintyBand(c, sens, referenceHeatRate, {
@@ -48,12 +84,16 @@ export function referenceSensitivity(
     n: opts.sampleSize ?? DEFAULT_SAMPLE_SIZE,
     seed: opts.sampleSeed ?? DEFAULT_SAMPLE_SEED,
     nonlinear: solvers.nonlinear,
+    affordable:
+      sampleWork <= SAMPLE_WORK
+        ? null
+        : `the sample's ${sampleWork.toExponential(1)} unknowns x solves exceed the automatic budget of ${SAMPLE_WORK.toExponential(0)}; a sample asked for explicitly is drawn whatever its cost`,
     rate: referenceRate(solvers, coarsest, c),
     grid: `${referenceGridText(coarsest)}, the coarsest grid of the study`,
   });
   return {
     sensitivities: sens,
-    sensitivityMethod: `central differences of the reference (${referenceGridText(finest)}, its finest grid, held fixed), relative step ${SENSITIVITY_STEP}: two re-solves per input`,
+    sensitivityMethod: `central differences of the reference (${referenceGridText(finest)}, ${gridWords}, held fixed), relative step ${SENSITIVITY_STEP}: two re-solves per input`,
     uncertainty,
   };
 }

@@ -39,6 +39,8 @@ export interface SampleSetup {
   seed: number;
   /** The fin is nonlinear (a sample is drawn under 'auto'). */
   nonlinear: boolean;
+  /** Null when 'auto' may draw the sample; else why it may not (its cost over the budget, reference-sensitivity.ts). */
+  affordable: string | null;
   /** Heat rate of a variant on the sample's grid, W, and that grid in words. */
   rate: (variant: Case) => number;
   grid: string;
@@ -50,7 +52,8 @@ export function uncertaintyBand(c: Case, sens: readonly Sensitivity[], heatRate:
   const h = sens.find((s) => s.key === 'convection.h');
   const fromH = h === undefined ? 0 : Math.abs(h.dlnQ_dlnx * h.uncertainty);
   const uncertain = sens.filter((s) => s.uncertainty > 0);
-  const due = setup.when === 'always' || (setup.when === 'auto' && (setup.nonlinear || firstOrder > SAMPLE_THRESHOLD));
+  const wanted = setup.nonlinear || firstOrder > SAMPLE_THRESHOLD;
+  const due = setup.when === 'always' || (setup.when === 'auto' && wanted && setup.affordable === null);
   const sample = due && uncertain.length > 0 ? drawSample(c, uncertain, firstOrder, heatRate, setup) : null;
   const useSample = sample !== null && !sample.agrees;
   const relative = useSample ? sample.relative : firstOrder;
@@ -60,7 +63,9 @@ export function uncertaintyBand(c: Case, sens: readonly Sensitivity[], heatRate:
       : sample === null
         ? setup.when === 'never'
           ? 'no sample drawn (switched off)'
-          : `first order only: the fin is linear and the band is within ${100 * SAMPLE_THRESHOLD} %`
+          : wanted
+            ? `first order only, not confirmed by a sample: ${setup.affordable ?? ''}`
+            : `first order only: the fin is linear and the band is within ${100 * SAMPLE_THRESHOLD} %`
         : sample.agrees
           ? `confirmed by a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}): ${pctText(sample.relative)} +/- ${pctText(sample.samplingError)}`
           : `a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}) gives ${pctText(sample.relative)} +/- ${pctText(sample.samplingError)}, more than twice its sampling error from first order (${pctText(firstOrder)}): the band is the sample's`;

@@ -61,7 +61,7 @@ describe('against finite differences of the whole check', () => {
   };
   const d = 1e-4;
   const fullCheck = async (variant: unknown): Promise<number> =>
-    (await runCheck(parseCaseObject(variant), { tolerance: 0.02, reference: 'auto', sensitivities: false })).report.reference.heatRate_W;
+    (await runCheck(parseCaseObject(variant), { tolerance: 0.02, reference: 'auto', sensitivities: false })).report.reference.finestGridHeatRate_W;
 
   it('the sensitivities equal central differences of the full check to 1e-6 relative', async () => {
     const { report } = await runCheck(parseCaseObject(raw), { tolerance: 0.02, reference: 'auto' });
@@ -75,7 +75,7 @@ describe('against finite differences of the whole check', () => {
       ['fin.width', 'fin.width'],
       ['base.contactResistance', 'base.contactResistance'],
     ];
-    const Q = report.reference.heatRate_W;
+    const Q = report.reference.finestGridHeatRate_W;
     for (const [key, path] of keys) {
       const value = getByKeyPath(raw, path) as number;
       const up = await fullCheck(setByKeyPath(raw, path, value * (1 + d)));
@@ -100,11 +100,11 @@ describe('a nonlinear fin (power-law h and radiation) against finite differences
   };
   const d = 1e-4;
   const fullCheck = async (variant: unknown): Promise<number> =>
-    (await runCheck(parseCaseObject(variant), { tolerance: 0.02, reference: '1d', sensitivities: false })).report.reference.heatRate_W;
+    (await runCheck(parseCaseObject(variant), { tolerance: 0.02, reference: '1d', sensitivities: false })).report.reference.finestGridHeatRate_W;
 
   it('the Newton re-solves (started from the case) equal central differences of full checks to 1e-6 relative', async () => {
     const { report } = await runCheck(parseCaseObject(raw), { tolerance: 0.02, reference: '1d', sample: 'never' });
-    const Q = report.reference.heatRate_W;
+    const Q = report.reference.finestGridHeatRate_W;
     const keys: [string, string][] = [
       ['convection.h', 'convection.h.base'],
       ['convection.h.exponent', 'convection.h.exponent'],
