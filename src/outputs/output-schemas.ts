@@ -396,7 +396,7 @@ function optimizeSchema(): Schema {
       notes: arr(str),
       cautions: arr(str),
       curve: obj({ key: str, x_m: arr(num), reference_W: arr(num), shortcut_W: arr(num), model: { const: 'fd-1d' }, note: str }),
-      chartFile: described(str, 'The chart written by --out'),
+      chartFile: described(str, 'The chart file written, when one was asked for'),
     },
     ['curve', 'chartFile'],
   );
