@@ -188,15 +188,15 @@ export async function benchMap2D(): Promise<BenchRow[]> {
     const t0 = performance.now();
     const r = runCli(args);
     const ms = performance.now() - t0;
-    if (r.status !== 0) return [skipped(AREA, 'fincheck map 41x41, 2-D reference', '<= 60 s', `exit ${r.status}: ${r.stderr.trim()}`)];
+    if (r.status !== 0) return [skipped(AREA, 'fincheck map 41x41, 2-D reference', '<= 8 s', `exit ${r.status}: ${r.stderr.trim()}`)];
     return [
       {
         area: AREA,
         item: 'fincheck map 41x41, 2-D reference, default jobs (whole process)',
-        target: '<= 60 s',
+        target: '<= 8 s',
         measured: formatMs(ms),
         cpu: cpuText(r.cpuMs),
-        verdict: atMost(ms, 60_000),
+        verdict: atMost(ms, 8_000),
         note: "one run (it takes about a minute); CPU = the child's own, main thread only (workers not counted)",
       },
     ];
