@@ -71,7 +71,7 @@ export function formatCheck(c: Case, r: CheckReport, u: DisplayUnits = defaultDi
   out.push(`   the shortcuts are closed forms, exact for their own assumptions, so their error for this fin is the drift,`);
   out.push(`   known to about the reference's discretisation error, ${ref.discretizationError.toExponential(1)})`);
   out.push('');
-  out.push(...fincheckUncertaintyLines(r, label));
+  out.push(...fincheckUncertaintyLines(r, label, u));
   if (r.assumptions.length > 0) {
     out.push('Where the drift comes from (one assumption at a time):');
     const methods = [...new Set(r.assumptions.map((a) => a.method))];
