@@ -73,7 +73,10 @@ export function formatSinkOptimize(r: OptimizeSinkResult, u: DisplayUnits): stri
       `  largest     ${r.sourceNames.map((n, j) => `${n} ${temp(r.reference.sourceMax_degC[j] ?? Number.NaN)}`).join(', ')} (the largest over each source; the limit is on the mean)${over.length > 0 ? `: ABOVE the limit of ${over.map((l) => l.source).join(', ')}` : ''}`,
     );
   }
-  for (const n of r.reference.neighbours) lines.push(`  neighbour   ${dims(n.values)}: rise ${rise(n.hottestRise_K)} (fd-3d default study)`);
+  // Neighbours differ from the answer by little near a smooth optimum: more digits (the same study, so its error is shared).
+  const fine = (k: number): string => `${Number(inUnit(u.temperatureDifference, k).toPrecision(6))} ${u.temperatureDifference.ascii}`;
+  for (const n of r.reference.neighbours)
+    lines.push(`  neighbour   ${dims(n.values)}: rise ${fine(n.hottestRise_K)} against ${fine(r.reference.hottestRise_K)} (fd-3d default study)`);
   lines.push(`Shortcut ${r.shortcut.model}`);
   lines.push(`  answer      ${dims(r.shortcut.values)}`);
   lines.push(
