@@ -29,6 +29,8 @@ describe('single-fin commands given a heat sink', () => {
     const run = await cli('optimize', file, '--vary', 'fin.thickness', '--keep', 'profile-area');
     expect(run.code).toBe(2);
     expect(run.stdout).toBe('');
-    expect(run.stderr).toMatch(/^fincheck: --keep: got profile-area; a heat sink takes none \(the plate fixed, the count or thickness free\), volume or mass/);
+    expect(run.stderr).toMatch(
+      /^fincheck: --keep: got profile-area; a heat sink takes none \(the plate fixed, the count or thickness free\), volume or mass/,
+    );
   });
 });
