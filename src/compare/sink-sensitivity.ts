@@ -11,12 +11,13 @@
  * The band: first order (uncertainty-band.ts, JCGM 100:2008 eq. 10), sqrt(sum (S u)^2) of the rise, one standard
  * uncertainty each side, confirmed by a seeded Latin-hypercube sample (sink-sample.ts, JCGM 101:2008) when asked
  * ('always'), or under 'auto' when the sink is nonlinear (k(T), a power-law h) or the band exceeds 20 %
- * (SAMPLE_THRESHOLD) and the sample's work (n x the coarsest grid's unknowns) is within SINK_SAMPLE_WORK. Each
+ * (SAMPLE_THRESHOLD) and the sample's work (n x the coarsest grid's unknowns, a Newton solve counted 4 times) is within SINK_SAMPLE_WORK. Each
  * sample point is one fd-3d solve on the study's coarsest grid. Where the sample disagrees with first order by more
  * than twice its sampling error, the band is the sample's.
  */
 import { DEFAULT_UNCERTAINTY, sinkNumericInputs, type HeatSinkCase } from '../case/index.js';
 import { solveSinkOnGrid, type SinkStudy } from '../fd/index.js';
+import { NEWTON_WEIGHT } from './reference-sensitivity.js';
 import { SINK_SAMPLE_WORK, sinkSample } from './sink-sample.js';
 import type { SinkModelRow, SinkSensitivity, SinkUncertaintyBand } from './sink-types.js';
 import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, SAMPLE_THRESHOLD, type SampleWhen } from './uncertainty-band.js';
@@ -72,8 +73,9 @@ export function sinkSensitivity(
   // The sample: on the study's coarsest grid (refine 1).
   const coarsest = { ...finest, refine: 1 };
   const coarsestUnknowns = study.unknowns[study.unknowns.length - 1] ?? 0;
-  const work = sampleOptions.n * coarsestUnknowns;
   const nonlinear = isNonlinearCase(c);
+  // A Newton solve counted as NEWTON_WEIGHT linear ones, as for a fin (reference-sensitivity.ts).
+  const work = sampleOptions.n * coarsestUnknowns * (nonlinear ? NEWTON_WEIGHT : 1);
   const wanted = nonlinear || firstOrder > SAMPLE_THRESHOLD;
   const affordable = work <= SINK_SAMPLE_WORK;
   const due = sampleOptions.when === 'always' || (sampleOptions.when === 'auto' && wanted && affordable);
