@@ -83,13 +83,20 @@ export function coarsenSinkLevel(g: SinkLevelGrid): SinkCoarsening {
   };
   const n = levelUnknowns(g);
   const rowStart = new Int32Array(n + 1);
-  const col = new Int32Array(8 * n);
-  const val = new Float64Array(8 * n);
   const aggregate = new Int32Array(n);
-  let e = 0;
   const tx = transfer(g.nx, nxc, cx);
   const ty = transfer(g.ny, nyc, cy);
   const tz = transfer(g.nz, nzc, cz);
+  const fineTransfers = g.fins.map((f, index) => ({
+    rows: transfer(f.rows, coarseFins[index].rows, rowsCoarsened[index]),
+    layers: transfer(f.layers, coarseFins[index].layers, layersCoarsened[index]),
+  }));
+  // Entries of P: a tensor product, so the count is the product of each direction's (1 or 2 per index).
+  const entries = (t: { w: Float64Array }) => t.w.reduce((sum, w) => sum + (w < 1 ? 2 : 1), 0);
+  const size = entries(tx) * entries(ty) * entries(tz) + fineTransfers.reduce((sum, t) => sum + entries(t.rows) * entries(t.layers), 0);
+  const col = new Int32Array(size);
+  const val = new Float64Array(size);
+  let e = 0;
   for (let i = 0; i < g.nx; i++) {
     for (let j = 0; j < g.ny; j++) {
       for (let k = 0; k < g.nz; k++) {
@@ -119,8 +126,7 @@ export function coarsenSinkLevel(g: SinkLevelGrid): SinkCoarsening {
   let offset = nxc * nyc * nzc;
   g.fins.forEach((f, index) => {
     const c = coarseFins[index];
-    const tr = transfer(f.rows, c.rows, rowsCoarsened[index]);
-    const tl = transfer(f.layers, c.layers, layersCoarsened[index]);
+    const { rows: tr, layers: tl } = fineTransfers[index];
     for (let j = 0; j < f.rows; j++) {
       for (let l = 0; l < f.layers; l++) {
         aggregate[fine] = offset + tr.own[j] * c.layers + tl.own[l];
@@ -140,9 +146,10 @@ export function coarsenSinkLevel(g: SinkLevelGrid): SinkCoarsening {
     }
     offset += c.rows * c.layers;
   });
+  if (e !== size) throw new Error(`coarsenSinkLevel: ${e} prolongation entries, ${size} expected`);
   return {
     coarse,
-    p: { rowStart, col: col.slice(0, e), val: val.slice(0, e), coarse: offset },
+    p: { rowStart, col, val, coarse: offset },
     aggregate,
     coarsened: { x: cx, y: cy, z: cz, rows: rowsCoarsened, layers: layersCoarsened },
   };

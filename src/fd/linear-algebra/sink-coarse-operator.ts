@@ -30,18 +30,17 @@ export function sinkCoarseOperator(a: CsrMatrix, g: SinkLevelGrid, step: SinkCoa
     layersOf[index] = f.layers;
     finStart[index + 1] = finStart[index] + f.rows * f.layers;
   });
-  // The fin of every fin node (plate cells: −1).
+  // The fin of every fin node (at index − plateCells).
   const finOf = new Int32Array(n - plateCells);
   for (let f = 0; f < g.fins.length; f++) finOf.fill(f, finStart[f], finStart[f + 1]);
 
-  const { nx, ny, nz } = g;
+  // A plate coupling's direction from the index difference ((i ny + j) nz + k: 1 in z, nz in y, ny nz in x).
+  const { ny, nz } = g;
   const plateScale = (r: number, c: number): number => {
-    const dk = (r % nz) - (c % nz);
-    if (dk !== 0) return coarsened.z ? 0.5 : 1;
-    const rc = (r - (r % nz)) / nz;
-    const cc = (c - (c % nz)) / nz;
-    if (rc % ny !== cc % ny) return coarsened.y ? 0.5 : 1;
-    return nx > 1 && coarsened.x ? 0.5 : 1;
+    const d = r > c ? r - c : c - r;
+    if (d === 1 && nz > 1) return coarsened.z ? 0.5 : 1;
+    if (d === nz && ny > 1) return coarsened.y ? 0.5 : 1;
+    return coarsened.x ? 0.5 : 1;
   };
   const finScale = (r: number, c: number): number => {
     const f = finOf[r - plateCells];
