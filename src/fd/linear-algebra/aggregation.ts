@@ -61,11 +61,33 @@ export function coarsenSinkLevel(g: SinkLevelGrid): SinkCoarsening {
   const cx = g.nx > 1 && (g.dx <= SEMI * g.dy || g.ny === 1);
   const cy = g.ny > 1 && (g.dy <= SEMI * g.dx || g.nx === 1);
   const cz = g.nz > 1 && (2 * g.dz <= Math.min(cx ? g.dx : Infinity, cy ? g.dy : Infinity) || (!cx && !cy));
+  const rows = g.fins.map((f) => f.rows > 1 && (f.dy <= SEMI * f.ds || f.layers === 1));
+  const layers = g.fins.map((f) => f.layers > 1 && (f.ds <= SEMI * f.dy || f.rows === 1));
+  return coarsenWith(g, { x: cx, y: cy, z: cz, rows, layers });
+}
+
+/**
+ * The linear prolongation from one grid of a refinement study to the next finer one, when the finer one halves
+ * every cell of the coarser (counts exactly doubled in x, y, z and along every fin's rows and layers; a count of 1
+ * stays 1): the coarser grid's solution, prolonged, starts the finer grid's CG. Null when the grids are not nested so.
+ */
+export function nestedProlongation(coarse: SinkLevelGrid, fine: SinkLevelGrid): Prolongation | null {
+  const doubled = (c: number, f: number): boolean | null => (f === 2 * c ? true : f === 1 && c === 1 ? false : null);
+  const x = doubled(coarse.nx, fine.nx);
+  const y = doubled(coarse.ny, fine.ny);
+  const z = doubled(coarse.nz, fine.nz);
+  if (x === null || y === null || z === null || coarse.fins.length !== fine.fins.length) return null;
+  const rows = fine.fins.map((f, k) => doubled(coarse.fins[k].rows, f.rows));
+  const layers = fine.fins.map((f, k) => doubled(coarse.fins[k].layers, f.layers));
+  if (rows.some((r) => r === null) || layers.some((l) => l === null)) return null;
+  return coarsenWith(fine, { x, y, z, rows: rows.map((r) => r === true), layers: layers.map((l) => l === true) }).p;
+}
+
+function coarsenWith(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): SinkCoarsening {
+  const { x: cx, y: cy, z: cz, rows: rowsCoarsened, layers: layersCoarsened } = flags;
   const nxc = cx ? Math.ceil(g.nx / 2) : g.nx;
   const nyc = cy ? Math.ceil(g.ny / 2) : g.ny;
   const nzc = cz ? Math.ceil(g.nz / 2) : g.nz;
-  const rowsCoarsened = g.fins.map((f) => f.rows > 1 && (f.dy <= SEMI * f.ds || f.layers === 1));
-  const layersCoarsened = g.fins.map((f) => f.layers > 1 && (f.ds <= SEMI * f.dy || f.rows === 1));
   const coarseFins = g.fins.map((f, index) => ({
     rows: rowsCoarsened[index] ? Math.ceil(f.rows / 2) : f.rows,
     layers: layersCoarsened[index] ? Math.ceil(f.layers / 2) : f.layers,
