@@ -4,7 +4,7 @@
  * reference's curve (fd-3d on the search study) and the shortcut's, both optima marked at the reference's value on
  * the confirm study (what following the shortcut gives, beside the best); a required temperature is drawn as a line.
  */
-import { CHART_CAUTION } from '../compare/index.js';
+import { SINK_CHART_CAUTION } from '../compare/index.js';
 import type { LineChartSpec } from '../images/index.js';
 import type { ChartSize } from './profile-chart.js';
 import { sig } from './labels.js';
@@ -41,7 +41,7 @@ export function sinkOptimizeChartSpec(input: SinkOptimizeChartInput, size: Chart
     title: `${input.objective}: hottest source temperature against ${input.key}`,
     subtitle: [
       `${input.caseName}: keep ${input.keep}; ${input.curveNote}. Reference optimum by ${input.reference.model}; shortcut ${input.shortcut.model}`,
-      CHART_CAUTION,
+      SINK_CHART_CAUTION,
     ],
     xLabel: count ? `${input.key} (fins on the fixed plate)` : `${input.key} (${u.length})`,
     xScale: count ? 'linear' : 'log',
