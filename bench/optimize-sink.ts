@@ -2,7 +2,7 @@
  * `optimize` on the demo heat sink as a whole process (bench/process.ts runCli: `node dist/fincheck.js`, the child's
  * own CPU time reported at exit): the fewest fins that keep the sources at or below 95 degC on
  * demo/motor-drive-sink.yaml, an fd-3d study a value (search study, then the default study) and the answer at
- * h x 0.75 and x 1.25. One run (about 20 s of CPU at load 8 on the 2-core machine): the row is for the record
+ * h x 0.75 and x 1.25. One run (4.0 s of CPU at load 9 on the 2-core machine): the row is for the record
  * (issue 12 sets no target), with the number of fd-3d studies the run solved.
  */
 import { performance } from 'node:perf_hooks';

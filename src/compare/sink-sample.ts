@@ -22,8 +22,9 @@ import { quantile } from './uncertainty-band.js';
 
 /**
  * Unknowns x solves the automatic sample may take: 200 solves of a 2000-unknown grid. Measured on the demo sink
- * (demo/motor-drive-sink.yaml: coarsest grid 1258 unknowns) about 30 ms a solve at load 8 on the 2-core machine,
- * so 200 take about 6 s (common practice, no source: a check should not double its time for a confirmation).
+ * (demo/motor-drive-sink.yaml: coarsest grid 1258 unknowns) 1.4 s of CPU for the 200 solves at load 9 on the 2-core
+ * machine, against 3.0 s for the rest of its check (common practice, no source: a confirmation should not much more
+ * than double a check's time).
  */
 export const SINK_SAMPLE_WORK = 4e5;
 /** Lowest factor a size, h or k is drawn at (as for a fin, uncertainty-band.ts). */
