@@ -36,6 +36,11 @@ export interface Section2D {
   /** Multiplier from the meshed section to the whole fin: 2 x width (planar: both halves), 2 pi (pins),
    *  2 x 2 pi (annular: both halves). */
   depth: number;
+  /**
+   * Identifies the section's shape exactly (the profile with its dimensions; sectionOf), so that grids of equal
+   * sections are built once (grid2d.ts buildGrid2D); absent: never cached.
+   */
+  key?: string;
 }
 
 /**
@@ -47,6 +52,11 @@ export interface Section2D {
 export const TIP_CLUSTERING = { concave: 3, convex: 3 } as const;
 
 export function sectionOf(profile: Profile): Section2D {
+  const key = JSON.stringify(profile, (_k, v: unknown) => (v instanceof Float64Array ? Array.from(v) : v));
+  return { ...sectionOfProfile(profile), key };
+}
+
+function sectionOfProfile(profile: Profile): Section2D {
   const twoPi = 2 * Math.PI;
   switch (profile.kind) {
     case 'rectangular': {
