@@ -64,7 +64,9 @@ export function referenceSensitivity(
           ...[...twoD.grids]
             .sort((a, b) => b.nx * b.ny - a.nx * a.ny)
             .filter((g) => g.nx * g.ny < twoD.finest.grid.nodesX * twoD.finest.grid.nodesY)
-            .map((g) => ({ model: 'fd-2d' as const, nx: g.nx, ny: g.ny, edges: oneDCoarsest })),
+            // The side edges' fd-1d correction (a few per cent of Q) on as many nodes as the 2-D grid has along: the
+            // coarse grids serve the sample and over-budget sensitivities, which need Q to ~1e-4, not the finest 1-D grid.
+            .map((g) => ({ model: 'fd-2d' as const, nx: g.nx, ny: g.ny, edges: { nodes: g.nx, grading: resolution.gridGrading } })),
         ];
   const weight = solvers.nonlinear ? NEWTON_WEIGHT : 1;
   const coarsest = grids[grids.length - 1] as ReferenceGrid;
