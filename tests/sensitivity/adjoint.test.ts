@@ -8,7 +8,7 @@ import { numericInputs, parseCaseObject, type Case } from '../../src/case/index.
 import { runCheck } from '../../src/compare/check.js';
 import type { CheckReport } from '../../src/compare/types.js';
 import { finProblem } from '../../src/fd/index.js';
-import { assembleSection2D, finSectionAdjoint, heatRateGradient, sectionHeatRate } from '../../src/fd/two-d/adjoint.js';
+import { assembleSection2D, finSectionAdjoint, finSectionHeatRate, heatRateGradient, sectionHeatRate } from '../../src/fd/two-d/adjoint.js';
 import { solveFin2DProblem } from '../../src/fd/two-d/linear-solve.js';
 import { twoDFinProblem } from '../../src/fd/two-d/nonlinear-problem.js';
 import { finCase } from '../support/fin-case.js';
@@ -89,6 +89,8 @@ describe('fd-2d section adjoint', () => {
     const adjoint = finSectionAdjoint(finProblem(c), nx, ny);
     const Q = section(c);
     expect(Math.abs(adjoint.heatRate_W / Q - 1)).toBeLessThan(1e-12);
+    // The sample's lean heat rate is the full solve's: same system, level shift and solver.
+    expect(finSectionHeatRate(finProblem(c), nx, ny)).toBe(Q);
     const inputs = numericInputs(c);
     expect(inputs.length).toBeGreaterThanOrEqual(5);
     for (const input of inputs) {

@@ -25,7 +25,7 @@ import { assembleConduction2D } from './assemble.js';
 import { buildSystem2D, discretizeBoundaries, type BoundaryTerms2D, type SideTerms } from './boundary.js';
 import { heatRates2D } from './heat-rate.js';
 import type { Fin2DProblem } from './problem.js';
-import { DEFAULT_GRADING, solveFin2DProblem, type Fin2DResult } from './linear-solve.js';
+import { DEFAULT_GRADING, lumpedLevel, shiftSystem, solveFin2DProblem, type Fin2DResult } from './linear-solve.js';
 import { twoDFinProblem } from './nonlinear-problem.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 
@@ -37,12 +37,16 @@ export interface SectionAssembly {
   system: System2D;
 }
 
-/** Assembles the section of `problem` on nx x ny nodes with the default grading (what solveFin2DProblem solves). */
-export function assembleSection2D(problem: Fin2DProblem, nx: number, ny: number): SectionAssembly {
+/**
+ * Assembles the section of `problem` on nx x ny nodes with the default grading (what solveFin2DProblem solves).
+ * `like`: an assembly whose conduction operator is reused when the grid (cached by section, grid2d.ts) and k are
+ * the same, as for a variant of h, a contact resistance or the base temperature.
+ */
+export function assembleSection2D(problem: Fin2DProblem, nx: number, ny: number, like?: SectionAssembly & { k: number }): SectionAssembly & { k: number } {
   const grid = buildGrid2D(problem.section, { nx, ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face });
-  const K = assembleConduction2D(grid, problem.k);
+  const K = like !== undefined && like.grid === grid && like.k === problem.k ? like.K : assembleConduction2D(grid, problem.k);
   const terms = discretizeBoundaries(grid, problem.conditions);
-  return { grid, K, terms, system: buildSystem2D(K, terms) };
+  return { grid, K, terms, system: buildSystem2D(K, terms), k: problem.k };
 }
 
 /** Q(theta) of an assembled section, W (the whole fin: the grid's depth times the base heat rate per unit depth). */
@@ -117,8 +121,8 @@ export function sectionAdjoint(problem: Fin2DProblem, nx: number, ny: number, so
   return {
     heatRate_W: heatRate,
     derivative: (plus, minus, step) => {
-      const up = assembleSection2D(plus, nx, ny);
-      const down = assembleSection2D(minus, nx, ny);
+      const up = assembleSection2D(plus, nx, ny, nominal);
+      const down = assembleSection2D(minus, nx, ny, nominal);
       const explicit = sectionHeatRate(up, theta) - sectionHeatRate(down, theta);
       // b(p) - A(p) theta is the residual of the nominal field in the perturbed system, in difference form with the
       // exact row sums (stencil9.ts residual): the couplings across a thin fin are ~(t/L)^-2 times the losses and
@@ -147,4 +151,18 @@ export function finSectionAdjoint(
     heatRate_W: adjoint.heatRate_W,
     derivative: (plus, minus, step) => adjoint.derivative(twoDFinProblem(plus).linear, twoDFinProblem(minus).linear, step),
   };
+}
+
+/**
+ * The base heat rate of a linear fin's section on nx x ny nodes, W: the same system, level shift and solver as
+ * solveFin2DProblem, without the lines, efficiencies and other quantities a result carries (the uncertainty sample
+ * solves hundreds of variants for this one number).
+ */
+export function finSectionHeatRate(problem: FinProblem, nx: number, ny: number): number {
+  const a = assembleSection2D(twoDFinProblem(problem).linear, nx, ny);
+  const level = lumpedLevel(a.system);
+  const shifted = shiftSystem(a.system, level);
+  const field = prepareSolver2D(shifted, 'auto').solve(shifted);
+  for (let p = 0; p < field.length; p++) field[p] = (field[p] as number) + level;
+  return sectionHeatRate(a, field);
 }
