@@ -64,7 +64,8 @@ export function buildGrid2D(section: Section2D, opts: GridOptions): Grid2D {
   if (!cacheable) return buildGrid2DUncached(section, opts);
   const key = `${section.key as string}|${opts.nx}|${opts.ny}|${opts.baseGrading ?? 1}|${opts.faceGrading ?? 1}`;
   const hit = gridCache.get(key);
-  if (hit !== undefined) return hit;
+  // Equal keys, equal nodes: only the depth (the width of a straight fin) may differ.
+  if (hit !== undefined) return hit.depth === section.depth ? hit : { ...hit, depth: section.depth };
   const grid = buildGrid2DUncached(section, opts);
   if (gridCache.size >= GRID_CACHE_SIZE) gridCache.delete(gridCache.keys().next().value as string);
   gridCache.set(key, grid);

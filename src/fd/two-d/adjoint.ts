@@ -39,12 +39,14 @@ export interface SectionAssembly {
 
 /**
  * Assembles the section of `problem` on nx x ny nodes with the default grading (what solveFin2DProblem solves).
- * `like`: an assembly whose conduction operator is reused when the grid (cached by section, grid2d.ts) and k are
- * the same, as for a variant of h, a contact resistance or the base temperature.
+ * `like`: an assembly whose conduction operator (per unit depth) is reused when the grid's nodes (cached by section,
+ * grid2d.ts: the same arrays) and k are the same, as for a variant of h, the width, a contact resistance or the base
+ * temperature.
  */
 export function assembleSection2D(problem: Fin2DProblem, nx: number, ny: number, like?: SectionAssembly & { k: number }): SectionAssembly & { k: number } {
   const grid = buildGrid2D(problem.section, { nx, ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face });
-  const K = like !== undefined && like.grid === grid && like.k === problem.k ? like.K : assembleConduction2D(grid, problem.k);
+  const K =
+    like !== undefined && like.grid.x === grid.x && like.grid.y === grid.y && like.k === problem.k ? like.K : assembleConduction2D(grid, problem.k);
   const terms = discretizeBoundaries(grid, problem.conditions);
   return { grid, K, terms, system: buildSystem2D(K, terms), k: problem.k };
 }
