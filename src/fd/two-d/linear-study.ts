@@ -2,12 +2,13 @@
  * fd-2d with its discretisation error: the same fin on three or more systematically refined grids,
  * Richardson extrapolation and the Grid Convergence Index (refinement.ts, Celik et al. 2008).
  *
- * Grid family: cells across Cy = c0 * 2^l and cells along Cx = C0 * 2^l (gridFamily2D says how C0 follows
- * from the fin's length, half-thickness and mL): every grid is the same smooth map refined by exactly 2
+ * Grid family: cells across Cy = c0 * 2^l and cells along Cx = C0 * 2^l (gridFamily2D says how c0 and C0 follow
+ * from the fin's Biot number, length, half-thickness and mL): every grid is the same smooth map refined by exactly 2
  * in both directions (representative size sqrt(L b / (Cx Cy)), ratio 2), the grading included.
  * Observed order: the scheme is second order, but the flux has a logarithmic singularity at the base
  * corner, where the fixed base temperature meets the cooled face (incompatible Dirichlet and Robin data);
- * its weight grows with Bi. Measured with the default grading: 1.85-1.99 on plate fins (Bi 0.01-2), 1.92-
+ * its weight grows with Bi, and so do the default grids' cells across. Measured with the default grading: 1.85-1.99
+ * on plate and pin fins (Bi 0.01-2; the extrapolated heat rate within 8.2e-7 of the exact series), 1.92-
  * 1.96 on thick sloped fins (Bi = 1), 1.99-2.02 in the thin limit; on uniform grids 1.6-1.9 (the independent
  * uniform-grid finite-volume check in script fin2d_series.py found 1.7-1.85).
  */
