@@ -8,6 +8,7 @@ import { describe, expect, it } from 'vitest';
 import {
   checkSink,
   InputError,
+  map,
   sinkChartPng,
   sinkChartSvg,
   sinkFromFile,
@@ -124,6 +125,13 @@ convection: { ambient: 25 degC, h: 40 W/(m^2*K) }
     // @ts-expect-error: flux is a single fin's chart
     await expect(sinkChartSvg(sink, 'flux')).rejects.toThrow(/kind: got "flux"; expected one of profile, plate, fin-heat, sensitivity/);
   });
+
+  it('maps a sink key against h with the fd-3d reference at every point', async () => {
+    const r = await map({ text: small }, { x: 'array.count=2:3', y: 'convection.h=20:60', steps: [2, 2] });
+    expect(r.reference).toBe('fd-3d');
+    expect(r.models).toEqual(['overall-efficiency', 'overall-efficiency-exact-fin', 'spreading-series']);
+    expect(r.points).toHaveLength(4);
+  }, 180_000);
 
   it('builds the report: HTML, Markdown with the figures it names, the How sure section', async () => {
     const r = await sinkReport(sinkFromText(small), { date: '2026-01-01' });
