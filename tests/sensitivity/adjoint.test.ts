@@ -146,9 +146,10 @@ describe('check with the fd-2d reference: the adjoint against the closed-form de
         ['base.temperature', 1],
       ];
       // The adjoint gives the exact derivative of the finest grid's heat rate, whose error (the study's GCI, below
-      // 1e-5 here) and the O(Bi) = 1e-5 of the 2-D model bound the difference from the 1-D closed form: 1e-4 holds both.
+      // 1e-5 here) and the O(Bi) = 1e-5 of the 2-D model bound the difference from the 1-D closed form: 2e-5 holds both
+      // (measured 3e-7 to 4.8e-6, largest for the thickness, which the 2-D model resolves across).
       expect(report.reference.discretizationError).toBeLessThan(1e-5);
-      for (const [key, value] of expected) expect(Math.abs(sensitivityOf(report, key) - value), key).toBeLessThan(1e-4);
+      for (const [key, value] of expected) expect(Math.abs(sensitivityOf(report, key) - value), key).toBeLessThan(2e-5);
     },
     60_000,
   );
