@@ -205,7 +205,7 @@ export function lumpedLevel(system: System2D): number {
 }
 
 /** The system for theta - level: same matrix, rhs - level x row sums (A 1 = row sums). */
-function shiftSystem(system: System2D, level: number): System2D {
+export function shiftSystem(system: System2D, level: number): System2D {
   const { excess } = system;
   if (excess === undefined || level === 0) return system;
   const rhs = Float64Array.from(system.rhs, (b, p) => b - level * (excess[p] as number));
