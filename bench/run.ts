@@ -3,7 +3,8 @@
  *
  * Areas (one file each, each returns rows): oned.ts (tridiagonal solves), twod.ts (2-D grid solves
  * against a general banded LU), images.ts (PNG charts), process.ts (whole `fincheck check` runs).
- * sink.ts (fd-3d heat-sink solve and study), uncertainty.ts (check's sensitivities and sample), nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
+ * sink.ts (fd-3d heat-sink solve and study), uncertainty.ts (check's sensitivities and sample), optimize-sink.ts (optimize on
+ * the demo sink, one whole process), nonlinear.ts (Newton vs linear cost), process.ts also `report` and `map` as whole processes; `map2d`
  * (the 41x41 map with the 2-D reference, about a minute) runs only when named.
  * Run a subset by name: `npm run bench -- 1d images`. Nothing is written to disk: the table is printed.
  * Standalone timings with more detail, outside the table (`npx tsx bench/NAME.ts`): tridiagonal-solvers.ts,
@@ -22,6 +23,7 @@ import { benchNonlinear } from './nonlinear.js';
 import { benchTwoD } from './twod.js';
 import { benchSink } from './sink.js';
 import { benchUncertainty } from './uncertainty.js';
+import { benchOptimizeSink } from './optimize-sink.js';
 
 const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   '1d': benchOneD,
@@ -33,10 +35,11 @@ const AREAS: Record<string, () => Promise<BenchRow[]>> = {
   map2d: benchMap2D,
   sink: benchSink,
   uncertainty: benchUncertainty,
+  optimize: benchOptimizeSink,
 };
 
 /** Areas run when none is named: all but the minute-long 2-D map. */
-const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands', 'sink', 'uncertainty'];
+const DEFAULT_AREAS = ['1d', '2d', 'images', 'process', 'nonlinear', 'commands', 'sink', 'uncertainty', 'optimize'];
 
 function loadText(): string {
   return loadavg()

@@ -67,7 +67,7 @@ async function checkOne(file: string, io: Io, settings: Settings, showWarnings: 
         `--reference ${settings.reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
       );
     const sink = any.case;
-    const report = await runSinkCheck(sink, (s) => resolvedSinkStudy(s, settings.tolerance), { tolerance: settings.tolerance });
+    const report = await runSinkCheck(sink, (s) => resolvedSinkStudy(s, settings.tolerance), { tolerance: settings.tolerance, sample: settings.sample });
     const exit = settings.strict && report.models.some((m) => m.verdict === 'unsafe') ? 1 : 0;
     const format = (u: DisplayUnits): string => formatSinkCheck(sink, report, u);
     return { outcome: { file, kind: 'heat-sink', report }, display: sink.display, format, json: { ...report, warnings: sink.warnings ?? [] }, exit };
@@ -89,7 +89,11 @@ export function registerCheck(program: Command, io: Io, setExit: SetExit): Comma
     .option('--reference <model>', 'reference model: auto (2-D where the case allows), 1d or 2d', 'auto')
     .option('--json', 'print one JSON document instead of the table (several cases: an array of them; keys: README, "JSON output")')
     .option('--strict', 'exit with code 1 when any shortcut is unsafe')
-    .option('--sample <when>', 'confirm the uncertainty band by a Latin-hypercube sample: auto (nonlinear fins, bands over 20 %), always or never', 'auto')
+    .option(
+      '--sample <when>',
+      'confirm the uncertainty band by a Latin-hypercube sample: auto (nonlinear fins or sinks, bands over 20 %, within a work budget), always or never',
+      'auto',
+    )
     .option('--units <system>', unitsHelp)
     .option('--csv <file>', 'also write the comparison table as CSV (units in the header; not written when a case fails)')
     .addHelpText(

@@ -12,6 +12,7 @@ import { defaultDisplayUnits, inUnit, parseAnyCaseText, parseQuantity, type Disp
 import { optimizeFin, type Keep, type Objective, type OptimizeResult } from '../../src/design/index.js';
 import { UsageError } from '../../src/errors.js';
 import { readCaseInput } from '../case-input.js';
+import { optimizeSinkCommand } from './optimize-sink.js';
 import type { Io } from '../io.js';
 import { displayUnitsOf, parseOption, referenceOption, toleranceOption, unitsHelp } from '../options.js';
 
@@ -47,6 +48,14 @@ function parseBounds(list: readonly string[]): Map<string, [number, number]> {
   for (const text of list) {
     const m = /^([^=]+)=([^:]+):(.+)$/.exec(text.trim());
     if (!m) throw new UsageError(`--bounds: got ${JSON.stringify(text)}; expected KEY=FROM:TO such as fin.thickness=0.5mm:4mm`);
+    if ((m[1] as string).trim() === 'array.count') {
+      // A heat sink's fin count: whole numbers.
+      const [from, to] = [m[2] as string, m[3] as string].map((e) => (/^\s*[0-9]+\s*$/.test(e) ? Number(e) : Number.NaN)) as [number, number];
+      if (!(from >= 1 && to > from))
+        throw new UsageError(`--bounds: array.count: got ${m[2]}:${m[3]}; expected whole numbers 1 <= FROM < TO such as array.count=4:30`);
+      bounds.set('array.count', [from, to]);
+      continue;
+    }
     const ends = [m[2] as string, m[3] as string].map((e) => parseQuantity(e.trim(), 'length'));
     const [from, to] = ends;
     if (!from?.ok || !to?.ok) {
@@ -108,17 +117,24 @@ export function registerOptimize(program: Command, io: Io): Command {
     .command('optimize')
     .argument('<case>', 'case file (YAML or JSON); - reads it from standard input')
     .description('find the best fin dimensions from the shortcut and from the numerical reference, and what the shortcut loses')
-    .option('--vary <keys>', 'dimension(s) to vary: fin.thickness, fin.length, fin.diameter, ... (two, comma-separated, for min-material)')
+    .option(
+      '--vary <keys>',
+      'dimension(s) to vary: fin.thickness, fin.length, fin.diameter, ... (two, comma-separated, for min-material); a heat sink: array.count or fin.thickness',
+    )
     .option(
       '--keep <amount>',
-      'what stays fixed: profile-area, volume, mass (same material: the volume) or none (default: profile-area for max-heat, volume for a pin; none for the other goals)',
+      'what stays fixed: profile-area, volume, mass (same material: the volume) or none (default: profile-area for max-heat, volume for a pin; none for the other goals; a heat sink: none, volume or mass, default none)',
     )
-    .option('--for <goal>', 'max-heat (with a kept amount), min-material or required (with --heat)', 'max-heat')
+    .option(
+      '--for <goal>',
+      "max-heat (with a kept amount), min-material or required (with --heat); a heat sink: max-heat (the lowest hottest-source temperature) or required (with --temperature or the sources' limits)",
+      'max-heat',
+    )
     .option('--heat <Q>', 'the required heat rate, e.g. 12 W')
-    .option('--temperature <T>', 'a required source temperature (heat sinks; not for a single fin)')
+    .option('--temperature <T>', "a heat sink's required source temperature, e.g. 110 degC (default: each source's limit; not for a single fin)")
     .option(
       '--bounds <KEY=FROM:TO>',
-      'range of a varied key, e.g. fin.thickness=0.5mm:4mm (default 1/4 to 4 times the case value)',
+      'range of a varied key, e.g. fin.thickness=0.5mm:4mm or array.count=4:30 (default 1/4 to 4 times the case value, fins that fit with a gap)',
       (v: string, all: string[]) => [...all, v],
       [],
     )
@@ -135,7 +151,9 @@ Examples:
   fincheck optimize demo/led-pin-fin.yaml --vary fin.diameter --keep volume --bounds fin.diameter=1mm:8mm
   fincheck optimize my-fin.yaml --vary fin.length --for required --heat 12W
   fincheck optimize my-fin.yaml --vary fin.thickness,fin.length --keep none --for min-material --heat 12W
-  fincheck optimize demo/inverter-plate-fin.yaml --vary fin.thickness --out optimum.png`,
+  fincheck optimize demo/inverter-plate-fin.yaml --vary fin.thickness --out optimum.png
+  fincheck optimize demo/motor-drive-sink.yaml --vary array.count --for required --temperature 95degC
+  fincheck optimize demo/motor-drive-sink.yaml --vary fin.thickness --keep volume --out sink-optimum.png`,
     )
     .action(async (file: string, o: OptimizeCliOptions) => {
       if (o.vary === undefined || o.vary.trim() === '') throw new UsageError('--vary: a dimension to vary is required, e.g. --vary fin.thickness');
@@ -143,6 +161,16 @@ Examples:
       const keepGiven = o.keep === undefined ? undefined : (parseOption('--keep', keepOption, o.keep, 'profile-area, volume, mass or none') as Keep);
       const reference = parseOption('--reference', referenceOption, o.reference, 'auto, 1d or 2d');
       const tolerance = parseOption('--tolerance', toleranceOption, o.tolerance);
+      const bounds = parseBounds(o.bounds);
+      const out = o.out === undefined ? null : parseOutFile(o.out);
+      displayUnitsOf(o.units, undefined);
+      const { text, fileName } = await readCaseInput(file, io);
+      const any = parseAnyCaseText(text, fileName);
+      if (any.kind === 'heat-sink') {
+        const units = displayUnitsOf(o.units, any.case.display);
+        await optimizeSinkCommand(text, fileName, { ...o, vary: o.vary }, { tolerance, bounds, out, units }, io);
+        return;
+      }
       if (o.temperature !== undefined)
         throw new UsageError(
           '--temperature: a required temperature is a heat-sink goal (a source temperature); a single fin has its base temperature given',
@@ -151,10 +179,6 @@ Examples:
       if (goal === 'max-heat' && o.heat !== undefined)
         throw new UsageError('--heat: --for max-heat takes no required heat rate (use --for required or min-material)');
       const objective: Objective = goal === 'max-heat' ? { kind: 'max-heat' } : { kind: goal, heat_W: parseHeat(o.heat as string) };
-      const bounds = parseBounds(o.bounds);
-      const out = o.out === undefined ? null : parseOutFile(o.out);
-      displayUnitsOf(o.units, undefined);
-      const { text, fileName } = await readCaseInput(file, io);
       const result = await optimizeFin({
         caseText: text,
         fileName,

@@ -20,6 +20,7 @@ import { sinkShortcuts, type SinkShortcutResult, type SinkShortcuts } from './si
 import type { SinkCheckReport, SinkModelRow, SinkReferenceResult } from './sink-types.js';
 import { verdictOf } from './types.js';
 import { sinkRowsWithBand, sinkSensitivity } from './sink-sensitivity.js';
+import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, type SampleWhen } from './uncertainty-band.js';
 
 export interface SinkCheckOptions {
   /** Relative tolerance on each source's mean rise (e.g. 0.02). */
@@ -31,6 +32,10 @@ export interface SinkCheckOptions {
    * study). Default true; false leaves that row unmeasured (map points, which show no ledger).
    */
   sheetDrift?: boolean;
+  /** When the band is confirmed by a Latin-hypercube sample (default auto), its size (200) and seed (1): sink-sensitivity.ts. */
+  sample?: SampleWhen;
+  sampleSize?: number;
+  sampleSeed?: number;
 }
 
 export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | Promise<SinkStudy>);
@@ -53,7 +58,14 @@ export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReference
   const base = sinkCheckFrom(c, study, shortcuts, options);
   const sheet = options.sheetDrift === false ? null : sheetReductionRow(c, study);
   const withSheet = sheet === null ? base : { ...base, assumptions: [...base.assumptions, sheet] };
-  const sensitivity = options.sensitivities === false ? null : sinkSensitivity(c, study);
+  const sensitivity =
+    options.sensitivities === false
+      ? null
+      : sinkSensitivity(c, study, {
+          when: options.sample ?? 'auto',
+          n: options.sampleSize ?? DEFAULT_SAMPLE_SIZE,
+          seed: options.sampleSeed ?? DEFAULT_SAMPLE_SEED,
+        });
   const report = sensitivity === null ? withSheet : { ...withSheet, models: sinkRowsWithBand(withSheet.models, sensitivity.uncertainty), ...sensitivity };
   return { report, study, shortcuts };
 }

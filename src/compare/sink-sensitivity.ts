@@ -13,12 +13,25 @@
  * over the step is ~1e-7 of S; the truncation error d^2 S'''/6 ~ 1e-7 too). The two agree to 1e-6 (tests). The
  * rise is linear in the sources' powers, so every S of a power is the share of the rise that source causes.
  * The band: first order (uncertainty-band.ts, JCGM 100:2008 eq. 10), sqrt(sum (S u)^2) of the rise, one standard
- * uncertainty each side. No Latin-hypercube sample for a sink: 200 fd-3d solves of ~1 s each are not a check's
- * cost; the note says so, and that first order is the linearisation of the rise about the case.
+ * uncertainty each side, confirmed by a seeded Latin-hypercube sample (sink-sample.ts, JCGM 101:2008) when asked
+ * ('always'), or under 'auto' when the sink is nonlinear (k(T), a power-law h) or the band exceeds 20 %
+ * (SAMPLE_THRESHOLD) and the sample's work (n x the coarsest grid's unknowns, a Newton solve counted 4 times) is within SINK_SAMPLE_WORK. Each
+ * sample point is one fd-3d solve on the study's coarsest grid. Where the sample disagrees with first order by more
+ * than twice its sampling error, the band is the sample's.
  */
 import { DEFAULT_UNCERTAINTY, sinkNumericInputs, type HeatSinkCase } from '../case/index.js';
 import { sinkGridAdjoint, solveSinkOnGrid, type SinkGridSolution, type SinkStudy } from '../fd/index.js';
+import { NEWTON_WEIGHT } from './reference-sensitivity.js';
+import { SINK_SAMPLE_WORK, sinkSample } from './sink-sample.js';
 import type { SinkModelRow, SinkSensitivity, SinkUncertaintyBand } from './sink-types.js';
+import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, SAMPLE_THRESHOLD, type SampleWhen } from './uncertainty-band.js';
+
+/** When and how large the Latin-hypercube sample is (check's options). */
+export interface SinkSampleOptions {
+  when: SampleWhen;
+  n: number;
+  seed: number;
+}
 
 export const SINK_SENSITIVITY_STEP = 1e-3;
 
@@ -31,7 +44,11 @@ export interface SinkSensitivityResult {
 const pct = (x: number): string => `${Number((100 * x).toPrecision(3))} %`;
 
 /** null when the study carries no grid to re-solve on (a study built by hand). */
-export function sinkSensitivity(c: HeatSinkCase, study: SinkStudy): SinkSensitivityResult | null {
+export function sinkSensitivity(
+  c: HeatSinkCase,
+  study: SinkStudy,
+  sampleOptions: SinkSampleOptions = { when: 'auto', n: DEFAULT_SAMPLE_SIZE, seed: DEFAULT_SAMPLE_SEED },
+): SinkSensitivityResult | null {
   const finest = study.finestGrid;
   if (finest === undefined) return null;
   const spec = { ...finest, refine: Math.max(1, finest.refine / 2) };
@@ -74,21 +91,54 @@ export function sinkSensitivity(c: HeatSinkCase, study: SinkStudy): SinkSensitiv
   const uncertain = sensitivities.filter((s) => s.uncertainty > 0);
   const riseRef = study.sources[hottest]?.meanRise_K ?? rise0;
   const name = study.sources[hottest]?.name ?? `source ${hottest}`;
+  // The sample: on the study's coarsest grid (refine 1).
+  const coarsest = { ...finest, refine: 1 };
+  const coarsestUnknowns = study.unknowns[study.unknowns.length - 1] ?? 0;
+  const nonlinear = isNonlinearCase(c);
+  // A Newton solve counted as NEWTON_WEIGHT linear ones, as for a fin (reference-sensitivity.ts).
+  const work = sampleOptions.n * coarsestUnknowns * (nonlinear ? NEWTON_WEIGHT : 1);
+  const wanted = nonlinear || firstOrder > SAMPLE_THRESHOLD;
+  const affordable = work <= SINK_SAMPLE_WORK;
+  const due = sampleOptions.when === 'always' || (sampleOptions.when === 'auto' && wanted && affordable);
+  const gridWords = `fd-3d on the study's coarsest grid (${coarsestUnknowns} unknowns), one solve a point`;
+  const sample =
+    due && uncertain.length > 0
+      ? sinkSample(c, uncertain, firstOrder, hottest, riseRef, { n: sampleOptions.n, seed: sampleOptions.seed, grid: coarsest, gridWords })
+      : null;
+  const useSample = sample !== null && !sample.agrees;
+  const why =
+    uncertain.length === 0
+      ? 'no input has a stated uncertainty'
+      : sample === null
+        ? sampleOptions.when === 'never'
+          ? 'no sample drawn (switched off)'
+          : wanted
+            ? `first order only, not confirmed by a sample: its ${work.toExponential(1)} unknowns x solves exceed the automatic budget of ${SINK_SAMPLE_WORK.toExponential(0)}; a sample asked for explicitly is drawn whatever its cost`
+            : `first order only: the sink is linear and the band is within ${100 * SAMPLE_THRESHOLD} % (the rise linearised about the case)`
+        : sample.agrees
+          ? `confirmed by a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}): ${pct(sample.relative)} +/- ${pct(sample.samplingError)}`
+          : `a Latin-hypercube sample of ${sample.n} (seed ${sample.seed}, ${sample.grid}) gives ${pct(sample.relative)} +/- ${pct(sample.samplingError)}, more than twice its sampling error from first order (${pct(firstOrder)}): the band is the sample's`;
   return {
     sensitivities,
     sensitivityMethod: methodText,
     uncertainty: {
-      method: 'first-order',
-      relative: firstOrder,
-      low_K: riseRef * (1 - firstOrder),
-      high_K: riseRef * (1 + firstOrder),
+      method: useSample ? 'latin-hypercube' : 'first-order',
+      relative: useSample ? sample.relative : firstOrder,
+      low_K: useSample ? sample.low_K : riseRef * (1 - firstOrder),
+      high_K: useSample ? sample.high_K : riseRef * (1 + firstOrder),
       firstOrder,
       fromH: h === undefined ? 0 : Math.abs(h.dlnRise_dlnx * h.uncertainty),
-      sample: null,
+      sample,
       source: name,
-      note: `One standard uncertainty of ${name}'s mean rise from ${uncertain.map((s) => `${s.key} ${pct(s.uncertainty)}`).join(', ') || 'nothing'}; first order, sqrt(sum (S u)^2) = ${pct(firstOrder)}; no sample for a heat sink (200 fd-3d solves): first order is the rise linearised about the case`,
+      note: `One standard uncertainty of ${name}'s mean rise from ${uncertain.map((s) => `${s.key} ${pct(s.uncertainty)}`).join(', ') || 'nothing'}; first order, sqrt(sum (S u)^2) = ${pct(firstOrder)}; ${why}`,
     },
   };
+}
+
+/** A sink whose rise is not linear in its inputs: a conductivity table (fins or plate) or a power-law h. */
+function isNonlinearCase(c: HeatSinkCase): boolean {
+  const tabled = (k: { kind: string }): boolean => k.kind !== 'constant';
+  return (c.fin !== null && tabled(c.fin.material.k)) || tabled(c.plate.material.k) || (c.fin !== null && c.convection.h.kind === 'power');
 }
 
 /** Each model row's |drift| (its worst source) over the band of the hottest source's rise. */

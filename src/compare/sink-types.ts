@@ -15,8 +15,25 @@ export interface SinkSensitivity {
   uncertainty: number;
 }
 
+/** The Latin-hypercube confirmation of a sink's band (sink-sample.ts). */
+export interface SinkUncertaintySample {
+  method: 'latin-hypercube';
+  n: number;
+  seed: number;
+  /** Standard deviation of the sampled hottest rises over the nominal rise on the sample's grid. */
+  relative: number;
+  samplingError: number;
+  agrees: boolean;
+  /** The grid the sample was solved on. */
+  grid: string;
+  /** The band from the sample's percentiles, scaled to the reference's rise, K. */
+  low_K: number;
+  high_K: number;
+}
+
 export interface SinkUncertaintyBand {
-  method: 'first-order';
+  /** `first-order`, or `latin-hypercube` where the sample disagrees with first order (the band is then the sample's). */
+  method: 'first-order' | 'latin-hypercube';
   /** Relative standard uncertainty of the hottest source's mean rise. */
   relative: number;
   /** The rise (1 -+ relative), K. */
@@ -24,7 +41,8 @@ export interface SinkUncertaintyBand {
   high_K: number;
   firstOrder: number;
   fromH: number;
-  sample: null;
+  /** The Latin-hypercube confirmation (sink-sample.ts), or null when none was drawn (the note says why). */
+  sample: SinkUncertaintySample | null;
   /** Which source, and how the band was found. */
   source: string;
   note: string;

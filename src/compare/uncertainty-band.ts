@@ -123,7 +123,7 @@ function drawSample(c: Case, uncertain: readonly Sensitivity[], firstOrder: numb
 }
 
 /** Linear interpolation between order statistics (Hyndman & Fan 1996, definition 7). */
-function quantile(sorted: readonly number[], p: number): number {
+export function quantile(sorted: readonly number[], p: number): number {
   const at = p * (sorted.length - 1);
   const i = Math.floor(at);
   const lo = sorted[i] as number;

@@ -62,13 +62,28 @@ const finUncertainty = obj({
 });
 const sinkSensitivity = obj({ key: str, dlnRise_dlnx: num, method: oneOfWords('adjoint', 'central-difference'), value: num, uncertainty: num });
 const sinkUncertainty = obj({
-  method: { const: 'first-order' },
+  method: oneOfWords('first-order', 'latin-hypercube'),
   relative: num,
   low_K: num,
   high_K: num,
   firstOrder: num,
   fromH: num,
-  sample: { type: 'null' },
+  sample: described(
+    nullable(
+      obj({
+        method: { const: 'latin-hypercube' },
+        n: int,
+        seed: int,
+        relative: num,
+        samplingError: num,
+        agrees: bool,
+        grid: str,
+        low_K: num,
+        high_K: num,
+      }),
+    ),
+    "The Latin-hypercube confirmation (each point an fd-3d solve on the study's coarsest grid); null when none was drawn",
+  ),
   source: str,
   note: str,
 });
@@ -372,8 +387,8 @@ function mapSchema(): Schema {
   );
 }
 
-/** `optimize --json`. */
-function optimizeSchema(): Schema {
+/** `optimize --json` of a single fin. */
+function finOptimizeSchema(): Schema {
   const values = { type: 'object', additionalProperties: num, description: 'Every dimension that changed, m, by key path' };
   const point = {
     values,
@@ -400,6 +415,64 @@ function optimizeSchema(): Schema {
     },
     ['curve', 'chartFile'],
   );
+}
+
+/** `optimize --json` of a heat sink (src/design optimize-sink.ts): the objective is the hottest source's mean rise. */
+function sinkOptimizeSchema(): Schema {
+  const values = {
+    type: 'object',
+    additionalProperties: num,
+    description: 'Every dimension that changed by key path: array.count (a count), lengths in m',
+  };
+  const point = {
+    values,
+    hottestRise_K: described(num, "The hottest source's mean temperature rise above ambient, K (the objective: max-heat minimises it)"),
+    hottestTemperature_degC: num,
+    hottestSource: str,
+    sourceRise_K: arr(num),
+    amount: described(num, "The fins' volume, m^3"),
+  };
+  return obj(
+    {
+      kind: { const: 'heat-sink' },
+      case: str,
+      objective: oneOfWords('max-heat', 'required'),
+      quantity: str,
+      requiredTemperature_degC: described(nullable(num), 'The required temperature of every source, degC; null: each source limit (or max-heat)'),
+      limits: nullable(arr(obj({ source: str, limit_degC: num }))),
+      sourceNames: arr(str),
+      keep: oneOfWords('none', 'volume', 'mass'),
+      vary: arr(oneOfWords('array.count', 'fin.thickness')),
+      dependent: nullable(oneOfWords('fin.thickness', 'fin.length')),
+      bounds: { type: 'object', additionalProperties: { type: 'array', items: num, minItems: 2, maxItems: 2 } },
+      shortcut: obj({ ...point, model: oneOfWords('overall-efficiency', 'overall-efficiency-exact-fin'), method: str }),
+      reference: obj({
+        ...point,
+        model: { const: 'fd-3d' },
+        discretizationError: nullable(num),
+        resolved: bool,
+        evaluations: described(int, 'fd-3d refinement studies solved (search and default studies)'),
+        search: obj({ studies: int, grid: str, discretizationError: nullable(num), values }),
+        confirm: obj({ studies: int, grid: str }),
+        neighbours: arr(obj({ values, hottestRise_K: num })),
+        sourceMax_degC: arr(num),
+      }),
+      shortcutAtReference_K: described(num, "The reference's hottest rise at the shortcut's answer, K (the sink's form of shortcutAtReference_W)"),
+      loss: num,
+      shortcutKeepsLimit: nullable(bool),
+      hSensitivity: nullable(obj({ method: str, dlnAnswer_dlnh: nullable(num), atLowH: nullable(num), atHighH: nullable(num) })),
+      notes: arr(str),
+      cautions: arr(str),
+      curve: obj({ key: str, x: arr(num), reference_K: arr(num), shortcut_K: arr(num), model: { const: 'fd-3d' }, note: str }),
+      chartFile: described(str, 'The chart file written, when one was asked for'),
+    },
+    ['curve', 'chartFile'],
+  );
+}
+
+/** `optimize --json`: a single fin's document or a heat sink's (told apart by `kind`). */
+function optimizeSchema(): Schema {
+  return { oneOf: [finOptimizeSchema(), sinkOptimizeSchema()] };
 }
 
 /** The outputs that have a schema (printed by the schema command). */

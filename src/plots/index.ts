@@ -16,3 +16,4 @@ export { sinkPlateChart, sinkPlateChartSpec } from './sink-plate-chart.js';
 export { sinkFinHeatChartSpec } from './sink-fin-heat-chart.js';
 export { sinkFinProfileChartSpec } from './sink-fin-profile-chart.js';
 export { optimizeChartSpec, type OptimizeChartInput } from './optimize-chart.js';
+export { sinkOptimizeChartSpec, type SinkOptimizeChartInput } from './sink-optimize-chart.js';

@@ -1,7 +1,9 @@
 /**
  * A heat-sink case given to a command that takes single-fin cases: exit 2, naming the key that makes it a heat
  * sink and what the command accepts, nothing on stdout. The sink is invented. (solve and plot took single fins
- * only until issue 11's outputs; they take heat sinks now: tests/cli/sink-commands.test.ts.)
+ * only until issue 11's outputs; they take heat sinks now: tests/cli/sink-commands.test.ts; optimize took single fins only
+ * until issue 12's sink optimum: it takes heat sinks now, tests/design/optimize-sink.test.ts, and refuses the
+ * single-fin options for them.)
  */
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -23,12 +25,12 @@ describe('single-fin commands given a heat sink', () => {
   const dir = mkdtempSync(join(tmpdir(), 'fincheck-sink-cli-'));
   const file = join(dir, 'sink.yaml');
   writeFileSync(file, sink);
-  it.each([['optimize']])('%s: exit 2 naming array and single-fin cases', async (command) => {
-    const run = await cli(command, file, '--vary', 'fin.thickness');
+  it('optimize: a single-fin option given for a heat sink exits 2 naming it and what a sink takes', async () => {
+    const run = await cli('optimize', file, '--vary', 'fin.thickness', '--keep', 'profile-area');
     expect(run.code).toBe(2);
     expect(run.stdout).toBe('');
     expect(run.stderr).toMatch(
-      /sink\.yaml:4:\d+: array: got .*; expected a single-fin case \(keys fin, material, convection and base\): a case with an array key is a heat sink/,
+      /^fincheck: --keep: got profile-area; a heat sink takes none \(the plate fixed, the count or thickness free\), volume or mass/,
     );
   });
 });

@@ -217,6 +217,23 @@ describe('solve, map, optimize', () => {
     await expectValid('optimize', doc);
     await expectExtraKeyRefused('optimize', doc, (d) => d.reference as Record<string, unknown>);
   });
+  it('optimize of a heat sink matches the optimize schema', async () => {
+    const doc = await jsonOf(
+      'optimize',
+      sink,
+      '--vary',
+      'array.count',
+      '--for',
+      'required',
+      '--temperature',
+      '90degC',
+      '--bounds',
+      'array.count=2:12',
+      '--json',
+    );
+    await expectValid('optimize', doc);
+    await expectExtraKeyRefused('optimize', doc, (d) => d.reference as Record<string, unknown>);
+  }, 120_000);
 });
 
 describe('schema command', () => {
