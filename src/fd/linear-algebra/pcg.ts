@@ -79,7 +79,7 @@ export function attemptMgPcg(
   const n = system.rhs.length;
   const scale = coupledRhsNorm1(system) || 1;
   const x = new Float64Array(n);
-  const r = Float64Array.from(system.rhs);
+  const r = system.rhs.slice();
   const z = new Float64Array(n);
   const p = new Float64Array(n);
   const q = new Float64Array(n);

@@ -208,7 +208,9 @@ export function lumpedLevel(system: System2D): number {
 function shiftSystem(system: System2D, level: number): System2D {
   const { excess } = system;
   if (excess === undefined || level === 0) return system;
-  const rhs = Float64Array.from(system.rhs, (b, p) => b - level * (excess[p] as number));
+  // A plain loop: Float64Array.from with a map function calls it through the iterator protocol (~25x slower in V8).
+  const rhs = new Float64Array(system.rhs.length);
+  for (let p = 0; p < rhs.length; p++) rhs[p] = (system.rhs[p] as number) - level * (excess[p] as number);
   return { ...system, rhs };
 }
 
