@@ -150,7 +150,8 @@ Examples:
 
       // prepareMap parses and validates the text (InputError with positions, as check reports them).
       const { text: caseText, fileName } = await readCaseInput(file, io);
-      const sink = parseAnyCaseText(caseText, fileName).kind === 'heat-sink';
+      const parsed = parseAnyCaseText(caseText, fileName);
+      const sink = parsed.kind === 'heat-sink';
       const steps = givenSteps ?? parseOption('--steps', stepsOption, sink ? SINK_DEFAULT_STEPS : '41x41');
       const prepared = await prepareMap({
         caseText,
@@ -202,7 +203,7 @@ Examples:
         const written = staged.commit();
         removeFiles(outDir, stale);
         const json = files.find((f) => f.name === MANIFEST_NAME)?.data;
-        io.out(o.json && typeof json === 'string' ? json : formatMapSummary(shown, written));
+        io.out(o.json && typeof json === 'string' ? json : formatMapSummary(shown, written, displayUnitsOf(o.units, parsed.case.display)));
       } catch (err) {
         progress.finish();
         staged.discard();

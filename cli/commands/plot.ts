@@ -98,6 +98,7 @@ const SINK_DESCRIPTIONS: Record<SinkPlotKind, string> = {
   profile: 'temperature up the hottest and the coolest fin against the uniform-base shortcut',
   plate: 'plate underside temperature seen from above, sources and fin footprints drawn',
   'fin-heat': 'heat per fin (bars)',
+  sensitivity: "tornado chart of d ln rise / d ln x of the hottest source's mean rise (fd-3d) for every input, with the uncertainty band",
 };
 
 export function registerPlot(program: Command, io: Io): Command {
@@ -108,7 +109,7 @@ export function registerPlot(program: Command, io: Io): Command {
     .option('--out <file>', 'output file: .png (rendered with the bundled font) or .svg')
     .option(
       '--kind <kind>',
-      `a fin: profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}), heatmap (${DESCRIPTIONS.heatmap}) or sensitivity (${DESCRIPTIONS.sensitivity}); a heat sink: profile (${SINK_DESCRIPTIONS.profile}), plate (${SINK_DESCRIPTIONS.plate}) or fin-heat (${SINK_DESCRIPTIONS['fin-heat']})`,
+      `a fin: profile (${DESCRIPTIONS.profile}), flux (${DESCRIPTIONS.flux}), heatmap (${DESCRIPTIONS.heatmap}) or sensitivity (${DESCRIPTIONS.sensitivity}); a heat sink: profile (${SINK_DESCRIPTIONS.profile}), plate (${SINK_DESCRIPTIONS.plate}), fin-heat (${SINK_DESCRIPTIONS['fin-heat']}) or sensitivity (${SINK_DESCRIPTIONS.sensitivity})`,
       'profile',
     )
     .option('--width <px>', 'chart width in px at 96 dpi', '1200')
@@ -139,7 +140,7 @@ Examples:
       if (any.kind === 'heat-sink') {
         if (reference !== 'auto') throw new UsageError(`--reference ${reference}: a heat sink's reference is fd-3d; leave --reference at auto`);
         await plotSink(
-          any.case,
+          withDisplayUnits(any.case, o.units),
           parseOption('--kind', sinkKindOption, anyKind, `${SINK_PLOT_KINDS.join(', ')} for a heat sink`),
           out,
           image,
@@ -204,7 +205,7 @@ async function plotSink(
 ) {
   const available = sinkPlotAvailability({ case: c }, kind);
   if (!available.ok) throw new UsageError(`--kind ${kind}: ${available.reason}; --kind plate draws it`);
-  const input = await sinkPlotInput(c, tolerance);
+  const input = await sinkPlotInput(c, tolerance, kind === 'sensitivity');
   const svg = sinkPlotSvg(kind, input, image, image.dpi / 96);
   const bytes = await chartBytes(svg, out.format, { dpi: image.dpi });
   writeFilesAtomically([{ path: out.path, bytes }]);

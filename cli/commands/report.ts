@@ -221,7 +221,7 @@ one is bad (exit 2) or cannot be solved (exit 3), each problem is reported and n
         };
         written =
           any.kind === 'heat-sink'
-            ? await writeSinkReport({ ...common, case: any.case })
+            ? await writeSinkReport({ ...common, case: withDisplayUnits(any.case, o.units) })
             : await writeReport({ ...common, case: withDisplayUnits(any.case, o.units), reference });
       } catch (err) {
         if (!(err instanceof Interrupted)) throw err;

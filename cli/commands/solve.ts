@@ -58,7 +58,11 @@ Examples:
           );
         const sink = any.case;
         const report = sinkSolveReport(sink, studySink(sink));
-        io.out(o.json ? `${JSON.stringify({ ...report, warnings: sink.warnings ?? [] }, null, 2)}\n` : formatSinkSolve(sink, report));
+        io.out(
+          o.json
+            ? `${JSON.stringify({ ...report, warnings: sink.warnings ?? [] }, null, 2)}\n`
+            : formatSinkSolve(sink, report, displayUnitsOf(o.units, sink.display)),
+        );
         return;
       }
       const c = any.case;

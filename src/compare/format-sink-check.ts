@@ -20,6 +20,19 @@ const pad = (s: string, n: number): string => (s.length >= n ? s : s + ' '.repea
 const lpad = (s: string, n: number): string => (s.length >= n ? s : ' '.repeat(n - s.length) + s);
 const MARK: Record<Flag['severity'], string> = { error: 'x', warning: '!', info: 'i' };
 
+/** The unit of an interface resistance (per unit area) beside each display unit of h: its inverse. */
+const CONTACT_UNITS: Record<string, string> = { 'W/(m^2*K)': 'm^2*K/W', 'BTU/(h*ft^2*degF)': 'h*ft^2*degF/BTU' };
+
+/**
+ * A source's interface resistance (m^2*K/W in SI) in the inverse of the display unit of h: m^2*K/W, or h*ft^2*degF/BTU
+ * (NIST SP 811, 2008, Appendix B.8: 1 degF*h*ft^2/Btu_IT = 0.1761102 m^2*K/W, the inverse of the h factor).
+ */
+export function contactResistanceText(u: DisplayUnits, si: number): string {
+  const unit = CONTACT_UNITS[u.h.ascii];
+  if (u.h.scale === 1 || unit === undefined) return `${si} m^2*K/W`;
+  return `${Number((si / u.h.scale).toPrecision(6))} ${unit}`;
+}
+
 /** The sink in a few lines: fins, plate, sources, convection. */
 export function describeSink(c: HeatSinkCase, u: DisplayUnits = defaultDisplayUnits): string[] {
   const lines: string[] = [];
@@ -38,7 +51,7 @@ export function describeSink(c: HeatSinkCase, u: DisplayUnits = defaultDisplayUn
   lines.push(`plate ${mm(c.plate.width)} x ${mm(c.plate.length)} x ${mm(c.plate.thickness)}, ${c.plate.material.name}`);
   for (const s of c.sources) {
     const extra = [
-      s.contactResistance > 0 ? `interface ${s.contactResistance} m^2*K/W` : '',
+      s.contactResistance > 0 ? `interface ${contactResistanceText(u, s.contactResistance)}` : '',
       s.limit_degC !== null ? `limit ${T(s.limit_degC)}` : '',
     ].filter((t) => t !== '');
     lines.push(
@@ -120,7 +133,7 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport, u: DisplayU
     out.push('');
   }
 
-  out.push(...sinkUncertaintyLines(r));
+  out.push(...sinkUncertaintyLines(r, u));
   if (r.flags.length > 0) {
     out.push('Flags:');
     for (const f of r.flags) out.push(`  [${MARK[f.severity]}] ${f.flag}: ${f.message}`);
@@ -131,18 +144,22 @@ export function formatSinkCheck(c: HeatSinkCase, r: SinkCheckReport, u: DisplayU
   return `${out.join('\n')}\n`;
 }
 
-/** The uncertainty section of a sink's check (format-uncertainty.ts); none when it was not computed. */
-function sinkUncertaintyLines(r: SinkCheckReport): string[] {
+/**
+ * The uncertainty section of a sink's check (format-uncertainty.ts); none when it was not computed. The rise and its
+ * band are temperature differences: shown in `d.temperatureDifference` (K, or degF for a degF display: 9/5 K, no offset).
+ */
+function sinkUncertaintyLines(r: SinkCheckReport, d: DisplayUnits): string[] {
   const u = r.uncertainty;
   if (u === undefined || r.sensitivities === undefined) return [];
   const uncertain = r.sensitivities.filter((s) => s.uncertainty > 0);
   const source = r.sources.find((s) => s.name === u.source);
+  const dT = d.temperatureDifference;
   return uncertaintyLines({
-    quantity: `${u.source}'s mean rise ${source ? Number(source.meanRise_K.toPrecision(4)) : '?'} K`,
-    unit: 'K',
+    quantity: `${u.source}'s mean rise ${source ? Number(inUnit(dT, source.meanRise_K).toPrecision(4)) : '?'} ${dT.ascii}`,
+    unit: dT.ascii,
     relative: u.relative,
-    low: u.low_K,
-    high: u.high_K,
+    low: inUnit(dT, u.low_K),
+    high: inUnit(dT, u.high_K),
     fromH: u.fromH,
     hOnly: uncertain.length === 1 && uncertain[0]?.key === 'convection.h',
     note: u.note,

@@ -3,6 +3,7 @@
  * is ok / marginal / unsafe and its drift range, the case's own point, the points without results grouped by
  * cause, and the files written. Drifts carry their sign as `check` prints them (percent-text.ts).
  */
+import { defaultDisplayUnits, inUnit, type DisplayUnits } from '../case/index.js';
 import { signedPercentText } from '../compare/index.js';
 import { isPointError } from './types.js';
 import type { MapRun } from './run-map.js';
@@ -29,7 +30,8 @@ function pad(text: string, width: number): string {
   return text.length >= width ? `${text} ` : text + ' '.repeat(width - text.length);
 }
 
-export function formatMapSummary(run: MapRun, files: readonly string[]): string {
+/** `u`: the units of a heat sink's resistance and temperature on the case's line (the axes carry their own units). */
+export function formatMapSummary(run: MapRun, files: readonly string[], u: DisplayUnits = defaultDisplayUnits): string {
   const { summary } = run;
   const tolerance = run.job.check.tolerance;
   const lines: string[] = [];
@@ -67,7 +69,7 @@ export function formatMapSummary(run: MapRun, files: readonly string[]): string 
     if (run.job.kind === 'heat-sink') {
       const r = own.reference;
       lines.push(
-        `This case (${at}): fd-3d sink resistance ${r.sinkResistance_KperW?.toPrecision(4) ?? 'n/a'} K/W, hottest point ${r.maxTemperature_degC?.toFixed(1) ?? 'n/a'} degC`,
+        `This case (${at}): fd-3d sink resistance ${r.sinkResistance_KperW === undefined ? 'n/a' : inUnit(u.resistance, r.sinkResistance_KperW).toPrecision(4)} ${u.resistance.ascii}, hottest point ${r.maxTemperature_degC === undefined ? 'n/a' : inUnit(u.temperature, r.maxTemperature_degC).toFixed(1)} ${u.temperature.ascii}`,
       );
       for (const m of own.models)
         lines.push(`  ${pad(m.model, 30)}drift ${pad(signedPercentText(m.drift), 10)}${pad(m.verdict, 11)}(worst source: ${m.worstSource ?? 'n/a'})`);

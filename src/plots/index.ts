@@ -11,6 +11,7 @@ export { overlaidProfilesSvg, type OverlaidCase } from './overlay-chart.js';
 export { SINK_PLOT_KINDS, hottestAndCoolestFins, sinkPlotInput } from './sink-input.js';
 export type { SinkPlotInput, SinkPlotKind } from './sink-input.js';
 export { sinkPlotAvailability, sinkPlotSvg } from './sink-draw.js';
+export { sinkSensitivityInput } from './sink-sensitivity-chart.js';
 export { sinkPlateChart, sinkPlateChartSpec } from './sink-plate-chart.js';
 export { sinkFinHeatChartSpec } from './sink-fin-heat-chart.js';
 export { sinkFinProfileChartSpec } from './sink-fin-profile-chart.js';

@@ -31,8 +31,8 @@ export function relativeError(x: number): string {
   return Number.isFinite(x) ? x.toExponential(1) : 'not estimated';
 }
 
-/** The units a case's charts show (its display units; by default mm, °C, W). */
-export function unitsOf(c: Case): DisplayUnits {
+/** The units a case's charts show (its display units; by default mm, °C, W): a fin's or a heat sink's. */
+export function unitsOf(c: { display?: DisplayUnits }): DisplayUnits {
   return c.display ?? defaultDisplayUnits;
 }
 

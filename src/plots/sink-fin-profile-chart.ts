@@ -5,9 +5,10 @@
  * section at the layer centres of the finest grid, its root (junction) temperature at height 0. The gap between
  * the shortcut and the fd-3d lines at the root is the uniform-base assumption; the slopes are the fins.
  */
+import { arrayInUnit, inUnit } from '../case/index.js';
 import { CHART_CAUTION } from '../compare/index.js';
 import type { LineChartSpec, LineSeries } from '../images/index.js';
-import { relativeError, sig } from './labels.js';
+import { relativeError, sig, unitsOf } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
 import { hottestAndCoolestFins, type SinkPlotInput } from './sink-input.js';
 
@@ -16,14 +17,17 @@ export function sinkFinProfileChartSpec(input: SinkPlotInput, size: ChartSize): 
   const profiles = study.finProfiles;
   const extremes = hottestAndCoolestFins(study);
   if (profiles === null || extremes === null) throw new Error('sinkFinProfileChartSpec: a bare plate has no fins to draw');
-  const mm = (h: Float64Array) => Float64Array.from(h, (v) => 1000 * v);
+  const u = unitsOf(c);
+  const mm = (h: Float64Array) => arrayInUnit(u.length, h);
+  const T = (t: number): string => `${inUnit(u.temperature, t).toFixed(1)} ${u.temperature.pretty}`;
+  const Q = (q: number): string => `${sig(inUnit(u.heat, q))} ${u.heat.pretty}`;
   const fin = (k: number, words: string): LineSeries => {
     const f = study.fins[k];
     return {
       label: `fd-3d, fin ${k} (${words})`,
       x: mm(profiles.height_m),
-      y: profiles.temperature_degC[k] ?? new Float64Array(0),
-      note: f === undefined ? '' : `Q ${sig(f.heatRate_W)} W, root ${f.rootTemperature_degC.toFixed(1)} °C`,
+      y: arrayInUnit(u.temperature, profiles.temperature_degC[k] ?? new Float64Array(0)),
+      note: f === undefined ? '' : `Q ${Q(f.heatRate_W)}, root ${T(f.rootTemperature_degC)}`,
     };
   };
   const series: LineSeries[] = [fin(extremes.hottest, 'hottest root')];
@@ -32,8 +36,8 @@ export function sinkFinProfileChartSpec(input: SinkPlotInput, size: ChartSize): 
     series.push({
       label: 'overall-efficiency-exact-fin: 1-D fin at the uniform base',
       x: mm(prediction.height_m),
-      y: prediction.temperature_degC,
-      note: `Q ${sig(prediction.heatRate_W)} W, base ${prediction.baseTemperature_degC.toFixed(1)} °C`,
+      y: arrayInUnit(u.temperature, prediction.temperature_degC),
+      note: `Q ${Q(prediction.heatRate_W)}, base ${T(prediction.baseTemperature_degC)}`,
     });
   }
   const errors = study.errors.finHeat.filter((e): e is number => e !== null);
@@ -44,8 +48,8 @@ export function sinkFinProfileChartSpec(input: SinkPlotInput, size: ChartSize): 
       'The shortcut puts every fin on one uniform base temperature: its gap to fd-3d at the root is the uniform-base assumption.',
       CHART_CAUTION,
     ],
-    xLabel: 'Height above the plate (mm)',
-    panels: [{ yLabel: 'Temperature T (°C)', series }],
+    xLabel: `Height above the plate (${u.length.pretty})`,
+    panels: [{ yLabel: `Temperature T (${u.temperature.pretty})`, series }],
     width: size.width,
     height: size.height,
   };

@@ -7,7 +7,7 @@ import type { HeatSinkCase } from '../case/index.js';
 import { resolvedSinkStudy, runSinkCheckWith, sinkFinPrediction, type SinkCheckReport, type SinkFinPrediction } from '../compare/index.js';
 import type { SinkStudy } from '../fd/index.js';
 
-export const SINK_PLOT_KINDS = ['profile', 'plate', 'fin-heat'] as const;
+export const SINK_PLOT_KINDS = ['profile', 'plate', 'fin-heat', 'sensitivity'] as const;
 export type SinkPlotKind = (typeof SINK_PLOT_KINDS)[number];
 
 export interface SinkPlotInput {

@@ -4,26 +4,28 @@
  * from above (x to the right, y up, as in the case file). Each source is outlined and labelled with its name,
  * mean and maximum temperature (fd-3d, its interface drop included, as `check` reports them); the fins'
  * footprints on the top face are drawn dashed (pins: the square of equal area the model roots them on);
- * colour bar in °C (viridis), labelled isotherms. The plate view is the finest grid's cell values sampled on
+ * colour bar in the display temperature unit (°C by default; viridis), labelled isotherms; lengths in the display unit. The plate view is the finest grid's cell values sampled on
  * a regular raster (fd/three-d/sink-plate-view.ts): every colour is a value the model computed.
  */
 import { CHART_CAUTION } from '../compare/index.js';
+import { arrayInUnit, inUnit } from '../case/index.js';
 import { el, fieldChart, fontSize, ink, project, textEl, textWidth, type FieldChartResult, type FieldChartSpec } from '../images/index.js';
 import { sinkLayout } from '../mesh/index.js';
 import type { ChartSize } from './profile-chart.js';
-import { relativeError } from './labels.js';
+import { relativeError, unitsOf } from './labels.js';
 import type { SinkPlotInput } from './sink-input.js';
 
 export function sinkPlateChartSpec(input: SinkPlotInput, size: ChartSize, rasterScale = 1): FieldChartSpec {
   const { study, case: c } = input;
+  const u = unitsOf(c);
   const v = study.plate;
   const n = v.nx * v.ny;
   const x = new Float64Array(n);
   const y = new Float64Array(n);
   for (let j = 0; j < v.ny; j++) {
     for (let i = 0; i < v.nx; i++) {
-      x[j * v.nx + i] = 1000 * (v.x[i] ?? Number.NaN);
-      y[j * v.nx + i] = 1000 * (v.y[j] ?? Number.NaN);
+      x[j * v.nx + i] = inUnit(u.length, v.x[i] ?? Number.NaN);
+      y[j * v.nx + i] = inUnit(u.length, v.y[j] ?? Number.NaN);
     }
   }
   const worst = input.report.reference.discretizationError;
@@ -34,12 +36,12 @@ export function sinkPlateChartSpec(input: SinkPlotInput, size: ChartSize, raster
       `Sources outlined with their mean and maximum temperature${c.sources.some((s) => s.contactResistance > 0) ? " (the labels add the interface drop q''·R_c; the colours are the plate's face)" : ''}; fin footprints on the top face dashed${c.array.kind === 'pins' ? ' (pins: the square of equal area)' : ''}.`,
       CHART_CAUTION,
     ],
-    xLabel: 'Across the plate x (mm)',
-    yLabel: 'Along the plate y (mm)',
-    valueLabel: 'Temperature T (°C)',
-    valueUnit: ' °C',
+    xLabel: `Across the plate x (${u.length.pretty})`,
+    yLabel: `Along the plate y (${u.length.pretty})`,
+    valueLabel: `Temperature T (${u.temperature.pretty})`,
+    valueUnit: ` ${u.temperature.pretty}`,
     grid: { ni: v.nx, nj: v.ny, x, y, strideI: 1, strideJ: v.nx },
-    values: v.underside_degC,
+    values: arrayInUnit(u.temperature, v.underside_degC),
     colormap: 'viridis',
     yStretch: 1,
     width: size.width,
@@ -52,8 +54,10 @@ export function sinkPlateChartSpec(input: SinkPlotInput, size: ChartSize, raster
 export function sinkPlateChart(input: SinkPlotInput, size: ChartSize, rasterScale = 1): FieldChartResult {
   const chart = fieldChart(sinkPlateChartSpec(input, size, rasterScale));
   const layout = sinkLayout(input.case);
-  const px = (m: number) => project(chart.x, 1000 * m);
-  const py = (m: number) => project(chart.y, 1000 * m);
+  const u = unitsOf(input.case);
+  const px = (m: number) => project(chart.x, inUnit(u.length, m));
+  const py = (m: number) => project(chart.y, inUnit(u.length, m));
+  const T = (t: number): string => `${inUnit(u.temperature, t).toFixed(1)} ${u.temperature.pretty}`;
   const box = (r: { x0: number; x1: number; y0: number; y1: number }) => ({
     x: px(r.x0),
     y: py(r.y1),
@@ -72,7 +76,7 @@ export function sinkPlateChart(input: SinkPlotInput, size: ChartSize, rasterScal
     const b = box(r);
     overlay.push(el('rect', { class: 'source-outline', ...b, fill: 'none', stroke: ink.halo, 'stroke-width': 4 }));
     overlay.push(el('rect', { class: 'source-outline-core', ...b, fill: 'none', stroke: ink.text, 'stroke-width': 2 }));
-    const lines = [s.name, `mean ${s.meanTemperature_degC.toFixed(1)} °C`, `max ${s.maxTemperature_degC.toFixed(1)} °C`];
+    const lines = [s.name, `mean ${T(s.meanTemperature_degC)}`, `max ${T(s.maxTemperature_degC)}`];
     const step = fontSize.annotation + 3;
     const wide = Math.max(...lines.map((l) => textWidth(l, fontSize.annotation)));
     // Inside the outline when it fits, else above it (below when there is no room above).

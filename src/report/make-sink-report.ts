@@ -1,9 +1,10 @@
 /**
  * Everything `fincheck report` writes for a heat sink, computed in memory: the sink check (its fd-3d reference, the
- * array shortcuts), its three charts as PNG (a bare plate: the plate only), and the HTML, Markdown and (when asked)
- * PDF documents. Nothing touches the disk here (write-files.ts does, all or nothing).
+ * array shortcuts, the sensitivities and band), its charts as PNG (the plate, heat per fin, the fin profiles, the
+ * tornado of the sensitivities; a bare plate: no fin charts), and the HTML, Markdown and (when asked) PDF documents,
+ * in the case's display units (`c.display`). Nothing touches the disk here (write-files.ts does, all or nothing).
  */
-import type { HeatSinkCase } from '../case/index.js';
+import { defaultDisplayUnits, type HeatSinkCase } from '../case/index.js';
 import { svgToPng } from '../images/index.js';
 import { relativeError, sinkPlotAvailability, sinkPlotInput, sinkPlotSvg, type SinkPlotInput, type SinkPlotKind } from '../plots/index.js';
 import type { ReportDocument } from './document.js';
@@ -33,23 +34,33 @@ export interface SinkReportContent {
 }
 
 /** File name of each sink chart beside the reports. */
-export const SINK_FIGURE_FILES: Record<SinkPlotKind, string> = { plate: 'plate.png', 'fin-heat': 'fin-heat.png', profile: 'fin-profile.png' };
+export const SINK_FIGURE_FILES: Record<SinkPlotKind, string> = {
+  plate: 'plate.png',
+  'fin-heat': 'fin-heat.png',
+  profile: 'fin-profile.png',
+  sensitivity: 'sensitivity.png',
+};
 
 const TITLES: Record<SinkPlotKind, string> = {
   plate: 'Plate underside temperature seen from above',
   'fin-heat': 'Heat per fin',
   profile: 'Temperature up the hottest and the coolest fin',
+  sensitivity: "Sensitivities of the hottest source's rise",
 };
 
 function caption(kind: SinkPlotKind, input: SinkPlotInput): string {
   const gci = relativeError(input.report.reference.discretizationError ?? Number.NaN);
+  const u = input.case.display ?? defaultDisplayUnits;
+  const [T, W] = [u.temperature.pretty, u.heat.pretty];
   switch (kind) {
     case 'plate':
-      return `Temperature T (°C) of the plate's underside (z = 0, where the sources sit), seen from above through the plate, from fd-3d's finest grid (each colour a cell value; source mean rises known to ${gci}, GCI). Sources outlined and labelled with their mean and maximum temperature (interface drop included); fin footprints on the top face dashed; isotherms labelled in °C.`;
+      return `Temperature T (${T}) of the plate's underside (z = 0, where the sources sit), seen from above through the plate, from fd-3d's finest grid (each colour a cell value; source mean rises known to ${gci}, GCI). Sources outlined and labelled with their mean and maximum temperature (interface drop included); fin footprints on the top face dashed; isotherms labelled in ${T}.`;
     case 'fin-heat':
-      return "Heat entering each fin at its root (W, fd-3d), fins numbered as in the JSON fins array; the hottest and the coolest root highlighted; the dashed line is overall-efficiency-exact-fin's heat per fin (every fin at its one uniform base temperature).";
+      return `Heat entering each fin at its root (${W}, fd-3d), fins numbered as in the JSON fins array; the hottest and the coolest root highlighted; the dashed line is overall-efficiency-exact-fin's heat per fin (every fin at its one uniform base temperature).`;
     case 'profile':
-      return "Temperature (°C) up the fin with the hottest root and the fin with the coolest root (fd-3d: each fin's mean over its section), against the exact 1-D fin at overall-efficiency-exact-fin's uniform base temperature: the gap at the root is the uniform-base assumption.";
+      return `Temperature (${T}) up the fin with the hottest root and the fin with the coolest root (fd-3d: each fin's mean over its section), against the exact 1-D fin at overall-efficiency-exact-fin's uniform base temperature: the gap at the root is the uniform-base assumption.`;
+    case 'sensitivity':
+      return `Sensitivities d ln rise / d ln x of the mean rise of ${input.report.uncertainty?.source ?? 'the hottest source'} (fd-3d) to every input, largest at the top; inputs with a stated uncertainty in orange, with the part of the band each gives (|S| u, one standard uncertainty). ${input.report.sensitivityMethod ?? ''}.`;
     default: {
       const never: never = kind;
       return never;
@@ -58,8 +69,10 @@ function caption(kind: SinkPlotKind, input: SinkPlotInput): string {
 }
 
 export async function makeSinkReport(c: HeatSinkCase, opts: SinkReportOptions): Promise<SinkReportContent> {
-  const input = await sinkPlotInput(c, opts.tolerance);
-  const kinds = (['plate', 'fin-heat', 'profile'] as const).filter((k) => sinkPlotAvailability({ case: c }, k).ok);
+  const input = await sinkPlotInput(c, opts.tolerance, true);
+  const kinds = (['plate', 'fin-heat', 'profile', 'sensitivity'] as const).filter(
+    (k) => sinkPlotAvailability({ case: c }, k).ok && (k !== 'sensitivity' || input.report.sensitivities !== undefined),
+  );
   const figures: SinkReportFigure[] = [];
   for (const kind of kinds) {
     opts.checkpoint?.();

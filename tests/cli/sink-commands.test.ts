@@ -104,7 +104,7 @@ describe('plot on a heat sink', () => {
   it('refuses a single-fin chart for a sink, a sink chart for a fin, and fin charts for a bare plate', async () => {
     const flux = await cli('plot', file, '--kind', 'flux', '--out', join(dir, 'x.png'));
     expect(flux.code).toBe(2);
-    expect(flux.stderr).toMatch(/--kind: .*profile, plate, fin-heat for a heat sink/);
+    expect(flux.stderr).toMatch(/--kind: .*profile, plate, fin-heat, sensitivity for a heat sink/);
     const fin = join(dir, 'fin.yaml');
     writeFileSync(
       fin,
@@ -121,13 +121,13 @@ describe('plot on a heat sink', () => {
 });
 
 describe('report on a heat sink', () => {
-  it('writes HTML, Markdown, PDF and the three charts, with the inputs, the check table, the ledger and the cautions', async () => {
+  it('writes HTML, Markdown, PDF and the four charts (the tornado of the sensitivities too), with the inputs, the check table, the ledger and the cautions', async () => {
     const out = join(dir, 'report');
     const r = await cli('report', file, '--out', out, '--tolerance', '10%', '--pdf', '--date', '2026-01-02', '--json');
     expect(r.code, r.stderr).toBe(0);
     const j = JSON.parse(r.stdout) as { images: string[]; pdf: string; worstVerdict: string };
-    expect(j.images.map((p) => p.split(/[\\/]/).pop())).toEqual(['plate.png', 'fin-heat.png', 'fin-profile.png']);
-    for (const f of ['report.html', 'report.md', 'report.pdf', 'plate.png', 'fin-heat.png', 'fin-profile.png'])
+    expect(j.images.map((p) => p.split(/[\\/]/).pop())).toEqual(['plate.png', 'fin-heat.png', 'fin-profile.png', 'sensitivity.png']);
+    for (const f of ['report.html', 'report.md', 'report.pdf', 'plate.png', 'fin-heat.png', 'fin-profile.png', 'sensitivity.png'])
       expect(existsSync(join(out, f))).toBe(true);
     const md = readFileSync(join(out, 'report.md'), 'utf8');
     for (const part of [
