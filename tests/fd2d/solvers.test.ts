@@ -4,7 +4,15 @@ import { SolverError } from '../../src/errors.js';
 import { factorBandedCholesky, tryFactorBandedCholesky } from '../../src/fd/linear-algebra/banded-cholesky.js';
 import { factorBanded } from '../../src/fd/linear-algebra/banded-solve.js';
 import { factorBandedLdltRowSums } from '../../src/fd/linear-algebra/banded-ldlt.js';
-import { addCoupling, applyStencil9, emptyStencil9, residual, stencilToDense, type Stencil9 } from '../../src/fd/linear-algebra/stencil9.js';
+import {
+  addCoupling,
+  applyDifferenceForm,
+  applyStencil9,
+  emptyStencil9,
+  residual,
+  stencilToDense,
+  type Stencil9,
+} from '../../src/fd/linear-algebra/stencil9.js';
 import { randomSpdStencil } from './random.js';
 
 function denseSolve(a: Stencil9, rhs: Float64Array): Float64Array {
@@ -108,6 +116,35 @@ describe('banded Cholesky in blocks of four rows (padded rows, 4 x 2 products, a
         expect(outcome.pivot).toBeLessThan(0);
       }
     }
+  });
+});
+
+describe('A x in difference form (what CG and the refinement residuals use)', () => {
+  it.each([
+    [9, 5, true],
+    [9, 5, false],
+    [30, 12, true],
+    [4, 3, true],
+  ])('equals the dense product on a random %i x %i matrix (5-point: %s), and returns x . A x', (nx, ny, fivePoint) => {
+    const a = randomSpdStencil(nx, ny, 13 * nx + ny, fivePoint);
+    const n = nx * ny;
+    const x = Float64Array.from({ length: n }, (_, p) => 3 + Math.sin(1.3 * p));
+    const out = new Float64Array(n);
+    const energy = applyDifferenceForm(a, a.excess, x, out);
+    const dense = stencilToDense(a);
+    let xAx = 0;
+    for (let p = 0; p < n; p++) {
+      let ax = 0;
+      let size = 0;
+      for (let q = 0; q < n; q++) {
+        ax += ((dense[p] as number[])[q] as number) * (x[q] as number);
+        size += Math.abs(((dense[p] as number[])[q] as number) * (x[q] as number));
+      }
+      xAx += ax * (x[p] as number);
+      // Two summation orders of the same row: they differ by round-off in the terms' sizes (~1e-15 each).
+      expect(Math.abs((out[p] as number) - ax)).toBeLessThan(1e-13 * size);
+    }
+    expect(Math.abs(energy - xAx)).toBeLessThan(1e-12 * Math.abs(xAx));
   });
 });
 
