@@ -335,23 +335,36 @@ function forwardSolve(band: Float64Array, invDiag: Float64Array, n: number, w: n
 }
 
 /**
- * y <- L^-T y, two rows of L at a time from the last: x_p, x_{p-1} from the 2 x 2 triangle, then both rows'
+ * y <- L^-T y, four rows of L at a time from the last: x_p..x_{p-3} from the 4 x 4 triangle, then the four rows'
  * contributions subtracted from the entries left of them (contiguous rows of L; one load and store of y[k] for
- * two products).
+ * four products).
  */
 function backwardSolve(band: Float64Array, invDiag: Float64Array, n: number, w: number, s: number, y: Float64Array): void {
   let p = n - 1;
-  for (; p >= 1; p -= 2) {
-    const rp = (p + 1) * s;
-    const rm = rp - s; // row p - 1
-    const xp = y[p] * invDiag[p];
-    const xm = (y[p - 1] - band[rp + p - 1] * xp) * invDiag[p - 1];
-    y[p] = xp;
-    y[p - 1] = xm;
-    // Row p starts at p - w, row p - 1 at p - 1 - w (row p's slot there is one of its zero pads).
-    for (let k = p - 1 > w ? p - 1 - w : 0; k < p - 1; k++) y[k] = y[k] - band[rp + k] * xp - band[rm + k] * xm;
+  for (; p >= 3; p -= 4) {
+    const r0 = (p + 1) * s; // row p
+    const r1 = r0 - s; // row p - 1
+    const r2 = r1 - s;
+    const r3 = r2 - s;
+    const x0 = y[p] * invDiag[p];
+    const x1 = (y[p - 1] - band[r0 + p - 1] * x0) * invDiag[p - 1];
+    const x2 = (y[p - 2] - band[r0 + p - 2] * x0 - band[r1 + p - 2] * x1) * invDiag[p - 2];
+    const x3 = (y[p - 3] - band[r0 + p - 3] * x0 - band[r1 + p - 3] * x1 - band[r2 + p - 3] * x2) * invDiag[p - 3];
+    y[p] = x0;
+    y[p - 1] = x1;
+    y[p - 2] = x2;
+    y[p - 3] = x3;
+    // Row p - 3 starts at p - 3 - w; the three rows below it read their zero pads there.
+    for (let k = p - 3 > w ? p - 3 - w : 0; k < p - 3; k++) {
+      y[k] = y[k] - band[r0 + k] * x0 - band[r1 + k] * x1 - band[r2 + k] * x2 - band[r3 + k] * x3;
+    }
   }
-  if (p === 0) y[0] = y[0] * invDiag[0];
+  for (; p >= 0; p--) {
+    const r = (p + 1) * s;
+    const x = y[p] * invDiag[p];
+    y[p] = x;
+    for (let k = p > w ? p - w : 0; k < p; k++) y[k] = y[k] - band[r + k] * x;
+  }
 }
 
 /** false for a 5-point operator: its band can be one narrower (w = nodesY). */
