@@ -105,6 +105,18 @@ describe('banded Cholesky in blocks of four rows (padded rows, 4 x 2 products, a
     }
   });
 
+  it('a released factor refuses to solve, and a factor built in its storage gives the same bits as one built fresh', () => {
+    const small = randomSpdStencil(17, 5, 3);
+    const rhs = Float64Array.from({ length: 85 }, (_, p) => Math.cos(p));
+    const fresh = factorBandedCholesky(small).solve(rhs);
+    // A larger factor released: its band (full of factor entries) is kept and the next factorisation reuses it.
+    const large = factorBandedCholesky(randomSpdStencil(90, 14, 4));
+    large.release();
+    expect(() => large.solve(new Float64Array(90 * 14))).toThrow(/after release/);
+    const reused = factorBandedCholesky(small).solve(rhs);
+    for (let p = 0; p < rhs.length; p++) expect(reused[p]).toBe(fresh[p]);
+  });
+
   it('names the first unknown whose pivot is not positive, wherever it falls in a block of four', () => {
     for (let p = 0; p < 10; p++) {
       const a = randomSpdStencil(5, 2, 11);

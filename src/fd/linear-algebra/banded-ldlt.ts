@@ -85,5 +85,8 @@ export function factorBandedLdltRowSums(a: Stencil9, rowSums: Float64Array): Ban
       }
       return y;
     },
+    release(): void {
+      // Nothing kept: this factor is the rare fallback (banded-solve.ts).
+    },
   };
 }

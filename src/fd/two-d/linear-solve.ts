@@ -121,6 +121,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     const prepared = prepareSolver2D(shifted, opts.method ?? 'auto');
     method = prepared.method;
     field = prepared.solve(shifted);
+    prepared.release();
   }
   for (let p = 0; p < field.length; p++) field[p] = (field[p] as number) + level;
   const rates = heatRates2D(K, terms, field);
