@@ -21,7 +21,7 @@ const RUNS = 10;
 const CPU_REPORTER =
   'data:text/javascript,process.on("exit",()=>{const u=process.cpuUsage();process.stderr.write("\\nbench-cpu-us "+(u.user+u.system)+"\\n")})';
 
-interface CliRun {
+export interface CliRun {
   status: number | null;
   stdout: string;
   stderr: string;
@@ -29,7 +29,7 @@ interface CliRun {
   cpuMs: number | null;
 }
 
-function runCli(args: readonly string[]): CliRun {
+export function runCli(args: readonly string[]): CliRun {
   const r = spawnSync(process.execPath, ['--import', CPU_REPORTER, CLI, ...args], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
   if (r.error) throw r.error;
   const match = /\nbench-cpu-us (\d+)\n/.exec(r.stderr);

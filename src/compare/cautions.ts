@@ -9,6 +9,10 @@ export const CAUTIONS: readonly string[] = [
 /** The one-line form printed on every chart (charts travel alone into design notes). */
 export const CHART_CAUTION = 'Estimates of an idealised fin: confirm by test; h is usually the largest uncertainty; follow applicable codes and practice.';
 
+/** The same for a heat sink's charts (its idealisation: isoflux sources, the given h on each surface). */
+export const SINK_CHART_CAUTION =
+  'Estimates of an idealised sink (isoflux sources, the given h): confirm by test; h is usually the largest uncertainty; follow applicable codes and practice.';
+
 /** How radiation is modelled, for notes and cautions. */
 export const RADIATION_VIEW_NOTE = 'radiation: grey faces that see only the surroundings (view factor 1; no exchange with the base or other fins)';
 

@@ -1,5 +1,5 @@
 /** The compare layer's public API: what the other layers import. */
-export { CAUTIONS, CHART_CAUTION } from './cautions.js';
+export { CAUTIONS, CHART_CAUTION, SINK_CHART_CAUTION } from './cautions.js';
 export { runCheck } from './check.js';
 export { describeCase, describeH, describeTip } from './describe-case.js';
 export { formatCheck } from './format-check.js';

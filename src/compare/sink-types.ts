@@ -10,7 +10,7 @@ import type { Flag, Verdict } from './types.js';
 export interface SinkSensitivity {
   key: string;
   dlnRise_dlnx: number;
-  method: 'central-difference';
+  method: 'adjoint' | 'central-difference';
   value: number;
   uncertainty: number;
 }

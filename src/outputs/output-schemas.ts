@@ -60,7 +60,7 @@ const finUncertainty = obj({
   ),
   note: str,
 });
-const sinkSensitivity = obj({ key: str, dlnRise_dlnx: num, method: { const: 'central-difference' }, value: num, uncertainty: num });
+const sinkSensitivity = obj({ key: str, dlnRise_dlnx: num, method: oneOfWords('adjoint', 'central-difference'), value: num, uncertainty: num });
 const sinkUncertainty = obj({
   method: { const: 'first-order' },
   relative: num,

@@ -13,6 +13,8 @@ export interface SensitivityChartInput {
   caseName: string;
   /** "heat rate" or "hottest source's mean rise". */
   quantity: string;
+  /** The one-line caution the chart carries (CHART_CAUTION for a fin). */
+  caution?: string;
   /** "Q" or "rise". */
   symbol: string;
   method: string;
@@ -27,7 +29,10 @@ export function sensitivityChartSpec(input: SensitivityChartInput, size: ChartSi
   const band = input.band === null ? '' : `; band +/-${pct(input.band.relative)} (${input.band.method}, one standard uncertainty)`;
   return {
     title: `Sensitivities of the ${input.quantity}: ${input.caseName}`,
-    subtitle: [`d ln ${input.symbol} / d ln x: the % change of the ${input.quantity} per % change of each input; ${input.method}${band}`, CHART_CAUTION],
+    subtitle: [
+      `d ln ${input.symbol} / d ln x: the % change of the ${input.quantity} per % change of each input; ${input.method}${band}`,
+      input.caution ?? CHART_CAUTION,
+    ],
     xLabel: `d ln ${input.symbol} / d ln x`,
     bars: input.sensitivities.map((s) => ({
       label: s.key,

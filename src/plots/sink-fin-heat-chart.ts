@@ -5,7 +5,7 @@
  * per fin (overall-efficiency-exact-fin: every fin at the one base temperature) as a dashed line.
  */
 import { arrayInUnit, inUnit } from '../case/index.js';
-import { CHART_CAUTION } from '../compare/index.js';
+import { SINK_CHART_CAUTION } from '../compare/index.js';
 import type { BarChartSpec } from '../images/index.js';
 import { relativeError, sig, unitsOf } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
@@ -27,7 +27,7 @@ export function sinkFinHeatChartSpec(input: SinkPlotInput, size: ChartSize): Bar
       extremes === null
         ? ''
         : `Highlighted: fin ${extremes.hottest} (hottest root) and fin ${extremes.coolest} (coolest root). Fins numbered as in the JSON fins array.`,
-      CHART_CAUTION,
+      SINK_CHART_CAUTION,
     ].filter((s) => s !== ''),
     xLabel: c.array.kind === 'pins' ? 'Pin (row by row)' : 'Fin (left to right in x)',
     yLabel: `Heat rate Q (${W.pretty})`,

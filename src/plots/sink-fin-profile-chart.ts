@@ -6,7 +6,7 @@
  * the shortcut and the fd-3d lines at the root is the uniform-base assumption; the slopes are the fins.
  */
 import { arrayInUnit, inUnit } from '../case/index.js';
-import { CHART_CAUTION } from '../compare/index.js';
+import { SINK_CHART_CAUTION } from '../compare/index.js';
 import type { LineChartSpec, LineSeries } from '../images/index.js';
 import { relativeError, sig, unitsOf } from './labels.js';
 import type { ChartSize } from './profile-chart.js';
@@ -46,7 +46,7 @@ export function sinkFinProfileChartSpec(input: SinkPlotInput, size: ChartSize): 
     subtitle: [
       `fd-3d: each fin's mean over its section (finest grid; fin heat error up to ${errors.length > 0 ? relativeError(Math.max(...errors)) : 'not estimated'}, GCI); fins numbered as in the JSON fins array.`,
       'The shortcut puts every fin on one uniform base temperature: its gap to fd-3d at the root is the uniform-base assumption.',
-      CHART_CAUTION,
+      SINK_CHART_CAUTION,
     ],
     xLabel: `Height above the plate (${u.length.pretty})`,
     panels: [{ yLabel: `Temperature T (${u.temperature.pretty})`, series }],

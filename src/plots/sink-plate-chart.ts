@@ -7,7 +7,7 @@
  * colour bar in the display temperature unit (°C by default; viridis), labelled isotherms; lengths in the display unit. The plate view is the finest grid's cell values sampled on
  * a regular raster (fd/three-d/sink-plate-view.ts): every colour is a value the model computed.
  */
-import { CHART_CAUTION } from '../compare/index.js';
+import { SINK_CHART_CAUTION } from '../compare/index.js';
 import { arrayInUnit, inUnit } from '../case/index.js';
 import { el, fieldChart, fontSize, ink, project, textEl, textWidth, type FieldChartResult, type FieldChartSpec } from '../images/index.js';
 import { sinkLayout } from '../mesh/index.js';
@@ -34,7 +34,7 @@ export function sinkPlateChartSpec(input: SinkPlotInput, size: ChartSize, raster
     subtitle: [
       `fd-3d (${input.report.reference.unknowns[0]?.toLocaleString('en-US') ?? '?'} unknowns on the finest grid); the underside, where the sources sit, seen through the plate; source mean rise error ${relativeError(worst ?? Number.NaN)} (GCI).`,
       `Sources outlined with their mean and maximum temperature${c.sources.some((s) => s.contactResistance > 0) ? " (the labels add the interface drop q''·R_c; the colours are the plate's face)" : ''}; fin footprints on the top face dashed${c.array.kind === 'pins' ? ' (pins: the square of equal area)' : ''}.`,
-      CHART_CAUTION,
+      SINK_CHART_CAUTION,
     ],
     xLabel: `Across the plate x (${u.length.pretty})`,
     yLabel: `Along the plate y (${u.length.pretty})`,

@@ -4,7 +4,7 @@
  * sink-sensitivity.ts) for every input, with the first-order band. The same chart as a single fin's
  * (sensitivity-chart.ts); only the quantity differs.
  */
-import type { SinkCheckReport } from '../compare/index.js';
+import { SINK_CHART_CAUTION, type SinkCheckReport } from '../compare/index.js';
 import type { SensitivityChartInput } from './sensitivity-chart.js';
 
 /** A sink's chart input from its check report (null when the check computed no sensitivities). */
@@ -18,5 +18,6 @@ export function sinkSensitivityInput(report: SinkCheckReport): SensitivityChartI
     method: `fd-3d reference, ${report.sensitivityMethod ?? ''}`.replace(/, $/, ''),
     sensitivities: report.sensitivities.map((s) => ({ key: s.key, value: s.dlnRise_dlnx, uncertainty: s.uncertainty })),
     band: report.uncertainty ? { relative: report.uncertainty.relative, method: report.uncertainty.method } : null,
+    caution: SINK_CHART_CAUTION,
   };
 }

@@ -225,7 +225,7 @@ export function buildReport(inputs: ReportInputs): ReportDocument {
       ],
     },
     { id: 'check', title: 'Shortcuts against the reference', blocks: checkTable(r, u) },
-    ...[uncertaintySection(r, modelName)].filter((x): x is Section => x !== null),
+    ...[uncertaintySection(r, modelName, u)].filter((x): x is Section => x !== null),
     { id: 'ledger', title: 'Where the drift comes from', blocks: ledger(r) },
     { id: 'flags', title: 'Flags', blocks: flags(r) },
     figureSection(check, inputs.field, inputs.figures, inputs.heatmapUnavailable),

@@ -1,7 +1,8 @@
 /**
  * The report's section "How sure": the uncertainty band of the reference heat rate, the sensitivities it comes
- * from, and each model's drift against the band (the same words as `check`'s text).
+ * from, and each model's drift against the band (the same words as `check`'s text); heat in the display units.
  */
+import { inUnit, type DisplayUnits } from '../case/index.js';
 import { fractionWords, type CheckReport } from '../compare/index.js';
 import { sig, signedPercent } from '../plots/index.js';
 import { prettyUnits } from './case-inputs.js';
@@ -10,16 +11,17 @@ import type { Block, Section } from './document.js';
 const pct = (x: number): string => `${Number((100 * x).toPrecision(2))} %`;
 
 /** null when the check computed no sensitivities. */
-export function uncertaintySection(r: CheckReport, modelName: (m: CheckReport['models'][number]) => string): Section | null {
+export function uncertaintySection(r: CheckReport, modelName: (m: CheckReport['models'][number]) => string, units: DisplayUnits): Section | null {
   const u = r.uncertainty;
   const sens = r.sensitivities;
   if (u === undefined || sens === undefined) return null;
+  const heat = units.heat;
   const uncertain = sens.filter((s) => s.uncertainty > 0);
   const hOnly = uncertain.length === 1 && uncertain[0]?.key === 'convection.h';
   const blocks: Block[] = [
     {
       kind: 'paragraph',
-      text: `With the inputs' stated uncertainties, the reference heat rate ${sig(r.reference.heatRate_W, 5)} W is known to ±${pct(u.relative)} (one standard uncertainty): ${sig(u.low_W, 4)} to ${sig(u.high_W, 4)} W. ${prettyUnits(u.note)}.`,
+      text: `With the inputs' stated uncertainties, the reference heat rate ${sig(inUnit(heat, r.reference.heatRate_W), 5)} ${heat.pretty} is known to ±${pct(u.relative)} (one standard uncertainty): ${sig(inUnit(heat, u.low_W), 4)} to ${sig(inUnit(heat, u.high_W), 4)} ${heat.pretty}. ${prettyUnits(u.note)}.`,
     },
     {
       kind: 'table',

@@ -97,6 +97,9 @@ describe('plot on a heat sink', () => {
       const svg = readFileSync(out, 'utf8');
       expect(svg).toContain('small drive sink');
       expect(svg).toMatch(/confirm by test/);
+      // The sink's own idealisation in the caution, not a single fin's.
+      expect(svg).toContain('idealised sink (isoflux sources, the given h)');
+      expect(svg).not.toContain('idealised fin');
     },
     120_000,
   );

@@ -1,11 +1,11 @@
 /**
- * A heat sink's sensitivities d ln rise / d ln x (fd-3d re-solves): identities the linear problem must satisfy
- * exactly, and the uncertainty key of a sink case. The sinks are invented.
+ * A heat sink's sensitivities d ln rise / d ln x (fd-3d: adjoint, re-solves): identities the linear problem must
+ * satisfy exactly, the adjoint against re-solves, and the uncertainty key of a sink case. The sinks are invented.
  */
 import { describe, expect, it } from 'vitest';
-import { parseHeatSinkText } from '../../src/case/index.js';
-import { sinkSensitivity } from '../../src/compare/sink-sensitivity.js';
-import { studySink } from '../../src/fd/index.js';
+import { parseHeatSinkText, sinkNumericInputs, type HeatSinkCase } from '../../src/case/index.js';
+import { SINK_SENSITIVITY_STEP, sinkSensitivity } from '../../src/compare/sink-sensitivity.js';
+import { solveSinkOnGrid, studySink } from '../../src/fd/index.js';
 import { InputError } from '../../src/errors.js';
 import { sinkCase } from '../sink/support/sink-case.js';
 
@@ -82,4 +82,30 @@ uncertainty: ${uncertainty}
     expect(() => parseHeatSinkText(text('{ fin.width: 5 % }'), 'sink.yaml')).toThrow(InputError);
     expect(() => parseHeatSinkText(text('{ fin.width: 5 % }'), 'sink.yaml')).toThrow(/uncertainty\.fin\.width.*sources\[0\]\.power/s);
   });
+});
+
+describe('sink sensitivities by the adjoint', () => {
+  // The same sink and grids as above; re-solves of the full system are the check (issue 12: 1e-6 relative).
+  const study = studySink(twoSources, { cellSize: 0.004, plateLayers: 1, finLayers: 2 });
+  const result = sinkSensitivity(twoSources, study)!;
+  const spec = { ...study.finestGrid!, refine: Math.max(1, study.finestGrid!.refine / 2) };
+  const hottest = study.sources[0]!.meanRise_K >= study.sources[1]!.meanRise_K ? 0 : 1;
+  const d = SINK_SENSITIVITY_STEP;
+  const rise = (c: HeatSinkCase) => solveSinkOnGrid(c, spec).sourceMeanRise[hottest]!;
+  const rise0 = rise(twoSources);
+
+  it('is used for every input of this linear sink, and says so', () => {
+    expect(result.sensitivities.every((s) => s.method === 'adjoint')).toBe(true);
+    expect(result.sensitivityMethod).toMatch(/^adjoint of fd-3d/);
+  });
+
+  it.each(sinkNumericInputs(twoSources).map((input) => [input.key, input] as const))(
+    '%s equals central differences of re-solves to 1e-6',
+    (key, input) => {
+      const resolved = (rise(input.scale(1 + d)) - rise(input.scale(1 - d))) / (2 * d * rise0);
+      const adjoint = result.sensitivities.find((s) => s.key === key)!.dlnRise_dlnx;
+      // Both carry the step's O(d^2) truncation alike; the re-solves' CG residual (1e-10) over the step adds ~1e-7.
+      expect(Math.abs(adjoint - resolved)).toBeLessThan(1e-6 * Math.max(1, Math.abs(resolved)));
+    },
+  );
 });

@@ -12,7 +12,6 @@
  * diagonally dominant M-matrices).
  */
 import type { CsrMatrix } from './csr.js';
-import { csrEntry } from './csr.js';
 
 /** Lines: the members of line l are order[start[l]] .. order[start[l + 1] − 1], in the tridiagonal order. */
 export interface LineSet {
@@ -35,15 +34,46 @@ export function buildLineRelaxation(a: CsrMatrix, lines: LineSet): LineRelaxatio
   const inv = new Float64Array(n);
   const nLines = start.length - 1;
   let longest = 0;
+  // One pass over each member's row: its diagonal and its couplings to the previous and next members (the line's
+  // tridiagonal matrix), every other coupling packed in line order for the relaxation to read in one pass.
+  const { rowStart, col, val } = a;
+  const offStart = new Int32Array(n + 1);
+  let packedCol = new Int32Array(Math.max(16, col.length - n));
+  let packedVal = new Float64Array(packedCol.length);
+  let f = 0;
   for (let l = 0; l < nLines; l++) {
     const q0 = start[l];
     const q1 = start[l + 1];
     longest = Math.max(longest, q1 - q0);
     for (let q = q0; q < q1; q++) {
       const r = order[q];
-      diag[q] = csrEntry(a, r, r);
-      lower[q] = q > q0 ? csrEntry(a, r, order[q - 1]) : 0;
-      upper[q] = q + 1 < q1 ? csrEntry(a, r, order[q + 1]) : 0;
+      const prev = q > q0 ? order[q - 1] : -1;
+      const next = q + 1 < q1 ? order[q + 1] : -1;
+      let d = 0;
+      let lo = 0;
+      let up = 0;
+      for (let e = rowStart[r]; e < rowStart[r + 1]; e++) {
+        const c = col[e];
+        if (c === r) d += val[e];
+        else if (c === prev) lo += val[e];
+        else if (c === next) up += val[e];
+        else {
+          if (f === packedCol.length) {
+            const c2 = new Int32Array(2 * f);
+            const v2 = new Float64Array(2 * f);
+            c2.set(packedCol);
+            v2.set(packedVal);
+            packedCol = c2;
+            packedVal = v2;
+          }
+          packedCol[f] = c;
+          packedVal[f++] = val[e];
+        }
+      }
+      diag[q] = d;
+      lower[q] = lo;
+      upper[q] = up;
+      offStart[q + 1] = f;
     }
     for (let q = q0; q < q1; q++) {
       const denom = diag[q] - (q > q0 ? lower[q] * cp[q - 1] : 0);
@@ -51,51 +81,25 @@ export function buildLineRelaxation(a: CsrMatrix, lines: LineSet): LineRelaxatio
       cp[q] = upper[q] * inv[q];
     }
   }
-  // The couplings off each line, packed in line order: the relaxation reads them in one pass.
-  const { rowStart, col, val } = a;
-  const offStart = new Int32Array(n + 1);
-  for (let l = 0; l < nLines; l++) {
-    for (let q = start[l]; q < start[l + 1]; q++) {
-      const r = order[q];
-      const prev = q > start[l] ? order[q - 1] : -1;
-      const next = q + 1 < start[l + 1] ? order[q + 1] : -1;
-      let count = 0;
-      for (let e = rowStart[r]; e < rowStart[r + 1]; e++) if (col[e] !== r && col[e] !== prev && col[e] !== next) count++;
-      offStart[q + 1] = offStart[q] + count;
-    }
-  }
-  const offCol = new Int32Array(offStart[n]);
-  const offVal = new Float64Array(offStart[n]);
-  for (let l = 0; l < nLines; l++) {
-    for (let q = start[l]; q < start[l + 1]; q++) {
-      const r = order[q];
-      const prev = q > start[l] ? order[q - 1] : -1;
-      const next = q + 1 < start[l + 1] ? order[q + 1] : -1;
-      let f = offStart[q];
-      for (let e = rowStart[r]; e < rowStart[r + 1]; e++) {
-        if (col[e] !== r && col[e] !== prev && col[e] !== next) {
-          offCol[f] = col[e];
-          offVal[f++] = val[e];
-        }
-      }
-    }
-  }
+  const offCol = packedCol;
+  const offVal = packedVal;
   const work = new Float64Array(longest);
 
   const relaxLine = (l: number, b: Float64Array, x: Float64Array): void => {
     const q0 = start[l];
     const q1 = start[l + 1];
-    // Forward elimination with the right-hand side b − (couplings off the line) x.
+    // Forward elimination with the right-hand side b − (couplings off the line) x (lower[q0] = 0, cp[q1 − 1] = 0:
+    // no coupling outside the line's ends).
     let prev = 0;
     for (let q = q0; q < q1; q++) {
       let s = b[order[q]];
       for (let e = offStart[q]; e < offStart[q + 1]; e++) s -= offVal[e] * x[offCol[e]];
-      prev = (s - (q > q0 ? lower[q] * prev : 0)) * inv[q];
+      prev = (s - lower[q] * prev) * inv[q];
       work[q - q0] = prev;
     }
     let next = 0;
     for (let q = q1 - 1; q >= q0; q--) {
-      next = work[q - q0] - (q + 1 < q1 ? cp[q] * next : 0);
+      next = work[q - q0] - cp[q] * next;
       x[order[q]] = next;
     }
   };

@@ -3,19 +3,22 @@
  *   level 0   the sink as assembled;
  *   (fold)    fins as full 3-D cells only: each fin's cells across its thickness summed onto one sheet node
  *             (weight 1), giving the layout of the sheet representation;
- *   level l+1 the plate's cells and the fins' nodes coarsened by pairs (aggregation.ts), down to at most COARSEST
- *             unknowns,
- * with Galerkin operators A_l+1 = P^T A_l P (galerkin-csr.ts), one forward sweep of line Gauss-Seidel before
+ *   level l+1 the plate's cells and the fins' nodes coarsened by pairs in the strongly coupled directions
+ *             (semi-coarsening, aggregation.ts), down to at most COARSEST unknowns,
+ * with linear transfers P and P^T, the fold's Galerkin operator (galerkin-csr.ts) and below it the merged
+ * operators of sink-coarse-operator.ts (the re-discretisation's conductances, the fine sparsity), one forward sweep of line Gauss-Seidel before
  * the coarse correction and one backward sweep after it on every level (line-relaxation.ts: the plate's z
  * columns and the fins' lines along their height; a thin plate couples far more strongly across its thickness
- * than along it), and a dense Cholesky solve on the coarsest level. Backward after forward and Galerkin coarse
- * operators make the cycle symmetric positive definite, as CG needs (Tatebe 1993, "The multigrid preconditioned
+ * than along it), and a dense Cholesky solve on the coarsest level. Backward after forward, restriction the
+ * transpose of prolongation and symmetric positive definite coarse operators make the cycle symmetric positive
+ * definite, as CG needs (Tatebe 1993, "The multigrid preconditioned
  * conjugate gradient method", NASA CP-3224 [from memory]).
  */
 import { coarsenSinkLevel, levelLines, levelUnknowns, prolongAddWith, restrictWith, type SinkLevelGrid } from './aggregation.js';
 import { csrResidual, type CsrMatrix } from './csr.js';
 import { denseCholesky, type DenseFactor } from './dense-cholesky.js';
 import { galerkinCsr } from './galerkin-csr.js';
+import { sinkCoarseOperator } from './sink-coarse-operator.js';
 import type { Prolongation } from './prolongation.js';
 import { buildLineRelaxation, type LineRelaxation, type LineSet } from './line-relaxation.js';
 
@@ -26,6 +29,8 @@ export interface Preconditioner {
   readonly method: string;
   /** Unknowns per level, finest first. */
   readonly levels: number[];
+  /** Matrix entries per level, finest first (their sum over the first is the operator complexity). */
+  readonly entries?: number[];
 }
 
 /** Unknowns of the coarsest level, solved by dense Cholesky (~n^3/3 = 2e7 flops at 400). */
@@ -59,11 +64,11 @@ export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid,
   if (current.a.n !== levelUnknowns(grid)) throw new Error('sinkMultigrid: the level grid does not describe the system');
   let g = grid;
   while (current.a.n > COARSEST) {
-    const { coarse, p } = coarsenSinkLevel(g);
-    if (p.coarse === current.a.n) break;
-    current.p = p;
-    current = push(galerkinCsr(current.a, p), levelLines(coarse));
-    g = coarse;
+    const step = coarsenSinkLevel(g);
+    if (step.p.coarse === current.a.n) break;
+    current.p = step.p;
+    current = push(sinkCoarseOperator(current.a, g, step), levelLines(step.coarse));
+    g = step.coarse;
   }
   const direct: DenseFactor = denseCholesky(current.a);
 
@@ -84,8 +89,9 @@ export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid,
     level.relax.sweep(b, x, 'backward');
   };
   return {
-    method: `CG preconditioned by a multigrid V(1,1) cycle (z-line Gauss-Seidel, pairwise coarsening of plate and fins, ${levels.length} levels)`,
+    method: `CG preconditioned by a multigrid V(1,1) cycle (z-line Gauss-Seidel, semi-coarsening of plate and fins with linear transfers, ${levels.length} levels)`,
     levels: levels.map((l) => l.a.n),
+    entries: levels.map((l) => l.a.col.length),
     apply(r, z) {
       cycle(0, r, z);
     },

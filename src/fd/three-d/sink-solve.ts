@@ -49,9 +49,11 @@ export interface SinkGridResult {
   relativeResidual: number;
 }
 
-export function solveSinkSystem(problem: SinkProblem, system: SinkSystem): SinkGridResult {
+/** `start`: a first guess of theta (e.g. the next coarser grid's solution prolonged); zero when absent. */
+export function solveSinkSystem(problem: SinkProblem, system: SinkSystem, start?: Float64Array): SinkGridResult {
   const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold);
-  const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
+  const x0 = start !== undefined && start.length === system.matrix.n ? start : new Float64Array(system.matrix.n);
+  const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
   if (!isNonlinearSink(problem)) return sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
   const newton = solveSinkNewton(problem, system, theta, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
   const method = `Newton in the Kirchhoff potential (${newton.steps} steps from the linear solve at the base h), each step by ${pre.method}`;

@@ -160,7 +160,12 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
     dx: (x[nx] - x[0]) / nx,
     dy: (y[ny] - y[0]) / ny,
     dz: (z[nz] - z[0]) / nz,
-    fins: grid.fins.map((b) => ({ rows: problem.layout.finKind === 'pins' ? 1 : b.j1 - b.j0, layers: grid.ns })),
+    fins: grid.fins.map((b) => ({
+      rows: problem.layout.finKind === 'pins' ? 1 : b.j1 - b.j0,
+      layers: grid.ns,
+      dy: (y[b.j1] - y[b.j0]) / Math.max(1, b.j1 - b.j0),
+      ds: (grid.s[grid.ns] - grid.s[0]) / Math.max(1, grid.ns),
+    })),
   };
   return {
     grid,

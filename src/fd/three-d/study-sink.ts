@@ -2,7 +2,8 @@
  * The fd-3d study of a heat sink: the same sink solved on nested grids (ratio 2: every cell halved in x, y, z and
  * along the fins), the Celik et al. (2008) three-grid estimate (study/refinement.ts: richardsonGci) on every
  * source's mean rise, and the finest grid's fields and heat rates as the SinkStudy (sink-study-types.ts).
- * Grids are solved coarsest first; the memory of the finest is checked before any is solved.
+ * Grids are solved coarsest first, each finer one of a linear sink started from the coarser solution prolonged
+ * (aggregation.ts nestedProlongation); the memory of the finest is checked before any is solved.
  *
  * Default grids: coarsest cell size min(width, length)/16 in x and y (every fin, gap and source at least one
  * cell: footprint and source edges are grid lines), 2 plate layers, 4 fin layers; the finest of three grids then
@@ -17,6 +18,7 @@ import { sinkFinProfiles } from './sink-fin-profiles.js';
 import { sinkPlateView } from './sink-plate-view.js';
 import { sinkProblem, type SinkProblem } from './sink-problem.js';
 import { isNonlinearSink, solveSinkSystem, type SinkGridResult } from './sink-solve.js';
+import { nestedProlongation, prolongAddWith, type SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { SinkStudy } from './sink-study-types.js';
 
 export interface SinkStudyOptions {
@@ -54,7 +56,21 @@ export function studySink(c: HeatSinkCase, options: SinkStudyOptions = {}): Sink
     options.memoryLimit_bytes ?? DEFAULT_MEMORY_LIMIT,
     isNonlinearSink(problem),
   );
-  const results = meshes.map((grid) => solveSinkSystem(problem, assembleSink(problem, grid, representation))).reverse();
+  // Coarsest first; a linear sink's finer grids start from the coarser solution prolonged (the grids are nested).
+  const results: SinkGridResult[] = [];
+  let previous: { level: SinkLevelGrid; theta: Float64Array } | null = null;
+  for (const grid of meshes) {
+    const system = assembleSink(problem, grid, representation);
+    const p = previous === null || system.fold !== null || isNonlinearSink(problem) ? null : nestedProlongation(previous.level, system.levelGrid);
+    let start: Float64Array | undefined;
+    if (p !== null && previous !== null) {
+      start = new Float64Array(system.matrix.n);
+      prolongAddWith(p, previous.theta, start);
+    }
+    const result = solveSinkSystem(problem, system, start);
+    results.unshift(result);
+    previous = { level: system.levelGrid, theta: result.theta };
+  }
   const sizes = refines.map((r) => cellSize / r).reverse();
   const last = refines[refines.length - 1] as number;
   return { ...sinkStudyFrom(problem, results, sizes, representation), finestGrid: { ...spec(last), finRepresentation: representation } };
