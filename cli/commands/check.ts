@@ -21,7 +21,6 @@ import {
   runSinkCheck,
   type CaseOutcome,
 } from '../../src/compare/index.js';
-import { writeFilesAtomically } from '../../src/report/index.js';
 import { printWarnings, readCaseInput } from '../case-input.js';
 import { caseList } from '../case-list.js';
 import { errorLines, knownFailure } from '../failure.js';
@@ -122,7 +121,7 @@ others still run; the exit code is the worst of the cases'; --csv is not written
       if (!list.several) {
         const one = await checkOne(list.files[0] as string, io, settings, (w) => printWarnings(w, io));
         const units = displayUnitsOf(o.units, one.display);
-        if (o.csv !== undefined) writeFilesAtomically([{ path: o.csv, bytes: comparisonCsv(comparisonTable([one.outcome]), units) }]);
+        if (o.csv !== undefined) await writeCsv(o.csv, comparisonCsv(comparisonTable([one.outcome]), units));
         io.out(o.json ? `${JSON.stringify(one.json, null, 2)}\n` : one.format(units));
         if (one.exit > 0) setExit(one.exit);
         return;
@@ -166,6 +165,15 @@ async function checkSeveral(files: readonly string[], o: CheckCliOptions, settin
   io.out(o.json ? `${JSON.stringify(documents, null, 2)}\n` : formatComparison(table, settings.tolerance, units));
   if (o.csv !== undefined) {
     if (failed > 0) io.err(`fincheck: ${o.csv} not written: ${failed} of ${files.length} cases could not be checked\n`);
-    else writeFilesAtomically([{ path: o.csv, bytes: comparisonCsv(table, units) }]);
+    else await writeCsv(o.csv, comparisonCsv(table, units));
   }
+}
+
+/**
+ * Writes the --csv table. The report layer (its writer stages files atomically) is imported only then: its chunk
+ * carries the charts and the PNG encoder (190 kB), which a plain check does not need.
+ */
+async function writeCsv(path: string, bytes: string): Promise<void> {
+  const { writeFilesAtomically } = await import('../../src/report/index.js');
+  writeFilesAtomically([{ path, bytes }]);
 }

@@ -11,7 +11,16 @@
  * on the first call), which the variants differ from by the perturbation only. Units: W.
  */
 import type { Case } from '../case/index.js';
-import { finProblem, solveFinWith, type FinGrid, type FinStudy, type GridSolvers } from '../fd/index.js';
+import {
+  finProblem,
+  finSectionAdjoint,
+  finSectionHeatRate,
+  solveFinWith,
+  type FinGrid,
+  type FinStudy,
+  type Fin2DResult,
+  type GridSolvers,
+} from '../fd/index.js';
 import type { Grading } from '../mesh/index.js';
 import { isStraight } from './reference2d.js';
 
@@ -28,6 +37,8 @@ export function referenceGridText(grid: ReferenceGrid): string {
 export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid, c: Case): (variant: Case) => number {
   const starts = new Map<string, FinStudy>();
   const solve = (variant: Case, g: FinGrid, id: string): number => {
+    // A linear fin's section: its heat rate alone (the sample's hundreds of variants need no more).
+    if (!solvers.nonlinear && g.model === '2d') return finSectionHeatRate(finProblem(variant), g.nx, g.ny);
     let start = starts.get(id);
     if (solvers.nonlinear && start === undefined) {
       start = solveFinWith(solvers, finProblem(variant === c ? c : withEdges(c, variant)), g);
@@ -50,4 +61,35 @@ export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid, c: Case
 /** The case with the variant's edges (the Newton start of the insulated-edge solve has insulated edges too). */
 function withEdges(c: Case, variant: Case): Case {
   return { ...c, fin: { ...c.fin, edges: variant.fin.edges } };
+}
+
+/**
+ * The fd-2d reference of a LINEAR fin on its nx x ny grid with the derivatives of its heat rate: the section by
+ * the discrete adjoint (src/fd two-d/adjoint.ts: one extra solve for every input together, exact for the discrete
+ * system), the side edges' fd-1d correction by central differences of its two small 1-D solves. `solved` is
+ * the section's solution on that grid (the study's finest), so the nominal section needs no solve.
+ * derivative(input, d) = dQ/df at f = 1, W, from the case with that input times 1 +- d.
+ */
+export function adjointReferenceRate(
+  solvers: GridSolvers,
+  grid: Extract<ReferenceGrid, { model: 'fd-2d' }>,
+  c: Case,
+  solved: Fin2DResult,
+): { nominal: number; derivative(scale: (f: number) => Case, d: number): number } {
+  const section = finSectionAdjoint(finProblem(c), grid.nx, grid.ny, solved);
+  const edges = (variant: Case): number => {
+    if (!(variant.fin.edges === 'cooled' && isStraight(variant))) return 0;
+    const insulated: Case = { ...variant, fin: { ...variant.fin, edges: 'insulated' } };
+    const oneD = (v: Case): number =>
+      solveFinWith(solvers, finProblem(v), { model: '1d', nodes: grid.edges.nodes, grading: grid.edges.grading }).heatRate_W;
+    return oneD(variant) - oneD(insulated);
+  };
+  return {
+    nominal: section.heatRate_W + edges(c),
+    derivative: (scale, d) => {
+      const up = scale(1 + d);
+      const down = scale(1 - d);
+      return section.derivative(finProblem(up), finProblem(down), d) + (edges(up) - edges(down)) / (2 * d);
+    },
+  };
 }

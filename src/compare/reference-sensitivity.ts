@@ -18,9 +18,11 @@
 import { DEFAULT_UNCERTAINTY, numericInputs, type Case } from '../case/index.js';
 import type { FinStudy1D, FinStudy2D, GridSolvers, Resolution } from '../fd/index.js';
 import type { CheckOptions } from './check-common.js';
-import { referenceGridText, referenceRate, type ReferenceGrid } from './reference-rate.js';
-import { SENSITIVITY_STEP, sensitivities } from './sensitivities.js';
+import { adjointReferenceRate, referenceGridText, referenceRate, type ReferenceGrid } from './reference-rate.js';
+import { isStraight } from './reference2d.js';
+import { SENSITIVITY_STEP, sensitivities, sensitivitiesFrom } from './sensitivities.js';
 import type { ModelResult, Sensitivity, UncertaintyBand } from './types.js';
+import type { Grading } from '../mesh/index.js';
 import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, uncertaintyBand } from './uncertainty-band.js';
 
 /** Budgets of the sensitivities and the automatic sample, in unknowns x solves (module header). */
@@ -62,23 +64,16 @@ export function referenceSensitivity(
           ...[...twoD.grids]
             .sort((a, b) => b.nx * b.ny - a.nx * a.ny)
             .filter((g) => g.nx * g.ny < twoD.finest.grid.nodesX * twoD.finest.grid.nodesY)
-            .map((g) => ({ model: 'fd-2d' as const, nx: g.nx, ny: g.ny, edges: oneDCoarsest })),
+            // The side edges' fd-1d correction (a few per cent of Q) on as many nodes as the 2-D grid has along: the
+            // coarse grids serve the sample and over-budget sensitivities, which need Q to ~1e-4, not the finest 1-D grid.
+            .map((g) => ({ model: 'fd-2d' as const, nx: g.nx, ny: g.ny, edges: { nodes: g.nx, grading: resolution.gridGrading } })),
         ];
   const weight = solvers.nonlinear ? NEWTON_WEIGHT : 1;
   const coarsest = grids[grids.length - 1] as ReferenceGrid;
-  const solvesPerInput = 2;
-  const inputs = Math.max(1, numericInputs(c).length);
-  const within = grids.find((g) => solvesPerInput * inputs * unknownsOf(g) * weight <= SENSITIVITY_WORK);
-  const finest = within ?? coarsest;
-  const gridWords =
-    finest === grids[0]
-      ? 'its finest grid'
-      : `the finest grid of the study within the work budget of ${SENSITIVITY_WORK.toExponential(0)} unknowns x solves (the finest, ${referenceGridText(grids[0] as ReferenceGrid)}, would take ${(solvesPerInput * inputs * unknownsOf(grids[0] as ReferenceGrid) * weight).toExponential(1)})`;
-  const rate = referenceRate(solvers, finest, c);
-  const nominal = rate(c);
-  const sampleWork = (opts.sampleSize ?? DEFAULT_SAMPLE_SIZE) * unknownsOf(coarsest) * weight;
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
-  const sens = sensitivities(c, rate, nominal, given, !solvers.nonlinear);
+  const { sens, method } =
+    twoD !== null && !solvers.nonlinear ? adjointSensitivities(c, solvers, twoD, oneDCoarsest, given) : reSolvedSensitivities(c, solvers, grids, given);
+  const sampleWork = (opts.sampleSize ?? DEFAULT_SAMPLE_SIZE) * unknownsOf(coarsest) * weight;
   const uncertainty = uncertaintyBand(c, sens, referenceHeatRate, {
     when: opts.sample ?? 'auto',
     n: opts.sampleSize ?? DEFAULT_SAMPLE_SIZE,
@@ -93,8 +88,63 @@ export function referenceSensitivity(
   });
   return {
     sensitivities: sens,
-    sensitivityMethod: `central differences of the reference (${referenceGridText(finest)}, ${gridWords}, held fixed), relative step ${SENSITIVITY_STEP}: two re-solves per input`,
+    sensitivityMethod: method,
     uncertainty,
+  };
+}
+
+/**
+ * A linear fin with the fd-2d reference: the discrete adjoint on the study's finest grid (one extra solve for
+ * every input; reference-rate.ts adjointReferenceRate), no work budget needed beyond the study's own. The side
+ * edges' correction (a few per cent of Q) is differenced on the 1-D study's coarsest grid: its derivative there
+ * differs from the finest grid's by that grid's discretisation error (below 1e-6 of itself), so S by < 1e-7.
+ */
+function adjointSensitivities(
+  c: Case,
+  solvers: GridSolvers,
+  twoD: FinStudy2D,
+  edges: { nodes: number; grading: Grading | 'auto' },
+  given: ReadonlyMap<string, number>,
+): { sens: Sensitivity[]; method: string } {
+  const grid = { model: 'fd-2d' as const, nx: twoD.finest.grid.nodesX, ny: twoD.finest.grid.nodesY, edges };
+  const reference = adjointReferenceRate(solvers, grid, c, twoD.finest);
+  const d = SENSITIVITY_STEP;
+  const sens = sensitivitiesFrom(c, (input) => reference.derivative(input.scale, d), reference.nominal, given, true, 'adjoint');
+  const edgeWords =
+    c.fin.edges === 'cooled' && isStraight(c)
+      ? `; the side edges' fd-1d correction by central differences on ${edges.nodes} nodes (the coarsest 1-D grid of the study), relative step ${d}`
+      : '';
+  return {
+    sens,
+    method: `adjoint, exact for the discrete system (${referenceGridText(grid)}, its finest grid, held fixed; one extra solve for all inputs; the assembly differenced at relative step ${d})${edgeWords}`,
+  };
+}
+
+/**
+ * Central differences of re-solves on the finest grid of the study within SENSITIVITY_WORK (module header): a
+ * nonlinear fin (Newton from the case's own solution), or the fd-1d reference.
+ */
+function reSolvedSensitivities(
+  c: Case,
+  solvers: GridSolvers,
+  grids: readonly ReferenceGrid[],
+  given: ReadonlyMap<string, number>,
+): { sens: Sensitivity[]; method: string } {
+  const weight = solvers.nonlinear ? NEWTON_WEIGHT : 1;
+  const coarsest = grids[grids.length - 1] as ReferenceGrid;
+  const solvesPerInput = 2;
+  const inputs = Math.max(1, numericInputs(c).length);
+  const within = grids.find((g) => solvesPerInput * inputs * unknownsOf(g) * weight <= SENSITIVITY_WORK);
+  const finest = within ?? coarsest;
+  const gridWords =
+    finest === grids[0]
+      ? 'its finest grid'
+      : `the finest grid of the study within the work budget of ${SENSITIVITY_WORK.toExponential(0)} unknowns x solves (the finest, ${referenceGridText(grids[0] as ReferenceGrid)}, would take ${(solvesPerInput * inputs * unknownsOf(grids[0] as ReferenceGrid) * weight).toExponential(1)})`;
+  const rate = referenceRate(solvers, finest, c);
+  const nominal = rate(c);
+  return {
+    sens: sensitivities(c, rate, nominal, given, !solvers.nonlinear),
+    method: `central differences of the reference (${referenceGridText(finest)}, ${gridWords}, held fixed), relative step ${SENSITIVITY_STEP}: two re-solves per input`,
   };
 }
 

@@ -23,16 +23,17 @@ function worstGci(study: SinkStudy): number {
   return Math.max(...errors);
 }
 
-export function resolvedSinkStudy(c: HeatSinkCase, tolerance: number): SinkStudy {
+/** `refinements`: how many of the further studies may be tried (2: both; a map point takes 1, the cheaper). */
+export function resolvedSinkStudy(c: HeatSinkCase, tolerance: number, refinements = 2): SinkStudy {
   const target = resolutionTarget(tolerance);
   let best = studySink(c);
   if (worstGci(best) <= target) return best;
   const side = Math.min(c.plate.width, c.plate.length);
-  const refinements: SinkStudyOptions[] = [
+  const candidates: SinkStudyOptions[] = [
     { plateLayers: 4, finLayers: 8 },
     { cellSize: side / 32, plateLayers: 4, finLayers: 8 },
   ];
-  for (const options of refinements) {
+  for (const options of candidates.slice(0, refinements)) {
     if (sinkStudyUnknowns(c, options) > SINK_REFINEMENT_BUDGET) break;
     const study = studySink(c, options);
     if (worstGci(study) <= worstGci(best)) best = study;

@@ -95,8 +95,8 @@ export interface Sensitivity {
   /** Key path of the input in the case file. */
   key: string;
   dlnQ_dlnx: number;
-  /** How it was computed: central differences of the reference on its finest grid (sensitivityMethod says more). */
-  method: 'central-difference' | 'exact';
+  /** How it was computed: the discrete adjoint (a linear fin with the fd-2d reference) or central differences of the reference on its finest grid; sensitivityMethod says more. */
+  method: 'adjoint' | 'central-difference' | 'exact';
   /** Nominal value of the input, SI (base.temperature: its rise over the fluid, K). */
   value: number;
   /** Relative standard uncertainty of the input (the case's `uncertainty`, default h 25 %); 0 when not stated. */

@@ -1,16 +1,16 @@
 /**
  * A heat-sink map point: `fincheck check`'s sink pipeline (runSinkCheck) on the point's case, with the fd-3d
- * reference on its default three grids (studySink; not refined further, so a point costs one study, about a second
- * on the default grids) and without the ledger's sheet-reduction study; what the map keeps of it. A point whose
- * GCI is above a tenth of the tolerance has verdicts `unresolved` (crossed on the charts), as in `check`.
+ * reference on its default three grids and, where their GCI is above a tenth of the tolerance, the cheaper of
+ * check's refinements (twice the layers, about 2x the unknowns; compare/sink-resolve.ts), without the ledger's
+ * sheet-reduction study and the sensitivities; what the map keeps of it. A point still above has verdicts
+ * `unresolved` (crossed on the charts), as in `check`.
  */
 import type { HeatSinkCase } from '../case/index.js';
-import { runSinkCheck, type SinkCheckReport } from '../compare/index.js';
-import { studySink } from '../fd/index.js';
+import { resolvedSinkStudy, runSinkCheck, type SinkCheckReport } from '../compare/index.js';
 import type { MapModelId, PointModel, PointResult } from './types.js';
 
 export async function sinkPointReport(c: HeatSinkCase, tolerance: number): Promise<SinkCheckReport> {
-  return runSinkCheck(c, (s) => studySink(s), { tolerance, sheetDrift: false, sensitivities: false });
+  return runSinkCheck(c, (s) => resolvedSinkStudy(s, tolerance, 1), { tolerance, sheetDrift: false, sensitivities: false });
 }
 
 export function pointFromSinkReport(index: number, x: number, y: number, report: SinkCheckReport, wanted: readonly MapModelId[]): PointResult {

@@ -36,6 +36,11 @@ export interface Section2D {
   /** Multiplier from the meshed section to the whole fin: 2 x width (planar: both halves), 2 pi (pins),
    *  2 x 2 pi (annular: both halves). */
   depth: number;
+  /**
+   * Identifies the section's shape exactly (the profile with its dimensions but not the width, which only sets
+   * `depth`; sectionOf), so that grids of equal sections are built once (grid2d.ts buildGrid2D); absent: never cached.
+   */
+  key?: string;
 }
 
 /**
@@ -47,6 +52,12 @@ export interface Section2D {
 export const TIP_CLUSTERING = { concave: 3, convex: 3 } as const;
 
 export function sectionOf(profile: Profile): Section2D {
+  // The width only sets the depth (a planar section is per unit width): left out, so widths share their grids.
+  const key = JSON.stringify(profile, (k, v: unknown) => (k === 'width' ? undefined : v instanceof Float64Array ? Array.from(v) : v));
+  return { ...sectionOfProfile(profile), key };
+}
+
+function sectionOfProfile(profile: Profile): Section2D {
   const twoPi = 2 * Math.PI;
   switch (profile.kind) {
     case 'rectangular': {

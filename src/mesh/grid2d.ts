@@ -49,7 +49,30 @@ export interface GridOptions {
   faceGrading?: number;
 }
 
+/**
+ * Grids already built, by section key and options: a check solves the same section again and again (the study's
+ * grids, the sensitivities' variants of h or k, the uncertainty sample), and building a grid (its Delaunay
+ * diagonals) costs as much as a small solve. Up to GRID_CACHE_SIZE grids of at most GRID_CACHE_NODES nodes; safe
+ * because nothing writes into a grid's arrays.
+ */
+const GRID_CACHE_SIZE = 32;
+const GRID_CACHE_NODES = 250_000;
+const gridCache = new Map<string, Grid2D>();
+
 export function buildGrid2D(section: Section2D, opts: GridOptions): Grid2D {
+  const cacheable = section.key !== undefined && opts.nx * opts.ny <= GRID_CACHE_NODES;
+  if (!cacheable) return buildGrid2DUncached(section, opts);
+  const key = `${section.key as string}|${opts.nx}|${opts.ny}|${opts.baseGrading ?? 1}|${opts.faceGrading ?? 1}`;
+  const hit = gridCache.get(key);
+  // Equal keys, equal nodes: only the depth (the width of a straight fin) may differ.
+  if (hit !== undefined) return hit.depth === section.depth ? hit : { ...hit, depth: section.depth };
+  const grid = buildGrid2DUncached(section, opts);
+  if (gridCache.size >= GRID_CACHE_SIZE) gridCache.delete(gridCache.keys().next().value as string);
+  gridCache.set(key, grid);
+  return grid;
+}
+
+function buildGrid2DUncached(section: Section2D, opts: GridOptions): Grid2D {
   const { nx, ny } = opts;
   if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 2 || ny < 2) {
     throw new RangeError(`buildGrid2D: nx and ny must be integers >= 2 (got ${nx} x ${ny})`);

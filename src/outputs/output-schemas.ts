@@ -37,7 +37,7 @@ const flag = obj({ flag: str, severity: oneOfWords('info', 'warning', 'error'), 
 
 // Design questions (design-questions.md): the sensitivities of the reference and its uncertainty band.
 const driftOverUncertainty = described(nullable(num), '|drift| over the relative uncertainty band of the reference (null when the band is 0)');
-const finSensitivity = obj({ key: str, dlnQ_dlnx: num, method: oneOfWords('central-difference', 'exact'), value: num, uncertainty: num });
+const finSensitivity = obj({ key: str, dlnQ_dlnx: num, method: oneOfWords('adjoint', 'central-difference', 'exact'), value: num, uncertainty: num });
 const finUncertainty = obj({
   method: oneOfWords('first-order', 'latin-hypercube'),
   relative: num,

@@ -36,7 +36,7 @@ describe.each([
     const area = tip === 'adiabatic' ? 2 * L : 2 * L + 2 * b; // per metre of width
     const exact = eta * h * area * THETA_B;
     const s = studyFin2D(c);
-    // 1e-4 after extrapolation is the requirement; measured 1e-8 to 1.2e-5 with the default grids.
+    // 1e-4 after extrapolation is the requirement (kept); see the 1e-6 of issue 14 below.
     expect(Math.abs(s.extrapolatedHeatRate_W / exact - 1)).toBeLessThan(1e-4);
     // The GCI must cover the finest grid's true error (Celik et al. 2008: the purpose of Fs = 1.25).
     expect(Math.abs(s.heatRate_W / exact - 1)).toBeLessThan(s.discretizationError);
@@ -46,6 +46,9 @@ describe.each([
     expect(e).not.toBeNull();
     expect(Math.abs((e?.heatRate_W ?? Number.NaN) / exact - 1)).toBeLessThan(e?.error ?? Number.NaN);
     expect(e?.error).toBeLessThan(s.discretizationError);
+    // Issue 14: the default study's reported (extrapolated) value is within 1e-6 of the exact series (measured
+    // 1.5e-8 to 4.9e-7 with the Bi-sized grids of gridFamily2D); the table's 9 digits add at most 1e-9 / eta < 5e-9.
+    expect(Math.abs((e?.heatRate_W ?? Number.NaN) / exact - 1)).toBeLessThanOrEqual(1e-6);
     // Observed order: formally 2, reduced by the base corner's log singularity (an independent FV check
     // in fin2d_series.py shows 1.7-1.85 on uniform grids); the default grading lifts it to 1.85-1.99.
     expect(s.heatRate.observedOrder).toBeGreaterThan(1.7);
@@ -72,6 +75,8 @@ describe('plate fin, infinite tip (exact slowest-mode closure at the cut)', () =
     expect(Math.abs(s.extrapolatedHeatRate_W / perWidth - 1)).toBeLessThan(1e-4);
     // The extrapolated value's own error estimate covers its true error (see above; the cut adds < 4e-13).
     expect(Math.abs((s.extrapolated?.heatRate_W ?? Number.NaN) / perWidth - 1)).toBeLessThan(s.extrapolated?.error ?? Number.NaN);
+    // Issue 14: true error <= 1e-6 (measured 1.5e-8 to 6.3e-7); the table's 10 digits add < 1e-9.
+    expect(Math.abs((s.extrapolated?.heatRate_W ?? Number.NaN) / perWidth - 1)).toBeLessThanOrEqual(1e-6);
     expect(s.finest.efficiency).toBeNull();
     expect(s.energyBalance).toBeLessThan(1e-9);
   });

@@ -206,7 +206,7 @@ export function lumpedLevel(system: System2D): number {
 }
 
 /** The system for theta - level: same matrix, rhs - level x row sums (A 1 = row sums). */
-function shiftSystem(system: System2D, level: number): System2D {
+export function shiftSystem(system: System2D, level: number): System2D {
   const { excess } = system;
   if (excess === undefined || level === 0) return system;
   // A plain loop: Float64Array.from with a map function calls it through the iterator protocol (~25x slower in V8).

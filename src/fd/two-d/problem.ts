@@ -98,7 +98,7 @@ export function twoDProblem(problem: FinProblem, k: number): Fin2DProblem {
       const b = section.halfSize(0);
       const lambda1 = section.kind === 'pin' ? firstPinEigenvalue((hUniform * b) / k) : firstPlateEigenvalue((hUniform * b) / k);
       const cut = INFINITE_CUT_HALF_SIZES * b;
-      section = { ...section, length: cut, breakpoints: [0, cut] };
+      section = { ...section, length: cut, breakpoints: [0, cut], ...(section.key === undefined ? {} : { key: `${section.key}|cut ${cut}` }) };
       tip = { kind: 'convective', h: { kind: 'uniform', h: (k * lambda1) / b } };
       truncatedInfinite = true;
       break;
