@@ -37,10 +37,18 @@ function batchTasks(schedule: Schedule, b: number, xs: Float64Array, ys: Float64
   return tasks;
 }
 
+/**
+ * Whether to walk the map column by column: for a fin whose x axis changes its shape (a key under `fin`) and whose y
+ * axis does not, so that consecutive points share one geometry (schedule.ts).
+ */
+export function walkAlongY(job: MapJob): boolean {
+  return job.kind === 'fin' && job.x.path[0] === 'fin' && job.y.path[0] !== 'fin';
+}
+
 /** Every point of the nx * ny grid, stored x fastest (index = j * nx + i). */
 export async function solvePoints(job: MapJob, xs: Float64Array, ys: Float64Array, options: SolvePointsOptions): Promise<MapPoint[]> {
   const jobs = Math.max(1, Math.floor(options.jobs));
-  const schedule = serpentineSchedule(xs.length, ys.length, jobs);
+  const schedule = serpentineSchedule(xs.length, ys.length, jobs, walkAlongY(job));
   const batches = schedule.starts.length - 1;
   return jobs === 1 || batches === 1
     ? solveInProcess(job, xs, ys, schedule, options)

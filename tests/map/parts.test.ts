@@ -8,6 +8,8 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { biotCandidates, isoLevels, mLCandidates } from '../../src/map/iso-lines.js';
 import { serpentineSchedule } from '../../src/map/schedule.js';
+import { walkAlongY } from '../../src/map/pool.js';
+import type { MapJob } from '../../src/map/types.js';
 import { progressBar } from '../../src/map/progress.js';
 import { StagedFiles } from '../../src/map/staged-files.js';
 import { tmp } from './support.js';
@@ -32,6 +34,46 @@ describe('serpentine schedule', () => {
     for (let b = 1; b < starts.length; b++) expect((starts[b] as number) > (starts[b - 1] as number)).toBe(true);
     // About 8 batches per worker (never more than one row), so workers share the load.
     expect(starts.length - 1).toBeGreaterThanOrEqual(Math.min(ny, workers * 8));
+  });
+});
+
+describe('serpentine schedule along y (a shape key on x, e.g. thickness x h)', () => {
+  it.each([
+    [7, 5, 1],
+    [41, 41, 2],
+    [200, 3, 8],
+    [2, 2, 4],
+  ])('%i x %i on %i workers: every point once, each step to a grid neighbour, a column at a time', (nx, ny, workers) => {
+    const { order, starts } = serpentineSchedule(nx, ny, workers, true);
+    expect([...order].sort((a, b) => a - b)).toEqual(Array.from({ length: nx * ny }, (_, k) => k));
+    let sameColumn = 0;
+    for (let k = 1; k < order.length; k++) {
+      const a = order[k - 1] as number;
+      const b = order[k] as number;
+      const distance = Math.abs((a % nx) - (b % nx)) + Math.abs(Math.floor(a / nx) - Math.floor(b / nx));
+      expect(distance).toBe(1);
+      if (a % nx === b % nx) sameColumn++;
+    }
+    // Only the nx - 1 turns between columns change x.
+    expect(sameColumn).toBe(order.length - 1 - (nx - 1));
+    expect(starts[0]).toBe(0);
+    expect(starts[starts.length - 1]).toBe(nx * ny);
+    expect(starts.length - 1).toBeGreaterThanOrEqual(Math.min(nx, workers * 8));
+  });
+
+  it('is chosen for a fin whose x axis is a shape key and whose y axis is not', () => {
+    const job = (x: string, y: string, kind: 'fin' | 'heat-sink' = 'fin'): MapJob => ({
+      kind,
+      caseText: '',
+      fileName: 'case.yaml',
+      x: { path: x.split('.'), unit: '' },
+      y: { path: y.split('.'), unit: '' },
+      check: { tolerance: 0.02, reference: '2d', models: [], guess: null },
+    });
+    expect(walkAlongY(job('fin.thickness', 'convection.h'))).toBe(true);
+    expect(walkAlongY(job('convection.h', 'fin.thickness'))).toBe(false);
+    expect(walkAlongY(job('fin.thickness', 'fin.length'))).toBe(false);
+    expect(walkAlongY(job('fin.thickness', 'convection.h', 'heat-sink'))).toBe(false);
   });
 });
 

@@ -22,6 +22,8 @@ export interface PreparedSolver2D {
   readonly method: SolverMethod;
   /** Solves a system with the matrix given to prepareSolver2D (and its row sums); any right-hand side. */
   solve(system: System2D): Float64Array;
+  /** Says no more solves will follow: a banded factor's storage may then serve the next factorisation. */
+  release(): void;
 }
 
 /**
@@ -49,7 +51,7 @@ export function prepareSolver2D(system: System2D, method: SolverMethod | 'auto' 
     case 'banded-cholesky': {
       if (nx >= ny) {
         const factor = factorBanded(system);
-        return { method: chosen, solve: (s) => solveWithRefinement(factor, s) };
+        return { method: chosen, solve: (s) => solveWithRefinement(factor, s), release: () => factor.release() };
       }
       // Fewer nodes along than across: factor the transpose (short direction fastest).
       const transposed = transposeSystem(system);
@@ -57,11 +59,12 @@ export function prepareSolver2D(system: System2D, method: SolverMethod | 'auto' 
       return {
         method: chosen,
         solve: (s) => transposeField(solveWithRefinement(factor, transposeSystem(s, transposed.matrix)), ny, nx),
+        release: () => factor.release(),
       };
     }
     case 'mg-pcg': {
       const mg: Multigrid = buildMultigrid(system.matrix);
-      return { method: chosen, solve: (s) => solveMgPcg(s, {}, mg).x };
+      return { method: chosen, solve: (s) => solveMgPcg(s, {}, mg).x, release: () => undefined };
     }
     default: {
       const never: never = chosen;
@@ -71,7 +74,12 @@ export function prepareSolver2D(system: System2D, method: SolverMethod | 'auto' 
 }
 
 /** The default solver: automatic choice, prepared and used once. */
-export const autoSolver2D: Solver2D = (system: System2D) => prepareSolver2D(system).solve(system);
+export const autoSolver2D: Solver2D = (system: System2D) => {
+  const prepared = prepareSolver2D(system);
+  const x = prepared.solve(system);
+  prepared.release();
+  return x;
+};
 
 function transposeSystem(s: System2D, matrix = transposeStencil9(s.matrix)): System2D {
   const { nodesX: nx, nodesY: ny } = s.matrix;

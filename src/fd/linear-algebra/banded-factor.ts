@@ -7,4 +7,6 @@ export interface BandedFactor {
   readonly bandwidth: number;
   /** Solves A x = rhs with the stored factor; writes into `out` when given (it may be `rhs`). */
   solve(rhs: Float64Array, out?: Float64Array): Float64Array;
+  /** Says the factor will not be used again: its storage may serve the next factorisation. solve() then throws. */
+  release(): void;
 }

@@ -38,7 +38,7 @@ export function factorBandedLdltRowSums(a: Stencil9, rowSums: Float64Array): Ban
       }
     }
   }
-  const e = Float64Array.from(rowSums);
+  const e = rowSums.slice();
   const invD = new Float64Array(n);
   for (let i = 0; i < n; i++) {
     const ri = i * rl;
@@ -84,6 +84,9 @@ export function factorBandedLdltRowSums(a: Stencil9, rowSums: Float64Array): Ban
         y[i] = (y[i] as number) - s * (invD[i] as number);
       }
       return y;
+    },
+    release(): void {
+      // Nothing kept: this factor is the rare fallback (banded-solve.ts).
     },
   };
 }

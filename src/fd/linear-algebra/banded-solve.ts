@@ -44,6 +44,7 @@ export function factorBanded(system: System2D): BandedFactor {
     return cholesky.factor;
   }
   if (cholesky.ok && cholesky.factor.pivotRatio >= CANCELLATION_LIMIT) return cholesky.factor;
+  if (cholesky.ok) cholesky.factor.release();
   return factorBandedLdltRowSums(system.matrix, system.excess);
 }
 
@@ -72,7 +73,12 @@ export function solveWithRefinement(factor: BandedFactor, system: System2D): Flo
 }
 
 /** One-shot solver: factor, solve, refine if needed. */
-export const bandedCholeskySolver: Solver2D = (system: System2D) => solveWithRefinement(factorBanded(system), system);
+export const bandedCholeskySolver: Solver2D = (system: System2D) => {
+  const factor = factorBanded(system);
+  const x = solveWithRefinement(factor, system);
+  factor.release();
+  return x;
+};
 
 function norm1(v: Float64Array): number {
   let s = 0;

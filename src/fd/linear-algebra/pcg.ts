@@ -14,7 +14,7 @@
  */
 import { SolverError } from '../../errors.js';
 import { buildMultigrid, type Multigrid } from './multigrid.js';
-import { applyDifferenceForm, applyStencil9, coupledRhsNorm1, residual, type Solver2D, type Stencil9, type System2D } from './stencil9.js';
+import { applyDifferenceForm, applyStencil9, coupledRhsNorm1, isFivePoint, residual, type Solver2D, type Stencil9, type System2D } from './stencil9.js';
 
 export interface PcgOptions {
   /** Relative residual target (default 1e-12). */
@@ -79,13 +79,14 @@ export function attemptMgPcg(
   const n = system.rhs.length;
   const scale = coupledRhsNorm1(system) || 1;
   const x = new Float64Array(n);
-  const r = Float64Array.from(system.rhs);
+  const r = system.rhs.slice();
   const z = new Float64Array(n);
   const p = new Float64Array(n);
   const q = new Float64Array(n);
+  const fivePoint = isFivePoint(system.matrix);
   /** out = A v; returns v . out. */
   const multiply = (v: Float64Array, out: Float64Array): number => {
-    if (system.excess !== undefined) return applyDifferenceForm(system.matrix, system.excess, v, out);
+    if (system.excess !== undefined) return applyDifferenceForm(system.matrix, system.excess, v, out, fivePoint);
     applyStencil9(system.matrix, v, out);
     return dot(v, out);
   };

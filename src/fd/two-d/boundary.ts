@@ -119,11 +119,12 @@ export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
   const matrix: Stencil9 = {
     nodesX: nx,
     nodesY: ny,
-    diag: Float64Array.from(K.diag),
-    east: Float64Array.from(K.east),
-    north: Float64Array.from(K.north),
-    northEast: Float64Array.from(K.northEast),
-    southEast: Float64Array.from(K.southEast),
+    // slice(), not Float64Array.from: a copy at memcpy speed (from() walks the iterator, ~30x slower in V8).
+    diag: K.diag.slice(),
+    east: K.east.slice(),
+    north: K.north.slice(),
+    northEast: K.northEast.slice(),
+    southEast: K.southEast.slice(),
   };
   const rhs = new Float64Array(n);
   const fixed = new Uint8Array(n);

@@ -121,6 +121,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     const prepared = prepareSolver2D(shifted, opts.method ?? 'auto');
     method = prepared.method;
     field = prepared.solve(shifted);
+    prepared.release();
   }
   for (let p = 0; p < field.length; p++) field[p] = (field[p] as number) + level;
   const rates = heatRates2D(K, terms, field);
@@ -208,7 +209,9 @@ export function lumpedLevel(system: System2D): number {
 export function shiftSystem(system: System2D, level: number): System2D {
   const { excess } = system;
   if (excess === undefined || level === 0) return system;
-  const rhs = Float64Array.from(system.rhs, (b, p) => b - level * (excess[p] as number));
+  // A plain loop: Float64Array.from with a map function calls it through the iterator protocol (~25x slower in V8).
+  const rhs = new Float64Array(system.rhs.length);
+  for (let p = 0; p < rhs.length; p++) rhs[p] = (system.rhs[p] as number) - level * (excess[p] as number);
   return { ...system, rhs };
 }
 
