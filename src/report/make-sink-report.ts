@@ -73,22 +73,21 @@ export async function makeSinkReport(c: HeatSinkCase, opts: SinkReportOptions): 
   const kinds = (['plate', 'fin-heat', 'profile', 'sensitivity'] as const).filter(
     (k) => sinkPlotAvailability({ case: c }, k).ok && (k !== 'sensitivity' || input.report.sensitivities !== undefined),
   );
-  const svgs = kinds.map((kind) => {
+  const figures: SinkReportFigure[] = [];
+  for (const kind of kinds) {
     opts.checkpoint?.();
-    return sinkPlotSvg(kind, input, REPORT_CHART, opts.dpi / 96);
-  });
-  // Rasterised together on libuv's thread pool (both cores), as make-report.ts does.
-  const pngs = await Promise.all(svgs.map((svg) => svgToPng(svg, { dpi: opts.dpi })));
-  const figures: SinkReportFigure[] = kinds.map((kind, k) => ({
-    kind,
-    file: SINK_FIGURE_FILES[kind],
-    title: TITLES[kind],
-    caption: caption(kind, input),
-    svg: svgs[k] as string,
-    png: pngs[k] as Buffer,
-    width_px: REPORT_CHART.width,
-    height_px: REPORT_CHART.height,
-  }));
+    const svg = sinkPlotSvg(kind, input, REPORT_CHART, opts.dpi / 96);
+    figures.push({
+      kind,
+      file: SINK_FIGURE_FILES[kind],
+      title: TITLES[kind],
+      caption: caption(kind, input),
+      svg,
+      png: await svgToPng(svg, { dpi: opts.dpi }),
+      width_px: REPORT_CHART.width,
+      height_px: REPORT_CHART.height,
+    });
+  }
   const document = buildSinkReport({ input, caseFile: opts.caseFile, figures, version: opts.version, date: opts.date });
   opts.checkpoint?.();
   const pdf = opts.pdf === true ? await reportPdf(document, { date: opts.date, figureSvgs: new Map(figures.map((f) => [f.file, f.svg])) }) : null;
