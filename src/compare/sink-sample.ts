@@ -18,7 +18,7 @@ import { sinkNumericInputs, type HeatSinkCase } from '../case/index.js';
 import { studySink, type SinkGridSpec } from '../fd/index.js';
 import { latinHypercubeNormal, type NormalBounds } from './latin-hypercube.js';
 import type { SinkSensitivity, SinkUncertaintySample } from './sink-types.js';
-import { quantile } from './uncertainty-band.js';
+import { sampleStatistics } from './uncertainty-band.js';
 
 /**
  * Unknowns x solves the automatic sample may take: 200 solves of a 2000-unknown grid. Measured on the demo sink
@@ -59,21 +59,16 @@ export function sinkSample(
     });
     return rise(variant);
   });
-  const n = rises.length;
-  const mean = rises.reduce((a, b) => a + b, 0) / n;
-  const sd = Math.sqrt(rises.reduce((a, r) => a + (r - mean) ** 2, 0) / Math.max(1, n - 1));
-  const relative = sd / nominal;
-  const samplingError = relative / Math.sqrt(2 * Math.max(1, n - 1));
-  const sorted = [...rises].sort((a, b) => a - b);
+  const stats = sampleStatistics(rises, nominal, firstOrder);
   return {
     method: 'latin-hypercube',
-    n,
+    n: stats.n,
     seed: setup.seed,
-    relative,
-    samplingError,
-    agrees: Math.abs(relative - firstOrder) <= 2 * samplingError,
+    relative: stats.relative,
+    samplingError: stats.samplingError,
+    agrees: stats.agrees,
     grid: setup.gridWords,
-    low_K: (riseRef * quantile(sorted, 0.1587)) / nominal,
-    high_K: (riseRef * quantile(sorted, 0.8413)) / nominal,
+    low_K: riseRef * stats.lowFactor,
+    high_K: riseRef * stats.highFactor,
   };
 }

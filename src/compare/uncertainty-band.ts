@@ -103,22 +103,43 @@ function drawSample(c: Case, uncertain: readonly Sensitivity[], firstOrder: numb
     });
     return setup.rate(variant);
   });
-  const n = rates.length;
-  const mean = rates.reduce((a, b) => a + b, 0) / n;
-  const sd = Math.sqrt(rates.reduce((a, q) => a + (q - mean) ** 2, 0) / Math.max(1, n - 1));
-  const relative = sd / nominal;
-  const samplingError = relative / Math.sqrt(2 * Math.max(1, n - 1));
-  const sorted = [...rates].sort((a, b) => a - b);
+  const stats = sampleStatistics(rates, nominal, firstOrder);
   return {
     method: 'latin-hypercube',
-    n,
+    n: stats.n,
     seed: setup.seed,
+    relative: stats.relative,
+    samplingError: stats.samplingError,
+    agrees: stats.agrees,
+    grid: setup.grid,
+    low_W: heatRate * stats.lowFactor,
+    high_W: heatRate * stats.highFactor,
+  };
+}
+
+/**
+ * What a sample of a result says, relative to its nominal value: the relative standard deviation, its sampling
+ * error sigma / sqrt(2 (n - 1)) (normal samples), whether it agrees with first order (within twice that), and
+ * the one-standard-uncertainty ends (the 15.87 % and 84.13 % quantiles) as factors on the nominal value.
+ */
+export function sampleStatistics(
+  values: readonly number[],
+  nominal: number,
+  firstOrder: number,
+): { n: number; relative: number; samplingError: number; agrees: boolean; lowFactor: number; highFactor: number } {
+  const n = values.length;
+  const mean = values.reduce((a, b) => a + b, 0) / n;
+  const sd = Math.sqrt(values.reduce((a, q) => a + (q - mean) ** 2, 0) / Math.max(1, n - 1));
+  const relative = sd / nominal;
+  const samplingError = relative / Math.sqrt(2 * Math.max(1, n - 1));
+  const sorted = [...values].sort((a, b) => a - b);
+  return {
+    n,
     relative,
     samplingError,
     agrees: Math.abs(relative - firstOrder) <= 2 * samplingError,
-    grid: setup.grid,
-    low_W: (heatRate * quantile(sorted, 0.1587)) / nominal,
-    high_W: (heatRate * quantile(sorted, 0.8413)) / nominal,
+    lowFactor: quantile(sorted, 0.1587) / nominal,
+    highFactor: quantile(sorted, 0.8413) / nominal,
   };
 }
 
