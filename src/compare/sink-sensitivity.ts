@@ -20,7 +20,7 @@
  * than twice its sampling error, the band is the sample's.
  */
 import { DEFAULT_UNCERTAINTY, sinkNumericInputs, type HeatSinkCase } from '../case/index.js';
-import { sinkGridAdjoint, solveSinkOnGrid, type SinkGridSolution, type SinkStudy } from '../fd/index.js';
+import { sinkRiseSlopes, type SinkGridSpec, type SinkRiseSlopes, type SinkRiseVariants, type SinkStudy } from '../fd/index.js';
 import { NEWTON_WEIGHT } from './reference-sensitivity.js';
 import { SINK_SAMPLE_WORK, sinkSample } from './sink-sample.js';
 import type { SinkModelRow, SinkSensitivity, SinkUncertaintyBand } from './sink-types.js';
@@ -43,49 +43,68 @@ export interface SinkSensitivityResult {
 
 const pct = (x: number): string => `${Number((100 * x).toPrecision(3))} %`;
 
+/** What the slopes of a study's sensitivities are computed from: the grid, the hottest source, each input's two variants. */
+export interface SinkSlopeTask {
+  spec: SinkGridSpec;
+  source: number;
+  variants: SinkRiseVariants[];
+  step: number;
+}
+
 /** null when the study carries no grid to re-solve on (a study built by hand). */
-export function sinkSensitivity(
-  c: HeatSinkCase,
-  study: SinkStudy,
-  sampleOptions: SinkSampleOptions = { when: 'auto', n: DEFAULT_SAMPLE_SIZE, seed: DEFAULT_SAMPLE_SEED },
-): SinkSensitivityResult | null {
+export function sinkSlopeTask(c: HeatSinkCase, study: SinkStudy): SinkSlopeTask | null {
   const finest = study.finestGrid;
   if (finest === undefined) return null;
-  const spec = { ...finest, refine: Math.max(1, finest.refine / 2) };
-  const unknowns = study.unknowns[finest.refine > 1 ? 1 : 0] ?? '?';
   let hottest = 0;
   study.sources.forEach((s, j) => {
     if (s.meanRise_K > (study.sources[hottest]?.meanRise_K ?? -Infinity)) hottest = j;
   });
   const d = SINK_SENSITIVITY_STEP;
+  return {
+    spec: { ...finest, refine: Math.max(1, finest.refine / 2) },
+    source: hottest,
+    variants: sinkNumericInputs(c).map((input) => ({ plus: input.scale(1 + d), minus: input.scale(1 - d) })),
+    step: d,
+  };
+}
+
+/**
+ * null when the study carries no grid to re-solve on (a study built by hand). `computed`: the slopes of
+ * sinkSlopeTask(c, study) found elsewhere (the check's second thread); without them they are computed here.
+ */
+export function sinkSensitivity(
+  c: HeatSinkCase,
+  study: SinkStudy,
+  sampleOptions: SinkSampleOptions = { when: 'auto', n: DEFAULT_SAMPLE_SIZE, seed: DEFAULT_SAMPLE_SEED },
+  computed?: SinkRiseSlopes,
+): SinkSensitivityResult | null {
+  const task = sinkSlopeTask(c, study);
+  const finest = study.finestGrid;
+  if (task === null || finest === undefined) return null;
+  const unknowns = study.unknowns[finest.refine > 1 ? 1 : 0] ?? '?';
+  const hottest = task.source;
+  const d = task.step;
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
   const inputs = sinkNumericInputs(c);
   // Linear sinks: one adjoint solve for every input; a variant whose grid changes shape, and nonlinear sinks, by re-solves.
-  const adjoint = sinkGridAdjoint(c, spec, hottest);
-  let nominal: SinkGridSolution | null = null;
-  const resolve = (): SinkGridSolution => (nominal ??= solveSinkOnGrid(c, spec));
-  const rise0 = adjoint?.rise ?? (resolve().sourceMeanRise[hottest] as number);
-  const rise = (variant: HeatSinkCase): number => solveSinkOnGrid(variant, spec, resolve().theta).sourceMeanRise[hottest] as number;
-  let resolved = 0;
-  const sensitivities = inputs.map((input) => {
-    const plus = input.scale(1 + d);
-    const minus = input.scale(1 - d);
-    const fromAdjoint = adjoint?.dRise_dlnx(plus, minus, d) ?? null;
-    if (fromAdjoint === null) resolved++;
-    const slope = fromAdjoint ?? (rise(plus) - rise(minus)) / (2 * d);
+  const found = computed ?? sinkRiseSlopes(c, task.spec, hottest, task.variants, d);
+  const rise0 = found.rise;
+  const resolved = found.slopes.filter((s) => s.method === 'central-difference').length;
+  const sensitivities = inputs.map((input, k) => {
+    const slope = found.slopes[k];
+    if (slope === undefined) throw new Error(`sinkSensitivity: no slope for ${input.key}`);
     return {
       key: input.key,
-      dlnRise_dlnx: slope / rise0,
-      method: fromAdjoint === null ? ('central-difference' as const) : ('adjoint' as const),
+      dlnRise_dlnx: slope.slope / rise0,
+      method: slope.method,
       value: input.nominal,
       uncertainty: given.get(input.key) ?? 0,
     };
   });
-  const methodText =
-    adjoint === null
-      ? `central differences of fd-3d on the study's second-finest grid (${unknowns} unknowns, held fixed), relative step ${d}, each re-solve started from the case's solution: two re-solves per input`
-      : `adjoint of fd-3d on the study's second-finest grid (${unknowns} unknowns, held fixed): one adjoint solve for all inputs, the system's change with each input by central differences of the assembly (relative step ${d}), exact for the discrete system up to O(step^2) in the dimensions` +
-        (resolved > 0 ? `; ${resolved} input(s) change the grid's cell counts and were re-solved (two re-solves each)` : '');
+  const methodText = !found.adjoint
+    ? `central differences of fd-3d on the study's second-finest grid (${unknowns} unknowns, held fixed), relative step ${d}, each re-solve started from the case's solution: two re-solves per input`
+    : `adjoint of fd-3d on the study's second-finest grid (${unknowns} unknowns, held fixed): one adjoint solve for all inputs, the system's change with each input by central differences of the assembly (relative step ${d}), exact for the discrete system up to O(step^2) in the dimensions` +
+      (resolved > 0 ? `; ${resolved} input(s) change the grid's cell counts and were re-solved (two re-solves each)` : '');
   const firstOrder = Math.sqrt(sensitivities.reduce((sum, s) => sum + (s.dlnRise_dlnx * s.uncertainty) ** 2, 0));
   const h = sensitivities.find((s) => s.key === 'convection.h');
   const uncertain = sensitivities.filter((s) => s.uncertainty > 0);

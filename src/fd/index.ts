@@ -31,6 +31,7 @@ export type { NewtonReport } from './newton/newton-report.js';
 export type { SinkStudy, SinkSourceResult, SinkFinResult, SinkPlateView, SinkFinProfiles, SinkGridSpec } from './three-d/sink-study-types.js';
 export { solveSinkOnGrid, type SinkGridSolution } from './three-d/sink-grid-solve.js';
 export { sinkGridAdjoint, type SinkGridAdjoint } from './three-d/sink-adjoint.js';
+export { sinkRiseSlopes, type SinkRiseSlopes, type SinkRiseVariants } from './three-d/sink-rise-slopes.js';
 
 export type { Fin1DResult } from './one-d/linear-solve.js';
 export { DEFAULT_STUDY_NODES, autoGrading } from './one-d/linear-solve.js';

@@ -13,11 +13,11 @@
  * (CG with the case's own preconditioner) instead of two solves each.
  */
 import type { HeatSinkCase } from '../../case/index.js';
-import { buildSinkGrid, type SinkGrid } from '../../mesh/index.js';
+import type { SinkGrid } from '../../mesh/index.js';
 import { csrResidual } from '../linear-algebra/csr.js';
 import { sparsePcg } from '../linear-algebra/sparse-pcg.js';
-import { sinkMultigrid } from '../linear-algebra/sink-multigrid.js';
 import { assembleSink } from './sink-system.js';
+import { sameSinkGrid, sinkGridOf, sinkGridSetup, type SinkGridSetup, type SolvedSinkGrid } from './sink-grid-setup.js';
 import { sinkProblem } from './sink-problem.js';
 import { isNonlinearSink, RESIDUAL_TARGET, sinkQuantities } from './sink-solve.js';
 import type { SinkGridSpec } from './sink-study-types.js';
@@ -37,18 +37,20 @@ export interface SinkGridAdjoint {
   dRise_dlnx(plus: HeatSinkCase, minus: HeatSinkCase, step: number): number | null;
 }
 
-/** null for a nonlinear sink (power-law h or k(T)): its Newton system is not differentiated here. */
-export function sinkGridAdjoint(c: HeatSinkCase, spec: SinkGridSpec, source: number): SinkGridAdjoint | null {
+/**
+ * null for a nonlinear sink (power-law h or k(T)): its Newton system is not differentiated here. `solved`: the
+ * case already set up and solved on this grid (a study's kept grid), used instead of solving it again.
+ */
+export function sinkGridAdjoint(c: HeatSinkCase, spec: SinkGridSpec, source: number, solved?: SolvedSinkGrid): SinkGridAdjoint | null {
   const problem = sinkProblem(c);
   if (isNonlinearSink(problem)) return null;
-  const gridOf = (variant: HeatSinkCase) =>
-    buildSinkGrid(sinkProblem(variant).layout, { cellSize: spec.cellSize, plateLayers: spec.plateLayers, finLayers: spec.finLayers, refine: spec.refine });
-  const grid = gridOf(c);
-  const system = assembleSink(problem, grid, spec.finRepresentation);
+  const gridOf = (variant: HeatSinkCase) => sinkGridOf(sinkProblem(variant), spec);
+  const given = solved !== undefined && sameSinkGrid(solved.spec, spec) ? solved : null;
+  const { grid, system, pre } = given?.setup ?? sinkGridSetup(problem, spec);
   const n = system.matrix.n;
-  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold);
-  const solved = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
-  const theta = solved.x;
+  const primal = given ?? solvePrimal(system, pre);
+  const theta = primal.theta;
+  const primalIterations = primal.iterations;
   const rise = sinkQuantities(problem, system, theta, pre.method, 0, 0).sourceMeanRise[source] as number;
 
   // w = dJ/dtheta: the area weights of the source's cells (underside layer).
@@ -73,7 +75,7 @@ export function sinkGridAdjoint(c: HeatSinkCase, spec: SinkGridSpec, source: num
   return {
     rise,
     unknowns: n,
-    iterations: solved.report.iterations + adjoint.report.iterations,
+    iterations: primalIterations + adjoint.report.iterations,
     dRise_dlnx(plus, minus, step) {
       const variants = [plus, minus].map((v) => {
         const p = sinkProblem(v);
@@ -93,4 +95,9 @@ export function sinkGridAdjoint(c: HeatSinkCase, spec: SinkGridSpec, source: num
       return (jPlus - jMinus + dot) / (2 * step);
     },
   };
+}
+
+function solvePrimal(system: SinkGridSetup['system'], pre: SinkGridSetup['pre']): { theta: Float64Array; iterations: number } {
+  const { x, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
+  return { theta: x, iterations: report.iterations };
 }

@@ -13,7 +13,7 @@
  */
 import type { SinkGrid } from '../../mesh/index.js';
 import { sparsePcg } from '../linear-algebra/sparse-pcg.js';
-import { sinkMultigrid } from '../linear-algebra/sink-multigrid.js';
+import { sinkMultigrid, type Preconditioner } from '../linear-algebra/sink-multigrid.js';
 import { PLATE_TOP, UNDERSIDE } from './heat-terms.js';
 import type { SinkSystem } from './sink-system.js';
 import type { SinkProblem } from './sink-problem.js';
@@ -49,9 +49,16 @@ export interface SinkGridResult {
   relativeResidual: number;
 }
 
-/** `start`: a first guess of theta (e.g. the next coarser grid's solution prolonged); zero when absent. */
-export function solveSinkSystem(problem: SinkProblem, system: SinkSystem, start?: Float64Array): SinkGridResult {
-  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold);
+/**
+ * `start`: a first guess of theta (e.g. the next coarser grid's solution prolonged); zero when absent. `pre`: the
+ * system's multigrid when the caller has built it (sink-grid-setup.ts).
+ */
+export function solveSinkSystem(
+  problem: SinkProblem,
+  system: SinkSystem,
+  start?: Float64Array,
+  pre: Preconditioner = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold),
+): SinkGridResult {
   const x0 = start !== undefined && start.length === system.matrix.n ? start : new Float64Array(system.matrix.n);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
   if (!isNonlinearSink(problem)) return sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);

@@ -10,16 +10,17 @@
  * has 4x as many cells in every direction.
  */
 import type { HeatSinkCase } from '../../case/index.js';
-import { buildSinkGrid, type SinkGrid } from '../../mesh/index.js';
+import { buildSinkGrid } from '../../mesh/index.js';
 import { richardsonGci } from '../study/refinement.js';
-import { assembleSink, sinkUnknowns, type FinRepresentation } from './sink-system.js';
+import { sinkUnknowns, type FinRepresentation } from './sink-system.js';
 import { checkSinkMemory, DEFAULT_MEMORY_LIMIT } from './sink-memory.js';
 import { sinkFinProfiles } from './sink-fin-profiles.js';
 import { sinkPlateView } from './sink-plate-view.js';
 import { sinkProblem, type SinkProblem } from './sink-problem.js';
 import { isNonlinearSink, solveSinkSystem, type SinkGridResult } from './sink-solve.js';
 import { nestedProlongation, prolongAddWith, type SinkLevelGrid } from '../linear-algebra/aggregation.js';
-import type { SinkStudy } from './sink-study-types.js';
+import type { SinkGridSpec, SinkStudy } from './sink-study-types.js';
+import { sinkGridOf, sinkGridSetup, type SolvedSinkGrid } from './sink-grid-setup.js';
 
 export interface SinkStudyOptions {
   /** Grids of the study, refinement ratio 2 (default 3; 1 gives a single grid without an error estimate). */
@@ -42,38 +43,79 @@ const PLATE_LAYERS = 2;
 const FIN_LAYERS = 4;
 
 export function studySink(c: HeatSinkCase, options: SinkStudyOptions = {}): SinkStudy {
+  const plan = planSinkStudy(c, options);
+  return sinkStudyOfPlan(plan, solveSinkGrids(plan.problem, plan.specs, null).results);
+}
+
+/** The study and its second-finest grid kept set up and solved (null for a single grid), for the check's sensitivities. */
+export function studySinkKeeping(c: HeatSinkCase, options: SinkStudyOptions = {}): { study: SinkStudy; kept: SolvedSinkGrid | null } {
+  const plan = planSinkStudy(c, options);
+  const { results, kept } = solveSinkGrids(plan.problem, plan.specs, plan.specs.length >= 2 ? plan.specs.length - 2 : null);
+  return { study: sinkStudyOfPlan(plan, results), kept };
+}
+
+/** A study's grids (coarsest first), checked against the memory limit before anything is solved. */
+export interface SinkStudyPlan {
+  problem: SinkProblem;
+  specs: SinkGridSpec[];
+}
+
+export function planSinkStudy(c: HeatSinkCase, options: SinkStudyOptions = {}): SinkStudyPlan {
   const problem = sinkProblem(c);
   const grids = options.grids ?? DEFAULT_GRIDS;
   if (!Number.isInteger(grids) || grids < 1) throw new RangeError(`studySink: grids must be a positive integer, got ${grids}`);
   const cellSize = options.cellSize ?? Math.min(c.plate.width, c.plate.length) / CELLS_PER_SIDE;
-  const representation = options.finRepresentation ?? 'sheet';
-  const spec = (refine: number) => ({ cellSize, plateLayers: options.plateLayers ?? PLATE_LAYERS, finLayers: options.finLayers ?? FIN_LAYERS, refine });
-  const refines = Array.from({ length: grids }, (_, g) => 2 ** g);
-  const meshes: SinkGrid[] = refines.map((r) => buildSinkGrid(problem.layout, spec(r)));
-  const finest = meshes[meshes.length - 1];
+  const finRepresentation = options.finRepresentation ?? 'sheet';
+  const specs: SinkGridSpec[] = Array.from({ length: grids }, (_, g) => ({
+    cellSize,
+    plateLayers: options.plateLayers ?? PLATE_LAYERS,
+    finLayers: options.finLayers ?? FIN_LAYERS,
+    refine: 2 ** g,
+    finRepresentation,
+  }));
+  const finest = sinkGridOf(problem, specs[specs.length - 1] as SinkGridSpec);
   checkSinkMemory(
-    sinkUnknowns(finest, representation, problem.layout.finKind),
+    sinkUnknowns(finest, finRepresentation, problem.layout.finKind),
     options.memoryLimit_bytes ?? DEFAULT_MEMORY_LIMIT,
     isNonlinearSink(problem),
   );
-  // Coarsest first; a linear sink's finer grids start from the coarser solution prolonged (the grids are nested).
+  return { problem, specs };
+}
+
+/**
+ * Solves the grids `specs` (nested, coarsest first) in order; a linear sink's finer grids start from the coarser
+ * solution prolonged. `keep`: the index of a grid to keep set up with its solution (null: none). Results coarsest first.
+ */
+export function solveSinkGrids(
+  problem: SinkProblem,
+  specs: SinkGridSpec[],
+  keep: number | null,
+): { results: SinkGridResult[]; kept: SolvedSinkGrid | null } {
   const results: SinkGridResult[] = [];
+  let kept: SolvedSinkGrid | null = null;
   let previous: { level: SinkLevelGrid; theta: Float64Array } | null = null;
-  for (const grid of meshes) {
-    const system = assembleSink(problem, grid, representation);
+  specs.forEach((spec, g) => {
+    const setup = sinkGridSetup(problem, spec);
+    const { system } = setup;
     const p = previous === null || system.fold !== null || isNonlinearSink(problem) ? null : nestedProlongation(previous.level, system.levelGrid);
     let start: Float64Array | undefined;
     if (p !== null && previous !== null) {
       start = new Float64Array(system.matrix.n);
       prolongAddWith(p, previous.theta, start);
     }
-    const result = solveSinkSystem(problem, system, start);
-    results.unshift(result);
+    const result = solveSinkSystem(problem, system, start, setup.pre);
+    results.push(result);
+    if (g === keep) kept = { spec, setup, theta: result.theta, iterations: result.iterations };
     previous = { level: system.levelGrid, theta: result.theta };
-  }
-  const sizes = refines.map((r) => cellSize / r).reverse();
-  const last = refines[refines.length - 1] as number;
-  return { ...sinkStudyFrom(problem, results, sizes, representation), finestGrid: { ...spec(last), finRepresentation: representation } };
+  });
+  return { results, kept };
+}
+
+/** The SinkStudy of a plan from its grids' results (coarsest first). */
+export function sinkStudyOfPlan(plan: SinkStudyPlan, results: SinkGridResult[]): SinkStudy {
+  const finest = plan.specs[plan.specs.length - 1] as SinkGridSpec;
+  const sizes = plan.specs.map((s) => s.cellSize / s.refine).reverse();
+  return { ...sinkStudyFrom(plan.problem, [...results].reverse(), sizes, finest.finRepresentation), finestGrid: finest };
 }
 
 /** Unknowns of the finest grid a study with these options would solve (nothing is allocated). */
