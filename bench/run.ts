@@ -8,7 +8,7 @@
  * (the 41x41 map with the 2-D reference, about a minute) runs only when named.
  * Run a subset by name: `npm run bench -- 1d images`. Nothing is written to disk: the table is printed.
  * Standalone timings with more detail, outside the table (`npx tsx bench/NAME.ts`): tridiagonal-solvers.ts,
- * twod-timings.ts, nonlinear2d-cost.ts.
+ * twod-timings.ts, nonlinear2d-cost.ts, sink-check-parts.ts (the sink check's studies grid by grid).
  *
  * The machine is shared (2 cores, other developers' builds and tests): the load average is printed
  * before and after, wall-time medians are the measured values, and the notes carry min/max and the

@@ -41,6 +41,9 @@ await build({
     // The map command's worker thread (src/map/worker.ts): dist/fincheck.js starts dist/map-worker.js beside it
     // (src/map/worker-start.ts).
     'map-worker': 'src/map/worker.ts',
+    // The fd-3d worker thread of a heat-sink check (src/fd/three-d/sink-lane-worker.ts), started as
+    // dist/sink-worker.js beside the chunk that runs the check (src/fd/three-d/sink-lanes.ts).
+    'sink-worker': 'src/fd/three-d/sink-lane-worker.ts',
   },
   outdir: 'dist',
   chunkNames: 'chunk-[hash]',

@@ -16,7 +16,7 @@ import {
   formatCheck,
   formatComparison,
   formatSinkCheck,
-  resolvedSinkStudy,
+  resolvedSinkReference,
   runCheck,
   runSinkCheck,
   type CaseOutcome,
@@ -67,7 +67,10 @@ async function checkOne(file: string, io: Io, settings: Settings, showWarnings: 
         `--reference ${settings.reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
       );
     const sink = any.case;
-    const report = await runSinkCheck(sink, (s) => resolvedSinkStudy(s, settings.tolerance), { tolerance: settings.tolerance, sample: settings.sample });
+    const report = await runSinkCheck(sink, resolvedSinkReference(settings.tolerance), {
+      tolerance: settings.tolerance,
+      sample: settings.sample,
+    });
     const exit = settings.strict && report.models.some((m) => m.verdict === 'unsafe') ? 1 : 0;
     const format = (u: DisplayUnits): string => formatSinkCheck(sink, report, u);
     return { outcome: { file, kind: 'heat-sink', report }, display: sink.display, format, json: { ...report, warnings: sink.warnings ?? [] }, exit };

@@ -8,7 +8,7 @@ import { existsSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { type Case, cleanFreeText, parseAnyCaseText, type DisplayUnits, type HeatSinkCase } from '../../src/case/index.js';
-import { resolvedSinkStudy, runSinkCheck, type CheckReport, type SinkCheckReport } from '../../src/compare/index.js';
+import { resolvedSinkReference, runSinkCheck, type CheckReport, type SinkCheckReport } from '../../src/compare/index.js';
 import { UsageError } from '../../src/errors.js';
 import {
   makeComparisonReport,
@@ -276,7 +276,7 @@ async function reportSeveral(files: readonly string[], s: SeveralSettings, io: I
         display ??= any.case.display;
         if (any.kind === 'heat-sink') {
           if (s.reference !== 'auto') throw new UsageError(`--reference ${s.reference}: a heat sink's reference is fd-3d; leave --reference at auto`);
-          const report = await runSinkCheck(any.case, (sink) => resolvedSinkStudy(sink, s.tolerance), { tolerance: s.tolerance });
+          const report = await runSinkCheck(any.case, resolvedSinkReference(s.tolerance), { tolerance: s.tolerance });
           cases.push({ file, kind: 'heat-sink', report });
         } else {
           requireReference(any.case, s.reference);

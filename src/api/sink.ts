@@ -8,7 +8,7 @@
  * standards and licensed practice).
  */
 import { parseHeatSinkObject, parseHeatSinkText, readCaseFile, type CaseWarning, type HeatSinkCase } from '../case/index.js';
-import { resolvedSinkStudy, runSinkCheck, sinkSolveReport, type SinkCheckReport, type SinkSolveReport } from '../compare/index.js';
+import { resolvedSinkReference, runSinkCheck, sinkSolveReport, type SinkCheckReport, type SinkSolveReport } from '../compare/index.js';
 import { studySink } from '../fd/index.js';
 import { toleranceOf } from './options.js';
 
@@ -41,7 +41,7 @@ export type SinkSolveResult = SinkSolveReport & { warnings: readonly CaseWarning
  */
 export async function checkSink(c: HeatSinkCase, options: SinkCheckCallOptions = {}): Promise<SinkCheckResult> {
   const tolerance = toleranceOf(options.tolerance);
-  const report = await runSinkCheck(c, (s) => resolvedSinkStudy(s, tolerance), { tolerance });
+  const report = await runSinkCheck(c, resolvedSinkReference(tolerance), { tolerance });
   return { ...report, warnings: c.warnings ?? [] };
 }
 

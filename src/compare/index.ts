@@ -27,7 +27,7 @@ export { formatSinkCheck, describeSink } from './format-sink-check.js';
 export { formatSinkSolve } from './format-sink-solve.js';
 export { sinkFinPrediction, type SinkFinPrediction } from './sink-fin-prediction.js';
 export { sinkSolveReport, type SinkSolveFin, type SinkSolveReport, type SinkSolveSource } from './sink-solve.js';
-export { resolvedSinkStudy, SINK_REFINEMENT_BUDGET } from './sink-resolve.js';
+export { resolvedSinkReference, resolvedSinkStudy, resolveSinkStudyOn, SINK_REFINEMENT_BUDGET, type SinkStudyAhead } from './sink-resolve.js';
 export { sheetReductionRow, SHEET_DRIFT_BUDGET } from './sink-sheet-row.js';
 export type { SinkAssumptionRow, SinkCheckReport, SinkFinReport, SinkModelRow, SinkReferenceResult, SinkSourceReport } from './sink-types.js';
 export { fractionWords, uncertaintyLines, type UncertaintyText } from './format-uncertainty.js';

@@ -9,17 +9,18 @@
  * can be tested with a hand-built study.
  */
 import type { HeatSinkCase } from '../case/index.js';
-import type { SinkStudy } from '../fd/index.js';
+import { sameSinkGrid, startSinkLanes, type SinkLanes, type SinkRiseSlopes, type SinkStudy } from '../fd/index.js';
 import { CAUTIONS } from './cautions.js';
 import { resolutionTarget } from './resolved-reference.js';
 import { sinkCautions, sinkFlags } from './sink-flags.js';
 import { exposedPlateArea, finCount } from './sink-geometry.js';
 import { sinkLedger } from './sink-ledger.js';
-import { sheetReductionRow } from './sink-sheet-row.js';
+import { SHEET_CELLS_STUDY, sheetReductionRow, sheetRowMeasures } from './sink-sheet-row.js';
 import { sinkShortcuts, type SinkShortcutResult, type SinkShortcuts } from './sink-models.js';
 import type { SinkCheckReport, SinkModelRow, SinkReferenceResult } from './sink-types.js';
 import { verdictOf } from './types.js';
-import { sinkRowsWithBand, sinkSensitivity } from './sink-sensitivity.js';
+import { hottestSource, sinkRowsWithBand, sinkSensitivity, sinkSlopeTask, sinkSlopeTaskOn, type SinkSlopeTask } from './sink-sensitivity.js';
+import type { SinkStudyAhead } from './sink-resolve.js';
 import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, type SampleWhen } from './uncertainty-band.js';
 
 export interface SinkCheckOptions {
@@ -38,7 +39,11 @@ export interface SinkCheckOptions {
   sampleSeed?: number;
 }
 
-export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase) => SinkStudy | Promise<SinkStudy>);
+/**
+ * The reference: a study, or a function that makes one, given the check's two lanes (src/fd sink-lanes.ts) to
+ * run its fd-3d work on (resolveSinkStudyOn uses them; a function may ignore them).
+ */
+export type SinkReferenceSource = SinkStudy | ((c: HeatSinkCase, lanes: SinkLanes, ahead: SinkStudyAhead) => SinkStudy | Promise<SinkStudy>);
 
 /** Runs the array shortcuts and judges them against the reference. */
 export async function runSinkCheck(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckReport> {
@@ -52,22 +57,55 @@ export interface SinkCheckRun {
   shortcuts: SinkShortcuts;
 }
 
+/**
+ * The fd-3d work runs on two lanes (src/fd sink-lanes.ts: this thread and a worker thread): the sheet row's cells
+ * study starts on the other lane first, since it needs nothing but the case; the reference (resolveSinkStudyOn)
+ * takes this one and, for a further study, both; the sensitivities run where the reference's second-finest grid
+ * is kept. The numbers are those of the same steps on one thread.
+ */
 export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckRun> {
-  const study = typeof reference === 'function' ? await reference(c) : reference;
-  const shortcuts = await sinkShortcuts(c);
-  const base = sinkCheckFrom(c, study, shortcuts, options);
-  const sheet = options.sheetDrift === false ? null : sheetReductionRow(c, study);
-  const withSheet = sheet === null ? base : { ...base, assumptions: [...base.assumptions, sheet] };
-  const sensitivity =
-    options.sensitivities === false
-      ? null
-      : sinkSensitivity(c, study, {
-          when: options.sample ?? 'auto',
-          n: options.sampleSize ?? DEFAULT_SAMPLE_SIZE,
-          seed: options.sampleSeed ?? DEFAULT_SAMPLE_SEED,
-        });
-  const report = sensitivity === null ? withSheet : { ...withSheet, models: sinkRowsWithBand(withSheet.models, sensitivity.uncertainty), ...sensitivity };
-  return { report, study, shortcuts };
+  const lanes = startSinkLanes(c);
+  try {
+    const cellsStudy =
+      options.sheetDrift !== false && sheetRowMeasures(c) ? lanes.run('there', { kind: 'study', options: SHEET_CELLS_STUDY, keep: false }) : null;
+    // Awaited below; until then a failure is held, not reported as unhandled while the reference is solved.
+    void cellsStudy?.catch(() => undefined);
+    // Sensitivities queued on a further study's kept grid while its finest grid is solved (used if that study is chosen).
+    const early: { task: SinkSlopeTask; slopes: Promise<SinkRiseSlopes> }[] = [];
+    const ahead: SinkStudyAhead = (kept, provisional) => {
+      if (options.sensitivities === false) return;
+      const task = sinkSlopeTaskOn(c, kept.spec, hottestSource(provisional));
+      const slopes = lanes.run(kept.lane, { kind: 'slopes', ...task });
+      void slopes.catch(() => undefined);
+      early.push({ task, slopes });
+    };
+    const study = typeof reference === 'function' ? await reference(c, lanes, ahead) : reference;
+    const shortcuts = await sinkShortcuts(c);
+    const base = sinkCheckFrom(c, study, shortcuts, options);
+    const sheet = options.sheetDrift === false ? null : sheetReductionRow(c, study, cellsStudy === null ? undefined : await cellsStudy);
+    const withSheet = sheet === null ? base : { ...base, assumptions: [...base.assumptions, sheet] };
+    const task = options.sensitivities === false ? null : sinkSlopeTask(c, study);
+    const queued = task === null ? undefined : early.find((e) => sameSinkGrid(e.task.spec, task.spec) && e.task.source === task.source);
+    const slopes = task === null ? undefined : await (queued?.slopes ?? lanes.run(lanes.holder(task.spec), { kind: 'slopes', ...task }));
+    const sensitivity =
+      options.sensitivities === false
+        ? null
+        : sinkSensitivity(
+            c,
+            study,
+            {
+              when: options.sample ?? 'auto',
+              n: options.sampleSize ?? DEFAULT_SAMPLE_SIZE,
+              seed: options.sampleSeed ?? DEFAULT_SAMPLE_SEED,
+            },
+            slopes,
+          );
+    const report =
+      sensitivity === null ? withSheet : { ...withSheet, models: sinkRowsWithBand(withSheet.models, sensitivity.uncertainty), ...sensitivity };
+    return { report, study, shortcuts };
+  } finally {
+    await lanes.close();
+  }
 }
 
 /** The reference's per-source rises and whether it is resolved enough to judge on. */

@@ -12,7 +12,17 @@
  * A study that is still not resolved: the one with the smallest GCI is returned, and the check gives `unresolved`.
  */
 import type { HeatSinkCase } from '../case/index.js';
-import { sinkStudyUnknowns, studySink, type SinkStudy, type SinkStudyOptions } from '../fd/index.js';
+import {
+  planSinkStudy,
+  sinkStudyOfPlan,
+  sinkStudyUnknowns,
+  studySink,
+  type SinkGridSpec,
+  type SinkLane,
+  type SinkLanes,
+  type SinkStudy,
+  type SinkStudyOptions,
+} from '../fd/index.js';
 import { resolutionTarget } from './resolved-reference.js';
 
 /** Finest-grid unknowns a refined study may reach. */
@@ -23,21 +33,73 @@ function worstGci(study: SinkStudy): number {
   return Math.max(...errors);
 }
 
+function candidates(c: HeatSinkCase, refinements: number): SinkStudyOptions[] {
+  const side = Math.min(c.plate.width, c.plate.length);
+  const all: SinkStudyOptions[] = [
+    { plateLayers: 4, finLayers: 8 },
+    { cellSize: side / 32, plateLayers: 4, finLayers: 8 },
+  ];
+  return all.slice(0, refinements);
+}
+
 /** `refinements`: how many of the further studies may be tried (2: both; a map point takes 1, the cheaper). */
 export function resolvedSinkStudy(c: HeatSinkCase, tolerance: number, refinements = 2): SinkStudy {
   const target = resolutionTarget(tolerance);
   let best = studySink(c);
   if (worstGci(best) <= target) return best;
-  const side = Math.min(c.plate.width, c.plate.length);
-  const candidates: SinkStudyOptions[] = [
-    { plateLayers: 4, finLayers: 8 },
-    { cellSize: side / 32, plateLayers: 4, finLayers: 8 },
-  ];
-  for (const options of candidates.slice(0, refinements)) {
+  for (const options of candidates(c, refinements)) {
     if (sinkStudyUnknowns(c, options) > SINK_REFINEMENT_BUDGET) break;
     const study = studySink(c, options);
     if (worstGci(study) <= worstGci(best)) best = study;
     if (worstGci(best) <= target) break;
   }
   return best;
+}
+
+/**
+ * Told, while a further study is being solved, which of its grids is kept where and the best study so far: the
+ * check queues its sensitivities on that grid behind it (they are used when that study is the one returned).
+ */
+export type SinkStudyAhead = (kept: { spec: SinkGridSpec; lane: SinkLane }, provisional: SinkStudy) => void;
+
+/**
+ * resolvedSinkStudy on a check's two lanes (src/fd sink-lanes.ts), the same studies and the same choice: the
+ * default study here, keeping its second-finest grid for the sensitivities; a further study with its finest grid
+ * here and its two coarser grids on the other lane (which meanwhile may be busy with the check's other work),
+ * keeping its second-finest grid there. The finest grid then starts CG from zero instead of from the coarser
+ * solution (a few more iterations; the same solution to the solver's tolerance).
+ */
+export async function resolveSinkStudyOn(
+  lanes: SinkLanes,
+  c: HeatSinkCase,
+  tolerance: number,
+  refinements = 2,
+  ahead?: SinkStudyAhead,
+): Promise<SinkStudy> {
+  const target = resolutionTarget(tolerance);
+  let best = await lanes.run('here', { kind: 'study', options: {}, keep: true });
+  if (worstGci(best) <= target) return best;
+  for (const options of candidates(c, refinements)) {
+    if (sinkStudyUnknowns(c, options) > SINK_REFINEMENT_BUDGET) break;
+    const plan = planSinkStudy(c, options);
+    const n = plan.specs.length;
+    const keep = n >= 2 ? n - 2 : null;
+    const coarser = lanes.run('there', { kind: 'grids', options, from: 0, to: n - 1, keep });
+    const kept = keep === null ? undefined : plan.specs[keep];
+    if (ahead !== undefined && kept !== undefined) ahead({ spec: kept, lane: 'there' }, best);
+    const finest = lanes.run('here', { kind: 'grids', options, from: n - 1, to: n, keep: null });
+    const [coarse, fine] = await Promise.all([coarser, finest]);
+    const study = sinkStudyOfPlan(plan, [...coarse, ...fine]);
+    if (worstGci(study) <= worstGci(best)) best = study;
+    if (worstGci(best) <= target) break;
+  }
+  return best;
+}
+
+/** The check's reference (sink-check.ts SinkReferenceSource): resolveSinkStudyOn on the check's lanes. */
+export function resolvedSinkReference(
+  tolerance: number,
+  refinements = 2,
+): (c: HeatSinkCase, lanes: SinkLanes, ahead: SinkStudyAhead) => Promise<SinkStudy> {
+  return (c, lanes, ahead) => resolveSinkStudyOn(lanes, c, tolerance, refinements, ahead);
 }

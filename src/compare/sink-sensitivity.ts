@@ -55,17 +55,22 @@ export interface SinkSlopeTask {
 export function sinkSlopeTask(c: HeatSinkCase, study: SinkStudy): SinkSlopeTask | null {
   const finest = study.finestGrid;
   if (finest === undefined) return null;
+  return sinkSlopeTaskOn(c, { ...finest, refine: Math.max(1, finest.refine / 2) }, hottestSource(study));
+}
+
+/** The slopes of `source`'s rise on the grid `spec`. */
+export function sinkSlopeTaskOn(c: HeatSinkCase, spec: SinkGridSpec, source: number): SinkSlopeTask {
+  const d = SINK_SENSITIVITY_STEP;
+  return { spec, source, variants: sinkNumericInputs(c).map((input) => ({ plus: input.scale(1 + d), minus: input.scale(1 - d) })), step: d };
+}
+
+/** The source of the largest mean rise (the first of equals). */
+export function hottestSource(study: SinkStudy): number {
   let hottest = 0;
   study.sources.forEach((s, j) => {
     if (s.meanRise_K > (study.sources[hottest]?.meanRise_K ?? -Infinity)) hottest = j;
   });
-  const d = SINK_SENSITIVITY_STEP;
-  return {
-    spec: { ...finest, refine: Math.max(1, finest.refine / 2) },
-    source: hottest,
-    variants: sinkNumericInputs(c).map((input) => ({ plus: input.scale(1 + d), minus: input.scale(1 - d) })),
-    step: d,
-  };
+  return hottest;
 }
 
 /**

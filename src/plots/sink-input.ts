@@ -4,7 +4,7 @@
  * fin) and the uniform-base shortcut's fin (compare/sink-fin-prediction.ts).
  */
 import type { HeatSinkCase } from '../case/index.js';
-import { resolvedSinkStudy, runSinkCheckWith, sinkFinPrediction, type SinkCheckReport, type SinkFinPrediction } from '../compare/index.js';
+import { resolvedSinkReference, runSinkCheckWith, sinkFinPrediction, type SinkCheckReport, type SinkFinPrediction } from '../compare/index.js';
 import type { SinkStudy } from '../fd/index.js';
 
 export const SINK_PLOT_KINDS = ['profile', 'plate', 'fin-heat', 'sensitivity'] as const;
@@ -19,7 +19,7 @@ export interface SinkPlotInput {
 
 /** `sensitivities`: also the check's sensitivities and band (fd-3d re-solves, seconds; default false: the charts need none). */
 export async function sinkPlotInput(c: HeatSinkCase, tolerance: number, sensitivities = false): Promise<SinkPlotInput> {
-  const run = await runSinkCheckWith(c, (s) => resolvedSinkStudy(s, tolerance), { tolerance, sensitivities });
+  const run = await runSinkCheckWith(c, resolvedSinkReference(tolerance), { tolerance, sensitivities });
   return { case: c, report: run.report, study: run.study, prediction: sinkFinPrediction(c, run.shortcuts) };
 }
 

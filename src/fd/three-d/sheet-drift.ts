@@ -17,14 +17,16 @@ export interface SheetReductionDrift {
 /**
  * `sheet`: a sheet study already made (e.g. a check's reference, perhaps on finer grids); its extrapolated rises
  * are compared with a cells study on `options`' grids. Without it both studies are made on the same grids.
+ * `cellsStudy`: that cells study when it was made already (studySink(c, { ...options, finRepresentation: 'cells' })).
  */
 export function sheetReductionDrift(
   c: HeatSinkCase,
   options: Omit<SinkStudyOptions, 'finRepresentation'> = {},
   sheetStudy?: SinkStudy,
+  cellsStudy?: SinkStudy,
 ): SheetReductionDrift {
   const sheet = sheetStudy ?? studySink(c, { ...options, finRepresentation: 'sheet' });
-  const cells = studySink(c, { ...options, finRepresentation: 'cells' });
+  const cells = cellsStudy ?? studySink(c, { ...options, finRepresentation: 'cells' });
   return {
     sources: sheet.sources.map((s, k) => {
       const other = cells.sources[k];

@@ -1,0 +1,136 @@
+/**
+ * Two lanes for the fd-3d work of one heat-sink check: this thread ('here') and one worker thread ('there'),
+ * so that independent studies of the check (the reference's, the sheet reduction's cells study, the grids of a
+ * finer study) use both cores of the machine. A task (sink-lane-tasks.ts) runs on the lane it is given to; the
+ * lanes remember which one keeps which grid, so that later work on that grid goes where its setup is. Tasks given
+ * to 'there' run in the order given. 'here' runs a task at once (this thread is busy meanwhile; the worker's
+ * results wait in its queue).
+ *
+ * The worker is the bundled dist/sink-worker.js (scripts/build.mjs), started beside the module that runs this
+ * one. Without it (the TypeScript sources under tests), on a single core, or when the worker fails or cannot take
+ * a task, 'there' runs on this thread: the same code gives the same numbers either way, and a task that failed on
+ * the worker is run again here, so that its error reaches the caller with its own type.
+ */
+import { existsSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { Worker } from 'node:worker_threads';
+import type { HeatSinkCase } from '../../case/index.js';
+import { sameSinkGrid } from './sink-grid-setup.js';
+import { SinkLaneState, type SinkLaneOutcome, type SinkLaneTask, type SinkLaneTaskOf, type SinkLaneResults } from './sink-lane-tasks.js';
+import type { SinkGridSpec } from './sink-study-types.js';
+
+export type SinkLane = 'here' | 'there';
+
+export interface SinkLanes {
+  run<K extends SinkLaneTask['kind']>(lane: SinkLane, task: SinkLaneTaskOf<K>): Promise<SinkLaneResults[K]>;
+  /** The lane that keeps this grid set up and solved; 'here' when none does. */
+  holder(spec: SinkGridSpec): SinkLane;
+  /** Whether 'there' is a thread of its own. */
+  readonly parallel: boolean;
+  /** Stops the worker (pending tasks on it are dropped). */
+  close(): Promise<void>;
+}
+
+/** A request to the worker and its answer (sink-lane-worker.ts). */
+export interface SinkLaneRequest {
+  id: number;
+  task: SinkLaneTask;
+}
+export type SinkLaneReply = { id: number; ok: true; outcome: SinkLaneOutcome<SinkLaneTask['kind']> } | { id: number; ok: false };
+
+type Outcome = SinkLaneOutcome<SinkLaneTask['kind']>;
+
+interface Pending {
+  task: SinkLaneTask;
+  resolve(outcome: Outcome): void;
+  reject(error: unknown): void;
+}
+
+/** `parallel: false`: both lanes on this thread. */
+export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } = {}): SinkLanes {
+  const here = new SinkLaneState(c);
+  const kept: { spec: SinkGridSpec; lane: SinkLane }[] = [];
+  const pending = new Map<number, Pending>();
+  let nextId = 0;
+  let worker: Worker | null = options.parallel === false || availableParallelism() < 2 ? null : startWorker(c);
+
+  const record = (outcome: Outcome, lane: SinkLane): Outcome => {
+    if (outcome.kept !== null) kept.push({ spec: outcome.kept, lane });
+    return outcome;
+  };
+  const runHere = (task: SinkLaneTask): Outcome => record(here.run(task), 'here');
+  /** Runs a task of the worker's here instead; its error (a domain error with its own type) goes to its caller. */
+  const settleHere = (p: Pending): void => {
+    let outcome: Outcome;
+    try {
+      outcome = runHere(p.task);
+    } catch (error) {
+      p.reject(error);
+      return;
+    }
+    p.resolve(outcome);
+  };
+  // Once the worker has failed or stopped, its pending tasks run here, in their order.
+  const fallBack = (): void => {
+    worker = null;
+    const tasks = [...pending.values()];
+    pending.clear();
+    tasks.forEach(settleHere);
+  };
+  if (worker !== null) {
+    worker.on('message', (reply: SinkLaneReply) => {
+      const p = pending.get(reply.id);
+      if (p === undefined) return;
+      pending.delete(reply.id);
+      if (reply.ok) p.resolve(record(reply.outcome, 'there'));
+      else settleHere(p);
+    });
+    worker.on('error', fallBack);
+    worker.on('exit', () => {
+      if (worker !== null) fallBack();
+    });
+  }
+
+  const runThere = (task: SinkLaneTask): Promise<Outcome> =>
+    new Promise<Outcome>((resolve, reject) => {
+      const p: Pending = { task, resolve, reject };
+      const w = worker;
+      if (w === null) {
+        settleHere(p);
+        return;
+      }
+      const id = nextId++;
+      pending.set(id, p);
+      try {
+        w.postMessage({ id, task } satisfies SinkLaneRequest);
+      } catch {
+        // A task the structured clone cannot copy runs here.
+        pending.delete(id);
+        settleHere(p);
+      }
+    });
+
+  return {
+    parallel: worker !== null,
+    async run<K extends SinkLaneTask['kind']>(lane: SinkLane, task: SinkLaneTaskOf<K>): Promise<SinkLaneResults[K]> {
+      const outcome = lane === 'here' ? runHere(task) : await runThere(task);
+      return outcome.result as SinkLaneResults[K];
+    },
+    holder(spec) {
+      return kept.find((k) => sameSinkGrid(k.spec, spec))?.lane ?? 'here';
+    },
+    async close() {
+      const w = worker;
+      worker = null;
+      pending.clear();
+      if (w !== null) await w.terminate();
+    },
+  };
+}
+
+function startWorker(c: HeatSinkCase): Worker | null {
+  const bundled = new URL('./sink-worker.js', import.meta.url);
+  if (bundled.protocol !== 'file:' || !existsSync(fileURLToPath(bundled))) return null;
+  return new Worker(bundled, { workerData: c });
+}
