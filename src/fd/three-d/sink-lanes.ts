@@ -26,8 +26,6 @@ export interface SinkLanes {
   run<K extends SinkLaneTask['kind']>(lane: SinkLane, task: SinkLaneTaskOf<K>): Promise<SinkLaneResults[K]>;
   /** The lane that keeps this grid set up and solved; 'here' when none does. */
   holder(spec: SinkGridSpec): SinkLane;
-  /** Whether 'there' is a thread of its own. */
-  readonly parallel: boolean;
   /** Stops the worker (pending tasks on it are dropped). */
   close(): Promise<void>;
 }
@@ -53,7 +51,9 @@ export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } 
   const kept: { spec: SinkGridSpec; lane: SinkLane }[] = [];
   const pending = new Map<number, Pending>();
   let nextId = 0;
-  let worker: Worker | null = options.parallel === false || availableParallelism() < 2 ? null : startWorker(c);
+  // Started with the first task given to 'there' (a check that gives none, e.g. a map point, starts no thread).
+  let allowed = options.parallel !== false && availableParallelism() >= 2;
+  let worker: Worker | null = null;
 
   const record = (outcome: Outcome, lane: SinkLane): Outcome => {
     if (outcome.kept !== null) kept.push({ spec: outcome.kept, lane });
@@ -78,24 +78,30 @@ export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } 
     pending.clear();
     tasks.forEach(settleHere);
   };
-  if (worker !== null) {
-    worker.on('message', (reply: SinkLaneReply) => {
+  const theWorker = (): Worker | null => {
+    if (worker !== null || !allowed) return worker;
+    allowed = false;
+    const w = startWorker(c);
+    if (w === null) return null;
+    w.on('message', (reply: SinkLaneReply) => {
       const p = pending.get(reply.id);
       if (p === undefined) return;
       pending.delete(reply.id);
       if (reply.ok) p.resolve(record(reply.outcome, 'there'));
       else settleHere(p);
     });
-    worker.on('error', fallBack);
-    worker.on('exit', () => {
+    w.on('error', fallBack);
+    w.on('exit', () => {
       if (worker !== null) fallBack();
     });
-  }
+    worker = w;
+    return w;
+  };
 
   const runThere = (task: SinkLaneTask): Promise<Outcome> =>
     new Promise<Outcome>((resolve, reject) => {
       const p: Pending = { task, resolve, reject };
-      const w = worker;
+      const w = theWorker();
       if (w === null) {
         settleHere(p);
         return;
@@ -112,7 +118,6 @@ export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } 
     });
 
   return {
-    parallel: worker !== null,
     async run<K extends SinkLaneTask['kind']>(lane: SinkLane, task: SinkLaneTaskOf<K>): Promise<SinkLaneResults[K]> {
       const outcome = lane === 'here' ? runHere(task) : await runThere(task);
       return outcome.result as SinkLaneResults[K];
@@ -123,6 +128,7 @@ export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } 
     async close() {
       const w = worker;
       worker = null;
+      allowed = false;
       pending.clear();
       if (w !== null) await w.terminate();
     },
