@@ -39,20 +39,47 @@ export interface RootTerms {
   owner: Int32Array;
 }
 
+/** A typed array that grows by doubling (assembly lists kept off the JS heap: no garbage-collector marking). */
+class Growing<T extends Float64Array | Int32Array | Uint8Array> {
+  private data: T;
+  private count = 0;
+
+  constructor(private readonly make: (size: number) => T) {
+    this.data = make(1024);
+  }
+
+  push(value: number): void {
+    if (this.count === this.data.length) {
+      const bigger = this.make(2 * this.count);
+      bigger.set(this.data);
+      this.data = bigger;
+    }
+    this.data[this.count++] = value;
+  }
+
+  /** The values pushed, in a typed array of their exact length. */
+  values(): T {
+    return this.data.slice(0, this.count) as T;
+  }
+}
+
+const f64 = (size: number) => new Float64Array(size);
+const i32 = (size: number) => new Int32Array(size);
+
 /** Growing lists of heat terms during assembly. */
 export class TermLists {
-  readonly lossNode: number[] = [];
-  readonly lossG: number[] = [];
-  readonly lossFixed: number[] = [];
-  readonly lossOwner: number[] = [];
-  readonly lossSurface: number[] = [];
-  readonly lossHalf: number[] = [];
-  readonly lossLaw: number[] = [];
-  readonly rootPlate: number[] = [];
-  readonly rootFin: number[] = [];
-  readonly rootGPlate: number[] = [];
-  readonly rootGFin: number[] = [];
-  readonly rootOwner: number[] = [];
+  private readonly lossNode = new Growing(i32);
+  private readonly lossG = new Growing(f64);
+  private readonly lossFixed = new Growing(f64);
+  private readonly lossOwner = new Growing(i32);
+  private readonly lossSurface = new Growing(f64);
+  private readonly lossHalf = new Growing(f64);
+  private readonly lossLaw = new Growing((size) => new Uint8Array(size));
+  private readonly rootPlate = new Growing(i32);
+  private readonly rootFin = new Growing(i32);
+  private readonly rootGPlate = new Growing(f64);
+  private readonly rootGFin = new Growing(f64);
+  private readonly rootOwner = new Growing(i32);
 
   constructor(
     private readonly builder: ConductanceBuilder,
@@ -85,6 +112,28 @@ export class TermLists {
     this.rootGPlate.push(gPlate);
     this.rootGFin.push(gFin);
     this.rootOwner.push(owner);
+  }
+
+  losses(): HeatTerms {
+    return {
+      node: this.lossNode.values(),
+      g: this.lossG.values(),
+      fixed: this.lossFixed.values(),
+      owner: this.lossOwner.values(),
+      surface: this.lossSurface.values(),
+      half: this.lossHalf.values(),
+      law: this.lossLaw.values(),
+    };
+  }
+
+  roots(): RootTerms {
+    return {
+      plate: this.rootPlate.values(),
+      fin: this.rootFin.values(),
+      gPlate: this.rootGPlate.values(),
+      gFin: this.rootGFin.values(),
+      owner: this.rootOwner.values(),
+    };
   }
 }
 
