@@ -66,8 +66,9 @@ export type SinkStudyAhead = (kept: { spec: SinkGridSpec; lane: SinkLane }, prov
  * resolvedSinkStudy on a check's two lanes (src/fd sink-lanes.ts), the same studies and the same choice: the
  * default study here, keeping its second-finest grid for the sensitivities; a further study with its finest grid
  * here and its two coarser grids on the other lane (which meanwhile may be busy with the check's other work),
- * keeping its second-finest grid there. The finest grid then starts CG from zero instead of from the coarser
- * solution (a few more iterations; the same solution to the solver's tolerance).
+ * keeping its second-finest grid there. The finest grid then starts CG from the default study's finest solution
+ * where it has twice its layers (src/fd sink-layer-start.ts), else from zero, instead of from the coarser solution
+ * (the same solution to the solver's tolerance).
  */
 export async function resolveSinkStudyOn(
   lanes: SinkLanes,
@@ -77,17 +78,18 @@ export async function resolveSinkStudyOn(
   ahead?: SinkStudyAhead,
 ): Promise<SinkStudy> {
   const target = resolutionTarget(tolerance);
-  let best = await lanes.run('here', { kind: 'study', options: {}, keep: true });
+  const first = await lanes.run('here', { kind: 'study', options: {}, keep: true });
+  let best = first;
   if (worstGci(best) <= target) return best;
   for (const options of candidates(c, refinements)) {
     if (sinkStudyUnknowns(c, options) > SINK_REFINEMENT_BUDGET) break;
     const plan = planSinkStudy(c, options);
     const n = plan.specs.length;
     const keep = n >= 2 ? n - 2 : null;
-    const coarser = lanes.run('there', { kind: 'grids', options, from: 0, to: n - 1, keep });
+    const coarser = lanes.run('there', { kind: 'grids', options, from: 0, to: n - 1, keep, startFrom: null });
     const kept = keep === null ? undefined : plan.specs[keep];
     if (ahead !== undefined && kept !== undefined) ahead({ spec: kept, lane: 'there' }, best);
-    const finest = lanes.run('here', { kind: 'grids', options, from: n - 1, to: n, keep: null });
+    const finest = lanes.run('here', { kind: 'grids', options, from: n - 1, to: n, keep: null, startFrom: first.finestGrid ?? null });
     const [coarse, fine] = await Promise.all([coarser, finest]);
     const study = sinkStudyOfPlan(plan, [...coarse, ...fine]);
     if (worstGci(study) <= worstGci(best)) best = study;

@@ -5,6 +5,8 @@
  * that the slopes on a study's second-finest grid start from the study's own system, multigrid and solution.
  */
 import type { HeatSinkCase } from '../../case/index.js';
+import type { SinkGrid } from '../../mesh/index.js';
+import { doubledLayersStart } from './sink-layer-start.js';
 import { sameSinkGrid, type SolvedSinkGrid } from './sink-grid-setup.js';
 import { sinkRiseSlopes, type SinkRiseSlopes, type SinkRiseVariants } from './sink-rise-slopes.js';
 import type { SinkGridResult } from './sink-solve.js';
@@ -12,10 +14,14 @@ import type { SinkGridSpec, SinkStudy } from './sink-study-types.js';
 import { planSinkStudy, solveSinkGrids, sinkStudyOfPlan, type SinkStudyOptions } from './study-sink.js';
 
 export type SinkLaneTask =
-  /** studySink(c, options); `keep`: keep its second-finest grid. */
+  /** studySink(c, options); `keep`: keep its second-finest grid set up and solved, and its finest grid's solution. */
   | { kind: 'study'; options: SinkStudyOptions; keep: boolean }
-  /** The grids [from, to) of the study with `options` (coarsest first), solved in order; `keep`: an index into them. */
-  | { kind: 'grids'; options: SinkStudyOptions; from: number; to: number; keep: number | null }
+  /**
+   * The grids [from, to) of the study with `options` (coarsest first), solved in order; `keep`: an index into them;
+   * `startFrom`: the finest grid of a study this lane solved with `keep`, whose solution starts the first grid
+   * when that grid has twice its layers (sink-layer-start.ts).
+   */
+  | { kind: 'grids'; options: SinkStudyOptions; from: number; to: number; keep: number | null; startFrom: SinkGridSpec | null }
   /** sinkRiseSlopes on `spec`, from the kept grid when this lane holds it. */
   | { kind: 'slopes'; spec: SinkGridSpec; source: number; variants: SinkRiseVariants[]; step: number };
 
@@ -35,6 +41,7 @@ export interface SinkLaneOutcome<K extends SinkLaneTask['kind']> {
 
 export class SinkLaneState {
   private readonly kept: SolvedSinkGrid[] = [];
+  private readonly solutions: { spec: SinkGridSpec; grid: SinkGrid; theta: Float64Array }[] = [];
 
   constructor(private readonly c: HeatSinkCase) {}
 
@@ -48,11 +55,18 @@ export class SinkLaneState {
         const plan = planSinkStudy(this.c, task.options);
         const keep = task.keep && plan.specs.length >= 2 ? plan.specs.length - 2 : null;
         const { results, kept } = solveSinkGrids(plan.problem, plan.specs, keep);
+        const finest = results[results.length - 1];
+        const spec = plan.specs[plan.specs.length - 1];
+        if (task.keep && finest !== undefined && spec !== undefined) this.solutions.push({ spec, grid: finest.grid, theta: finest.theta });
         return { result: sinkStudyOfPlan(plan, results), kept: this.keep(kept) };
       }
       case 'grids': {
         const plan = planSinkStudy(this.c, task.options);
-        const { results, kept } = solveSinkGrids(plan.problem, plan.specs.slice(task.from, task.to), task.keep);
+        const from = task.startFrom;
+        const solved = from === null ? undefined : this.solutions.find((k) => sameSinkGrid(k.spec, from));
+        const first =
+          solved === undefined ? undefined : (grid: SinkGrid, unknowns: number) => doubledLayersStart(solved.grid, solved.theta, grid, unknowns);
+        const { results, kept } = solveSinkGrids(plan.problem, plan.specs.slice(task.from, task.to), task.keep, first);
         return { result: results, kept: this.keep(kept) };
       }
       case 'slopes': {

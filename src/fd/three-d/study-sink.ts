@@ -10,7 +10,7 @@
  * has 4x as many cells in every direction.
  */
 import type { HeatSinkCase } from '../../case/index.js';
-import { buildSinkGrid } from '../../mesh/index.js';
+import { buildSinkGrid, type SinkGrid } from '../../mesh/index.js';
 import { richardsonGci } from '../study/refinement.js';
 import { sinkUnknowns, type FinRepresentation } from './sink-system.js';
 import { checkSinkMemory, DEFAULT_MEMORY_LIMIT } from './sink-memory.js';
@@ -84,12 +84,14 @@ export function planSinkStudy(c: HeatSinkCase, options: SinkStudyOptions = {}): 
 
 /**
  * Solves the grids `specs` (nested, coarsest first) in order; a linear sink's finer grids start from the coarser
- * solution prolonged. `keep`: the index of a grid to keep set up with its solution (null: none). Results coarsest first.
+ * solution prolonged. `keep`: the index of a grid to keep set up with its solution (null: none). `first`: a first
+ * guess for the first grid of a linear sink (null: none, CG starts from zero). Results coarsest first.
  */
 export function solveSinkGrids(
   problem: SinkProblem,
   specs: SinkGridSpec[],
   keep: number | null,
+  first?: (grid: SinkGrid, unknowns: number) => Float64Array | null,
 ): { results: SinkGridResult[]; kept: SolvedSinkGrid | null } {
   const results: SinkGridResult[] = [];
   let kept: SolvedSinkGrid | null = null;
@@ -102,7 +104,7 @@ export function solveSinkGrids(
     if (p !== null && previous !== null) {
       start = new Float64Array(system.matrix.n);
       prolongAddWith(p, previous.theta, start);
-    }
+    } else if (g === 0 && first !== undefined && !isNonlinearSink(problem)) start = first(setup.grid, system.matrix.n) ?? undefined;
     const result = solveSinkSystem(problem, system, start, setup.pre);
     results.push(result);
     if (g === keep) kept = { spec, setup, theta: result.theta, iterations: result.iterations };
