@@ -9,7 +9,7 @@
  * can be tested with a hand-built study.
  */
 import type { HeatSinkCase } from '../case/index.js';
-import { sameSinkGrid, startSinkLanes, type SinkLanes, type SinkRiseSlopes, type SinkStudy } from '../fd/index.js';
+import { sameSinkGrid, startSinkLanes, type SinkLanes, type SinkLanesOptions, type SinkRiseSlopes, type SinkStudy } from '../fd/index.js';
 import { CAUTIONS } from './cautions.js';
 import { resolutionTarget } from './resolved-reference.js';
 import { sinkCautions, sinkFlags } from './sink-flags.js';
@@ -37,6 +37,8 @@ export interface SinkCheckOptions {
   sample?: SampleWhen;
   sampleSize?: number;
   sampleSeed?: number;
+  /** How the fd-3d work is spread over threads (src/fd sink-lanes.ts; default: a worker thread when a core is free). */
+  lanes?: SinkLanesOptions;
 }
 
 /**
@@ -64,7 +66,7 @@ export interface SinkCheckRun {
  * is kept. The numbers are those of the same steps on one thread.
  */
 export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckRun> {
-  const lanes = startSinkLanes(c);
+  const lanes = startSinkLanes(c, options.lanes);
   try {
     const cellsStudy =
       options.sheetDrift !== false && sheetRowMeasures(c) ? lanes.run('there', { kind: 'study', options: SHEET_CELLS_STUDY, keep: false }) : null;

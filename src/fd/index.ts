@@ -61,7 +61,7 @@ export type { Fin1DOptions } from './one-d/linear-solve.js';
 export { solveOnMesh1D } from './one-d/linear-solve.js';
 export { studySink, sinkStudyUnknowns, planSinkStudy, sinkStudyOfPlan } from './three-d/study-sink.js';
 export type { SinkStudyOptions } from './three-d/study-sink.js';
-export { startSinkLanes, type SinkLane, type SinkLanes } from './three-d/sink-lanes.js';
+export { startSinkLanes, type SinkLane, type SinkLanes, type SinkLanesOptions } from './three-d/sink-lanes.js';
 export { sameSinkGrid } from './three-d/sink-grid-setup.js';
 export { sinkModelApplies } from './three-d/sink-problem.js';
 export { sheetReductionDrift } from './three-d/sheet-drift.js';

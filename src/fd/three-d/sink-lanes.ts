@@ -7,12 +7,12 @@
  * results wait in its queue).
  *
  * The worker is the bundled dist/sink-worker.js (scripts/build.mjs), started beside the module that runs this
- * one. Without it (the TypeScript sources under tests), on a single core, or when the worker fails or cannot take
- * a task, 'there' runs on this thread: the same code gives the same numbers either way, and a task that failed on
+ * one. Without it (the TypeScript sources under tests), on a single core or a busy machine (coreFree below), or when
+ * the worker fails or cannot take a task, 'there' runs on this thread: the same code gives the same numbers either way, and a task that failed on
  * the worker is run again here, so that its error reaches the caller with its own type.
  */
 import { existsSync } from 'node:fs';
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { HeatSinkCase } from '../../case/index.js';
@@ -45,14 +45,21 @@ interface Pending {
   reject(error: unknown): void;
 }
 
-/** `parallel: false`: both lanes on this thread. */
-export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } = {}): SinkLanes {
+export interface SinkLanesOptions {
+  /** 'auto' (default): a worker thread when a core is free (coreFree); 'never': both lanes here; 'always': a worker whenever one starts. */
+  parallel?: 'auto' | 'never' | 'always';
+  /** The worker's entry (default dist/sink-worker.js beside this module). */
+  worker?: URL;
+}
+
+export function startSinkLanes(c: HeatSinkCase, options: SinkLanesOptions = {}): SinkLanes {
   const here = new SinkLaneState(c);
   const kept: { spec: SinkGridSpec; lane: SinkLane }[] = [];
   const pending = new Map<number, Pending>();
   let nextId = 0;
   // Started with the first task given to 'there' (a check that gives none, e.g. a map point, starts no thread).
-  let allowed = options.parallel !== false && availableParallelism() >= 2;
+  const parallel = options.parallel ?? 'auto';
+  let allowed = parallel === 'always' || (parallel === 'auto' && coreFree());
   let worker: Worker | null = null;
 
   const record = (outcome: Outcome, lane: SinkLane): Outcome => {
@@ -81,7 +88,7 @@ export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } 
   const theWorker = (): Worker | null => {
     if (worker !== null || !allowed) return worker;
     allowed = false;
-    const w = startWorker(c);
+    const w = startWorker(c, options.worker ?? new URL('./sink-worker.js', import.meta.url));
     if (w === null) return null;
     w.on('message', (reply: SinkLaneReply) => {
       const p = pending.get(reply.id);
@@ -135,8 +142,17 @@ export function startSinkLanes(c: HeatSinkCase, options: { parallel?: boolean } 
   };
 }
 
-function startWorker(c: HeatSinkCase): Worker | null {
-  const bundled = new URL('./sink-worker.js', import.meta.url);
-  if (bundled.protocol !== 'file:' || !existsSync(fileURLToPath(bundled))) return null;
-  return new Worker(bundled, { workerData: c });
+/**
+ * Whether a second thread can be expected to run beside this one: two cores or more and a 1-minute load average
+ * below their number. On a busy machine (this one's scheduler shares the cores between sessions, not threads) a
+ * second thread gains no time and costs its own start and compilation (0.8 s more CPU on the bench sink at load 8-10).
+ */
+function coreFree(): boolean {
+  const cores = availableParallelism();
+  return cores >= 2 && (loadavg()[0] ?? 0) < cores;
+}
+
+function startWorker(c: HeatSinkCase, entry: URL): Worker | null {
+  if (entry.protocol !== 'file:' || !existsSync(fileURLToPath(entry))) return null;
+  return new Worker(entry, { workerData: c });
 }
