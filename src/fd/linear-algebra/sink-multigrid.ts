@@ -20,7 +20,7 @@ import { denseCholesky, type DenseFactor } from './dense-cholesky.js';
 import { galerkinCsr } from './galerkin-csr.js';
 import type { Prolongation } from './prolongation.js';
 import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
-import { stencilEntries, stencilFromCsr, stencilLines, stencilMultiply, stencilResidual, stencilToCsr, type SinkStencil } from './sink-stencil.js';
+import { stencilEntries, stencilFromCsr, stencilLines, stencilMultiply, stencilToCsr, type SinkStencil } from './sink-stencil.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
 import { stencilRelaxation } from './sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
@@ -49,7 +49,8 @@ interface Level {
   n: number;
   entries: number;
   smooth(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero: boolean): void;
-  residual(x: Float64Array, b: Float64Array, r: Float64Array): void;
+  /** x = 0, a forward sweep, then r = b − A x. */
+  presmooth(b: Float64Array, x: Float64Array, r: Float64Array): void;
   down: TransferApply | null;
   r: Float64Array;
   x: Float64Array;
@@ -62,7 +63,11 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
     n: a.n,
     entries: a.col.length,
     smooth: (b, x, direction) => relax.sweep(b, x, direction),
-    residual: (x, b, r) => void csrResidual(a, x, b, r),
+    presmooth(b, x, r) {
+      x.fill(0);
+      relax.sweep(b, x, 'forward');
+      csrResidual(a, x, b, r);
+    },
     down: null,
     r: new Float64Array(a.n),
     x: new Float64Array(a.n),
@@ -76,7 +81,7 @@ function stencilLevel(s: SinkStencil): Level {
     n: s.n,
     entries: stencilEntries(s),
     smooth: (b, x, direction, fromZero) => relax.sweep(b, x, direction, fromZero),
-    residual: (x, b, r) => stencilResidual(s, x, b, r),
+    presmooth: (b, x, r) => relax.forwardResidual(b, x, r),
     down: null,
     r: new Float64Array(s.n),
     x: new Float64Array(s.n),
@@ -146,9 +151,7 @@ export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid,
     }
     const next = levels[l + 1];
     const down = level.down as TransferApply;
-    x.fill(0);
-    level.smooth(b, x, 'forward', true);
-    level.residual(x, b, level.r);
+    level.presmooth(b, x, level.r);
     down.restrict(level.r, next.b);
     cycle(l + 1, next.b, next.x);
     down.prolongAdd(next.x, x);

@@ -180,59 +180,61 @@ export function stencilFromCsr(a: CsrMatrix, grid: SinkLevelGrid): SinkStencil {
   if (n !== levelUnknowns(grid)) throw new Error('stencilFromCsr: the level grid does not describe the matrix');
   const { nx, ny, nz } = grid;
   const plate = nx * ny * nz;
-  const sx = ny * nz;
   const line = new Float64Array(n);
   const gx = new Float64Array(plate);
   const gy = new Float64Array(plate);
   const row = new Float64Array(n - plate);
   const diagonal = new Float64Array(n);
-  const excess = new Float64Array(n);
+  const rowSums = new Float64Array(n);
   const extras: ExtraCouplings = { from: [], to: [], g: [] };
-  const { rowStart, col, val } = a;
-  const lines = stencilLines(grid);
-  let f = -1;
-  let finEnd = plate;
-  let layers = 1;
-  let offset = plate;
-  let finNodes = 0;
-  for (let r = 0; r < n; r++) {
-    while (r >= finEnd) {
-      f++;
-      offset = lines.finOffset[f];
-      layers = grid.fins[f].layers;
-      finNodes = grid.fins[f].rows * layers;
-      finEnd = offset + finNodes;
-    }
-    let sum = 0;
-    // Position of r in its block: plate (k, j) or fin (l, row start).
-    const k = r < plate ? r % nz : 0;
-    const j = r < plate ? Math.floor(r / nz) % ny : 0;
-    const l = r >= plate ? (r - offset) % layers : 0;
-    for (let e = rowStart[r]; e < rowStart[r + 1]; e++) {
-      const c = col[e];
-      const v = val[e];
-      sum += v;
-      if (c === r) {
-        diagonal[r] += v;
-        continue;
-      }
-      if (c < r) continue;
-      const d = c - r;
-      const g = -v;
-      if (r < plate && c < plate) {
-        if (d === 1 && k + 1 < nz) line[r] += g;
-        else if (d === nz && j + 1 < ny) gy[r] += g;
-        else if (d === sx) gx[r] += g;
-        else pushExtra(extras, r, c, g);
-      } else if (r >= plate && c < finEnd) {
-        if (d === 1 && l + 1 < layers) line[r] += g;
-        else if (d === layers && r - offset + layers < finNodes) row[r - plate] += g;
-        else pushExtra(extras, r, c, g);
-      } else pushExtra(extras, r, c, g);
-    }
-    excess[r] = a.excess !== undefined ? a.excess[r] : sum;
+  const target: CsrTarget = { a, line, gx, gy, row, diagonal, rowSums, extras, plate };
+  let r = 0;
+  for (let i = 0; i < nx; i++)
+    for (let j = 0; j < ny; j++) for (let k = 0; k < nz; k++) classifyRow(target, r++, k + 1 < nz, j + 1 < ny ? nz : -1, i + 1 < nx ? ny * nz : -1);
+  for (const f of grid.fins) {
+    for (let J = 0; J < f.rows; J++) for (let l = 0; l < f.layers; l++) classifyRow(target, r++, l + 1 < f.layers, J + 1 < f.rows ? f.layers : -1, -1);
   }
+  const excess = a.excess !== undefined ? Float64Array.from(a.excess) : rowSums;
   return buildStencil(grid, { line, gx, gy, row, excess, diagonal }, extras);
+}
+
+interface CsrTarget {
+  a: CsrMatrix;
+  line: Float64Array;
+  gx: Float64Array;
+  gy: Float64Array;
+  row: Float64Array;
+  diagonal: Float64Array;
+  rowSums: Float64Array;
+  extras: ExtraCouplings;
+  plate: number;
+}
+
+/**
+ * Row r's couplings to higher indices: to r + 1 along its line when `alongLine`, to r + second (plate: the next j;
+ * fin: the next row; −1 none) and to r + third (plate: the next i; −1 none); any other pair is an extra.
+ */
+function classifyRow(t: CsrTarget, r: number, alongLine: boolean, second: number, third: number): void {
+  const { rowStart, col, val } = t.a;
+  const plateRow = r < t.plate;
+  let sum = 0;
+  for (let e = rowStart[r]; e < rowStart[r + 1]; e++) {
+    const c = col[e];
+    const v = val[e];
+    sum += v;
+    if (c <= r) {
+      if (c === r) t.diagonal[r] += v;
+      continue;
+    }
+    const d = c - r;
+    if (d === 1 && alongLine) t.line[r] -= v;
+    else if (d === second) {
+      if (plateRow) t.gy[r] -= v;
+      else t.row[r - t.plate] -= v;
+    } else if (d === third) t.gx[r] -= v;
+    else pushExtra(t.extras, r, c, -v);
+  }
+  t.rowSums[r] = sum;
 }
 
 function pushExtra(extras: ExtraCouplings, from: number, to: number, g: number): void {
@@ -290,15 +292,27 @@ export function stencilMultiply(s: SinkStencil, x: Float64Array, zero: Float64Ar
 }
 
 /**
- * out = sign (b − A x). Interior planes of the plate and interior rows of a fin in one flat pass each: a neighbour
- * across a column's or a row's end has a zero coupling there (0 on a line's last member, on the last row, on the
- * last j of a plane), so only the blocks' first and last planes or rows need bounds.
+ * out = sign (b − A x): the plate's planes, each fin's nodes, then the extra couplings (residualPlanes,
+ * residualFin, residualExtras, also called plane by plane from a sweep, sink-stencil-relaxation.ts).
  */
 function differenceForm(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array): void {
-  const { grid, n, plate, line, gx, gy, row, excess, extraFrom, extraTo, extraG } = s;
+  residualPlanes(s, x, b, sign, out, 0, s.grid.nx);
+  for (let f = 0; f < s.grid.fins.length; f++) residualFin(s, x, b, sign, out, f);
+  residualExtras(s, x, sign, out);
+}
+
+/**
+ * out = sign (b − A x) on plate planes i0 .. i1 − 1 without the extra couplings. Interior planes in one flat
+ * pass: a neighbour across a column's or a plane's j end has a zero coupling there (0 on a line's last member,
+ * on the last j of a plane), so only the first and last planes need bounds.
+ */
+export function residualPlanes(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array, i0: number, i1: number): void {
+  const { grid, line, gx, gy, excess } = s;
   const { nx, ny, nz } = grid;
   const sx = ny * nz;
-  for (let p = sx; p < (nx - 1) * sx; p++) {
+  const from = Math.max(i0, 1) * sx;
+  const to = Math.min(i1, nx - 1) * sx;
+  for (let p = from; p < to; p++) {
     const xp = x[p];
     out[p] =
       sign *
@@ -311,49 +325,67 @@ function differenceForm(s: SinkStencil, x: Float64Array, b: Float64Array, sign: 
         gy[p] * (x[p + nz] - xp) +
         gy[p - nz] * (x[p - nz] - xp));
   }
-  const edgePlane = (i: number): void => {
-    const p0 = i * sx;
-    const p1 = p0 + sx;
-    for (let p = p0; p < p1; p++) {
+  if (i0 === 0) edgePlane(s, x, b, sign, out, 0);
+  if (nx > 1 && i1 === nx) edgePlane(s, x, b, sign, out, nx - 1);
+}
+
+function edgePlane(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array, i: number): void {
+  const { grid, n, line, gx, gy, excess } = s;
+  const { nx, ny, nz } = grid;
+  const sx = ny * nz;
+  const p0 = i * sx;
+  const p1 = p0 + sx;
+  for (let p = p0; p < p1; p++) {
+    const xp = x[p];
+    let v = b[p] - excess[p] * xp;
+    if (p > 0) v += line[p - 1] * (x[p - 1] - xp);
+    if (p + 1 < n) v += line[p] * (x[p + 1] - xp);
+    if (i > 0) v += gx[p - sx] * (x[p - sx] - xp);
+    if (i + 1 < nx) v += gx[p] * (x[p + sx] - xp);
+    if (p - nz >= p0) v += gy[p - nz] * (x[p - nz] - xp);
+    if (p + nz < p1) v += gy[p] * (x[p + nz] - xp);
+    out[p] = sign * v;
+  }
+}
+
+/** First node of each fin (after the plate). */
+function finOffset(s: SinkStencil, f: number): number {
+  let offset = s.plate;
+  for (let k = 0; k < f; k++) offset += s.grid.fins[k].rows * s.grid.fins[k].layers;
+  return offset;
+}
+
+/** out = sign (b − A x) on fin f's nodes without the extra couplings (interior rows flat, the first and last bounded). */
+export function residualFin(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array, f: number): void {
+  const { plate, line, row, excess } = s;
+  const fin = s.grid.fins[f];
+  const L = fin.layers;
+  const offset = finOffset(s, f);
+  const end = offset + fin.rows * L;
+  for (let p = offset + L; p < end - L; p++) {
+    const xp = x[p];
+    const q = p - plate;
+    out[p] =
+      sign * (b[p] - excess[p] * xp + line[p] * (x[p + 1] - xp) + line[p - 1] * (x[p - 1] - xp) + row[q] * (x[p + L] - xp) + row[q - L] * (x[p - L] - xp));
+  }
+  const edgeRow = (p0: number): void => {
+    for (let p = p0; p < p0 + L; p++) {
       const xp = x[p];
       let v = b[p] - excess[p] * xp;
-      if (p > 0) v += line[p - 1] * (x[p - 1] - xp);
-      if (p + 1 < n) v += line[p] * (x[p + 1] - xp);
-      if (i > 0) v += gx[p - sx] * (x[p - sx] - xp);
-      if (i + 1 < nx) v += gx[p] * (x[p + sx] - xp);
-      if (p - nz >= p0) v += gy[p - nz] * (x[p - nz] - xp);
-      if (p + nz < p1) v += gy[p] * (x[p + nz] - xp);
+      if (p > p0) v += line[p - 1] * (x[p - 1] - xp);
+      if (p + 1 < p0 + L) v += line[p] * (x[p + 1] - xp);
+      if (p - L >= offset) v += row[p - L - plate] * (x[p - L] - xp);
+      if (p + L < end) v += row[p - plate] * (x[p + L] - xp);
       out[p] = sign * v;
     }
   };
-  edgePlane(0);
-  if (nx > 1) edgePlane(nx - 1);
-  let offset = plate;
-  for (const f of grid.fins) {
-    const L = f.layers;
-    const end = offset + f.rows * L;
-    for (let p = offset + L; p < end - L; p++) {
-      const xp = x[p];
-      const q = p - plate;
-      out[p] =
-        sign *
-        (b[p] - excess[p] * xp + line[p] * (x[p + 1] - xp) + line[p - 1] * (x[p - 1] - xp) + row[q] * (x[p + L] - xp) + row[q - L] * (x[p - L] - xp));
-    }
-    const edgeRow = (p0: number): void => {
-      for (let p = p0; p < p0 + L; p++) {
-        const xp = x[p];
-        let v = b[p] - excess[p] * xp;
-        if (p > p0) v += line[p - 1] * (x[p - 1] - xp);
-        if (p + 1 < p0 + L) v += line[p] * (x[p + 1] - xp);
-        if (p - L >= offset) v += row[p - L - plate] * (x[p - L] - xp);
-        if (p + L < end) v += row[p - plate] * (x[p + L] - xp);
-        out[p] = sign * v;
-      }
-    };
-    edgeRow(offset);
-    if (f.rows > 1) edgeRow(end - L);
-    offset = end;
-  }
+  edgeRow(offset);
+  if (fin.rows > 1) edgeRow(end - L);
+}
+
+/** out += sign (the extra couplings' part of b − A x). */
+export function residualExtras(s: SinkStencil, x: Float64Array, sign: number, out: Float64Array): void {
+  const { extraFrom, extraTo, extraG } = s;
   for (let e = 0; e < extraFrom.length; e++) {
     const p = extraFrom[e];
     out[p] += sign * extraG[e] * (x[extraTo[e]] - x[p]);
