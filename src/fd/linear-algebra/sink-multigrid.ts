@@ -20,7 +20,7 @@ import { denseCholesky, type DenseFactor } from './dense-cholesky.js';
 import { galerkinCsr } from './galerkin-csr.js';
 import type { Prolongation } from './prolongation.js';
 import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
-import { stencilEntries, stencilFromCsr, stencilLines, stencilMultiply, stencilToCsr, type SinkStencil } from './sink-stencil.js';
+import { stencilEntries, stencilFromCsr, stencilLines, stencilMultiply, stencilResidual, stencilToCsr, type SinkStencil } from './sink-stencil.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
 import { stencilRelaxation } from './sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
@@ -35,10 +35,17 @@ export interface Preconditioner {
   /** Matrix entries per level, finest first (their sum over the first is the operator complexity). */
   readonly entries?: number[];
   /**
-   * out = A x by the preconditioner's own structured copy of A, when `a` is the matrix it was built from (the
-   * same product as csrMultiply, up to the order of the sums); null otherwise.
+   * A by the preconditioner's own structured copy, when `a` is the matrix it was built from (the same products as
+   * csrMultiply and csrResidual, up to the order of the sums); null otherwise.
    */
-  multiplier?(a: CsrMatrix): ((x: Float64Array, out: Float64Array) => void) | null;
+  operator?(a: CsrMatrix): StructuredOperator | null;
+}
+
+export interface StructuredOperator {
+  /** out = A x. */
+  multiply(x: Float64Array, out: Float64Array): void;
+  /** out = b − A x (difference form); returns |out|_1. */
+  residual(x: Float64Array, b: Float64Array, out: Float64Array): number;
 }
 
 /** Unknowns of the coarsest level, solved by dense Cholesky (~n^3/3 = 2e7 flops at 400). */
@@ -164,11 +171,19 @@ export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid,
     apply(r, z) {
       cycle(0, r, z);
     },
-    multiplier(m) {
+    operator(m) {
       if (m !== a || finest === null) return null;
       const s = finest;
       const zero = new Float64Array(s.n);
-      return (x, out) => stencilMultiply(s, x, zero, out);
+      return {
+        multiply: (x, out) => stencilMultiply(s, x, zero, out),
+        residual(x, b, out) {
+          stencilResidual(s, x, b, out);
+          let norm = 0;
+          for (let p = 0; p < out.length; p++) norm += Math.abs(out[p]);
+          return norm;
+        },
+      };
     },
   };
 }
