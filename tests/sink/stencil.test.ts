@@ -1,7 +1,7 @@
 /**
  * The structured kernels of the 3-D sink multigrid (src/fd/linear-algebra/sink-stencil*.ts, sink-transfer.ts)
  * against the CSR forms they replace, on small invented sinks (pins, plate fins as sheets, a bare plate):
- *   - the stencil read from the assembled matrix gives the same A x and b − A x as csrMultiply and csrResidual,
+ *   - the stencil read from the assembled matrix (and the one the assembly forms from its couplings) gives the same A x and b − A x as csrMultiply and csrResidual,
  *     and turns back into the same matrix;
  *   - the direction-by-direction transfers give the same P e and P^T r as coarsenSinkLevel's CSR prolongation;
  *   - the stencil coarse operator equals the CSR merge (sink-coarse-operator.ts) entry by entry, on every level;
@@ -98,8 +98,10 @@ describe.each(cases)('%s', (_, c) => {
     expect(relativeDifference(viaStencil, viaCsr)).toBeLessThan(1e-12);
   });
 
-  it('turns back into the assembled matrix', () => {
+  it('turns back into the assembled matrix, read from the matrix or from the assembly', () => {
     expect(matrixDifference(a, stencilToCsr(stencil))).toBeLessThan(1e-12);
+    expect(system.stencil).not.toBeNull();
+    expect(matrixDifference(a, stencilToCsr(system.stencil!))).toBeLessThan(1e-12);
   });
 
   it('relaxes as the CSR line Gauss-Seidel does', () => {

@@ -112,11 +112,18 @@ function linesAreStencilLines(lines: LineSet, grid: SinkLevelGrid): boolean {
 
 /**
  * `grid` describes the unknowns of the sheet layout (aggregation.ts); `fold`, when given, maps the assembled
- * unknowns onto it first (fins as cells). Every level in the sheet layout is held as its structured stencil
+ * unknowns onto it first (fins as cells); `assembled`, when given, is `a` as its stencil (sink-system.ts), read
+ * from the matrix otherwise. Every level in the sheet layout is held as its structured stencil
  * (sink-stencil.ts) with the direction-by-direction transfers of sink-transfer.ts; fins as cells keep their CSR
  * matrix and line relaxation on the finest level.
  */
-export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid, fold: Prolongation | null = null): Preconditioner {
+export function sinkMultigrid(
+  a: CsrMatrix,
+  lines: LineSet,
+  grid: SinkLevelGrid,
+  fold: Prolongation | null = null,
+  assembled: SinkStencil | null = null,
+): Preconditioner {
   const levels: Level[] = [];
   let stencil: SinkStencil | null = null;
   let finest: SinkStencil | null = null;
@@ -133,7 +140,7 @@ export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid,
       stencil = stencilFromCsr(a, grid);
     }
   } else {
-    stencil = stencilFromCsr(a, grid);
+    stencil = assembled ?? stencilFromCsr(a, grid);
     finest = stencil;
     levels.push(stencilLevel(stencil));
   }

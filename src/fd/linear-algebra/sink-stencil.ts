@@ -237,6 +237,58 @@ function classifyRow(t: CsrTarget, r: number, alongLine: boolean, second: number
   t.rowSums[r] = sum;
 }
 
+/**
+ * The stencil from an assembly's list of couplings (conductance g[c] between p[c] and q[c], ConductanceBuilder),
+ * its diagonal and its conductances to fixed temperatures, classified as stencilFromCsr classifies the matrix's
+ * entries, without a pass over the CSR matrix.
+ */
+export function stencilFromCouplings(
+  grid: SinkLevelGrid,
+  couplings: { p: Int32Array; q: Int32Array; g: Float64Array },
+  diagonal: Float64Array,
+  excess: Float64Array,
+): SinkStencil {
+  const n = levelUnknowns(grid);
+  const { nx, ny, nz } = grid;
+  const plate = nx * ny * nz;
+  const sx = ny * nz;
+  const line = new Float64Array(n);
+  const gx = new Float64Array(plate);
+  const gy = new Float64Array(plate);
+  const row = new Float64Array(n - plate);
+  const extras: ExtraCouplings = { from: [], to: [], g: [] };
+  const lines = stencilLines(grid);
+  const { p: ps, q: qs, g: gs } = couplings;
+  for (let c = 0; c < ps.length; c++) {
+    const r = Math.min(ps[c], qs[c]);
+    const t = Math.max(ps[c], qs[c]);
+    const g = gs[c];
+    const d = t - r;
+    if (t < plate) {
+      if (d === 1 && (r % nz) + 1 < nz) line[r] += g;
+      else if (d === nz && Math.floor(r / nz) % ny !== ny - 1) gy[r] += g;
+      else if (d === sx) gx[r] += g;
+      else pushExtra(extras, r, t, g);
+    } else if (r >= plate && (d === 1 || d === grid.fins[finIndex(lines, r)].layers)) {
+      const f = finIndex(lines, r);
+      const layers = grid.fins[f].layers;
+      const local = r - lines.finOffset[f];
+      const finNodes = grid.fins[f].rows * layers;
+      if (d === 1 && (local % layers) + 1 < layers) line[r] += g;
+      else if (d === layers && local + layers < finNodes) row[r - plate] += g;
+      else pushExtra(extras, r, t, g);
+    } else pushExtra(extras, r, t, g);
+  }
+  return buildStencil(grid, { line, gx, gy, row, excess: Float64Array.from(excess), diagonal: Float64Array.from(diagonal) }, extras);
+}
+
+/** The fin of fin node p (p at or after the plate). */
+function finIndex(lines: StencilLines, p: number): number {
+  let f = lines.finOffset.length - 1;
+  while (lines.finOffset[f] > p) f--;
+  return f;
+}
+
 function pushExtra(extras: ExtraCouplings, from: number, to: number, g: number): void {
   extras.from.push(from);
   extras.to.push(to);

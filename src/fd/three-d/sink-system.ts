@@ -23,6 +23,7 @@ import { ConductanceBuilder, type CsrMatrix } from '../linear-algebra/csr.js';
 import { PLATE_TOP, TermLists, UNDERSIDE, type HeatTerms, type RootTerms } from './heat-terms.js';
 import type { SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { LineSet } from '../linear-algebra/line-relaxation.js';
+import { stencilFromCouplings, type SinkStencil } from '../linear-algebra/sink-stencil.js';
 import type { Prolongation } from '../linear-algebra/prolongation.js';
 import { assembleFinCells } from './fin-cell-assembly.js';
 import { assembleFinSheets } from './fin-sheet-assembly.js';
@@ -36,6 +37,8 @@ export interface SinkSystem {
   grid: SinkGrid;
   representation: FinRepresentation;
   matrix: CsrMatrix;
+  /** The matrix as the multigrid's structured stencil (sink-stencil.ts); null for fins as cells. */
+  stencil: SinkStencil | null;
   rhs: Float64Array;
   lines: LineSet;
   /** The unknowns in the sheet layout, for the multigrid (fins as cells: after `fold`). */
@@ -70,7 +73,8 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
   const kp = problem.kPlate;
   const plateUnknowns = nx * ny * nz;
   const n = sinkUnknowns(grid, representation, problem.layout.finKind);
-  const builder = new ConductanceBuilder(n);
+  // At most three couplings an unknown to higher neighbours (plate; fins as cells), plus a root per plate column.
+  const builder = new ConductanceBuilder(n, 3 * n + nx * ny);
   const rhs = new Float64Array(n);
   const terms = new TermLists(builder, rhs);
   const cell = (i: number, j: number, k: number): number => (i * ny + j) * nz + k;
@@ -167,10 +171,13 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
       ds: (grid.s[grid.ns] - grid.s[0]) / Math.max(1, grid.ns),
     })),
   };
+  const matrix = builder.toCsr();
   return {
     grid,
     representation: finCells ? 'cells' : 'sheet',
-    matrix: builder.toCsr(),
+    matrix,
+    // Sheets: the unknowns are the multigrid's level grid, so the matrix is also held as its stencil.
+    stencil: finCells ? null : stencilFromCouplings(levelGrid, builder.couplingList(), builder.diagonal, matrix.excess as Float64Array),
     rhs,
     lines: { order, start: Int32Array.from(start) },
     levelGrid,
