@@ -240,26 +240,26 @@ function classifyRow(t: CsrTarget, r: number, alongLine: boolean, second: number
 /**
  * The stencil from an assembly's list of couplings (conductance g[c] between p[c] and q[c], ConductanceBuilder),
  * its diagonal and its conductances to fixed temperatures, classified as stencilFromCsr classifies the matrix's
- * entries, without a pass over the CSR matrix.
+ * entries, without a pass over the CSR matrix. `known`: the plate's couplings, already placed by the assembly
+ * (the list's first `from` entries).
  */
 export function stencilFromCouplings(
   grid: SinkLevelGrid,
   couplings: { p: Int32Array; q: Int32Array; g: Float64Array },
   diagonal: Float64Array,
   excess: Float64Array,
+  known: { line: Float64Array; gx: Float64Array; gy: Float64Array; from: number },
 ): SinkStencil {
   const n = levelUnknowns(grid);
   const { nx, ny, nz } = grid;
   const plate = nx * ny * nz;
   const sx = ny * nz;
-  const line = new Float64Array(n);
-  const gx = new Float64Array(plate);
-  const gy = new Float64Array(plate);
+  const { line, gx, gy } = known;
   const row = new Float64Array(n - plate);
   const extras: ExtraCouplings = { from: [], to: [], g: [] };
   const lines = stencilLines(grid);
   const { p: ps, q: qs, g: gs } = couplings;
-  for (let c = 0; c < ps.length; c++) {
+  for (let c = known.from; c < ps.length; c++) {
     const r = Math.min(ps[c], qs[c]);
     const t = Math.max(ps[c], qs[c]);
     const g = gs[c];
@@ -269,13 +269,12 @@ export function stencilFromCouplings(
       else if (d === nz && Math.floor(r / nz) % ny !== ny - 1) gy[r] += g;
       else if (d === sx) gx[r] += g;
       else pushExtra(extras, r, t, g);
-    } else if (r >= plate && (d === 1 || d === grid.fins[finIndex(lines, r)].layers)) {
+    } else if (r >= plate) {
       const f = finIndex(lines, r);
       const layers = grid.fins[f].layers;
       const local = r - lines.finOffset[f];
-      const finNodes = grid.fins[f].rows * layers;
       if (d === 1 && (local % layers) + 1 < layers) line[r] += g;
-      else if (d === layers && local + layers < finNodes) row[r - plate] += g;
+      else if (d === layers && local + layers < grid.fins[f].rows * layers) row[r - plate] += g;
       else pushExtra(extras, r, t, g);
     } else pushExtra(extras, r, t, g);
   }
