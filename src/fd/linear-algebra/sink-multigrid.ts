@@ -54,7 +54,8 @@ const COARSEST = 400;
 /** A level: its smoother, its residual and the transfers to the next coarser level (null on the coarsest). */
 interface Level {
   n: number;
-  entries: number;
+  /** Stored matrix entries (counted when asked). */
+  entries(): number;
   smooth(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero: boolean): void;
   /** x = 0, a forward sweep, then r = b − A x. */
   presmooth(b: Float64Array, x: Float64Array, r: Float64Array): void;
@@ -68,7 +69,7 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
   const relax = buildLineRelaxation(a, lines);
   return {
     n: a.n,
-    entries: a.col.length,
+    entries: () => a.col.length,
     smooth: (b, x, direction) => relax.sweep(b, x, direction),
     presmooth(b, x, r) {
       x.fill(0);
@@ -86,7 +87,7 @@ function stencilLevel(s: SinkStencil): Level {
   const relax = stencilRelaxation(s);
   return {
     n: s.n,
-    entries: stencilEntries(s),
+    entries: () => stencilEntries(s),
     smooth: (b, x, direction, fromZero) => relax.sweep(b, x, direction, fromZero),
     presmooth: (b, x, r) => relax.forwardResidual(b, x, r),
     down: null,
@@ -174,7 +175,9 @@ export function sinkMultigrid(
   return {
     method: `CG preconditioned by a multigrid V(1,1) cycle (z-line Gauss-Seidel, semi-coarsening of plate and fins with linear transfers, ${levels.length} levels)`,
     levels: levels.map((l) => l.n),
-    entries: levels.map((l) => l.entries),
+    get entries() {
+      return levels.map((l) => l.entries());
+    },
     apply(r, z) {
       cycle(0, r, z);
     },
