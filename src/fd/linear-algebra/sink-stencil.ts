@@ -413,25 +413,57 @@ export function residualFin(s: SinkStencil, x: Float64Array, b: Float64Array, si
   const L = fin.layers;
   const offset = finOffset(s, f);
   const end = offset + fin.rows * L;
-  for (let p = offset + L; p < end - L; p++) {
+  finInterior(x, b, sign, out, line, row, excess, plate, offset + L, end - L, L);
+  finEdgeRow(x, b, sign, out, line, row, excess, plate, offset, L, offset, end);
+  if (fin.rows > 1) finEdgeRow(x, b, sign, out, line, row, excess, plate, end - L, L, offset, end);
+}
+
+/** Rows with a row on either side, nodes from .. to − 1 (L layers a row). */
+function finInterior(
+  x: Float64Array,
+  b: Float64Array,
+  sign: number,
+  out: Float64Array,
+  line: Float64Array,
+  row: Float64Array,
+  excess: Float64Array,
+  plate: number,
+  from: number,
+  to: number,
+  L: number,
+): void {
+  for (let p = from; p < to; p++) {
     const xp = x[p];
     const q = p - plate;
     out[p] =
       sign * (b[p] - excess[p] * xp + line[p] * (x[p + 1] - xp) + line[p - 1] * (x[p - 1] - xp) + row[q] * (x[p + L] - xp) + row[q - L] * (x[p - L] - xp));
   }
-  const edgeRow = (p0: number): void => {
-    for (let p = p0; p < p0 + L; p++) {
-      const xp = x[p];
-      let v = b[p] - excess[p] * xp;
-      if (p > p0) v += line[p - 1] * (x[p - 1] - xp);
-      if (p + 1 < p0 + L) v += line[p] * (x[p + 1] - xp);
-      if (p - L >= offset) v += row[p - L - plate] * (x[p - L] - xp);
-      if (p + L < end) v += row[p - plate] * (x[p + L] - xp);
-      out[p] = sign * v;
-    }
-  };
-  edgeRow(offset);
-  if (fin.rows > 1) edgeRow(end - L);
+}
+
+/** The row from p0 of a fin occupying offset .. end − 1, each neighbour bounded. */
+function finEdgeRow(
+  x: Float64Array,
+  b: Float64Array,
+  sign: number,
+  out: Float64Array,
+  line: Float64Array,
+  row: Float64Array,
+  excess: Float64Array,
+  plate: number,
+  p0: number,
+  L: number,
+  offset: number,
+  end: number,
+): void {
+  for (let p = p0; p < p0 + L; p++) {
+    const xp = x[p];
+    let v = b[p] - excess[p] * xp;
+    if (p > p0) v += line[p - 1] * (x[p - 1] - xp);
+    if (p + 1 < p0 + L) v += line[p] * (x[p + 1] - xp);
+    if (p - L >= offset) v += row[p - L - plate] * (x[p - L] - xp);
+    if (p + L < end) v += row[p - plate] * (x[p + L] - xp);
+    out[p] = sign * v;
+  }
 }
 
 /** out += sign (the extra couplings' part of b − A x). */
