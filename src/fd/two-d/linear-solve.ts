@@ -119,8 +119,8 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   if (opts.solver !== undefined) field = opts.solver(shifted);
   else {
     const prepared = prepareSolver2D(shifted, opts.method ?? 'auto');
-    method = prepared.method;
     field = prepared.solve(shifted);
+    method = prepared.method;
     prepared.release();
   }
   for (let p = 0; p < field.length; p++) field[p] = (field[p] as number) + level;
