@@ -76,17 +76,16 @@ export function prepareSolver2D(system: System2D, method: SolverMethod | 'auto' 
 }
 
 /**
- * Fast diagonalisation when the matrix (short direction fastest) is a Kronecker sum, else null. Each solve is
- * refined against the true matrix; when refinement does not reach the target, `fallback` is prepared and solves
- * from then on.
+ * Fast diagonalisation when the matrix is a Kronecker sum, else null (grids with at least as many nodes along as
+ * across: a fixed base of a grid with more nodes across would have to be set apart by rows, which tensor-form.ts
+ * does not do). Each solve is refined against the true matrix; when refinement does not reach the round-off floor,
+ * `fallback` is prepared and solves from then on.
  */
 function prepareSeparableSolver(system: System2D, fallback: () => PreparedSolver2D): PreparedSolver2D | null {
-  const { nodesX: nx, nodesY: ny } = system.matrix;
-  const transpose = nx < ny;
-  const oriented = transpose ? transposeSystem(system) : system;
-  const form = tensorForm(oriented);
+  if (system.matrix.nodesX < system.matrix.nodesY) return null;
+  const form = tensorForm(system);
   if (form === null) return null;
-  const solver = prepareSeparable(form, oriented.matrix);
+  const solver = prepareSeparable(form, system.matrix);
   let handedOver: PreparedSolver2D | null = null;
   return {
     get method(): SolverMethod {
@@ -94,9 +93,8 @@ function prepareSeparableSolver(system: System2D, fallback: () => PreparedSolver
     },
     solve(s: System2D): Float64Array {
       if (handedOver !== null) return handedOver.solve(s);
-      const own = transpose ? transposeSystem(s, oriented.matrix) : s;
-      const x = solver.solve(own.rhs);
-      if (refineSolution((r, out) => solver.solve(r, out), own, x, SEPARABLE_REFINEMENTS, true)) return transpose ? transposeField(x, ny, nx) : x;
+      const x = solver.solve(s.rhs);
+      if (refineSolution((r, out) => solver.solve(r, out), s, x, SEPARABLE_REFINEMENTS, true)) return x;
       handedOver = fallback();
       return handedOver.solve(s);
     },
