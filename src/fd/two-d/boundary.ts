@@ -140,17 +140,19 @@ export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
       }
     });
   }
-  // Move the fixed columns to the right-hand side.
-  const moved = applyStencil9(matrix, fixedTheta, new Float64Array(n));
-  for (let p = 0; p < n; p++) {
-    if (fixed[p] === 0) rhs[p] = (rhs[p] as number) - (moved[p] as number);
-  }
   // Exact row sums after elimination: boundary conductances plus the couplings to fixed nodes.
   const excess = new Float64Array(n);
   for (const side of [terms.base, terms.face, terms.tip]) {
     side.nodes.forEach((p, e) => {
       excess[p] = (excess[p] as number) + (side.conductance[e] as number);
     });
+  }
+  // Without fixed nodes (a base behind a contact resistance, a tip not fixed) there is nothing to eliminate.
+  if (!fixed.includes(1)) return { matrix, rhs, excess };
+  // Move the fixed columns to the right-hand side.
+  const moved = applyStencil9(matrix, fixedTheta, new Float64Array(n));
+  for (let p = 0; p < n; p++) {
+    if (fixed[p] === 0) rhs[p] = (rhs[p] as number) - (moved[p] as number);
   }
   for (let p = 0; p < n; p++) {
     if (fixed[p] === 1) {
