@@ -211,7 +211,8 @@ function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D 
     surfaceWeightNext: weightNext,
     baseArea: geometry.baseArea,
     tipArea: geometry.tipArea,
-    tipPerimeter: geometry.perimeter(geometry.length),
+    // P(L): x[n-1] = L exactly (gridNodes), the last point evaluated.
+    tipPerimeter: p[4 * cells],
     length: geometry.length,
     cellSize,
   };
