@@ -201,15 +201,16 @@ one is bad (exit 2) or cannot be solved (exit 3), each problem is reported and n
         return;
       }
       const file = list.files[0] as string;
-      const any = await loadAnyCaseInput(file, io);
-      if (any.kind === 'heat-sink' && reference !== 'auto')
-        throw new UsageError(
-          `--reference ${reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
-        );
-      // Ctrl-C or SIGTERM while the report is computed: nothing is written (the write itself, synchronous, is never cut).
+      // Ctrl-C or SIGTERM from here on: nothing is written (the write itself, synchronous, is never cut); a wait on
+      // standard input ends at once.
       const interrupt = listenForInterrupt();
       let written: WrittenReport | WrittenSinkReport;
       try {
+        const any = await loadAnyCaseInput(file, io, interrupt);
+        if (any.kind === 'heat-sink' && reference !== 'auto')
+          throw new UsageError(
+            `--reference ${reference}: a heat sink's reference is fd-3d (the plate in 3-D, every fin conducting); leave --reference at auto`,
+          );
         const common = {
           caseFile: file === '-' ? 'stdin' : cleanFreeText(file, 200).text,
           outDir,
@@ -270,7 +271,7 @@ async function reportSeveral(files: readonly string[], s: SeveralSettings, io: I
   try {
     for (const file of files) {
       try {
-        const { text, fileName } = await readCaseInput(file, io);
+        const { text, fileName } = await readCaseInput(file, io, interrupt);
         const any = parseAnyCaseText(text, fileName);
         for (const w of any.case.warnings ?? []) io.err(`fincheck: warning: ${file}: ${w.path}: ${w.message}\n`);
         display ??= any.case.display;

@@ -24,6 +24,8 @@ export type { MapChartSpec, MapChartResult, MapLevel, MapPoint } from './map-cha
 
 export { svgToPng, chartBytes, fontFiles } from './render.js';
 export type { RenderOptions, ChartFormat } from './render.js';
+export { svgsToPngs } from './render-several.js';
+export type { RenderSeveralOptions } from './render-several.js';
 export { readPngDpi, setPngDpi } from './png-dpi.js';
 
 export { contourLines, placeLineLabel, polylineLength } from './contour.js';

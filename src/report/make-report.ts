@@ -6,7 +6,7 @@
 import type { Case } from '../case/index.js';
 import type { CheckOptions } from '../compare/index.js';
 import type { FinStudy2D } from '../fd/index.js';
-import { svgToPng } from '../images/index.js';
+import { svgsToPngs } from '../images/index.js';
 import { plotSvg, type ChartSize, type CheckPlotInput, checkPlotInput, fieldStudy, heatmapAvailability, type PlotKind } from '../plots/index.js';
 import { buildReport } from './build-report.js';
 import type { ReportDocument } from './document.js';
@@ -56,19 +56,20 @@ export async function makeReport(c: Case, opts: ReportOptions): Promise<ReportCo
   const kinds: PlotKind[] = [...(study ? (['profile', 'flux', 'heatmap'] as const) : (['profile', 'flux'] as const))];
   if (check.report.sensitivities !== undefined) kinds.push('sensitivity');
   const scale = opts.dpi / 96;
-  const figures: ReportFigure[] = [];
-  for (const kind of kinds) {
+  const svgs = kinds.map((kind) => {
     opts.checkpoint?.();
-    const svg = plotSvg(kind, { case: c, check, field: study }, REPORT_CHART, scale);
-    figures.push({
-      kind,
-      file: FIGURE_FILES[kind],
-      svg,
-      png: await svgToPng(svg, { dpi: opts.dpi }),
-      width_px: REPORT_CHART.width,
-      height_px: REPORT_CHART.height,
-    });
-  }
+    return plotSvg(kind, { case: c, check, field: study }, REPORT_CHART, scale);
+  });
+  // Two at a time on libuv's thread pool (both cores); the interrupt is checked before each render starts.
+  const pngs = await svgsToPngs(svgs, { dpi: opts.dpi, ...(opts.checkpoint ? { checkpoint: opts.checkpoint } : {}) });
+  const figures: ReportFigure[] = kinds.map((kind, k) => ({
+    kind,
+    file: FIGURE_FILES[kind],
+    svg: svgs[k] as string,
+    png: pngs[k] as Buffer,
+    width_px: REPORT_CHART.width,
+    height_px: REPORT_CHART.height,
+  }));
   const document = buildReport({
     check,
     field: study,

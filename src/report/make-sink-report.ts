@@ -5,7 +5,7 @@
  * in the case's display units (`c.display`). Nothing touches the disk here (write-files.ts does, all or nothing).
  */
 import { defaultDisplayUnits, type HeatSinkCase } from '../case/index.js';
-import { svgToPng } from '../images/index.js';
+import { svgsToPngs } from '../images/index.js';
 import { relativeError, sinkPlotAvailability, sinkPlotInput, sinkPlotSvg, type SinkPlotInput, type SinkPlotKind } from '../plots/index.js';
 import type { ReportDocument } from './document.js';
 import { reportHtml } from './html.js';
@@ -73,21 +73,22 @@ export async function makeSinkReport(c: HeatSinkCase, opts: SinkReportOptions): 
   const kinds = (['plate', 'fin-heat', 'profile', 'sensitivity'] as const).filter(
     (k) => sinkPlotAvailability({ case: c }, k).ok && (k !== 'sensitivity' || input.report.sensitivities !== undefined),
   );
-  const figures: SinkReportFigure[] = [];
-  for (const kind of kinds) {
+  const svgs = kinds.map((kind) => {
     opts.checkpoint?.();
-    const svg = sinkPlotSvg(kind, input, REPORT_CHART, opts.dpi / 96);
-    figures.push({
-      kind,
-      file: SINK_FIGURE_FILES[kind],
-      title: TITLES[kind],
-      caption: caption(kind, input),
-      svg,
-      png: await svgToPng(svg, { dpi: opts.dpi }),
-      width_px: REPORT_CHART.width,
-      height_px: REPORT_CHART.height,
-    });
-  }
+    return sinkPlotSvg(kind, input, REPORT_CHART, opts.dpi / 96);
+  });
+  // Two at a time on libuv's thread pool, as make-report.ts does.
+  const pngs = await svgsToPngs(svgs, { dpi: opts.dpi, ...(opts.checkpoint ? { checkpoint: opts.checkpoint } : {}) });
+  const figures: SinkReportFigure[] = kinds.map((kind, k) => ({
+    kind,
+    file: SINK_FIGURE_FILES[kind],
+    title: TITLES[kind],
+    caption: caption(kind, input),
+    svg: svgs[k] as string,
+    png: pngs[k] as Buffer,
+    width_px: REPORT_CHART.width,
+    height_px: REPORT_CHART.height,
+  }));
   const document = buildSinkReport({ input, caseFile: opts.caseFile, figures, version: opts.version, date: opts.date });
   opts.checkpoint?.();
   const pdf = opts.pdf === true ? await reportPdf(document, { date: opts.date, figureSvgs: new Map(figures.map((f) => [f.file, f.svg])) }) : null;

@@ -1,11 +1,11 @@
 /**
  * The built command (dist/fincheck.js, `npm run build`) as a real child process, interrupted by a real signal:
- * `report` by SIGINT and SIGTERM, `map` by SIGTERM in-process and on worker threads. Each ends with the shell's
+ * `report` by SIGINT and SIGTERM (one case, several, and while it waits on standard input), `map` by SIGTERM in-process and on worker threads. Each ends with the shell's
  * code for the signal (130 = 128 + SIGINT's 2, 143 = 128 + SIGTERM's 15), one line on stderr, nothing on stdout,
  * and no output folder, temporary file or half-written file left. Inputs are invented.
  */
-import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, readdirSync, writeFileSync } from 'node:fs';
+import { execFileSync, spawn } from 'node:child_process';
+import { closeSync, constants, existsSync, mkdtempSync, openSync, readdirSync, readFileSync, writeFileSync, writeSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -49,23 +49,78 @@ function temporaryFiles(dir: string): string[] {
   return existsSync(dir) ? readdirSync(dir, { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.tmp')) : [];
 }
 
+/**
+ * A named pipe holding the case: the command blocks reading it until `feed` writes the case, so the signal always
+ * lands while the report is still to be computed, however fast the machine (no race with the compute time).
+ */
+function pipedCase(name: string): { path: string; feed: () => void } {
+  const path = join(tmp, `${name}.yaml`);
+  execFileSync('mkfifo', [path]);
+  return {
+    path,
+    // Non-blocking: if the command never opened the pipe (it died early) this throws ENXIO instead of hanging.
+    feed: () => {
+      const fd = openSync(path, constants.O_WRONLY | constants.O_NONBLOCK);
+      writeSync(fd, readFileSync(pin));
+      closeSync(fd);
+    },
+  };
+}
+
+/** Starts the command, sends `signal` after `afterMs`, then runs `after` (feeds a piped case) and waits for the end. */
+async function interruptedThenFed(args: string[], signal: NodeJS.Signals, afterMs: number, after: () => void): Promise<Ended> {
+  const child = spawn(process.execPath, [bin, ...args], { stdio: ['ignore', 'pipe', 'pipe'] });
+  let stdout = '';
+  let stderr = '';
+  child.stdout.on('data', (d: Buffer) => (stdout += d.toString()));
+  child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+  const ended = new Promise<Ended>((resolve) => child.on('exit', (code, sig) => resolve({ code, signal: sig, stdout, stderr })));
+  await new Promise((resolve) => setTimeout(resolve, afterMs));
+  child.kill(signal);
+  if (child.exitCode === null && child.signalCode === null) after();
+  const r = await ended;
+  return { ...r, stdout, stderr };
+}
+
 describe('interrupted report', () => {
-  // --dpi 400 renders three 5000 x 3125 px charts, seconds each: the signal lands while the report is computed (the
-  // command stops at the next chart).
-  // 3 s lets the process load and start listening (a signal before that kills it by the default action: signal set,
-  // no exit code, and the first expectation fails with its message).
+  // The case comes through a named pipe written after the signal: the command reads it, computes the check and the
+  // charts, and stops at its next check (before the charts' renders or before the write). 3 s lets the process load
+  // and start listening (a signal before that kills it by the default action: signal set, no exit code, and the first
+  // expectation fails with its message).
   it.each([
-    ['SIGINT', 130],
-    ['SIGTERM', 143],
-  ] as const)('%s: exit %i, a message, no folder and no temporary file', async (signal, code) => {
-    const out = join(tmp, `report-${signal}`, 'nested');
-    const r = await interrupted(['report', pin, '--out', out, '--dpi', '400', '--date', '2026-01-01'], signal, 3000);
+    ['SIGINT', 130, 'one case'],
+    ['SIGTERM', 143, 'one case'],
+    ['SIGINT', 130, 'two cases compared'],
+  ] as const)('%s: exit %i, a message, no folder and no temporary file (%s)', async (signal, code, kind) => {
+    const out = join(tmp, `report-${signal}-${kind.length}`, 'nested');
+    const piped = pipedCase(`piped-${signal}-${kind.length}`);
+    const cases = kind === 'one case' ? [piped.path] : [pin, piped.path];
+    const r = await interruptedThenFed(['report', ...cases, '--out', out, '--date', '2026-01-01'], signal, 3000, piped.feed);
     expect(r.signal, `${signal} arrived before the report started listening for it`).toBeNull();
     expect(r.code).toBe(code);
     expect(r.stdout).toBe('');
     expect(r.stderr).toBe(`fincheck: interrupted (${signal}); no report files were written\n`);
-    expect(existsSync(join(tmp, `report-${signal}`))).toBe(false);
+    expect(existsSync(join(tmp, `report-${signal}-${kind.length}`))).toBe(false);
     expect(temporaryFiles(tmp)).toEqual([]);
+  });
+
+  it('SIGINT while waiting for the case on standard input: exit 130 at once, standard input released', async () => {
+    const out = join(tmp, 'report-stdin');
+    const child = spawn(process.execPath, [bin, 'report', '-', '--out', out], { stdio: ['pipe', 'pipe', 'pipe'] });
+    let stderr = '';
+    child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+    const ended = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+      child.on('exit', (code, sig) => resolve({ code, signal: sig })),
+    );
+    await new Promise((resolve) => setTimeout(resolve, 3000));
+    child.kill('SIGINT');
+    // Standard input stays open: the command must not wait for its end.
+    const r = await ended;
+    child.stdin.end();
+    expect(r.signal, 'SIGINT arrived before the report started listening for it').toBeNull();
+    expect(r.code).toBe(130);
+    expect(stderr).toBe('fincheck: interrupted (SIGINT); no report files were written\n');
+    expect(existsSync(out)).toBe(false);
   });
 });
 
