@@ -6,7 +6,7 @@
  * and prints one JSON line (ChildReport). The system is built before timing; each timed run is the
  * whole solve (factor or iterate, then solve), as the library calls it.
  */
-import { autoSolver2D } from '../src/fd/linear-algebra/auto-solver.js';
+import { prepareSolver2D } from '../src/fd/linear-algebra/auto-solver.js';
 import { bandedCholeskySolver } from '../src/fd/linear-algebra/banded-solve.js';
 import { generalBandLuSolve, stencilToCsr } from './generalBandLu.js';
 import { timeTask } from './measure.js';
@@ -49,7 +49,13 @@ async function main(): Promise<void> {
   switch (solverArg) {
     case 'auto':
       name = 'autoSolver2D';
-      solve = () => autoSolver2D(system);
+      solve = () => {
+        const prepared = prepareSolver2D(system);
+        const x = prepared.solve(system);
+        prepared.release();
+        name = `autoSolver2D (ran ${prepared.method})`;
+        return x;
+      };
       break;
     case 'banded':
       name = 'bandedCholeskySolver';

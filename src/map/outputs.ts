@@ -36,12 +36,18 @@ export async function renderMapFiles(
     { name: 'map.csv', data: mapCsv(run) },
     { name: 'map.json', data: mapJsonText(run, names) },
   ];
-  // Build each SVG on this thread, rasterise them all at once (resvg renders on the thread pool).
+  // Build each SVG on this thread and hand it to resvg (which rasterises on the thread pool) before building the
+  // next: the pause lets its render start, so the pool draws one chart while this thread builds the next one.
   const pending: Promise<OutputFile>[] = [];
   for (const chart of charts) {
     if (shouldStop()) throw new OutputsInterrupted('interrupted while drawing the charts');
     const svg = chart.svg();
-    pending.push(chartBytes(svg, format).then((data) => ({ name: chart.name, data })));
+    const file = chartBytes(svg, format).then((data) => ({ name: chart.name, data }));
+    // Handled here too, so that a render failing during the pause is not an unhandled rejection; Promise.all below
+    // still rejects with it.
+    file.catch(() => undefined);
+    pending.push(file);
+    await new Promise((resolve) => setImmediate(resolve));
   }
   files.push(...(await Promise.all(pending)));
   if (shouldStop()) throw new OutputsInterrupted('interrupted while drawing the charts');

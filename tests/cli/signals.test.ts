@@ -50,43 +50,53 @@ function temporaryFiles(dir: string): string[] {
 }
 
 /**
- * A named pipe holding the case: the command blocks reading it until `feed` writes the case, so the signal always
- * lands while the report is still to be computed, however fast the machine (no race with the compute time).
+ * A named pipe holding the case. The command listens for signals before it reads its cases, and blocks opening the
+ * pipe until a writer comes: once a non-blocking open for writing succeeds (Linux: a reader waiting in open() counts
+ * as a reader), the command is listening, so the signal needs no guess of the start-up time; the case is written
+ * after the signal, so the signal always lands before the report is computed, however fast the machine.
  */
-function pipedCase(name: string): { path: string; feed: () => void } {
+function pipedCase(name: string): string {
   const path = join(tmp, `${name}.yaml`);
   execFileSync('mkfifo', [path]);
-  return {
-    path,
-    // Non-blocking: if the command never opened the pipe (it died early) this throws ENXIO instead of hanging.
-    feed: () => {
-      const fd = openSync(path, constants.O_WRONLY | constants.O_NONBLOCK);
-      writeSync(fd, readFileSync(pin));
-      closeSync(fd);
-    },
-  };
+  return path;
 }
 
-/** Starts the command, sends `signal` after `afterMs`, then runs `after` (feeds a piped case) and waits for the end. */
-async function interruptedThenFed(args: string[], signal: NodeJS.Signals, afterMs: number, after: () => void): Promise<Ended> {
+/** A writer's descriptor on `fifo` once a reader has opened it (polled every 20 ms), or null after `limitMs`. */
+async function whenReaderOpens(fifo: string, limitMs: number): Promise<number | null> {
+  const until = Date.now() + limitMs;
+  while (Date.now() < until) {
+    try {
+      return openSync(fifo, constants.O_WRONLY | constants.O_NONBLOCK);
+    } catch (e) {
+      // ENXIO: nobody has the pipe open for reading yet; anything else is a real failure.
+      if ((e as NodeJS.ErrnoException).code !== 'ENXIO') throw e;
+    }
+    await new Promise((resolve) => setTimeout(resolve, 20));
+  }
+  return null;
+}
+
+/** Starts the command, waits until it opens the piped case, sends `signal`, writes the case and waits for the end. */
+async function interruptedWhileReading(args: string[], fifo: string, signal: NodeJS.Signals): Promise<Ended & { opened: boolean }> {
   const child = spawn(process.execPath, [bin, ...args], { stdio: ['ignore', 'pipe', 'pipe'] });
   let stdout = '';
   let stderr = '';
   child.stdout.on('data', (d: Buffer) => (stdout += d.toString()));
   child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
   const ended = new Promise<Ended>((resolve) => child.on('exit', (code, sig) => resolve({ code, signal: sig, stdout, stderr })));
-  await new Promise((resolve) => setTimeout(resolve, afterMs));
+  const fd = await whenReaderOpens(fifo, 30_000);
   child.kill(signal);
-  if (child.exitCode === null && child.signalCode === null) after();
+  if (fd !== null) {
+    writeSync(fd, readFileSync(pin));
+    closeSync(fd);
+  }
   const r = await ended;
-  return { ...r, stdout, stderr };
+  return { ...r, stdout, stderr, opened: fd !== null };
 }
 
 describe('interrupted report', () => {
   // The case comes through a named pipe written after the signal: the command reads it, computes the check and the
-  // charts, and stops at its next check (before the charts' renders or before the write). 3 s lets the process load
-  // and start listening (a signal before that kills it by the default action: signal set, no exit code, and the first
-  // expectation fails with its message).
+  // charts, and stops at its next check (before the charts' renders or before the write).
   it.each([
     ['SIGINT', 130, 'one case'],
     ['SIGTERM', 143, 'one case'],
@@ -94,8 +104,9 @@ describe('interrupted report', () => {
   ] as const)('%s: exit %i, a message, no folder and no temporary file (%s)', async (signal, code, kind) => {
     const out = join(tmp, `report-${signal}-${kind.length}`, 'nested');
     const piped = pipedCase(`piped-${signal}-${kind.length}`);
-    const cases = kind === 'one case' ? [piped.path] : [pin, piped.path];
-    const r = await interruptedThenFed(['report', ...cases, '--out', out, '--date', '2026-01-01'], signal, 3000, piped.feed);
+    const cases = kind === 'one case' ? [piped] : [pin, piped];
+    const r = await interruptedWhileReading(['report', ...cases, '--out', out, '--date', '2026-01-01'], piped, signal);
+    expect(r.opened, `the report did not open ${piped} within 30 s (stderr: ${r.stderr})`).toBe(true);
     expect(r.signal, `${signal} arrived before the report started listening for it`).toBeNull();
     expect(r.code).toBe(code);
     expect(r.stdout).toBe('');

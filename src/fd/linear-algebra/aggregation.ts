@@ -58,12 +58,17 @@ export function levelUnknowns(g: SinkLevelGrid): number {
 }
 
 export function coarsenSinkLevel(g: SinkLevelGrid): SinkCoarsening {
+  return coarsenWith(g, coarseningDirections(g));
+}
+
+/** The directions one coarsening step halves (the rule above). */
+export function coarseningDirections(g: SinkLevelGrid): SinkCoarsening['coarsened'] {
   const cx = g.nx > 1 && (g.dx <= SEMI * g.dy || g.ny === 1);
   const cy = g.ny > 1 && (g.dy <= SEMI * g.dx || g.nx === 1);
   const cz = g.nz > 1 && (2 * g.dz <= Math.min(cx ? g.dx : Infinity, cy ? g.dy : Infinity) || (!cx && !cy));
   const rows = g.fins.map((f) => f.rows > 1 && (f.dy <= SEMI * f.ds || f.layers === 1));
   const layers = g.fins.map((f) => f.layers > 1 && (f.ds <= SEMI * f.dy || f.rows === 1));
-  return coarsenWith(g, { x: cx, y: cy, z: cz, rows, layers });
+  return { x: cx, y: cy, z: cz, rows, layers };
 }
 
 /**
@@ -83,26 +88,30 @@ export function nestedProlongation(coarse: SinkLevelGrid, fine: SinkLevelGrid): 
   return coarsenWith(fine, { x, y, z, rows: rows.map((r) => r === true), layers: layers.map((l) => l === true) }).p;
 }
 
-function coarsenWith(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): SinkCoarsening {
+/** The coarse level of one step in the given directions (pairs of cells; an odd last one alone). */
+export function coarseLevelGrid(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): SinkLevelGrid {
   const { x: cx, y: cy, z: cz, rows: rowsCoarsened, layers: layersCoarsened } = flags;
-  const nxc = cx ? Math.ceil(g.nx / 2) : g.nx;
-  const nyc = cy ? Math.ceil(g.ny / 2) : g.ny;
-  const nzc = cz ? Math.ceil(g.nz / 2) : g.nz;
-  const coarseFins = g.fins.map((f, index) => ({
-    rows: rowsCoarsened[index] ? Math.ceil(f.rows / 2) : f.rows,
-    layers: layersCoarsened[index] ? Math.ceil(f.layers / 2) : f.layers,
-    dy: rowsCoarsened[index] ? 2 * f.dy : f.dy,
-    ds: layersCoarsened[index] ? 2 * f.ds : f.ds,
-  }));
-  const coarse: SinkLevelGrid = {
-    nx: nxc,
-    ny: nyc,
-    nz: nzc,
+  return {
+    nx: cx ? Math.ceil(g.nx / 2) : g.nx,
+    ny: cy ? Math.ceil(g.ny / 2) : g.ny,
+    nz: cz ? Math.ceil(g.nz / 2) : g.nz,
     dx: cx ? 2 * g.dx : g.dx,
     dy: cy ? 2 * g.dy : g.dy,
     dz: cz ? 2 * g.dz : g.dz,
-    fins: coarseFins,
+    fins: g.fins.map((f, index) => ({
+      rows: rowsCoarsened[index] ? Math.ceil(f.rows / 2) : f.rows,
+      layers: layersCoarsened[index] ? Math.ceil(f.layers / 2) : f.layers,
+      dy: rowsCoarsened[index] ? 2 * f.dy : f.dy,
+      ds: layersCoarsened[index] ? 2 * f.ds : f.ds,
+    })),
   };
+}
+
+function coarsenWith(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): SinkCoarsening {
+  const { x: cx, y: cy, z: cz, rows: rowsCoarsened, layers: layersCoarsened } = flags;
+  const coarse = coarseLevelGrid(g, flags);
+  const { nx: nxc, ny: nyc, nz: nzc } = coarse;
+  const coarseFins = coarse.fins;
   const n = levelUnknowns(g);
   const rowStart = new Int32Array(n + 1);
   const aggregate = new Int32Array(n);
@@ -178,7 +187,7 @@ function coarsenWith(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): Sink
 }
 
 /** For each fine index: its own coarse index, the neighbouring one, and the own one's weight (1: no neighbour). */
-function transfer(n: number, nc: number, coarsened: boolean): { own: Int32Array; other: Int32Array; w: Float64Array } {
+export function transfer(n: number, nc: number, coarsened: boolean): { own: Int32Array; other: Int32Array; w: Float64Array } {
   const own = new Int32Array(n);
   const other = new Int32Array(n);
   const w = new Float64Array(n).fill(1);

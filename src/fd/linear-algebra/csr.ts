@@ -25,14 +25,22 @@ export interface CsrMatrix {
 export class ConductanceBuilder {
   readonly diagonal: Float64Array;
   private readonly excess: Float64Array;
-  private p = new Int32Array(1024);
-  private q = new Int32Array(1024);
-  private g = new Float64Array(1024);
+  private p: Int32Array;
+  private q: Int32Array;
+  private g: Float64Array;
   private count = 0;
 
-  constructor(readonly n: number) {
+  /** `capacity`: the couplings expected (the lists grow past it by doubling). */
+  constructor(
+    readonly n: number,
+    capacity = 1024,
+  ) {
     this.diagonal = new Float64Array(n);
     this.excess = new Float64Array(n);
+    const size = Math.max(16, capacity);
+    this.p = new Int32Array(size);
+    this.q = new Int32Array(size);
+    this.g = new Float64Array(size);
   }
 
   /** A conductance g (> 0) between unknowns p and q. */
@@ -54,6 +62,11 @@ export class ConductanceBuilder {
 
   get couplings(): number {
     return this.count;
+  }
+
+  /** The couplings added so far (views, in the order added): conductance g[c] between p[c] and q[c]. */
+  couplingList(): { p: Int32Array; q: Int32Array; g: Float64Array } {
+    return { p: this.p.subarray(0, this.count), q: this.q.subarray(0, this.count), g: this.g.subarray(0, this.count) };
   }
 
   toCsr(): CsrMatrix {

@@ -14,13 +14,16 @@
  * definite, as CG needs (Tatebe 1993, "The multigrid preconditioned
  * conjugate gradient method", NASA CP-3224 [from memory]).
  */
-import { coarsenSinkLevel, levelLines, levelUnknowns, prolongAddWith, restrictWith, type SinkLevelGrid } from './aggregation.js';
+import { coarseningDirections, levelUnknowns, prolongAddWith, restrictWith, type SinkLevelGrid } from './aggregation.js';
 import { csrResidual, type CsrMatrix } from './csr.js';
 import { denseCholesky, type DenseFactor } from './dense-cholesky.js';
 import { galerkinCsr } from './galerkin-csr.js';
-import { sinkCoarseOperator } from './sink-coarse-operator.js';
 import type { Prolongation } from './prolongation.js';
-import { buildLineRelaxation, type LineRelaxation, type LineSet } from './line-relaxation.js';
+import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
+import { stencilEntries, stencilFromCsr, stencilLines, stencilMultiply, stencilResidual, stencilToCsr, type SinkStencil } from './sink-stencil.js';
+import { stencilCoarseOperator } from './sink-stencil-coarse.js';
+import { stencilRelaxation } from './sink-stencil-relaxation.js';
+import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
 
 export interface Preconditioner {
   /** z = M^-1 r (r unchanged). */
@@ -31,46 +34,129 @@ export interface Preconditioner {
   readonly levels: number[];
   /** Matrix entries per level, finest first (their sum over the first is the operator complexity). */
   readonly entries?: number[];
+  /**
+   * A by the preconditioner's own structured copy, when `a` is the matrix it was built from (the same products as
+   * csrMultiply and csrResidual, up to the order of the sums); null otherwise.
+   */
+  operator?(a: CsrMatrix): StructuredOperator | null;
+}
+
+export interface StructuredOperator {
+  /** out = A x. */
+  multiply(x: Float64Array, out: Float64Array): void;
+  /** out = b − A x (difference form); returns |out|_1. */
+  residual(x: Float64Array, b: Float64Array, out: Float64Array): number;
 }
 
 /** Unknowns of the coarsest level, solved by dense Cholesky (~n^3/3 = 2e7 flops at 400). */
 const COARSEST = 400;
 
+/** A level: its smoother, its residual and the transfers to the next coarser level (null on the coarsest). */
 interface Level {
-  a: CsrMatrix;
-  relax: LineRelaxation;
-  p: Prolongation | null;
+  n: number;
+  /** Stored matrix entries (counted when asked). */
+  entries(): number;
+  smooth(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero: boolean): void;
+  /** x = 0, a forward sweep, then r = b − A x. */
+  presmooth(b: Float64Array, x: Float64Array, r: Float64Array): void;
+  down: TransferApply | null;
   r: Float64Array;
   x: Float64Array;
   b: Float64Array;
 }
 
+function csrLevel(a: CsrMatrix, lines: LineSet): Level {
+  const relax = buildLineRelaxation(a, lines);
+  return {
+    n: a.n,
+    entries: () => a.col.length,
+    smooth: (b, x, direction) => relax.sweep(b, x, direction),
+    presmooth(b, x, r) {
+      x.fill(0);
+      relax.sweep(b, x, 'forward');
+      csrResidual(a, x, b, r);
+    },
+    down: null,
+    r: new Float64Array(a.n),
+    x: new Float64Array(a.n),
+    b: new Float64Array(a.n),
+  };
+}
+
+function stencilLevel(s: SinkStencil): Level {
+  const relax = stencilRelaxation(s);
+  return {
+    n: s.n,
+    entries: () => stencilEntries(s),
+    smooth: (b, x, direction, fromZero) => relax.sweep(b, x, direction, fromZero),
+    presmooth: (b, x, r) => relax.forwardResidual(b, x, r),
+    down: null,
+    r: new Float64Array(s.n),
+    x: new Float64Array(s.n),
+    b: new Float64Array(s.n),
+  };
+}
+
+/** The CSR fold (fins as cells onto sheets) as a level's transfers. */
+function foldTransfer(p: Prolongation): TransferApply {
+  return { restrict: (r, rc) => restrictWith(p, r, rc), prolongAdd: (e, x) => prolongAddWith(p, e, x) };
+}
+
+/** Whether the assembled lines are the level grid's (sheets: plate columns, then fin rows, in index order). */
+function linesAreStencilLines(lines: LineSet, grid: SinkLevelGrid): boolean {
+  const own = stencilLines(grid);
+  if (lines.start.length !== own.first.length + 1) return false;
+  for (let l = 0; l < own.first.length; l++) if (lines.start[l] !== own.first[l]) return false;
+  for (let q = 0; q < lines.order.length; q++) if (lines.order[q] !== q) return false;
+  return true;
+}
+
 /**
  * `grid` describes the unknowns of the sheet layout (aggregation.ts); `fold`, when given, maps the assembled
- * unknowns onto it first (fins as cells).
+ * unknowns onto it first (fins as cells); `assembled`, when given, is `a` as its stencil (sink-system.ts), read
+ * from the matrix otherwise. Every level in the sheet layout is held as its structured stencil
+ * (sink-stencil.ts) with the direction-by-direction transfers of sink-transfer.ts; fins as cells keep their CSR
+ * matrix and line relaxation on the finest level.
  */
-export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid, fold: Prolongation | null = null): Preconditioner {
+export function sinkMultigrid(
+  a: CsrMatrix,
+  lines: LineSet,
+  grid: SinkLevelGrid,
+  fold: Prolongation | null = null,
+  assembled: SinkStencil | null = null,
+): Preconditioner {
   const levels: Level[] = [];
-  const push = (m: CsrMatrix, l: LineSet) => {
-    const level: Level = { a: m, relax: buildLineRelaxation(m, l), p: null, r: new Float64Array(m.n), x: new Float64Array(m.n), b: new Float64Array(m.n) };
+  let stencil: SinkStencil | null = null;
+  let finest: SinkStencil | null = null;
+  if (fold !== null || a.n <= COARSEST || !linesAreStencilLines(lines, grid)) {
+    const level = csrLevel(a, lines);
     levels.push(level);
-    return level;
-  };
-  let current = push(a, lines);
-  if (fold !== null) {
-    current.p = fold;
-    current = push(galerkinCsr(a, fold), levelLines(grid));
+    if (fold !== null) {
+      level.down = foldTransfer(fold);
+      stencil = stencilFromCsr(galerkinCsr(a, fold), grid);
+      levels.push(stencilLevel(stencil));
+    } else if (a.n > COARSEST) {
+      // Lines other than the grid's: the finest level in CSR, every coarser one a stencil.
+      if (levelUnknowns(grid) !== a.n) throw new Error('sinkMultigrid: the level grid does not describe the system');
+      stencil = stencilFromCsr(a, grid);
+    }
+  } else {
+    stencil = assembled ?? stencilFromCsr(a, grid);
+    finest = stencil;
+    levels.push(stencilLevel(stencil));
   }
-  if (current.a.n !== levelUnknowns(grid)) throw new Error('sinkMultigrid: the level grid does not describe the system');
+  if (stencil !== null && stencil.n !== levelUnknowns(grid)) throw new Error('sinkMultigrid: the level grid does not describe the system');
   let g = grid;
-  while (current.a.n > COARSEST) {
-    const step = coarsenSinkLevel(g);
-    if (step.p.coarse === current.a.n) break;
-    current.p = step.p;
-    current = push(sinkCoarseOperator(current.a, g, step), levelLines(step.coarse));
-    g = step.coarse;
+  while (stencil !== null && stencil.n > COARSEST) {
+    const t = sinkTransfer(g, coarseningDirections(g));
+    const coarse = stencilCoarseOperator(stencil, t);
+    if (coarse.n === stencil.n) break;
+    levels[levels.length - 1].down = transferApply(t);
+    stencil = coarse;
+    levels.push(stencilLevel(stencil));
+    g = t.coarse;
   }
-  const direct: DenseFactor = denseCholesky(current.a);
+  const direct: DenseFactor = denseCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
 
   const cycle = (l: number, b: Float64Array, x: Float64Array): void => {
     const level = levels[l];
@@ -79,21 +165,35 @@ export function sinkMultigrid(a: CsrMatrix, lines: LineSet, grid: SinkLevelGrid,
       return;
     }
     const next = levels[l + 1];
-    const p = level.p as Prolongation;
-    x.fill(0);
-    level.relax.sweep(b, x, 'forward');
-    csrResidual(level.a, x, b, level.r);
-    restrictWith(p, level.r, next.b);
+    const down = level.down as TransferApply;
+    level.presmooth(b, x, level.r);
+    down.restrict(level.r, next.b);
     cycle(l + 1, next.b, next.x);
-    prolongAddWith(p, next.x, x);
-    level.relax.sweep(b, x, 'backward');
+    down.prolongAdd(next.x, x);
+    level.smooth(b, x, 'backward', false);
   };
   return {
     method: `CG preconditioned by a multigrid V(1,1) cycle (z-line Gauss-Seidel, semi-coarsening of plate and fins with linear transfers, ${levels.length} levels)`,
-    levels: levels.map((l) => l.a.n),
-    entries: levels.map((l) => l.a.col.length),
+    levels: levels.map((l) => l.n),
+    get entries() {
+      return levels.map((l) => l.entries());
+    },
     apply(r, z) {
       cycle(0, r, z);
+    },
+    operator(m) {
+      if (m !== a || finest === null) return null;
+      const s = finest;
+      const zero = new Float64Array(s.n);
+      return {
+        multiply: (x, out) => stencilMultiply(s, x, zero, out),
+        residual(x, b, out) {
+          stencilResidual(s, x, b, out);
+          let norm = 0;
+          for (let p = 0; p < out.length; p++) norm += Math.abs(out[p]);
+          return norm;
+        },
+      };
     },
   };
 }

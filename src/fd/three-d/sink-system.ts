@@ -23,6 +23,7 @@ import { ConductanceBuilder, type CsrMatrix } from '../linear-algebra/csr.js';
 import { PLATE_TOP, TermLists, UNDERSIDE, type HeatTerms, type RootTerms } from './heat-terms.js';
 import type { SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { LineSet } from '../linear-algebra/line-relaxation.js';
+import { stencilFromCouplings, type SinkStencil } from '../linear-algebra/sink-stencil.js';
 import type { Prolongation } from '../linear-algebra/prolongation.js';
 import { assembleFinCells } from './fin-cell-assembly.js';
 import { assembleFinSheets } from './fin-sheet-assembly.js';
@@ -36,6 +37,8 @@ export interface SinkSystem {
   grid: SinkGrid;
   representation: FinRepresentation;
   matrix: CsrMatrix;
+  /** The matrix as the multigrid's structured stencil (sink-stencil.ts); null for fins as cells. */
+  stencil: SinkStencil | null;
   rhs: Float64Array;
   lines: LineSet;
   /** The unknowns in the sheet layout, for the multigrid (fins as cells: after `fold`). */
@@ -70,7 +73,8 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
   const kp = problem.kPlate;
   const plateUnknowns = nx * ny * nz;
   const n = sinkUnknowns(grid, representation, problem.layout.finKind);
-  const builder = new ConductanceBuilder(n);
+  // At most three couplings an unknown to higher neighbours (plate; fins as cells), plus a root per plate column.
+  const builder = new ConductanceBuilder(n, 3 * n + nx * ny);
   const rhs = new Float64Array(n);
   const terms = new TermLists(builder, rhs);
   const cell = (i: number, j: number, k: number): number => (i * ny + j) * nz + k;
@@ -78,17 +82,32 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
   const dy = (j: number) => y[j + 1] - y[j];
   const dz = (k: number) => z[k + 1] - z[k];
 
-  // Plate conduction.
+  // Plate conduction; for sheets also into the multigrid's stencil (sink-stencil.ts), whose unknowns these are.
+  const finCells = representation === 'cells' && problem.layout.finKind === 'plates';
+  const known = finCells ? null : { line: new Float64Array(n), gx: new Float64Array(plateUnknowns), gy: new Float64Array(plateUnknowns), from: 0 };
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
       for (let k = 0; k < nz; k++) {
         const p = cell(i, j, k);
-        if (i + 1 < nx) builder.couple(p, cell(i + 1, j, k), (kp * dy(j) * dz(k)) / (0.5 * (dx(i) + dx(i + 1))));
-        if (j + 1 < ny) builder.couple(p, cell(i, j + 1, k), (kp * dx(i) * dz(k)) / (0.5 * (dy(j) + dy(j + 1))));
-        if (k + 1 < nz) builder.couple(p, p + 1, (kp * dx(i) * dy(j)) / (0.5 * (dz(k) + dz(k + 1))));
+        if (i + 1 < nx) {
+          const g = (kp * dy(j) * dz(k)) / (0.5 * (dx(i) + dx(i + 1)));
+          builder.couple(p, cell(i + 1, j, k), g);
+          if (known !== null) known.gx[p] = g;
+        }
+        if (j + 1 < ny) {
+          const g = (kp * dx(i) * dz(k)) / (0.5 * (dy(j) + dy(j + 1)));
+          builder.couple(p, cell(i, j + 1, k), g);
+          if (known !== null) known.gy[p] = g;
+        }
+        if (k + 1 < nz) {
+          const g = (kp * dx(i) * dy(j)) / (0.5 * (dz(k) + dz(k + 1)));
+          builder.couple(p, p + 1, g);
+          if (known !== null) known.line[p] = g;
+        }
       }
     }
   }
+  if (known !== null) known.from = builder.couplings;
 
   // Underside: sources (isoflux), elsewhere h_u or adiabatic.
   const heated = new Uint8Array(nx * ny);
@@ -137,7 +156,6 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
   const order = new Int32Array(n);
   const start: number[] = [0];
   let q = 0;
-  const finCells = representation === 'cells' && problem.layout.finKind === 'plates';
   const fins = finCells ? assembleFinCells(problem, grid, plateUnknowns, builder, terms) : assembleFinSheets(problem, grid, plateUnknowns, builder, terms);
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
@@ -167,10 +185,13 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
       ds: (grid.s[grid.ns] - grid.s[0]) / Math.max(1, grid.ns),
     })),
   };
+  const matrix = builder.toCsr();
   return {
     grid,
     representation: finCells ? 'cells' : 'sheet',
-    matrix: builder.toCsr(),
+    matrix,
+    // Sheets: the unknowns are the multigrid's level grid, so the matrix is also held as its stencil.
+    stencil: known === null ? null : stencilFromCouplings(levelGrid, builder.couplingList(), builder.diagonal, matrix.excess as Float64Array, known),
     rhs,
     lines: { order, start: Int32Array.from(start) },
     levelGrid,

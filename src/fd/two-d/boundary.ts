@@ -116,23 +116,15 @@ export function lumpedIntegral(grid: Grid2D, nodes: Int32Array, c: (x: number) =
 export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
   const { nodesX: nx, nodesY: ny } = K;
   const n = nx * ny;
-  const matrix: Stencil9 = {
-    nodesX: nx,
-    nodesY: ny,
-    // slice(), not Float64Array.from: a copy at memcpy speed (from() walks the iterator, ~30x slower in V8).
-    diag: K.diag.slice(),
-    east: K.east.slice(),
-    north: K.north.slice(),
-    northEast: K.northEast.slice(),
-    southEast: K.southEast.slice(),
-  };
+  // slice(), not Float64Array.from: a copy at memcpy speed (from() walks the iterator, ~30x slower in V8).
+  const diag = K.diag.slice();
   const rhs = new Float64Array(n);
   const fixed = new Uint8Array(n);
   const fixedTheta = new Float64Array(n);
   for (const side of [terms.base, terms.face, terms.tip]) {
     side.nodes.forEach((p, e) => {
       const g = side.conductance[e] as number;
-      matrix.diag[p] = (matrix.diag[p] as number) + g;
+      diag[p] = (diag[p] as number) + g;
       rhs[p] = (rhs[p] as number) + g * side.farTheta;
       if (side.kind === 'fixed') {
         fixed[p] = 1;
@@ -140,17 +132,31 @@ export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
       }
     });
   }
-  // Move the fixed columns to the right-hand side.
-  const moved = applyStencil9(matrix, fixedTheta, new Float64Array(n));
-  for (let p = 0; p < n; p++) {
-    if (fixed[p] === 0) rhs[p] = (rhs[p] as number) - (moved[p] as number);
-  }
   // Exact row sums after elimination: boundary conductances plus the couplings to fixed nodes.
   const excess = new Float64Array(n);
   for (const side of [terms.base, terms.face, terms.tip]) {
     side.nodes.forEach((p, e) => {
       excess[p] = (excess[p] as number) + (side.conductance[e] as number);
     });
+  }
+  // Without fixed nodes (a base behind a contact resistance, a tip not fixed) there is nothing to eliminate, and the
+  // couplings are K's own (read, never written, by every solver).
+  if (!fixed.includes(1)) {
+    return { matrix: { nodesX: nx, nodesY: ny, diag, east: K.east, north: K.north, northEast: K.northEast, southEast: K.southEast }, rhs, excess };
+  }
+  const matrix: Stencil9 = {
+    nodesX: nx,
+    nodesY: ny,
+    diag,
+    east: K.east.slice(),
+    north: K.north.slice(),
+    northEast: K.northEast.slice(),
+    southEast: K.southEast.slice(),
+  };
+  // Move the fixed columns to the right-hand side.
+  const moved = applyStencil9(matrix, fixedTheta, new Float64Array(n));
+  for (let p = 0; p < n; p++) {
+    if (fixed[p] === 0) rhs[p] = (rhs[p] as number) - (moved[p] as number);
   }
   for (let p = 0; p < n; p++) {
     if (fixed[p] === 1) {

@@ -11,7 +11,7 @@
 import type { Case } from '../../case/index.js';
 import { GridError } from '../../errors.js';
 import { buildGrid2D, type Grid2D, type Section2D } from '../../mesh/index.js';
-import { assembleConduction2D } from './assemble.js';
+import { conductionOperator } from './conduction-cache.js';
 import { buildSystem2D, discretizeBoundaries, lumpedIntegral } from './boundary.js';
 import { hAt } from '../problem/convection.js';
 import { fin2dProblem, type Fin2DProblem } from './problem.js';
@@ -108,7 +108,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     baseGrading: opts.baseGrading ?? DEFAULT_GRADING.base,
     faceGrading: opts.faceGrading ?? DEFAULT_GRADING.face,
   });
-  const K = assembleConduction2D(grid, problem.k);
+  const K = conductionOperator(grid, problem.k);
   const terms = discretizeBoundaries(grid, problem.conditions);
   const system = buildSystem2D(K, terms);
   // Solve for the departure from the fin's lumped level (see lumpedLevel), then add the level back.
@@ -119,8 +119,8 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   if (opts.solver !== undefined) field = opts.solver(shifted);
   else {
     const prepared = prepareSolver2D(shifted, opts.method ?? 'auto');
-    method = prepared.method;
     field = prepared.solve(shifted);
+    method = prepared.method;
     prepared.release();
   }
   for (let p = 0; p < field.length; p++) field[p] = (field[p] as number) + level;

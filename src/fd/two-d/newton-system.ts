@@ -398,6 +398,13 @@ function solveStep(system: System2D, requested: SolverMethod | 'auto'): { w: Flo
   const { nodesX: nx, nodesY: ny } = system.matrix;
   const method = requested === 'auto' ? chooseSolverMethod(nx, ny) : requested;
   const fits = bandedCholeskyBytes(Math.max(nx, ny), Math.min(nx, ny)) <= MAX_BANDED_BYTES;
+  if (requested === 'auto' && method === 'banded-cholesky') {
+    // The automatic choice as the linear solve makes it (fast diagonalisation where the system allows it).
+    const prepared = prepareSolver2D(system, 'auto');
+    const w = prepared.solve(system);
+    prepared.release();
+    return { w, method: prepared.method };
+  }
   if (requested !== 'auto' || method !== 'mg-pcg' || !fits) return { w: prepareSolver2D(system, method).solve(system), method };
   const attempt = attemptMgPcg(system);
   if (attempt.failure === null) return { w: attempt.x, method };

@@ -1,0 +1,97 @@
+/**
+ * The coarse operator of the 3-D sink multigrid on structured stencils: sink-coarse-operator.ts's merge of the
+ * fine conductances onto the coarse cells, computed stencil to stencil in one pass over the fine couplings.
+ * Between two coarse cells R and C:
+ *   G_RC = s * sum over fine couplings (r in R, c in C) of G_rc,
+ * s = 1/2 along a direction this step coarsened (the same faces, twice the distance between centres) and 1
+ * otherwise (faces add up at the same distance); the extra couplings (fin roots) keep s = 1; couplings inside a
+ * coarse cell drop out; each coarse cell's conductance to fixed temperatures is the sum of its fine cells'
+ * (A_c 1 = P_0^T A 1). Neighbouring fine cells in different coarse cells are in neighbouring coarse cells, so
+ * the coarse operator is again a stencil. Symmetric, nonpositive couplings, weakly diagonally dominant with a
+ * positive excess somewhere: SPD, as the CG preconditioner needs. Units W/K.
+ */
+import { buildStencil, type ExtraCouplings, type SinkStencil } from './sink-stencil.js';
+import type { SinkTransfer } from './sink-transfer.js';
+
+export function stencilCoarseOperator(s: SinkStencil, t: SinkTransfer): SinkStencil {
+  const g = s.grid;
+  const c = t.coarse;
+  const { nx, ny, nz } = g;
+  const plateC = c.nx * c.ny * c.nz;
+  const nC = plateC + c.fins.reduce((sum, f) => sum + f.rows * f.layers, 0);
+  const line = new Float64Array(nC);
+  const gx = new Float64Array(plateC);
+  const gy = new Float64Array(plateC);
+  const row = new Float64Array(nC - plateC);
+  const excess = new Float64Array(nC);
+  const half = (coarsened: boolean) => (coarsened ? 0.5 : 1);
+  const sxs = half(t.coarsened.x);
+  const sys = half(t.coarsened.y);
+  const szs = half(t.coarsened.z);
+  const ox = t.x.own;
+  const oy = t.y.own;
+  const oz = t.z.own;
+  /** Coarse index of every fine unknown (the extras need it). */
+  const aggregate = new Int32Array(s.n);
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      const p0 = (i * ny + j) * nz;
+      const rc0 = (ox[i] * c.ny + oy[j]) * c.nz;
+      const xCross = i + 1 < nx && ox[i + 1] !== ox[i];
+      const yCross = j + 1 < ny && oy[j + 1] !== oy[j];
+      for (let k = 0; k < nz; k++) {
+        const p = p0 + k;
+        const rc = rc0 + oz[k];
+        aggregate[p] = rc;
+        excess[rc] += s.excess[p];
+        if (k + 1 < nz && oz[k + 1] !== oz[k]) line[rc] += szs * s.line[p];
+        if (yCross) gy[rc] += sys * s.gy[p];
+        if (xCross) gx[rc] += sxs * s.gx[p];
+      }
+    }
+  }
+  let fine = s.plate;
+  let coarse = plateC;
+  g.fins.forEach((f, index) => {
+    const or = t.rows[index].own;
+    const ol = t.layers[index].own;
+    const cf = c.fins[index];
+    const srs = half(t.coarsened.rows[index]);
+    const sls = half(t.coarsened.layers[index]);
+    for (let r = 0; r < f.rows; r++) {
+      const rowCross = r + 1 < f.rows && or[r + 1] !== or[r];
+      for (let l = 0; l < f.layers; l++) {
+        const p = fine + r * f.layers + l;
+        const rc = coarse + or[r] * cf.layers + ol[l];
+        aggregate[p] = rc;
+        excess[rc] += s.excess[p];
+        if (l + 1 < f.layers && ol[l + 1] !== ol[l]) line[rc] += sls * s.line[p];
+        if (rowCross) row[rc - plateC] += srs * s.row[p - s.plate];
+      }
+    }
+    fine += f.rows * f.layers;
+    coarse += cf.rows * cf.layers;
+  });
+  // Extras: each pair once (from < to), merged per coarse pair.
+  const extras: ExtraCouplings = { from: [], to: [], g: [] };
+  const slot = new Map<number, number>();
+  for (let e = 0; e < s.extraFrom.length; e++) {
+    const p = s.extraFrom[e];
+    const q = s.extraTo[e];
+    if (p > q) continue;
+    const a = aggregate[p];
+    const b = aggregate[q];
+    if (a === b) continue;
+    const lo = Math.min(a, b);
+    const hi = Math.max(a, b);
+    const key = lo * nC + hi;
+    const at = slot.get(key);
+    if (at === undefined) {
+      slot.set(key, extras.from.length);
+      extras.from.push(lo);
+      extras.to.push(hi);
+      extras.g.push(s.extraG[e]);
+    } else extras.g[at] += s.extraG[e];
+  }
+  return buildStencil(c, { line, gx, gy, row, excess }, extras);
+}

@@ -1,0 +1,252 @@
+/**
+ * Line Gauss-Seidel on a structured sink stencil (sink-stencil.ts): the same relaxation as line-relaxation.ts
+ * (plate columns in z, then fin rows along their height, each line's tridiagonal system solved exactly with the
+ * couplings off the line at their current values,
+ *   T_l x_l = b_l + sum_{q not on the line} G_lq x_q),
+ * read through strides instead of column indices. Forward then backward is symmetric block Gauss-Seidel, SPD for
+ * an SPD matrix (Saad, "Iterative Methods for Sparse Linear Systems", 2nd ed. 2003, sections 4.1 and 9.2
+ * [from memory]). The lines are factored once from both ends (twistedFactor below); the elimination
+ * multipliers g inv are formed on the fly from the couplings.
+ * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0).
+ */
+import { residualExtras, residualFin, residualPlanes, type SinkStencil } from './sink-stencil.js';
+
+export interface StencilRelaxation {
+  /** One sweep over the lines, forward or backward, updating x in place; fromZero: x is 0 on entry (forward only). */
+  sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero?: boolean): void;
+  /**
+   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x, the residual of each plate plane formed
+   * as soon as the sweep has passed the next plane (while both are in cache), each fin's after its rows.
+   */
+  forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void;
+}
+
+export function stencilRelaxation(s: SinkStencil): StencilRelaxation {
+  return new StencilLines(s);
+}
+
+/**
+ * The relaxation's state. Its hot loops are top-level functions taking arrays and counts as arguments: a closure
+ * per level would share one optimised code object across levels and read every captured value from its context.
+ */
+class StencilLines implements StencilRelaxation {
+  private readonly inv: Float64Array;
+  /** The line's right-hand side, then its eliminated form. */
+  private readonly w: Float64Array;
+  private readonly finStart: number[] = [];
+  private readonly finLine: number[] = [];
+
+  constructor(private readonly s: SinkStencil) {
+    this.inv = twistedFactor(s);
+    let longest = s.grid.nz;
+    for (const f of s.grid.fins) longest = Math.max(longest, f.layers);
+    this.w = new Float64Array(longest);
+    let offset = s.plate;
+    let l0 = s.grid.nx * s.grid.ny;
+    for (const f of s.grid.fins) {
+      this.finStart.push(offset);
+      this.finLine.push(l0);
+      offset += f.rows * f.layers;
+      l0 += f.rows;
+    }
+  }
+
+  sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero = false): void {
+    const nx = this.s.grid.nx;
+    if (direction === 'forward') {
+      for (let i = 0; i < nx; i++) this.plane(i, b, x, !fromZero, true);
+      for (let f = 0; f < this.s.grid.fins.length; f++) this.fin(f, b, x, !fromZero, true);
+      return;
+    }
+    for (let f = this.s.grid.fins.length - 1; f >= 0; f--) this.fin(f, b, x, true, false);
+    for (let i = nx - 1; i >= 0; i--) this.plane(i, b, x, true, false);
+  }
+
+  forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
+    const s = this.s;
+    const nx = s.grid.nx;
+    x.fill(0);
+    for (let i = 0; i < nx; i++) {
+      this.plane(i, b, x, false, true);
+      if (i > 0) residualPlanes(s, x, b, 1, r, i - 1, i);
+    }
+    residualPlanes(s, x, b, 1, r, nx - 1, nx);
+    for (let f = 0; f < s.grid.fins.length; f++) {
+      this.fin(f, b, x, false, true);
+      residualFin(s, x, b, 1, r, f);
+    }
+    residualExtras(s, x, 1, r);
+  }
+
+  /** The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours. */
+  private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
+    const { grid, line, gx, gy, extraStart, extraFrom, extraTo, extraG } = this.s;
+    const { nx, ny, nz } = grid;
+    const { inv, w } = this;
+    const sx = ny * nz;
+    const interior = i > 0 && i + 1 < nx;
+    for (let t = 0; t < ny; t++) {
+      const j = forward ? t : ny - 1 - t;
+      const p0 = (i * ny + j) * nz;
+      if (interior) gatherInterior(w, b, x, gx, gy, p0, nz, sx, ahead);
+      else gatherEdge(w, b, x, gx, gy, p0, nz, sx, i > 0, j > 0, ahead && i + 1 < nx, ahead && j + 1 < ny);
+      const l = i * ny + j;
+      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0);
+      solveLine(w, x, inv, line, p0, nz);
+    }
+  }
+
+  /** The rows of fin f, ascending (forward) or descending. */
+  private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
+    const { plate, line, row, extraStart, extraFrom, extraTo, extraG } = this.s;
+    const { rows, layers } = this.s.grid.fins[f];
+    const { inv, w } = this;
+    for (let t = 0; t < rows; t++) {
+      const r = forward ? t : rows - 1 - t;
+      const p0 = this.finStart[f] + r * layers;
+      gatherFin(w, b, x, row, p0, layers, plate, r > 0, ahead && r + 1 < rows);
+      const l = this.finLine[f] + r;
+      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0);
+      solveLine(w, x, inv, line, p0, layers);
+    }
+  }
+}
+
+/** w = b + the couplings of an interior plane's column to its neighbours (ahead: also (i+1, j) and (i, j+1)). */
+function gatherInterior(
+  w: Float64Array,
+  b: Float64Array,
+  x: Float64Array,
+  gx: Float64Array,
+  gy: Float64Array,
+  p0: number,
+  nz: number,
+  sx: number,
+  ahead: boolean,
+): void {
+  if (ahead) {
+    for (let k = 0, q = p0; k < nz; k++, q++) w[k] = b[q] + gx[q - sx] * x[q - sx] + gx[q] * x[q + sx] + gy[q - nz] * x[q - nz] + gy[q] * x[q + nz];
+  } else {
+    for (let k = 0, q = p0; k < nz; k++, q++) w[k] = b[q] + gx[q - sx] * x[q - sx] + gy[q - nz] * x[q - nz];
+  }
+}
+
+/** As gatherInterior for a column of the first or last plane, with each neighbour by its own flag. */
+function gatherEdge(
+  w: Float64Array,
+  b: Float64Array,
+  x: Float64Array,
+  gx: Float64Array,
+  gy: Float64Array,
+  p0: number,
+  nz: number,
+  sx: number,
+  west: boolean,
+  south: boolean,
+  east: boolean,
+  north: boolean,
+): void {
+  for (let k = 0, q = p0; k < nz; k++, q++) {
+    let v = b[q];
+    if (west) v += gx[q - sx] * x[q - sx];
+    if (south) v += gy[q - nz] * x[q - nz];
+    if (east) v += gx[q] * x[q + sx];
+    if (north) v += gy[q] * x[q + nz];
+    w[k] = v;
+  }
+}
+
+/** w = b + a fin row's couplings to the rows below and above (when they are read). */
+function gatherFin(
+  w: Float64Array,
+  b: Float64Array,
+  x: Float64Array,
+  row: Float64Array,
+  p0: number,
+  layers: number,
+  plate: number,
+  below: boolean,
+  above: boolean,
+): void {
+  for (let k = 0, q = p0; k < layers; k++, q++) {
+    let v = b[q];
+    if (below) v += row[q - layers - plate] * x[q - layers];
+    if (above) v += row[q - plate] * x[q + layers];
+    w[k] = v;
+  }
+}
+
+/** w += the extra couplings' part of line l's right-hand side. */
+function addExtras(w: Float64Array, x: Float64Array, start: Int32Array, from: Int32Array, to: Int32Array, g: Float64Array, l: number, p0: number): void {
+  for (let e = start[l]; e < start[l + 1]; e++) w[from[e] - p0] += g[e] * x[to[e]];
+}
+
+/**
+ * x[p0 .. p0 + len) = T^-1 w, eliminating from both ends towards the middle member m = floor(len / 2) at once
+ * (two independent recurrences instead of one twice as long), then substituting back outwards from m.
+ */
+function solveLine(w: Float64Array, x: Float64Array, inv: Float64Array, line: Float64Array, p0: number, len: number): void {
+  const m = len >> 1;
+  let yTop = 0;
+  let gTop = 0;
+  let yBottom = 0;
+  for (let t = 0; t < m; t++) {
+    const q = p0 + t;
+    yTop = (w[t] + gTop * yTop) * inv[q];
+    w[t] = yTop;
+    gTop = line[q];
+    const k = len - 1 - t;
+    if (k > m) {
+      const qb = p0 + k;
+      yBottom = (w[k] + line[qb] * yBottom) * inv[qb];
+      w[k] = yBottom;
+    }
+  }
+  const pm = p0 + m;
+  const xm = (w[m] + gTop * yTop + line[pm] * yBottom) * inv[pm];
+  x[pm] = xm;
+  let xTop = xm;
+  let xBottom = xm;
+  for (let t = 1; t <= m; t++) {
+    const q = pm - t;
+    xTop = w[m - t] + line[q] * inv[q] * xTop;
+    x[q] = xTop;
+    if (m + t < len) {
+      const qb = pm + t;
+      xBottom = w[m + t] + line[qb - 1] * inv[qb] * xBottom;
+      x[qb] = xBottom;
+    }
+  }
+}
+
+/**
+ * The twisted factorisation of every line (Thomas elimination from both ends, diagonally dominant M-matrix lines,
+ * no pivoting): with the line's members 0 .. len − 1, couplings g_k between k and k + 1, and m = floor(len / 2),
+ *   k < m  inv_k = 1 / (A_kk − g_{k−1}^2 inv_{k−1})     (from the top),
+ *   k > m  inv_k = 1 / (A_kk − g_k^2 inv_{k+1})          (from the bottom),
+ *   k = m  inv_m = 1 / (A_mm − g_{m−1}^2 inv_{m−1} − g_m^2 inv_{m+1}).
+ */
+function twistedFactor(s: SinkStencil): Float64Array {
+  const { grid, line, diagonal } = s;
+  const inv = new Float64Array(s.n);
+  const factor = (p0: number, len: number): void => {
+    const m = len >> 1;
+    for (let k = 0; k < m; k++) {
+      const p = p0 + k;
+      inv[p] = 1 / (diagonal[p] - (k > 0 ? line[p - 1] * line[p - 1] * inv[p - 1] : 0));
+    }
+    for (let k = len - 1; k > m; k--) {
+      const p = p0 + k;
+      inv[p] = 1 / (diagonal[p] - (k + 1 < len ? line[p] * line[p] * inv[p + 1] : 0));
+    }
+    const p = p0 + m;
+    inv[p] = 1 / (diagonal[p] - (m > 0 ? line[p - 1] * line[p - 1] * inv[p - 1] : 0) - (m + 1 < len ? line[p] * line[p] * inv[p + 1] : 0));
+  };
+  for (let c = 0; c < grid.nx * grid.ny; c++) factor(c * grid.nz, grid.nz);
+  let offset = s.plate;
+  for (const f of grid.fins) {
+    for (let r = 0; r < f.rows; r++) factor(offset + r * f.layers, f.layers);
+    offset += f.rows * f.layers;
+  }
+  return inv;
+}

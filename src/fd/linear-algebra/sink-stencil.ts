@@ -1,0 +1,476 @@
+/**
+ * A 3-D sink system held as its structured stencils (the multigrid's levels in sheet layout, aggregation.ts):
+ *   plate cell (i, j, k), index (i ny + j) nz + k: conductances to (i+1, j, k), (i, j+1, k) and (i, j, k+1);
+ *   fin node (row J, layer l), index offset_f + J L_f + l: conductances to (J+1, l) and (J, l+1);
+ *   every other coupling (a fin's root on the plate's top cells) in a short list, by line;
+ *   each unknown's conductance to fixed temperatures (its row sum, `excess`) and the matrix diagonal.
+ * The matrix is the conductance matrix of csr.ts (units W/K):
+ *   (A x)_p = e_p x_p + sum_q G_pq (x_p − x_q),
+ * evaluated in that difference form like csrResidual, with neighbour offsets (strides) in place of column
+ * indices. A line is a plate column in z or a fin row along its height, the lines of the line relaxation
+ * (sink-stencil-relaxation.ts) and of levelLines (aggregation.ts), in that order; the couplings along a line are
+ * `line` (index p to p + 1, 0 at a line's last member).
+ */
+import type { CsrMatrix } from './csr.js';
+import { levelUnknowns, type SinkLevelGrid } from './aggregation.js';
+
+export interface SinkStencil {
+  readonly grid: SinkLevelGrid;
+  readonly n: number;
+  /** Plate cells nx ny nz (they come first). */
+  readonly plate: number;
+  /** Conductance from unknown p to p + 1 along its line (plate z, fin layers); 0 at a line's end, W/K. */
+  readonly line: Float64Array;
+  /** Plate: conductance from (i, j, k) to (i+1, j, k) and to (i, j+1, k); 0 on the last plane, W/K. */
+  readonly gx: Float64Array;
+  readonly gy: Float64Array;
+  /** Fin node p (at p − plate): conductance to the next row's node of the same layer; 0 on the last row, W/K. */
+  readonly row: Float64Array;
+  /** Conductance to fixed temperatures (row sum), W/K. */
+  readonly excess: Float64Array;
+  /** A_pp: excess plus every coupling of p, W/K. */
+  readonly diagonal: Float64Array;
+  /** Other couplings, both directions, grouped by the line of `from`: entries [extraStart[l], extraStart[l + 1]). */
+  readonly extraStart: Int32Array;
+  readonly extraFrom: Int32Array;
+  readonly extraTo: Int32Array;
+  readonly extraG: Float64Array;
+}
+
+/** Lines of a level: the first member and the length of each, plate columns then fin rows. */
+export interface StencilLines {
+  readonly first: Int32Array;
+  readonly length: Int32Array;
+  /** Per fin: the index of its first line, its node offset and layers. */
+  readonly finLine: Int32Array;
+  readonly finOffset: Int32Array;
+  readonly longest: number;
+}
+
+export function stencilLines(g: SinkLevelGrid): StencilLines {
+  const columns = g.nx * g.ny;
+  const count = columns + g.fins.reduce((s, f) => s + f.rows, 0);
+  const first = new Int32Array(count);
+  const length = new Int32Array(count);
+  for (let c = 0; c < columns; c++) {
+    first[c] = c * g.nz;
+    length[c] = g.nz;
+  }
+  const finLine = new Int32Array(g.fins.length);
+  const finOffset = new Int32Array(g.fins.length);
+  let l = columns;
+  let offset = columns * g.nz;
+  let longest = g.nz;
+  g.fins.forEach((f, index) => {
+    finLine[index] = l;
+    finOffset[index] = offset;
+    longest = Math.max(longest, f.layers);
+    for (let r = 0; r < f.rows; r++) {
+      first[l] = offset + r * f.layers;
+      length[l++] = f.layers;
+    }
+    offset += f.rows * f.layers;
+  });
+  return { first, length, finLine, finOffset, longest };
+}
+
+/** The line of unknown p. */
+export function lineOf(g: SinkLevelGrid, lines: StencilLines, p: number): number {
+  const plate = g.nx * g.ny * g.nz;
+  if (p < plate) return Math.floor(p / g.nz);
+  let f = g.fins.length - 1;
+  while (lines.finOffset[f] > p) f--;
+  return lines.finLine[f] + Math.floor((p - lines.finOffset[f]) / g.fins[f].layers);
+}
+
+/** Couplings not in the stencil, one direction each (from < to), before grouping. */
+export interface ExtraCouplings {
+  from: number[];
+  to: number[];
+  g: number[];
+}
+
+/**
+ * The stencil from its parts: groups the extra couplings by line (both directions) and forms the diagonal as the
+ * excess plus every coupling, unless `diagonal` is given.
+ */
+export function buildStencil(
+  grid: SinkLevelGrid,
+  parts: { line: Float64Array; gx: Float64Array; gy: Float64Array; row: Float64Array; excess: Float64Array; diagonal?: Float64Array },
+  extras: ExtraCouplings,
+): SinkStencil {
+  const n = levelUnknowns(grid);
+  const plate = grid.nx * grid.ny * grid.nz;
+  const lines = stencilLines(grid);
+  const count = lines.first.length;
+  const m = extras.from.length;
+  const lineFrom = new Int32Array(2 * m);
+  const extraStart = new Int32Array(count + 1);
+  for (let e = 0; e < m; e++) {
+    lineFrom[2 * e] = lineOf(grid, lines, extras.from[e]);
+    lineFrom[2 * e + 1] = lineOf(grid, lines, extras.to[e]);
+    extraStart[lineFrom[2 * e] + 1]++;
+    extraStart[lineFrom[2 * e + 1] + 1]++;
+  }
+  for (let l = 0; l < count; l++) extraStart[l + 1] += extraStart[l];
+  const fill = extraStart.slice(0, count);
+  const extraFrom = new Int32Array(2 * m);
+  const extraTo = new Int32Array(2 * m);
+  const extraG = new Float64Array(2 * m);
+  for (let e = 0; e < m; e++) {
+    const a = fill[lineFrom[2 * e]]++;
+    extraFrom[a] = extras.from[e];
+    extraTo[a] = extras.to[e];
+    extraG[a] = extras.g[e];
+    const b = fill[lineFrom[2 * e + 1]]++;
+    extraFrom[b] = extras.to[e];
+    extraTo[b] = extras.from[e];
+    extraG[b] = extras.g[e];
+  }
+  let diagonal = parts.diagonal;
+  if (diagonal === undefined) {
+    const { line, gx, gy, row, excess } = parts;
+    const d = Float64Array.from(excess);
+    for (let p = 0; p + 1 < n; p++) {
+      d[p] += line[p];
+      d[p + 1] += line[p];
+    }
+    const sx = grid.ny * grid.nz;
+    for (let p = 0; p < plate; p++) {
+      d[p] += gx[p] + gy[p];
+      if (p + sx < plate) d[p + sx] += gx[p];
+      if (p + grid.nz < plate) d[p + grid.nz] += gy[p];
+    }
+    const offsets = lines.finOffset;
+    grid.fins.forEach((f, index) => {
+      const o = offsets[index];
+      for (let q = 0; q < f.rows * f.layers; q++) {
+        const r = row[o - plate + q];
+        d[o + q] += r;
+        if (q + f.layers < f.rows * f.layers) d[o + q + f.layers] += r;
+      }
+    });
+    for (let e = 0; e < 2 * m; e++) d[extraFrom[e]] += extraG[e];
+    diagonal = d;
+  }
+  return {
+    grid,
+    n,
+    plate,
+    line: parts.line,
+    gx: parts.gx,
+    gy: parts.gy,
+    row: parts.row,
+    excess: parts.excess,
+    diagonal,
+    extraStart,
+    extraFrom,
+    extraTo,
+    extraG,
+  };
+}
+
+/**
+ * The stencil of a CSR conductance matrix whose unknowns follow `grid` (levelUnknowns order). Each coupling is
+ * read from the upper triangle (the matrix is symmetric); neighbours in the grid go to the stencil, any other
+ * pair to the extra list. The diagonal is the matrix's own; the excess its `excess` or its row sums.
+ */
+export function stencilFromCsr(a: CsrMatrix, grid: SinkLevelGrid): SinkStencil {
+  const n = a.n;
+  if (n !== levelUnknowns(grid)) throw new Error('stencilFromCsr: the level grid does not describe the matrix');
+  const { nx, ny, nz } = grid;
+  const plate = nx * ny * nz;
+  const line = new Float64Array(n);
+  const gx = new Float64Array(plate);
+  const gy = new Float64Array(plate);
+  const row = new Float64Array(n - plate);
+  const diagonal = new Float64Array(n);
+  const rowSums = new Float64Array(n);
+  const extras: ExtraCouplings = { from: [], to: [], g: [] };
+  const target: CsrTarget = { a, line, gx, gy, row, diagonal, rowSums, extras, plate };
+  let r = 0;
+  for (let i = 0; i < nx; i++)
+    for (let j = 0; j < ny; j++) for (let k = 0; k < nz; k++) classifyRow(target, r++, k + 1 < nz, j + 1 < ny ? nz : -1, i + 1 < nx ? ny * nz : -1);
+  for (const f of grid.fins) {
+    for (let J = 0; J < f.rows; J++) for (let l = 0; l < f.layers; l++) classifyRow(target, r++, l + 1 < f.layers, J + 1 < f.rows ? f.layers : -1, -1);
+  }
+  const excess = a.excess !== undefined ? Float64Array.from(a.excess) : rowSums;
+  return buildStencil(grid, { line, gx, gy, row, excess, diagonal }, extras);
+}
+
+interface CsrTarget {
+  a: CsrMatrix;
+  line: Float64Array;
+  gx: Float64Array;
+  gy: Float64Array;
+  row: Float64Array;
+  diagonal: Float64Array;
+  rowSums: Float64Array;
+  extras: ExtraCouplings;
+  plate: number;
+}
+
+/**
+ * Row r's couplings to higher indices: to r + 1 along its line when `alongLine`, to r + second (plate: the next j;
+ * fin: the next row; −1 none) and to r + third (plate: the next i; −1 none); any other pair is an extra.
+ */
+function classifyRow(t: CsrTarget, r: number, alongLine: boolean, second: number, third: number): void {
+  const { rowStart, col, val } = t.a;
+  const plateRow = r < t.plate;
+  let sum = 0;
+  for (let e = rowStart[r]; e < rowStart[r + 1]; e++) {
+    const c = col[e];
+    const v = val[e];
+    sum += v;
+    if (c <= r) {
+      if (c === r) t.diagonal[r] += v;
+      continue;
+    }
+    const d = c - r;
+    if (d === 1 && alongLine) t.line[r] -= v;
+    else if (d === second) {
+      if (plateRow) t.gy[r] -= v;
+      else t.row[r - t.plate] -= v;
+    } else if (d === third) t.gx[r] -= v;
+    else pushExtra(t.extras, r, c, -v);
+  }
+  t.rowSums[r] = sum;
+}
+
+/**
+ * The stencil from an assembly's list of couplings (conductance g[c] between p[c] and q[c], ConductanceBuilder),
+ * its diagonal and its conductances to fixed temperatures, classified as stencilFromCsr classifies the matrix's
+ * entries, without a pass over the CSR matrix. `known`: the plate's couplings, already placed by the assembly
+ * (the list's first `from` entries).
+ */
+export function stencilFromCouplings(
+  grid: SinkLevelGrid,
+  couplings: { p: Int32Array; q: Int32Array; g: Float64Array },
+  diagonal: Float64Array,
+  excess: Float64Array,
+  known: { line: Float64Array; gx: Float64Array; gy: Float64Array; from: number },
+): SinkStencil {
+  const n = levelUnknowns(grid);
+  const { nx, ny, nz } = grid;
+  const plate = nx * ny * nz;
+  const sx = ny * nz;
+  const { line, gx, gy } = known;
+  const row = new Float64Array(n - plate);
+  const extras: ExtraCouplings = { from: [], to: [], g: [] };
+  const lines = stencilLines(grid);
+  const { p: ps, q: qs, g: gs } = couplings;
+  for (let c = known.from; c < ps.length; c++) {
+    const r = Math.min(ps[c], qs[c]);
+    const t = Math.max(ps[c], qs[c]);
+    const g = gs[c];
+    const d = t - r;
+    if (t < plate) {
+      if (d === 1 && (r % nz) + 1 < nz) line[r] += g;
+      else if (d === nz && Math.floor(r / nz) % ny !== ny - 1) gy[r] += g;
+      else if (d === sx) gx[r] += g;
+      else pushExtra(extras, r, t, g);
+    } else if (r >= plate) {
+      const f = finIndex(lines, r);
+      const layers = grid.fins[f].layers;
+      const local = r - lines.finOffset[f];
+      if (d === 1 && (local % layers) + 1 < layers) line[r] += g;
+      else if (d === layers && local + layers < grid.fins[f].rows * layers) row[r - plate] += g;
+      else pushExtra(extras, r, t, g);
+    } else pushExtra(extras, r, t, g);
+  }
+  return buildStencil(grid, { line, gx, gy, row, excess: Float64Array.from(excess), diagonal: Float64Array.from(diagonal) }, extras);
+}
+
+/** The fin of fin node p (p at or after the plate). */
+function finIndex(lines: StencilLines, p: number): number {
+  let f = lines.finOffset.length - 1;
+  while (lines.finOffset[f] > p) f--;
+  return f;
+}
+
+function pushExtra(extras: ExtraCouplings, from: number, to: number, g: number): void {
+  extras.from.push(from);
+  extras.to.push(to);
+  extras.g.push(g);
+}
+
+/** Stored entries of the matrix the stencil stands for (diagonal and both halves of every nonzero coupling). */
+export function stencilEntries(s: SinkStencil): number {
+  let couplings = 0;
+  for (const v of [s.line, s.gx, s.gy, s.row]) for (let p = 0; p < v.length; p++) if (v[p] !== 0) couplings++;
+  return s.n + 2 * couplings + s.extraFrom.length;
+}
+
+/** The stencil as a CSR matrix (diagonal first in every row, excess kept): the coarsest level's dense solve, tests. */
+export function stencilToCsr(s: SinkStencil): CsrMatrix {
+  const { n, plate, grid } = s;
+  const cols: number[][] = Array.from({ length: n }, (_, r) => [r]);
+  const vals: number[][] = Array.from({ length: n }, (_, r) => [s.diagonal[r]]);
+  const couple = (p: number, q: number, g: number) => {
+    if (g === 0) return;
+    cols[p].push(q);
+    vals[p].push(-g);
+    cols[q].push(p);
+    vals[q].push(-g);
+  };
+  for (let p = 0; p + 1 < n; p++) couple(p, p + 1, s.line[p]);
+  const sx = grid.ny * grid.nz;
+  for (let p = 0; p < plate; p++) {
+    if (p + sx < plate) couple(p, p + sx, s.gx[p]);
+    if (p + grid.nz < plate) couple(p, p + grid.nz, s.gy[p]);
+  }
+  let offset = plate;
+  for (const f of grid.fins) {
+    for (let q = 0; q + f.layers < f.rows * f.layers; q++) couple(offset + q, offset + q + f.layers, s.row[offset - plate + q]);
+    offset += f.rows * f.layers;
+  }
+  for (let e = 0; e < s.extraFrom.length; e++) {
+    if (s.extraFrom[e] < s.extraTo[e]) couple(s.extraFrom[e], s.extraTo[e], s.extraG[e]);
+  }
+  const rowStart = new Int32Array(n + 1);
+  for (let r = 0; r < n; r++) rowStart[r + 1] = rowStart[r] + cols[r].length;
+  return { n, rowStart, col: Int32Array.from(cols.flat()), val: Float64Array.from(vals.flat()), excess: Float64Array.from(s.excess) };
+}
+
+/** out = b − A x in the difference form b_p − e_p x_p − sum_q G_pq (x_p − x_q) (out may not alias x). */
+export function stencilResidual(s: SinkStencil, x: Float64Array, b: Float64Array, out: Float64Array): void {
+  differenceForm(s, x, b, 1, out);
+}
+
+/** out = A x in the difference form, with `zero` a vector of zeros (out may not alias x). */
+export function stencilMultiply(s: SinkStencil, x: Float64Array, zero: Float64Array, out: Float64Array): void {
+  differenceForm(s, x, zero, -1, out);
+}
+
+/**
+ * out = sign (b − A x): the plate's planes, each fin's nodes, then the extra couplings (residualPlanes,
+ * residualFin, residualExtras, also called plane by plane from a sweep, sink-stencil-relaxation.ts).
+ */
+function differenceForm(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array): void {
+  residualPlanes(s, x, b, sign, out, 0, s.grid.nx);
+  for (let f = 0; f < s.grid.fins.length; f++) residualFin(s, x, b, sign, out, f);
+  residualExtras(s, x, sign, out);
+}
+
+/**
+ * out = sign (b − A x) on plate planes i0 .. i1 − 1 without the extra couplings. Interior planes in one flat
+ * pass: a neighbour across a column's or a plane's j end has a zero coupling there (0 on a line's last member,
+ * on the last j of a plane), so only the first and last planes need bounds.
+ */
+export function residualPlanes(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array, i0: number, i1: number): void {
+  const { grid, line, gx, gy, excess } = s;
+  const { nx, ny, nz } = grid;
+  const sx = ny * nz;
+  const from = Math.max(i0, 1) * sx;
+  const to = Math.min(i1, nx - 1) * sx;
+  for (let p = from; p < to; p++) {
+    const xp = x[p];
+    out[p] =
+      sign *
+      (b[p] -
+        excess[p] * xp +
+        line[p] * (x[p + 1] - xp) +
+        line[p - 1] * (x[p - 1] - xp) +
+        gx[p] * (x[p + sx] - xp) +
+        gx[p - sx] * (x[p - sx] - xp) +
+        gy[p] * (x[p + nz] - xp) +
+        gy[p - nz] * (x[p - nz] - xp));
+  }
+  if (i0 === 0) edgePlane(s, x, b, sign, out, 0);
+  if (nx > 1 && i1 === nx) edgePlane(s, x, b, sign, out, nx - 1);
+}
+
+function edgePlane(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array, i: number): void {
+  const { grid, n, line, gx, gy, excess } = s;
+  const { nx, ny, nz } = grid;
+  const sx = ny * nz;
+  const p0 = i * sx;
+  const p1 = p0 + sx;
+  for (let p = p0; p < p1; p++) {
+    const xp = x[p];
+    let v = b[p] - excess[p] * xp;
+    if (p > 0) v += line[p - 1] * (x[p - 1] - xp);
+    if (p + 1 < n) v += line[p] * (x[p + 1] - xp);
+    if (i > 0) v += gx[p - sx] * (x[p - sx] - xp);
+    if (i + 1 < nx) v += gx[p] * (x[p + sx] - xp);
+    if (p - nz >= p0) v += gy[p - nz] * (x[p - nz] - xp);
+    if (p + nz < p1) v += gy[p] * (x[p + nz] - xp);
+    out[p] = sign * v;
+  }
+}
+
+/** First node of each fin (after the plate). */
+function finOffset(s: SinkStencil, f: number): number {
+  let offset = s.plate;
+  for (let k = 0; k < f; k++) offset += s.grid.fins[k].rows * s.grid.fins[k].layers;
+  return offset;
+}
+
+/** out = sign (b − A x) on fin f's nodes without the extra couplings (interior rows flat, the first and last bounded). */
+export function residualFin(s: SinkStencil, x: Float64Array, b: Float64Array, sign: number, out: Float64Array, f: number): void {
+  const { plate, line, row, excess } = s;
+  const fin = s.grid.fins[f];
+  const L = fin.layers;
+  const offset = finOffset(s, f);
+  const end = offset + fin.rows * L;
+  finInterior(x, b, sign, out, line, row, excess, plate, offset + L, end - L, L);
+  finEdgeRow(x, b, sign, out, line, row, excess, plate, offset, L, offset, end);
+  if (fin.rows > 1) finEdgeRow(x, b, sign, out, line, row, excess, plate, end - L, L, offset, end);
+}
+
+/** Rows with a row on either side, nodes from .. to − 1 (L layers a row). */
+function finInterior(
+  x: Float64Array,
+  b: Float64Array,
+  sign: number,
+  out: Float64Array,
+  line: Float64Array,
+  row: Float64Array,
+  excess: Float64Array,
+  plate: number,
+  from: number,
+  to: number,
+  L: number,
+): void {
+  for (let p = from; p < to; p++) {
+    const xp = x[p];
+    const q = p - plate;
+    out[p] =
+      sign * (b[p] - excess[p] * xp + line[p] * (x[p + 1] - xp) + line[p - 1] * (x[p - 1] - xp) + row[q] * (x[p + L] - xp) + row[q - L] * (x[p - L] - xp));
+  }
+}
+
+/** The row from p0 of a fin occupying offset .. end − 1, each neighbour bounded. */
+function finEdgeRow(
+  x: Float64Array,
+  b: Float64Array,
+  sign: number,
+  out: Float64Array,
+  line: Float64Array,
+  row: Float64Array,
+  excess: Float64Array,
+  plate: number,
+  p0: number,
+  L: number,
+  offset: number,
+  end: number,
+): void {
+  for (let p = p0; p < p0 + L; p++) {
+    const xp = x[p];
+    let v = b[p] - excess[p] * xp;
+    if (p > p0) v += line[p - 1] * (x[p - 1] - xp);
+    if (p + 1 < p0 + L) v += line[p] * (x[p + 1] - xp);
+    if (p - L >= offset) v += row[p - L - plate] * (x[p - L] - xp);
+    if (p + L < end) v += row[p - plate] * (x[p + L] - xp);
+    out[p] = sign * v;
+  }
+}
+
+/** out += sign (the extra couplings' part of b − A x). */
+export function residualExtras(s: SinkStencil, x: Float64Array, sign: number, out: Float64Array): void {
+  const { extraFrom, extraTo, extraG } = s;
+  for (let e = 0; e < extraFrom.length; e++) {
+    const p = extraFrom[e];
+    out[p] += sign * extraG[e] * (x[extraTo[e]] - x[p]);
+  }
+}

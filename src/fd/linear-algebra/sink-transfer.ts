@@ -1,0 +1,175 @@
+/**
+ * The linear transfers of one sink coarsening step (aggregation.ts) applied direction by direction: P is the
+ * tensor product of one-dimensional cell-centred interpolations (3/4 from the own coarse cell, 1/4 from the nearer
+ * neighbour, 1 at an edge; Wesseling, "An Introduction to Multigrid Methods", 1992, section 5.3 [from memory]),
+ *   plate  P = P_x ⊗ P_y ⊗ P_z,   fin f  P_f = P_rows ⊗ P_layers,
+ * so x += P e and r_c = P^T r are a pass per coarsened direction over contiguous blocks, with no stored matrix.
+ * The same P as coarsenSinkLevel's CSR form (the product of the weights), up to the order of the sums.
+ */
+import { coarseLevelGrid, transfer, type SinkCoarsening, type SinkLevelGrid } from './aggregation.js';
+
+/** One direction: for each fine index its own coarse index, the neighbouring one, and the own one's weight. */
+export interface AxisTransfer {
+  readonly n: number;
+  readonly nc: number;
+  readonly coarsened: boolean;
+  readonly own: Int32Array;
+  readonly other: Int32Array;
+  readonly w: Float64Array;
+}
+
+export interface SinkTransfer {
+  readonly fine: SinkLevelGrid;
+  readonly coarse: SinkLevelGrid;
+  readonly x: AxisTransfer;
+  readonly y: AxisTransfer;
+  readonly z: AxisTransfer;
+  readonly rows: AxisTransfer[];
+  readonly layers: AxisTransfer[];
+  /** Directions coarsened (the coarse operator's scale factors). */
+  readonly coarsened: SinkCoarsening['coarsened'];
+}
+
+function axis(n: number, nc: number, coarsened: boolean): AxisTransfer {
+  return { n, nc, coarsened, ...transfer(n, nc, coarsened) };
+}
+
+export function sinkTransfer(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): SinkTransfer {
+  const coarse = coarseLevelGrid(g, flags);
+  return {
+    fine: g,
+    coarse,
+    x: axis(g.nx, coarse.nx, flags.x),
+    y: axis(g.ny, coarse.ny, flags.y),
+    z: axis(g.nz, coarse.nz, flags.z),
+    rows: g.fins.map((f, k) => axis(f.rows, coarse.fins[k].rows, flags.rows[k])),
+    layers: g.fins.map((f, k) => axis(f.layers, coarse.fins[k].layers, flags.layers[k])),
+    coarsened: flags,
+  };
+}
+
+/** One pass of r_c = P^T r along one direction: src [outer][n][inner] (from so) -> dst [outer][nc][inner] (from d0). */
+function restrictAxis(t: AxisTransfer, outer: number, inner: number, src: Float64Array, so: number, dst: Float64Array, d0: number): void {
+  const { n, nc, own, other, w } = t;
+  dst.fill(0, d0, d0 + outer * nc * inner);
+  for (let o = 0; o < outer; o++) {
+    for (let i = 0; i < n; i++) {
+      const s = so + (o * n + i) * inner;
+      const a = d0 + (o * nc + own[i]) * inner;
+      const wi = w[i];
+      if (wi === 1) {
+        for (let m = 0; m < inner; m++) dst[a + m] += src[s + m];
+        continue;
+      }
+      const b = d0 + (o * nc + other[i]) * inner;
+      const wo = 1 - wi;
+      for (let m = 0; m < inner; m++) {
+        const v = src[s + m];
+        dst[a + m] += wi * v;
+        dst[b + m] += wo * v;
+      }
+    }
+  }
+}
+
+/** One pass of P e along one direction: src [outer][nc][inner] -> dst [outer][n][inner]; add: dst += instead of =. */
+function prolongAxis(t: AxisTransfer, outer: number, inner: number, src: Float64Array, so: number, dst: Float64Array, d0: number, add: boolean): void {
+  const { n, nc, own, other, w } = t;
+  for (let o = 0; o < outer; o++) {
+    for (let i = 0; i < n; i++) {
+      const d = d0 + (o * n + i) * inner;
+      const a = so + (o * nc + own[i]) * inner;
+      const wi = w[i];
+      const b = so + (o * nc + other[i]) * inner;
+      const wo = 1 - wi;
+      if (add) for (let m = 0; m < inner; m++) dst[d + m] += wi * src[a + m] + wo * src[b + m];
+      else for (let m = 0; m < inner; m++) dst[d + m] = wi * src[a + m] + wo * src[b + m];
+    }
+  }
+}
+
+export interface TransferApply {
+  /** r_c = P^T r. */
+  restrict(r: Float64Array, rc: Float64Array): void;
+  /** x += P e. */
+  prolongAdd(e: Float64Array, x: Float64Array): void;
+}
+
+/** One pass over a block: the direction, the counts outside and inside it, and where it reads and writes. */
+interface Pass {
+  axis: AxisTransfer;
+  outer: number;
+  inner: number;
+  /** 0: the vector given, 1 and 2: the scratch vectors, 3: the vector returned. */
+  from: number;
+  to: number;
+  fromStart: number;
+  toStart: number;
+}
+
+/** A block (the plate, or one fin) with no coarsened direction is copied (restriction) or added (prolongation). */
+interface BlockPlan {
+  passes: Pass[];
+  fineStart: number;
+  coarseStart: number;
+  size: number;
+}
+
+/**
+ * The passes of P and P^T for a step, planned once; two scratch vectors hold the intermediate shapes of a block
+ * coarsened in more than one direction.
+ */
+export function transferApply(t: SinkTransfer): TransferApply {
+  const blocks: { axes: AxisTransfer[]; fineStart: number; coarseStart: number }[] = [{ axes: [t.x, t.y, t.z], fineStart: 0, coarseStart: 0 }];
+  let fineStart = t.fine.nx * t.fine.ny * t.fine.nz;
+  let coarseStart = t.coarse.nx * t.coarse.ny * t.coarse.nz;
+  t.fine.fins.forEach((f, k) => {
+    blocks.push({ axes: [t.rows[k], t.layers[k]], fineStart, coarseStart });
+    fineStart += f.rows * f.layers;
+    coarseStart += t.coarse.fins[k].rows * t.coarse.fins[k].layers;
+  });
+  let scratch = 0;
+  const product = (dims: number[], from: number, to: number) => dims.slice(from, to).reduce((s, v) => s * v, 1);
+  /** Passes in the order given (restriction: outermost first; prolongation: innermost first). */
+  const plan = (restriction: boolean): BlockPlan[] =>
+    blocks.map((b) => {
+      const dims = b.axes.map((a) => (restriction ? a.n : a.nc));
+      const order = b.axes.map((a, d) => (a.coarsened ? d : -1)).filter((d) => d >= 0);
+      if (!restriction) order.reverse();
+      const passes: Pass[] = [];
+      let from = 0;
+      let fromStart = restriction ? b.fineStart : b.coarseStart;
+      order.forEach((d, index) => {
+        const a = b.axes[d];
+        const last = index === order.length - 1;
+        const to = last ? 3 : from === 1 ? 2 : 1;
+        const toStart = last ? (restriction ? b.coarseStart : b.fineStart) : 0;
+        passes.push({ axis: a, outer: product(dims, 0, d), inner: product(dims, d + 1, dims.length), from, to, fromStart, toStart });
+        dims[d] = restriction ? a.nc : a.n;
+        if (!last) scratch = Math.max(scratch, product(dims, 0, dims.length));
+        from = to;
+        fromStart = toStart;
+      });
+      return { passes, fineStart: b.fineStart, coarseStart: b.coarseStart, size: product(dims, 0, dims.length) };
+    });
+  const restrictPlan = plan(true);
+  const prolongPlan = plan(false);
+  const s1 = new Float64Array(scratch);
+  const s2 = new Float64Array(scratch);
+  const pick = (k: number, given: Float64Array, returned: Float64Array) => (k === 0 ? given : k === 1 ? s1 : k === 2 ? s2 : returned);
+
+  return {
+    restrict(r, rc) {
+      for (const b of restrictPlan) {
+        if (b.passes.length === 0) rc.set(r.subarray(b.fineStart, b.fineStart + b.size), b.coarseStart);
+        for (const q of b.passes) restrictAxis(q.axis, q.outer, q.inner, pick(q.from, r, rc), q.fromStart, pick(q.to, r, rc), q.toStart);
+      }
+    },
+    prolongAdd(e, x) {
+      for (const b of prolongPlan) {
+        if (b.passes.length === 0) for (let m = 0; m < b.size; m++) x[b.fineStart + m] += e[b.coarseStart + m];
+        for (const q of b.passes) prolongAxis(q.axis, q.outer, q.inner, pick(q.from, e, x), q.fromStart, pick(q.to, e, x), q.toStart, q.to === 3);
+      }
+    },
+  };
+}
