@@ -8,6 +8,10 @@
  * [from memory]). The lines are factored once from both ends (twistedFactor below); the elimination
  * multipliers g inv are formed on the fly from the couplings.
  * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0).
+ * Precision 'float32' keeps the sweep's couplings and line factors as Float32Array (half the memory traffic of the
+ * sweeps, which are bound by it); x, b and every sum stay Float64. The sweep is then exact line Gauss-Seidel for a
+ * matrix within ~6e-8 relative of A entry by entry (float32 rounding, eps/2), which is enough for a preconditioner:
+ * CG's own products and residuals use A itself, so the solution's accuracy does not depend on it.
  */
 import { residualExtras, residualFin, residualPlanes, type SinkStencil } from './sink-stencil.js';
 
@@ -21,8 +25,14 @@ export interface StencilRelaxation {
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void;
 }
 
-export function stencilRelaxation(s: SinkStencil): StencilRelaxation {
-  return new StencilLines(s);
+/** Storage of the sweep's coefficients: 'float64' the stencil's own arrays, 'float32' rounded copies. */
+export type RelaxationPrecision = 'float64' | 'float32';
+
+/** A sweep's coefficient array (its values are read as numbers, so the two kinds share the loops). */
+type Coefficients = Float64Array | Float32Array;
+
+export function stencilRelaxation(s: SinkStencil, precision: RelaxationPrecision = 'float64'): StencilRelaxation {
+  return new StencilLines(s, precision);
 }
 
 /**
@@ -30,14 +40,33 @@ export function stencilRelaxation(s: SinkStencil): StencilRelaxation {
  * per level would share one optimised code object across levels and read every captured value from its context.
  */
 class StencilLines implements StencilRelaxation {
-  private readonly inv: Float64Array;
+  private readonly inv: Coefficients;
+  private readonly line: Coefficients;
+  private readonly gx: Coefficients;
+  private readonly gy: Coefficients;
+  private readonly row: Coefficients;
   /** The line's right-hand side, then its eliminated form. */
   private readonly w: Float64Array;
   private readonly finStart: number[] = [];
   private readonly finLine: number[] = [];
 
-  constructor(private readonly s: SinkStencil) {
-    this.inv = twistedFactor(s);
+  constructor(
+    private readonly s: SinkStencil,
+    precision: RelaxationPrecision,
+  ) {
+    if (precision === 'float32') {
+      this.line = new Float32Array(s.line);
+      this.gx = new Float32Array(s.gx);
+      this.gy = new Float32Array(s.gy);
+      this.row = new Float32Array(s.row);
+      this.inv = twistedFactor(s, this.line, new Float32Array(s.n));
+    } else {
+      this.line = s.line;
+      this.gx = s.gx;
+      this.gy = s.gy;
+      this.row = s.row;
+      this.inv = twistedFactor(s, s.line, new Float64Array(s.n));
+    }
     let longest = s.grid.nz;
     for (const f of s.grid.fins) longest = Math.max(longest, f.layers);
     this.w = new Float64Array(longest);
@@ -80,9 +109,9 @@ class StencilLines implements StencilRelaxation {
 
   /** The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours. */
   private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
-    const { grid, line, gx, gy, extraStart, extraFrom, extraTo, extraG } = this.s;
+    const { grid, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { nx, ny, nz } = grid;
-    const { inv, w } = this;
+    const { inv, w, line, gx, gy } = this;
     const sx = ny * nz;
     const interior = i > 0 && i + 1 < nx;
     for (let t = 0; t < ny; t++) {
@@ -98,9 +127,9 @@ class StencilLines implements StencilRelaxation {
 
   /** The rows of fin f, ascending (forward) or descending. */
   private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
-    const { plate, line, row, extraStart, extraFrom, extraTo, extraG } = this.s;
+    const { plate, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { rows, layers } = this.s.grid.fins[f];
-    const { inv, w } = this;
+    const { inv, w, line, row } = this;
     for (let t = 0; t < rows; t++) {
       const r = forward ? t : rows - 1 - t;
       const p0 = this.finStart[f] + r * layers;
@@ -117,8 +146,8 @@ function gatherInterior(
   w: Float64Array,
   b: Float64Array,
   x: Float64Array,
-  gx: Float64Array,
-  gy: Float64Array,
+  gx: Coefficients,
+  gy: Coefficients,
   p0: number,
   nz: number,
   sx: number,
@@ -136,8 +165,8 @@ function gatherEdge(
   w: Float64Array,
   b: Float64Array,
   x: Float64Array,
-  gx: Float64Array,
-  gy: Float64Array,
+  gx: Coefficients,
+  gy: Coefficients,
   p0: number,
   nz: number,
   sx: number,
@@ -161,7 +190,7 @@ function gatherFin(
   w: Float64Array,
   b: Float64Array,
   x: Float64Array,
-  row: Float64Array,
+  row: Coefficients,
   p0: number,
   layers: number,
   plate: number,
@@ -185,7 +214,7 @@ function addExtras(w: Float64Array, x: Float64Array, start: Int32Array, from: In
  * x[p0 .. p0 + len) = T^-1 w, eliminating from both ends towards the middle member m = floor(len / 2) at once
  * (two independent recurrences instead of one twice as long), then substituting back outwards from m.
  */
-function solveLine(w: Float64Array, x: Float64Array, inv: Float64Array, line: Float64Array, p0: number, len: number): void {
+function solveLine(w: Float64Array, x: Float64Array, inv: Coefficients, line: Coefficients, p0: number, len: number): void {
   const m = len >> 1;
   let yTop = 0;
   let gTop = 0;
@@ -225,10 +254,11 @@ function solveLine(w: Float64Array, x: Float64Array, inv: Float64Array, line: Fl
  *   k < m  inv_k = 1 / (A_kk − g_{k−1}^2 inv_{k−1})     (from the top),
  *   k > m  inv_k = 1 / (A_kk − g_k^2 inv_{k+1})          (from the bottom),
  *   k = m  inv_m = 1 / (A_mm − g_{m−1}^2 inv_{m−1} − g_m^2 inv_{m+1}).
+ * `line` the couplings as the sweeps store them, `inv` filled (in float32 storage each inv_k is rounded before the
+ * next step reads it, so the factors are exact for a diagonal within float32 rounding of A's).
  */
-function twistedFactor(s: SinkStencil): Float64Array {
-  const { grid, line, diagonal } = s;
-  const inv = new Float64Array(s.n);
+function twistedFactor(s: SinkStencil, line: Coefficients, inv: Coefficients): Coefficients {
+  const { grid, diagonal } = s;
   const factor = (p0: number, len: number): void => {
     const m = len >> 1;
     for (let k = 0; k < m; k++) {

@@ -46,7 +46,7 @@ export function sinkGridAdjoint(c: HeatSinkCase, spec: SinkGridSpec, source: num
   const grid = gridOf(c);
   const system = assembleSink(problem, grid, spec.finRepresentation);
   const n = system.matrix.n;
-  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold);
+  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32');
   const solved = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
   const theta = solved.x;
   const rise = sinkQuantities(problem, system, theta, pre.method, 0, 0).sourceMeanRise[source] as number;

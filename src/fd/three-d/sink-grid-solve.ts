@@ -25,7 +25,7 @@ export function solveSinkOnGrid(c: HeatSinkCase, spec: SinkGridSpec, start?: Flo
   const problem = sinkProblem(c);
   const grid = buildSinkGrid(problem.layout, { cellSize: spec.cellSize, plateLayers: spec.plateLayers, finLayers: spec.finLayers, refine: spec.refine });
   const system = assembleSink(problem, grid, spec.finRepresentation);
-  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil);
+  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32');
   const x0 = start !== undefined && start.length === system.matrix.n ? Float64Array.from(start) : new Float64Array(system.matrix.n);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
   const q = sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);

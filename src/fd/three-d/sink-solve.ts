@@ -51,7 +51,7 @@ export interface SinkGridResult {
 
 /** `start`: a first guess of theta (e.g. the next coarser grid's solution prolonged); zero when absent. */
 export function solveSinkSystem(problem: SinkProblem, system: SinkSystem, start?: Float64Array): SinkGridResult {
-  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil);
+  const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32');
   const x0 = start !== undefined && start.length === system.matrix.n ? start : new Float64Array(system.matrix.n);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
   if (!isNonlinearSink(problem)) return sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
