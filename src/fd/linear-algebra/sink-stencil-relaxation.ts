@@ -13,14 +13,19 @@
  * matrix within ~6e-8 relative of A entry by entry (float32 rounding, eps/2), which is enough for a preconditioner:
  * CG's own products and residuals use A itself, so the solution's accuracy does not depend on it.
  */
-import { residualExtras, residualFin, residualPlanes, type SinkStencil } from './sink-stencil.js';
+import type { SinkStencil } from './sink-stencil.js';
 
 export interface StencilRelaxation {
   /** One sweep over the lines, forward or backward, updating x in place; fromZero: x is 0 on entry (forward only). */
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero?: boolean): void;
   /**
-   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x, the residual of each plate plane formed
-   * as soon as the sweep has passed the next plane (while both are in cache), each fin's after its rows.
+   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x. Each line l was solved from
+   *   T_l x_l = b_l + sum_{q on lines before l} G_lq x_q    (the lines after l still at 0),
+   * so its residual is the couplings to the lines after it alone, r_l = sum_{q on lines after l} G_lq x_q (the
+   * upper block part of A times x: Gauss-Seidel's residual, Saad 2003, section 4.1 [from memory]), formed with the
+   * sweep's own coefficients: two products per plate cell (x and y successors) and one per fin node instead of
+   * the full difference form. A plate plane's residual is formed as soon as the sweep has passed the next plane
+   * (while both are in cache), each fin's after its rows, the extra couplings (fin roots) last.
    */
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void;
 }
@@ -49,6 +54,8 @@ class StencilLines implements StencilRelaxation {
   private readonly w: Float64Array;
   private readonly finStart: number[] = [];
   private readonly finLine: number[] = [];
+  /** Per extra coupling (extraTo order): 1 when its `to` lies on a line after its `from`'s (or on the same line). */
+  private readonly extraAhead: Uint8Array;
 
   constructor(
     private readonly s: SinkStencil,
@@ -78,6 +85,21 @@ class StencilLines implements StencilRelaxation {
       offset += f.rows * f.layers;
       l0 += f.rows;
     }
+    // Lines are contiguous in index order: `to` is not on an earlier line when it is at or after its line's start.
+    this.extraAhead = new Uint8Array(s.extraTo.length);
+    const lines = s.extraStart.length - 1;
+    const columns = s.grid.nx * s.grid.ny;
+    let fin = -1;
+    let finEnd = columns;
+    for (let l = 0; l < lines; l++) {
+      let start: number;
+      if (l < columns) start = l * s.grid.nz;
+      else {
+        while (l >= finEnd) finEnd += s.grid.fins[++fin].rows;
+        start = this.finStart[fin] + (l - this.finLine[fin]) * s.grid.fins[fin].layers;
+      }
+      for (let e = s.extraStart[l]; e < s.extraStart[l + 1]; e++) this.extraAhead[e] = s.extraTo[e] >= start ? 1 : 0;
+    }
   }
 
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero = false): void {
@@ -93,18 +115,21 @@ class StencilLines implements StencilRelaxation {
 
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
     const s = this.s;
-    const nx = s.grid.nx;
+    const { nx, ny, nz } = s.grid;
     x.fill(0);
     for (let i = 0; i < nx; i++) {
       this.plane(i, b, x, false, true);
-      if (i > 0) residualPlanes(s, x, b, 1, r, i - 1, i);
+      if (i > 0) aheadPlane(r, x, this.gx, this.gy, (i - 1) * ny * nz, ny, nz, true);
     }
-    residualPlanes(s, x, b, 1, r, nx - 1, nx);
+    aheadPlane(r, x, this.gx, this.gy, (nx - 1) * ny * nz, ny, nz, false);
     for (let f = 0; f < s.grid.fins.length; f++) {
       this.fin(f, b, x, false, true);
-      residualFin(s, x, b, 1, r, f);
+      const { rows, layers } = s.grid.fins[f];
+      aheadFin(r, x, this.row, this.finStart[f], rows * layers, layers, s.plate);
     }
-    residualExtras(s, x, 1, r);
+    const { extraFrom, extraTo, extraG } = s;
+    const ahead = this.extraAhead;
+    for (let e = 0; e < extraTo.length; e++) if (ahead[e] === 1) r[extraFrom[e]] += extraG[e] * x[extraTo[e]];
   }
 
   /** The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours. */
@@ -139,6 +164,26 @@ class StencilLines implements StencilRelaxation {
       solveLine(w, x, inv, line, p0, layers);
     }
   }
+}
+
+/** r = the couplings of plate plane at p0 to its successors in y and (east: when there is a next plane) in x. */
+function aheadPlane(r: Float64Array, x: Float64Array, gx: Coefficients, gy: Coefficients, p0: number, ny: number, nz: number, east: boolean): void {
+  const sx = ny * nz;
+  const inner = (ny - 1) * nz;
+  if (east) {
+    for (let q = p0; q < p0 + inner; q++) r[q] = gx[q] * x[q + sx] + gy[q] * x[q + nz];
+    for (let q = p0 + inner; q < p0 + sx; q++) r[q] = gx[q] * x[q + sx];
+  } else {
+    for (let q = p0; q < p0 + inner; q++) r[q] = gy[q] * x[q + nz];
+    for (let q = p0 + inner; q < p0 + sx; q++) r[q] = 0;
+  }
+}
+
+/** r = the couplings of a fin's nodes (from p0, count of them) to the next row's. */
+function aheadFin(r: Float64Array, x: Float64Array, row: Coefficients, p0: number, count: number, layers: number, plate: number): void {
+  const last = p0 + count - layers;
+  for (let q = p0; q < last; q++) r[q] = row[q - plate] * x[q + layers];
+  for (let q = last; q < p0 + count; q++) r[q] = 0;
 }
 
 /** w = b + the couplings of an interior plane's column to its neighbours (ahead: also (i+1, j) and (i, j+1)). */
