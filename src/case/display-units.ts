@@ -177,8 +177,8 @@ export function arrayInUnit(u: DisplayUnit, si: ArrayLike<number>): Float64Array
 
 /** Unit tokens that mark a value as written in US customary units. */
 const usTokens = /(^|[^A-Za-z])(in|inch|inches|ft|foot|feet|mil|degF|fahrenheit|degR|rankine|BTU|Btu|btu|lbf|lbm|lb|hp)([^A-Za-z]|$)/;
-/** Unit tokens that mark a value as written in metric units. */
-const metricTokens = /(^|[^A-Za-z])(m|cm|mm|um|µm|μm|km|degC|celsius|°C|℃|K|kelvin|W|kW|mW|J)([^A-Za-z]|$)/;
+/** Unit tokens that mark a value as written in metric units (µm, μm, °C, ℃ as \u escapes: the bundle stays ASCII, units.ts). */
+const metricTokens = /(^|[^A-Za-z])(m|cm|mm|um|\u00b5m|\u03bcm|km|degC|celsius|\u00b0C|\u2103|K|kelvin|W|kW|mW|J)([^A-Za-z]|$)/;
 
 /**
  * The preset a raw case's inputs suggest: `us` when more of its values carry US units (in, ft, degF, BTU, ...; or

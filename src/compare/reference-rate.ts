@@ -15,6 +15,7 @@ import {
   finProblem,
   finSectionAdjoint,
   finSectionHeatRate,
+  linearFinHeatRate1D,
   solveFinWith,
   type FinGrid,
   type FinStudy,
@@ -37,8 +38,9 @@ export function referenceGridText(grid: ReferenceGrid): string {
 export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid, c: Case): (variant: Case) => number {
   const starts = new Map<string, FinStudy>();
   const solve = (variant: Case, g: FinGrid, id: string): number => {
-    // A linear fin's section: its heat rate alone (the sample's hundreds of variants need no more).
+    // A linear fin: its heat rate alone (the sample's hundreds of variants need no more).
     if (!solvers.nonlinear && g.model === '2d') return finSectionHeatRate(finProblem(variant), g.nx, g.ny);
+    if (!solvers.nonlinear && g.model === '1d') return linearFinHeatRate1D(finProblem(variant), g);
     let start = starts.get(id);
     if (solvers.nonlinear && start === undefined) {
       start = solveFinWith(solvers, finProblem(variant === c ? c : withEdges(c, variant)), g);
@@ -71,7 +73,6 @@ function withEdges(c: Case, variant: Case): Case {
  * derivative(input, d) = dQ/df at f = 1, W, from the case with that input times 1 +- d.
  */
 export function adjointReferenceRate(
-  solvers: GridSolvers,
   grid: Extract<ReferenceGrid, { model: 'fd-2d' }>,
   c: Case,
   solved: Fin2DResult,
@@ -80,8 +81,8 @@ export function adjointReferenceRate(
   const edges = (variant: Case): number => {
     if (!(variant.fin.edges === 'cooled' && isStraight(variant))) return 0;
     const insulated: Case = { ...variant, fin: { ...variant.fin, edges: 'insulated' } };
-    const oneD = (v: Case): number =>
-      solveFinWith(solvers, finProblem(v), { model: '1d', nodes: grid.edges.nodes, grading: grid.edges.grading }).heatRate_W;
+    // A linear fin (the adjoint's): the heat rate alone, as solveFinWith would give it.
+    const oneD = (v: Case): number => linearFinHeatRate1D(finProblem(v), { nodes: grid.edges.nodes, grading: grid.edges.grading });
     return oneD(variant) - oneD(insulated);
   };
   return {

@@ -72,7 +72,7 @@ export function referenceSensitivity(
   const coarsest = grids[grids.length - 1] as ReferenceGrid;
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
   const { sens, method } =
-    twoD !== null && !solvers.nonlinear ? adjointSensitivities(c, solvers, twoD, oneDCoarsest, given) : reSolvedSensitivities(c, solvers, grids, given);
+    twoD !== null && !solvers.nonlinear ? adjointSensitivities(c, twoD, oneDCoarsest, given) : reSolvedSensitivities(c, solvers, grids, given);
   const sampleWork = (opts.sampleSize ?? DEFAULT_SAMPLE_SIZE) * unknownsOf(coarsest) * weight;
   const uncertainty = uncertaintyBand(c, sens, referenceHeatRate, {
     when: opts.sample ?? 'auto',
@@ -101,13 +101,12 @@ export function referenceSensitivity(
  */
 function adjointSensitivities(
   c: Case,
-  solvers: GridSolvers,
   twoD: FinStudy2D,
   edges: { nodes: number; grading: Grading | 'auto' },
   given: ReadonlyMap<string, number>,
 ): { sens: Sensitivity[]; method: string } {
   const grid = { model: 'fd-2d' as const, nx: twoD.finest.grid.nodesX, ny: twoD.finest.grid.nodesY, edges };
-  const reference = adjointReferenceRate(solvers, grid, c, twoD.finest);
+  const reference = adjointReferenceRate(grid, c, twoD.finest);
   const d = SENSITIVITY_STEP;
   const sens = sensitivitiesFrom(c, (input) => reference.derivative(input.scale, d), reference.nominal, given, true, 'adjoint');
   const edgeWords =

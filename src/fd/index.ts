@@ -43,6 +43,7 @@ export type { Resolution, ResolutionBudget } from './study/resolve-study1d.js';
 export { tipBoundary } from './one-d/boundary.js';
 export { grid2dIssue } from './two-d/linear-solve.js';
 export { finSectionAdjoint, finSectionHeatRate } from './two-d/adjoint.js';
+export { linearFinHeatRate1D } from './study/linear-grid-solvers.js';
 export { idealHeatRate } from './one-d/heat-rate.js';
 export type { ExcessField } from './one-d/boundary.js';
 export { baseBoundary, fieldFromTheta, baseHeatRate, tipHeatLoss } from './one-d/boundary.js';

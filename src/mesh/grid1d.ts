@@ -23,6 +23,7 @@
  *   so h_i gets (Δ/12)(P_i + 3 P_q + P_c/2) and h_{i+1} gets (Δ/12)(P_q + P_c/2); mirrored on the
  *   right half.
  */
+import { areaInto, perimeterInto } from './geometry1d.js';
 import type { FinGeometry1D, Grading, GradingEnd, Grid1DSpec, Mesh1D } from './types.js';
 
 /**
@@ -125,7 +126,14 @@ export function gridNodes(geometry: FinGeometry1D, spec: Grid1DSpec): { x: Float
     const a = breakpoints[s];
     const b = breakpoints[s + 1];
     const n = counts[s] * refine;
-    const g = gradingMap(grading, towardBase && s === 0, towardTip && s === segments - 1);
+    const refineStart = towardBase && s === 0;
+    const refineEnd = towardTip && s === segments - 1;
+    if (grading.kind === 'uniform' || (!refineStart && !refineEnd)) {
+      // g(xi) = xi written out: no call per node (a closure called per node is slow until V8 optimises the loop).
+      for (let j = 0; j < n; j++) x[node++] = a + (b - a) * (j / n);
+      continue;
+    }
+    const g = gradingMap(grading, refineStart, refineEnd);
     for (let j = 0; j < n; j++) x[node++] = a + (b - a) * g(j / n);
   }
   x[node] = L;
@@ -155,29 +163,40 @@ export function buildMesh1D(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
 function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
   const { x, cellSize } = gridNodes(geometry, spec);
   const n = x.length;
-  const dx = new Float64Array(n - 1);
-  const interfaceArea = new Float64Array(n - 1);
+  const cells = n - 1;
+  const dx = new Float64Array(cells);
+  const interfaceArea = new Float64Array(cells);
   const weightPrev = new Float64Array(n);
   const weightSelf = new Float64Array(n);
   const weightNext = new Float64Array(n);
-  const P = geometry.perimeter;
-  let pLeft = P(x[0]);
-  for (let i = 0; i < n - 1; i++) {
+  // P at x_i, x_i + Δ/4, the centre and x_i + 3Δ/4 of every cell, then at x_{n-1}; A at the centres: one batch
+  // evaluation each (areaInto, perimeterInto), not five calls of the geometry's closures per cell.
+  const at = new Float64Array(4 * cells + 1);
+  for (let i = 0; i < cells; i++) {
     const xi = x[i];
     const delta = x[i + 1] - xi;
     dx[i] = delta;
-    const centre = xi + 0.5 * delta;
-    interfaceArea[i] = geometry.area(centre);
-    const pQuarter = P(xi + 0.25 * delta);
-    const pCentre = P(centre);
-    const pThreeQuarter = P(xi + 0.75 * delta);
-    const pRight = P(x[i + 1]);
-    const w = delta / 12;
+    at[4 * i] = xi;
+    at[4 * i + 1] = xi + 0.25 * delta;
+    at[4 * i + 2] = xi + 0.5 * delta;
+    at[4 * i + 3] = xi + 0.75 * delta;
+    interfaceArea[i] = xi + 0.5 * delta;
+  }
+  at[4 * cells] = x[cells];
+  areaInto(geometry, interfaceArea, interfaceArea);
+  const p = new Float64Array(at.length);
+  perimeterInto(geometry, at, p);
+  for (let i = 0; i < cells; i++) {
+    const pLeft = p[4 * i];
+    const pQuarter = p[4 * i + 1];
+    const pCentre = p[4 * i + 2];
+    const pThreeQuarter = p[4 * i + 3];
+    const pRight = p[4 * i + 4];
+    const w = dx[i] / 12;
     weightSelf[i] = weightSelf[i] + w * (pLeft + 3 * pQuarter + 0.5 * pCentre);
     weightNext[i] = w * (pQuarter + 0.5 * pCentre);
     weightPrev[i + 1] = w * (0.5 * pCentre + pThreeQuarter);
     weightSelf[i + 1] = w * (0.5 * pCentre + 3 * pThreeQuarter + pRight);
-    pLeft = pRight;
   }
   const cvSurface = new Float64Array(n);
   for (let i = 0; i < n; i++) cvSurface[i] = weightPrev[i] + weightSelf[i] + weightNext[i];
@@ -192,7 +211,8 @@ function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D 
     surfaceWeightNext: weightNext,
     baseArea: geometry.baseArea,
     tipArea: geometry.tipArea,
-    tipPerimeter: geometry.perimeter(geometry.length),
+    // P(L): x[n-1] = L exactly (gridNodes), the last point evaluated.
+    tipPerimeter: p[4 * cells],
     length: geometry.length,
     cellSize,
   };

@@ -41,11 +41,37 @@ export interface FinGeometry1D {
    */
   readonly perimeterIntegral: (a: number, b: number, gA: number, gB: number) => number;
   /**
+   * A(x) and P(x) as data (the profile's closed form), when the geometry came from one: the mesh builder evaluates
+   * them at thousands of points at once through areaInto and perimeterInto (geometry1d.ts), with the same arithmetic
+   * as `area` and `perimeter`, bit for bit. Absent for tabulated profiles and hand-made geometries (then the
+   * builder calls the functions point by point).
+   */
+  readonly formula?: GeometryFormula;
+  /**
    * A string that identifies A(x) and P(x) completely (profile kind, dimensions, edges), when the
    * geometry came from a case: equal keys give equal meshes, so buildMesh1D may reuse one.
    */
   readonly key?: string;
 }
+
+/**
+ * The closed forms behind a geometry's A(x) and P(x) (geometry1d.ts): a straight fin or spine whose size is
+ * tipSize + drop (max(0, 1 - x/L))^exponent (straight: A = width s, P = 2 width + edgeFactor s; pin: A = pi s^2 / 4,
+ * P = pi s), or an annular fin (A = 2 pi (r1 + x) t, P = 4 pi (r1 + x)).
+ */
+export type GeometryFormula =
+  | {
+      readonly kind: 'tapered';
+      readonly shape: 'straight' | 'pin';
+      readonly length: number;
+      readonly tipSize: number;
+      readonly drop: number;
+      readonly exponent: 0 | 0.5 | 1 | 2;
+      readonly width: number;
+      /** 2 when a straight fin's side edges convect, else 0. */
+      readonly edgeFactor: number;
+    }
+  | { readonly kind: 'annular'; readonly innerRadius: number; readonly thickness: number };
 
 /** Which end of the fin a graded grid refines. */
 export type GradingEnd = 'base' | 'tip' | 'both';

@@ -11,7 +11,7 @@
 import { describe, expect, test } from 'vitest';
 import type { Case, Profile } from '../../src/case/types.js';
 import { InputError } from '../../src/errors.js';
-import { finGeometry, taperedGeometry } from '../../src/mesh/geometry1d.js';
+import { areaInto, finGeometry, perimeterInto, taperedGeometry } from '../../src/mesh/geometry1d.js';
 
 const close = (actual: number, expected: number, tolerance = 1e-14) =>
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(tolerance * Math.max(Math.abs(expected), 1e-300));
@@ -155,6 +155,24 @@ describe.each(CASES)('$name', (c) => {
       close(geometry.perimeter(x), c.perimeter(x));
     }
   });
+  test('areaInto and perimeterInto equal A(x) and P(x) bit for bit (the mesh builder batch-evaluates them)', () => {
+    // Exact equality, not a tolerance: the batch forms repeat the scalar functions' arithmetic, so meshes (and every
+    // number a check prints) stay the same whichever form is used. 101 points, the ends included, one beyond L.
+    const xs = Float64Array.from({ length: 102 }, (_, k) => (k / 100) * length);
+    const area = new Float64Array(xs.length);
+    const perimeter = new Float64Array(xs.length);
+    areaInto(geometry, xs, area);
+    perimeterInto(geometry, xs, perimeter);
+    expect(geometry.formula).toBeDefined();
+    for (let k = 0; k < xs.length; k++) {
+      expect(area[k]).toBe(geometry.area(xs[k] as number));
+      expect(perimeter[k]).toBe(geometry.perimeter(xs[k] as number));
+    }
+    // In place (the builder evaluates A over the centres' own array).
+    const inPlace = xs.slice();
+    areaInto(geometry, inPlace, inPlace);
+    expect(Array.from(inPlace)).toEqual(Array.from(area));
+  });
   test('base, tip and face areas; taper exponent', () => {
     close(geometry.baseArea, c.area(0));
     close(geometry.tipArea, c.area(length));
@@ -199,6 +217,19 @@ describe('tabulated profiles', () => {
     close(geometry.faceArea, face);
     expect(geometry.tipArea).toBe(0);
     expect(geometry.tipTaperExponent).toBe(1);
+  });
+  test('a tabulated profile has no formula: areaInto and perimeterInto call A(x) and P(x) point by point', () => {
+    const geometry = finGeometry(caseWith({ kind: 'tabulated', shape: 'straight', x, size: t, width: W }));
+    expect(geometry.formula).toBeUndefined();
+    const xs = new Float64Array([0, 0.005, 0.0175, 0.04]);
+    const area = new Float64Array(4);
+    const perimeter = new Float64Array(4);
+    areaInto(geometry, xs, area);
+    perimeterInto(geometry, xs, perimeter);
+    for (let k = 0; k < 4; k++) {
+      expect(area[k]).toBe(geometry.area(xs[k] as number));
+      expect(perimeter[k]).toBe(geometry.perimeter(xs[k] as number));
+    }
   });
   test('a straight tabulated fin without a width is an input error naming fin.width', () => {
     expect(() => finGeometry(caseWith({ kind: 'tabulated', shape: 'straight', x, size: t }))).toThrow(InputError);

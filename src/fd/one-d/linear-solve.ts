@@ -13,6 +13,7 @@
 import { buildMesh1D, type FinGeometry1D, type Grading, type Mesh1D } from '../../mesh/index.js';
 import { assembleFin1D } from './assemble.js';
 import { hAtNodes, hBreakpoints } from '../problem/convection.js';
+import { baseHeatRate } from './boundary.js';
 import { dropSystem } from './drop-system.js';
 import { finEffectiveness, finHeatRates, idealHeatRate } from './heat-rate.js';
 import type { LinearFinCase } from '../problem/linear-case.js';
@@ -164,16 +165,36 @@ export function solveOnMesh1D(problem: FinProblem1D, mesh: Mesh1D, solver?: Trid
   };
 }
 
-/** Meshes and solves a 1-D fin problem with `nodes` nodes (nested refinement with `refine`). */
-export function solveFinProblem1D(problem: FinProblem1D, opts: Fin1DOptions & { readonly refine?: number }): Fin1DResult {
+/** The mesh of `problem` with `nodes` nodes (nested refinement with `refine`): what solveFinProblem1D solves on. */
+function meshFor(problem: FinProblem1D, opts: Fin1DOptions & { readonly refine?: number }): Mesh1D {
   const geometry = problem.geometry;
-  const mesh = buildMesh1D(geometry, {
+  return buildMesh1D(geometry, {
     cells: Math.max(1, Math.round(opts.nodes) - 1),
     grading: resolveGrading(geometry, opts.grading),
     breakpoints: hBreakpoints(problem.h, geometry.length),
     refine: opts.refine ?? 1,
   });
-  return solveOnMesh1D(problem, mesh, opts.solver);
+}
+
+/** Meshes and solves a 1-D fin problem with `nodes` nodes (nested refinement with `refine`). */
+export function solveFinProblem1D(problem: FinProblem1D, opts: Fin1DOptions & { readonly refine?: number }): Fin1DResult {
+  return solveOnMesh1D(problem, meshFor(problem, opts), opts.solver);
+}
+
+/**
+ * The base heat rate alone of solveFinProblem1D (the same mesh, system, solver and formula, so the same number bit
+ * for bit), W: without the temperatures, the surface balance, the ideal heat rate and the effectiveness that a result
+ * carries. The sensitivities and the uncertainty sample re-solve dozens to hundreds of variants for this one number.
+ */
+export function finHeatRate1D(problem: FinProblem1D, opts: Fin1DOptions & { readonly refine?: number }): number {
+  const mesh = meshFor(problem, opts);
+  const { geometry, conductivity, h, base, tip } = problem;
+  const work = scratchFor(mesh.nodes);
+  const hNodes = hAtNodes(h, mesh.x, geometry.length, work.hNodes);
+  const system = assembleFin1D(mesh, conductivity, hNodes, base, tip, work.system);
+  const drops = dropSystem(system, base.theta, work.rhs);
+  const drop = opts.solver ? opts.solver(drops) : conservativeThomasInto(drops, work.solution, work.factor);
+  return baseHeatRate(base, mesh, conductivity, hNodes, { reference: base.theta, drop });
 }
 
 /** The fd-1d solution of a linear case on one grid of `nodes` nodes. */

@@ -3,11 +3,11 @@
  * (one-d/linear-solve.ts: row-sum Thomas) or 2-D (two-d/linear-solve.ts: banded Cholesky or MG-PCG by grid
  * shape). The default grading of each model.
  */
-import { solveFinProblem1D } from '../one-d/linear-solve.js';
+import { finHeatRate1D, solveFinProblem1D } from '../one-d/linear-solve.js';
 import type { FinProblem1D } from '../one-d/problem.js';
 import type { FinProblem } from '../problem/fin-problem.js';
 import { DEFAULT_GRADING, solveFin2DProblem } from '../two-d/linear-solve.js';
-import type { GridSolvers } from './grid-solver.js';
+import type { Grid1D, GridSolvers } from './grid-solver.js';
 
 /** The linear 1-D problem of a linear fin (constant k, h independent of temperature, no radiation). */
 export function linearProblem1D(problem: FinProblem): FinProblem1D {
@@ -24,3 +24,11 @@ export const linearGridSolvers: GridSolvers = {
   twoD: (problem, grid) =>
     solveFin2DProblem(problem.linear, { nx: grid.nx, ny: grid.ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face }),
 };
+
+/**
+ * The heat rate of a linear fin on one 1-D grid, W: linearGridSolvers.oneD's heatRate (the same number, bit for bit)
+ * without the rest of its result (one-d/linear-solve.ts finHeatRate1D), for the variants of sensitivities and samples.
+ */
+export function linearFinHeatRate1D(problem: FinProblem, grid: Grid1D): number {
+  return finHeatRate1D(linearProblem1D(problem), { nodes: grid.nodes, refine: grid.refine ?? 1, grading: grid.grading ?? 'auto' });
+}

@@ -29,8 +29,13 @@ export interface HeatRates2D {
 
 export function heatRates2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): HeatRates2D {
   // Boundary exchange G (theta - thetaFar) of every node of each non-fixed boundary.
-  const exchangeOf = (side: SideTerms): Float64Array | null =>
-    side.kind === 'fixed' ? null : Float64Array.from(side.nodes, (p, e) => (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta));
+  // A plain loop: Float64Array.from with a map function walks the iterator protocol (~25x slower in V8).
+  const exchangeOf = (side: SideTerms): Float64Array | null => {
+    if (side.kind === 'fixed') return null;
+    const out = new Float64Array(side.nodes.length);
+    for (let e = 0; e < out.length; e++) out[e] = (side.conductance[e] as number) * ((theta[side.nodes[e] as number] as number) - side.farTheta);
+    return out;
+  };
   return heatRatesFromExchange(K, terms, theta, { base: exchangeOf(terms.base), face: exchangeOf(terms.face), tip: exchangeOf(terms.tip) });
 }
 
