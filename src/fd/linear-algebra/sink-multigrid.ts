@@ -22,7 +22,7 @@ import type { Prolongation } from './prolongation.js';
 import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
 import { stencilEntries, stencilFromCsr, stencilLines, stencilMultiply, stencilResidual, stencilToCsr, type SinkStencil } from './sink-stencil.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
-import { stencilRelaxation } from './sink-stencil-relaxation.js';
+import { stencilRelaxation, type RelaxationPrecision } from './sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
 
 export interface Preconditioner {
@@ -83,8 +83,8 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
   };
 }
 
-function stencilLevel(s: SinkStencil): Level {
-  const relax = stencilRelaxation(s);
+function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
+  const relax = stencilRelaxation(s, precision);
   return {
     n: s.n,
     entries: () => stencilEntries(s),
@@ -117,6 +117,10 @@ function linesAreStencilLines(lines: LineSet, grid: SinkLevelGrid): boolean {
  * from the matrix otherwise. Every level in the sheet layout is held as its structured stencil
  * (sink-stencil.ts) with the direction-by-direction transfers of sink-transfer.ts; fins as cells keep their CSR
  * matrix and line relaxation on the finest level.
+ * `precision` is the storage of the stencil levels' smoother coefficients (sink-stencil-relaxation.ts): 'float32'
+ * halves the sweeps' memory traffic and leaves the cycle symmetric only to ~1e-7 relative (the float32 rounding of
+ * the couplings and line factors); CG, whose products and residuals use `a` itself in float64, still reaches the
+ * same residual target (tests/sink/solver.test.ts compares the two).
  */
 export function sinkMultigrid(
   a: CsrMatrix,
@@ -124,6 +128,7 @@ export function sinkMultigrid(
   grid: SinkLevelGrid,
   fold: Prolongation | null = null,
   assembled: SinkStencil | null = null,
+  precision: RelaxationPrecision = 'float64',
 ): Preconditioner {
   const levels: Level[] = [];
   let stencil: SinkStencil | null = null;
@@ -134,7 +139,7 @@ export function sinkMultigrid(
     if (fold !== null) {
       level.down = foldTransfer(fold);
       stencil = stencilFromCsr(galerkinCsr(a, fold), grid);
-      levels.push(stencilLevel(stencil));
+      levels.push(stencilLevel(stencil, precision));
     } else if (a.n > COARSEST) {
       // Lines other than the grid's: the finest level in CSR, every coarser one a stencil.
       if (levelUnknowns(grid) !== a.n) throw new Error('sinkMultigrid: the level grid does not describe the system');
@@ -143,7 +148,7 @@ export function sinkMultigrid(
   } else {
     stencil = assembled ?? stencilFromCsr(a, grid);
     finest = stencil;
-    levels.push(stencilLevel(stencil));
+    levels.push(stencilLevel(stencil, precision));
   }
   if (stencil !== null && stencil.n !== levelUnknowns(grid)) throw new Error('sinkMultigrid: the level grid does not describe the system');
   let g = grid;
@@ -153,7 +158,7 @@ export function sinkMultigrid(
     if (coarse.n === stencil.n) break;
     levels[levels.length - 1].down = transferApply(t);
     stencil = coarse;
-    levels.push(stencilLevel(stencil));
+    levels.push(stencilLevel(stencil, precision));
     g = t.coarse;
   }
   const direct: DenseFactor = denseCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));

@@ -8,21 +8,36 @@
  * [from memory]). The lines are factored once from both ends (twistedFactor below); the elimination
  * multipliers g inv are formed on the fly from the couplings.
  * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0).
+ * Precision 'float32' keeps the sweep's couplings and line factors as Float32Array (half the memory traffic of the
+ * sweeps, which are bound by it); x, b and every sum stay Float64. The sweep is then exact line Gauss-Seidel for a
+ * matrix within ~6e-8 relative of A entry by entry (float32 rounding, eps/2), which is enough for a preconditioner:
+ * CG's own products and residuals use A itself, so the solution's accuracy does not depend on it.
  */
-import { residualExtras, residualFin, residualPlanes, type SinkStencil } from './sink-stencil.js';
+import type { SinkStencil } from './sink-stencil.js';
 
 export interface StencilRelaxation {
   /** One sweep over the lines, forward or backward, updating x in place; fromZero: x is 0 on entry (forward only). */
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero?: boolean): void;
   /**
-   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x, the residual of each plate plane formed
-   * as soon as the sweep has passed the next plane (while both are in cache), each fin's after its rows.
+   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x. Each line l was solved from
+   *   T_l x_l = b_l + sum_{q on lines before l} G_lq x_q    (the lines after l still at 0),
+   * so its residual is the couplings to the lines after it alone, r_l = sum_{q on lines after l} G_lq x_q (the
+   * upper block part of A times x: Gauss-Seidel's residual, Saad 2003, section 4.1 [from memory]), formed with the
+   * sweep's own coefficients: two products per plate cell (x and y successors) and one per fin node instead of
+   * the full difference form. A plate plane's residual is formed as soon as the sweep has passed the next plane
+   * (while both are in cache), each fin's after its rows, the extra couplings (fin roots) last.
    */
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void;
 }
 
-export function stencilRelaxation(s: SinkStencil): StencilRelaxation {
-  return new StencilLines(s);
+/** Storage of the sweep's coefficients: 'float64' the stencil's own arrays, 'float32' rounded copies. */
+export type RelaxationPrecision = 'float64' | 'float32';
+
+/** A sweep's coefficient array (its values are read as numbers, so the two kinds share the loops). */
+type Coefficients = Float64Array | Float32Array;
+
+export function stencilRelaxation(s: SinkStencil, precision: RelaxationPrecision = 'float64'): StencilRelaxation {
+  return new StencilLines(s, precision);
 }
 
 /**
@@ -30,14 +45,35 @@ export function stencilRelaxation(s: SinkStencil): StencilRelaxation {
  * per level would share one optimised code object across levels and read every captured value from its context.
  */
 class StencilLines implements StencilRelaxation {
-  private readonly inv: Float64Array;
+  private readonly inv: Coefficients;
+  private readonly line: Coefficients;
+  private readonly gx: Coefficients;
+  private readonly gy: Coefficients;
+  private readonly row: Coefficients;
   /** The line's right-hand side, then its eliminated form. */
   private readonly w: Float64Array;
   private readonly finStart: number[] = [];
   private readonly finLine: number[] = [];
+  /** Per extra coupling (extraTo order): 1 when its `to` lies on a line after its `from`'s (or on the same line). */
+  private readonly extraAhead: Uint8Array;
 
-  constructor(private readonly s: SinkStencil) {
-    this.inv = twistedFactor(s);
+  constructor(
+    private readonly s: SinkStencil,
+    precision: RelaxationPrecision,
+  ) {
+    if (precision === 'float32') {
+      this.line = new Float32Array(s.line);
+      this.gx = new Float32Array(s.gx);
+      this.gy = new Float32Array(s.gy);
+      this.row = new Float32Array(s.row);
+      this.inv = twistedFactor(s, this.line, new Float32Array(s.n));
+    } else {
+      this.line = s.line;
+      this.gx = s.gx;
+      this.gy = s.gy;
+      this.row = s.row;
+      this.inv = twistedFactor(s, s.line, new Float64Array(s.n));
+    }
     let longest = s.grid.nz;
     for (const f of s.grid.fins) longest = Math.max(longest, f.layers);
     this.w = new Float64Array(longest);
@@ -48,6 +84,21 @@ class StencilLines implements StencilRelaxation {
       this.finLine.push(l0);
       offset += f.rows * f.layers;
       l0 += f.rows;
+    }
+    // Lines are contiguous in index order: `to` is not on an earlier line when it is at or after its line's start.
+    this.extraAhead = new Uint8Array(s.extraTo.length);
+    const lines = s.extraStart.length - 1;
+    const columns = s.grid.nx * s.grid.ny;
+    let fin = -1;
+    let finEnd = columns;
+    for (let l = 0; l < lines; l++) {
+      let start: number;
+      if (l < columns) start = l * s.grid.nz;
+      else {
+        while (l >= finEnd) finEnd += s.grid.fins[++fin].rows;
+        start = this.finStart[fin] + (l - this.finLine[fin]) * s.grid.fins[fin].layers;
+      }
+      for (let e = s.extraStart[l]; e < s.extraStart[l + 1]; e++) this.extraAhead[e] = s.extraTo[e] >= start ? 1 : 0;
     }
   }
 
@@ -64,25 +115,28 @@ class StencilLines implements StencilRelaxation {
 
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
     const s = this.s;
-    const nx = s.grid.nx;
+    const { nx, ny, nz } = s.grid;
     x.fill(0);
     for (let i = 0; i < nx; i++) {
       this.plane(i, b, x, false, true);
-      if (i > 0) residualPlanes(s, x, b, 1, r, i - 1, i);
+      if (i > 0) aheadPlane(r, x, this.gx, this.gy, (i - 1) * ny * nz, ny, nz, true);
     }
-    residualPlanes(s, x, b, 1, r, nx - 1, nx);
+    aheadPlane(r, x, this.gx, this.gy, (nx - 1) * ny * nz, ny, nz, false);
     for (let f = 0; f < s.grid.fins.length; f++) {
       this.fin(f, b, x, false, true);
-      residualFin(s, x, b, 1, r, f);
+      const { rows, layers } = s.grid.fins[f];
+      aheadFin(r, x, this.row, this.finStart[f], rows * layers, layers, s.plate);
     }
-    residualExtras(s, x, 1, r);
+    const { extraFrom, extraTo, extraG } = s;
+    const ahead = this.extraAhead;
+    for (let e = 0; e < extraTo.length; e++) if (ahead[e] === 1) r[extraFrom[e]] += extraG[e] * x[extraTo[e]];
   }
 
   /** The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours. */
   private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
-    const { grid, line, gx, gy, extraStart, extraFrom, extraTo, extraG } = this.s;
+    const { grid, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { nx, ny, nz } = grid;
-    const { inv, w } = this;
+    const { inv, w, line, gx, gy } = this;
     const sx = ny * nz;
     const interior = i > 0 && i + 1 < nx;
     for (let t = 0; t < ny; t++) {
@@ -98,9 +152,9 @@ class StencilLines implements StencilRelaxation {
 
   /** The rows of fin f, ascending (forward) or descending. */
   private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
-    const { plate, line, row, extraStart, extraFrom, extraTo, extraG } = this.s;
+    const { plate, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { rows, layers } = this.s.grid.fins[f];
-    const { inv, w } = this;
+    const { inv, w, line, row } = this;
     for (let t = 0; t < rows; t++) {
       const r = forward ? t : rows - 1 - t;
       const p0 = this.finStart[f] + r * layers;
@@ -112,13 +166,33 @@ class StencilLines implements StencilRelaxation {
   }
 }
 
+/** r = the couplings of plate plane at p0 to its successors in y and (east: when there is a next plane) in x. */
+function aheadPlane(r: Float64Array, x: Float64Array, gx: Coefficients, gy: Coefficients, p0: number, ny: number, nz: number, east: boolean): void {
+  const sx = ny * nz;
+  const inner = (ny - 1) * nz;
+  if (east) {
+    for (let q = p0; q < p0 + inner; q++) r[q] = gx[q] * x[q + sx] + gy[q] * x[q + nz];
+    for (let q = p0 + inner; q < p0 + sx; q++) r[q] = gx[q] * x[q + sx];
+  } else {
+    for (let q = p0; q < p0 + inner; q++) r[q] = gy[q] * x[q + nz];
+    for (let q = p0 + inner; q < p0 + sx; q++) r[q] = 0;
+  }
+}
+
+/** r = the couplings of a fin's nodes (from p0, count of them) to the next row's. */
+function aheadFin(r: Float64Array, x: Float64Array, row: Coefficients, p0: number, count: number, layers: number, plate: number): void {
+  const last = p0 + count - layers;
+  for (let q = p0; q < last; q++) r[q] = row[q - plate] * x[q + layers];
+  for (let q = last; q < p0 + count; q++) r[q] = 0;
+}
+
 /** w = b + the couplings of an interior plane's column to its neighbours (ahead: also (i+1, j) and (i, j+1)). */
 function gatherInterior(
   w: Float64Array,
   b: Float64Array,
   x: Float64Array,
-  gx: Float64Array,
-  gy: Float64Array,
+  gx: Coefficients,
+  gy: Coefficients,
   p0: number,
   nz: number,
   sx: number,
@@ -136,8 +210,8 @@ function gatherEdge(
   w: Float64Array,
   b: Float64Array,
   x: Float64Array,
-  gx: Float64Array,
-  gy: Float64Array,
+  gx: Coefficients,
+  gy: Coefficients,
   p0: number,
   nz: number,
   sx: number,
@@ -161,7 +235,7 @@ function gatherFin(
   w: Float64Array,
   b: Float64Array,
   x: Float64Array,
-  row: Float64Array,
+  row: Coefficients,
   p0: number,
   layers: number,
   plate: number,
@@ -185,7 +259,7 @@ function addExtras(w: Float64Array, x: Float64Array, start: Int32Array, from: In
  * x[p0 .. p0 + len) = T^-1 w, eliminating from both ends towards the middle member m = floor(len / 2) at once
  * (two independent recurrences instead of one twice as long), then substituting back outwards from m.
  */
-function solveLine(w: Float64Array, x: Float64Array, inv: Float64Array, line: Float64Array, p0: number, len: number): void {
+function solveLine(w: Float64Array, x: Float64Array, inv: Coefficients, line: Coefficients, p0: number, len: number): void {
   const m = len >> 1;
   let yTop = 0;
   let gTop = 0;
@@ -225,10 +299,11 @@ function solveLine(w: Float64Array, x: Float64Array, inv: Float64Array, line: Fl
  *   k < m  inv_k = 1 / (A_kk − g_{k−1}^2 inv_{k−1})     (from the top),
  *   k > m  inv_k = 1 / (A_kk − g_k^2 inv_{k+1})          (from the bottom),
  *   k = m  inv_m = 1 / (A_mm − g_{m−1}^2 inv_{m−1} − g_m^2 inv_{m+1}).
+ * `line` the couplings as the sweeps store them, `inv` filled (in float32 storage each inv_k is rounded before the
+ * next step reads it, so the factors are exact for a diagonal within float32 rounding of A's).
  */
-function twistedFactor(s: SinkStencil): Float64Array {
-  const { grid, line, diagonal } = s;
-  const inv = new Float64Array(s.n);
+function twistedFactor(s: SinkStencil, line: Coefficients, inv: Coefficients): Coefficients {
+  const { grid, diagonal } = s;
   const factor = (p0: number, len: number): void => {
     const m = len >> 1;
     for (let k = 0; k < m; k++) {

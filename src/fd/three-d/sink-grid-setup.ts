@@ -33,7 +33,7 @@ export function sinkGridOf(problem: SinkProblem, spec: SinkGridSpec): SinkGrid {
 /** `grid`: the spec's grid when the caller has built it already. */
 export function sinkGridSetup(problem: SinkProblem, spec: SinkGridSpec, grid: SinkGrid = sinkGridOf(problem, spec)): SinkGridSetup {
   const system = assembleSink(problem, grid, spec.finRepresentation);
-  return { grid, system, pre: sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil) };
+  return { grid, system, pre: sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32') };
 }
 
 /** Whether two specs describe the same grid. */

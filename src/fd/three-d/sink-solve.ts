@@ -57,7 +57,7 @@ export function solveSinkSystem(
   problem: SinkProblem,
   system: SinkSystem,
   start?: Float64Array,
-  pre: Preconditioner = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil),
+  pre: Preconditioner = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32'),
 ): SinkGridResult {
   const x0 = start !== undefined && start.length === system.matrix.n ? start : new Float64Array(system.matrix.n);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
