@@ -12,7 +12,7 @@
 import { describe, expect, it } from 'vitest';
 import { powerLawHAdiabaticFin } from '../../src/analytic/index.js';
 import type { Conductivity, HDistribution } from '../../src/case/index.js';
-import { studySink } from '../../src/fd/index.js';
+import { solveSinkOnGrid, studySink } from '../../src/fd/index.js';
 import { plateFin, sinkCase, type SinkInputs } from './support/sink-case.js';
 
 const one = { grids: 1 };
@@ -149,5 +149,23 @@ describe('Newton on a realistic natural-convection sink', () => {
     const study = studySink(sinkCase({ ...sink, h: { kind: 'power', base: 6, exponent: n } as HDistribution }), one);
     expect(Number(/\((\d+) steps/.exec(study.solver.method)?.[1])).toBeLessThanOrEqual(4);
     expect(study.energyBalance).toBeLessThan(1e-9);
+  });
+});
+
+describe("a nonlinear sink re-solved on one grid (the sensitivities' central differences) takes Newton too", () => {
+  // solveSinkOnGrid is what the check's sensitivities re-solve a variant with; before this test it solved the linear
+  // system alone, so a power-law sink's slopes were those of the constant h at the base value. Same grid, same
+  // Newton: equal to the study's own finest grid to the solver's tolerance (residual 1e-10 -> 1e-7 relative here).
+  it.each([
+    ['a power-law h', sinkCase({ ...sink, h: { kind: 'power', base: 6, exponent: 0.25 } })],
+    ['a k(T) table', withK(sink, { kind: 'table', T_degC: Float64Array.of(0, 200), k: Float64Array.of(200, 150) })],
+  ] as const)('%s', (_, c) => {
+    const study = studySink(c, one);
+    expect(study.finestGrid).toBeDefined();
+    const again = solveSinkOnGrid(c, study.finestGrid!);
+    study.sources.forEach((s, k) => expect(again.sourceMeanRise[k]! / s.meanRise_K - 1).toBeCloseTo(0, 7));
+    // and it is not the linear model's answer: the law moves the rise by more than the tolerance above
+    const linear = studySink(sinkCase(sink), one);
+    expect(Math.abs(again.sourceMeanRise[0]! / linear.sources[0]!.meanRise_K - 1)).toBeGreaterThan(1e-3);
   });
 });

@@ -2,13 +2,16 @@
  * A heat sink on one given fd-3d grid (no refinement study), optionally started from another solution on a grid
  * of the same shape: what perturbed re-solves need (check's sensitivities: the sink with one input changed by a
  * relative 1e-4 differs from the case by that much, so CG started from the case's solution needs a fraction of
- * the iterations from zero). Returns each source's mean rise (K) and the solution to start the next from.
+ * the iterations from zero). A nonlinear sink (power-law h, k(T)) is solved as the study solves it: the linear
+ * system, then Newton in the Kirchhoff potential (sink-solve.ts). Returns each source's mean rise (K) and the linear
+ * solution to start the next variant's linear solve from.
  */
 import type { HeatSinkCase } from '../../case/index.js';
 import { sparsePcg } from '../linear-algebra/sparse-pcg.js';
 import { sinkGridSetup } from './sink-grid-setup.js';
 import { sinkProblem } from './sink-problem.js';
-import { RESIDUAL_TARGET, sinkQuantities } from './sink-solve.js';
+import { solveSinkNewton } from './sink-newton.js';
+import { isNonlinearSink, RESIDUAL_TARGET, sinkQuantities } from './sink-solve.js';
 import type { SinkGridSpec } from './sink-study-types.js';
 
 export interface SinkGridSolution {
@@ -24,6 +27,12 @@ export function solveSinkOnGrid(c: HeatSinkCase, spec: SinkGridSpec, start?: Flo
   const { system, pre } = sinkGridSetup(problem, spec);
   const x0 = start !== undefined && start.length === system.matrix.n ? Float64Array.from(start) : new Float64Array(system.matrix.n);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
-  const q = sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
-  return { sourceMeanRise: q.sourceMeanRise, theta, iterations: report.iterations };
+  if (!isNonlinearSink(problem)) {
+    const q = sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
+    return { sourceMeanRise: q.sourceMeanRise, theta, iterations: report.iterations };
+  }
+  const newton = solveSinkNewton(problem, system, theta, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
+  const iterations = report.iterations + newton.cgIterations;
+  const q = sinkQuantities(problem, system, newton.phi, 'Newton', iterations, newton.relativeResidual, newton.faces);
+  return { sourceMeanRise: q.sourceMeanRise, theta, iterations };
 }
