@@ -187,7 +187,10 @@ async function largeThinGrid(): Promise<BenchRow[]> {
   ];
   // While the automatic choice is not the band, the banded Cholesky is measured too (the thin-grid solver).
   if (choice !== null && choice !== 'banded-cholesky')
-    candidates.push({ solver: 'banded', item: `${nx}x${ny} thin-fin grid solve, bandedCholeskySolver` });
+    candidates.push({
+      solver: 'banded',
+      item: `${nx}x${ny} thin-fin grid solve, bandedCholeskySolver (for comparison: grids that are not Kronecker sums)`,
+    });
   const measured: { item: string; report: ChildReport }[] = [];
   const rows: BenchRow[] = [];
   for (const { solver, item } of candidates) {
@@ -206,13 +209,15 @@ async function largeThinGrid(): Promise<BenchRow[]> {
   }
   for (const { item, report } of measured) {
     const ratio = baseline === null ? '' : `; ${ratioText(baseline, report)}`;
+    // The target is the automatic choice's (what a check runs); the band, when it is not the choice, is shown beside it.
+    const judged = item === candidates[0]?.item;
     rows.push({
       area: AREA,
       item: item.replace(/autoSolver2D \(chose [^)]*\)/, report.solver),
-      target,
+      target: judged ? target : '-',
       measured: formatMs(report.medianMs),
       cpu: cpuText(report.cpuMedianMs),
-      verdict: atMost(report.medianMs, 600),
+      verdict: judged ? atMost(report.medianMs, 600) : 'info',
       note: `${childNote(report)}; a banded Cholesky factor takes ${(bandedCholeskyBytes(nx, ny) / 2 ** 20).toFixed(0)} MB${ratio}`,
     });
   }
