@@ -11,21 +11,9 @@ import { sinkMultigrid } from '../../src/fd/linear-algebra/sink-multigrid.js';
 import { assembleSink, type FinRepresentation } from '../../src/fd/three-d/sink-system.js';
 import { solveSinkSystem } from '../../src/fd/three-d/sink-solve.js';
 import { sinkProblem } from '../../src/fd/three-d/sink-problem.js';
-import { plateFin, sinkCase } from './support/sink-case.js';
+import { smallSink } from './support/sink-case.js';
 
-const small = (kind: 'pins' | 'plates') =>
-  sinkCase({
-    plate: [0.02, 0.016, 0.003],
-    kPlate: 150,
-    kFin: 200,
-    fin: kind === 'pins' ? { kind: 'pin', length: 0.012, diameter: 0.003 } : plateFin(0.012, 0.002, 0.016),
-    array: kind === 'pins' ? { kind: 'pins', rows: 2, columns: 3, pitch: [0.006, 0.007], pattern: 'inline' } : { kind: 'plates', count: 3, pitch: 0.006 },
-    hPlate: 25,
-    hUnderside: 5,
-    h: { kind: 'linear', base: 60, tip: 30 },
-    tip: { kind: 'convective', h: null },
-    sources: [{ centre: [0.008, 0.007], size: [0.006, 0.006], power: 4, contactResistance: 1e-5 }],
-  });
+const small = smallSink;
 
 function dense(a: CsrMatrix): Matrix {
   const m = Matrix.zeros(a.n, a.n);

@@ -15,7 +15,8 @@ import { coarsenSinkLevel, coarseningDirections, levelLines, type SinkLevelGrid 
 import { csrEntry, csrMultiply, csrResidual, type CsrMatrix } from '../../src/fd/linear-algebra/csr.js';
 import { buildLineRelaxation } from '../../src/fd/linear-algebra/line-relaxation.js';
 import { sinkCoarseOperator } from '../../src/fd/linear-algebra/sink-coarse-operator.js';
-import { stencilFromCsr, stencilMultiply, stencilResidual, stencilToCsr, type SinkStencil } from '../../src/fd/linear-algebra/sink-stencil.js';
+import { stencilFromCsr, stencilToCsr, type SinkStencil } from '../../src/fd/linear-algebra/sink-stencil.js';
+import { stencilMultiply, stencilResidual } from '../../src/fd/linear-algebra/sink-stencil-product.js';
 import { stencilCoarseOperator } from '../../src/fd/linear-algebra/sink-stencil-coarse.js';
 import { stencilRelaxation } from '../../src/fd/linear-algebra/sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply } from '../../src/fd/linear-algebra/sink-transfer.js';

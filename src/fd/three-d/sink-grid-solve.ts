@@ -7,11 +7,9 @@
  * solution to start the next variant's linear solve from.
  */
 import type { HeatSinkCase } from '../../case/index.js';
-import { sparsePcg } from '../linear-algebra/sparse-pcg.js';
 import { sinkGridSetup } from './sink-grid-setup.js';
 import { sinkProblem } from './sink-problem.js';
-import { solveSinkNewton } from './sink-newton.js';
-import { isNonlinearSink, RESIDUAL_TARGET, sinkQuantities } from './sink-solve.js';
+import { solveSinkSystemWithLinear } from './sink-solve.js';
 import type { SinkGridSpec } from './sink-study-types.js';
 
 export interface SinkGridSolution {
@@ -20,19 +18,11 @@ export interface SinkGridSolution {
   iterations: number;
 }
 
-const MAX_ITERATIONS = 400;
-
 export function solveSinkOnGrid(c: HeatSinkCase, spec: SinkGridSpec, start?: Float64Array): SinkGridSolution {
   const problem = sinkProblem(c);
   const { system, pre } = sinkGridSetup(problem, spec);
-  const x0 = start !== undefined && start.length === system.matrix.n ? Float64Array.from(start) : new Float64Array(system.matrix.n);
-  const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
-  if (!isNonlinearSink(problem)) {
-    const q = sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
-    return { sourceMeanRise: q.sourceMeanRise, theta, iterations: report.iterations };
-  }
-  const newton = solveSinkNewton(problem, system, theta, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
-  const iterations = report.iterations + newton.cgIterations;
-  const q = sinkQuantities(problem, system, newton.phi, 'Newton', iterations, newton.relativeResidual, newton.faces);
-  return { sourceMeanRise: q.sourceMeanRise, theta, iterations };
+  // A copy: the caller's start is shared by every variant's re-solve, and CG overwrites its start.
+  const x0 = start !== undefined && start.length === system.matrix.n ? Float64Array.from(start) : undefined;
+  const { result, linear } = solveSinkSystemWithLinear(problem, system, x0, pre);
+  return { sourceMeanRise: result.sourceMeanRise, theta: linear, iterations: result.iterations };
 }

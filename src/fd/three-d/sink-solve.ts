@@ -50,8 +50,8 @@ export interface SinkGridResult {
 }
 
 /**
- * `start`: a first guess of theta (e.g. the next coarser grid's solution prolonged); zero when absent. `pre`: the
- * system's multigrid when the caller has built it (sink-grid-setup.ts).
+ * `start`: a first guess of theta (e.g. the next coarser grid's solution prolonged; it is overwritten); zero when
+ * absent. `pre`: the system's multigrid when the caller has built it (sink-grid-setup.ts).
  */
 export function solveSinkSystem(
   problem: SinkProblem,
@@ -59,12 +59,29 @@ export function solveSinkSystem(
   start?: Float64Array,
   pre: Preconditioner = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32'),
 ): SinkGridResult {
+  return solveSinkSystemWithLinear(problem, system, start, pre).result;
+}
+
+/**
+ * As solveSinkSystem, with the linear system's solution beside the result (for a nonlinear sink, Newton's start):
+ * what re-solves of perturbed variants start their linear solve from (sink-grid-solve.ts).
+ */
+export function solveSinkSystemWithLinear(
+  problem: SinkProblem,
+  system: SinkSystem,
+  start: Float64Array | undefined,
+  pre: Preconditioner,
+): { result: SinkGridResult; linear: Float64Array } {
   const x0 = start !== undefined && start.length === system.matrix.n ? start : new Float64Array(system.matrix.n);
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
-  if (!isNonlinearSink(problem)) return sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual);
+  if (!isNonlinearSink(problem))
+    return { result: sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual), linear: theta };
   const newton = solveSinkNewton(problem, system, theta, pre, RESIDUAL_TARGET, MAX_ITERATIONS);
   const method = `Newton in the Kirchhoff potential (${newton.steps} steps from the linear solve at the base h), each step by ${pre.method}`;
-  return sinkQuantities(problem, system, newton.phi, method, report.iterations + newton.cgIterations, newton.relativeResidual, newton.faces);
+  return {
+    result: sinkQuantities(problem, system, newton.phi, method, report.iterations + newton.cgIterations, newton.relativeResidual, newton.faces),
+    linear: theta,
+  };
 }
 
 /** A sink that needs Newton: a power-law h on the fins or a k(T) table. */

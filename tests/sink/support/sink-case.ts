@@ -66,3 +66,22 @@ export function sinkCase(inputs: SinkInputs): HeatSinkCase {
 export function plateFin(height: number, thickness: number, plateLength: number): ArrayFinProfile {
   return { kind: 'rectangular', length: height, thickness, width: plateLength };
 }
+
+/**
+ * A small sink of pins (2 x 3, inline) or three plate fins on a 20 x 16 x 3 mm plate, a linear h and one source with
+ * a contact resistance: every kind of coupling the solvers handle, on a grid small enough for a dense reference.
+ */
+export function smallSink(kind: 'pins' | 'plates'): HeatSinkCase {
+  return sinkCase({
+    plate: [0.02, 0.016, 0.003],
+    kPlate: 150,
+    kFin: 200,
+    fin: kind === 'pins' ? { kind: 'pin', length: 0.012, diameter: 0.003 } : plateFin(0.012, 0.002, 0.016),
+    array: kind === 'pins' ? { kind: 'pins', rows: 2, columns: 3, pitch: [0.006, 0.007], pattern: 'inline' } : { kind: 'plates', count: 3, pitch: 0.006 },
+    hPlate: 25,
+    hUnderside: 5,
+    h: { kind: 'linear', base: 60, tip: 30 },
+    tip: { kind: 'convective', h: null },
+    sources: [{ centre: [0.008, 0.007], size: [0.006, 0.006], power: 4, contactResistance: 1e-5 }],
+  });
+}
