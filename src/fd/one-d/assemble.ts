@@ -24,6 +24,23 @@ import { convectiveConductance, interfaceConductance } from './conductance.js';
 import { createTridiagonalSystem, type RowSumSystem } from '../linear-algebra/tridiagonal-system.js';
 
 /**
+ * Working arrays a repeated solve may hand to the assembly (linear-solve.ts): the convective conductances G_i come
+ * back in `convective` (the heat rates need them again), and `conductance`, when given, holds the interface
+ * conductances K_i = k A / Δx of this very mesh and conductivity (interfaceConductances), which then are not divided
+ * out again. The same numbers either way.
+ */
+export interface AssemblyParts {
+  readonly convective: Float64Array;
+  readonly conductance?: Float64Array;
+}
+
+/** K_i of every interface of `mesh` for conductivity k (W/(m*K)) into `out` (length >= mesh.nodes - 1), W/K. */
+export function interfaceConductances(mesh: Mesh1D, conductivity: number, out: Float64Array): Float64Array {
+  for (let i = 0; i < mesh.nodes - 1; i++) out[i] = interfaceConductance(mesh, conductivity, i);
+  return out;
+}
+
+/**
  * Assembles the fin system on a mesh for conductivity k (W/(m*K)) and nodal h (W/(m^2*K)).
  * Writes into `into` when given (length = mesh.nodes), else allocates. Returns the system only
  * (lower, diag, upper, rhs and the row sums of the same matrix).
@@ -35,18 +52,31 @@ export function assembleFin1D(
   base: BaseBoundary,
   tip: TipBoundary,
   into?: RowSumSystem,
+  parts?: AssemblyParts,
 ): RowSumSystem {
   const n = mesh.nodes;
   const system = into ?? createTridiagonalSystem(n);
   const { lower, diag, upper, rhs, rowSum } = system;
-  for (let i = 0; i < n; i++) {
-    const convective = convectiveConductance(mesh, hNodes, i);
-    diag[i] = convective;
-    rowSum[i] = convective;
-    rhs[i] = 0;
+  if (parts === undefined) {
+    for (let i = 0; i < n; i++) {
+      const convective = convectiveConductance(mesh, hNodes, i);
+      diag[i] = convective;
+      rowSum[i] = convective;
+      rhs[i] = 0;
+    }
+  } else {
+    const g = parts.convective;
+    for (let i = 0; i < n; i++) {
+      const convective = convectiveConductance(mesh, hNodes, i);
+      g[i] = convective;
+      diag[i] = convective;
+      rowSum[i] = convective;
+      rhs[i] = 0;
+    }
   }
+  const known = parts?.conductance;
   for (let i = 0; i < n - 1; i++) {
-    const conductance = interfaceConductance(mesh, conductivity, i);
+    const conductance = known === undefined ? interfaceConductance(mesh, conductivity, i) : (known[i] as number);
     diag[i] = (diag[i] as number) + conductance;
     diag[i + 1] = (diag[i + 1] as number) + conductance;
     upper[i] = -conductance;

@@ -30,7 +30,10 @@ export interface FinHeatRates1D {
   readonly energyBalance: number;
 }
 
-/** Base and surface heat rates of a solution (θ_i = reference - drop_i, K) and their energy balance. */
+/**
+ * Base and surface heat rates of a solution (θ_i = reference - drop_i, K) and their energy balance. `convective`:
+ * the G_i of every node as the assembly computed them (AssemblyParts), instead of computing them again.
+ */
 export function finHeatRates(
   mesh: Mesh1D,
   conductivity: number,
@@ -38,12 +41,17 @@ export function finHeatRates(
   base: BaseBoundary,
   tip: TipBoundary,
   field: ExcessField,
+  convective?: Float64Array,
 ): FinHeatRates1D {
   const heatRate = baseHeatRate(base, mesh, conductivity, hNodes, field);
   let surfaceHeatRate = tipHeatLoss(tip, mesh, conductivity, hNodes, field);
   const { reference, drop } = field;
-  for (let i = 0; i < mesh.nodes; i++) {
-    surfaceHeatRate += convectiveConductance(mesh, hNodes, i) * (reference - (drop[i] as number));
+  if (convective === undefined) {
+    for (let i = 0; i < mesh.nodes; i++) {
+      surfaceHeatRate += convectiveConductance(mesh, hNodes, i) * (reference - (drop[i] as number));
+    }
+  } else {
+    for (let i = 0; i < mesh.nodes; i++) surfaceHeatRate += (convective[i] as number) * (reference - (drop[i] as number));
   }
   const scale = Math.max(Math.abs(heatRate), Math.abs(surfaceHeatRate));
   const energyBalance = scale === 0 ? 0 : Math.abs(heatRate - surfaceHeatRate) / (Math.abs(heatRate) || scale);

@@ -11,7 +11,7 @@
  * Celik et al. 2008, J. Fluids Eng. 130(7), 078001 (refinement.ts).
  */
 import { buildMesh1D, type FinGeometry1D, type Grading, type Mesh1D } from '../../mesh/index.js';
-import { assembleFin1D } from './assemble.js';
+import { assembleFin1D, interfaceConductances, type AssemblyParts } from './assemble.js';
 import { hAtNodes, hBreakpoints } from '../problem/convection.js';
 import { baseHeatRate } from './boundary.js';
 import { dropSystem } from './drop-system.js';
@@ -111,6 +111,12 @@ interface Scratch1D {
   rhs: Float64Array;
   solution: Float64Array;
   factor: Float64Array;
+  /** G_i of the last assembly. */
+  convective: Float64Array;
+  /** K_i of `conductanceMesh` at `conductanceK`: a map walking h at one geometry reuses them at every point. */
+  conductance: Float64Array;
+  conductanceMesh: Mesh1D | null;
+  conductanceK: number;
 }
 
 /**
@@ -130,10 +136,24 @@ function scratchFor(n: number): Scratch1D {
       rhs: new Float64Array(n),
       solution: new Float64Array(n),
       factor: new Float64Array(n),
+      convective: new Float64Array(n),
+      conductance: new Float64Array(n),
+      conductanceMesh: null,
+      conductanceK: Number.NaN,
     };
     scratch.set(n, s);
   }
   return s;
+}
+
+/** The assembly's working arrays for `mesh` at conductivity k, the interface conductances computed only when they changed. */
+function assemblyParts(work: Scratch1D, mesh: Mesh1D, conductivity: number): AssemblyParts {
+  if (work.conductanceMesh !== mesh || work.conductanceK !== conductivity) {
+    interfaceConductances(mesh, conductivity, work.conductance);
+    work.conductanceMesh = mesh;
+    work.conductanceK = conductivity;
+  }
+  return { convective: work.convective, conductance: work.conductance };
 }
 
 /** Solves a 1-D fin problem on a given mesh (default solver: the row-sum two-sided Thomas, scratch arrays). */
@@ -142,14 +162,15 @@ export function solveOnMesh1D(problem: FinProblem1D, mesh: Mesh1D, solver?: Trid
   // The working arrays are scratch (reused by the next solve of the same size); only theta is returned.
   const work = scratchFor(mesh.nodes);
   const hNodes = hAtNodes(h, mesh.x, geometry.length, work.hNodes);
-  const system = assembleFin1D(mesh, conductivity, hNodes, base, tip, work.system);
+  const parts = assemblyParts(work, mesh, conductivity);
+  const system = assembleFin1D(mesh, conductivity, hNodes, base, tip, work.system, parts);
   // Solve for the drop below the base excess, δ = θ_b - θ (accurate base conduction: drop-system.ts).
   const drops = dropSystem(system, base.theta, work.rhs);
   const drop = solver ? solver(drops) : conservativeThomasInto(drops, work.solution, work.factor);
   const field = { reference: base.theta, drop };
   const theta = new Float64Array(mesh.nodes);
   for (let i = 0; i < mesh.nodes; i++) theta[i] = base.theta - (field.drop[i] as number);
-  const rates = finHeatRates(mesh, conductivity, hNodes, base, tip, field);
+  const rates = finHeatRates(mesh, conductivity, hNodes, base, tip, field, parts.convective);
   const ideal = idealHeatRate(geometry, h, tip, base.theta);
   return {
     model: 'fd-1d',
@@ -191,7 +212,7 @@ export function finHeatRate1D(problem: FinProblem1D, opts: Fin1DOptions & { read
   const { geometry, conductivity, h, base, tip } = problem;
   const work = scratchFor(mesh.nodes);
   const hNodes = hAtNodes(h, mesh.x, geometry.length, work.hNodes);
-  const system = assembleFin1D(mesh, conductivity, hNodes, base, tip, work.system);
+  const system = assembleFin1D(mesh, conductivity, hNodes, base, tip, work.system, assemblyParts(work, mesh, conductivity));
   const drops = dropSystem(system, base.theta, work.rhs);
   const drop = opts.solver ? opts.solver(drops) : conservativeThomasInto(drops, work.solution, work.factor);
   return baseHeatRate(base, mesh, conductivity, hNodes, { reference: base.theta, drop });

@@ -43,10 +43,21 @@ export function hBreakpoints(h: LinearHDistribution, length: number): Float64Arr
   return Float64Array.from(Array.from(h.x).filter((x) => x > 0 && x < length));
 }
 
-/** h at every node, W/(m^2*K) (written into `out` when given). */
+/**
+ * h at every node, W/(m^2*K) (written into `out` when given): hAt at each node, with the uniform and linear kinds
+ * written out (the same expressions, so the same numbers) instead of a call per node.
+ */
 export function hAtNodes(h: LinearHDistribution, x: Float64Array, length: number, out?: Float64Array): Float64Array {
   const values = out ?? new Float64Array(x.length);
-  for (let i = 0; i < x.length; i++) values[i] = hAt(h, x[i] as number, length);
+  const n = x.length;
+  if (h.kind === 'uniform') {
+    values.fill(h.h, 0, n);
+  } else if (h.kind === 'linear') {
+    const { base, tip } = h;
+    for (let i = 0; i < n; i++) values[i] = base + ((tip - base) * (x[i] as number)) / length;
+  } else {
+    for (let i = 0; i < n; i++) values[i] = hAt(h, x[i] as number, length);
+  }
   return values;
 }
 
