@@ -14,6 +14,7 @@ import { caseName } from './case-name.js';
 import { getByKeyPath } from './key-path.js';
 import { dimensionWarnings } from './plausibility.js';
 import { caseSchemaFor } from './schema.js';
+import { isProfileName } from './fin-profile-schema.js';
 import { readUncertainty } from './uncertainty.js';
 import { isHeatSinkObject } from './heat-sink-detect.js';
 import { resolveExtends } from './extends.js';
@@ -42,7 +43,8 @@ export function parseCaseObject(given: unknown, givenLocate?: Locate, options: P
   }
   const lengthUnit = bareLengthUnit(raw);
   // jitless: one case is parsed per run, and compiling zod's fast path (new Function) costs more than it saves.
-  const result = caseSchemaFor(lengthUnit).safeParse(raw, { jitless: true });
+  const profile = getByKeyPath(raw, ['fin', 'profile']);
+  const result = caseSchemaFor(lengthUnit, isProfileName(profile) ? profile : undefined).safeParse(raw, { jitless: true });
   const pending = result.success ? checkCase(result.data) : fromZodIssues(result.error.issues, raw);
   if (pending.length > 0 || !result.success) {
     throw new InputError(sortByPosition(toInputIssues(pending, raw, locate)), options.file);

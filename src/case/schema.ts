@@ -9,7 +9,7 @@
 import { z } from 'zod';
 import { contactResistanceRange, mapping, quantity, temperatureRange, word } from './fields.js';
 import { convectionSchemasOf } from './convection-schema.js';
-import { finProfileSchema } from './fin-profile-schema.js';
+import { finProfileSchema, type ProfileName } from './fin-profile-schema.js';
 import { materialSchemaOf } from './material-schema.js';
 import { lengthUnits, type LengthUnit } from './units.js';
 import { displayKinds, displayUnitChoices, type DisplayKind } from './display-units.js';
@@ -28,11 +28,12 @@ const displayDescriptions: Record<DisplayKind, string> = {
 
 /**
  * The case schema whose bare lengths are in `lengthUnit` (`units: { length: mm }`); every other key is the same.
- * Built once per unit (see caseSchemaFor).
+ * `profile`: the fin schema holds that profile alone (finProfileSchema). Built once per unit and profile (see
+ * caseSchemaFor).
  */
-function buildCaseSchema(lengthUnit: LengthUnit) {
+function buildCaseSchema(lengthUnit: LengthUnit, profile?: ProfileName) {
   const lengthOptions = lengthUnit === 'm' ? {} : { bareUnit: lengthUnit };
-  const finSchema = finProfileSchema(lengthOptions);
+  const finSchema = finProfileSchema(lengthOptions, profile);
   const materialSchema = materialSchemaOf();
   const { coefficient, hSchema, tipSchema, convectionSchema } = convectionSchemasOf(lengthOptions);
 
@@ -121,20 +122,25 @@ function buildCaseSchema(lengthUnit: LengthUnit) {
 }
 
 type BuiltSchema = ReturnType<typeof buildCaseSchema>;
-const schemas = new Map<LengthUnit, BuiltSchema>();
+const schemas = new Map<string, BuiltSchema>();
 
-function builtFor(lengthUnit: LengthUnit): BuiltSchema {
-  let built = schemas.get(lengthUnit);
+function builtFor(lengthUnit: LengthUnit, profile?: ProfileName): BuiltSchema {
+  const key = `${lengthUnit}|${profile ?? ''}`;
+  let built = schemas.get(key);
   if (built === undefined) {
-    built = buildCaseSchema(lengthUnit);
-    schemas.set(lengthUnit, built);
+    built = buildCaseSchema(lengthUnit, profile);
+    schemas.set(key, built);
   }
   return built;
 }
 
-/** The schema for a case whose bare lengths are in `lengthUnit`. */
-export function caseSchemaFor(lengthUnit: LengthUnit): BuiltSchema['caseMapping'] {
-  return builtFor(lengthUnit).caseMapping;
+/**
+ * The schema for a case whose bare lengths are in `lengthUnit`. `profile`: the fin profile the case names, when it
+ * names a known one; the schema then builds that profile's keys alone and parses such a case exactly as the whole
+ * schema does (finProfileSchema). Without it (or for any other input), the whole schema.
+ */
+export function caseSchemaFor(lengthUnit: LengthUnit, profile?: ProfileName): BuiltSchema['caseMapping'] {
+  return builtFor(lengthUnit, profile).caseMapping;
 }
 
 /** The parts a heat-sink case shares with a single-fin case (name, units, material, h, tip, a coefficient). */
