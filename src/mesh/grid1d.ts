@@ -160,6 +160,31 @@ export function buildMesh1D(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
   return mesh;
 }
 
+/**
+ * Working arrays of buildMesh1DUncached: the points where P is evaluated (four per cell and the tip) and P there.
+ * Plain temporaries (the mesh keeps none of them), kept between builds: a check builds a dozen meshes of up to
+ * 16 000 points and a map hundreds, and fresh arrays made a good part of their garbage.
+ */
+let perimeterPoints = new Float64Array(0);
+/** Larger meshes (a study refined toward its budget) get arrays of their own: at most 2 MB are kept. */
+const MAX_KEPT_POINTS = 131072;
+let perimeterValues = new Float64Array(0);
+
+/**
+ * A and P of a geometry whose section does not change along the fin (a rectangular fin, a pin: the tapered formula
+ * with exponent 0), evaluated once by areaInto and perimeterInto (their value at any x), or null.
+ */
+function constantSection(geometry: FinGeometry1D): { area: number; perimeter: number } | null {
+  const f = geometry.formula;
+  if (f === undefined || f.kind !== 'tapered' || f.exponent !== 0) return null;
+  const at = new Float64Array([0]);
+  const area = new Float64Array(1);
+  const perimeter = new Float64Array(1);
+  areaInto(geometry, at, area);
+  perimeterInto(geometry, at, perimeter);
+  return { area: area[0] as number, perimeter: perimeter[0] as number };
+}
+
 function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D {
   const { x, cellSize } = gridNodes(geometry, spec);
   const n = x.length;
@@ -169,34 +194,60 @@ function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D 
   const weightPrev = new Float64Array(n);
   const weightSelf = new Float64Array(n);
   const weightNext = new Float64Array(n);
-  // P at x_i, x_i + Δ/4, the centre and x_i + 3Δ/4 of every cell, then at x_{n-1}; A at the centres: one batch
-  // evaluation each (areaInto, perimeterInto), not five calls of the geometry's closures per cell.
-  const at = new Float64Array(4 * cells + 1);
-  for (let i = 0; i < cells; i++) {
-    const xi = x[i];
-    const delta = x[i + 1] - xi;
-    dx[i] = delta;
-    at[4 * i] = xi;
-    at[4 * i + 1] = xi + 0.25 * delta;
-    at[4 * i + 2] = xi + 0.5 * delta;
-    at[4 * i + 3] = xi + 0.75 * delta;
-    interfaceArea[i] = xi + 0.5 * delta;
-  }
-  at[4 * cells] = x[cells];
-  areaInto(geometry, interfaceArea, interfaceArea);
-  const p = new Float64Array(at.length);
-  perimeterInto(geometry, at, p);
-  for (let i = 0; i < cells; i++) {
-    const pLeft = p[4 * i];
-    const pQuarter = p[4 * i + 1];
-    const pCentre = p[4 * i + 2];
-    const pThreeQuarter = p[4 * i + 3];
-    const pRight = p[4 * i + 4];
-    const w = dx[i] / 12;
-    weightSelf[i] = weightSelf[i] + w * (pLeft + 3 * pQuarter + 0.5 * pCentre);
-    weightNext[i] = w * (pQuarter + 0.5 * pCentre);
-    weightPrev[i + 1] = w * (0.5 * pCentre + pThreeQuarter);
-    weightSelf[i + 1] = w * (0.5 * pCentre + 3 * pThreeQuarter + pRight);
+  const constant = constantSection(geometry);
+  let tipPerimeter: number;
+  if (constant !== null) {
+    // The same sums as below with every P equal (so the same numbers), without evaluating P at 4 points a cell.
+    const { area, perimeter } = constant;
+    for (let i = 0; i < cells; i++) {
+      const delta = x[i + 1] - x[i];
+      dx[i] = delta;
+      interfaceArea[i] = area;
+      const w = delta / 12;
+      weightSelf[i] = weightSelf[i] + w * (perimeter + 3 * perimeter + 0.5 * perimeter);
+      weightNext[i] = w * (perimeter + 0.5 * perimeter);
+      weightPrev[i + 1] = w * (0.5 * perimeter + perimeter);
+      weightSelf[i + 1] = w * (0.5 * perimeter + 3 * perimeter + perimeter);
+    }
+    tipPerimeter = perimeter;
+  } else {
+    // P at x_i, x_i + Δ/4, the centre and x_i + 3Δ/4 of every cell, then at x_{n-1}; A at the centres: one batch
+    // evaluation each (areaInto, perimeterInto), not five calls of the geometry's closures per cell.
+    const points = 4 * cells + 1;
+    if (perimeterPoints.length < points && points <= MAX_KEPT_POINTS) {
+      perimeterPoints = new Float64Array(points);
+      perimeterValues = new Float64Array(points);
+    }
+    const kept = points <= perimeterPoints.length;
+    const at = kept ? perimeterPoints.subarray(0, points) : new Float64Array(points);
+    const p = kept ? perimeterValues.subarray(0, points) : new Float64Array(points);
+    for (let i = 0; i < cells; i++) {
+      const xi = x[i];
+      const delta = x[i + 1] - xi;
+      dx[i] = delta;
+      at[4 * i] = xi;
+      at[4 * i + 1] = xi + 0.25 * delta;
+      at[4 * i + 2] = xi + 0.5 * delta;
+      at[4 * i + 3] = xi + 0.75 * delta;
+      interfaceArea[i] = xi + 0.5 * delta;
+    }
+    at[4 * cells] = x[cells];
+    areaInto(geometry, interfaceArea, interfaceArea);
+    perimeterInto(geometry, at, p);
+    for (let i = 0; i < cells; i++) {
+      const pLeft = p[4 * i];
+      const pQuarter = p[4 * i + 1];
+      const pCentre = p[4 * i + 2];
+      const pThreeQuarter = p[4 * i + 3];
+      const pRight = p[4 * i + 4];
+      const w = dx[i] / 12;
+      weightSelf[i] = weightSelf[i] + w * (pLeft + 3 * pQuarter + 0.5 * pCentre);
+      weightNext[i] = w * (pQuarter + 0.5 * pCentre);
+      weightPrev[i + 1] = w * (0.5 * pCentre + pThreeQuarter);
+      weightSelf[i + 1] = w * (0.5 * pCentre + 3 * pThreeQuarter + pRight);
+    }
+    // P(L): x[n-1] = L exactly (gridNodes), the last point evaluated.
+    tipPerimeter = p[4 * cells];
   }
   const cvSurface = new Float64Array(n);
   for (let i = 0; i < n; i++) cvSurface[i] = weightPrev[i] + weightSelf[i] + weightNext[i];
@@ -211,8 +262,7 @@ function buildMesh1DUncached(geometry: FinGeometry1D, spec: Grid1DSpec): Mesh1D 
     surfaceWeightNext: weightNext,
     baseArea: geometry.baseArea,
     tipArea: geometry.tipArea,
-    // P(L): x[n-1] = L exactly (gridNodes), the last point evaluated.
-    tipPerimeter: p[4 * cells],
+    tipPerimeter,
     length: geometry.length,
     cellSize,
   };
