@@ -278,9 +278,20 @@ export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinG
   };
 }
 
+/**
+ * Geometries already made, by the case's `fin` object (read-only data, as the whole case): a check asks for its
+ * fin's geometry several times (the problem, the shortcuts, each variant of h or k, which shares `fin`), and a
+ * geometry and its key cost tens of microseconds, at every point of a map.
+ */
+const geometries = new WeakMap<Case['fin'], FinGeometry1D>();
+
 /** The 1-D geometry of a case's fin, for every profile of the case-file contract. */
 export function finGeometry(c: Case): FinGeometry1D {
-  return { ...profileGeometry(c), key: geometryKey(c) };
+  const known = geometries.get(c.fin);
+  if (known !== undefined) return known;
+  const geometry = { ...profileGeometry(c), key: geometryKey(c) };
+  geometries.set(c.fin, geometry);
+  return geometry;
 }
 
 /** Identifies a case's A(x) and P(x): the profile with its dimensions (typed arrays as lists) and the edges. */

@@ -64,6 +64,11 @@ export function hAtNodes(h: LinearHDistribution, x: Float64Array, length: number
 /** Exact ∫_0^L h P dx, W/K: h is linear between its own kinks and the geometry's breakpoints. */
 export function idealConvectiveConductance(geometry: FinGeometry1D, h: LinearHDistribution): number {
   const L = geometry.length;
+  const bp = geometry.breakpoints;
+  // One piece [0, L] (h without kinks, a profile without breakpoints): the loop below with xs = [0, L], without
+  // gathering, sorting and filtering the cuts (every fd-1d solve asks for it).
+  if (h.kind !== 'points' && L > 0 && bp.length === 2 && bp[0] === 0 && bp[1] === L)
+    return 0 + geometry.perimeterIntegral(0, L, hAt(h, 0, L), hAt(h, L, L));
   const cuts = new Set<number>([0, L, ...geometry.breakpoints, ...hBreakpoints(h, L)]);
   const xs = Array.from(cuts)
     .filter((x) => x >= 0 && x <= L)
