@@ -1,10 +1,10 @@
 /**
- * Small PNG images made in memory (pngjs) and embedded in the SVG as data URIs: heat-map
- * cells and colour-bar gradients. pngjs writes the same bytes for the same pixels (fixed filter
- * and deflate settings), so charts stay byte-for-byte reproducible.
+ * Small PNG images made in memory (png-write.ts) and embedded in the SVG as data URIs: heat-map
+ * cells and colour-bar gradients. The same pixels give the same bytes (fixed filter and deflate
+ * settings), so charts stay byte-for-byte reproducible.
  */
 
-import { PNG } from 'pngjs';
+import { writePng } from './png-write.js';
 
 /** An RGBA image, rows top to bottom, 4 bytes a pixel. */
 export interface RgbaImage {
@@ -34,20 +34,21 @@ export function chooseRowFilter(image: RgbaImage): 1 | 2 {
   let upZeros = 0;
   for (let y = 0; y < height; y++) {
     const row = y * stride;
-    for (let k = 0; k < stride; k++) {
-      const v = data[row + k] as number;
-      if (v === (k >= 4 ? (data[row + k - 4] as number) : 0)) subZeros++;
-      if (v === (y > 0 ? (data[row + k - stride] as number) : 0)) upZeros++;
+    // Sub compares the first pixel with 0 and Up the first row with 0 (the bytes before the image are 0).
+    for (let k = 0; k < stride && k < 4; k++) if (data[row + k] === 0) subZeros++;
+    for (let k = row + 4; k < row + stride; k++) if (data[k] === data[k - 4]) subZeros++;
+    if (y === 0) {
+      for (let k = 0; k < stride; k++) if (data[k] === 0) upZeros++;
+    } else {
+      for (let k = row; k < row + stride; k++) if (data[k] === data[k - stride]) upZeros++;
     }
   }
   return upZeros > subZeros ? 2 : 1;
 }
 
-/** Encodes an RGBA image as PNG bytes (colour type 6, 8 bits). */
+/** Encodes an RGBA image as PNG bytes (colour type 6, 8 bits; png-write.ts, the bytes pngjs wrote before it). */
 export function encodePng(image: RgbaImage): Buffer {
-  const png = new PNG({ width: image.width, height: image.height, colorType: 6, inputHasAlpha: true });
-  png.data = Buffer.from(image.data.buffer, image.data.byteOffset, image.data.byteLength);
-  return PNG.sync.write(png, { colorType: 6, deflateLevel: 6, filterType: chooseRowFilter(image) });
+  return writePng(image, chooseRowFilter(image));
 }
 
 /** PNG bytes as a data URI for an SVG <image href>. */
