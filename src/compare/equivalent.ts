@@ -40,9 +40,22 @@ function meanOver(f: (x: number) => number, L: number): number {
   return (s * dx) / 3 / L;
 }
 
+/** Mean sections already computed, by geometry (read-only; finGeometry gives a case's fin one geometry object). */
+const meanAreas = new WeakMap<FinGeometry1D, number>();
+
+/** The mean section of the fin, m^2: meanOver(A), once per geometry (a map's column of points shares one). */
+function meanArea(geometry: FinGeometry1D): number {
+  let A = meanAreas.get(geometry);
+  if (A === undefined) {
+    A = meanOver(geometry.area, geometry.length);
+    meanAreas.set(geometry, A);
+  }
+  return A;
+}
+
 export function equivalentUniformFin(c: LinearFinCase, geometry: FinGeometry1D): EquivalentUniformFin {
   const L = geometry.length;
-  const A = meanOver(geometry.area, L);
+  const A = meanArea(geometry);
   const P = geometry.faceArea / L;
   const h = idealConvectiveConductance(geometry, c.convection.h) / geometry.faceArea;
   const tip = c.convection.tip;
