@@ -40,6 +40,11 @@ export interface Preconditioner {
    * csrMultiply and csrResidual, up to the order of the sums); null otherwise.
    */
   operator?(a: CsrMatrix): StructuredOperator | null;
+  /**
+   * A vector of the system's size that apply overwrites and leaves free between applications (the finest level's
+   * residual), for a caller's own scratch: CG keeps A p there, one new vector fewer to touch.
+   */
+  readonly workspace?: Float64Array;
 }
 
 export interface StructuredOperator {
@@ -61,10 +66,17 @@ interface Level {
   /** x = 0, a forward sweep, then r = b − A x. */
   presmooth(b: Float64Array, x: Float64Array, r: Float64Array): void;
   down: TransferApply | null;
+  /**
+   * Work vectors, allocated on first use (levelVectors): the finest level's b and x are the cycle's arguments, so
+   * it needs r alone and the coarsest needs no r; each vector not made saves its first touch, which costs more
+   * than the arithmetic on it (the kernel maps and zeroes every new page: ~3 ms per MB on the development machine).
+   */
   r: Float64Array;
   x: Float64Array;
   b: Float64Array;
 }
+
+const EMPTY = new Float64Array(0);
 
 function csrLevel(a: CsrMatrix, lines: LineSet): Level {
   const relax = buildLineRelaxation(a, lines);
@@ -78,9 +90,9 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
       csrResidual(a, x, b, r);
     },
     down: null,
-    r: new Float64Array(a.n),
-    x: new Float64Array(a.n),
-    b: new Float64Array(a.n),
+    r: EMPTY,
+    x: EMPTY,
+    b: EMPTY,
   };
 }
 
@@ -92,10 +104,21 @@ function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
     smooth: (b, x, direction, fromZero) => relax.sweep(b, x, direction, fromZero),
     presmooth: (b, x, r) => relax.forwardResidual(b, x, r),
     down: null,
-    r: new Float64Array(s.n),
-    x: new Float64Array(s.n),
-    b: new Float64Array(s.n),
+    r: EMPTY,
+    x: EMPTY,
+    b: EMPTY,
   };
+}
+
+/** Each level's work vectors: r where a coarser level follows, b and x below the finest. */
+function levelVectors(levels: Level[]): void {
+  levels.forEach((level, l) => {
+    if (l + 1 < levels.length) level.r = new Float64Array(level.n);
+    if (l > 0) {
+      level.b = new Float64Array(level.n);
+      level.x = new Float64Array(level.n);
+    }
+  });
 }
 
 /** The CSR fold (fins as cells onto sheets) as a level's transfers. */
@@ -163,6 +186,7 @@ export function sinkMultigrid(
     g = t.coarse;
   }
   const direct: DenseFactor = denseCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
+  levelVectors(levels);
 
   const cycle = (l: number, b: Float64Array, x: Float64Array): void => {
     const level = levels[l];
@@ -187,12 +211,12 @@ export function sinkMultigrid(
     apply(r, z) {
       cycle(0, r, z);
     },
+    workspace: levels.length > 1 ? levels[0].r : undefined,
     operator(m) {
       if (m !== a || finest === null) return null;
       const s = finest;
-      const zero = new Float64Array(s.n);
       return {
-        multiply: (x, out) => stencilMultiply(s, x, zero, out),
+        multiply: (x, out) => stencilMultiply(s, x, out),
         residual(x, b, out) {
           stencilResidual(s, x, b, out);
           let norm = 0;

@@ -12,9 +12,13 @@ export function stencilResidual(s: SinkStencil, x: Float64Array, b: Float64Array
   differenceForm(s, x, b, 1, out);
 }
 
-/** out = A x in the difference form, with `zero` a vector of zeros (out may not alias x). */
-export function stencilMultiply(s: SinkStencil, x: Float64Array, zero: Float64Array, out: Float64Array): void {
-  differenceForm(s, x, zero, -1, out);
+/**
+ * out = A x in the difference form (out may not alias x): out is zeroed and serves as b, which each node reads
+ * just before it writes its own entry (no vector of zeros to read).
+ */
+export function stencilMultiply(s: SinkStencil, x: Float64Array, out: Float64Array): void {
+  out.fill(0);
+  differenceForm(s, x, out, -1, out);
 }
 
 /**

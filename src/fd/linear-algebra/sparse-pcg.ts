@@ -34,7 +34,8 @@ export function sparsePcg(
   const r = new Float64Array(n);
   const z = new Float64Array(n);
   const p = new Float64Array(n);
-  const q = new Float64Array(n);
+  // A p lives in the preconditioner's free vector when it offers one (used only between applications).
+  const q = m.workspace?.length === n ? m.workspace : new Float64Array(n);
   // The preconditioner's structured copy of A multiplies faster than the CSR form (no column indices).
   const op = m.operator?.(a) ?? {
     multiply: (v: Float64Array, out: Float64Array) => csrMultiply(a, v, out),
