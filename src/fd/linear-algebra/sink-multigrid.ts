@@ -48,8 +48,8 @@ export interface Preconditioner {
 }
 
 export interface StructuredOperator {
-  /** out = A x. */
-  multiply(x: Float64Array, out: Float64Array): void;
+  /** out = A x; returns x · out. */
+  multiply(x: Float64Array, out: Float64Array): number;
   /** out = b − A x (difference form); returns |out|_1. */
   residual(x: Float64Array, b: Float64Array, out: Float64Array): number;
 }
@@ -110,10 +110,15 @@ function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
   };
 }
 
-/** Each level's work vectors: r where a coarser level follows, b and x below the finest. */
+/**
+ * Each level's work vectors: b and x below the finest; r where a coarser level follows, all of them views of one
+ * vector of the finest size, since a level's residual is read only by its restriction, before the next level
+ * forms its own (the cycle's order: presmooth, restrict, recurse).
+ */
 function levelVectors(levels: Level[]): void {
+  const residual = new Float64Array(levels.length > 1 ? levels[0].n : 0);
   levels.forEach((level, l) => {
-    if (l + 1 < levels.length) level.r = new Float64Array(level.n);
+    if (l + 1 < levels.length) level.r = residual.subarray(0, level.n);
     if (l > 0) {
       level.b = new Float64Array(level.n);
       level.x = new Float64Array(level.n);
@@ -178,7 +183,7 @@ export function sinkMultigrid(
   let g = grid;
   while (stencil !== null && stencil.n > COARSEST) {
     const t = sinkTransfer(g, coarseningDirections(g));
-    const coarse = stencilCoarseOperator(stencil, t);
+    const coarse = stencilCoarseOperator(stencil, t, precision);
     if (coarse.n === stencil.n) break;
     levels[levels.length - 1].down = transferApply(t);
     stencil = coarse;

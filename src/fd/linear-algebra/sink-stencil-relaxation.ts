@@ -62,10 +62,12 @@ class StencilLines implements StencilRelaxation {
     precision: RelaxationPrecision,
   ) {
     if (precision === 'float32') {
-      this.line = new Float32Array(s.line);
-      this.gx = new Float32Array(s.gx);
-      this.gy = new Float32Array(s.gy);
-      this.row = new Float32Array(s.row);
+      // A coarse level built in float32 (sink-stencil-coarse.ts) is used as it is.
+      const single = (v: Coefficients) => (v instanceof Float32Array ? v : new Float32Array(v));
+      this.line = single(s.line);
+      this.gx = single(s.gx);
+      this.gy = single(s.gy);
+      this.row = single(s.row);
       this.inv = twistedFactor(s, this.line, new Float32Array(s.n));
     } else {
       this.line = s.line;

@@ -38,7 +38,10 @@ export function sparsePcg(
   const q = m.workspace?.length === n ? m.workspace : new Float64Array(n);
   // The preconditioner's structured copy of A multiplies faster than the CSR form (no column indices).
   const op = m.operator?.(a) ?? {
-    multiply: (v: Float64Array, out: Float64Array) => csrMultiply(a, v, out),
+    multiply(v: Float64Array, out: Float64Array) {
+      csrMultiply(a, v, out);
+      return dot(v, out);
+    },
     residual: (v: Float64Array, rhs: Float64Array, out: Float64Array) => csrResidual(a, v, rhs, out),
   };
   let relative = op.residual(x, b, r) / scale;
@@ -50,8 +53,7 @@ export function sparsePcg(
     p.set(z);
     let rz = dot(r, z);
     for (let it = 0; it < maxIterations; it++) {
-      op.multiply(p, q);
-      const pq = dot(p, q);
+      const pq = op.multiply(p, q);
       if (!(pq > 0) || !(rz > 0)) break;
       const alpha = rz / pq;
       let size = 0;
