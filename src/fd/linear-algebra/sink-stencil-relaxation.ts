@@ -7,7 +7,8 @@
  * an SPD matrix (Saad, "Iterative Methods for Sparse Linear Systems", 2nd ed. 2003, sections 4.1 and 9.2
  * [from memory]). The lines are factored once from both ends (twistedFactor below); the elimination
  * multipliers g inv are formed on the fly from the couplings.
- * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0).
+ * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0), so it reads
+ * no entry of x before writing it and x need not be zeroed first.
  * Precision 'float32' keeps the sweep's couplings and line factors as Float32Array (half the memory traffic of the
  * sweeps, which are bound by it); x, b and every sum stay Float64. The sweep is then exact line Gauss-Seidel for a
  * matrix within ~6e-8 relative of A entry by entry (float32 rounding, eps/2), which is enough for a preconditioner:
@@ -16,10 +17,10 @@
 import type { SinkStencil } from './sink-stencil.js';
 
 export interface StencilRelaxation {
-  /** One sweep over the lines, forward or backward, updating x in place; fromZero: x is 0 on entry (forward only). */
+  /** One sweep over the lines, forward or backward, updating x in place; fromZero: as from x = 0 (x's values on entry are not read; forward only). */
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero?: boolean): void;
   /**
-   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x. Each line l was solved from
+   * A forward sweep from x = 0 (x's values on entry are not read) followed by r = b − A x. Each line l was solved from
    *   T_l x_l = b_l + sum_{q on lines before l} G_lq x_q    (the lines after l still at 0),
    * so its residual is the couplings to the lines after it alone, r_l = sum_{q on lines after l} G_lq x_q (the
    * upper block part of A times x: Gauss-Seidel's residual, Saad 2003, section 4.1 [from memory]), formed with the
@@ -118,7 +119,8 @@ class StencilLines implements StencilRelaxation {
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
     const s = this.s;
     const { nx, ny, nz } = s.grid;
-    x.fill(0);
+    // No x.fill(0): a sweep from zero reads only members of lines it has already solved (the extra couplings to
+    // later lines and to its own line skipped, addExtras), so every x it reads it has written.
     for (let i = 0; i < nx; i++) {
       this.plane(i, b, x, false, true);
       if (i > 0) aheadPlane(r, x, this.gx, this.gy, (i - 1) * ny * nz, ny, nz, true);
@@ -147,7 +149,7 @@ class StencilLines implements StencilRelaxation {
       if (interior) gatherInterior(w, b, x, gx, gy, p0, nz, sx, ahead);
       else gatherEdge(w, b, x, gx, gy, p0, nz, sx, i > 0, j > 0, ahead && i + 1 < nx, ahead && j + 1 < ny);
       const l = i * ny + j;
-      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0);
+      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0, ahead ? null : this.extraAhead);
       solveLine(w, x, inv, line, p0, nz);
     }
   }
@@ -162,7 +164,7 @@ class StencilLines implements StencilRelaxation {
       const p0 = this.finStart[f] + r * layers;
       gatherFin(w, b, x, row, p0, layers, plate, r > 0, ahead && r + 1 < rows);
       const l = this.finLine[f] + r;
-      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0);
+      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0, ahead ? null : this.extraAhead);
       solveLine(w, x, inv, line, p0, layers);
     }
   }
@@ -252,9 +254,22 @@ function gatherFin(
   }
 }
 
-/** w += the extra couplings' part of line l's right-hand side. */
-function addExtras(w: Float64Array, x: Float64Array, start: Int32Array, from: Int32Array, to: Int32Array, g: Float64Array, l: number, p0: number): void {
-  for (let e = start[l]; e < start[l + 1]; e++) w[from[e] - p0] += g[e] * x[to[e]];
+/**
+ * w += the extra couplings' part of line l's right-hand side; `skip` given (a sweep from zero): without the
+ * couplings it flags (to a later line or the same one, whose x is still 0 in such a sweep).
+ */
+function addExtras(
+  w: Float64Array,
+  x: Float64Array,
+  start: Int32Array,
+  from: Int32Array,
+  to: Int32Array,
+  g: Float64Array,
+  l: number,
+  p0: number,
+  skip: Uint8Array | null,
+): void {
+  for (let e = start[l]; e < start[l + 1]; e++) if (skip === null || skip[e] === 0) w[from[e] - p0] += g[e] * x[to[e]];
 }
 
 /**
