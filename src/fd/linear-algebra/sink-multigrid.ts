@@ -27,8 +27,8 @@ import { stencilRelaxation, type RelaxationPrecision } from './sink-stencil-rela
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
 
 export interface Preconditioner {
-  /** z = M^-1 r (r unchanged). */
-  apply(r: Float64Array, z: Float64Array): void;
+  /** z = M^-1 r (r unchanged); returns r · z (CG's next inner product, summed as the cycle's last sweep forms z). */
+  apply(r: Float64Array, z: Float64Array): number;
   /** A line describing the method, for reports. */
   readonly method: string;
   /** Unknowns per level, finest first. */
@@ -62,7 +62,8 @@ interface Level {
   n: number;
   /** Stored matrix entries (counted when asked). */
   entries(): number;
-  smooth(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero: boolean): void;
+  /** A backward sweep; withDot: returns b · x of its result (0 otherwise). */
+  postsmooth(b: Float64Array, x: Float64Array, withDot: boolean): number;
   /** x = 0, a forward sweep, then r = b − A x. */
   presmooth(b: Float64Array, x: Float64Array, r: Float64Array): void;
   down: TransferApply | null;
@@ -83,7 +84,10 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
   return {
     n: a.n,
     entries: () => a.col.length,
-    smooth: (b, x, direction) => relax.sweep(b, x, direction),
+    postsmooth(b, x, withDot) {
+      relax.sweep(b, x, 'backward');
+      return withDot ? dot(b, x) : 0;
+    },
     presmooth(b, x, r) {
       x.fill(0);
       relax.sweep(b, x, 'forward');
@@ -101,7 +105,11 @@ function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
   return {
     n: s.n,
     entries: () => stencilEntries(s),
-    smooth: (b, x, direction, fromZero) => relax.sweep(b, x, direction, fromZero),
+    postsmooth(b, x, withDot) {
+      if (withDot) return relax.backwardDot(b, x);
+      relax.sweep(b, x, 'backward');
+      return 0;
+    },
     presmooth: (b, x, r) => relax.forwardResidual(b, x, r),
     down: null,
     r: EMPTY,
@@ -193,11 +201,12 @@ export function sinkMultigrid(
   const direct: DenseFactor = denseCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
   levelVectors(levels);
 
-  const cycle = (l: number, b: Float64Array, x: Float64Array): void => {
+  /** One V-cycle from level l; returns b · x on the finest level (0 below it). */
+  const cycle = (l: number, b: Float64Array, x: Float64Array): number => {
     const level = levels[l];
     if (l === levels.length - 1) {
       direct.solve(b, x);
-      return;
+      return l === 0 ? dot(b, x) : 0;
     }
     const next = levels[l + 1];
     const down = level.down as TransferApply;
@@ -205,7 +214,7 @@ export function sinkMultigrid(
     down.restrict(level.r, next.b);
     cycle(l + 1, next.b, next.x);
     down.prolongAdd(next.x, x);
-    level.smooth(b, x, 'backward', false);
+    return level.postsmooth(b, x, l === 0);
   };
   return {
     method: `CG preconditioned by a multigrid V(1,1) cycle (z-line Gauss-Seidel, semi-coarsening of plate and fins with linear transfers, ${levels.length} levels)`,
@@ -213,9 +222,7 @@ export function sinkMultigrid(
     get entries() {
       return levels.map((l) => l.entries());
     },
-    apply(r, z) {
-      cycle(0, r, z);
-    },
+    apply: (r, z) => cycle(0, r, z),
     workspace: levels.length > 1 ? levels[0].r : undefined,
     operator(m) {
       if (m !== a || finest === null) return null;
@@ -231,4 +238,10 @@ export function sinkMultigrid(
       };
     },
   };
+}
+
+function dot(a: Float64Array, b: Float64Array): number {
+  let s = 0;
+  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
+  return s;
 }

@@ -20,6 +20,11 @@ export interface StencilRelaxation {
   /** One sweep over the lines, forward or backward, updating x in place; fromZero: as from x = 0 (x's values on entry are not read; forward only). */
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero?: boolean): void;
   /**
+   * A backward sweep that returns b · x of its result, summed line by line as each is solved (the sweep's last
+   * word on a line): a preconditioner's final sweep gives CG its r · z without another pass over both vectors.
+   */
+  backwardDot(b: Float64Array, x: Float64Array): number;
+  /**
    * A forward sweep from x = 0 (x's values on entry are not read) followed by r = b − A x. Each line l was solved from
    *   T_l x_l = b_l + sum_{q on lines before l} G_lq x_q    (the lines after l still at 0),
    * so its residual is the couplings to the lines after it alone, r_l = sum_{q on lines after l} G_lq x_q (the
@@ -116,6 +121,13 @@ class StencilLines implements StencilRelaxation {
     for (let i = nx - 1; i >= 0; i--) this.plane(i, b, x, true, false);
   }
 
+  backwardDot(b: Float64Array, x: Float64Array): number {
+    let dot = 0;
+    for (let f = this.s.grid.fins.length - 1; f >= 0; f--) dot += this.fin(f, b, x, true, false, true);
+    for (let i = this.s.grid.nx - 1; i >= 0; i--) dot += this.plane(i, b, x, true, false, true);
+    return dot;
+  }
+
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
     const s = this.s;
     const { nx, ny, nz } = s.grid;
@@ -136,13 +148,17 @@ class StencilLines implements StencilRelaxation {
     for (let e = 0; e < extraTo.length; e++) if (ahead[e] === 1) r[extraFrom[e]] += extraG[e] * x[extraTo[e]];
   }
 
-  /** The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours. */
-  private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
+  /**
+   * The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours.
+   * withDot: returns b · x over the plane's lines as solved (0 otherwise).
+   */
+  private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean, withDot = false): number {
     const { grid, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { nx, ny, nz } = grid;
     const { inv, w, line, gx, gy } = this;
     const sx = ny * nz;
     const interior = i > 0 && i + 1 < nx;
+    let dot = 0;
     for (let t = 0; t < ny; t++) {
       const j = forward ? t : ny - 1 - t;
       const p0 = (i * ny + j) * nz;
@@ -151,14 +167,17 @@ class StencilLines implements StencilRelaxation {
       const l = i * ny + j;
       if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0, ahead ? null : this.extraAhead);
       solveLine(w, x, inv, line, p0, nz);
+      if (withDot) dot += lineDot(b, x, p0, nz);
     }
+    return dot;
   }
 
-  /** The rows of fin f, ascending (forward) or descending. */
-  private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
+  /** The rows of fin f, ascending (forward) or descending; withDot as for plane. */
+  private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean, withDot = false): number {
     const { plate, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { rows, layers } = this.s.grid.fins[f];
     const { inv, w, line, row } = this;
+    let dot = 0;
     for (let t = 0; t < rows; t++) {
       const r = forward ? t : rows - 1 - t;
       const p0 = this.finStart[f] + r * layers;
@@ -166,8 +185,17 @@ class StencilLines implements StencilRelaxation {
       const l = this.finLine[f] + r;
       if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0, ahead ? null : this.extraAhead);
       solveLine(w, x, inv, line, p0, layers);
+      if (withDot) dot += lineDot(b, x, p0, layers);
     }
+    return dot;
   }
+}
+
+/** b · x over one line's members (p0 .. p0 + len − 1). */
+function lineDot(b: Float64Array, x: Float64Array, p0: number, len: number): number {
+  let s = 0;
+  for (let q = p0; q < p0 + len; q++) s += b[q] * x[q];
+  return s;
 }
 
 /** r = the couplings of plate plane at p0 to its successors in y and (east: when there is a next plane) in x. */

@@ -49,9 +49,8 @@ export function sparsePcg(
   let previous = Infinity;
   for (let restart = 0; restart <= RESTARTS && relative > tolerance && relative < 0.5 * previous; restart++) {
     previous = relative;
-    m.apply(r, z);
+    let rz = m.apply(r, z);
     p.set(z);
-    let rz = dot(r, z);
     for (let it = 0; it < maxIterations; it++) {
       const pq = op.multiply(p, q);
       if (!(pq > 0) || !(rz > 0)) break;
@@ -64,8 +63,7 @@ export function sparsePcg(
       }
       iterations++;
       if (size <= 0.5 * tolerance * scale) break;
-      m.apply(r, z);
-      const next = dot(r, z);
+      const next = m.apply(r, z);
       const beta = next / rz;
       rz = next;
       for (let k = 0; k < n; k++) p[k] = z[k] + beta * p[k];
