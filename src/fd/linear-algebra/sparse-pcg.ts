@@ -27,10 +27,12 @@ export function sparsePcg(
   m: Preconditioner,
   tolerance: number,
   maxIterations: number,
-  x: Float64Array = new Float64Array(a.n),
+  start?: Float64Array,
 ): { x: Float64Array; report: SparsePcgReport } {
   const n = a.n;
-  const scale = norm1(b) || 1;
+  const bNorm = norm1(b);
+  const scale = bNorm || 1;
+  const x = start ?? new Float64Array(n);
   const r = new Float64Array(n);
   const z = new Float64Array(n);
   const p = new Float64Array(n);
@@ -44,7 +46,12 @@ export function sparsePcg(
     },
     residual: (v: Float64Array, rhs: Float64Array, out: Float64Array) => csrResidual(a, v, rhs, out),
   };
-  let relative = op.residual(x, b, r) / scale;
+  // From zero the residual is b itself (no product to form).
+  let relative: number;
+  if (start === undefined) {
+    r.set(b);
+    relative = bNorm / scale;
+  } else relative = op.residual(x, b, r) / scale;
   let iterations = 0;
   let previous = Infinity;
   for (let restart = 0; restart <= RESTARTS && relative > tolerance && relative < 0.5 * previous; restart++) {
