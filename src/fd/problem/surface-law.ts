@@ -161,8 +161,16 @@ export function cvLosses(
       value = sameVariable ? (Gi * u) / scale : Gi * t;
       derivative = sameVariable ? Gi / scale : Gi * chain;
     } else {
-      value = exponent === 0 ? Gi * t : Gi === 0 ? 0 : Gi * convectedExcess(law, t);
-      derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * Math.pow(Math.abs(t) * scale, exponent));
+      if (exponent === 0 || Gi === 0) {
+        value = Gi * t;
+        derivative = Gi;
+      } else {
+        // One power per node: with g = |θ/θ_b|^n, the loss G θ g and its slope (n + 1) G g (at θ = 0 the loss
+        // is 0 and g is 0 or, for n < 0, infinite: the slope is capped at LARGEST_SLOPE as faceFluxSlope does).
+        const g = Math.pow(Math.abs(t) * scale, exponent);
+        value = t === 0 ? 0 : Gi * t * g;
+        derivative = Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
+      }
     }
     if (radiative !== 0) {
       const T = Ta + t;
