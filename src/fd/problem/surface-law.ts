@@ -126,6 +126,16 @@ export interface AmbientNodes {
 }
 
 /**
+ * a^n for a >= 0; the exponents of laminar natural convection (1/4) and of a square root through Math.sqrt, a
+ * few times faster than Math.pow and correctly rounded at each step (within an ulp or two of Math.pow).
+ */
+function power(a: number, n: number): number {
+  if (n === 0.25) return Math.sqrt(Math.sqrt(a));
+  if (n === 0.5) return Math.sqrt(a);
+  return Math.pow(a, n);
+}
+
+/**
  * Losses of every CV and their derivatives, W and W/K: loss_i = G_i g θ_i + ε σ S_i (T_i^4 - T_s^4).
  * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2). With `ambient`, a flagged
  * node's convective loss is formed from its u (G_i |θ_b| u_i: exact where θ = θ_b |u|^(1/(n+1)) underflows) and its
@@ -161,8 +171,16 @@ export function cvLosses(
       value = sameVariable ? (Gi * u) / scale : Gi * t;
       derivative = sameVariable ? Gi / scale : Gi * chain;
     } else {
-      value = exponent === 0 ? Gi * t : Gi === 0 ? 0 : Gi * convectedExcess(law, t);
-      derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * Math.pow(Math.abs(t) * scale, exponent));
+      if (exponent === 0 || Gi === 0) {
+        value = Gi * t;
+        derivative = Gi;
+      } else {
+        // One power per node: with g = |θ/θ_b|^n, the loss G θ g and its slope (n + 1) G g (at θ = 0 the loss
+        // is 0 and g is 0 or, for n < 0, infinite: the slope is capped at LARGEST_SLOPE as faceFluxSlope does).
+        const g = power(Math.abs(t) * scale, exponent);
+        value = t === 0 ? 0 : Gi * t * g;
+        derivative = Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
+      }
     }
     if (radiative !== 0) {
       const T = Ta + t;
