@@ -279,18 +279,27 @@ export function tabulatedGeometry(profile: TabulatedProfile, edges: Edges): FinG
 }
 
 /**
- * Geometries already made, by the case's `fin` object (read-only data, as the whole case): a check asks for its
- * fin's geometry several times (the problem, the shortcuts, each variant of h or k, which shares `fin`), and a
- * geometry and its key cost tens of microseconds, at every point of a map.
+ * Geometries already made, by the case's `fin` object (read-only data, as the whole case) and by their key: a check
+ * asks for its fin's geometry several times (the problem, the shortcuts, each variant of h or k, which shares `fin`),
+ * and the points of a map column are cases of one fin: they share one geometry object, and with it what is kept
+ * by geometry (the mesh cache, the equivalent fin's mean section). 128 keys, as the mesh cache.
  */
-const geometries = new WeakMap<Case['fin'], FinGeometry1D>();
+const geometriesOfFin = new WeakMap<Case['fin'], FinGeometry1D>();
+const geometriesByKey = new Map<string, FinGeometry1D>();
+const GEOMETRY_CACHE_SIZE = 128;
 
 /** The 1-D geometry of a case's fin, for every profile of the case-file contract. */
 export function finGeometry(c: Case): FinGeometry1D {
-  const known = geometries.get(c.fin);
-  if (known !== undefined) return known;
-  const geometry = { ...profileGeometry(c), key: geometryKey(c) };
-  geometries.set(c.fin, geometry);
+  const ofFin = geometriesOfFin.get(c.fin);
+  if (ofFin !== undefined) return ofFin;
+  const key = geometryKey(c);
+  let geometry = geometriesByKey.get(key);
+  if (geometry === undefined) {
+    geometry = { ...profileGeometry(c), key };
+    if (geometriesByKey.size >= GEOMETRY_CACHE_SIZE) geometriesByKey.delete(geometriesByKey.keys().next().value as string);
+    geometriesByKey.set(key, geometry);
+  }
+  geometriesOfFin.set(c.fin, geometry);
   return geometry;
 }
 
