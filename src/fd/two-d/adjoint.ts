@@ -21,6 +21,7 @@
 import { buildGrid2D, type Grid2D } from '../../mesh/index.js';
 import { couplingOf, residual, residualAt, type Stencil9, type System2D } from '../linear-algebra/stencil9.js';
 import { prepareSolver2D } from '../linear-algebra/auto-solver.js';
+import { doneWith, keptSolver2D } from './kept-solver.js';
 import { assembleConduction2D } from './assemble.js';
 import { buildSystem2D, discretizeBoundaries, type BoundaryTerms2D, type SideTerms } from './boundary.js';
 import { baseHeatRate2D } from './heat-rate.js';
@@ -125,7 +126,10 @@ export function sectionAdjoint(problem: Fin2DProblem, nx: number, ny: number, so
     solved !== undefined && solved.grid.nodesX === nx && solved.grid.nodesY === ny ? solved.field : solveFin2DProblem(problem, { nx, ny }).field;
   const gradient = heatRateGradient(nominal);
   const adjointSystem: System2D = { ...nominal.system, rhs: gradient };
-  const lambda = prepareSolver2D(adjointSystem, 'auto').solve(adjointSystem);
+  // The study's own solver of this matrix when it is kept (kept-solver.ts), else a new one.
+  const prepared = keptSolver2D(adjointSystem);
+  const lambda = prepared.solve(adjointSystem);
+  doneWith(prepared, adjointSystem);
   const heatRate = sectionHeatRate(nominal, theta);
   let rows: Int32Array | null = null;
   return {

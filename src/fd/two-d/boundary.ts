@@ -116,33 +116,35 @@ export function lumpedIntegral(grid: Grid2D, nodes: Int32Array, c: (x: number) =
 export function buildSystem2D(K: Stencil9, terms: BoundaryTerms2D): System2D {
   const { nodesX: nx, nodesY: ny } = K;
   const n = nx * ny;
+  const sides = [terms.base, terms.face, terms.tip];
   // slice(), not Float64Array.from: a copy at memcpy speed (from() walks the iterator, ~30x slower in V8).
   const diag = K.diag.slice();
   const rhs = new Float64Array(n);
-  const fixed = new Uint8Array(n);
-  const fixedTheta = new Float64Array(n);
-  for (const side of [terms.base, terms.face, terms.tip]) {
-    side.nodes.forEach((p, e) => {
-      const g = side.conductance[e] as number;
-      diag[p] = (diag[p] as number) + g;
-      rhs[p] = (rhs[p] as number) + g * side.farTheta;
-      if (side.kind === 'fixed') {
-        fixed[p] = 1;
-        fixedTheta[p] = side.farTheta;
-      }
-    });
-  }
   // Exact row sums after elimination: boundary conductances plus the couplings to fixed nodes.
   const excess = new Float64Array(n);
-  for (const side of [terms.base, terms.face, terms.tip]) {
-    side.nodes.forEach((p, e) => {
-      excess[p] = (excess[p] as number) + (side.conductance[e] as number);
-    });
+  for (const side of sides) {
+    const { nodes, conductance, farTheta } = side;
+    for (let e = 0; e < nodes.length; e++) {
+      const p = nodes[e] as number;
+      const g = conductance[e] as number;
+      diag[p] = (diag[p] as number) + g;
+      rhs[p] = (rhs[p] as number) + g * farTheta;
+      excess[p] = (excess[p] as number) + g;
+    }
   }
   // Without fixed nodes (a base behind a contact resistance, a tip not fixed) there is nothing to eliminate, and the
-  // couplings are K's own (read, never written, by every solver).
-  if (!fixed.includes(1)) {
+  // couplings are K's own (read, never written, by every solver). A fixed side has nodes (every boundary has).
+  if (!sides.some((side) => side.kind === 'fixed' && side.nodes.length > 0)) {
     return { matrix: { nodesX: nx, nodesY: ny, diag, east: K.east, north: K.north, northEast: K.northEast, southEast: K.southEast }, rhs, excess };
+  }
+  const fixed = new Uint8Array(n);
+  const fixedTheta = new Float64Array(n);
+  for (const side of sides) {
+    if (side.kind !== 'fixed') continue;
+    for (const p of side.nodes) {
+      fixed[p] = 1;
+      fixedTheta[p] = side.farTheta;
+    }
   }
   const matrix: Stencil9 = {
     nodesX: nx,
