@@ -55,9 +55,12 @@ describe.each([
     const v = random();
     const mu = new Float64Array(n);
     const mv = new Float64Array(n);
-    pre.apply(u, mu);
-    pre.apply(v, mv);
+    const uMu = pre.apply(u, mu);
+    const vMv = pre.apply(v, mv);
     const dot = (a: Float64Array, b: Float64Array) => a.reduce((s, x, k) => s + x * b[k]!, 0);
+    // apply returns r · z, summed by its last sweep line by line: the same inner product to round-off.
+    expect(Math.abs(uMu - dot(u, mu))).toBeLessThan(1e-12 * dot(u, mu));
+    expect(Math.abs(vMv - dot(v, mv))).toBeLessThan(1e-12 * dot(v, mv));
     // 1e-12: symmetric up to the round-off of the cycle's sums.
     expect(Math.abs(dot(u, mv) - dot(v, mu)) / Math.sqrt(dot(u, mu) * dot(v, mv))).toBeLessThan(1e-12);
     expect(dot(u, mu)).toBeGreaterThan(0);

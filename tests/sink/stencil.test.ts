@@ -92,8 +92,11 @@ describe.each(cases)('%s', (_, c) => {
     const viaCsr = new Float64Array(a.n);
     const viaStencil = new Float64Array(a.n);
     csrMultiply(a, x, viaCsr);
-    stencilMultiply(stencil, x, new Float64Array(a.n), viaStencil);
+    const xAx = stencilMultiply(stencil, x, viaStencil);
     expect(relativeDifference(viaStencil, viaCsr)).toBeLessThan(1e-12);
+    // The returned x · A x, summed while the product is formed, against the dot product of the CSR product.
+    const expected = x.reduce((sum, v, p) => sum + v * (viaCsr[p] ?? Number.NaN), 0);
+    expect(Math.abs(xAx - expected)).toBeLessThan(1e-12 * Math.abs(expected));
     csrResidual(a, x, system.rhs, viaCsr);
     stencilResidual(stencil, x, system.rhs, viaStencil);
     expect(relativeDifference(viaStencil, viaCsr)).toBeLessThan(1e-12);

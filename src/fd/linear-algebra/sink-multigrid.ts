@@ -27,8 +27,8 @@ import { stencilRelaxation, type RelaxationPrecision } from './sink-stencil-rela
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
 
 export interface Preconditioner {
-  /** z = M^-1 r (r unchanged). */
-  apply(r: Float64Array, z: Float64Array): void;
+  /** z = M^-1 r (r unchanged); returns r · z (CG's next inner product, summed as the cycle's last sweep forms z). */
+  apply(r: Float64Array, z: Float64Array): number;
   /** A line describing the method, for reports. */
   readonly method: string;
   /** Unknowns per level, finest first. */
@@ -40,11 +40,16 @@ export interface Preconditioner {
    * csrMultiply and csrResidual, up to the order of the sums); null otherwise.
    */
   operator?(a: CsrMatrix): StructuredOperator | null;
+  /**
+   * A vector of the system's size that apply overwrites and leaves free between applications (the finest level's
+   * residual), for a caller's own scratch: CG keeps A p there, one new vector fewer to touch.
+   */
+  readonly workspace?: Float64Array;
 }
 
 export interface StructuredOperator {
-  /** out = A x. */
-  multiply(x: Float64Array, out: Float64Array): void;
+  /** out = A x; returns x · out. */
+  multiply(x: Float64Array, out: Float64Array): number;
   /** out = b − A x (difference form); returns |out|_1. */
   residual(x: Float64Array, b: Float64Array, out: Float64Array): number;
 }
@@ -57,30 +62,41 @@ interface Level {
   n: number;
   /** Stored matrix entries (counted when asked). */
   entries(): number;
-  smooth(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero: boolean): void;
+  /** A backward sweep; withDot: returns b · x of its result (0 otherwise). */
+  postsmooth(b: Float64Array, x: Float64Array, withDot: boolean): number;
   /** x = 0, a forward sweep, then r = b − A x. */
   presmooth(b: Float64Array, x: Float64Array, r: Float64Array): void;
   down: TransferApply | null;
+  /**
+   * Work vectors, allocated on first use (levelVectors): the finest level's b and x are the cycle's arguments, so
+   * it needs r alone and the coarsest needs no r; each vector not made saves its first touch, which costs more
+   * than the arithmetic on it (the kernel maps and zeroes every new page: ~3 ms per MB on the development machine).
+   */
   r: Float64Array;
   x: Float64Array;
   b: Float64Array;
 }
+
+const EMPTY = new Float64Array(0);
 
 function csrLevel(a: CsrMatrix, lines: LineSet): Level {
   const relax = buildLineRelaxation(a, lines);
   return {
     n: a.n,
     entries: () => a.col.length,
-    smooth: (b, x, direction) => relax.sweep(b, x, direction),
+    postsmooth(b, x, withDot) {
+      relax.sweep(b, x, 'backward');
+      return withDot ? dot(b, x) : 0;
+    },
     presmooth(b, x, r) {
       x.fill(0);
       relax.sweep(b, x, 'forward');
       csrResidual(a, x, b, r);
     },
     down: null,
-    r: new Float64Array(a.n),
-    x: new Float64Array(a.n),
-    b: new Float64Array(a.n),
+    r: EMPTY,
+    x: EMPTY,
+    b: EMPTY,
   };
 }
 
@@ -89,13 +105,33 @@ function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
   return {
     n: s.n,
     entries: () => stencilEntries(s),
-    smooth: (b, x, direction, fromZero) => relax.sweep(b, x, direction, fromZero),
+    postsmooth(b, x, withDot) {
+      if (withDot) return relax.backwardDot(b, x);
+      relax.sweep(b, x, 'backward');
+      return 0;
+    },
     presmooth: (b, x, r) => relax.forwardResidual(b, x, r),
     down: null,
-    r: new Float64Array(s.n),
-    x: new Float64Array(s.n),
-    b: new Float64Array(s.n),
+    r: EMPTY,
+    x: EMPTY,
+    b: EMPTY,
   };
+}
+
+/**
+ * Each level's work vectors: b and x below the finest; r where a coarser level follows, all of them views of one
+ * vector of the finest size, since a level's residual is read only by its restriction, before the next level
+ * forms its own (the cycle's order: presmooth, restrict, recurse).
+ */
+function levelVectors(levels: Level[]): void {
+  const residual = new Float64Array(levels.length > 1 ? levels[0].n : 0);
+  levels.forEach((level, l) => {
+    if (l + 1 < levels.length) level.r = residual.subarray(0, level.n);
+    if (l > 0) {
+      level.b = new Float64Array(level.n);
+      level.x = new Float64Array(level.n);
+    }
+  });
 }
 
 /** The CSR fold (fins as cells onto sheets) as a level's transfers. */
@@ -155,7 +191,7 @@ export function sinkMultigrid(
   let g = grid;
   while (stencil !== null && stencil.n > COARSEST) {
     const t = sinkTransfer(g, coarseningDirections(g));
-    const coarse = stencilCoarseOperator(stencil, t);
+    const coarse = stencilCoarseOperator(stencil, t, precision);
     if (coarse.n === stencil.n) break;
     levels[levels.length - 1].down = transferApply(t);
     stencil = coarse;
@@ -163,12 +199,14 @@ export function sinkMultigrid(
     g = t.coarse;
   }
   const direct: DenseFactor = denseCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
+  levelVectors(levels);
 
-  const cycle = (l: number, b: Float64Array, x: Float64Array): void => {
+  /** One V-cycle from level l; returns b · x on the finest level (0 below it). */
+  const cycle = (l: number, b: Float64Array, x: Float64Array): number => {
     const level = levels[l];
     if (l === levels.length - 1) {
       direct.solve(b, x);
-      return;
+      return l === 0 ? dot(b, x) : 0;
     }
     const next = levels[l + 1];
     const down = level.down as TransferApply;
@@ -176,7 +214,7 @@ export function sinkMultigrid(
     down.restrict(level.r, next.b);
     cycle(l + 1, next.b, next.x);
     down.prolongAdd(next.x, x);
-    level.smooth(b, x, 'backward', false);
+    return level.postsmooth(b, x, l === 0);
   };
   return {
     method: `CG preconditioned by a multigrid V(1,1) cycle (z-line Gauss-Seidel, semi-coarsening of plate and fins with linear transfers, ${levels.length} levels)`,
@@ -184,15 +222,13 @@ export function sinkMultigrid(
     get entries() {
       return levels.map((l) => l.entries());
     },
-    apply(r, z) {
-      cycle(0, r, z);
-    },
+    apply: (r, z) => cycle(0, r, z),
+    workspace: levels.length > 1 ? levels[0].r : undefined,
     operator(m) {
       if (m !== a || finest === null) return null;
       const s = finest;
-      const zero = new Float64Array(s.n);
       return {
-        multiply: (x, out) => stencilMultiply(s, x, zero, out),
+        multiply: (x, out) => stencilMultiply(s, x, out),
         residual(x, b, out) {
           stencilResidual(s, x, b, out);
           let norm = 0;
@@ -202,4 +238,10 @@ export function sinkMultigrid(
       };
     },
   };
+}
+
+function dot(a: Float64Array, b: Float64Array): number {
+  let s = 0;
+  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
+  return s;
 }

@@ -7,7 +7,8 @@
  * an SPD matrix (Saad, "Iterative Methods for Sparse Linear Systems", 2nd ed. 2003, sections 4.1 and 9.2
  * [from memory]). The lines are factored once from both ends (twistedFactor below); the elimination
  * multipliers g inv are formed on the fly from the couplings.
- * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0).
+ * A forward sweep from x = 0 (`fromZero`) skips the couplings to lines not yet visited (their x is 0), so it reads
+ * no entry of x before writing it and x need not be zeroed first.
  * Precision 'float32' keeps the sweep's couplings and line factors as Float32Array (half the memory traffic of the
  * sweeps, which are bound by it); x, b and every sum stay Float64. The sweep is then exact line Gauss-Seidel for a
  * matrix within ~6e-8 relative of A entry by entry (float32 rounding, eps/2), which is enough for a preconditioner:
@@ -16,10 +17,15 @@
 import type { SinkStencil } from './sink-stencil.js';
 
 export interface StencilRelaxation {
-  /** One sweep over the lines, forward or backward, updating x in place; fromZero: x is 0 on entry (forward only). */
+  /** One sweep over the lines, forward or backward, updating x in place; fromZero: as from x = 0 (x's values on entry are not read; forward only). */
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero?: boolean): void;
   /**
-   * A forward sweep from x = 0 (x is zeroed first) followed by r = b − A x. Each line l was solved from
+   * A backward sweep that returns b · x of its result, summed line by line as each is solved (the sweep's last
+   * word on a line): a preconditioner's final sweep gives CG its r · z without another pass over both vectors.
+   */
+  backwardDot(b: Float64Array, x: Float64Array): number;
+  /**
+   * A forward sweep from x = 0 (x's values on entry are not read) followed by r = b − A x. Each line l was solved from
    *   T_l x_l = b_l + sum_{q on lines before l} G_lq x_q    (the lines after l still at 0),
    * so its residual is the couplings to the lines after it alone, r_l = sum_{q on lines after l} G_lq x_q (the
    * upper block part of A times x: Gauss-Seidel's residual, Saad 2003, section 4.1 [from memory]), formed with the
@@ -62,10 +68,12 @@ class StencilLines implements StencilRelaxation {
     precision: RelaxationPrecision,
   ) {
     if (precision === 'float32') {
-      this.line = new Float32Array(s.line);
-      this.gx = new Float32Array(s.gx);
-      this.gy = new Float32Array(s.gy);
-      this.row = new Float32Array(s.row);
+      // A coarse level built in float32 (sink-stencil-coarse.ts) is used as it is.
+      const single = (v: Coefficients) => (v instanceof Float32Array ? v : new Float32Array(v));
+      this.line = single(s.line);
+      this.gx = single(s.gx);
+      this.gy = single(s.gy);
+      this.row = single(s.row);
       this.inv = twistedFactor(s, this.line, new Float32Array(s.n));
     } else {
       this.line = s.line;
@@ -113,10 +121,18 @@ class StencilLines implements StencilRelaxation {
     for (let i = nx - 1; i >= 0; i--) this.plane(i, b, x, true, false);
   }
 
+  backwardDot(b: Float64Array, x: Float64Array): number {
+    let dot = 0;
+    for (let f = this.s.grid.fins.length - 1; f >= 0; f--) dot += this.fin(f, b, x, true, false, true);
+    for (let i = this.s.grid.nx - 1; i >= 0; i--) dot += this.plane(i, b, x, true, false, true);
+    return dot;
+  }
+
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
     const s = this.s;
     const { nx, ny, nz } = s.grid;
-    x.fill(0);
+    // No x.fill(0): a sweep from zero reads only members of lines it has already solved (the extra couplings to
+    // later lines and to its own line skipped, addExtras), so every x it reads it has written.
     for (let i = 0; i < nx; i++) {
       this.plane(i, b, x, false, true);
       if (i > 0) aheadPlane(r, x, this.gx, this.gy, (i - 1) * ny * nz, ny, nz, true);
@@ -132,38 +148,54 @@ class StencilLines implements StencilRelaxation {
     for (let e = 0; e < extraTo.length; e++) if (ahead[e] === 1) r[extraFrom[e]] += extraG[e] * x[extraTo[e]];
   }
 
-  /** The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours. */
-  private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
+  /**
+   * The columns of plate plane i, j ascending (forward) or descending; ahead: read the unvisited neighbours.
+   * withDot: returns b · x over the plane's lines as solved (0 otherwise).
+   */
+  private plane(i: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean, withDot = false): number {
     const { grid, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { nx, ny, nz } = grid;
     const { inv, w, line, gx, gy } = this;
     const sx = ny * nz;
     const interior = i > 0 && i + 1 < nx;
+    let dot = 0;
     for (let t = 0; t < ny; t++) {
       const j = forward ? t : ny - 1 - t;
       const p0 = (i * ny + j) * nz;
       if (interior) gatherInterior(w, b, x, gx, gy, p0, nz, sx, ahead);
       else gatherEdge(w, b, x, gx, gy, p0, nz, sx, i > 0, j > 0, ahead && i + 1 < nx, ahead && j + 1 < ny);
       const l = i * ny + j;
-      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0);
+      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0, ahead ? null : this.extraAhead);
       solveLine(w, x, inv, line, p0, nz);
+      if (withDot) dot += lineDot(b, x, p0, nz);
     }
+    return dot;
   }
 
-  /** The rows of fin f, ascending (forward) or descending. */
-  private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean): void {
+  /** The rows of fin f, ascending (forward) or descending; withDot as for plane. */
+  private fin(f: number, b: Float64Array, x: Float64Array, ahead: boolean, forward: boolean, withDot = false): number {
     const { plate, extraStart, extraFrom, extraTo, extraG } = this.s;
     const { rows, layers } = this.s.grid.fins[f];
     const { inv, w, line, row } = this;
+    let dot = 0;
     for (let t = 0; t < rows; t++) {
       const r = forward ? t : rows - 1 - t;
       const p0 = this.finStart[f] + r * layers;
       gatherFin(w, b, x, row, p0, layers, plate, r > 0, ahead && r + 1 < rows);
       const l = this.finLine[f] + r;
-      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0);
+      if (extraStart[l] < extraStart[l + 1]) addExtras(w, x, extraStart, extraFrom, extraTo, extraG, l, p0, ahead ? null : this.extraAhead);
       solveLine(w, x, inv, line, p0, layers);
+      if (withDot) dot += lineDot(b, x, p0, layers);
     }
+    return dot;
   }
+}
+
+/** b · x over one line's members (p0 .. p0 + len − 1). */
+function lineDot(b: Float64Array, x: Float64Array, p0: number, len: number): number {
+  let s = 0;
+  for (let q = p0; q < p0 + len; q++) s += b[q] * x[q];
+  return s;
 }
 
 /** r = the couplings of plate plane at p0 to its successors in y and (east: when there is a next plane) in x. */
@@ -250,9 +282,22 @@ function gatherFin(
   }
 }
 
-/** w += the extra couplings' part of line l's right-hand side. */
-function addExtras(w: Float64Array, x: Float64Array, start: Int32Array, from: Int32Array, to: Int32Array, g: Float64Array, l: number, p0: number): void {
-  for (let e = start[l]; e < start[l + 1]; e++) w[from[e] - p0] += g[e] * x[to[e]];
+/**
+ * w += the extra couplings' part of line l's right-hand side; `skip` given (a sweep from zero): without the
+ * couplings it flags (to a later line or the same one, whose x is still 0 in such a sweep).
+ */
+function addExtras(
+  w: Float64Array,
+  x: Float64Array,
+  start: Int32Array,
+  from: Int32Array,
+  to: Int32Array,
+  g: Float64Array,
+  l: number,
+  p0: number,
+  skip: Uint8Array | null,
+): void {
+  for (let e = start[l]; e < start[l + 1]; e++) if (skip === null || skip[e] === 0) w[from[e] - p0] += g[e] * x[to[e]];
 }
 
 /**

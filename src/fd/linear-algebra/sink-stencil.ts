@@ -14,18 +14,24 @@
 import type { CsrMatrix } from './csr.js';
 import { levelUnknowns, type SinkLevelGrid } from './aggregation.js';
 
+/**
+ * A level's couplings: Float64Array as assembled; Float32Array on the coarse levels of a multigrid whose smoother
+ * stores its coefficients in float32 (sink-stencil-coarse.ts builds them so, with no float64 copy to round).
+ */
+export type Couplings = Float64Array | Float32Array;
+
 export interface SinkStencil {
   readonly grid: SinkLevelGrid;
   readonly n: number;
   /** Plate cells nx ny nz (they come first). */
   readonly plate: number;
   /** Conductance from unknown p to p + 1 along its line (plate z, fin layers); 0 at a line's end, W/K. */
-  readonly line: Float64Array;
+  readonly line: Couplings;
   /** Plate: conductance from (i, j, k) to (i+1, j, k) and to (i, j+1, k); 0 on the last plane, W/K. */
-  readonly gx: Float64Array;
-  readonly gy: Float64Array;
+  readonly gx: Couplings;
+  readonly gy: Couplings;
   /** Fin node p (at p − plate): conductance to the next row's node of the same layer; 0 on the last row, W/K. */
-  readonly row: Float64Array;
+  readonly row: Couplings;
   /** Conductance to fixed temperatures (row sum), W/K. */
   readonly excess: Float64Array;
   /** A_pp: excess plus every coupling of p, W/K. */
@@ -96,7 +102,7 @@ export interface ExtraCouplings {
  */
 export function buildStencil(
   grid: SinkLevelGrid,
-  parts: { line: Float64Array; gx: Float64Array; gy: Float64Array; row: Float64Array; excess: Float64Array; diagonal?: Float64Array },
+  parts: { line: Couplings; gx: Couplings; gy: Couplings; row: Couplings; excess: Float64Array; diagonal?: Float64Array },
   extras: ExtraCouplings,
 ): SinkStencil {
   const n = levelUnknowns(grid);

@@ -27,30 +27,39 @@ export function sparsePcg(
   m: Preconditioner,
   tolerance: number,
   maxIterations: number,
-  x: Float64Array = new Float64Array(a.n),
+  start?: Float64Array,
 ): { x: Float64Array; report: SparsePcgReport } {
   const n = a.n;
-  const scale = norm1(b) || 1;
+  const bNorm = norm1(b);
+  const scale = bNorm || 1;
+  const x = start ?? new Float64Array(n);
   const r = new Float64Array(n);
   const z = new Float64Array(n);
   const p = new Float64Array(n);
-  const q = new Float64Array(n);
+  // A p lives in the preconditioner's free vector when it offers one (used only between applications).
+  const q = m.workspace?.length === n ? m.workspace : new Float64Array(n);
   // The preconditioner's structured copy of A multiplies faster than the CSR form (no column indices).
   const op = m.operator?.(a) ?? {
-    multiply: (v: Float64Array, out: Float64Array) => csrMultiply(a, v, out),
+    multiply(v: Float64Array, out: Float64Array) {
+      csrMultiply(a, v, out);
+      return dot(v, out);
+    },
     residual: (v: Float64Array, rhs: Float64Array, out: Float64Array) => csrResidual(a, v, rhs, out),
   };
-  let relative = op.residual(x, b, r) / scale;
+  // From zero the residual is b itself (no product to form).
+  let relative: number;
+  if (start === undefined) {
+    r.set(b);
+    relative = bNorm / scale;
+  } else relative = op.residual(x, b, r) / scale;
   let iterations = 0;
   let previous = Infinity;
   for (let restart = 0; restart <= RESTARTS && relative > tolerance && relative < 0.5 * previous; restart++) {
     previous = relative;
-    m.apply(r, z);
+    let rz = m.apply(r, z);
     p.set(z);
-    let rz = dot(r, z);
     for (let it = 0; it < maxIterations; it++) {
-      op.multiply(p, q);
-      const pq = dot(p, q);
+      const pq = op.multiply(p, q);
       if (!(pq > 0) || !(rz > 0)) break;
       const alpha = rz / pq;
       let size = 0;
@@ -61,8 +70,7 @@ export function sparsePcg(
       }
       iterations++;
       if (size <= 0.5 * tolerance * scale) break;
-      m.apply(r, z);
-      const next = dot(r, z);
+      const next = m.apply(r, z);
       const beta = next / rz;
       rz = next;
       for (let k = 0; k < n; k++) p[k] = z[k] + beta * p[k];

@@ -72,7 +72,7 @@ export function solveSinkSystemWithLinear(
   start: Float64Array | undefined,
   pre: Preconditioner,
 ): { result: SinkGridResult; linear: Float64Array } {
-  const x0 = start !== undefined && start.length === system.matrix.n ? start : new Float64Array(system.matrix.n);
+  const x0 = start !== undefined && start.length === system.matrix.n ? start : undefined;
   const { x: theta, report } = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, MAX_ITERATIONS, x0);
   if (!isNonlinearSink(problem))
     return { result: sinkQuantities(problem, system, theta, pre.method, report.iterations, report.relativeResidual), linear: theta };
