@@ -1,7 +1,8 @@
 /**
  * The shortcuts that make the fd-2d reference's sensitivities cheaper (issue 14) give the same numbers, bit for bit,
- * as the computations they replace: the base heat rate alone (baseHeatRate2D) against the full balance
- * (heatRates2D), the residual at chosen rows (residualAt) against the whole residual, the adjoint derivative of
+ * as the computations they replace: a constant's boundary integral (lumpedConstant) against the general one, the
+ * base heat rate alone (baseHeatRate2D) against the full balance (heatRates2D), the residual at chosen rows
+ * (residualAt) against the whole residual, the adjoint derivative of
  * inputs that change boundary terms only (its residual taken at the boundary rows) against the adjoint formula with
  * the whole residual (Giles & Pierce 2000, eq. 2.3, discrete form; two-d/adjoint.ts), and the study's kept solver
  * (two-d/kept-solver.ts) against a solver prepared afresh. Exact equality (toBe) is the claim each shortcut makes:
@@ -14,6 +15,8 @@ import { prepareSolver2D } from '../../src/fd/linear-algebra/auto-solver.js';
 import { residual, residualAt, type System2D } from '../../src/fd/linear-algebra/stencil9.js';
 import { assembleSection2D, heatRateGradient, sectionAdjoint, type SectionAssembly } from '../../src/fd/two-d/adjoint.js';
 import { baseHeatRate2D, heatRates2D } from '../../src/fd/two-d/heat-rate.js';
+import { lumpedConstant, lumpedIntegral } from '../../src/fd/two-d/boundary.js';
+import { boundaryNodes } from '../../src/mesh/index.js';
 import { keptSolver2D } from '../../src/fd/two-d/kept-solver.js';
 import { solveFin2DProblem } from '../../src/fd/two-d/linear-solve.js';
 import { twoDFinProblem } from '../../src/fd/two-d/nonlinear-problem.js';
@@ -77,6 +80,16 @@ describe('fd-2d shortcuts: the same numbers, bit for bit', () => {
     const a = section(c, 21, 7);
     const theta = anyField(a.system.rhs.length);
     expect(baseHeatRate2D(a.K, a.terms, theta)).toBe(heatRates2D(a.K, a.terms, theta).base);
+  });
+
+  it.each(fins)('%s: lumpedConstant is lumpedIntegral of that constant on every boundary', (_, c) => {
+    const { grid } = section(c, 21, 7);
+    for (const name of ['base', 'face', 'tip', 'symmetry'] as const) {
+      const nodes = boundaryNodes(grid, name);
+      const general = lumpedIntegral(grid, nodes, () => 37.5);
+      const constant = lumpedConstant(grid, nodes, 37.5);
+      for (let e = 0; e < nodes.length; e++) expect(constant[e], `${name} node ${e}`).toBe(general[e]);
+    }
   });
 
   it.each(fins)('%s: residualAt is the residual at those rows', (_, c) => {

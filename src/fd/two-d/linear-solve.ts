@@ -12,7 +12,7 @@ import type { Case } from '../../case/index.js';
 import { GridError } from '../../errors.js';
 import { buildGrid2D, type Grid2D, type Section2D } from '../../mesh/index.js';
 import { conductionOperator } from './conduction-cache.js';
-import { buildSystem2D, discretizeBoundaries, lumpedIntegral } from './boundary.js';
+import { buildSystem2D, discretizeBoundaries, lumpedConstant } from './boundary.js';
 import { hAt } from '../problem/convection.js';
 import { fin2dProblem, type Fin2DProblem } from './problem.js';
 import { heatRates2D } from './heat-rate.js';
@@ -142,7 +142,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     if (side.kind === 'convective') for (const g of side.conductance) ideal += g * thetaBase;
   }
   const efficiency = problem.truncatedInfinite ? null : rates.base / ideal;
-  const baseArea = sum(lumpedIntegral(grid, terms.base.nodes, () => 1));
+  const baseArea = sum(lumpedConstant(grid, terms.base.nodes, 1));
   const hBase = hAt(problem.h, 0, problem.section.length);
   const effectiveness = rates.base / (hBase * baseArea * thetaBase);
 
