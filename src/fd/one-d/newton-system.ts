@@ -246,7 +246,7 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
       const radiationT = law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
       // At an ambient-variable node the slope is d loss/du, and u carries its own relative precision: only
       // radiation's ε T remains (its θ-slope, 4 ε σ S T^3, times T).
-      const radiationSlope = law.radiative !== 0 ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT ** 3 : 0;
+      const radiationSlope = law.radiative !== 0 ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT * radiationT * radiationT : 0;
       const rowFloor = ambient[i] === 1 ? radiationSlope * radiationT : Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
       relative = Math.max(relative, Math.abs(R[i] as number) / Math.max(maxScale, rowFloor));
     }

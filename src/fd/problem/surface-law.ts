@@ -54,7 +54,7 @@ export function faceLaw(problem: FinProblem): FaceLaw {
 
 /** g(θ) = |θ/θ_b|^n (1 when n = 0). */
 export function powerFactor(law: FaceLaw, theta: number): number {
-  return law.exponent === 0 ? 1 : Math.pow(Math.abs(theta) * law.inverseBaseExcess, law.exponent);
+  return law.exponent === 0 ? 1 : power(Math.abs(theta) * law.inverseBaseExcess, law.exponent);
 }
 
 /** T^4 - T_s^4 at excess θ, K^4. */
@@ -74,7 +74,9 @@ const LARGEST_SLOPE = 1e300;
 export function convectedExcess(law: FaceLaw, theta: number): number {
   if (law.exponent === 0) return theta;
   if (theta === 0) return 0;
-  const magnitude = Math.pow(Math.abs(theta) * law.inverseBaseExcess, law.exponent + 1) / law.inverseBaseExcess;
+  const a = Math.abs(theta) * law.inverseBaseExcess;
+  // a^(n+1) as a a^n for n > 0 (sqrt for n = 1/4); for n < 0, a^n overflows where a^(n+1) does not.
+  const magnitude = (law.exponent > 0 ? a * power(a, law.exponent) : Math.pow(a, law.exponent + 1)) / law.inverseBaseExcess;
   return theta > 0 ? magnitude : -magnitude;
 }
 
@@ -126,6 +128,16 @@ export interface AmbientNodes {
 }
 
 /**
+ * a^n for a >= 0; the exponents of laminar natural convection (1/4) and of a square root through Math.sqrt, a
+ * few times faster than Math.pow and correctly rounded at each step (within an ulp or two of Math.pow).
+ */
+function power(a: number, n: number): number {
+  if (n === 0.25) return Math.sqrt(Math.sqrt(a));
+  if (n === 0.5) return Math.sqrt(a);
+  return Math.pow(a, n);
+}
+
+/**
  * Losses of every CV and their derivatives, W and W/K: loss_i = G_i g θ_i + ε σ S_i (T_i^4 - T_s^4).
  * G: convective conductances of the position part of h (W/K); S: CV surfaces (m^2). With `ambient`, a flagged
  * node's convective loss is formed from its u (G_i |θ_b| u_i: exact where θ = θ_b |u|^(1/(n+1)) underflows) and its
@@ -161,8 +173,17 @@ export function cvLosses(
       value = sameVariable ? (Gi * u) / scale : Gi * t;
       derivative = sameVariable ? Gi / scale : Gi * chain;
     } else {
-      value = exponent === 0 ? Gi * t : Gi === 0 ? 0 : Gi * convectedExcess(law, t);
-      derivative = exponent === 0 ? Gi : Gi === 0 ? 0 : Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * Math.pow(Math.abs(t) * scale, exponent));
+      if (exponent === 0 || Gi === 0) {
+        value = Gi * t;
+        derivative = Gi;
+      } else {
+        // With g = |θ/θ_b|^n, the loss G θ g and its slope (n + 1) G g: one power per node for n > 0. For n < 0
+        // the loss is formed as |θ/θ_b|^(n+1) (g alone overflows near θ = 0 first; at θ = 0 the loss is 0 and
+        // g infinite: the slope is capped at LARGEST_SLOPE as faceFluxSlope does).
+        const g = power(Math.abs(t) * scale, exponent);
+        value = t === 0 ? 0 : exponent > 0 ? Gi * t * g : Gi * convectedExcess(law, t);
+        derivative = Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
+      }
     }
     if (radiative !== 0) {
       const T = Ta + t;
