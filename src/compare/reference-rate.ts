@@ -18,6 +18,7 @@ import {
   linearFinHeatRate1D,
   solveFinWith,
   type FinGrid,
+  type FinProblem,
   type FinStudy,
   type Fin2DResult,
   type GridSolvers,
@@ -37,10 +38,16 @@ export function referenceGridText(grid: ReferenceGrid): string {
 /** Q(variant) of the reference model on `grid`, W; `c` is the case the variants are made from (their Newton start). */
 export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid, c: Case): (variant: Case) => number {
   const starts = new Map<string, FinStudy>();
+  // The variant's fin problem serves its section and its cooled-edge 1-D solve alike (one case, one problem).
+  let last: { variant: Case; problem: FinProblem } | null = null;
+  const problemOf = (variant: Case): FinProblem => {
+    if (last === null || last.variant !== variant) last = { variant, problem: finProblem(variant) };
+    return last.problem;
+  };
   const solve = (variant: Case, g: FinGrid, id: string): number => {
     // A linear fin: its heat rate alone (the sample's hundreds of variants need no more).
-    if (!solvers.nonlinear && g.model === '2d') return finSectionHeatRate(finProblem(variant), g.nx, g.ny);
-    if (!solvers.nonlinear && g.model === '1d') return linearFinHeatRate1D(finProblem(variant), g);
+    if (!solvers.nonlinear && g.model === '2d') return finSectionHeatRate(problemOf(variant), g.nx, g.ny);
+    if (!solvers.nonlinear && g.model === '1d') return linearFinHeatRate1D(problemOf(variant), g);
     let start = starts.get(id);
     if (solvers.nonlinear && start === undefined) {
       start = solveFinWith(solvers, finProblem(variant === c ? c : withEdges(c, variant)), g);

@@ -229,6 +229,25 @@ export function residual(system: System2D, x: Float64Array, out: Float64Array = 
   return out;
 }
 
+/**
+ * rhs_p - (A x)_p at the given rows only, in difference form (the system must carry its row sums): the same value,
+ * bit for bit, as residual(system, x)[p] (applyDifferenceForm computes every row as differenceRowChecked does, in
+ * the same order; its interior shortcut only leaves out terms that are exactly zero). For callers that know the
+ * other rows of two residuals agree, so that only these rows' difference matters (two-d/adjoint.ts).
+ */
+export function residualAt(system: System2D, x: Float64Array, rows: Int32Array): Float64Array {
+  const { matrix: a, rhs, excess } = system;
+  if (excess === undefined) throw new RangeError('residualAt: the system must carry its row sums (excess)');
+  const ny = a.nodesY;
+  const out = new Float64Array(rows.length);
+  for (let r = 0; r < rows.length; r++) {
+    const p = rows[r] as number;
+    const i = Math.floor(p / ny);
+    out[r] = (rhs[p] as number) - differenceRowChecked(a, excess, x, i, p - i * ny);
+  }
+  return out;
+}
+
 /** The full matrix as rows of numbers (small grids only: tests and dense reference solves). */
 export function stencilToDense(a: Stencil9): number[][] {
   const n = a.nodesX * a.nodesY;

@@ -54,7 +54,7 @@ export function faceLaw(problem: FinProblem): FaceLaw {
 
 /** g(θ) = |θ/θ_b|^n (1 when n = 0). */
 export function powerFactor(law: FaceLaw, theta: number): number {
-  return law.exponent === 0 ? 1 : Math.pow(Math.abs(theta) * law.inverseBaseExcess, law.exponent);
+  return law.exponent === 0 ? 1 : power(Math.abs(theta) * law.inverseBaseExcess, law.exponent);
 }
 
 /** T^4 - T_s^4 at excess θ, K^4. */
@@ -74,7 +74,9 @@ const LARGEST_SLOPE = 1e300;
 export function convectedExcess(law: FaceLaw, theta: number): number {
   if (law.exponent === 0) return theta;
   if (theta === 0) return 0;
-  const magnitude = Math.pow(Math.abs(theta) * law.inverseBaseExcess, law.exponent + 1) / law.inverseBaseExcess;
+  const a = Math.abs(theta) * law.inverseBaseExcess;
+  // a^(n+1) as a a^n for n > 0 (sqrt for n = 1/4); for n < 0, a^n overflows where a^(n+1) does not.
+  const magnitude = (law.exponent > 0 ? a * power(a, law.exponent) : Math.pow(a, law.exponent + 1)) / law.inverseBaseExcess;
   return theta > 0 ? magnitude : -magnitude;
 }
 
@@ -175,10 +177,11 @@ export function cvLosses(
         value = Gi * t;
         derivative = Gi;
       } else {
-        // One power per node: with g = |θ/θ_b|^n, the loss G θ g and its slope (n + 1) G g (at θ = 0 the loss
-        // is 0 and g is 0 or, for n < 0, infinite: the slope is capped at LARGEST_SLOPE as faceFluxSlope does).
+        // With g = |θ/θ_b|^n, the loss G θ g and its slope (n + 1) G g: one power per node for n > 0. For n < 0
+        // the loss is formed as |θ/θ_b|^(n+1) (g alone overflows near θ = 0 first; at θ = 0 the loss is 0 and
+        // g infinite: the slope is capped at LARGEST_SLOPE as faceFluxSlope does).
         const g = power(Math.abs(t) * scale, exponent);
-        value = t === 0 ? 0 : Gi * t * g;
+        value = t === 0 ? 0 : exponent > 0 ? Gi * t * g : Gi * convectedExcess(law, t);
         derivative = Math.min(LARGEST_SLOPE, (exponent + 1) * Gi * g);
       }
     }

@@ -19,11 +19,13 @@
  * the two perturbed problems and the step of the scale factor, and get dQ/df at f = 1 (W), f scaling the input.
  */
 import { buildGrid2D, type Grid2D } from '../../mesh/index.js';
-import { couplingOf, residual, type Stencil9, type System2D } from '../linear-algebra/stencil9.js';
+import { couplingOf, residual, residualAt, type Stencil9, type System2D } from '../linear-algebra/stencil9.js';
 import { prepareSolver2D } from '../linear-algebra/auto-solver.js';
+import { doneWith, keptSolver2D } from './kept-solver.js';
 import { assembleConduction2D } from './assemble.js';
 import { buildSystem2D, discretizeBoundaries, type BoundaryTerms2D, type SideTerms } from './boundary.js';
-import { heatRates2D } from './heat-rate.js';
+import { baseHeatRate2D } from './heat-rate.js';
+import { conductionOperator } from './conduction-cache.js';
 import type { Fin2DProblem } from './problem.js';
 import { DEFAULT_GRADING, lumpedLevel, shiftSystem, solveFin2DProblem, type Fin2DResult } from './linear-solve.js';
 import { twoDFinProblem } from './nonlinear-problem.js';
@@ -45,15 +47,21 @@ export interface SectionAssembly {
  */
 export function assembleSection2D(problem: Fin2DProblem, nx: number, ny: number, like?: SectionAssembly & { k: number }): SectionAssembly & { k: number } {
   const grid = buildGrid2D(problem.section, { nx, ny, baseGrading: DEFAULT_GRADING.base, faceGrading: DEFAULT_GRADING.face });
+  // Without `like`: the grid's kept operator (conduction-cache.ts; the study's own on its grids, the sample's
+  // variants of h on theirs). A variant that cannot share `like`'s is assembled apart, so that the kept one stays.
   const K =
-    like !== undefined && like.grid.x === grid.x && like.grid.y === grid.y && like.k === problem.k ? like.K : assembleConduction2D(grid, problem.k);
+    like === undefined
+      ? conductionOperator(grid, problem.k)
+      : like.grid.x === grid.x && like.grid.y === grid.y && like.k === problem.k
+        ? like.K
+        : assembleConduction2D(grid, problem.k);
   const terms = discretizeBoundaries(grid, problem.conditions);
   return { grid, K, terms, system: buildSystem2D(K, terms), k: problem.k };
 }
 
 /** Q(theta) of an assembled section, W (the whole fin: the grid's depth times the base heat rate per unit depth). */
 export function sectionHeatRate(a: SectionAssembly, theta: Float64Array): number {
-  return a.grid.depth * heatRates2D(a.K, a.terms, theta).base;
+  return a.grid.depth * baseHeatRate2D(a.K, a.terms, theta);
 }
 
 /**
@@ -118,8 +126,12 @@ export function sectionAdjoint(problem: Fin2DProblem, nx: number, ny: number, so
     solved !== undefined && solved.grid.nodesX === nx && solved.grid.nodesY === ny ? solved.field : solveFin2DProblem(problem, { nx, ny }).field;
   const gradient = heatRateGradient(nominal);
   const adjointSystem: System2D = { ...nominal.system, rhs: gradient };
-  const lambda = prepareSolver2D(adjointSystem, 'auto').solve(adjointSystem);
+  // The study's own solver of this matrix when it is kept (kept-solver.ts), else a new one.
+  const prepared = keptSolver2D(adjointSystem);
+  const lambda = prepared.solve(adjointSystem);
+  doneWith(prepared, adjointSystem);
   const heatRate = sectionHeatRate(nominal, theta);
+  let rows: Int32Array | null = null;
   return {
     heatRate_W: heatRate,
     derivative: (plus, minus, step) => {
@@ -129,13 +141,45 @@ export function sectionAdjoint(problem: Fin2DProblem, nx: number, ny: number, so
       // b(p) - A(p) theta is the residual of the nominal field in the perturbed system, in difference form with the
       // exact row sums (stencil9.ts residual): the couplings across a thin fin are ~(t/L)^-2 times the losses and
       // would cancel in round-off as sum_q A_pq theta_q. The nominal residual (the solver's) cancels in the difference.
-      const rUp = residual(up.system, theta);
-      const rDown = residual(down.system, theta);
       let implicit = 0;
-      for (let p = 0; p < theta.length; p++) implicit += (lambda[p] as number) * ((rUp[p] as number) - (rDown[p] as number));
+      if (boundaryOnly(up, down)) {
+        // The two systems differ in their boundary terms alone: every other row of the two residuals is the same
+        // computation on the same numbers, so its difference is exactly 0 and the boundary rows, in order, give the
+        // same sum, bit for bit.
+        rows ??= boundaryRows(nominal.terms);
+        const rUp = residualAt(up.system, theta, rows);
+        const rDown = residualAt(down.system, theta, rows);
+        for (let r = 0; r < rows.length; r++) implicit += (lambda[rows[r] as number] as number) * ((rUp[r] as number) - (rDown[r] as number));
+      } else {
+        const rUp = residual(up.system, theta);
+        const rDown = residual(down.system, theta);
+        for (let p = 0; p < theta.length; p++) implicit += (lambda[p] as number) * ((rUp[p] as number) - (rDown[p] as number));
+      }
       return (explicit + implicit) / (2 * step);
     },
   };
+}
+
+/**
+ * Whether two assemblies differ only in their boundary terms (h, a contact resistance, the width): the same nodes
+ * and conduction operator, the same kinds of condition, and the same values at fixed boundaries (whose columns
+ * buildSystem2D moves into the right-hand side of the rows next to them, off the boundary).
+ */
+function boundaryOnly(a: SectionAssembly, b: SectionAssembly): boolean {
+  if (a.K !== b.K || a.grid.x !== b.grid.x || a.grid.y !== b.grid.y) return false;
+  for (const side of ['base', 'face', 'tip'] as const) {
+    const s = a.terms[side];
+    const t = b.terms[side];
+    if (s.kind !== t.kind || s.nodes.length !== t.nodes.length) return false;
+    if (s.kind === 'fixed' && s.farTheta !== t.farTheta) return false;
+  }
+  return true;
+}
+
+/** The nodes of the base, face and tip, each once, in increasing order. */
+function boundaryRows(terms: BoundaryTerms2D): Int32Array {
+  const all = new Set<number>([...terms.base.nodes, ...terms.face.nodes, ...terms.tip.nodes]);
+  return Int32Array.from(all).sort();
 }
 
 /**
@@ -164,7 +208,10 @@ export function finSectionHeatRate(problem: FinProblem, nx: number, ny: number):
   const a = assembleSection2D(twoDFinProblem(problem).linear, nx, ny);
   const level = lumpedLevel(a.system);
   const shifted = shiftSystem(a.system, level);
-  const field = prepareSolver2D(shifted, 'auto').solve(shifted);
+  const prepared = prepareSolver2D(shifted, 'auto');
+  const field = prepared.solve(shifted);
+  // Its band (when banded) serves the next variant's factor (banded-cholesky.ts newBand) instead of new memory.
+  prepared.release();
   for (let p = 0; p < field.length; p++) field[p] = (field[p] as number) + level;
   return sectionHeatRate(a, field);
 }

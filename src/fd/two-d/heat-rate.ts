@@ -101,3 +101,55 @@ export function heatRatesFromExchange(
   const surfaces = face + tip;
   return { base, face, tip, surfaces, energyBalance: Math.abs(base - surfaces) / Math.abs(base) };
 }
+
+/**
+ * The heat entering through the base alone, W per unit depth: heatRates2D(K, terms, theta).base, the same
+ * operations in the same order (so the same bits), without the node arrays the full balance allocates: the sample
+ * and the adjoint's perturbed assemblies need this one number many times. Fixed base: the conduction from each base
+ * node to the nodes off the base plus its exchange through the other (non-fixed) boundaries it lies on, summed side
+ * by side in the order base, face, tip as heatRatesFromExchange does; any other base: minus the sum of its exchanges.
+ */
+export function baseHeatRate2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float64Array): number {
+  const base = terms.base;
+  if (base.kind !== 'fixed') {
+    let q = 0;
+    for (let e = 0; e < base.nodes.length; e++) {
+      const value = (base.conductance[e] as number) * ((theta[base.nodes[e] as number] as number) - base.farTheta);
+      q += -value;
+    }
+    return q;
+  }
+  const onBase = new Set<number>(base.nodes);
+  // Exchange of the base nodes through the other boundaries, accumulated side by side (heatRatesFromExchange).
+  const exchange = new Map<number, number>();
+  for (const side of [terms.face, terms.tip]) {
+    if (side.kind === 'fixed') continue;
+    for (let e = 0; e < side.nodes.length; e++) {
+      const p = side.nodes[e] as number;
+      if (!onBase.has(p)) continue;
+      const value = (side.conductance[e] as number) * ((theta[p] as number) - side.farTheta);
+      exchange.set(p, (exchange.get(p) ?? 0) + value);
+    }
+  }
+  const ny = K.nodesY;
+  const claimed = new Set<number>();
+  let q = 0;
+  for (const p of base.nodes) {
+    if (claimed.has(p)) continue;
+    claimed.add(p);
+    const i = Math.floor(p / ny);
+    const j = p - i * ny;
+    const tp = theta[p] as number;
+    let conducted = 0;
+    for (let di = -1; di <= 1; di++) {
+      for (let dj = -1; dj <= 1; dj++) {
+        if (di === 0 && dj === 0) continue;
+        const c = couplingOf(K, i, j, di, dj);
+        const nb = p + di * ny + dj;
+        if (c !== 0 && !onBase.has(nb)) conducted += c * ((theta[nb] as number) - tp);
+      }
+    }
+    q += conducted + (exchange.get(p) ?? 0);
+  }
+  return q;
+}

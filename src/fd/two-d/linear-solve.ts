@@ -12,12 +12,13 @@ import type { Case } from '../../case/index.js';
 import { GridError } from '../../errors.js';
 import { buildGrid2D, type Grid2D, type Section2D } from '../../mesh/index.js';
 import { conductionOperator } from './conduction-cache.js';
-import { buildSystem2D, discretizeBoundaries, lumpedIntegral } from './boundary.js';
+import { buildSystem2D, discretizeBoundaries, lumpedConstant } from './boundary.js';
 import { hAt } from '../problem/convection.js';
 import { fin2dProblem, type Fin2DProblem } from './problem.js';
 import { heatRates2D } from './heat-rate.js';
 import { prepareSolver2D, type SolverMethod } from '../linear-algebra/auto-solver.js';
 import type { Solver2D, System2D } from '../linear-algebra/stencil9.js';
+import { doneWith, keptSolver2D } from './kept-solver.js';
 
 /**
  * Grading ratios used by default: cells 8x smaller at the base than at the tip, and at the face than on
@@ -117,7 +118,13 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
   let method: SolverMethod | 'custom' = 'custom';
   let field: Float64Array;
   if (opts.solver !== undefined) field = opts.solver(shifted);
-  else {
+  else if ((opts.method ?? 'auto') === 'auto') {
+    // The automatic choice, kept for a following system with this matrix (kept-solver.ts: the adjoint's).
+    const prepared = keptSolver2D(shifted);
+    field = prepared.solve(shifted);
+    method = prepared.method;
+    doneWith(prepared, shifted);
+  } else {
     const prepared = prepareSolver2D(shifted, opts.method ?? 'auto');
     field = prepared.solve(shifted);
     method = prepared.method;
@@ -135,7 +142,7 @@ export function solveFin2DProblem(problem: Fin2DProblem, opts: Fin2DOptions): Fi
     if (side.kind === 'convective') for (const g of side.conductance) ideal += g * thetaBase;
   }
   const efficiency = problem.truncatedInfinite ? null : rates.base / ideal;
-  const baseArea = sum(lumpedIntegral(grid, terms.base.nodes, () => 1));
+  const baseArea = sum(lumpedConstant(grid, terms.base.nodes, 1));
   const hBase = hAt(problem.h, 0, problem.section.length);
   const effectiveness = rates.base / (hBase * baseArea * thetaBase);
 
