@@ -51,7 +51,6 @@ export function heatRatesFromExchange(
   potential: Float64Array,
   exchangeBySide: Record<'base' | 'face' | 'tip', Float64Array | null>,
 ): HeatRates2D {
-  const ny = K.nodesY;
   const n = potential.length;
   const sides: SideTerms[] = [terms.base, terms.face, terms.tip];
   // Boundary exchange of every node with its non-fixed boundaries.
@@ -74,21 +73,7 @@ export function heatRatesFromExchange(
       if (side.kind === 'fixed') {
         if (claimed[p] === 1) return; // a corner shared by two fixed boundaries counts once
         claimed[p] = 1;
-        // Conduction from p to the nodes off this boundary, in difference form: the couplings between
-        // nodes of the boundary cancel in pairs and are left out, so no round-off of them remains.
-        const i = Math.floor(p / ny);
-        const j = p - i * ny;
-        const tp = potential[p] as number;
-        let conducted = 0;
-        for (let di = -1; di <= 1; di++) {
-          for (let dj = -1; dj <= 1; dj++) {
-            if (di === 0 && dj === 0) continue;
-            const c = couplingOf(K, i, j, di, dj);
-            const nb = p + di * ny + dj;
-            if (c !== 0 && inSide[nb] === 0) conducted += c * ((potential[nb] as number) - tp);
-          }
-        }
-        q += conducted + (exchange[p] as number);
+        q += conductionOffSide(K, p, potential, (nb) => inSide[nb] === 1) + (exchange[p] as number);
       } else if (values !== null) {
         q += -(values[e] as number);
       }
@@ -131,25 +116,33 @@ export function baseHeatRate2D(K: Stencil9, terms: BoundaryTerms2D, theta: Float
       exchange.set(p, (exchange.get(p) ?? 0) + value);
     }
   }
-  const ny = K.nodesY;
   const claimed = new Set<number>();
   let q = 0;
   for (const p of base.nodes) {
     if (claimed.has(p)) continue;
     claimed.add(p);
-    const i = Math.floor(p / ny);
-    const j = p - i * ny;
-    const tp = theta[p] as number;
-    let conducted = 0;
-    for (let di = -1; di <= 1; di++) {
-      for (let dj = -1; dj <= 1; dj++) {
-        if (di === 0 && dj === 0) continue;
-        const c = couplingOf(K, i, j, di, dj);
-        const nb = p + di * ny + dj;
-        if (c !== 0 && !onBase.has(nb)) conducted += c * ((theta[nb] as number) - tp);
-      }
-    }
-    q += conducted + (exchange.get(p) ?? 0);
+    q += conductionOffSide(K, p, theta, (nb) => onBase.has(nb)) + (exchange.get(p) ?? 0);
   }
   return q;
+}
+
+/**
+ * Conduction from node p to its neighbours off a boundary (onSide false), W per unit depth, in difference form:
+ * the couplings between nodes of the boundary cancel in pairs and are left out, so no round-off of them remains.
+ */
+function conductionOffSide(K: Stencil9, p: number, potential: Float64Array, onSide: (q: number) => boolean): number {
+  const ny = K.nodesY;
+  const i = Math.floor(p / ny);
+  const j = p - i * ny;
+  const tp = potential[p] as number;
+  let conducted = 0;
+  for (let di = -1; di <= 1; di++) {
+    for (let dj = -1; dj <= 1; dj++) {
+      if (di === 0 && dj === 0) continue;
+      const c = couplingOf(K, i, j, di, dj);
+      const nb = p + di * ny + dj;
+      if (c !== 0 && !onSide(nb)) conducted += c * ((potential[nb] as number) - tp);
+    }
+  }
+  return conducted;
 }
