@@ -5,6 +5,7 @@
  * or of the approximation (Skeel 1980, Math. Comp. 35, 817-832 [from memory]). Units are the caller's.
  */
 import { coupledRhsNorm1, residual, type System2D } from './stencil9.js';
+import { norm1 } from './vector-ops.js';
 
 /**
  * Refinement target for |r|_1 relative to the coupled rows' |rhs|_1 (residual in difference form when the
@@ -66,10 +67,4 @@ export function roundOffFloor(system: System2D, x: Float64Array): number {
   let s = 0;
   for (let p = 0; p < x.length; p++) s += Math.abs((diag[p] as number) * (x[p] as number));
   return Number.EPSILON * s;
-}
-
-function norm1(v: Float64Array): number {
-  let s = 0;
-  for (let p = 0; p < v.length; p++) s += Math.abs(v[p] as number);
-  return s;
 }

@@ -25,6 +25,7 @@ import { stencilMultiply, stencilResidual } from './sink-stencil-product.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
 import { stencilRelaxation, type RelaxationPrecision } from './sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
+import { dot } from './vector-ops.js';
 
 export interface Preconditioner {
   /** z = M^-1 r (r unchanged); returns r · z (CG's next inner product, summed as the cycle's last sweep forms z). */
@@ -238,10 +239,4 @@ export function sinkMultigrid(
       };
     },
   };
-}
-
-function dot(a: Float64Array, b: Float64Array): number {
-  let s = 0;
-  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
-  return s;
 }

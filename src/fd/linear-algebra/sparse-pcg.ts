@@ -13,6 +13,7 @@
 import { SolverError } from '../../errors.js';
 import { csrMultiply, csrResidual, type CsrMatrix } from './csr.js';
 import type { Preconditioner } from './sink-multigrid.js';
+import { dot, norm1 } from './vector-ops.js';
 
 export interface SparsePcgReport {
   iterations: number;
@@ -100,16 +101,4 @@ export function roundingFloor(a: CsrMatrix, x: Float64Array): number {
     s += Math.abs(x[r]) * row;
   }
   return 4 * 2 ** -53 * s;
-}
-
-function dot(a: Float64Array, b: Float64Array): number {
-  let s = 0;
-  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
-  return s;
-}
-
-function norm1(v: Float64Array): number {
-  let s = 0;
-  for (let k = 0; k < v.length; k++) s += Math.abs(v[k]);
-  return s;
 }

@@ -28,6 +28,7 @@ import type { Preconditioner } from '../linear-algebra/sink-multigrid.js';
 import { sinkFaces, type SinkFaces } from './sink-faces.js';
 import type { SinkProblem } from './sink-problem.js';
 import type { SinkSystem } from './sink-system.js';
+import { dot, norm1 } from '../linear-algebra/vector-ops.js';
 
 const MAX_STEPS = 60;
 const MAX_HALVINGS = 20;
@@ -175,16 +176,4 @@ export function solveSinkNewton(
   throw new SolverError(
     `3-D sink solve: Newton did not converge in ${MAX_STEPS} steps (relative residual ${(norm / scale).toExponential(2)}, target ${tolerance.toExponential(0)})`,
   );
-}
-
-function dot(a: Float64Array, b: Float64Array): number {
-  let s = 0;
-  for (let k = 0; k < a.length; k++) s += a[k] * b[k];
-  return s;
-}
-
-function norm1(v: Float64Array): number {
-  let s = 0;
-  for (let k = 0; k < v.length; k++) s += Math.abs(v[k]);
-  return s;
 }
