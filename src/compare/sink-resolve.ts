@@ -65,8 +65,9 @@ export type SinkStudyAhead = (kept: { spec: SinkGridSpec; lane: SinkLane }, prov
 /**
  * resolvedSinkStudy on a check's two lanes (src/fd sink-lanes.ts), the same studies and the same choice: the
  * default study here, keeping its second-finest grid for the sensitivities; a further study with its finest grid
- * here and its two coarser grids on the other lane (which meanwhile may be busy with the check's other work),
- * keeping its second-finest grid there. The finest grid then starts CG from the default study's finest solution
+ * here and its two coarser grids on the other lane when that lane is a free thread of its own, else here before the
+ * finest (on the 20-fin bench sink the other lane is then still solving the sheet row's cells study, and the
+ * coarser grids and the sensitivities here finish before it would), keeping its second-finest grid where they ran. The finest grid then starts CG from the default study's finest solution
  * where it has twice its layers (src/fd sink-layer-start.ts), else from zero, instead of from the coarser solution
  * (the same solution to the solver's tolerance).
  */
@@ -86,9 +87,13 @@ export async function resolveSinkStudyOn(
     const plan = planSinkStudy(c, options);
     const n = plan.specs.length;
     const keep = n >= 2 ? n - 2 : null;
-    const coarser = lanes.run('there', { kind: 'grids', options, from: 0, to: n - 1, keep, startFrom: null });
+    // The coarser grids beside the finest when the other lane is free; else here, before it (the other lane is busy
+    // with the check's other work, e.g. the sheet row's cells study, and this one would wait for it).
+    const apart = lanes.apartAndFree();
+    const coarser = lanes.run(apart ? 'there' : 'here', { kind: 'grids', options, from: 0, to: n - 1, keep, startFrom: null });
     const kept = keep === null ? undefined : plan.specs[keep];
-    if (ahead !== undefined && kept !== undefined) ahead({ spec: kept, lane: 'there' }, best);
+    // Only a free lane of its own takes sensitivities ahead (here they would wait until this study is chosen).
+    if (ahead !== undefined && kept !== undefined && apart) ahead({ spec: kept, lane: 'there' }, best);
     const finest = lanes.run('here', { kind: 'grids', options, from: n - 1, to: n, keep: null, startFrom: first.finestGrid ?? null });
     const [coarse, fine] = await Promise.all([coarser, finest]);
     const study = sinkStudyOfPlan(plan, [...coarse, ...fine]);

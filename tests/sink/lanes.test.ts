@@ -67,6 +67,12 @@ describe('the sink check on two lanes', () => {
     expectClose(sequential, await onOneThread(), 1e-7);
   }, 120_000);
 
+  it("'there' on this thread is never a free lane apart (the further study's coarser grids then run here)", async () => {
+    const lanes = startSinkLanes(c, { parallel: 'never' });
+    expect(lanes.apartAndFree()).toBe(false);
+    await lanes.close();
+  });
+
   it('a task that fails on the other lane reports its own error', async () => {
     const lanes = startSinkLanes(c, { parallel: 'never' });
     await expect(lanes.run('there', { kind: 'study', options: { memoryLimit_bytes: 1 }, keep: false })).rejects.toBeInstanceOf(ModelNotApplicableError);
@@ -85,6 +91,17 @@ describe('the second lane on the bundled worker thread', () => {
   it('gives the numbers of both lanes on this thread, bit for bit', async () => {
     const threads = await runSinkCheck(c, resolvedSinkReference(TOLERANCE), { tolerance: TOLERANCE, lanes: { parallel: 'always', worker } });
     expect(JSON.stringify(threads)).toBe(JSON.stringify(await onOneThread()));
+  }, 120_000);
+
+  it('the worker is a free lane apart until it is given a task, and again once the task is done', async () => {
+    const lanes = startSinkLanes(c, { parallel: 'always', worker });
+    expect(lanes.apartAndFree()).toBe(true);
+    const study = lanes.run('there', { kind: 'study', options: { grids: 1 }, keep: false });
+    expect(lanes.apartAndFree()).toBe(false);
+    await study;
+    expect(lanes.apartAndFree()).toBe(true);
+    await lanes.close();
+    expect(lanes.apartAndFree()).toBe(false);
   }, 120_000);
 
   it('a task that fails on the worker is run here and reports its own error', async () => {

@@ -26,6 +26,11 @@ export interface SinkLanes {
   run<K extends SinkLaneTask['kind']>(lane: SinkLane, task: SinkLaneTaskOf<K>): Promise<SinkLaneResults[K]>;
   /** The lane that keeps this grid set up and solved; 'here' when none does. */
   holder(spec: SinkGridSpec): SinkLane;
+  /**
+   * Whether 'there' is a thread of its own (running, or allowed to start) with no task pending: a task given to it
+   * now starts at once, beside this thread. False when 'there' runs on this thread.
+   */
+  apartAndFree(): boolean;
   /** Stops the worker (pending tasks on it are dropped). */
   close(): Promise<void>;
 }
@@ -131,6 +136,9 @@ export function startSinkLanes(c: HeatSinkCase, options: SinkLanesOptions = {}):
     },
     holder(spec) {
       return kept.find((k) => sameSinkGrid(k.spec, spec))?.lane ?? 'here';
+    },
+    apartAndFree() {
+      return (worker !== null || allowed) && pending.size === 0;
     },
     async close() {
       const w = worker;
