@@ -9,14 +9,14 @@
  * operators of sink-coarse-operator.ts (the re-discretisation's conductances, the fine sparsity), one forward sweep of line Gauss-Seidel before
  * the coarse correction and one backward sweep after it on every level (line-relaxation.ts: the plate's z
  * columns and the fins' lines along their height; a thin plate couples far more strongly across its thickness
- * than along it), and a dense Cholesky solve on the coarsest level. Backward after forward, restriction the
+ * than along it), and a Cholesky solve in the envelope on the coarsest level (envelope-cholesky.ts). Backward after forward, restriction the
  * transpose of prolongation and symmetric positive definite coarse operators make the cycle symmetric positive
  * definite, as CG needs (Tatebe 1993, "The multigrid preconditioned
  * conjugate gradient method", NASA CP-3224 [from memory]).
  */
 import { coarseningDirections, levelUnknowns, prolongAddWith, restrictWith, type SinkLevelGrid } from './aggregation.js';
 import { csrResidual, type CsrMatrix } from './csr.js';
-import { denseCholesky, type DenseFactor } from './dense-cholesky.js';
+import { envelopeCholesky, type CholeskyFactor } from './envelope-cholesky.js';
 import { galerkinCsr } from './galerkin-csr.js';
 import type { Prolongation } from './prolongation.js';
 import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
@@ -55,7 +55,7 @@ export interface StructuredOperator {
   residual(x: Float64Array, b: Float64Array, out: Float64Array): number;
 }
 
-/** Unknowns of the coarsest level, solved by dense Cholesky (~n^3/3 = 2e7 flops at 400). */
+/** Unknowns of the coarsest level, solved by Cholesky in the envelope (at most ~n^3/6 = 1e7 multiply-adds at 400). */
 const COARSEST = 400;
 
 /** A level: its smoother, its residual and the transfers to the next coarser level (null on the coarsest). */
@@ -199,7 +199,7 @@ export function sinkMultigrid(
     levels.push(stencilLevel(stencil, precision));
     g = t.coarse;
   }
-  const direct: DenseFactor = denseCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
+  const direct: CholeskyFactor = envelopeCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
   levelVectors(levels);
 
   /** One V-cycle from level l; returns b · x on the finest level (0 below it). */
