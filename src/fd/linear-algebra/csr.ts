@@ -24,7 +24,8 @@ export interface CsrMatrix {
 /** Diagonal plus symmetric couplings, grown as the assembly adds them. */
 export class ConductanceBuilder {
   readonly diagonal: Float64Array;
-  private readonly excess: Float64Array;
+  /** Each unknown's conductance to fixed temperatures (the row sums; the CSR form's `excess`). */
+  readonly excess: Float64Array;
   private p: Int32Array;
   private q: Int32Array;
   private g: Float64Array;
@@ -109,6 +110,37 @@ export class ConductanceBuilder {
     this.q = q;
     this.g = g;
   }
+}
+
+/**
+ * The CSR form of `builder` as toCsr gives it, its arrays formed on first use: a system solved through another form
+ * of the matrix (the 3-D sink's sheets: its multigrid's stencil, sink-stencil.ts) skips the pass over every coupling
+ * and the first touch of 12 bytes an entry, unless something reads them (a residual of a perturbed system, a Newton
+ * step). No couplings may be added to the builder afterwards; it is let go once the form is made.
+ */
+export function deferredCsr(builder: ConductanceBuilder): CsrMatrix {
+  let source: ConductanceBuilder | null = builder;
+  let formed: CsrMatrix | null = null;
+  const form = (): CsrMatrix => {
+    if (formed === null) {
+      formed = (source as ConductanceBuilder).toCsr();
+      source = null;
+    }
+    return formed;
+  };
+  return {
+    n: builder.n,
+    excess: builder.excess,
+    get rowStart() {
+      return form().rowStart;
+    },
+    get col() {
+      return form().col;
+    },
+    get val() {
+      return form().val;
+    },
+  };
 }
 
 /** out = A x (out may not alias x); in difference form when the matrix carries its `excess` (see csrResidual). */

@@ -19,7 +19,7 @@
  * matrix: losses (node, G, fixed theta, owner: fin index, or PLATE_TOP / UNDERSIDE) and root couplings.
  */
 import type { SinkGrid } from '../../mesh/index.js';
-import { ConductanceBuilder, type CsrMatrix } from '../linear-algebra/csr.js';
+import { ConductanceBuilder, deferredCsr, type CsrMatrix } from '../linear-algebra/csr.js';
 import { PLATE_TOP, TermLists, UNDERSIDE, type HeatTerms, type RootTerms } from './heat-terms.js';
 import type { SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { LineSet } from '../linear-algebra/line-relaxation.js';
@@ -185,13 +185,14 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
       ds: (grid.s[grid.ns] - grid.s[0]) / Math.max(1, grid.ns),
     })),
   };
-  const matrix = builder.toCsr();
+  // Sheets are solved through the stencil (the multigrid's operator in CG): their CSR form is formed only if read.
+  const matrix = known === null ? builder.toCsr() : deferredCsr(builder);
   return {
     grid,
     representation: finCells ? 'cells' : 'sheet',
     matrix,
     // Sheets: the unknowns are the multigrid's level grid, so the matrix is also held as its stencil.
-    stencil: known === null ? null : stencilFromCouplings(levelGrid, builder.couplingList(), builder.diagonal, matrix.excess as Float64Array, known),
+    stencil: known === null ? null : stencilFromCouplings(levelGrid, builder.couplingList(), builder.diagonal, builder.excess, known),
     rhs,
     lines: { order, start: Int32Array.from(start) },
     levelGrid,
