@@ -63,7 +63,7 @@ export interface SinkCheckRun {
  * The fd-3d work runs on two lanes (src/fd sink-lanes.ts: this thread and a worker thread): the sheet row's cells
  * study starts on the other lane first, since it needs nothing but the case; the reference (resolveSinkStudyOn)
  * takes this one and, for a further study, both; the sensitivities run where the reference's second-finest grid
- * is kept. The numbers are those of the same steps on one thread.
+ * is kept, before the check waits for the cells study. The numbers are those of the same steps on one thread.
  */
 export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReferenceSource, options: SinkCheckOptions): Promise<SinkCheckRun> {
   const lanes = startSinkLanes(c, options.lanes);
@@ -82,13 +82,16 @@ export async function runSinkCheckWith(c: HeatSinkCase, reference: SinkReference
       early.push({ task, slopes });
     };
     const study = typeof reference === 'function' ? await reference(c, lanes, ahead) : reference;
+    // The slopes first: on this lane they run at once, while the other lane may still be solving the cells study.
+    const task = options.sensitivities === false ? null : sinkSlopeTask(c, study);
+    const queued = task === null ? undefined : early.find((e) => sameSinkGrid(e.task.spec, task.spec) && e.task.source === task.source);
+    const slopesRun = task === null ? undefined : (queued?.slopes ?? lanes.run(lanes.holder(task.spec), { kind: 'slopes', ...task }));
+    void slopesRun?.catch(() => undefined);
     const shortcuts = await sinkShortcuts(c);
     const base = sinkCheckFrom(c, study, shortcuts, options);
     const sheet = options.sheetDrift === false ? null : sheetReductionRow(c, study, cellsStudy === null ? undefined : await cellsStudy);
     const withSheet = sheet === null ? base : { ...base, assumptions: [...base.assumptions, sheet] };
-    const task = options.sensitivities === false ? null : sinkSlopeTask(c, study);
-    const queued = task === null ? undefined : early.find((e) => sameSinkGrid(e.task.spec, task.spec) && e.task.source === task.source);
-    const slopes = task === null ? undefined : await (queued?.slopes ?? lanes.run(lanes.holder(task.spec), { kind: 'slopes', ...task }));
+    const slopes = slopesRun === undefined ? undefined : await slopesRun;
     const sensitivity =
       options.sensitivities === false
         ? null
