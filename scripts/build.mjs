@@ -4,7 +4,7 @@
 // when a run needs it. Chunks sit beside the entries in dist/, so `new URL('./map-worker.js', import.meta.url)`
 // and createRequire(import.meta.url) resolve the same from any of them. Native or WASM packages, and PDFKit
 // (it reads its font metrics from its own folder at run time), stay external and load lazily.
-import { rmSync, writeFileSync } from 'node:fs';
+import { cpSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join, resolve } from 'node:path';
 import { build } from 'esbuild';
@@ -67,6 +67,10 @@ const vendorBundle = {
 const EXTERNAL = ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core', 'pdfkit', 'svg-to-pdfkit'];
 
 rmSync('dist', { recursive: true, force: true, maxRetries: 3 });
+
+// The charts' font subsets and their license (src/images/chart-font-subset.ts), in fonts/ beside the bundles, where
+// src/images/render.ts looks for them from dist as from src.
+cpSync('src/images/fonts', 'dist/fonts', { recursive: true });
 
 // The vendor bundle (CommonJS, one file) and its code cache, made by compiling and running it here once (a cache
 // made after the run also holds the functions its top level compiled).
