@@ -52,7 +52,6 @@ export function referenceSensitivity(
   referenceHeatRate: number,
 ): ReferenceSensitivity {
   const oneDFinest = { nodes: oneD.finest.mesh.nodes, grading: resolution.gridGrading };
-  const oneDCoarsest = { nodes: resolution.nodes[0] ?? oneDFinest.nodes, grading: resolution.gridGrading };
   // The study's grids, finest first.
   const grids: ReferenceGrid[] =
     twoD === null
@@ -72,7 +71,9 @@ export function referenceSensitivity(
   const coarsest = grids[grids.length - 1] as ReferenceGrid;
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
   const { sens, method } =
-    twoD !== null && !solvers.nonlinear ? adjointSensitivities(c, twoD, oneDCoarsest, given) : reSolvedSensitivities(c, solvers, grids, given);
+    twoD !== null && !solvers.nonlinear
+      ? adjointSensitivities(c, twoD, { nodes: twoD.finest.grid.nodesX, grading: resolution.gridGrading }, given)
+      : reSolvedSensitivities(c, solvers, grids, given);
   const sampleWork = (opts.sampleSize ?? DEFAULT_SAMPLE_SIZE) * unknownsOf(coarsest) * weight;
   const uncertainty = uncertaintyBand(c, sens, referenceHeatRate, {
     when: opts.sample ?? 'auto',
@@ -96,8 +97,10 @@ export function referenceSensitivity(
 /**
  * A linear fin with the fd-2d reference: the discrete adjoint on the study's finest grid (one extra solve for
  * every input; reference-rate.ts adjointReferenceRate), no work budget needed beyond the study's own. The side
- * edges' correction (a few per cent of Q) is differenced on the 1-D study's coarsest grid: its derivative there
- * differs from the finest grid's by that grid's discretisation error (below 1e-6 of itself), so S by < 1e-7.
+ * edges' correction (a few per cent of Q) is differenced on a 1-D grid of as many nodes as the 2-D grid has along
+ * the fin (`edges`), as the coarse grids' corrections are: its derivative there differs from a fine 1-D grid's by
+ * that grid's discretisation error (about (L / nx)^2 m^2 / 12, below 1e-4 of itself on the study's finest grids),
+ * which moves S by under 1e-5 of the correction's share of Q (a few per cent): below the 4 digits shown.
  */
 function adjointSensitivities(
   c: Case,
@@ -111,7 +114,7 @@ function adjointSensitivities(
   const sens = sensitivitiesFrom(c, (input) => reference.derivative(input.scale, d), reference.nominal, given, true, 'adjoint');
   const edgeWords =
     c.fin.edges === 'cooled' && isStraight(c)
-      ? `; the side edges' fd-1d correction by central differences on ${edges.nodes} nodes (the coarsest 1-D grid of the study), relative step ${d}`
+      ? `; the side edges' fd-1d correction by central differences on ${edges.nodes} nodes (as many as the 2-D grid has along the fin), relative step ${d}`
       : '';
   return {
     sens,
