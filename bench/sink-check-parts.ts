@@ -10,7 +10,7 @@ import { sinkProblem } from '../src/fd/three-d/sink-problem.js';
 import { buildSinkGrid } from '../src/mesh/index.js';
 import { sinkMultigrid } from '../src/fd/linear-algebra/sink-multigrid.js';
 import { sparsePcg } from '../src/fd/linear-algebra/sparse-pcg.js';
-import { nestedProlongation, prolongAddWith, type SinkLevelGrid } from '../src/fd/linear-algebra/aggregation.js';
+import { nestedProlongate, type SinkLevelGrid } from '../src/fd/linear-algebra/aggregation.js';
 import type { FinRepresentation } from '../src/fd/three-d/sink-system.js';
 
 const cpu = (): number => {
@@ -38,9 +38,9 @@ async function main(): Promise<void> {
       const t1 = cpu();
       const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold);
       const t2 = cpu();
-      const p = previous === null || system.fold !== null ? null : nestedProlongation(previous.level, system.levelGrid);
-      const x0 = new Float64Array(system.matrix.n);
-      if (p !== null && previous !== null) prolongAddWith(p, previous.theta, x0);
+      const x0 =
+        (previous === null || system.fold !== null ? null : nestedProlongate(previous.level, system.levelGrid, previous.theta)) ??
+        new Float64Array(system.matrix.n);
       const t3 = cpu();
       const { x, report } = sparsePcg(system.matrix, system.rhs, pre, 1e-10, 400, x0);
       const t4 = cpu();

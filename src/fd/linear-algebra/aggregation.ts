@@ -88,6 +88,107 @@ export function nestedProlongation(coarse: SinkLevelGrid, fine: SinkLevelGrid): 
   return coarsenWith(fine, { x, y, z, rows: rows.map((r) => r === true), layers: layers.map((l) => l === true) }).p;
 }
 
+/**
+ * nestedProlongation's P applied to the coarser grid's vector `e` (P e, a new vector), without forming P: the same
+ * weights, products and sums in the same order as prolongAddWith on a zero vector, so the same bits; what starts a
+ * finer grid's CG once, where P's ~8 entries a fine unknown would be formed (and their memory first touched) for a
+ * single product. Null where nestedProlongation is.
+ */
+export function nestedProlongate(coarse: SinkLevelGrid, fine: SinkLevelGrid, e: Float64Array): Float64Array | null {
+  const doubled = (c: number, f: number): boolean | null => (f === 2 * c ? true : f === 1 && c === 1 ? false : null);
+  const cx = doubled(coarse.nx, fine.nx);
+  const cy = doubled(coarse.ny, fine.ny);
+  const cz = doubled(coarse.nz, fine.nz);
+  if (cx === null || cy === null || cz === null || coarse.fins.length !== fine.fins.length) return null;
+  const rows = fine.fins.map((f, k) => doubled(coarse.fins[k].rows, f.rows));
+  const layers = fine.fins.map((f, k) => doubled(coarse.fins[k].layers, f.layers));
+  if (rows.some((r) => r === null) || layers.some((l) => l === null)) return null;
+  const { nx: nxc, ny: nyc, nz: nzc } = coarse;
+  const out = new Float64Array(levelUnknowns(fine));
+  prolongPlate(transfer(fine.nx, nxc, cx), transfer(fine.ny, nyc, cy), transfer(fine.nz, nzc, cz), nyc, nzc, e, out);
+  let row = fine.nx * fine.ny * fine.nz;
+  let offset = nxc * nyc * nzc;
+  fine.fins.forEach((f, index) => {
+    const c = coarse.fins[index];
+    prolongFin(
+      transfer(f.rows, c.rows, rows[index] === true),
+      transfer(f.layers, c.layers, layers[index] === true),
+      f.rows,
+      f.layers,
+      c.layers,
+      offset,
+      row,
+      e,
+      out,
+    );
+    row += f.rows * f.layers;
+    offset += c.rows * c.layers;
+  });
+  return out;
+}
+
+type Transfer = ReturnType<typeof transfer>;
+
+/** The plate rows of nestedProlongate (coarsenWith's plate loop, each entry's product summed at once). */
+function prolongPlate(tx: Transfer, ty: Transfer, tz: Transfer, nyc: number, nzc: number, e: Float64Array, out: Float64Array): void {
+  const nx = tx.w.length;
+  const ny = ty.w.length;
+  const nz = tz.w.length;
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      for (let k = 0; k < nz; k++) {
+        let s = 0;
+        for (let a = 0; a < 2; a++) {
+          const wa = a === 0 ? tx.w[i] : 1 - tx.w[i];
+          if (wa === 0) continue;
+          const ic = a === 0 ? tx.own[i] : tx.other[i];
+          for (let b = 0; b < 2; b++) {
+            const wb = b === 0 ? ty.w[j] : 1 - ty.w[j];
+            if (wb === 0) continue;
+            const jc = b === 0 ? ty.own[j] : ty.other[j];
+            for (let d = 0; d < 2; d++) {
+              const wd = d === 0 ? tz.w[k] : 1 - tz.w[k];
+              if (wd === 0) continue;
+              s += wa * wb * wd * e[(ic * nyc + jc) * nzc + (d === 0 ? tz.own[k] : tz.other[k])];
+            }
+          }
+        }
+        out[(i * ny + j) * nz + k] += s;
+      }
+    }
+  }
+}
+
+/** One fin's rows of nestedProlongate (coarsenWith's fin loop), fine rows from `row`, coarse nodes from `offset`. */
+function prolongFin(
+  tr: Transfer,
+  tl: Transfer,
+  rows: number,
+  layers: number,
+  coarseLayers: number,
+  offset: number,
+  row: number,
+  e: Float64Array,
+  out: Float64Array,
+): void {
+  for (let j = 0; j < rows; j++) {
+    for (let l = 0; l < layers; l++) {
+      let s = 0;
+      for (let a = 0; a < 2; a++) {
+        const wa = a === 0 ? tr.w[j] : 1 - tr.w[j];
+        if (wa === 0) continue;
+        const jc = a === 0 ? tr.own[j] : tr.other[j];
+        for (let d = 0; d < 2; d++) {
+          const wd = d === 0 ? tl.w[l] : 1 - tl.w[l];
+          if (wd === 0) continue;
+          s += wa * wd * e[offset + jc * coarseLayers + (d === 0 ? tl.own[l] : tl.other[l])];
+        }
+      }
+      out[row + j * layers + l] += s;
+    }
+  }
+}
+
 /** The coarse level of one step in the given directions (pairs of cells; an odd last one alone). */
 export function coarseLevelGrid(g: SinkLevelGrid, flags: SinkCoarsening['coarsened']): SinkLevelGrid {
   const { x: cx, y: cy, z: cz, rows: rowsCoarsened, layers: layersCoarsened } = flags;

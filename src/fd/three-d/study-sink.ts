@@ -3,7 +3,7 @@
  * along the fins), the Celik et al. (2008) three-grid estimate (study/refinement.ts: richardsonGci) on every
  * source's mean rise, and the finest grid's fields and heat rates as the SinkStudy (sink-study-types.ts).
  * Grids are solved coarsest first, each finer one of a linear sink started from the coarser solution prolonged
- * (aggregation.ts nestedProlongation); the memory of the finest is checked before any is solved.
+ * (aggregation.ts nestedProlongate); the memory of the finest is checked before any is solved.
  *
  * Default grids: coarsest cell size min(width, length)/16 in x and y (every fin, gap and source at least one
  * cell: footprint and source edges are grid lines), 2 plate layers, 4 fin layers; the finest of three grids then
@@ -18,7 +18,7 @@ import { sinkFinProfiles } from './sink-fin-profiles.js';
 import { sinkPlateView } from './sink-plate-view.js';
 import { sinkProblem, type SinkProblem } from './sink-problem.js';
 import { isNonlinearSink, solveSinkSystem, type SinkGridResult } from './sink-solve.js';
-import { nestedProlongation, prolongAddWith, type SinkLevelGrid } from '../linear-algebra/aggregation.js';
+import { nestedProlongate, type SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { SinkGridSpec, SinkStudy } from './sink-study-types.js';
 import { sinkGridOf, sinkGridSetup, type SolvedSinkGrid } from './sink-grid-setup.js';
 
@@ -99,12 +99,11 @@ export function solveSinkGrids(
   specs.forEach((spec, g) => {
     const setup = sinkGridSetup(problem, spec);
     const { system } = setup;
-    const p = previous === null || system.fold !== null || isNonlinearSink(problem) ? null : nestedProlongation(previous.level, system.levelGrid);
+    const prolonged =
+      previous === null || system.fold !== null || isNonlinearSink(problem) ? null : nestedProlongate(previous.level, system.levelGrid, previous.theta);
     let start: Float64Array | undefined;
-    if (p !== null && previous !== null) {
-      start = new Float64Array(system.matrix.n);
-      prolongAddWith(p, previous.theta, start);
-    } else if (g === 0 && first !== undefined && !isNonlinearSink(problem)) start = first(setup.grid, system.matrix.n) ?? undefined;
+    if (prolonged !== null) start = prolonged;
+    else if (g === 0 && first !== undefined && !isNonlinearSink(problem)) start = first(setup.grid, system.matrix.n) ?? undefined;
     const result = solveSinkSystem(problem, system, start, setup.pre);
     results.push(result);
     if (g === keep) kept = { spec, setup, theta: result.theta, iterations: result.iterations };
