@@ -20,7 +20,7 @@
  */
 import type { SinkGrid } from '../../mesh/index.js';
 import { ConductanceBuilder, deferredCsr, type CsrMatrix } from '../linear-algebra/csr.js';
-import { PLATE_TOP, TermLists, UNDERSIDE, type HeatTerms, type RootTerms } from './heat-terms.js';
+import { PLATE_TOP, TermLists, UNDERSIDE, type FinAssembly, type HeatTerms, type RootTerms } from './heat-terms.js';
 import type { SinkLevelGrid } from '../linear-algebra/aggregation.js';
 import type { LineSet } from '../linear-algebra/line-relaxation.js';
 import { stencilFromCouplings, type SinkStencil } from '../linear-algebra/sink-stencil.js';
@@ -68,45 +68,24 @@ export function sinkUnknowns(grid: SinkGrid, representation: FinRepresentation, 
   return plate + fins;
 }
 
+/**
+ * Each phase of the assembly is a function of its own, called once a grid: a small function is optimised as soon as
+ * its loop is hot, where one long function was recompiled whole for each loop it entered (and fell back to the
+ * interpreter at every phase its first compilation had not seen). The couplings and terms are added in the same order.
+ */
 export function assembleSink(problem: SinkProblem, grid: SinkGrid, representation: FinRepresentation): SinkSystem {
   const { nx, ny, nz, x, y, z } = grid;
-  const kp = problem.kPlate;
   const plateUnknowns = nx * ny * nz;
   const n = sinkUnknowns(grid, representation, problem.layout.finKind);
   // At most three couplings an unknown to higher neighbours (plate; fins as cells), plus a root per plate column.
   const builder = new ConductanceBuilder(n, 3 * n + nx * ny);
   const rhs = new Float64Array(n);
   const terms = new TermLists(builder, rhs);
-  const cell = (i: number, j: number, k: number): number => (i * ny + j) * nz + k;
-  const dx = (i: number) => x[i + 1] - x[i];
-  const dy = (j: number) => y[j + 1] - y[j];
-  const dz = (k: number) => z[k + 1] - z[k];
 
   // Plate conduction; for sheets also into the multigrid's stencil (sink-stencil.ts), whose unknowns these are.
   const finCells = representation === 'cells' && problem.layout.finKind === 'plates';
   const known = finCells ? null : { line: new Float64Array(n), gx: new Float64Array(plateUnknowns), gy: new Float64Array(plateUnknowns), from: 0 };
-  for (let i = 0; i < nx; i++) {
-    for (let j = 0; j < ny; j++) {
-      for (let k = 0; k < nz; k++) {
-        const p = cell(i, j, k);
-        if (i + 1 < nx) {
-          const g = (kp * dy(j) * dz(k)) / (0.5 * (dx(i) + dx(i + 1)));
-          builder.couple(p, cell(i + 1, j, k), g);
-          if (known !== null) known.gx[p] = g;
-        }
-        if (j + 1 < ny) {
-          const g = (kp * dx(i) * dz(k)) / (0.5 * (dy(j) + dy(j + 1)));
-          builder.couple(p, cell(i, j + 1, k), g);
-          if (known !== null) known.gy[p] = g;
-        }
-        if (k + 1 < nz) {
-          const g = (kp * dx(i) * dy(j)) / (0.5 * (dz(k) + dz(k + 1)));
-          builder.couple(p, p + 1, g);
-          if (known !== null) known.line[p] = g;
-        }
-      }
-    }
-  }
+  plateConduction(builder, grid, problem.kPlate, known);
   if (known !== null) known.from = builder.couplings;
 
   // Underside: sources (isoflux), elsewhere h_u or adiabatic.
@@ -114,62 +93,31 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
   const sourceFlux = new Float64Array(grid.sources.length);
   let heatIn = 0;
   grid.sources.forEach((b, s) => {
-    let area = 0;
-    for (let i = b.i0; i < b.i1; i++) for (let j = b.j0; j < b.j1; j++) area += dx(i) * dy(j);
-    const flux = problem.sources[s].power / area;
-    sourceFlux[s] = flux;
-    for (let i = b.i0; i < b.i1; i++) {
-      for (let j = b.j0; j < b.j1; j++) {
-        rhs[cell(i, j, 0)] += flux * dx(i) * dy(j);
-        heated[i * ny + j] = 1;
-      }
-    }
+    sourceFlux[s] = sourceHeat(grid, b, problem.sources[s].power, rhs, heated);
     heatIn += problem.sources[s].power;
   });
   const hu = problem.hUnderside;
-  if (hu !== null && hu > 0) {
-    for (let i = 0; i < nx; i++) {
-      for (let j = 0; j < ny; j++) {
-        if (heated[i * ny + j] === 1) continue;
-        const a = dx(i) * dy(j);
-        terms.loss(cell(i, j, 0), hu * a, (kp * a) / (0.5 * dz(0)), UNDERSIDE, 'linear');
-      }
-    }
-  }
+  if (hu !== null && hu > 0) faceLosses(terms, grid, problem.kPlate, hu, 0, heated, UNDERSIDE);
 
   // Fin footprints, then the exposed top.
   const footprintOwner = new Int32Array(nx * ny).fill(-1);
   grid.fins.forEach((b, f) => {
     for (let i = b.i0; i < b.i1; i++) for (let j = b.j0; j < b.j1; j++) footprintOwner[i * ny + j] = f;
   });
-  if (problem.hPlate > 0) {
-    for (let i = 0; i < nx; i++) {
-      for (let j = 0; j < ny; j++) {
-        if (footprintOwner[i * ny + j] >= 0) continue;
-        const a = dx(i) * dy(j);
-        terms.loss(cell(i, j, nz - 1), problem.hPlate * a, (kp * a) / (0.5 * dz(nz - 1)), PLATE_TOP, 'linear');
-      }
-    }
-  }
+  if (problem.hPlate > 0)
+    faceLosses(
+      terms,
+      grid,
+      problem.kPlate,
+      problem.hPlate,
+      nz - 1,
+      Uint8Array.from(footprintOwner, (f) => (f >= 0 ? 1 : 0)),
+      PLATE_TOP,
+    );
 
   // Fins and the lines of the line relaxation.
-  const order = new Int32Array(n);
-  const start: number[] = [0];
-  let q = 0;
   const fins = finCells ? assembleFinCells(problem, grid, plateUnknowns, builder, terms) : assembleFinSheets(problem, grid, plateUnknowns, builder, terms);
-  for (let i = 0; i < nx; i++) {
-    for (let j = 0; j < ny; j++) {
-      for (let k = 0; k < nz; k++) order[q++] = cell(i, j, k);
-      const above = fins.columnAbove(i, j);
-      if (above !== null) for (const node of above) order[q++] = node;
-      start.push(q);
-    }
-  }
-  for (const line of fins.lines) {
-    for (const node of line) order[q++] = node;
-    start.push(q);
-  }
-  if (q !== n) throw new Error(`assembleSink: ${q} unknowns on lines, ${n} expected`);
+  const lines = lineOrder(grid, fins, n);
 
   const levelGrid: SinkLevelGrid = {
     nx,
@@ -194,7 +142,7 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
     // Sheets: the unknowns are the multigrid's level grid, so the matrix is also held as its stencil.
     stencil: known === null ? null : stencilFromCouplings(levelGrid, builder.couplingList(), builder.diagonal, builder.excess, known),
     rhs,
-    lines: { order, start: Int32Array.from(start) },
+    lines,
     levelGrid,
     fold: finCells ? foldCells(grid, plateUnknowns) : null,
     plateUnknowns,
@@ -204,6 +152,90 @@ export function assembleSink(problem: SinkProblem, grid: SinkGrid, representatio
     footprintOwner,
     heatIn,
   };
+}
+
+/** The plate's conductances between neighbouring cells, (i, j, k) to (i+1, j, k), (i, j+1, k) and (i, j, k+1) in turn. */
+function plateConduction(
+  builder: ConductanceBuilder,
+  grid: SinkGrid,
+  kp: number,
+  known: { line: Float64Array; gx: Float64Array; gy: Float64Array } | null,
+): void {
+  const { nx, ny, nz, x, y, z } = grid;
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      for (let k = 0; k < nz; k++) {
+        const p = (i * ny + j) * nz + k;
+        if (i + 1 < nx) {
+          const g = (kp * (y[j + 1] - y[j]) * (z[k + 1] - z[k])) / (0.5 * (x[i + 1] - x[i] + (x[i + 2] - x[i + 1])));
+          builder.couple(p, ((i + 1) * ny + j) * nz + k, g);
+          if (known !== null) known.gx[p] = g;
+        }
+        if (j + 1 < ny) {
+          const g = (kp * (x[i + 1] - x[i]) * (z[k + 1] - z[k])) / (0.5 * (y[j + 1] - y[j] + (y[j + 2] - y[j + 1])));
+          builder.couple(p, (i * ny + j + 1) * nz + k, g);
+          if (known !== null) known.gy[p] = g;
+        }
+        if (k + 1 < nz) {
+          const g = (kp * (x[i + 1] - x[i]) * (y[j + 1] - y[j])) / (0.5 * (z[k + 1] - z[k] + (z[k + 2] - z[k + 1])));
+          builder.couple(p, p + 1, g);
+          if (known !== null) known.line[p] = g;
+        }
+      }
+    }
+  }
+}
+
+/** One source's heat on its underside cells (q'' dx dy each, q'' = power / its cells' area); marks them heated; returns q''. */
+function sourceHeat(grid: SinkGrid, b: SinkGrid['sources'][number], power: number, rhs: Float64Array, heated: Uint8Array): number {
+  const { ny, nz, x, y } = grid;
+  let area = 0;
+  for (let i = b.i0; i < b.i1; i++) for (let j = b.j0; j < b.j1; j++) area += (x[i + 1] - x[i]) * (y[j + 1] - y[j]);
+  const flux = power / area;
+  for (let i = b.i0; i < b.i1; i++) {
+    for (let j = b.j0; j < b.j1; j++) {
+      rhs[(i * ny + j) * nz] += flux * (x[i + 1] - x[i]) * (y[j + 1] - y[j]);
+      heated[i * ny + j] = 1;
+    }
+  }
+  return flux;
+}
+
+/**
+ * The losses of a plate face, layer k (0: the underside, nz − 1: the top), through h in series with the half cell,
+ * on every column not `covered` (1: a heated underside cell, the top under a fin).
+ */
+function faceLosses(terms: TermLists, grid: SinkGrid, kp: number, h: number, k: number, covered: Uint8Array, owner: number): void {
+  const { nx, ny, nz, x, y, z } = grid;
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      if (covered[i * ny + j] === 1) continue;
+      const a = (x[i + 1] - x[i]) * (y[j + 1] - y[j]);
+      terms.loss((i * ny + j) * nz + k, h * a, (kp * a) / (0.5 * (z[k + 1] - z[k])), owner, 'linear');
+    }
+  }
+}
+
+/** The lines of the line relaxation: each plate column with the fin nodes above it (fins as cells), then the fins' own lines. */
+function lineOrder(grid: SinkGrid, fins: FinAssembly, n: number): LineSet {
+  const { nx, ny, nz } = grid;
+  const order = new Int32Array(n);
+  const start: number[] = [0];
+  let q = 0;
+  for (let i = 0; i < nx; i++) {
+    for (let j = 0; j < ny; j++) {
+      for (let k = 0; k < nz; k++) order[q++] = (i * ny + j) * nz + k;
+      const above = fins.columnAbove(i, j);
+      if (above !== null) for (const node of above) order[q++] = node;
+      start.push(q);
+    }
+  }
+  for (const line of fins.lines) {
+    for (const node of line) order[q++] = node;
+    start.push(q);
+  }
+  if (q !== n) throw new Error(`assembleSink: ${q} unknowns on lines, ${n} expected`);
+  return { order, start: Int32Array.from(start) };
 }
 
 /** Fins as cells: plate cells onto themselves, fin f's cell (i, j, l) onto sheet node (j, l) of fin f. */
