@@ -72,29 +72,11 @@ export class ConductanceBuilder {
 
   toCsr(): CsrMatrix {
     const n = this.n;
-    const rowStart = new Int32Array(n + 1);
-    for (let r = 0; r < n; r++) rowStart[r + 1] = 1;
-    for (let c = 0; c < this.count; c++) {
-      rowStart[this.p[c] + 1]++;
-      rowStart[this.q[c] + 1]++;
-    }
-    for (let r = 0; r < n; r++) rowStart[r + 1] += rowStart[r];
+    const rowStart = csrRowStarts(n, this.p, this.q, this.count);
     const nnz = rowStart[n];
     const col = new Int32Array(nnz);
     const val = new Float64Array(nnz);
-    const fill = rowStart.slice(0, n);
-    for (let r = 0; r < n; r++) {
-      col[fill[r]] = r;
-      val[fill[r]++] = this.diagonal[r];
-    }
-    for (let c = 0; c < this.count; c++) {
-      const p = this.p[c];
-      const q = this.q[c];
-      col[fill[p]] = q;
-      val[fill[p]++] = -this.g[c];
-      col[fill[q]] = p;
-      val[fill[q]++] = -this.g[c];
-    }
+    csrScatter(n, this.diagonal, this.p, this.q, this.g, this.count, rowStart, col, val);
     return { n, rowStart, col, val, excess: this.excess };
   }
 
@@ -109,6 +91,50 @@ export class ConductanceBuilder {
     this.p = p;
     this.q = q;
     this.g = g;
+  }
+}
+
+/*
+ * toCsr's two passes, functions of their own: loops in small functions are optimised as soon as they are hot (the
+ * method is called once a grid).
+ */
+
+/** Row starts: each row its diagonal and one entry per coupling it takes part in. */
+function csrRowStarts(n: number, p: Int32Array, q: Int32Array, count: number): Int32Array {
+  const rowStart = new Int32Array(n + 1);
+  for (let r = 0; r < n; r++) rowStart[r + 1] = 1;
+  for (let c = 0; c < count; c++) {
+    rowStart[p[c] + 1]++;
+    rowStart[q[c] + 1]++;
+  }
+  for (let r = 0; r < n; r++) rowStart[r + 1] += rowStart[r];
+  return rowStart;
+}
+
+/** Each row's diagonal first, then −g of its couplings in the order added. */
+function csrScatter(
+  n: number,
+  diagonal: Float64Array,
+  p: Int32Array,
+  q: Int32Array,
+  g: Float64Array,
+  count: number,
+  rowStart: Int32Array,
+  col: Int32Array,
+  val: Float64Array,
+): void {
+  const fill = rowStart.slice(0, n);
+  for (let r = 0; r < n; r++) {
+    col[fill[r]] = r;
+    val[fill[r]++] = diagonal[r];
+  }
+  for (let c = 0; c < count; c++) {
+    const a = p[c];
+    const b = q[c];
+    col[fill[a]] = b;
+    val[fill[a]++] = -g[c];
+    col[fill[b]] = a;
+    val[fill[b]++] = -g[c];
   }
 }
 

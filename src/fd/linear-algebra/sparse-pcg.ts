@@ -62,19 +62,13 @@ export function sparsePcg(
     for (let it = 0; it < maxIterations; it++) {
       const pq = op.multiply(p, q);
       if (!(pq > 0) || !(rz > 0)) break;
-      const alpha = rz / pq;
-      let size = 0;
-      for (let k = 0; k < n; k++) {
-        x[k] += alpha * p[k];
-        r[k] -= alpha * q[k];
-        size += Math.abs(r[k]);
-      }
+      const size = step(n, rz / pq, p, q, x, r);
       iterations++;
       if (size <= 0.5 * tolerance * scale) break;
       const next = m.apply(r, z);
       const beta = next / rz;
       rz = next;
-      for (let k = 0; k < n; k++) p[k] = z[k] + beta * p[k];
+      direction(n, beta, z, p);
     }
     relative = op.residual(x, b, r) / scale;
   }
@@ -85,6 +79,27 @@ export function sparsePcg(
     );
   }
   return { x, report: { iterations, relativeResidual: relative } };
+}
+
+/*
+ * CG's vector updates, functions of their own (called every iteration, so optimised early, where a loop inside the
+ * solver was recompiled with the whole solver).
+ */
+
+/** x += alpha p, r −= alpha q; returns |r|_1. */
+function step(n: number, alpha: number, p: Float64Array, q: Float64Array, x: Float64Array, r: Float64Array): number {
+  let size = 0;
+  for (let k = 0; k < n; k++) {
+    x[k] += alpha * p[k];
+    r[k] -= alpha * q[k];
+    size += Math.abs(r[k]);
+  }
+  return size;
+}
+
+/** p = z + beta p. */
+function direction(n: number, beta: number, z: Float64Array, p: Float64Array): void {
+  for (let k = 0; k < n; k++) p[k] = z[k] + beta * p[k];
 }
 
 /**
