@@ -95,20 +95,30 @@ export class ConductanceBuilder {
 }
 
 /*
- * toCsr's two passes, functions of their own: loops in small functions are optimised as soon as they are hot (the
- * method is called once a grid).
+ * toCsr's passes, one loop a function: a function whose one loop is hot is optimised with the feedback of all its
+ * code (the method is called once a grid; a loop compiled on its own entry left the loops after it without feedback,
+ * and each of them deoptimised it again).
  */
 
 /** Row starts: each row its diagonal and one entry per coupling it takes part in. */
 function csrRowStarts(n: number, p: Int32Array, q: Int32Array, count: number): Int32Array {
-  const rowStart = new Int32Array(n + 1);
-  for (let r = 0; r < n; r++) rowStart[r + 1] = 1;
+  const rowStart = new Int32Array(n + 1).fill(1);
+  rowStart[0] = 0;
+  countCouplings(p, q, count, rowStart);
+  prefixSums(rowStart);
+  return rowStart;
+}
+
+function countCouplings(p: Int32Array, q: Int32Array, count: number, rowStart: Int32Array): void {
   for (let c = 0; c < count; c++) {
     rowStart[p[c] + 1]++;
     rowStart[q[c] + 1]++;
   }
-  for (let r = 0; r < n; r++) rowStart[r + 1] += rowStart[r];
-  return rowStart;
+}
+
+/** a[k] += a[k − 1], k ascending. */
+function prefixSums(a: Int32Array): void {
+  for (let k = 1; k < a.length; k++) a[k] += a[k - 1];
 }
 
 /** Each row's diagonal first, then −g of its couplings in the order added. */
@@ -124,10 +134,18 @@ function csrScatter(
   val: Float64Array,
 ): void {
   const fill = rowStart.slice(0, n);
+  scatterDiagonal(n, diagonal, fill, col, val);
+  scatterCouplings(p, q, g, count, fill, col, val);
+}
+
+function scatterDiagonal(n: number, diagonal: Float64Array, fill: Int32Array, col: Int32Array, val: Float64Array): void {
   for (let r = 0; r < n; r++) {
     col[fill[r]] = r;
     val[fill[r]++] = diagonal[r];
   }
+}
+
+function scatterCouplings(p: Int32Array, q: Int32Array, g: Float64Array, count: number, fill: Int32Array, col: Int32Array, val: Float64Array): void {
   for (let c = 0; c < count; c++) {
     const a = p[c];
     const b = q[c];

@@ -22,22 +22,11 @@ export interface CholeskyFactor {
 
 export function envelopeCholesky(a: CsrMatrix): CholeskyFactor {
   const n = a.n;
-  const first = new Int32Array(n);
-  for (let r = 0; r < n; r++) {
-    let f = r;
-    for (let e = a.rowStart[r]; e < a.rowStart[r + 1]; e++) if (a.col[e] < f) f = a.col[e];
-    first[r] = f;
-  }
+  const first = envelopeStarts(a);
   // Row i of L: columns first[i]..i, column k at rowAt[i] + k − first[i].
-  const rowAt = new Int32Array(n + 1);
-  for (let i = 0; i < n; i++) rowAt[i + 1] = rowAt[i] + i - first[i] + 1;
+  const rowAt = rowOffsets(first);
   const l = new Float64Array(rowAt[n]);
-  for (let r = 0; r < n; r++) {
-    for (let e = a.rowStart[r]; e < a.rowStart[r + 1]; e++) {
-      const c = a.col[e];
-      if (c <= r) l[rowAt[r] + c - first[r]] += a.val[e];
-    }
-  }
+  scatterLower(a, first, rowAt, l);
   factorRows(l, first, rowAt, n);
   const columns = factorColumns(l, first, rowAt, n);
   return {
@@ -46,6 +35,39 @@ export function envelopeCholesky(a: CsrMatrix): CholeskyFactor {
       backward(l, rowAt, columns, n, x);
     },
   };
+}
+
+/*
+ * One loop a function below: each is optimised with the feedback of all its code (the factorisation runs once a
+ * multigrid; a function compiled on entering its first loop was deoptimised again by the loops after it).
+ */
+
+/** The first column of each row of A (the diagonal where nothing precedes it). */
+function envelopeStarts(a: CsrMatrix): Int32Array {
+  const first = new Int32Array(a.n);
+  for (let r = 0; r < a.n; r++) {
+    let f = r;
+    for (let e = a.rowStart[r]; e < a.rowStart[r + 1]; e++) if (a.col[e] < f) f = a.col[e];
+    first[r] = f;
+  }
+  return first;
+}
+
+function rowOffsets(first: Int32Array): Int32Array {
+  const n = first.length;
+  const rowAt = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) rowAt[i + 1] = rowAt[i] + i - first[i] + 1;
+  return rowAt;
+}
+
+/** A's lower triangle into the rows of L (repeated entries summed in row order). */
+function scatterLower(a: CsrMatrix, first: Int32Array, rowAt: Int32Array, l: Float64Array): void {
+  for (let r = 0; r < a.n; r++) {
+    for (let e = a.rowStart[r]; e < a.rowStart[r + 1]; e++) {
+      const c = a.col[e];
+      if (c <= r) l[rowAt[r] + c - first[r]] += a.val[e];
+    }
+  }
 }
 
 /** L in place, row by row (every entry needs only rows above it and its own row left of it). */
@@ -75,19 +97,33 @@ interface Columns {
 }
 
 function factorColumns(l: Float64Array, first: Int32Array, rowAt: Int32Array, n: number): Columns {
-  const start = new Int32Array(n + 1);
-  for (let k = 0; k < n; k++) for (let i = first[k]; i < k; i++) start[i + 1]++;
-  for (let i = 0; i < n; i++) start[i + 1] += start[i];
+  const start = columnCounts(first, n);
   const row = new Int32Array(start[n]);
   const at = new Int32Array(start[n]);
-  const fill = start.slice(0, n);
-  for (let k = 0; k < n; k++) {
+  fillColumns(first, rowAt, start.slice(0, n), row, at);
+  return { start, row, at };
+}
+
+/** Column starts: row k reaches columns first[k]..k − 1. */
+function columnCounts(first: Int32Array, n: number): Int32Array {
+  const start = new Int32Array(n + 1);
+  for (let k = 0; k < n; k++) for (let i = first[k]; i < k; i++) start[i + 1]++;
+  return prefixSums(start);
+}
+
+/** a[k] += a[k − 1], k ascending; returns a. */
+function prefixSums(a: Int32Array): Int32Array {
+  for (let k = 1; k < a.length; k++) a[k] += a[k - 1];
+  return a;
+}
+
+function fillColumns(first: Int32Array, rowAt: Int32Array, fill: Int32Array, row: Int32Array, at: Int32Array): void {
+  for (let k = 0; k < first.length; k++) {
     for (let i = first[k]; i < k; i++) {
       row[fill[i]] = k;
       at[fill[i]++] = rowAt[k] + i - first[k];
     }
   }
-  return { start, row, at };
 }
 
 /** L y = b (y in x). */

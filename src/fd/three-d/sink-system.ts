@@ -218,9 +218,16 @@ function faceLosses(terms: TermLists, grid: SinkGrid, kp: number, h: number, k: 
 
 /** The lines of the line relaxation: each plate column with the fin nodes above it (fins as cells), then the fins' own lines. */
 function lineOrder(grid: SinkGrid, fins: FinAssembly, n: number): LineSet {
-  const { nx, ny, nz } = grid;
   const order = new Int32Array(n);
   const start: number[] = [0];
+  const q = finLines(fins, order, plateLines(grid, fins, order, start), start);
+  if (q !== n) throw new Error(`assembleSink: ${q} unknowns on lines, ${n} expected`);
+  return { order, start: Int32Array.from(start) };
+}
+
+/** The plate columns' lines into `order` from 0; returns the next free place. */
+function plateLines(grid: SinkGrid, fins: FinAssembly, order: Int32Array, start: number[]): number {
+  const { nx, ny, nz } = grid;
   let q = 0;
   for (let i = 0; i < nx; i++) {
     for (let j = 0; j < ny; j++) {
@@ -230,12 +237,17 @@ function lineOrder(grid: SinkGrid, fins: FinAssembly, n: number): LineSet {
       start.push(q);
     }
   }
+  return q;
+}
+
+/** The fins' own lines into `order` from q; returns the next free place. */
+function finLines(fins: FinAssembly, order: Int32Array, from: number, start: number[]): number {
+  let q = from;
   for (const line of fins.lines) {
     for (const node of line) order[q++] = node;
     start.push(q);
   }
-  if (q !== n) throw new Error(`assembleSink: ${q} unknowns on lines, ${n} expected`);
-  return { order, start: Int32Array.from(start) };
+  return q;
 }
 
 /** Fins as cells: plate cells onto themselves, fin f's cell (i, j, l) onto sheet node (j, l) of fin f. */
