@@ -4,7 +4,7 @@
 // when a run needs it. Chunks sit beside the entries in dist/, so `new URL('./map-worker.js', import.meta.url)`
 // and createRequire(import.meta.url) resolve the same from any of them. Native or WASM packages, and PDFKit
 // (it reads its font metrics from its own folder at run time), stay external and load lazily.
-import { cpSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, cpSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join, resolve } from 'node:path';
 import { build } from 'esbuild';
@@ -102,13 +102,10 @@ await build({
 
 await build({
   entryPoints: {
-    // The command (package.json bin): cli/main.ts (its hashbang stays on the first line) answers --version itself and
-    // imports the rest on demand.
-    fincheck: 'cli/main.ts',
     // The library entry (package.json exports '.'): src/api, for `import { check } from 'fincheck'`. Its
     // declarations are written by `npm pack` (prepack: tsconfig.lib.json), not on every build.
     lib: 'src/api/index.ts',
-    // The map command's worker thread (src/map/worker.ts): dist/fincheck.js starts dist/map-worker.js beside it
+    // The map command's worker thread (src/map/worker.ts): dist/fincheck.cjs starts dist/map-worker.js beside it
     // (src/map/worker-start.ts).
     'map-worker': 'src/map/worker.ts',
     // The fd-3d worker thread of a heat-sink check (src/fd/three-d/sink-lane-worker.ts), started as
@@ -137,8 +134,30 @@ await build({
   logLevel: 'warning',
 });
 
+// The command (package.json bin): cli/main.ts as dist/fincheck.cjs, CommonJS (Node starts it without its ES-module
+// loader; its hashbang stays on the first line). It answers --version itself and loads dist/program.cjs for the rest;
+// its fallback to the program's modules (run from the sources) stays an unresolved require here, never reached.
+await build({
+  entryPoints: { fincheck: 'cli/main.ts' },
+  outdir: 'dist',
+  outExtension: { '.js': '.cjs' },
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  target: 'node20',
+  minifyWhitespace: true,
+  minifySyntax: true,
+  charset: 'ascii',
+  define: { 'import.meta.url': '__entryUrl' },
+  banner: { js: "var __entryUrl = require('node:url').pathToFileURL(__filename).href;" },
+  supported: { 'dynamic-import': false },
+  external: ['./program-exports.js'],
+  logLevel: 'warning',
+});
+chmodSync('dist/fincheck.cjs', 0o755);
+
 // The command-line program (cli/program-exports.ts: every command, the solvers they call) as one classic script,
-// dist/program.cjs, which dist/fincheck.js loads with its V8 code cache (scripts/cached-script.mjs). Its imports of the
+// dist/program.cjs, which dist/fincheck.cjs loads with its V8 code cache (scripts/cached-script.mjs). Its imports of the
 // vendor packages read dist/vendor.cjs as the chunks do; import.meta.url is the bundle's own file URL, so the workers
 // (dist/map-worker.js, dist/sink-worker.js) and dist/vendor.cjs are found beside it. A command the program imports on
 // demand is bundled in, and its module's top level runs only when the command is asked for (esbuild's lazy init).

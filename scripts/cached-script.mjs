@@ -8,7 +8,7 @@
 // and the source compiled as usual: the same code runs either way, only slower.
 //
 // scripts/build.mjs bundles this file into dist (the bundle's `zod`, `yaml`, `mathjs` and `commander` imports read the
-// exports of one loadCachedScript call; dist/fincheck.js loads dist/program.cjs with it) and calls compileCachedScript
+// exports of one loadCachedScript call; dist/fincheck.cjs loads dist/program.cjs with it) and calls compileCachedScript
 // and runCachedScript itself to write the caches.
 import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
