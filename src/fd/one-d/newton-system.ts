@@ -157,15 +157,15 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   const n = drop.length;
   const last = n - 1;
   const reference = b.base.theta;
+  // d = D^-1(z) at every node (one pass over the table), then an ambient-variable node's from its u.
+  kirchhoff.dropsAt(z, drop);
   for (let i = 0; i < n; i++) {
     if (ambient[i] === 1) {
       const t = thetaOfAmbient(law, z[i] as number);
       theta[i] = t;
       drop[i] = reference - t;
     } else {
-      const d = kirchhoff.dropAt(z[i] as number);
-      drop[i] = d;
-      theta[i] = reference - d;
+      theta[i] = reference - (drop[i] as number);
     }
   }
   // Fixed temperatures exactly (not through D^-1).
@@ -378,7 +378,8 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
     createState: () => createState(n),
     start: (initial, into) => {
       ambient.fill(0);
-      for (let i = 0; i < n; i++) into[i] = setup.kirchhoff.potentialDropAt(initial[i] as number);
+      // D(d) of every node; `work` takes the κ that comes with it (not needed here).
+      setup.kirchhoff.evaluate(initial, into, work);
     },
     evaluate: (s) => evaluate(setup, ambient, s),
     correction: (s, delta) => {

@@ -16,6 +16,9 @@
  * Inverse (dropAt, for Newton steps taken in D): on the piece of k that holds D, k_ref D - I_0 = k_0 x + s x^2/2
  * with x = d - e_0 from the same start point (e_0, I_0 = ∫_0^{e_0} k de, k_0) as the forward trapezoid, solved
  * as x = 2 q / (k_0 + sqrt(k_0^2 + 2 s q)), q = k_ref D - I_0 (no cancellation; k_0^2 + 2 s q = k(d)^2 > 0).
+ * Cost: the array forms (evaluate, dropsAt) start each node's search for its table piece at the previous node's
+ * piece (neighbouring nodes of a fin sit on the same piece almost always), so a node costs one or two
+ * comparisons, a square root for the inverse and no call; they give the one-node forms' values bit for bit.
  */
 import type { Conductivity } from '../../case/index.js';
 
@@ -42,6 +45,8 @@ export interface KirchhoffTransform {
   readonly potentialDropAt: (drop: number) => number;
   /** Writes D(d_i) (K) and κ_i = k(T_i)/k_ref for the drops d_i (K) of every node. */
   readonly evaluate: (drop: Float64Array, potentialDrop: Float64Array, ratio: Float64Array) => void;
+  /** Writes the drops d_i = D^-1(D_i) (K) of the potential drops D_i (K) of every node (dropAt of each). */
+  readonly dropsAt: (potentialDrop: Float64Array, drop: Float64Array) => void;
   /** The linear pieces of k between θ = lo and θ = hi (lo < hi), in order. */
   readonly pieces: (lo: number, hi: number) => ConductivityPiece[];
 }
@@ -73,6 +78,7 @@ function constantTransform(k: number): KirchhoffTransform {
       potentialDrop.set(drop);
       ratio.fill(1);
     },
+    dropsAt: (potentialDrop, drop) => drop.set(potentialDrop),
     pieces: (lo, hi) => [{ from: lo, to: hi, k, slope: 0 }],
   };
 }
@@ -108,12 +114,25 @@ function segmentOf(f: PiecewiseLinear, s: number): number {
   return low;
 }
 
-function valueAt(f: PiecewiseLinear, s: number): number {
-  const j = segmentOf(f, s);
+/** segmentOf(f, s), tried first on segment `guess` (a neighbouring node's): the same answer, found sooner. */
+function segmentNear(f: PiecewiseLinear, s: number, guess: number): number {
+  const { at } = f;
+  const last = at.length - 1;
+  const inGuess =
+    guess < 0 ? s < (at[0] as number) : guess >= last ? s >= (at[last] as number) : (at[guess] as number) <= s && s < (at[guess + 1] as number);
+  return inGuess ? guess : segmentOf(f, s);
+}
+
+/** f(s) on its segment j = segmentOf(f, s). */
+function valueOnSegment(f: PiecewiseLinear, j: number, s: number): number {
   const last = f.at.length - 1;
   if (j < 0) return f.values[0] as number;
   if (j === last) return f.values[last] as number;
   return (f.values[j] as number) + (f.slopes[j] as number) * (s - (f.at[j] as number));
+}
+
+function valueAt(f: PiecewiseLinear, s: number): number {
+  return valueOnSegment(f, segmentOf(f, s), s);
 }
 
 function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: number, thetaBase: number): KirchhoffTransform {
@@ -145,9 +164,8 @@ function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: num
     const base = j === zeroSegment ? 0 : (pointIntegral[j + 1] as number);
     pointIntegral[j] = base - 0.5 * (next - e) * (kNext + (byDrop.values[j] as number));
   }
-  /** (1/k_ref) ∫_0^d k de: from the last table point between 0 and d (or from 0), one exact trapezoid. */
-  const potentialDrop = (d: number, kd: number): number => {
-    const j = segmentOf(byDrop, d);
+  /** (1/k_ref) ∫_0^d k de, d on segment j of byDrop: from the last table point between 0 and d (or from 0), one exact trapezoid. */
+  const potentialDrop = (j: number, d: number, kd: number): number => {
     if (j === zeroSegment) return (0.5 * d * (kRef + kd)) / kRef;
     // d above the segment of 0: start from point j (<= d); below it: from point j + 1 (>= d).
     const from = j > zeroSegment ? j : j + 1;
@@ -156,9 +174,8 @@ function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: num
   };
   // The integral at every table point is increasing in e (k > 0): the piece of a potential drop is found on it.
   const integralAt = piecewiseLinear(pointIntegral, new Float64Array(count));
-  const dropAt = (D: number): number => {
-    const target = D * kRef;
-    const j = segmentOf(integralAt, target);
+  /** D^-1(D), the target k_ref D on segment j of integralAt. */
+  const dropOnSegment = (j: number, target: number): number => {
     // Start point and slope of the piece, as in potentialDrop.
     let e0 = 0;
     let I0 = 0;
@@ -177,14 +194,30 @@ function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: num
     constant: false,
     kRef,
     conductivityAt: (theta) => valueAt(byTheta, theta),
-    dropAt,
-    potentialDropAt: (d) => potentialDrop(d, valueAt(byDrop, d)),
+    dropAt: (D) => {
+      const target = D * kRef;
+      return dropOnSegment(segmentOf(integralAt, target), target);
+    },
+    potentialDropAt: (d) => {
+      const j = segmentOf(byDrop, d);
+      return potentialDrop(j, d, valueOnSegment(byDrop, j, d));
+    },
     evaluate: (drop, potential, ratio) => {
+      let j = zeroSegment;
       for (let i = 0; i < drop.length; i++) {
         const d = drop[i] as number;
-        const kd = valueAt(byDrop, d);
-        potential[i] = potentialDrop(d, kd);
+        j = segmentNear(byDrop, d, j);
+        const kd = valueOnSegment(byDrop, j, d);
+        potential[i] = potentialDrop(j, d, kd);
         ratio[i] = kd / kRef;
+      }
+    },
+    dropsAt: (potential, drop) => {
+      let j = zeroSegment;
+      for (let i = 0; i < potential.length; i++) {
+        const target = (potential[i] as number) * kRef;
+        j = segmentNear(integralAt, target, j);
+        drop[i] = dropOnSegment(j, target);
       }
     },
     pieces: (lo, hi) => {
