@@ -17,7 +17,7 @@ import { hAtNodes } from '../problem/convection.js';
 import { nonlinearBoundaries } from './newton-boundary.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { faceLaw } from '../problem/surface-law.js';
-import { newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup } from './newton-system.js';
+import { newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup, type NewtonWorkspace } from './newton-system.js';
 import { isLinearProblem, scaleNonlinearity, type FinProblem } from '../problem/fin-problem.js';
 
 /** The discrete operators of a problem on a mesh (one-d/newton-system.ts, NewtonSetup). */
@@ -49,6 +49,8 @@ export interface MeshSolve {
   /** Drops d = θ_b - θ and excess temperatures θ at the nodes, K. */
   readonly drop: Float64Array;
   readonly theta: Float64Array;
+  /** The solution's potential drops and CV losses, when the solve has them (NewtonOutcome). */
+  readonly evaluated: NewtonOutcome['evaluated'];
   /** Newton steps on the problem itself (the last stage when continuation ran). */
   readonly iterations: number;
   /** Newton steps over every attempt and continuation stage. */
@@ -62,12 +64,19 @@ export interface MeshSolve {
 
 /**
  * Solves the problem on a mesh from the drops `initial` (d = θ_b - θ, K; default 0: the whole fin at
- * the base temperature); throws SolverError when it cannot.
+ * the base temperature); throws SolverError when it cannot. Plain Newton works in `workspace` when given (the
+ * solution is then left in it; continuation stages, rare, allocate their own).
  */
-export function solveNonlinearOnMesh(problem: FinProblem, mesh: Mesh1D, opts: NewtonOptions = {}, initial?: Float64Array): MeshSolve {
+export function solveNonlinearOnMesh(
+  problem: FinProblem,
+  mesh: Mesh1D,
+  opts: NewtonOptions = {},
+  initial?: Float64Array,
+  workspace?: NewtonWorkspace,
+): MeshSolve {
   const setup = newtonSetup(problem, mesh);
   const start = initial ?? new Float64Array(mesh.nodes);
-  const direct = newtonSolve(setup, start, opts);
+  const direct = newtonSolve(setup, start, opts, workspace);
   if (direct.converged) return summary(setup, direct, direct.iterations, direct.halvings, 0);
   if (setup.linear) throw failure(problem, mesh, direct, 0);
 
@@ -86,6 +95,7 @@ function summary(setup: NewtonSetup, outcome: NewtonOutcome, total: number, halv
     setup,
     drop: outcome.drop,
     theta: outcome.theta,
+    evaluated: outcome.evaluated,
     iterations: outcome.iterations,
     totalIterations: total,
     halvings,

@@ -47,7 +47,7 @@ import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js
 import { tipLoss, type FlowAndSlope, type NonlinearBoundaries } from './newton-boundary.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
 import { ambientSlope, ambientVariable, cvLosses, thetaOfAmbient, type FaceLaw } from '../problem/surface-law.js';
-import { createTridiagonalSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
+import { createTridiagonalSystem, type RowSumSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
 import { dampedNewton, type NewtonModel } from '../newton/damped-newton.js';
 
 /** Everything about one mesh that the iteration does not change. */
@@ -95,6 +95,11 @@ export interface NewtonOutcome {
   /** Drops d = θ_b - θ and excess temperatures θ of the last iterate, K. */
   readonly drop: Float64Array;
   readonly theta: Float64Array;
+  /**
+   * The last iterate's potential drops D(d) (K) and CV losses (W) as the heat rates form them (one-d/newton-heat-rate.ts),
+   * so they need not be computed again; null when a node was solved in its ambient variable (its loss formed from u).
+   */
+  readonly evaluated: { readonly potential: Float64Array; readonly loss: Float64Array } | null;
   /** Newton steps taken. */
   readonly iterations: number;
   /** Step-length halvings of the line search over all steps. */
@@ -131,22 +136,74 @@ interface State {
 }
 
 function createState(n: number): State {
+  return stateOver(
+    {
+      unknowns: new Float64Array(n),
+      drop: new Float64Array(n),
+      theta: new Float64Array(n),
+      potential: new Float64Array(n),
+      ratio: new Float64Array(n),
+      column: new Float64Array(n),
+      loss: new Float64Array(n),
+      lossSlope: new Float64Array(n),
+      residual: new Float64Array(n),
+    },
+    n,
+  );
+}
+
+type StateArrays = Pick<State, 'unknowns' | 'drop' | 'theta' | 'potential' | 'ratio' | 'column' | 'loss' | 'lossSlope' | 'residual'>;
+
+/** The first n entries of an array (itself when it has n). */
+function leading<A extends Float64Array | Uint8Array>(a: A, n: number): A {
+  return (a.length === n ? a : a.subarray(0, n)) as A;
+}
+
+/** A fresh state on the first n entries of the arrays `a`. */
+function stateOver(a: StateArrays, n: number): State {
   return {
-    unknowns: new Float64Array(n),
-    drop: new Float64Array(n),
-    theta: new Float64Array(n),
-    potential: new Float64Array(n),
-    ratio: new Float64Array(n),
-    column: new Float64Array(n),
-    loss: new Float64Array(n),
-    lossSlope: new Float64Array(n),
-    residual: new Float64Array(n),
+    unknowns: leading(a.unknowns, n),
+    drop: leading(a.drop, n),
+    theta: leading(a.theta, n),
+    potential: leading(a.potential, n),
+    ratio: leading(a.ratio, n),
+    column: leading(a.column, n),
+    loss: leading(a.loss, n),
+    lossSlope: leading(a.lossSlope, n),
+    residual: leading(a.residual, n),
     tip: { value: 0, slope: 0 },
     norm: 0,
     relative: 0,
     heatRate: 0,
     heatRateFloor: 0,
     valid: true,
+  };
+}
+
+/**
+ * The working arrays of Newton solves on meshes of up to `capacity` nodes: the two iterates, the Newton system, its
+ * solution and scratch, the ambient flags. A nested solve (one-d/nonlinear-solve.ts) allocates them once for its
+ * finest grid, and its coarser starting grids work in their leading entries: on a 4001-node fin, allocating and
+ * zeroing them cost about as much as the Newton steps of the two coarser grids. A solve on a workspace leaves its
+ * result (NewtonOutcome's arrays) in it: the next solve on the same workspace overwrites that.
+ */
+export interface NewtonWorkspace {
+  readonly capacity: number;
+  readonly iterates: readonly [StateArrays, StateArrays];
+  readonly system: RowSumSystem;
+  readonly solution: Float64Array;
+  readonly work: Float64Array;
+  readonly ambient: Uint8Array;
+}
+
+export function createNewtonWorkspace(capacity: number): NewtonWorkspace {
+  return {
+    capacity,
+    iterates: [createState(capacity), createState(capacity)],
+    system: createTridiagonalSystem(capacity),
+    solution: new Float64Array(capacity),
+    work: new Float64Array(capacity),
+    ambient: new Uint8Array(capacity),
   };
 }
 
@@ -365,17 +422,30 @@ function chooseVariables(setup: NewtonSetup, ambient: Uint8Array, s: State): boo
   return changed;
 }
 
-/** The 1-D fin as a model of the damped Newton driver (newton/damped-newton.ts). */
-function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | undefined): NewtonModel<State> {
-  const system = createTridiagonalSystem(n);
-  const w = new Float64Array(n);
-  const work = new Float64Array(n);
+/** The 1-D fin as a model of the damped Newton driver (newton/damped-newton.ts), working in `workspace` (>= n nodes). */
+function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | undefined, workspace: NewtonWorkspace): NewtonModel<State> {
+  const { lower, diag, upper, rhs, rowSum } = workspace.system;
+  const system: RowSumSystem = {
+    lower: leading(lower, n),
+    diag: leading(diag, n),
+    upper: leading(upper, n),
+    rhs: leading(rhs, n),
+    rowSum: leading(rowSum, n),
+  };
+  const w = leading(workspace.solution, n);
+  const work = leading(workspace.work, n);
   // 1: the node is solved for its ambient variable (shared by every state; changed only in `correction`).
-  const ambient = new Uint8Array(n);
+  const ambient = leading(workspace.ambient, n);
+  // The driver asks for its two states (current and trial) once.
+  const iterates = [...workspace.iterates];
   return {
     linear: setup.linear,
     roundOffRegime: ROUND_OFF_REGIME,
-    createState: () => createState(n),
+    createState: () => {
+      const arrays = iterates.shift();
+      if (arrays === undefined) throw new Error('internal: the Newton driver asked for more than two states');
+      return stateOver(arrays, n);
+    },
     start: (initial, into) => {
       ambient.fill(0);
       // D(d) of every node; `work` takes the κ that comes with it (not needed here).
@@ -399,11 +469,13 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
 }
 
 /**
- * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified). Never throws on
- * non-convergence: see `failure`.
+ * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified, not in `workspace`), in `workspace`
+ * when it has room (default: a new one). Never throws on non-convergence: see `failure`.
  */
-export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: NewtonOptions = {}): NewtonOutcome {
-  const run = dampedNewton(newtonModel(setup, initial.length, opts.solver), initial, {
+export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: NewtonOptions = {}, workspace?: NewtonWorkspace): NewtonOutcome {
+  const n = initial.length;
+  const room = workspace !== undefined && n <= workspace.capacity ? workspace : createNewtonWorkspace(n);
+  const run = dampedNewton(newtonModel(setup, n, opts.solver, room), initial, {
     maxIterations: opts.maxIterations ?? DEFAULT_MAX_ITERATIONS,
     residualTolerance: opts.residualTolerance ?? DEFAULT_RESIDUAL_TOLERANCE,
     heatRateTolerance: opts.heatRateTolerance ?? DEFAULT_HEAT_RATE_TOLERANCE,
@@ -413,6 +485,7 @@ export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: New
     converged: run.converged,
     drop: state.drop,
     theta: state.theta,
+    evaluated: leading(room.ambient, n).includes(1) ? null : { potential: state.potential, loss: state.loss },
     iterations: run.iterations,
     halvings: run.halvings,
     residual: state.relative,
