@@ -17,17 +17,20 @@ import { hAtNodes } from '../problem/convection.js';
 import { nonlinearBoundaries } from './newton-boundary.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { faceLaw } from '../problem/surface-law.js';
-import { newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup, type NewtonWorkspace } from './newton-system.js';
+import { leading, newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup, type NewtonWorkspace } from './newton-system.js';
 import { isLinearProblem, scaleNonlinearity, type FinProblem } from '../problem/fin-problem.js';
 
-/** The discrete operators of a problem on a mesh (one-d/newton-system.ts, NewtonSetup). */
-export function newtonSetup(problem: FinProblem, mesh: Mesh1D): NewtonSetup {
+/**
+ * The discrete operators of a problem on a mesh (one-d/newton-system.ts, NewtonSetup); their arrays in `workspace`
+ * when given (then valid until the workspace's next setup).
+ */
+export function newtonSetup(problem: FinProblem, mesh: Mesh1D, workspace?: NewtonWorkspace): NewtonSetup {
   const n = mesh.nodes;
   const kirchhoff = kirchhoffTransform(problem.conductivity, problem.ambient_degC, problem.base.theta);
-  const K = new Float64Array(n - 1);
+  const K = workspace === undefined ? new Float64Array(n - 1) : leading(workspace.conductances, n - 1);
   for (let i = 0; i < n - 1; i++) K[i] = interfaceConductance(mesh, kirchhoff.kRef, i);
-  const hx = hAtNodes(problem.h, mesh.x, mesh.length);
-  const G = new Float64Array(n);
+  const hx = hAtNodes(problem.h, mesh.x, mesh.length, workspace === undefined ? undefined : leading(workspace.hNodes, n));
+  const G = workspace === undefined ? new Float64Array(n) : leading(workspace.convective, n);
   for (let i = 0; i < n; i++) G[i] = convectiveConductance(mesh, hx, i);
   const law = faceLaw(problem);
   const sinkAcrossAmbient = law.radiative !== 0 && (law.surroundings_K - law.ambient_K) * problem.base.theta < 0;
@@ -74,7 +77,7 @@ export function solveNonlinearOnMesh(
   initial?: Float64Array,
   workspace?: NewtonWorkspace,
 ): MeshSolve {
-  const setup = newtonSetup(problem, mesh);
+  const setup = newtonSetup(problem, mesh, workspace !== undefined && mesh.nodes <= workspace.capacity ? workspace : undefined);
   const start = initial ?? new Float64Array(mesh.nodes);
   const direct = newtonSolve(setup, start, opts, workspace);
   if (direct.converged) return summary(setup, direct, direct.iterations, direct.halvings, 0);

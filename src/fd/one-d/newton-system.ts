@@ -155,7 +155,7 @@ function createState(n: number): State {
 type StateArrays = Pick<State, 'unknowns' | 'drop' | 'theta' | 'potential' | 'ratio' | 'column' | 'loss' | 'lossSlope' | 'residual'>;
 
 /** The first n entries of an array (itself when it has n). */
-function leading<A extends Float64Array | Uint8Array>(a: A, n: number): A {
+export function leading<A extends Float64Array | Uint8Array>(a: A, n: number): A {
   return (a.length === n ? a : a.subarray(0, n)) as A;
 }
 
@@ -181,29 +181,40 @@ function stateOver(a: StateArrays, n: number): State {
 }
 
 /**
- * The working arrays of Newton solves on meshes of up to `capacity` nodes: the two iterates, the Newton system, its
- * solution and scratch, the ambient flags. A nested solve (one-d/nonlinear-solve.ts) allocates them once for its
- * finest grid, and its coarser starting grids work in their leading entries: on a 4001-node fin, allocating and
- * zeroing them cost about as much as the Newton steps of the two coarser grids. A solve on a workspace leaves its
- * result (NewtonOutcome's arrays) in it: the next solve on the same workspace overwrites that.
+ * The working arrays of Newton solves on meshes of up to `capacity` nodes: the two iterates, the Newton correction,
+ * system, solution and scratch, the ambient flags, and room for a setup's conductances and a starting field. A nested
+ * solve (one-d/nonlinear-solve.ts) allocates them once for its finest grid, and its coarser starting grids work in
+ * their leading entries (`leading`). A solve on a workspace leaves its result (NewtonOutcome's arrays) in it: the
+ * next solve on the same workspace overwrites that.
  */
 export interface NewtonWorkspace {
   readonly capacity: number;
   readonly iterates: readonly [StateArrays, StateArrays];
+  readonly correction: Float64Array;
   readonly system: RowSumSystem;
   readonly solution: Float64Array;
   readonly work: Float64Array;
   readonly ambient: Uint8Array;
+  /** K_i, G_i and h_x at the nodes of a setup (newtonSetup) and the drops a solve starts from. */
+  readonly conductances: Float64Array;
+  readonly convective: Float64Array;
+  readonly hNodes: Float64Array;
+  readonly start: Float64Array;
 }
 
 export function createNewtonWorkspace(capacity: number): NewtonWorkspace {
   return {
     capacity,
     iterates: [createState(capacity), createState(capacity)],
+    correction: new Float64Array(capacity),
     system: createTridiagonalSystem(capacity),
     solution: new Float64Array(capacity),
     work: new Float64Array(capacity),
     ambient: new Uint8Array(capacity),
+    conductances: new Float64Array(capacity),
+    convective: new Float64Array(capacity),
+    hNodes: new Float64Array(capacity),
+    start: new Float64Array(capacity),
   };
 }
 
@@ -446,6 +457,7 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
       if (arrays === undefined) throw new Error('internal: the Newton driver asked for more than two states');
       return stateOver(arrays, n);
     },
+    correctionArray: () => leading(workspace.correction, n),
     start: (initial, into) => {
       ambient.fill(0);
       // D(d) of every node; `work` takes the κ that comes with it (not needed here).
@@ -469,7 +481,7 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
 }
 
 /**
- * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified, not in `workspace`), in `workspace`
+ * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified, not an iterate of `workspace`), in `workspace`
  * when it has room (default: a new one). Never throws on non-convergence: see `failure`.
  */
 export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: NewtonOptions = {}, workspace?: NewtonWorkspace): NewtonOutcome {

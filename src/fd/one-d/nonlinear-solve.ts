@@ -45,7 +45,7 @@ import type { Case } from '../../case/index.js';
 import { buildMesh1D, type Grading, type Mesh1D } from '../../mesh/index.js';
 import { autoGrading, studyGrids, type Fin1DResult } from './linear-solve.js';
 import { hBreakpoints } from '../problem/convection.js';
-import { createNewtonWorkspace, type NewtonOptions, type NewtonWorkspace } from './newton-system.js';
+import { createNewtonWorkspace, leading, type NewtonOptions, type NewtonWorkspace } from './newton-system.js';
 import { isLinearProblem, finProblem, type FinProblem } from '../problem/fin-problem.js';
 import { nonlinearEffectiveness, nonlinearHeatRates, nonlinearIdealHeatRate } from './newton-heat-rate.js';
 import { solveNonlinearOnMesh, type MeshSolve } from './newton-solve.js';
@@ -97,9 +97,8 @@ function meshOf(problem: FinProblem, cells: number, refine: number, grading: Gra
   });
 }
 
-/** A nodal field of a coarse mesh interpolated linearly onto the nodes of a fine mesh (same fin). */
-export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine: Mesh1D): Float64Array {
-  const out = new Float64Array(fine.nodes);
+/** A nodal field of a coarse mesh interpolated linearly onto the nodes of a fine mesh (same fin), into `out` when given. */
+export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine: Mesh1D, out: Float64Array = new Float64Array(fine.nodes)): Float64Array {
   let j = 0;
   const last = coarse.nodes - 1;
   for (let i = 0; i < fine.nodes; i++) {
@@ -113,10 +112,10 @@ export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine
   return out;
 }
 
-/** Drops d = θ_b - θ (K) on `fine` of the excess temperatures θ on `coarse`, interpolated linearly (interpolateOnto). */
-function dropsOnto(problem: FinProblem, coarse: Mesh1D, thetaCoarse: Float64Array, fine: Mesh1D): Float64Array {
+/** Drops d = θ_b - θ (K) on `fine` of the excess temperatures θ on `coarse`, interpolated linearly (interpolateOnto), into `out`. */
+function dropsOnto(problem: FinProblem, coarse: Mesh1D, thetaCoarse: Float64Array, fine: Mesh1D, out: Float64Array): Float64Array {
   const reference = problem.base.theta;
-  const drops = interpolateOnto(coarse, thetaCoarse, fine);
+  const drops = interpolateOnto(coarse, thetaCoarse, fine, out);
   for (let i = 0; i < drops.length; i++) drops[i] = reference - (drops[i] as number);
   return drops;
 }
@@ -201,19 +200,20 @@ function solveNested(
   opts: NonlinearFin1DOptions,
   cells: number,
   mesh: Mesh1D,
-  workspace: NewtonWorkspace,
+  given: NewtonWorkspace,
   start?: { readonly mesh: Mesh1D; readonly theta: Float64Array },
 ): NestedSolve {
+  const workspace = mesh.nodes <= given.capacity ? given : createNewtonWorkspace(mesh.nodes);
   let initial: Float64Array | undefined;
   let coarseGridIterations = 0;
   const linear = isLinearProblem(problem);
   if (start !== undefined && !linear) {
-    initial = dropsOnto(problem, start.mesh, start.theta, mesh);
+    initial = dropsOnto(problem, start.mesh, start.theta, mesh, leading(workspace.start, mesh.nodes));
   } else if ((opts.nested ?? true) && !linear && cells > NESTED_MIN_CELLS) {
     const coarseCells = Math.ceil(cells / NESTED_RATIO);
     const coarse = solveNested(problem, opts, coarseCells, meshOf(problem, coarseCells, 1, opts.grading), workspace);
     // Read before this grid's solve overwrites the workspace.
-    initial = dropsOnto(problem, coarse.solved.setup.mesh, coarse.solved.theta, mesh);
+    initial = dropsOnto(problem, coarse.solved.setup.mesh, coarse.solved.theta, mesh, leading(workspace.start, mesh.nodes));
     coarseGridIterations = coarse.solved.totalIterations + coarse.coarseGridIterations;
   }
   return { solved: solveNonlinearOnMesh(problem, mesh, opts, initial, workspace), coarseGridIterations };
