@@ -218,7 +218,7 @@ export function createNewtonWorkspace(capacity: number): NewtonWorkspace {
   };
 }
 
-/** Fills a state from its unknowns: d, θ, D, κ, column scales, losses, residual, norms and the base heat rate. */
+/** Fills a state from its unknowns: d, θ, D, κ, losses, residual, norms and the base heat rate (column scales: columnScales). */
 function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   const { K, G, law, kirchhoff, boundaries: b } = setup;
   const { unknowns: z, drop, theta, potential: D, loss, residual: R } = s;
@@ -246,15 +246,10 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
     theta[last] = reference - (drop[last] as number);
   }
   kirchhoff.evaluate(drop, D, s.ratio);
-  const floorScale = COLUMN_FLOOR * Math.abs(reference);
-  for (let i = 0; i < n; i++) {
-    const kappa = s.ratio[i] as number;
-    s.column[i] = ambient[i] === 1 ? kappa * Math.max(ambientSlope(law, z[i] as number), floorScale) : kappa;
-  }
   cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope, { flags: ambient, u: z, law });
   tipLoss(b, theta[last] as number, s.tip, ambient[last] === 1 ? (z[last] as number) : null);
+  const radiates = law.radiative !== 0;
   let norm2 = 0;
-  let maxResidual = 0;
   let maxScale = 0;
   let valid = true;
   let previousFlux = 0;
@@ -289,36 +284,43 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
     }
     if (constrained) r = 0;
     R[i] = r;
-    if (!Number.isFinite(r) || !Number.isFinite(theta[i] as number)) valid = false;
+    // Non-finite, or (with radiation) below absolute zero: not a state.
+    if (!Number.isFinite(r) || !Number.isFinite(theta[i] as number) || (radiates && law.ambient_K + (theta[i] as number) < 0)) valid = false;
     norm2 += r * r;
-    maxResidual = Math.max(maxResidual, Math.abs(r));
     maxScale = Math.max(maxScale, rowScale);
     previousFlux = flux;
     previousScale = scale;
   }
-  if (law.radiative !== 0) {
-    for (let i = 0; i < n; i++) if (law.ambient_K + (theta[i] as number) < 0) valid = false;
-  }
   s.valid = valid;
   s.norm = Math.sqrt(norm2);
-  s.relative = maxScale > 0 ? maxResidual / maxScale : 0;
+  s.relative = 0;
   // A row whose loss is steep in θ cannot be evaluated more accurately than its slope times the
   // round-off of θ (θ = θ_b - d carries eps |θ_b|; radiation's T = T_amb + θ carries eps T): for n < 0
   // the slope ~ |θ|^n grows without bound as a node approaches the ambient, and that floor rose above
   // 1e-12 of the conduction scale (a converged solve stalled at 1.2e-12 for 50 steps and was called a
   // failure). Such a row is measured against that floor instead, so 1e-12 stays ~4500 round-offs.
+  // The rows whose floor is under the conduction scale share its denominator: the largest of their |R_i| is divided
+  // once (division is monotone, so that is the largest of their quotients, bit for bit).
   if (maxScale > 0) {
     const thetaScale = Math.abs(reference);
-    let relative = 0;
+    let common = 0;
+    let floored = 0;
     for (let i = 0; i < n; i++) {
-      const radiationT = law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
-      // At an ambient-variable node the slope is d loss/du, and u carries its own relative precision: only
-      // radiation's ε T remains (its θ-slope, 4 ε σ S T^3, times T).
-      const radiationSlope = law.radiative !== 0 ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT * radiationT * radiationT : 0;
-      const rowFloor = ambient[i] === 1 ? radiationSlope * radiationT : Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
-      relative = Math.max(relative, Math.abs(R[i] as number) / Math.max(maxScale, rowFloor));
+      const radiationT = radiates ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
+      let rowFloor: number;
+      if (ambient[i] === 1) {
+        // At an ambient-variable node the slope is d loss/du, and u carries its own relative precision: only
+        // radiation's ε T remains (its θ-slope, 4 ε σ S T^3, times T).
+        const radiationSlope = radiates ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT * radiationT * radiationT : 0;
+        rowFloor = radiationSlope * radiationT;
+      } else {
+        rowFloor = Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
+      }
+      const r = Math.abs(R[i] as number);
+      if (rowFloor <= maxScale) common = Math.max(common, r);
+      else floored = Math.max(floored, r / Math.max(maxScale, rowFloor));
     }
-    s.relative = relative;
+    s.relative = Math.max(common / maxScale, floored);
   }
   if (b.base.kind === 'temperature') {
     const k0 = K[0] as number;
@@ -329,6 +331,16 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   } else {
     s.heatRate = b.contact * (drop[0] as number);
     s.heatRateFloor = HEAT_RATE_FLOOR_FACTOR * Math.abs(s.heatRate);
+  }
+}
+
+/** Column scales c_i of an evaluated state (header): κ_i at a potential node, κ_i dθ/du (floored) at an ambient one. */
+function columnScales(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
+  const { unknowns: z, ratio, column } = s;
+  const floorScale = COLUMN_FLOOR * Math.abs(setup.boundaries.base.theta);
+  for (let i = 0; i < z.length; i++) {
+    const kappa = ratio[i] as number;
+    column[i] = ambient[i] === 1 ? kappa * Math.max(ambientSlope(setup.law, z[i] as number), floorScale) : kappa;
   }
 }
 
@@ -466,6 +478,7 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
     evaluate: (s) => evaluate(setup, ambient, s),
     correction: (s, delta) => {
       if (chooseVariables(setup, ambient, s)) evaluate(setup, ambient, s);
+      columnScales(setup, ambient, s);
       assembleNewton(setup, s, system);
       const solution = solver ? solver(system) : conservativeThomasInto(system, w, work);
       // Ĵ w = -R with w = δU: δD = -w at a potential node, δu = w / c at an ambient one.
