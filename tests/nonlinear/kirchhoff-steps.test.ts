@@ -33,8 +33,16 @@ describe('inverse of the potential drop', () => {
   // another piece than the one before) give the one-node forms' values bit for bit.
   test.each([299.8, 100, 50])('evaluate and dropsAt equal potentialDropAt and dropAt node by node (base excess %s K)', (thetaBase) => {
     const transform = kirchhoffTransform({ kind: 'table', T_degC, k }, -40, thetaBase);
-    const ascending = Float64Array.from({ length: 401 }, (_, i) => -100 + (i / 400) * (thetaBase + 200));
-    const scrambled = Float64Array.from(ascending, (_, i) => ascending[(i * 173) % 401] as number);
+    // The drops of the table's points themselves (where a piece begins) among them, and the ends of the range.
+    const points = Array.from(T_degC, (T) => thetaBase - T - 40);
+    const ascending = Float64Array.from([
+      ...Array.from({ length: 401 }, (_, i) => -100 + (i / 400) * (thetaBase + 200)),
+      ...points,
+      -Infinity,
+      Infinity,
+    ]).sort();
+    const count = ascending.length;
+    const scrambled = Float64Array.from(ascending, (_, i) => ascending[(i * 173) % count] as number);
     for (const drops of [ascending, ascending.slice().reverse(), scrambled]) {
       const potential = new Float64Array(drops.length);
       const ratio = new Float64Array(drops.length);

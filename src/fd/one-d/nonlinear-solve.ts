@@ -169,16 +169,20 @@ export function solveNonlinearProblem1D(
 
 /**
  * Workspaces of the last few finest-grid sizes, as the linear solver keeps its scratch (linear-solve.ts): a study
- * solves three grids, a map or an uncertainty sample thousands of fins, and the two Newton iterates and the system
- * are 26 arrays a grid (allocating and zeroing them took about a third of a 4001-node solve). Safe because a solve
- * is synchronous and nothing it returns points into them (finish copies θ out).
+ * solves three grids, a map or an uncertainty sample thousands of fins, and a workspace is 30 arrays (allocating
+ * and zeroing them anew took about a third of a 4001-node solve). Safe because a solve is synchronous and nothing
+ * it returns points into them (finish copies θ out). Kept: up to KEPT_SIZES sizes of up to KEPT_NODES nodes
+ * (at most ~8 MB); a larger grid gets a workspace of its own.
  */
 const workspaces = new Map<number, NewtonWorkspace>();
+const KEPT_SIZES = 4;
+const KEPT_NODES = 8193;
 
 function workspaceFor(nodes: number): NewtonWorkspace {
+  if (nodes > KEPT_NODES) return createNewtonWorkspace(nodes);
   let workspace = workspaces.get(nodes);
   if (workspace === undefined) {
-    if (workspaces.size >= 8) workspaces.clear();
+    if (workspaces.size >= KEPT_SIZES) workspaces.clear();
     workspace = createNewtonWorkspace(nodes);
     workspaces.set(nodes, workspace);
   }
