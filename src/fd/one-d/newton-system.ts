@@ -227,8 +227,9 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   const reference = b.base.theta;
   // d = D^-1(z) at every node (one pass over the table), then an ambient-variable node's from its u.
   kirchhoff.dropsAt(z, drop);
+  const anyAmbient = setup.ambientVariables;
   for (let i = 0; i < n; i++) {
-    if (ambient[i] === 1) {
+    if (anyAmbient && ambient[i] === 1) {
       const t = thetaOfAmbient(law, z[i] as number);
       theta[i] = t;
       drop[i] = reference - t;
@@ -246,7 +247,7 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
     theta[last] = reference - (drop[last] as number);
   }
   kirchhoff.evaluate(drop, D, s.ratio);
-  cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope, { flags: ambient, u: z, law });
+  cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope, anyAmbient ? { flags: ambient, u: z, law } : undefined);
   tipLoss(b, theta[last] as number, s.tip, ambient[last] === 1 ? (z[last] as number) : null);
   const radiates = law.radiative !== 0;
   let norm2 = 0;
@@ -334,21 +335,26 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   }
 }
 
-/** Column scales c_i of an evaluated state (header): κ_i at a potential node, κ_i dθ/du (floored) at an ambient one. */
-function columnScales(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
+/**
+ * Column scales c_i of an evaluated state (header): κ_i at a potential node, κ_i dθ/du (floored) at an ambient one,
+ * written into the state's `column`; κ itself (the state's `ratio`) when no node can be in its ambient variable.
+ */
+function columnScales(setup: NewtonSetup, ambient: Uint8Array, s: State): Float64Array {
   const { unknowns: z, ratio, column } = s;
+  if (!setup.ambientVariables) return ratio;
   const floorScale = COLUMN_FLOOR * Math.abs(setup.boundaries.base.theta);
   for (let i = 0; i < z.length; i++) {
     const kappa = ratio[i] as number;
     column[i] = ambient[i] === 1 ? kappa * Math.max(ambientSlope(setup.law, z[i] as number), floorScale) : kappa;
   }
+  return column;
 }
 
-/** Newton matrix Ĵ and right-hand side -R of a state (header), written into `system`. */
-function assembleNewton(setup: NewtonSetup, s: State, system: ReturnType<typeof createTridiagonalSystem>): void {
+/** Newton matrix Ĵ and right-hand side -R of a state (header) with its column scales (columnScales), written into `system`. */
+function assembleNewton(setup: NewtonSetup, s: State, column: Float64Array, system: ReturnType<typeof createTridiagonalSystem>): void {
   const { K, boundaries: b } = setup;
   const { lower, diag, upper, rhs, rowSum } = system;
-  const { drop, ratio, column, lossSlope, residual } = s;
+  const { drop, ratio, lossSlope, residual } = s;
   const n = drop.length;
   const last = n - 1;
   for (let i = 0; i < n; i++) {
@@ -478,13 +484,13 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
     evaluate: (s) => evaluate(setup, ambient, s),
     correction: (s, delta) => {
       if (chooseVariables(setup, ambient, s)) evaluate(setup, ambient, s);
-      columnScales(setup, ambient, s);
-      assembleNewton(setup, s, system);
+      const column = columnScales(setup, ambient, s);
+      assembleNewton(setup, s, column, system);
       const solution = solver ? solver(system) : conservativeThomasInto(system, w, work);
       // Ĵ w = -R with w = δU: δD = -w at a potential node, δu = w / c at an ambient one.
       for (let i = 0; i < n; i++) {
         const wi = solution[i] as number;
-        delta[i] = ambient[i] === 1 ? wi / (s.column[i] as number) : -wi;
+        delta[i] = ambient[i] === 1 ? wi / (column[i] as number) : -wi;
       }
     },
     step: (from, delta, lambda, into) => step(setup, ambient, from, delta, lambda, into),
