@@ -357,18 +357,20 @@ function assembleNewton(setup: NewtonSetup, s: State, column: Float64Array, syst
   const { drop, ratio, lossSlope, residual } = s;
   const n = drop.length;
   const last = n - 1;
+  // Row i: its tangent, then the conductances K_{i-1} and K_i added in that order; the row sum is the tangent alone.
   for (let i = 0; i < n; i++) {
     const tangent = (lossSlope[i] as number) / (column[i] as number);
-    diag[i] = tangent;
+    let diagonal = tangent;
+    if (i > 0) diagonal += K[i - 1] as number;
+    if (i < last) {
+      const conductance = K[i] as number;
+      diagonal += conductance;
+      upper[i] = -conductance;
+      lower[i + 1] = -conductance;
+    }
+    diag[i] = diagonal;
     rowSum[i] = tangent;
     rhs[i] = -(residual[i] as number);
-  }
-  for (let i = 0; i < last; i++) {
-    const conductance = K[i] as number;
-    diag[i] = (diag[i] as number) + conductance;
-    diag[i + 1] = (diag[i + 1] as number) + conductance;
-    upper[i] = -conductance;
-    lower[i + 1] = -conductance;
   }
   lower[0] = 0;
   upper[last] = 0;
