@@ -1,5 +1,5 @@
 /**
- * `optimize` on the demo heat sink as a whole process (bench/process.ts runCli: `node dist/fincheck.js`, the child's
+ * `optimize` on the demo heat sink as a whole process (bench/process.ts runCli: `node dist/fincheck.cjs`, the child's
  * own CPU time reported at exit): the fewest fins that keep the sources at or below 95 degC on
  * demo/motor-drive-sink.yaml, an fd-3d study a value (search study, then the default study) and the answer at
  * h x 0.75 and x 1.25. One run (4.0 s of CPU at load 9 on the 2-core machine): the row is for the record

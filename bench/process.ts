@@ -1,5 +1,5 @@
 /**
- * Whole-process benchmarks: wall time of `node dist/fincheck.js check <demo case>` as a user sees it
+ * Whole-process benchmarks: wall time of `node dist/fincheck.cjs check <demo case>` as a user sees it
  * (Node start-up, module loading, case parsing, the fd-1d refinement study, the shortcuts, printing),
  * each run a fresh child process (spawnSync), timed by tinybench around the spawn.
  *
@@ -10,7 +10,7 @@ import { spawnSync } from 'node:child_process';
 import { atMost, cpuText, formatMs, median, skipped, timeTask, type BenchRow } from './measure.js';
 
 const AREA = 'process';
-const CLI = 'dist/fincheck.js';
+const CLI = 'dist/fincheck.cjs';
 const DEMO_CASE = 'demo/inverter-plate-fin.yaml';
 const RUNS = 10;
 

@@ -4,11 +4,11 @@
 // when a run needs it. Chunks sit beside the entries in dist/, so `new URL('./map-worker.js', import.meta.url)`
 // and createRequire(import.meta.url) resolve the same from any of them. Native or WASM packages, and PDFKit
 // (it reads its font metrics from its own folder at run time), stay external and load lazily.
-import { rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, cpSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join, resolve } from 'node:path';
 import { build } from 'esbuild';
-import { runVendorScript, vendorScript } from './vendor-loader.mjs';
+import { compileCachedScript, runCachedScript } from './cached-script.mjs';
 
 /**
  * zod's namespace object re-exports its 100-odd message locales (`z.locales`, about 350 kB of the bundle, a sixth of
@@ -31,7 +31,7 @@ const zodEnglishOnly = {
 
 /**
  * The third-party packages every command loads, with the names fincheck imports from each: bundled apart into
- * dist/vendor.cjs (CommonJS) and loaded through scripts/vendor-loader.mjs with V8's code cache, which Node 20 has for
+ * dist/vendor.cjs (CommonJS) and loaded through scripts/cached-script.mjs with V8's code cache, which Node 20 has for
  * classic scripts only. A name imported from one of them that is not listed here fails the build ("No matching
  * export"): add it to the list.
  */
@@ -44,7 +44,7 @@ const VENDOR_EXPORTS = {
 const VENDOR_FILTER = new RegExp(`^(${Object.keys(VENDOR_EXPORTS).join('|')})$`);
 
 /**
- * Resolves fincheck's imports of the vendor packages to modules that re-export one shared loadVendor() result; the
+ * Resolves fincheck's imports of the vendor packages to modules that re-export one shared loadCachedScript() result; the
  * shared module finds dist/vendor.cjs beside its own chunk (import.meta.url).
  */
 const vendorBundle = {
@@ -57,13 +57,20 @@ const vendorBundle = {
       resolveDir: process.cwd(),
     }));
     b.onLoad({ filter: /.*/, namespace: 'vendor-instance' }, () => ({
-      contents: `import { loadVendor } from ${JSON.stringify(resolve('scripts/vendor-loader.mjs'))};\nexport const vendor = loadVendor(new URL('./vendor.cjs', import.meta.url));\n`,
+      contents: `import { loadCachedScript } from ${JSON.stringify(resolve('scripts/cached-script.mjs'))};\nexport const vendor = loadCachedScript(new URL('./vendor.cjs', import.meta.url));\n`,
       resolveDir: process.cwd(),
     }));
   },
 };
 
+/** Packages loaded from node_modules at run time (native or WASM code, or files read from their own folders). */
+const EXTERNAL = ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core', 'pdfkit', 'svg-to-pdfkit'];
+
 rmSync('dist', { recursive: true, force: true, maxRetries: 3 });
+
+// The charts' font subsets and their license (src/images/chart-font-subset.ts), in fonts/ beside the bundles, where
+// src/images/render.ts looks for them from dist as from src.
+cpSync('src/images/fonts', 'dist/fonts', { recursive: true });
 
 // The vendor bundle (CommonJS, one file) and its code cache, made by compiling and running it here once (a cache
 // made after the run also holds the functions its top level compiled).
@@ -88,20 +95,17 @@ await build({
 });
 {
   const file = resolve('dist/vendor.cjs');
-  const script = vendorScript(file, undefined);
-  runVendorScript(script, file);
+  const script = compileCachedScript(file, undefined);
+  runCachedScript(script, file);
   writeFileSync(`${file}.cache`, script.createCachedData());
 }
 
 await build({
   entryPoints: {
-    // The command (package.json bin): cli/main.ts (its hashbang stays on the first line) answers --version itself and
-    // imports the rest on demand.
-    fincheck: 'cli/main.ts',
     // The library entry (package.json exports '.'): src/api, for `import { check } from 'fincheck'`. Its
     // declarations are written by `npm pack` (prepack: tsconfig.lib.json), not on every build.
     lib: 'src/api/index.ts',
-    // The map command's worker thread (src/map/worker.ts): dist/fincheck.js starts dist/map-worker.js beside it
+    // The map command's worker thread (src/map/worker.ts): dist/fincheck.cjs starts dist/map-worker.js beside it
     // (src/map/worker-start.ts).
     'map-worker': 'src/map/worker.ts',
     // The fd-3d worker thread of a heat-sink check (src/fd/three-d/sink-lane-worker.ts), started as
@@ -126,6 +130,67 @@ await build({
   plugins: [vendorBundle],
   // Bundled CommonJS code (and createRequire users) call require: every file gets one.
   banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
-  external: ['@resvg/resvg-js', 'cephes', 'dejavu-fonts-ttf', 'playwright-core', 'pdfkit', 'svg-to-pdfkit'],
+  external: EXTERNAL,
   logLevel: 'warning',
 });
+
+// The command (package.json bin): cli/main.ts as dist/fincheck.cjs, CommonJS (Node starts it without its ES-module
+// loader; its hashbang stays on the first line). It answers --version itself and loads dist/program.cjs for the rest;
+// its fallback to the program's modules (run from the sources) stays an unresolved require here, never reached.
+await build({
+  entryPoints: { fincheck: 'cli/main.ts' },
+  outdir: 'dist',
+  outExtension: { '.js': '.cjs' },
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  target: 'node20',
+  minifyWhitespace: true,
+  minifySyntax: true,
+  charset: 'ascii',
+  define: { 'import.meta.url': '__entryUrl' },
+  banner: { js: "var __entryUrl = require('node:url').pathToFileURL(__filename).href;" },
+  supported: { 'dynamic-import': false },
+  external: ['./program-exports.js'],
+  logLevel: 'warning',
+});
+chmodSync('dist/fincheck.cjs', 0o755);
+
+// The command-line program (cli/program-exports.ts: every command, the solvers they call) as one classic script,
+// dist/program.cjs, which dist/fincheck.cjs loads with its V8 code cache (scripts/cached-script.mjs). Its imports of the
+// vendor packages read dist/vendor.cjs as the chunks do; import.meta.url is the bundle's own file URL, so the workers
+// (dist/map-worker.js, dist/sink-worker.js) and dist/vendor.cjs are found beside it. A command the program imports on
+// demand is bundled in, and its module's top level runs only when the command is asked for (esbuild's lazy init).
+await build({
+  entryPoints: { program: 'cli/program-exports.ts' },
+  outdir: 'dist',
+  outExtension: { '.js': '.cjs' },
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  target: 'node20',
+  minifyWhitespace: true,
+  minifySyntax: true,
+  charset: 'ascii',
+  plugins: [vendorBundle],
+  define: { 'import.meta.url': '__programUrl' },
+  // A classic script has no import(): the packages the program imports on demand (the rasteriser, the PDF writer: all
+  // CommonJS) are required instead, when first asked for as before.
+  supported: { 'dynamic-import': false },
+  banner: { js: "var __programUrl = require('node:url').pathToFileURL(__filename).href;" },
+  external: EXTERNAL,
+  logLevel: 'warning',
+});
+
+// The program's code cache, made after one run of `check` on the demo fin (output discarded): V8's cache holds the
+// functions compiled by then, so a check starts without parsing or compiling the functions it calls (measured on the
+// demo fin: about 15 ms of every run). Other commands compile what they add, as before.
+{
+  const file = resolve('dist/program.cjs');
+  const script = compileCachedScript(file, undefined);
+  const program = runCachedScript(script, file);
+  const io = program.bufferIo();
+  const code = await program.runCli(['check', 'demo/inverter-plate-fin.yaml'], io);
+  if (code !== 0) throw new Error(`build: the program's warm-up check exited with ${code}: ${io.stderr()}`);
+  writeFileSync(`${file}.cache`, script.createCachedData());
+}

@@ -242,7 +242,7 @@ export function parseQuantity(given: unknown, kind: QuantityKind): QuantityResul
 const QUANTITY_MEMO_SIZE = 1024;
 const quantityMemo = new Map<string, QuantityResult>();
 
-function readQuantity(given: unknown, kind: QuantityKind): QuantityResult {
+function readQuantity(given: unknown, kind: QuantityKind, commonUnits = true): QuantityResult {
   if (typeof given === 'number') {
     if (!Number.isFinite(given)) return { ok: false, problem: `${String(given)} is not a finite number` };
     return { ok: true, value: given };
@@ -257,6 +257,8 @@ function readQuantity(given: unknown, kind: QuantityKind): QuantityResult {
   if (!Number.isFinite(n)) return { ok: false, problem: `${numberMatch[0]} is not a finite number` };
   const unitText = text.slice(numberMatch[0].length).trim();
   if (unitText === '') return { ok: true, value: n };
+  const common = commonUnits ? commonUnitValue(n, unitText, kind) : undefined;
+  if (common !== undefined) return common;
 
   let u: Unit;
   try {
@@ -275,6 +277,40 @@ function readQuantity(given: unknown, kind: QuantityKind): QuantityResult {
   const value = n * u.toNumber(reference);
   if (!Number.isFinite(value)) return { ok: false, problem: `${quoted(String(given))} is not a finite value in ${reference}` };
   return { ok: true, value };
+}
+
+/**
+ * The units most cases are written in, with the factor mathjs gives from each to the kind's SI unit
+ * (u.toNumber(reference) in readQuantity): read without building the mathjs Unit class, about 6 ms of every
+ * start-up (--cpu-prof, buildUnitClass). The value is n times the same factor, so the same bits as through mathjs;
+ * tests/case/common-units.test.ts checks every entry against the mathjs reading. Any other unit text goes to mathjs.
+ */
+export const COMMON_UNITS: Partial<Record<QuantityKind, Readonly<Record<string, number>>>> = {
+  length: { m: 1, cm: 0.01, mm: 0.001, um: 0.000001, in: 0.0254, ft: 0.3048 },
+  conductivity: { 'W/(m*K)': 1, 'BTU/(h*ft*degF)': 1.7307346663713907 },
+  heatTransferCoefficient: { 'W/(m^2*K)': 1, 'BTU/(h*ft^2*degF)': 5.678263341113487 },
+  contactResistance: { 'm^2*K/W': 1 },
+  power: { W: 1, kW: 1000 },
+};
+/** Lone temperature units without a prefix (prefix scale 1 in temperatureValue), read by their definitions. */
+export const COMMON_TEMPERATURE_UNITS: ReadonlySet<string> = new Set(['degC', 'degF', 'degR', 'K']);
+
+/** n in a common unit of `kind` (COMMON_UNITS), or undefined for any other unit text. */
+function commonUnitValue(n: number, unitText: string, kind: QuantityKind): QuantityResult | undefined {
+  if (kind === 'temperature' || kind === 'temperatureDifference') {
+    const definition = COMMON_TEMPERATURE_UNITS.has(unitText) ? temperatureUnits[unitText] : undefined;
+    if (definition === undefined) return undefined;
+    return { ok: true, value: kind === 'temperatureDifference' ? n * definition.differenceScale : definition.toDegC(n) };
+  }
+  const factor = COMMON_UNITS[kind]?.[unitText];
+  if (factor === undefined) return undefined;
+  const value = n * factor;
+  return Number.isFinite(value) ? { ok: true, value } : undefined;
+}
+
+/** parseQuantity through the mathjs Unit class always (no memo, no common-unit table): for tests of the table. */
+export function parseQuantityWithMathjs(given: string, kind: QuantityKind): QuantityResult {
+  return readQuantity(given, kind, false);
 }
 
 function parsePlainNumber(text: string): QuantityResult {

@@ -4,12 +4,16 @@
  * `uncertainty` (uncertainty-band.ts, its sample on the study's coarsest grid), and each model row's drift over
  * that band.
  *
- * Work budgets. The sensitivities take two re-solves per input, on the finest grid of the study whose work
- * 2 n_inputs N (N unknowns; a Newton solve of a nonlinear fin counted NEWTON_WEIGHT times) stays within
- * SENSITIVITY_WORK, else on the coarsest grid: a refined study of a thick or long fin reaches 1e6 unknowns, and
- * two dozen solves there would take minutes for a number needed to a few per cent (an uncertainty estimate). A
- * grid one level coarser changes S by about the discretisation error of that grid (relative; below 1e-3 on
- * the study's grids), which the method text states by naming the grid. The automatic Latin-hypercube sample
+ * Grids and work budgets. The sensitivities take two re-solves per input, on the coarsest grid of the study whose
+ * estimated discretisation error (Fs |Q_grid - Q_extrapolated| / |Q_extrapolated|, the study's own Richardson
+ * extrapolation and safety factor; the GCI on the finest grid) is at most SENSITIVITY_GRID_ERROR = 2e-7: a grid
+ * changes S by the input's effect on its discretisation error e, and for the second-order schemes here e ~ (m L / N)^2
+ * with m^2 ~ h / (k t), so |dS| <~ 2-3 e (measured: S_L off by 1.6e-6 at mL = 2.5 on 1001 nodes, whose e the study put just under 1e-6); S is then
+ * good to 1e-6 (the accuracy tests/sensitivity asks of it), beyond the 4 digits shown, at a quarter of the finest
+ * grid's work per halving. Where no grid is that accurate: the finest grid whose work 2 n_inputs N (N unknowns; a Newton solve of a
+ * nonlinear fin counted NEWTON_WEIGHT times) stays within SENSITIVITY_WORK, else the coarsest grid: a refined study
+ * of a thick or long fin reaches 1e6 unknowns, and two dozen solves there would take minutes for a number needed to
+ * a few per cent (an uncertainty estimate). The method text names the grid and why it was chosen. The automatic Latin-hypercube sample
  * (the automatic choice) is drawn only when n_sample N_coarsest (Newton weighted) stays within SAMPLE_WORK;
  * otherwise the note says it was not drawn and why, and a sample asked for explicitly is drawn whatever its cost. Both budgets are chosen so
  * that the sensitivities and the sample each add at most a few seconds on a 2-core machine (measured: about
@@ -25,6 +29,8 @@ import type { ModelResult, Sensitivity, UncertaintyBand } from './types.js';
 import type { Grading } from '../mesh/index.js';
 import { DEFAULT_SAMPLE_SEED, DEFAULT_SAMPLE_SIZE, uncertaintyBand } from './uncertainty-band.js';
 
+/** Largest estimated discretisation error (relative) of a grid that re-solved sensitivities may use (module header). */
+export const SENSITIVITY_GRID_ERROR = 2e-7;
 /** Budgets of the sensitivities and the automatic sample, in unknowns x solves (module header). */
 export const SENSITIVITY_WORK = 2e6;
 export const SAMPLE_WORK = 4e6;
@@ -52,7 +58,6 @@ export function referenceSensitivity(
   referenceHeatRate: number,
 ): ReferenceSensitivity {
   const oneDFinest = { nodes: oneD.finest.mesh.nodes, grading: resolution.gridGrading };
-  const oneDCoarsest = { nodes: resolution.nodes[0] ?? oneDFinest.nodes, grading: resolution.gridGrading };
   // The study's grids, finest first.
   const grids: ReferenceGrid[] =
     twoD === null
@@ -70,9 +75,12 @@ export function referenceSensitivity(
         ];
   const weight = solvers.nonlinear ? NEWTON_WEIGHT : 1;
   const coarsest = grids[grids.length - 1] as ReferenceGrid;
+  const errors = gridErrors(twoD ?? oneD, twoD === null ? grids.length : twoD.grids.length);
   const given = new Map((c.uncertainty ?? DEFAULT_UNCERTAINTY).map((u) => [u.key, u.relative]));
   const { sens, method } =
-    twoD !== null && !solvers.nonlinear ? adjointSensitivities(c, twoD, oneDCoarsest, given) : reSolvedSensitivities(c, solvers, grids, given);
+    twoD !== null && !solvers.nonlinear
+      ? adjointSensitivities(c, twoD, { nodes: twoD.finest.grid.nodesX, grading: resolution.gridGrading }, given)
+      : reSolvedSensitivities(c, solvers, grids, errors, given);
   const sampleWork = (opts.sampleSize ?? DEFAULT_SAMPLE_SIZE) * unknownsOf(coarsest) * weight;
   const uncertainty = uncertaintyBand(c, sens, referenceHeatRate, {
     when: opts.sample ?? 'auto',
@@ -96,8 +104,10 @@ export function referenceSensitivity(
 /**
  * A linear fin with the fd-2d reference: the discrete adjoint on the study's finest grid (one extra solve for
  * every input; reference-rate.ts adjointReferenceRate), no work budget needed beyond the study's own. The side
- * edges' correction (a few per cent of Q) is differenced on the 1-D study's coarsest grid: its derivative there
- * differs from the finest grid's by that grid's discretisation error (below 1e-6 of itself), so S by < 1e-7.
+ * edges' correction (a few per cent of Q) is differenced on a 1-D grid of as many nodes as the 2-D grid has along
+ * the fin (`edges`), as the coarse grids' corrections are: its derivative there differs from a fine 1-D grid's by
+ * that grid's discretisation error (about (L / nx)^2 m^2 / 12, below 1e-4 of itself on the study's finest grids),
+ * which moves S by under 1e-5 of the correction's share of Q (a few per cent): below the 4 digits shown.
  */
 function adjointSensitivities(
   c: Case,
@@ -111,7 +121,7 @@ function adjointSensitivities(
   const sens = sensitivitiesFrom(c, (input) => reference.derivative(input.scale, d), reference.nominal, given, true, 'adjoint');
   const edgeWords =
     c.fin.edges === 'cooled' && isStraight(c)
-      ? `; the side edges' fd-1d correction by central differences on ${edges.nodes} nodes (the coarsest 1-D grid of the study), relative step ${d}`
+      ? `; the side edges' fd-1d correction by central differences on ${edges.nodes} nodes (as many as the 2-D grid has along the fin), relative step ${d}`
       : '';
   return {
     sens,
@@ -120,25 +130,50 @@ function adjointSensitivities(
 }
 
 /**
- * Central differences of re-solves on the finest grid of the study within SENSITIVITY_WORK (module header): a
- * nonlinear fin (Newton from the case's own solution), or the fd-1d reference.
+ * The estimated relative discretisation error of each grid of a study, finest first (module header): the GCI on the
+ * finest, Fs |Q_grid - Q_extrapolated| / |Q_extrapolated| on the others; null for every grid when the study has no
+ * refinement or its grids are not the `count` expected.
+ */
+function gridErrors(study: FinStudy1D | FinStudy2D, count: number): (number | null)[] {
+  const r = study.refinement;
+  const values = study.model === 'fd-2d' ? study.grids.map((g) => g.heatRate_W) : (r?.values ?? []);
+  if (r === null || values.length !== count || !(Math.abs(r.extrapolated) > 0)) return new Array<null>(count).fill(null);
+  return values.map((v, i) => (i === 0 ? r.gci : (r.safetyFactor * Math.abs(v - r.extrapolated)) / Math.abs(r.extrapolated)));
+}
+
+/**
+ * Central differences of re-solves (a nonlinear fin: Newton from the case's own solution; or the fd-1d reference) on
+ * the coarsest grid accurate to SENSITIVITY_GRID_ERROR, else the finest within SENSITIVITY_WORK (module header).
+ * `errors` are the grids' estimated discretisation errors, in the order of `grids` (finest first).
  */
 function reSolvedSensitivities(
   c: Case,
   solvers: GridSolvers,
   grids: readonly ReferenceGrid[],
+  errors: readonly (number | null)[],
   given: ReadonlyMap<string, number>,
 ): { sens: Sensitivity[]; method: string } {
   const weight = solvers.nonlinear ? NEWTON_WEIGHT : 1;
   const coarsest = grids[grids.length - 1] as ReferenceGrid;
   const solvesPerInput = 2;
   const inputs = Math.max(1, numericInputs(c).length);
-  const within = grids.find((g) => solvesPerInput * inputs * unknownsOf(g) * weight <= SENSITIVITY_WORK);
-  const finest = within ?? coarsest;
+  const affordable = (g: ReferenceGrid): boolean => solvesPerInput * inputs * unknownsOf(g) * weight <= SENSITIVITY_WORK;
+  let accurate = -1;
+  grids.forEach((g, i) => {
+    const e = errors[i];
+    if (e !== null && e !== undefined && e <= SENSITIVITY_GRID_ERROR && affordable(g)) accurate = i;
+  });
+  const within = grids.find(affordable);
+  const chosen = accurate >= 0 ? (grids[accurate] as ReferenceGrid) : (within ?? coarsest);
   const gridWords =
-    finest === grids[0]
-      ? 'its finest grid'
-      : `the finest grid of the study within the work budget of ${SENSITIVITY_WORK.toExponential(0)} unknowns x solves (the finest, ${referenceGridText(grids[0] as ReferenceGrid)}, would take ${(solvesPerInput * inputs * unknownsOf(grids[0] as ReferenceGrid) * weight).toExponential(1)})`;
+    accurate >= 0
+      ? accurate === 0
+        ? `its finest grid (estimated discretisation error ${(errors[0] as number).toExponential(1)}; the coarser grids' exceed ${SENSITIVITY_GRID_ERROR.toExponential(0)})`
+        : `the coarsest grid of the study whose estimated discretisation error, ${(errors[accurate] as number).toExponential(1)}, is within ${SENSITIVITY_GRID_ERROR.toExponential(0)}`
+      : chosen === grids[0]
+        ? 'its finest grid'
+        : `the finest grid of the study within the work budget of ${SENSITIVITY_WORK.toExponential(0)} unknowns x solves (the finest, ${referenceGridText(grids[0] as ReferenceGrid)}, would take ${(solvesPerInput * inputs * unknownsOf(grids[0] as ReferenceGrid) * weight).toExponential(1)})`;
+  const finest = chosen;
   const rate = referenceRate(solvers, finest, c);
   const nominal = rate(c);
   return {

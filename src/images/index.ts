@@ -22,7 +22,7 @@ export type { TornadoBar, TornadoChartSpec } from './tornado-chart.js';
 export { mapChart } from './map-chart.js';
 export type { MapChartSpec, MapChartResult, MapLevel, MapPoint } from './map-chart.js';
 
-export { svgToPng, chartBytes, fontFiles } from './render.js';
+export { svgToPng, chartBytes, fontFiles, fontFilesFor, subsetFontFiles } from './render.js';
 export type { RenderOptions, ChartFormat } from './render.js';
 export { svgsToPngs } from './render-several.js';
 export type { RenderSeveralOptions } from './render-several.js';

@@ -1,8 +1,9 @@
 /**
  * SVG -> PNG with resvg (@resvg/resvg-js), text set in the DejaVu Sans files (regular and bold) that ship with the
- * `dejavu-fonts-ttf` package. System fonts are never loaded: the PNG bytes then depend only on
- * the SVG and the options (resvg draws nothing for text when it has no font, so the font file
- * is required, and its absence is an error here).
+ * `dejavu-fonts-ttf` package, or in their subsets (chart-font-subset.ts: the same glyphs, 63 kB instead of 757 kB,
+ * which resvg reads again for every glyph) when every character of the SVG is in them. System fonts are never
+ * loaded: the PNG bytes then depend only on the SVG and the options (resvg draws nothing for text when it has no
+ * font, so the font file is required, and its absence is an error here).
  *
  * Size: the SVG is laid out in CSS px (96 per inch). `dpi` scales the raster by dpi / 96 and
  * records the resolution in the PNG (pHYs), so a 1200 px wide chart at 300 dpi is 3750 px wide
@@ -12,6 +13,8 @@
 
 import { createRequire } from 'node:module';
 import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { inChartFontSubset } from './chart-font-subset.js';
 import { fontFamily } from './text-metrics.js';
 import { setPngDpi } from './png-dpi.js';
 
@@ -37,6 +40,25 @@ export function fontFiles(): string[] {
   return paths;
 }
 
+let subsetPaths: string[] | null | undefined;
+
+/**
+ * Absolute paths of the subsets of DejaVuSans.ttf and DejaVuSans-Bold.ttf (chart-font-subset.ts), in fonts/ beside
+ * this module (src/images/fonts, or dist/fonts where the build copies them); null when they are not there.
+ */
+export function subsetFontFiles(): string[] | null {
+  if (subsetPaths !== undefined) return subsetPaths;
+  const paths = ['DejaVuSans-subset.ttf', 'DejaVuSans-Bold-subset.ttf'].map((f) => fileURLToPath(new URL(`./fonts/${f}`, import.meta.url)));
+  subsetPaths = paths.every((path) => existsSync(path)) ? paths : null;
+  return subsetPaths;
+}
+
+/** The font files for `svg`: the subsets when they hold every character of it, else the full fonts. */
+export function fontFilesFor(svg: string): string[] {
+  const subsets = subsetFontFiles();
+  return subsets !== null && inChartFontSubset(svg) ? subsets : fontFiles();
+}
+
 type ResvgModule = typeof import('@resvg/resvg-js');
 let resvgModule: Promise<ResvgModule> | undefined;
 
@@ -55,7 +77,7 @@ export async function svgToPng(svg: string, options: RenderOptions = {}): Promis
   const { renderAsync } = await loadResvg();
   // renderAsync rasterises on libuv's thread pool: several charts render in parallel (map outputs).
   const rendered = await renderAsync(svg, {
-    font: { loadSystemFonts: false, fontFiles: fontFiles(), defaultFontFamily: fontFamily },
+    font: { loadSystemFonts: false, fontFiles: fontFilesFor(svg), defaultFontFamily: fontFamily },
     fitTo: options.width !== undefined ? { mode: 'width', value: options.width } : { mode: 'zoom', value: dpi / 96 },
     logLevel: 'off',
   });

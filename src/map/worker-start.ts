@@ -1,5 +1,5 @@
 /**
- * Starting a map worker thread. The bundled CLI (dist/fincheck.js) starts the bundled worker beside it,
+ * Starting a map worker thread. The bundled CLI (dist/fincheck.cjs) starts the bundled worker beside it,
  * dist/map-worker.js (scripts/build.mjs builds both). Run from the TypeScript sources (tests, `tsx cli/main.ts`)
  * there is no bundle: the worker then starts from src/map/worker.ts through a small bootstrap that registers the
  * tsx loader (a devDependency) in the new thread first.

@@ -59,7 +59,16 @@ describe('the npm package', () => {
   }, 300_000);
 
   it('holds the bundles, the worker, the declarations and the demo, and no sources or tests', () => {
-    for (const f of ['dist/fincheck.js', 'dist/lib.js', 'dist/map-worker.js', 'dist/types/api/index.d.ts', 'package.json', 'README.md', 'LICENSE']) {
+    for (const f of [
+      'dist/fincheck.cjs',
+      'dist/program.cjs',
+      'dist/lib.js',
+      'dist/map-worker.js',
+      'dist/types/api/index.d.ts',
+      'package.json',
+      'README.md',
+      'LICENSE',
+    ]) {
       expect(files).toContain(f);
     }
     expect(files.some((f) => f.startsWith('demo/'))).toBe(true);
@@ -129,8 +138,8 @@ describe('the npm package', () => {
   }, 120_000);
 
   it('installs the command', () => {
-    expect(existsSync(join(modules, 'fincheck', 'dist', 'fincheck.js'))).toBe(true);
-    const run = spawnSync(process.execPath, [join(modules, 'fincheck', 'dist', 'fincheck.js'), '--version'], { encoding: 'utf8' });
+    expect(existsSync(join(modules, 'fincheck', 'dist', 'fincheck.cjs'))).toBe(true);
+    const run = spawnSync(process.execPath, [join(modules, 'fincheck', 'dist', 'fincheck.cjs'), '--version'], { encoding: 'utf8' });
     expect(run.stdout.trim()).toBe('0.1.0');
   });
 });

@@ -1,5 +1,5 @@
 /**
- * The built command (dist/fincheck.js, `npm run build`) as a real child process, interrupted by a real signal:
+ * The built command (dist/fincheck.cjs, `npm run build`) as a real child process, interrupted by a real signal:
  * `report` by SIGINT and SIGTERM (one case, several, and while it waits on standard input), `map` by SIGTERM in-process and on worker threads. Each ends with the shell's
  * code for the signal (130 = 128 + SIGINT's 2, 143 = 128 + SIGTERM's 15), one line on stderr, nothing on stdout,
  * and no output folder, temporary file or half-written file left. Inputs are invented.
@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
-const bin = join(import.meta.dirname, '../../dist/fincheck.js');
+const bin = join(import.meta.dirname, '../../dist/fincheck.cjs');
 const tmp = mkdtempSync(join(tmpdir(), 'fincheck-signals-'));
 const pin = join(tmp, 'pin.yaml');
 writeFileSync(

@@ -95,8 +95,8 @@ describe('the heat-sink scenario shows what it is for', () => {
 });
 
 describe('the built command', () => {
-  const bin = join(import.meta.dirname, '../../dist/fincheck.js');
-  it('dist/fincheck.js exists (npm test builds it first)', () => {
+  const bin = join(import.meta.dirname, '../../dist/fincheck.cjs');
+  it('dist/fincheck.cjs exists (npm test builds it first)', () => {
     expect(existsSync(bin), 'run `npm run build` (npm test does it)').toBe(true);
   });
   it('runs `check` on a demo case as a separate process and exits 0', () => {

@@ -1,5 +1,5 @@
 /**
- * The built command (dist/fincheck.js with its worker dist/map-worker.js, `npm run build`) as a separate process:
+ * The built command (dist/fincheck.cjs with its worker dist/map-worker.js, `npm run build`) as a separate process:
  * `--jobs 2` on worker threads prints the same JSON as the in-process run, and a real SIGINT (Ctrl-C) ends it with
  * exit code 130 and no file written. Inputs are invented.
  */
@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { cli } from '../cli/run.js';
 import { caseFile, tmp } from './support.js';
 
-const bin = join(import.meta.dirname, '../../dist/fincheck.js');
+const bin = join(import.meta.dirname, '../../dist/fincheck.cjs');
 const worker = join(import.meta.dirname, '../../dist/map-worker.js');
 
 const file = caseFile(
@@ -25,7 +25,7 @@ base: { temperature: 75 degC }
 const grid = ['--x', 'fin.diameter=2:8 mm', '--y', 'fin.length=10:60 mm', '--reference', '1d'];
 
 describe('the built map command', () => {
-  it('dist/fincheck.js and dist/map-worker.js exist (npm test builds them first)', () => {
+  it('dist/fincheck.cjs and dist/map-worker.js exist (npm test builds them first)', () => {
     expect(existsSync(bin), 'run `npm run build`').toBe(true);
     expect(existsSync(worker), 'run `npm run build`').toBe(true);
   });

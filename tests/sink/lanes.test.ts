@@ -75,7 +75,7 @@ describe('the sink check on two lanes', () => {
 });
 
 describe('the second lane on the bundled worker thread', () => {
-  const bin = join(import.meta.dirname, '../../dist/fincheck.js');
+  const bin = join(import.meta.dirname, '../../dist/fincheck.cjs');
   const worker = pathToFileURL(join(import.meta.dirname, '../../dist/sink-worker.js'));
 
   it('dist/sink-worker.js exists (npm test builds it first)', () => {

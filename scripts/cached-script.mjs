@@ -1,13 +1,15 @@
-// Loads dist/vendor.cjs, the third-party code every command needs (zod, yaml, mathjs's unit classes, commander:
-// about 640 kB), as a classic script with V8's code cache dist/vendor.cjs.cache, which scripts/build.mjs writes.
+// Loads a CommonJS bundle of fincheck's (dist/vendor.cjs, the third-party code every command needs, and dist/program.cjs,
+// the command-line program) as a classic script with V8's code cache beside it (`<bundle>.cache`, which
+// scripts/build.mjs writes).
 //
 // Why: Node 20 keeps no compiled ES module between runs (node:module's enableCompileCache is Node 22.1+), so V8
-// parsed this code on every start-up (measured: loading it 75-85 ms CPU without the cache, 41-48 ms with it, load
-// about 10). A cache from another Node version or other V8 flags is rejected by V8 (script.cachedDataRejected) and the
-// source compiled as usual: the same code runs either way, only slower.
+// parsed this code on every start-up (measured: loading the vendor bundle 75-85 ms CPU without the cache, 41-48 ms with
+// it, load about 10). A cache from another Node version or other V8 flags is rejected by V8 (script.cachedDataRejected)
+// and the source compiled as usual: the same code runs either way, only slower.
 //
 // scripts/build.mjs bundles this file into dist (the bundle's `zod`, `yaml`, `mathjs` and `commander` imports read the
-// exports of one loadVendor call) and calls vendorScript and runVendorScript itself to write the cache.
+// exports of one loadCachedScript call; dist/fincheck.cjs loads dist/program.cjs with it) and calls compileCachedScript
+// and runCachedScript itself to write the caches.
 import { existsSync, readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname } from 'node:path';
@@ -19,19 +21,19 @@ import { Script } from 'node:vm';
  * __filename, __dirname), with the cache when given. The file is ASCII (esbuild charset ascii), so latin1 reads it
  * as written without a UTF-8 decode.
  */
-export function vendorScript(file, cachedData) {
+export function compileCachedScript(file, cachedData) {
   const source = readFileSync(file, 'latin1');
   return new Script(`(function (exports, require, module, __filename, __dirname) {${source}\n})`, { filename: file, cachedData });
 }
 
 /**
- * Built-in modules the bundle requires at load but fincheck never uses: commander requires child_process for
+ * Built-in modules the vendor bundle requires at load but fincheck never uses: commander requires child_process for
  * subcommands that are separate executables (fincheck has none); loading it costs ~5 ms of every start-up. The
  * bundle gets an object that loads the module on its first property access.
  */
 const LOADED_ON_USE = new Set(['child_process', 'node:child_process']);
 
-function vendorRequire(file) {
+function bundleRequire(file) {
   const load = createRequire(file);
   return (id) => {
     if (!LOADED_ON_USE.has(id)) return load(id);
@@ -41,15 +43,15 @@ function vendorRequire(file) {
 }
 
 /** Runs the compiled bundle once and returns its exports. */
-export function runVendorScript(script, file) {
+export function runCachedScript(script, file) {
   const module = { exports: {} };
-  script.runInThisContext()(module.exports, vendorRequire(file), module, file, dirname(file));
+  script.runInThisContext()(module.exports, bundleRequire(file), module, file, dirname(file));
   return module.exports;
 }
 
 /** The exports of the bundle at `url` (a file: URL), compiled from its cache when one lies beside it. */
-export function loadVendor(url) {
+export function loadCachedScript(url) {
   const file = fileURLToPath(url);
   const cache = `${file}.cache`;
-  return runVendorScript(vendorScript(file, existsSync(cache) ? readFileSync(cache) : undefined), file);
+  return runCachedScript(compileCachedScript(file, existsSync(cache) ? readFileSync(cache) : undefined), file);
 }
