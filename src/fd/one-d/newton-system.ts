@@ -301,12 +301,15 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   // 1e-12 of the conduction scale (a converged solve stalled at 1.2e-12 for 50 steps and was called a
   // failure). Such a row is measured against that floor instead, so 1e-12 stays ~4500 round-offs.
   // The rows whose floor is under the conduction scale share its denominator: the largest of their |R_i| is divided
-  // once (division is monotone, so that is the largest of their quotients, bit for bit).
+  // once (division is monotone, so that is the largest of their quotients, bit for bit). A row whose |R_i| is at most
+  // that largest so far cannot raise the result either way (its quotient is at most common / maxScale): skipped.
   if (maxScale > 0) {
     const thetaScale = Math.abs(reference);
     let common = 0;
     let floored = 0;
     for (let i = 0; i < n; i++) {
+      const r = Math.abs(R[i] as number);
+      if (r <= common) continue;
       const radiationT = radiates ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
       let rowFloor: number;
       if (ambient[i] === 1) {
@@ -317,7 +320,6 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
       } else {
         rowFloor = Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
       }
-      const r = Math.abs(R[i] as number);
       if (rowFloor <= maxScale) common = Math.max(common, r);
       else floored = Math.max(floored, r / Math.max(maxScale, rowFloor));
     }
