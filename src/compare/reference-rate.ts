@@ -60,11 +60,25 @@ export function referenceRate(solvers: GridSolvers, grid: ReferenceGrid, c: Case
   return (variant) => {
     const section = solve(variant, { model: '2d', nx: grid.nx, ny: grid.ny }, '2d');
     if (!(variant.fin.edges === 'cooled' && isStraight(variant))) return section;
-    const insulated: Case = { ...variant, fin: { ...variant.fin, edges: 'insulated' } };
+    const insulated = withInsulatedEdges(variant);
     return (
       section + oneD(variant, '1d cooled', grid.edges.nodes, grid.edges.grading) - oneD(insulated, '1d insulated', grid.edges.nodes, grid.edges.grading)
     );
   };
+}
+
+/**
+ * The case with insulated side edges, its fin made once per fin (a sample's variants of h share their fin): the 1-D
+ * geometry is cached by fin object (mesh finGeometry), so the same fin object spares a key built from the profile.
+ */
+const insulatedFins = new WeakMap<Case['fin'], Case['fin']>();
+function withInsulatedEdges(variant: Case): Case {
+  let fin = insulatedFins.get(variant.fin);
+  if (fin === undefined) {
+    fin = { ...variant.fin, edges: 'insulated' };
+    insulatedFins.set(variant.fin, fin);
+  }
+  return { ...variant, fin };
 }
 
 /** The case with the variant's edges (the Newton start of the insulated-edge solve has insulated edges too). */
@@ -87,7 +101,7 @@ export function adjointReferenceRate(
   const section = finSectionAdjoint(finProblem(c), grid.nx, grid.ny, solved);
   const edges = (variant: Case): number => {
     if (!(variant.fin.edges === 'cooled' && isStraight(variant))) return 0;
-    const insulated: Case = { ...variant, fin: { ...variant.fin, edges: 'insulated' } };
+    const insulated = withInsulatedEdges(variant);
     // A linear fin (the adjoint's): the heat rate alone, as solveFinWith would give it.
     const oneD = (v: Case): number => linearFinHeatRate1D(finProblem(v), { nodes: grid.edges.nodes, grading: grid.edges.grading });
     return oneD(variant) - oneD(insulated);

@@ -95,10 +95,12 @@ function drawSample(c: Case, uncertain: readonly Sensitivity[], firstOrder: numb
   });
   const points = latinHypercubeNormal(setup.n, bounds, setup.seed);
   const nominal = setup.rate(c);
+  // The first input scales the case itself, whose inputs are listed above; each further one scales the variant so far.
+  const firstInput = uncertain.length > 0 ? inputs.find((i) => i.key === (uncertain[0] as Sensitivity).key) : undefined;
   const rates = points.map((z) => {
     let variant = c;
     uncertain.forEach((s, j) => {
-      const input = numericInputs(variant).find((i) => i.key === s.key);
+      const input = j === 0 ? firstInput : numericInputs(variant).find((i) => i.key === s.key);
       if (input !== undefined) variant = input.scale(1 + s.uncertainty * (z[j] as number));
     });
     return setup.rate(variant);
