@@ -28,6 +28,34 @@ describe('inverse of the potential drop', () => {
     }
   });
 
+  // The array forms start each node's search for its table piece at the previous node's piece: the order of the
+  // nodes must not matter, so a fin's ascending drops, the same descending, and a scrambled order (every node on
+  // another piece than the one before) give the one-node forms' values bit for bit.
+  test.each([299.8, 100, 50])('evaluate and dropsAt equal potentialDropAt and dropAt node by node (base excess %s K)', (thetaBase) => {
+    const transform = kirchhoffTransform({ kind: 'table', T_degC, k }, -40, thetaBase);
+    // The drops of the table's points themselves (where a piece begins) among them, and the ends of the range.
+    const points = Array.from(T_degC, (T) => thetaBase - T - 40);
+    const ascending = Float64Array.from([
+      ...Array.from({ length: 401 }, (_, i) => -100 + (i / 400) * (thetaBase + 200)),
+      ...points,
+      -Infinity,
+      Infinity,
+    ]).sort();
+    const count = ascending.length;
+    const scrambled = Float64Array.from(ascending, (_, i) => ascending[(i * 173) % count] as number);
+    for (const drops of [ascending, ascending.slice().reverse(), scrambled]) {
+      const potential = new Float64Array(drops.length);
+      const ratio = new Float64Array(drops.length);
+      transform.evaluate(drops, potential, ratio);
+      const back = new Float64Array(drops.length);
+      transform.dropsAt(potential, back);
+      drops.forEach((d, i) => {
+        expect(potential[i]).toBe(transform.potentialDropAt(d));
+        expect(back[i]).toBe(transform.dropAt(potential[i] as number));
+      });
+    }
+  });
+
   test('a constant k: D = d, bit for bit', () => {
     const transform = kirchhoffTransform({ kind: 'constant', k: 12 }, 20, 60);
     for (const d of [0, 1e-300, 0.1, 59.999, 60, 75]) expect(transform.dropAt(transform.potentialDropAt(d))).toBe(d);

@@ -32,6 +32,8 @@ export interface NewtonModel<S extends NewtonState> {
   /** Relative residual below which only full steps are taken. */
   readonly roundOffRegime: number;
   createState(): S;
+  /** An array for the Newton correction, as long as the unknowns (default: a new one). */
+  correctionArray?(): Float64Array;
   /** Writes the starting unknowns (from the drops `initial`, constraints applied) into `into`. */
   start(initial: Float64Array, into: Float64Array): void;
   /** Fills a state from its drops: residual, norms, validity. */
@@ -73,7 +75,7 @@ export function dampedNewton<S extends NewtonState>(model: NewtonModel<S>, initi
   const { maxIterations, residualTolerance, heatRateTolerance } = opts;
   let current = model.createState();
   let trial = model.createState();
-  const delta = new Float64Array(initial.length);
+  const delta = model.correctionArray?.() ?? new Float64Array(initial.length);
   model.start(initial, current.unknowns);
   model.evaluate(current);
   let heatRate = model.heatRate(current);

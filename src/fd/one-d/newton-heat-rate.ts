@@ -33,18 +33,19 @@ import type { FinProblem } from '../problem/fin-problem.js';
 /**
  * Base and surface heat rates of a solution given by its drops d = θ_b - θ and its excess temperatures θ (K;
  * both from the solve: θ near the ambient is carried to full relative precision, not as θ_b - d), and their
- * energy balance.
+ * energy balance. `evaluated`: the potential drops D(d) and the CV losses of these temperatures when the solve
+ * has them already (formed from θ as here: NewtonOutcome), else they are computed.
  */
-export function nonlinearHeatRates(setup: NewtonSetup, drop: Float64Array, theta: Float64Array): FinHeatRates1D {
+export function nonlinearHeatRates(
+  setup: NewtonSetup,
+  drop: Float64Array,
+  theta: Float64Array,
+  evaluated: { readonly potential: Float64Array; readonly loss: Float64Array } | null = null,
+): FinHeatRates1D {
   const n = drop.length;
   const last = n - 1;
   const b = setup.boundaries;
-  const potential = new Float64Array(n);
-  const ratio = new Float64Array(n);
-  const loss = new Float64Array(n);
-  const slope = new Float64Array(n);
-  setup.kirchhoff.evaluate(drop, potential, ratio);
-  cvLosses(setup.law, setup.G, setup.mesh.cvSurface, theta, loss, slope);
+  const { potential, loss } = evaluated ?? evaluateSolution(setup, drop, theta);
   const heatRate =
     b.base.kind === 'temperature'
       ? (setup.K[0] as number) * ((potential[1] as number) - (potential[0] as number)) + (loss[0] as number)
@@ -57,6 +58,16 @@ export function nonlinearHeatRates(setup: NewtonSetup, drop: Float64Array, theta
   const scale = Math.max(Math.abs(heatRate), Math.abs(surfaceHeatRate));
   const energyBalance = scale === 0 ? 0 : Math.abs(heatRate - surfaceHeatRate) / (Math.abs(heatRate) || scale);
   return { heatRate, surfaceHeatRate, energyBalance };
+}
+
+/** D(d) (K) and the CV losses (W) of a solution. */
+function evaluateSolution(setup: NewtonSetup, drop: Float64Array, theta: Float64Array): { potential: Float64Array; loss: Float64Array } {
+  const n = drop.length;
+  const potential = new Float64Array(n);
+  const loss = new Float64Array(n);
+  setup.kirchhoff.evaluate(drop, potential, new Float64Array(n));
+  cvLosses(setup.law, setup.G, setup.mesh.cvSurface, theta, loss, new Float64Array(n));
+  return { potential, loss };
 }
 
 /** Radiated flux at the base temperature, ε σ (T_b^4 - T_s^4), W/m^2 (0 without radiation). */

@@ -17,17 +17,20 @@ import { hAtNodes } from '../problem/convection.js';
 import { nonlinearBoundaries } from './newton-boundary.js';
 import { kirchhoffTransform } from '../problem/conductivity.js';
 import { faceLaw } from '../problem/surface-law.js';
-import { newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup } from './newton-system.js';
+import { leading, newtonSolve, type NewtonOptions, type NewtonOutcome, type NewtonSetup, type NewtonWorkspace } from './newton-system.js';
 import { isLinearProblem, scaleNonlinearity, type FinProblem } from '../problem/fin-problem.js';
 
-/** The discrete operators of a problem on a mesh (one-d/newton-system.ts, NewtonSetup). */
-export function newtonSetup(problem: FinProblem, mesh: Mesh1D): NewtonSetup {
+/**
+ * The discrete operators of a problem on a mesh (one-d/newton-system.ts, NewtonSetup); their arrays in `workspace`
+ * when given (then valid until the workspace's next setup).
+ */
+export function newtonSetup(problem: FinProblem, mesh: Mesh1D, workspace?: NewtonWorkspace): NewtonSetup {
   const n = mesh.nodes;
   const kirchhoff = kirchhoffTransform(problem.conductivity, problem.ambient_degC, problem.base.theta);
-  const K = new Float64Array(n - 1);
+  const K = workspace === undefined ? new Float64Array(n - 1) : leading(workspace.conductances, n - 1);
   for (let i = 0; i < n - 1; i++) K[i] = interfaceConductance(mesh, kirchhoff.kRef, i);
-  const hx = hAtNodes(problem.h, mesh.x, mesh.length);
-  const G = new Float64Array(n);
+  const hx = hAtNodes(problem.h, mesh.x, mesh.length, workspace === undefined ? undefined : leading(workspace.hNodes, n));
+  const G = workspace === undefined ? new Float64Array(n) : leading(workspace.convective, n);
   for (let i = 0; i < n; i++) G[i] = convectiveConductance(mesh, hx, i);
   const law = faceLaw(problem);
   const sinkAcrossAmbient = law.radiative !== 0 && (law.surroundings_K - law.ambient_K) * problem.base.theta < 0;
@@ -49,6 +52,8 @@ export interface MeshSolve {
   /** Drops d = θ_b - θ and excess temperatures θ at the nodes, K. */
   readonly drop: Float64Array;
   readonly theta: Float64Array;
+  /** The solution's potential drops and CV losses, when the solve has them (NewtonOutcome). */
+  readonly evaluated: NewtonOutcome['evaluated'];
   /** Newton steps on the problem itself (the last stage when continuation ran). */
   readonly iterations: number;
   /** Newton steps over every attempt and continuation stage. */
@@ -62,12 +67,19 @@ export interface MeshSolve {
 
 /**
  * Solves the problem on a mesh from the drops `initial` (d = θ_b - θ, K; default 0: the whole fin at
- * the base temperature); throws SolverError when it cannot.
+ * the base temperature); throws SolverError when it cannot. Plain Newton works in `workspace` when given (the
+ * solution is then left in it; continuation stages, rare, allocate their own).
  */
-export function solveNonlinearOnMesh(problem: FinProblem, mesh: Mesh1D, opts: NewtonOptions = {}, initial?: Float64Array): MeshSolve {
-  const setup = newtonSetup(problem, mesh);
+export function solveNonlinearOnMesh(
+  problem: FinProblem,
+  mesh: Mesh1D,
+  opts: NewtonOptions = {},
+  initial?: Float64Array,
+  workspace?: NewtonWorkspace,
+): MeshSolve {
+  const setup = newtonSetup(problem, mesh, workspace !== undefined && mesh.nodes <= workspace.capacity ? workspace : undefined);
   const start = initial ?? new Float64Array(mesh.nodes);
-  const direct = newtonSolve(setup, start, opts);
+  const direct = newtonSolve(setup, start, opts, workspace);
   if (direct.converged) return summary(setup, direct, direct.iterations, direct.halvings, 0);
   if (setup.linear) throw failure(problem, mesh, direct, 0);
 
@@ -86,6 +98,7 @@ function summary(setup: NewtonSetup, outcome: NewtonOutcome, total: number, halv
     setup,
     drop: outcome.drop,
     theta: outcome.theta,
+    evaluated: outcome.evaluated,
     iterations: outcome.iterations,
     totalIterations: total,
     halvings,

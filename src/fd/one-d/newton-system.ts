@@ -47,7 +47,7 @@ import { conservativeThomasInto } from '../linear-algebra/conservative-thomas.js
 import { tipLoss, type FlowAndSlope, type NonlinearBoundaries } from './newton-boundary.js';
 import type { KirchhoffTransform } from '../problem/conductivity.js';
 import { ambientSlope, ambientVariable, cvLosses, thetaOfAmbient, type FaceLaw } from '../problem/surface-law.js';
-import { createTridiagonalSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
+import { createTridiagonalSystem, type RowSumSystem, type TridiagonalSolver } from '../linear-algebra/tridiagonal-system.js';
 import { dampedNewton, type NewtonModel } from '../newton/damped-newton.js';
 
 /** Everything about one mesh that the iteration does not change. */
@@ -95,6 +95,11 @@ export interface NewtonOutcome {
   /** Drops d = θ_b - θ and excess temperatures θ of the last iterate, K. */
   readonly drop: Float64Array;
   readonly theta: Float64Array;
+  /**
+   * The last iterate's potential drops D(d) (K) and CV losses (W) as the heat rates form them (one-d/newton-heat-rate.ts),
+   * so they need not be computed again; null when a node was solved in its ambient variable (its loss formed from u).
+   */
+  readonly evaluated: { readonly potential: Float64Array; readonly loss: Float64Array } | null;
   /** Newton steps taken. */
   readonly iterations: number;
   /** Step-length halvings of the line search over all steps. */
@@ -131,16 +136,41 @@ interface State {
 }
 
 function createState(n: number): State {
+  return stateOver(
+    {
+      unknowns: new Float64Array(n),
+      drop: new Float64Array(n),
+      theta: new Float64Array(n),
+      potential: new Float64Array(n),
+      ratio: new Float64Array(n),
+      column: new Float64Array(n),
+      loss: new Float64Array(n),
+      lossSlope: new Float64Array(n),
+      residual: new Float64Array(n),
+    },
+    n,
+  );
+}
+
+type StateArrays = Pick<State, 'unknowns' | 'drop' | 'theta' | 'potential' | 'ratio' | 'column' | 'loss' | 'lossSlope' | 'residual'>;
+
+/** The first n entries of an array (itself when it has n). */
+export function leading<A extends Float64Array | Uint8Array>(a: A, n: number): A {
+  return (a.length === n ? a : a.subarray(0, n)) as A;
+}
+
+/** A fresh state on the first n entries of the arrays `a`. */
+function stateOver(a: StateArrays, n: number): State {
   return {
-    unknowns: new Float64Array(n),
-    drop: new Float64Array(n),
-    theta: new Float64Array(n),
-    potential: new Float64Array(n),
-    ratio: new Float64Array(n),
-    column: new Float64Array(n),
-    loss: new Float64Array(n),
-    lossSlope: new Float64Array(n),
-    residual: new Float64Array(n),
+    unknowns: leading(a.unknowns, n),
+    drop: leading(a.drop, n),
+    theta: leading(a.theta, n),
+    potential: leading(a.potential, n),
+    ratio: leading(a.ratio, n),
+    column: leading(a.column, n),
+    loss: leading(a.loss, n),
+    lossSlope: leading(a.lossSlope, n),
+    residual: leading(a.residual, n),
     tip: { value: 0, slope: 0 },
     norm: 0,
     relative: 0,
@@ -150,22 +180,61 @@ function createState(n: number): State {
   };
 }
 
-/** Fills a state from its unknowns: d, θ, D, κ, column scales, losses, residual, norms and the base heat rate. */
+/**
+ * The working arrays of Newton solves on meshes of up to `capacity` nodes: the two iterates, the Newton correction,
+ * system, solution and scratch, the ambient flags, and room for a setup's conductances and a starting field. A nested
+ * solve (one-d/nonlinear-solve.ts) allocates them once for its finest grid, and its coarser starting grids work in
+ * their leading entries (`leading`). A solve on a workspace leaves its result (NewtonOutcome's arrays) in it: the
+ * next solve on the same workspace overwrites that.
+ */
+export interface NewtonWorkspace {
+  readonly capacity: number;
+  readonly iterates: readonly [StateArrays, StateArrays];
+  readonly correction: Float64Array;
+  readonly system: RowSumSystem;
+  readonly solution: Float64Array;
+  readonly work: Float64Array;
+  readonly ambient: Uint8Array;
+  /** K_i, G_i and h_x at the nodes of a setup (newtonSetup) and the drops a solve starts from. */
+  readonly conductances: Float64Array;
+  readonly convective: Float64Array;
+  readonly hNodes: Float64Array;
+  readonly start: Float64Array;
+}
+
+export function createNewtonWorkspace(capacity: number): NewtonWorkspace {
+  return {
+    capacity,
+    iterates: [createState(capacity), createState(capacity)],
+    correction: new Float64Array(capacity),
+    system: createTridiagonalSystem(capacity),
+    solution: new Float64Array(capacity),
+    work: new Float64Array(capacity),
+    ambient: new Uint8Array(capacity),
+    conductances: new Float64Array(capacity),
+    convective: new Float64Array(capacity),
+    hNodes: new Float64Array(capacity),
+    start: new Float64Array(capacity),
+  };
+}
+
+/** Fills a state from its unknowns: d, θ, D, κ, losses, residual, norms and the base heat rate (column scales: columnScales). */
 function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   const { K, G, law, kirchhoff, boundaries: b } = setup;
   const { unknowns: z, drop, theta, potential: D, loss, residual: R } = s;
   const n = drop.length;
   const last = n - 1;
   const reference = b.base.theta;
+  // d = D^-1(z) at every node (one pass over the table), then an ambient-variable node's from its u.
+  kirchhoff.dropsAt(z, drop);
+  const anyAmbient = setup.ambientVariables;
   for (let i = 0; i < n; i++) {
-    if (ambient[i] === 1) {
+    if (anyAmbient && ambient[i] === 1) {
       const t = thetaOfAmbient(law, z[i] as number);
       theta[i] = t;
       drop[i] = reference - t;
     } else {
-      const d = kirchhoff.dropAt(z[i] as number);
-      drop[i] = d;
-      theta[i] = reference - d;
+      theta[i] = reference - (drop[i] as number);
     }
   }
   // Fixed temperatures exactly (not through D^-1).
@@ -178,15 +247,10 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
     theta[last] = reference - (drop[last] as number);
   }
   kirchhoff.evaluate(drop, D, s.ratio);
-  const floorScale = COLUMN_FLOOR * Math.abs(reference);
-  for (let i = 0; i < n; i++) {
-    const kappa = s.ratio[i] as number;
-    s.column[i] = ambient[i] === 1 ? kappa * Math.max(ambientSlope(law, z[i] as number), floorScale) : kappa;
-  }
-  cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope, { flags: ambient, u: z, law });
+  cvLosses(law, G, setup.mesh.cvSurface, theta, loss, s.lossSlope, anyAmbient ? { flags: ambient, u: z, law } : undefined);
   tipLoss(b, theta[last] as number, s.tip, ambient[last] === 1 ? (z[last] as number) : null);
+  const radiates = law.radiative !== 0;
   let norm2 = 0;
-  let maxResidual = 0;
   let maxScale = 0;
   let valid = true;
   let previousFlux = 0;
@@ -221,36 +285,45 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
     }
     if (constrained) r = 0;
     R[i] = r;
-    if (!Number.isFinite(r) || !Number.isFinite(theta[i] as number)) valid = false;
+    // Non-finite, or (with radiation) below absolute zero: not a state.
+    if (!Number.isFinite(r) || !Number.isFinite(theta[i] as number) || (radiates && law.ambient_K + (theta[i] as number) < 0)) valid = false;
     norm2 += r * r;
-    maxResidual = Math.max(maxResidual, Math.abs(r));
     maxScale = Math.max(maxScale, rowScale);
     previousFlux = flux;
     previousScale = scale;
   }
-  if (law.radiative !== 0) {
-    for (let i = 0; i < n; i++) if (law.ambient_K + (theta[i] as number) < 0) valid = false;
-  }
   s.valid = valid;
   s.norm = Math.sqrt(norm2);
-  s.relative = maxScale > 0 ? maxResidual / maxScale : 0;
+  s.relative = 0;
   // A row whose loss is steep in θ cannot be evaluated more accurately than its slope times the
   // round-off of θ (θ = θ_b - d carries eps |θ_b|; radiation's T = T_amb + θ carries eps T): for n < 0
   // the slope ~ |θ|^n grows without bound as a node approaches the ambient, and that floor rose above
   // 1e-12 of the conduction scale (a converged solve stalled at 1.2e-12 for 50 steps and was called a
   // failure). Such a row is measured against that floor instead, so 1e-12 stays ~4500 round-offs.
+  // The rows whose floor is under the conduction scale share its denominator: the largest of their |R_i| is divided
+  // once (division is monotone, so that is the largest of their quotients, bit for bit). A row whose |R_i| is at most
+  // that largest so far cannot raise the result either way (its quotient is at most common / maxScale): skipped.
   if (maxScale > 0) {
     const thetaScale = Math.abs(reference);
-    let relative = 0;
+    let common = 0;
+    let floored = 0;
     for (let i = 0; i < n; i++) {
-      const radiationT = law.radiative !== 0 ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
-      // At an ambient-variable node the slope is d loss/du, and u carries its own relative precision: only
-      // radiation's ε T remains (its θ-slope, 4 ε σ S T^3, times T).
-      const radiationSlope = law.radiative !== 0 ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT * radiationT * radiationT : 0;
-      const rowFloor = ambient[i] === 1 ? radiationSlope * radiationT : Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
-      relative = Math.max(relative, Math.abs(R[i] as number) / Math.max(maxScale, rowFloor));
+      const r = Math.abs(R[i] as number);
+      if (r <= common) continue;
+      const radiationT = radiates ? Math.abs(law.ambient_K + (theta[i] as number)) : 0;
+      let rowFloor: number;
+      if (ambient[i] === 1) {
+        // At an ambient-variable node the slope is d loss/du, and u carries its own relative precision: only
+        // radiation's ε T remains (its θ-slope, 4 ε σ S T^3, times T).
+        const radiationSlope = radiates ? 4 * law.radiative * (setup.mesh.cvSurface[i] as number) * radiationT * radiationT * radiationT : 0;
+        rowFloor = radiationSlope * radiationT;
+      } else {
+        rowFloor = Math.abs(s.lossSlope[i] as number) * (thetaScale + radiationT);
+      }
+      if (rowFloor <= maxScale) common = Math.max(common, r);
+      else floored = Math.max(floored, r / Math.max(maxScale, rowFloor));
     }
-    s.relative = relative;
+    s.relative = Math.max(common / maxScale, floored);
   }
   if (b.base.kind === 'temperature') {
     const k0 = K[0] as number;
@@ -264,25 +337,42 @@ function evaluate(setup: NewtonSetup, ambient: Uint8Array, s: State): void {
   }
 }
 
-/** Newton matrix Ĵ and right-hand side -R of a state (header), written into `system`. */
-function assembleNewton(setup: NewtonSetup, s: State, system: ReturnType<typeof createTridiagonalSystem>): void {
+/**
+ * Column scales c_i of an evaluated state (header): κ_i at a potential node, κ_i dθ/du (floored) at an ambient one,
+ * written into the state's `column`; κ itself (the state's `ratio`) when no node can be in its ambient variable.
+ */
+function columnScales(setup: NewtonSetup, ambient: Uint8Array, s: State): Float64Array {
+  const { unknowns: z, ratio, column } = s;
+  if (!setup.ambientVariables) return ratio;
+  const floorScale = COLUMN_FLOOR * Math.abs(setup.boundaries.base.theta);
+  for (let i = 0; i < z.length; i++) {
+    const kappa = ratio[i] as number;
+    column[i] = ambient[i] === 1 ? kappa * Math.max(ambientSlope(setup.law, z[i] as number), floorScale) : kappa;
+  }
+  return column;
+}
+
+/** Newton matrix Ĵ and right-hand side -R of a state (header) with its column scales (columnScales), written into `system`. */
+function assembleNewton(setup: NewtonSetup, s: State, column: Float64Array, system: ReturnType<typeof createTridiagonalSystem>): void {
   const { K, boundaries: b } = setup;
   const { lower, diag, upper, rhs, rowSum } = system;
-  const { drop, ratio, column, lossSlope, residual } = s;
+  const { drop, ratio, lossSlope, residual } = s;
   const n = drop.length;
   const last = n - 1;
+  // Row i: its tangent, then the conductances K_{i-1} and K_i added in that order; the row sum is the tangent alone.
   for (let i = 0; i < n; i++) {
     const tangent = (lossSlope[i] as number) / (column[i] as number);
-    diag[i] = tangent;
+    let diagonal = tangent;
+    if (i > 0) diagonal += K[i - 1] as number;
+    if (i < last) {
+      const conductance = K[i] as number;
+      diagonal += conductance;
+      upper[i] = -conductance;
+      lower[i + 1] = -conductance;
+    }
+    diag[i] = diagonal;
     rowSum[i] = tangent;
     rhs[i] = -(residual[i] as number);
-  }
-  for (let i = 0; i < last; i++) {
-    const conductance = K[i] as number;
-    diag[i] = (diag[i] as number) + conductance;
-    diag[i + 1] = (diag[i + 1] as number) + conductance;
-    upper[i] = -conductance;
-    lower[i + 1] = -conductance;
   }
   lower[0] = 0;
   upper[last] = 0;
@@ -365,30 +455,46 @@ function chooseVariables(setup: NewtonSetup, ambient: Uint8Array, s: State): boo
   return changed;
 }
 
-/** The 1-D fin as a model of the damped Newton driver (newton/damped-newton.ts). */
-function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | undefined): NewtonModel<State> {
-  const system = createTridiagonalSystem(n);
-  const w = new Float64Array(n);
-  const work = new Float64Array(n);
+/** The 1-D fin as a model of the damped Newton driver (newton/damped-newton.ts), working in `workspace` (>= n nodes). */
+function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | undefined, workspace: NewtonWorkspace): NewtonModel<State> {
+  const { lower, diag, upper, rhs, rowSum } = workspace.system;
+  const system: RowSumSystem = {
+    lower: leading(lower, n),
+    diag: leading(diag, n),
+    upper: leading(upper, n),
+    rhs: leading(rhs, n),
+    rowSum: leading(rowSum, n),
+  };
+  const w = leading(workspace.solution, n);
+  const work = leading(workspace.work, n);
   // 1: the node is solved for its ambient variable (shared by every state; changed only in `correction`).
-  const ambient = new Uint8Array(n);
+  const ambient = leading(workspace.ambient, n);
+  // The driver asks for its two states (current and trial) once.
+  const iterates = [...workspace.iterates];
   return {
     linear: setup.linear,
     roundOffRegime: ROUND_OFF_REGIME,
-    createState: () => createState(n),
+    createState: () => {
+      const arrays = iterates.shift();
+      if (arrays === undefined) throw new Error('internal: the Newton driver asked for more than two states');
+      return stateOver(arrays, n);
+    },
+    correctionArray: () => leading(workspace.correction, n),
     start: (initial, into) => {
       ambient.fill(0);
-      for (let i = 0; i < n; i++) into[i] = setup.kirchhoff.potentialDropAt(initial[i] as number);
+      // D(d) of every node; `work` takes the κ that comes with it (not needed here).
+      setup.kirchhoff.evaluate(initial, into, work);
     },
     evaluate: (s) => evaluate(setup, ambient, s),
     correction: (s, delta) => {
       if (chooseVariables(setup, ambient, s)) evaluate(setup, ambient, s);
-      assembleNewton(setup, s, system);
+      const column = columnScales(setup, ambient, s);
+      assembleNewton(setup, s, column, system);
       const solution = solver ? solver(system) : conservativeThomasInto(system, w, work);
       // Ĵ w = -R with w = δU: δD = -w at a potential node, δu = w / c at an ambient one.
       for (let i = 0; i < n; i++) {
         const wi = solution[i] as number;
-        delta[i] = ambient[i] === 1 ? wi / (s.column[i] as number) : -wi;
+        delta[i] = ambient[i] === 1 ? wi / (column[i] as number) : -wi;
       }
     },
     step: (from, delta, lambda, into) => step(setup, ambient, from, delta, lambda, into),
@@ -398,11 +504,13 @@ function newtonModel(setup: NewtonSetup, n: number, solver: TridiagonalSolver | 
 }
 
 /**
- * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified). Never throws on
- * non-convergence: see `failure`.
+ * Runs damped Newton from the drops `initial` (d = θ_b - θ, K; not modified, not an iterate of `workspace`), in `workspace`
+ * when it has room (default: a new one). Never throws on non-convergence: see `failure`.
  */
-export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: NewtonOptions = {}): NewtonOutcome {
-  const run = dampedNewton(newtonModel(setup, initial.length, opts.solver), initial, {
+export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: NewtonOptions = {}, workspace?: NewtonWorkspace): NewtonOutcome {
+  const n = initial.length;
+  const room = workspace !== undefined && n <= workspace.capacity ? workspace : createNewtonWorkspace(n);
+  const run = dampedNewton(newtonModel(setup, n, opts.solver, room), initial, {
     maxIterations: opts.maxIterations ?? DEFAULT_MAX_ITERATIONS,
     residualTolerance: opts.residualTolerance ?? DEFAULT_RESIDUAL_TOLERANCE,
     heatRateTolerance: opts.heatRateTolerance ?? DEFAULT_HEAT_RATE_TOLERANCE,
@@ -412,6 +520,7 @@ export function newtonSolve(setup: NewtonSetup, initial: Float64Array, opts: New
     converged: run.converged,
     drop: state.drop,
     theta: state.theta,
+    evaluated: leading(room.ambient, n).includes(1) ? null : { potential: state.potential, loss: state.loss },
     iterations: run.iterations,
     halvings: run.halvings,
     residual: state.relative,

@@ -45,7 +45,7 @@ import type { Case } from '../../case/index.js';
 import { buildMesh1D, type Grading, type Mesh1D } from '../../mesh/index.js';
 import { autoGrading, studyGrids, type Fin1DResult } from './linear-solve.js';
 import { hBreakpoints } from '../problem/convection.js';
-import type { NewtonOptions } from './newton-system.js';
+import { createNewtonWorkspace, leading, type NewtonOptions, type NewtonWorkspace } from './newton-system.js';
 import { isLinearProblem, finProblem, type FinProblem } from '../problem/fin-problem.js';
 import { nonlinearEffectiveness, nonlinearHeatRates, nonlinearIdealHeatRate } from './newton-heat-rate.js';
 import { solveNonlinearOnMesh, type MeshSolve } from './newton-solve.js';
@@ -97,9 +97,8 @@ function meshOf(problem: FinProblem, cells: number, refine: number, grading: Gra
   });
 }
 
-/** A nodal field of a coarse mesh interpolated linearly onto the nodes of a fine mesh (same fin). */
-export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine: Mesh1D): Float64Array {
-  const out = new Float64Array(fine.nodes);
+/** A nodal field of a coarse mesh interpolated linearly onto the nodes of a fine mesh (same fin), into `out` when given. */
+export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine: Mesh1D, out: Float64Array = new Float64Array(fine.nodes)): Float64Array {
   let j = 0;
   const last = coarse.nodes - 1;
   for (let i = 0; i < fine.nodes; i++) {
@@ -113,16 +112,20 @@ export function interpolateOnto(coarse: Mesh1D, valuesCoarse: Float64Array, fine
   return out;
 }
 
-/** Drops d = θ_b - θ of an excess-temperature field, K. */
-function dropsOf(problem: FinProblem, theta: Float64Array): Float64Array {
+/** Drops d = θ_b - θ (K) on `fine` of the excess temperatures θ on `coarse`, interpolated linearly (interpolateOnto), into `out`. */
+function dropsOnto(problem: FinProblem, coarse: Mesh1D, thetaCoarse: Float64Array, fine: Mesh1D, out: Float64Array): Float64Array {
   const reference = problem.base.theta;
-  return theta.map((t) => reference - t);
+  const drops = interpolateOnto(coarse, thetaCoarse, fine, out);
+  for (let i = 0; i < drops.length; i++) drops[i] = reference - (drops[i] as number);
+  return drops;
 }
 
+/** The result of a solve; its θ is a copy (the solve's arrays may be a workspace's). */
 function finish(problem: FinProblem, solved: MeshSolve, coarseGridIterations: number): NonlinearFin1DResult {
-  const { setup, theta, drop } = solved;
+  const { setup, drop } = solved;
+  const theta = solved.theta.slice();
   const mesh = setup.mesh;
-  const rates = nonlinearHeatRates(setup, drop, theta);
+  const rates = nonlinearHeatRates(setup, drop, theta, solved.evaluated);
   const ideal = nonlinearIdealHeatRate(problem, setup);
   return {
     model: 'fd-1d',
@@ -157,19 +160,67 @@ export function solveNonlinearProblem1D(
   start?: Fin1DResult,
 ): NonlinearFin1DResult {
   const cells = Math.max(1, Math.round(opts.nodes) - 1);
-  const refine = opts.refine ?? 1;
-  const mesh = meshOf(problem, cells, refine, opts.grading);
+  const mesh = meshOf(problem, cells, opts.refine ?? 1, opts.grading);
+  // One workspace for this grid and its nested starting grids (the finest is the largest).
+  const from = start === undefined ? undefined : { mesh: start.mesh, theta: start.theta };
+  const nested = solveNested(problem, opts, cells * (opts.refine ?? 1), mesh, workspaceFor(mesh.nodes), from);
+  return finish(problem, nested.solved, nested.coarseGridIterations);
+}
+
+/**
+ * Workspaces of the last few finest-grid sizes, as the linear solver keeps its scratch (linear-solve.ts): a study
+ * solves three grids, a map or an uncertainty sample thousands of fins, and a workspace is 30 arrays (allocating
+ * and zeroing them anew took about a third of a 4001-node solve). Safe because a solve is synchronous and nothing
+ * it returns points into them (finish copies θ out). Kept: up to KEPT_SIZES sizes of up to KEPT_NODES nodes
+ * (at most ~8 MB); a larger grid gets a workspace of its own.
+ */
+const workspaces = new Map<number, NewtonWorkspace>();
+const KEPT_SIZES = 4;
+const KEPT_NODES = 8193;
+
+function workspaceFor(nodes: number): NewtonWorkspace {
+  if (nodes > KEPT_NODES) return createNewtonWorkspace(nodes);
+  let workspace = workspaces.get(nodes);
+  if (workspace === undefined) {
+    if (workspaces.size >= KEPT_SIZES) workspaces.clear();
+    workspace = createNewtonWorkspace(nodes);
+    workspaces.set(nodes, workspace);
+  }
+  return workspace;
+}
+
+interface NestedSolve {
+  readonly solved: MeshSolve;
+  /** Newton steps on the coarser starting grids. */
+  readonly coarseGridIterations: number;
+}
+
+/**
+ * Solves on `mesh` (`cells` cells asked for) from `start` (a solution on a coarser mesh of the same fin) or, with
+ * `nested`, from the solve on a grid NESTED_RATIO times coarser (itself nested), in `workspace`.
+ */
+function solveNested(
+  problem: FinProblem,
+  opts: NonlinearFin1DOptions,
+  cells: number,
+  mesh: Mesh1D,
+  given: NewtonWorkspace,
+  start?: { readonly mesh: Mesh1D; readonly theta: Float64Array },
+): NestedSolve {
+  const workspace = mesh.nodes <= given.capacity ? given : createNewtonWorkspace(mesh.nodes);
   let initial: Float64Array | undefined;
   let coarseGridIterations = 0;
   const linear = isLinearProblem(problem);
   if (start !== undefined && !linear) {
-    initial = dropsOf(problem, interpolateOnto(start.mesh, start.theta, mesh));
-  } else if ((opts.nested ?? true) && !linear && cells * refine > NESTED_MIN_CELLS) {
-    const coarse = solveNonlinearProblem1D(problem, { ...opts, nodes: Math.ceil((cells * refine) / NESTED_RATIO) + 1, refine: 1 });
-    initial = dropsOf(problem, interpolateOnto(coarse.mesh, coarse.theta, mesh));
-    coarseGridIterations = coarse.newton.totalIterations + coarse.newton.coarseGridIterations;
+    initial = dropsOnto(problem, start.mesh, start.theta, mesh, leading(workspace.start, mesh.nodes));
+  } else if ((opts.nested ?? true) && !linear && cells > NESTED_MIN_CELLS) {
+    const coarseCells = Math.ceil(cells / NESTED_RATIO);
+    const coarse = solveNested(problem, opts, coarseCells, meshOf(problem, coarseCells, 1, opts.grading), workspace);
+    // Read before this grid's solve overwrites the workspace.
+    initial = dropsOnto(problem, coarse.solved.setup.mesh, coarse.solved.theta, mesh, leading(workspace.start, mesh.nodes));
+    coarseGridIterations = coarse.solved.totalIterations + coarse.coarseGridIterations;
   }
-  return finish(problem, solveNonlinearOnMesh(problem, mesh, opts, initial), coarseGridIterations);
+  return { solved: solveNonlinearOnMesh(problem, mesh, opts, initial, workspace), coarseGridIterations };
 }
 
 /** The fd-1d solution of any case (linear or not) on one grid of `nodes` nodes. */

@@ -16,6 +16,10 @@
  * Inverse (dropAt, for Newton steps taken in D): on the piece of k that holds D, k_ref D - I_0 = k_0 x + s x^2/2
  * with x = d - e_0 from the same start point (e_0, I_0 = ∫_0^{e_0} k de, k_0) as the forward trapezoid, solved
  * as x = 2 q / (k_0 + sqrt(k_0^2 + 2 s q)), q = k_ref D - I_0 (no cancellation; k_0^2 + 2 s q = k(d)^2 > 0).
+ * Cost: the array forms (evaluate, dropsAt) keep the constants of the previous node's table piece and search again
+ * only when a node leaves it (neighbouring nodes of a fin sit on the same piece almost always), so a node costs
+ * two comparisons, a few flops (a square root for the inverse) and no call; they give the one-node forms' values
+ * bit for bit.
  */
 import type { Conductivity } from '../../case/index.js';
 
@@ -42,6 +46,8 @@ export interface KirchhoffTransform {
   readonly potentialDropAt: (drop: number) => number;
   /** Writes D(d_i) (K) and κ_i = k(T_i)/k_ref for the drops d_i (K) of every node. */
   readonly evaluate: (drop: Float64Array, potentialDrop: Float64Array, ratio: Float64Array) => void;
+  /** Writes the drops d_i = D^-1(D_i) (K) of the potential drops D_i (K) of every node (dropAt of each). */
+  readonly dropsAt: (potentialDrop: Float64Array, drop: Float64Array) => void;
   /** The linear pieces of k between θ = lo and θ = hi (lo < hi), in order. */
   readonly pieces: (lo: number, hi: number) => ConductivityPiece[];
 }
@@ -73,6 +79,7 @@ function constantTransform(k: number): KirchhoffTransform {
       potentialDrop.set(drop);
       ratio.fill(1);
     },
+    dropsAt: (potentialDrop, drop) => drop.set(potentialDrop),
     pieces: (lo, hi) => [{ from: lo, to: hi, k, slope: 0 }],
   };
 }
@@ -108,12 +115,57 @@ function segmentOf(f: PiecewiseLinear, s: number): number {
   return low;
 }
 
-function valueAt(f: PiecewiseLinear, s: number): number {
-  const j = segmentOf(f, s);
+/** f(s) on its segment j = segmentOf(f, s). */
+function valueOnSegment(f: PiecewiseLinear, j: number, s: number): number {
   const last = f.at.length - 1;
   if (j < 0) return f.values[0] as number;
   if (j === last) return f.values[last] as number;
   return (f.values[j] as number) + (f.slopes[j] as number) * (s - (f.at[j] as number));
+}
+
+function valueAt(f: PiecewiseLinear, s: number): number {
+  return valueOnSegment(f, segmentOf(f, s), s);
+}
+
+/**
+ * A table's Kirchhoff transform as plain data: k over the drop e = θ_b - θ (ascending e), ∫_0^{e_j} k de at its
+ * points, and the segment of e = 0. The per-node functions below take it as an argument (not closures over it), so
+ * a node loop reads its fields once: closures re-read them at every node (measured 3x slower in a Newton solve).
+ */
+interface DropTable {
+  readonly byDrop: PiecewiseLinear;
+  /** ∫_0^{e_j} k de at every table point, W/m (signed: negative below e = 0), as the coordinate of a PiecewiseLinear. */
+  readonly integralAt: PiecewiseLinear;
+  readonly kRef: number;
+  readonly zeroSegment: number;
+}
+
+/** (1/k_ref) ∫_0^d k de, d on segment j of byDrop, kd = k(d): from the last table point between 0 and d (or from 0), one exact trapezoid. */
+function potentialOnSegment(t: DropTable, j: number, d: number, kd: number): number {
+  const { kRef, zeroSegment } = t;
+  if (j === zeroSegment) return (0.5 * d * (kRef + kd)) / kRef;
+  // d above the segment of 0: start from point j (<= d); below it: from point j + 1 (>= d).
+  const from = j > zeroSegment ? j : j + 1;
+  const e = t.byDrop.at[from] as number;
+  return ((t.integralAt.at[from] as number) + 0.5 * (d - e) * ((t.byDrop.values[from] as number) + kd)) / kRef;
+}
+
+/** D^-1(D) for the target k_ref D on its segment j of integralAt (header: the root of a quadratic). */
+function dropOnSegment(t: DropTable, j: number, target: number): number {
+  const { byDrop, kRef, zeroSegment } = t;
+  // Start point and slope of the piece, as in potentialOnSegment.
+  let e0 = 0;
+  let I0 = 0;
+  let k0 = kRef;
+  if (j !== zeroSegment) {
+    const from = j > zeroSegment ? j : j + 1;
+    e0 = byDrop.at[from] as number;
+    I0 = t.integralAt.at[from] as number;
+    k0 = byDrop.values[from] as number;
+  }
+  const slope = j < 0 || j === byDrop.at.length - 1 ? 0 : (byDrop.slopes[j] as number);
+  const q = target - I0;
+  return e0 + (2 * q) / (k0 + Math.sqrt(Math.max(0, k0 * k0 + 2 * slope * q)));
 }
 
 function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: number, thetaBase: number): KirchhoffTransform {
@@ -145,48 +197,22 @@ function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: num
     const base = j === zeroSegment ? 0 : (pointIntegral[j + 1] as number);
     pointIntegral[j] = base - 0.5 * (next - e) * (kNext + (byDrop.values[j] as number));
   }
-  /** (1/k_ref) ∫_0^d k de: from the last table point between 0 and d (or from 0), one exact trapezoid. */
-  const potentialDrop = (d: number, kd: number): number => {
-    const j = segmentOf(byDrop, d);
-    if (j === zeroSegment) return (0.5 * d * (kRef + kd)) / kRef;
-    // d above the segment of 0: start from point j (<= d); below it: from point j + 1 (>= d).
-    const from = j > zeroSegment ? j : j + 1;
-    const e = byDrop.at[from] as number;
-    return ((pointIntegral[from] as number) + 0.5 * (d - e) * ((byDrop.values[from] as number) + kd)) / kRef;
-  };
   // The integral at every table point is increasing in e (k > 0): the piece of a potential drop is found on it.
-  const integralAt = piecewiseLinear(pointIntegral, new Float64Array(count));
-  const dropAt = (D: number): number => {
-    const target = D * kRef;
-    const j = segmentOf(integralAt, target);
-    // Start point and slope of the piece, as in potentialDrop.
-    let e0 = 0;
-    let I0 = 0;
-    let k0 = kRef;
-    if (j !== zeroSegment) {
-      const from = j > zeroSegment ? j : j + 1;
-      e0 = byDrop.at[from] as number;
-      I0 = pointIntegral[from] as number;
-      k0 = byDrop.values[from] as number;
-    }
-    const slope = j < 0 || j === count - 1 ? 0 : (byDrop.slopes[j] as number);
-    const q = target - I0;
-    return e0 + (2 * q) / (k0 + Math.sqrt(Math.max(0, k0 * k0 + 2 * slope * q)));
-  };
+  const table: DropTable = { byDrop, integralAt: piecewiseLinear(pointIntegral, new Float64Array(count)), kRef, zeroSegment };
   return {
     constant: false,
     kRef,
     conductivityAt: (theta) => valueAt(byTheta, theta),
-    dropAt,
-    potentialDropAt: (d) => potentialDrop(d, valueAt(byDrop, d)),
-    evaluate: (drop, potential, ratio) => {
-      for (let i = 0; i < drop.length; i++) {
-        const d = drop[i] as number;
-        const kd = valueAt(byDrop, d);
-        potential[i] = potentialDrop(d, kd);
-        ratio[i] = kd / kRef;
-      }
+    dropAt: (D) => {
+      const target = D * kRef;
+      return dropOnSegment(table, segmentOf(table.integralAt, target), target);
     },
+    potentialDropAt: (d) => {
+      const j = segmentOf(byDrop, d);
+      return potentialOnSegment(table, j, d, valueOnSegment(byDrop, j, d));
+    },
+    evaluate: (drop, potential, ratio) => evaluateTable(table, drop, potential, ratio),
+    dropsAt: (potential, drop) => dropsOfTable(table, potential, drop),
     pieces: (lo, hi) => {
       const cuts = [lo];
       for (let j = 0; j < count; j++) {
@@ -205,4 +231,90 @@ function tableTransform(T_degC: Float64Array, k: Float64Array, ambient_degC: num
       return pieces;
     },
   };
+}
+
+/** The interval [lo, hi) of θ-drops (or integrals) that segmentOf maps to segment j: as wide as the search's answer. */
+function segmentBounds(f: PiecewiseLinear, j: number): [number, number] {
+  const last = f.at.length - 1;
+  if (j < 0) return [-Infinity, f.at[0] as number];
+  if (j >= last) return [f.at[last] as number, Infinity];
+  return [f.at[j] as number, f.at[j + 1] as number];
+}
+
+/**
+ * D(d_i) and κ_i = k(d_i)/k_ref of every node (KirchhoffTransform.evaluate): valueOnSegment and potentialOnSegment
+ * with the constants of the current segment held in locals, looked up again only when a node leaves the segment
+ * (neighbouring nodes almost never do). The same operations in the same order: the one-node forms' bits (test).
+ */
+function evaluateTable(t: DropTable, drop: Float64Array, potential: Float64Array, ratio: Float64Array): void {
+  const { byDrop, kRef, zeroSegment } = t;
+  const last = byDrop.at.length - 1;
+  let lo = Infinity;
+  let hi = -Infinity;
+  // k(d) = kAt + kSlope (d - eAt) inside the table, kEnd beyond its ends.
+  let inside = false;
+  let eAt = 0;
+  let kAt = 0;
+  let kSlope = 0;
+  let kEnd = 0;
+  // The trapezoid from 0 (segment of 0), or from the point (eFrom, iFrom, kFrom).
+  let fromZero = true;
+  let eFrom = 0;
+  let iFrom = 0;
+  let kFrom = 0;
+  for (let i = 0; i < drop.length; i++) {
+    const d = drop[i] as number;
+    if (!(lo <= d && d < hi)) {
+      const j = segmentOf(byDrop, d);
+      [lo, hi] = segmentBounds(byDrop, j);
+      inside = j >= 0 && j < last;
+      kEnd = byDrop.values[j < 0 ? 0 : last] as number;
+      if (inside) {
+        eAt = byDrop.at[j] as number;
+        kAt = byDrop.values[j] as number;
+        kSlope = byDrop.slopes[j] as number;
+      }
+      fromZero = j === zeroSegment;
+      if (!fromZero) {
+        const from = j > zeroSegment ? j : j + 1;
+        eFrom = byDrop.at[from] as number;
+        iFrom = t.integralAt.at[from] as number;
+        kFrom = byDrop.values[from] as number;
+      }
+    }
+    const kd = inside ? kAt + kSlope * (d - eAt) : kEnd;
+    potential[i] = fromZero ? (0.5 * d * (kRef + kd)) / kRef : (iFrom + 0.5 * (d - eFrom) * (kFrom + kd)) / kRef;
+    ratio[i] = kd / kRef;
+  }
+}
+
+/** d_i = D^-1(D_i) of every node (KirchhoffTransform.dropsAt): dropOnSegment with its segment's constants in locals, as evaluateTable. */
+function dropsOfTable(t: DropTable, potential: Float64Array, drop: Float64Array): void {
+  const { byDrop, integralAt, kRef, zeroSegment } = t;
+  const last = byDrop.at.length - 1;
+  let lo = Infinity;
+  let hi = -Infinity;
+  let e0 = 0;
+  let I0 = 0;
+  let k0 = kRef;
+  let slope = 0;
+  for (let i = 0; i < potential.length; i++) {
+    const target = (potential[i] as number) * kRef;
+    if (!(lo <= target && target < hi)) {
+      const j = segmentOf(integralAt, target);
+      [lo, hi] = segmentBounds(integralAt, j);
+      e0 = 0;
+      I0 = 0;
+      k0 = kRef;
+      if (j !== zeroSegment) {
+        const from = j > zeroSegment ? j : j + 1;
+        e0 = byDrop.at[from] as number;
+        I0 = integralAt.at[from] as number;
+        k0 = byDrop.values[from] as number;
+      }
+      slope = j < 0 || j === last ? 0 : (byDrop.slopes[j] as number);
+    }
+    const q = target - I0;
+    drop[i] = e0 + (2 * q) / (k0 + Math.sqrt(Math.max(0, k0 * k0 + 2 * slope * q)));
+  }
 }
