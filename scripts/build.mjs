@@ -134,53 +134,43 @@ await build({
   logLevel: 'warning',
 });
 
+/**
+ * One CommonJS file in dist/ (`<name>.cjs`) from `entry`: import.meta.url is the file's own URL (a banner sets it
+ * from __filename), and import() becomes require (a classic script has no import(): the packages imported on demand,
+ * the rasteriser and the PDF writer, are CommonJS and are required when first asked for, as before).
+ */
+async function commonJsBundle(name, entry, extra) {
+  await build({
+    entryPoints: { [name]: entry },
+    outdir: 'dist',
+    outExtension: { '.js': '.cjs' },
+    bundle: true,
+    platform: 'node',
+    format: 'cjs',
+    target: 'node20',
+    minifyWhitespace: true,
+    minifySyntax: true,
+    charset: 'ascii',
+    define: { 'import.meta.url': '__fileUrl' },
+    banner: { js: "var __fileUrl = require('node:url').pathToFileURL(__filename).href;" },
+    supported: { 'dynamic-import': false },
+    logLevel: 'warning',
+    ...extra,
+  });
+}
+
 // The command (package.json bin): cli/main.ts as dist/fincheck.cjs, CommonJS (Node starts it without its ES-module
 // loader; its hashbang stays on the first line). It answers --version itself and loads dist/program.cjs for the rest;
 // its fallback to the program's modules (run from the sources) stays an unresolved require here, never reached.
-await build({
-  entryPoints: { fincheck: 'cli/main.ts' },
-  outdir: 'dist',
-  outExtension: { '.js': '.cjs' },
-  bundle: true,
-  platform: 'node',
-  format: 'cjs',
-  target: 'node20',
-  minifyWhitespace: true,
-  minifySyntax: true,
-  charset: 'ascii',
-  define: { 'import.meta.url': '__entryUrl' },
-  banner: { js: "var __entryUrl = require('node:url').pathToFileURL(__filename).href;" },
-  supported: { 'dynamic-import': false },
-  external: ['./program-exports.js'],
-  logLevel: 'warning',
-});
+await commonJsBundle('fincheck', 'cli/main.ts', { external: ['./program-exports.js'] });
 chmodSync('dist/fincheck.cjs', 0o755);
 
 // The command-line program (cli/program-exports.ts: every command, the solvers they call) as one classic script,
 // dist/program.cjs, which dist/fincheck.cjs loads with its V8 code cache (scripts/cached-script.mjs). Its imports of the
-// vendor packages read dist/vendor.cjs as the chunks do; import.meta.url is the bundle's own file URL, so the workers
-// (dist/map-worker.js, dist/sink-worker.js) and dist/vendor.cjs are found beside it. A command the program imports on
-// demand is bundled in, and its module's top level runs only when the command is asked for (esbuild's lazy init).
-await build({
-  entryPoints: { program: 'cli/program-exports.ts' },
-  outdir: 'dist',
-  outExtension: { '.js': '.cjs' },
-  bundle: true,
-  platform: 'node',
-  format: 'cjs',
-  target: 'node20',
-  minifyWhitespace: true,
-  minifySyntax: true,
-  charset: 'ascii',
-  plugins: [vendorBundle],
-  define: { 'import.meta.url': '__programUrl' },
-  // A classic script has no import(): the packages the program imports on demand (the rasteriser, the PDF writer: all
-  // CommonJS) are required instead, when first asked for as before.
-  supported: { 'dynamic-import': false },
-  banner: { js: "var __programUrl = require('node:url').pathToFileURL(__filename).href;" },
-  external: EXTERNAL,
-  logLevel: 'warning',
-});
+// vendor packages read dist/vendor.cjs as the chunks do; the workers (dist/map-worker.js, dist/sink-worker.js) and
+// dist/vendor.cjs are found beside it. A command the program imports on demand is bundled in, and its module's top
+// level runs only when the command is asked for (esbuild's lazy init).
+await commonJsBundle('program', 'cli/program-exports.ts', { plugins: [vendorBundle], external: EXTERNAL });
 
 // The program's code cache, made after one run of `check` on the demo fin (output discarded): V8's cache holds the
 // functions compiled by then, so a check starts without parsing or compiling the functions it calls (measured on the
