@@ -20,7 +20,17 @@ const noFlagNames = [
 ];
 
 export default tseslint.config(
-  { ignores: ['node_modules/**', 'dist/**', 'out/**', 'fincheck-demo-output/**', '.tsbuild/**', 'tests/guard-rails/fixtures/**'] },
+  {
+    ignores: [
+      'node_modules/**',
+      'dist/**',
+      'out/**',
+      'fincheck-demo-output/**',
+      '.tsbuild/**',
+      'tests/guard-rails/fixtures/**',
+      'src/fd/wasm/assembly/**',
+    ],
+  },
   {
     files: ['**/*.ts', '**/*.js', '**/*.mjs'],
     extends: [js.configs.recommended, tseslint.configs.recommended],

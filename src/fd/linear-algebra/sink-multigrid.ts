@@ -23,9 +23,10 @@ import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
 import { stencilEntries, stencilFromCsr, stencilLines, stencilToCsr, type SinkStencil } from './sink-stencil.js';
 import { stencilMultiply, stencilResidual } from './sink-stencil-product.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
-import { stencilRelaxation, type RelaxationPrecision } from './sink-stencil-relaxation.js';
+import { relaxationBytes, stencilRelaxation, type RelaxationPrecision } from './sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
 import { dot } from './vector-ops.js';
+import { KernelMemory, MemoryPlan } from '../wasm/kernel-memory.js';
 
 export interface Preconditioner {
   /** z = M^-1 r (r unchanged); returns r · z (CG's next inner product, summed as the cycle's last sweep forms z). */
@@ -46,6 +47,11 @@ export interface Preconditioner {
    * residual), for a caller's own scratch: CG keeps A p there, one new vector fewer to touch.
    */
   readonly workspace?: Float64Array;
+  /**
+   * Two vectors of the system's size in the preconditioner's kernel memory, for one CG run at a time to keep its
+   * residual r and z = M^-1 r in: apply reads and writes them in WebAssembly without a copy.
+   */
+  readonly scratch?: { readonly r: Float64Array; readonly z: Float64Array };
 }
 
 export interface StructuredOperator {
@@ -101,8 +107,8 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
   };
 }
 
-function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
-  const relax = stencilRelaxation(s, precision);
+function stencilLevel(s: SinkStencil, precision: RelaxationPrecision, memory: KernelMemory | null): Level {
+  const relax = stencilRelaxation(s, precision, memory);
   return {
     n: s.n,
     entries: () => stencilEntries(s),
@@ -124,15 +130,25 @@ function stencilLevel(s: SinkStencil, precision: RelaxationPrecision): Level {
  * vector of the finest size, since a level's residual is read only by its restriction, before the next level
  * forms its own (the cycle's order: presmooth, restrict, recurse).
  */
-function levelVectors(levels: Level[]): void {
-  const residual = new Float64Array(levels.length > 1 ? levels[0].n : 0);
+function levelVectors(levels: Level[], memory: KernelMemory | null): void {
+  const vector = (n: number) => (memory !== null ? memory.f64(n) : new Float64Array(n));
+  const residual = vector(levels.length > 1 ? levels[0].n : 0);
   levels.forEach((level, l) => {
     if (l + 1 < levels.length) level.r = residual.subarray(0, level.n);
     if (l > 0) {
-      level.b = new Float64Array(level.n);
-      level.x = new Float64Array(level.n);
+      level.b = vector(level.n);
+      level.x = vector(level.n);
     }
   });
+}
+
+/** The kernel memory's size for the stencil levels' smoothers, the level vectors and CG's two scratch vectors. */
+function memoryBytes(levelSizes: number[], stencils: SinkStencil[], precision: RelaxationPrecision): number {
+  const plan = new MemoryPlan();
+  for (const s of stencils) plan.add(relaxationBytes(s, precision), 1);
+  if (levelSizes.length > 1) plan.add(levelSizes[0], 8);
+  for (let l = 1; l < levelSizes.length; l++) plan.add(levelSizes[l], 8).add(levelSizes[l], 8);
+  return plan.add(levelSizes[0], 8).add(levelSizes[0], 8).bytes;
 }
 
 /** The CSR fold (fins as cells onto sheets) as a level's transfers. */
@@ -168,25 +184,28 @@ export function sinkMultigrid(
   assembled: SinkStencil | null = null,
   precision: RelaxationPrecision = 'float64',
 ): Preconditioner {
-  const levels: Level[] = [];
-  let stencil: SinkStencil | null = null;
+  // The hierarchy first (a CSR level where the finest is not a stencil, then the stencils with the transfers between
+  // them), the smoothers after, once the kernel memory that holds them is sized.
+  const csr: Level | null = fold !== null || a.n <= COARSEST || !linesAreStencilLines(lines, grid) ? csrLevel(a, lines) : null;
+  /** The stencil levels, finest first; `stencil` the one the next coarsening starts from. */
+  const stencils: SinkStencil[] = [];
+  const downs: TransferApply[] = [];
   let finest: SinkStencil | null = null;
-  if (fold !== null || a.n <= COARSEST || !linesAreStencilLines(lines, grid)) {
-    const level = csrLevel(a, lines);
-    levels.push(level);
+  let stencil: SinkStencil | null = null;
+  if (csr !== null) {
     if (fold !== null) {
-      level.down = foldTransfer(fold);
+      csr.down = foldTransfer(fold);
       stencil = stencilFromCsr(galerkinCsr(a, fold), grid);
-      levels.push(stencilLevel(stencil, precision));
+      stencils.push(stencil);
     } else if (a.n > COARSEST) {
       // Lines other than the grid's: the finest level in CSR, every coarser one a stencil.
       if (levelUnknowns(grid) !== a.n) throw new Error('sinkMultigrid: the level grid does not describe the system');
       stencil = stencilFromCsr(a, grid);
     }
   } else {
-    stencil = assembled ?? stencilFromCsr(a, grid);
-    finest = stencil;
-    levels.push(stencilLevel(stencil, precision));
+    finest = assembled ?? stencilFromCsr(a, grid);
+    stencil = finest;
+    stencils.push(finest);
   }
   if (stencil !== null && stencil.n !== levelUnknowns(grid)) throw new Error('sinkMultigrid: the level grid does not describe the system');
   let g = grid;
@@ -194,13 +213,22 @@ export function sinkMultigrid(
     const t = sinkTransfer(g, coarseningDirections(g));
     const coarse = stencilCoarseOperator(stencil, t, precision);
     if (coarse.n === stencil.n) break;
-    levels[levels.length - 1].down = transferApply(t);
+    downs.push(transferApply(t));
     stencil = coarse;
-    levels.push(stencilLevel(stencil, precision));
+    stencils.push(stencil);
     g = t.coarse;
   }
+  // A stencil level with lines to sweep (the one-level case is a direct solve): its smoothers in WebAssembly.
+  const levelSizes = [...(csr !== null ? [a.n] : []), ...stencils.map((s) => s.n)];
+  const memory = stencils.length > 0 && levelSizes.length > 1 ? new KernelMemory(memoryBytes(levelSizes, stencils, precision)) : null;
+  // The CSR finest level (fins as cells, or other lines) sweeps in TypeScript: the kernels read stencils only.
+  const levels: Level[] = [...(csr !== null ? [csr] : []), ...stencils.map((s) => stencilLevel(s, precision, memory))];
+  // The coarsenings' transfers belong to the levels they leave: after the fold's level when there is one.
+  const first = fold !== null ? 1 : 0;
+  downs.forEach((down, k) => (levels[first + k].down = down));
   const direct: CholeskyFactor = envelopeCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
-  levelVectors(levels);
+  levelVectors(levels, memory);
+  const scratch = memory !== null ? { r: memory.f64(levelSizes[0]), z: memory.f64(levelSizes[0]) } : undefined;
 
   /** One V-cycle from level l; returns b · x on the finest level (0 below it). */
   const cycle = (l: number, b: Float64Array, x: Float64Array): number => {
@@ -225,6 +253,7 @@ export function sinkMultigrid(
     },
     apply: (r, z) => cycle(0, r, z),
     workspace: levels.length > 1 ? levels[0].r : undefined,
+    scratch,
     operator(m) {
       if (m !== a || finest === null) return null;
       const s = finest;

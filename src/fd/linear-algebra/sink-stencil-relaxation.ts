@@ -15,6 +15,7 @@
  * CG's own products and residuals use A itself, so the solution's accuracy does not depend on it.
  */
 import type { SinkStencil } from './sink-stencil.js';
+import { MemoryPlan, type KernelMemory } from '../wasm/kernel-memory.js';
 
 export interface StencilRelaxation {
   /** One sweep over the lines, forward or backward, updating x in place; fromZero: as from x = 0 (x's values on entry are not read; forward only). */
@@ -42,8 +43,47 @@ export type RelaxationPrecision = 'float64' | 'float32';
 /** A sweep's coefficient array (its values are read as numbers, so the two kinds share the loops). */
 type Coefficients = Float64Array | Float32Array;
 
-export function stencilRelaxation(s: SinkStencil, precision: RelaxationPrecision = 'float64'): StencilRelaxation {
-  return new StencilLines(s, precision);
+/**
+ * `memory`, when given, holds the sweep's coefficients (planned with relaxationBytes): a sweep whose vectors are views
+ * into the same block runs as WebAssembly (src/fd/wasm/assembly/line-sweeps.ts, the same operations in the same order,
+ * so the same bits as the loops below, which serve every other call).
+ */
+export function stencilRelaxation(s: SinkStencil, precision: RelaxationPrecision = 'float64', memory: KernelMemory | null = null): StencilRelaxation {
+  return new StencilLines(s, precision, memory);
+}
+
+/** Words of a level's descriptor for the kernels (line-sweeps.ts). */
+const DESCRIPTOR_WORDS = 21;
+
+/** The bytes stencilRelaxation(s, precision, memory) takes from `memory`. */
+export function relaxationBytes(s: SinkStencil, precision: RelaxationPrecision): number {
+  const c = precision === 'float32' ? 4 : 8;
+  const lines = s.extraStart.length - 1;
+  const extras = s.extraTo.length;
+  const fins = s.grid.fins.length;
+  return new MemoryPlan()
+    .add(s.line.length, c)
+    .add(s.gx.length, c)
+    .add(s.gy.length, c)
+    .add(s.row.length, c)
+    .add(s.n, c)
+    .add(longestLine(s), 8)
+    .add(lines + 1, 4)
+    .add(extras, 4)
+    .add(extras, 4)
+    .add(extras, 8)
+    .add(extras, 1)
+    .add(fins, 4)
+    .add(fins, 4)
+    .add(fins, 4)
+    .add(fins, 4)
+    .add(DESCRIPTOR_WORDS, 4).bytes;
+}
+
+function longestLine(s: SinkStencil): number {
+  let longest = s.grid.nz;
+  for (const f of s.grid.fins) longest = Math.max(longest, f.layers);
+  return longest;
 }
 
 /**
@@ -62,29 +102,37 @@ class StencilLines implements StencilRelaxation {
   private readonly finLine: number[] = [];
   /** Per extra coupling (extraTo order): 1 when its `to` lies on a line after its `from`'s (or on the same line). */
   private readonly extraAhead: Uint8Array;
+  /** With a kernel memory: the block and the byte offset of this level's descriptor in it. */
+  private readonly wasm: { memory: KernelMemory; level: number } | null = null;
 
   constructor(
     private readonly s: SinkStencil,
     precision: RelaxationPrecision,
+    memory: KernelMemory | null,
   ) {
-    if (precision === 'float32') {
-      // A coarse level built in float32 (sink-stencil-coarse.ts) is used as it is.
-      const single = (v: Coefficients) => (v instanceof Float32Array ? v : new Float32Array(v));
-      this.line = single(s.line);
-      this.gx = single(s.gx);
-      this.gy = single(s.gy);
-      this.row = single(s.row);
-      this.inv = twistedFactor(s, this.line, new Float32Array(s.n));
-    } else {
-      this.line = s.line;
-      this.gx = s.gx;
-      this.gy = s.gy;
-      this.row = s.row;
-      this.inv = twistedFactor(s, s.line, new Float64Array(s.n));
-    }
-    let longest = s.grid.nz;
-    for (const f of s.grid.fins) longest = Math.max(longest, f.layers);
-    this.w = new Float64Array(longest);
+    const single = precision === 'float32';
+    // A copy into the kernel memory, or else: float32 storage rounds a float64 array (a coarse level built in float32
+    // by sink-stencil-coarse.ts is used as it is) and float64 storage is the stencil's own.
+    const store = (v: Coefficients): Coefficients => {
+      if (memory !== null) {
+        const c = single ? memory.f32(v.length) : memory.f64(v.length);
+        c.set(v);
+        return c;
+      }
+      if (!single) return v;
+      return v instanceof Float32Array ? v : new Float32Array(v);
+    };
+    this.line = store(s.line);
+    this.gx = store(s.gx);
+    this.gy = store(s.gy);
+    this.row = store(s.row);
+    this.inv = twistedFactor(
+      s,
+      this.line,
+      memory !== null ? (single ? memory.f32(s.n) : memory.f64(s.n)) : single ? new Float32Array(s.n) : new Float64Array(s.n),
+    );
+    const longest = longestLine(s);
+    this.w = memory !== null ? memory.f64(longest) : new Float64Array(longest);
     let offset = s.plate;
     let l0 = s.grid.nx * s.grid.ny;
     for (const f of s.grid.fins) {
@@ -94,7 +142,7 @@ class StencilLines implements StencilRelaxation {
       l0 += f.rows;
     }
     // Lines are contiguous in index order: `to` is not on an earlier line when it is at or after its line's start.
-    this.extraAhead = new Uint8Array(s.extraTo.length);
+    this.extraAhead = memory !== null ? memory.u8(s.extraTo.length) : new Uint8Array(s.extraTo.length);
     const lines = s.extraStart.length - 1;
     const columns = s.grid.nx * s.grid.ny;
     let fin = -1;
@@ -108,9 +156,63 @@ class StencilLines implements StencilRelaxation {
       }
       for (let e = s.extraStart[l]; e < s.extraStart[l + 1]; e++) this.extraAhead[e] = s.extraTo[e] >= start ? 1 : 0;
     }
+    if (memory !== null) this.wasm = { memory, level: this.descriptor(memory, single) };
+  }
+
+  /** The level's descriptor for the kernels (line-sweeps.ts: its layout), with the extras and fin tables copied in. */
+  private descriptor(memory: KernelMemory, single: boolean): number {
+    const s = this.s;
+    const fins = s.grid.fins;
+    const copy = (v: Int32Array): Int32Array => {
+      const c = memory.i32(v.length);
+      c.set(v);
+      return c;
+    };
+    const extraG = memory.f64(s.extraG.length);
+    extraG.set(s.extraG);
+    const at = (v: ArrayBufferView): number => v.byteOffset;
+    const d = memory.i32(DESCRIPTOR_WORDS);
+    d.set([
+      s.grid.nx,
+      s.grid.ny,
+      s.grid.nz,
+      s.plate,
+      fins.length,
+      at(this.line),
+      at(this.gx),
+      at(this.gy),
+      at(this.row),
+      at(this.inv),
+      at(this.w),
+      at(copy(s.extraStart)),
+      at(copy(s.extraFrom)),
+      at(copy(s.extraTo)),
+      at(extraG),
+      at(this.extraAhead),
+      at(copy(Int32Array.from(this.finStart))),
+      at(copy(Int32Array.from(this.finLine))),
+      at(copy(Int32Array.from(fins, (f) => f.rows))),
+      at(copy(Int32Array.from(fins, (f) => f.layers))),
+      single ? 1 : 0,
+    ]);
+    return d.byteOffset;
+  }
+
+  /** The kernels and the level's descriptor when every vector given is a view into the kernel memory. */
+  private kernelsFor(...v: Float64Array[]): { k: KernelMemory['kernels']; level: number } | null {
+    const wasm = this.wasm;
+    if (wasm === null) return null;
+    for (const a of v) if (!wasm.memory.holds(a)) return null;
+    return { k: wasm.memory.kernels, level: wasm.level };
   }
 
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward', fromZero = false): void {
+    const wasm = this.kernelsFor(b, x);
+    if (wasm !== null) {
+      if (direction === 'forward') wasm.k.sweepForward(wasm.level, b.byteOffset, x.byteOffset, fromZero ? 1 : 0);
+      else wasm.k.sweepBackward(wasm.level, b.byteOffset, x.byteOffset, 0);
+      return;
+    }
     const nx = this.s.grid.nx;
     if (direction === 'forward') {
       for (let i = 0; i < nx; i++) this.plane(i, b, x, !fromZero, true);
@@ -122,6 +224,8 @@ class StencilLines implements StencilRelaxation {
   }
 
   backwardDot(b: Float64Array, x: Float64Array): number {
+    const wasm = this.kernelsFor(b, x);
+    if (wasm !== null) return wasm.k.sweepBackward(wasm.level, b.byteOffset, x.byteOffset, 1);
     let dot = 0;
     for (let f = this.s.grid.fins.length - 1; f >= 0; f--) dot += this.fin(f, b, x, true, false, true);
     for (let i = this.s.grid.nx - 1; i >= 0; i--) dot += this.plane(i, b, x, true, false, true);
@@ -129,6 +233,11 @@ class StencilLines implements StencilRelaxation {
   }
 
   forwardResidual(b: Float64Array, x: Float64Array, r: Float64Array): void {
+    const wasm = this.kernelsFor(b, x, r);
+    if (wasm !== null) {
+      wasm.k.forwardResidual(wasm.level, b.byteOffset, x.byteOffset, r.byteOffset);
+      return;
+    }
     const s = this.s;
     const { nx, ny, nz } = s.grid;
     // No x.fill(0): a sweep from zero reads only members of lines it has already solved (the extra couplings to

@@ -34,8 +34,10 @@ export function sparsePcg(
   const bNorm = norm1(b);
   const scale = bNorm || 1;
   const x = start ?? new Float64Array(n);
-  const r = new Float64Array(n);
-  const z = new Float64Array(n);
+  // r and z in the preconditioner's kernel memory when it offers them (its sweeps then read and write them directly).
+  const own = m.scratch !== undefined && m.scratch.r.length === n ? m.scratch : null;
+  const r = own?.r ?? new Float64Array(n);
+  const z = own?.z ?? new Float64Array(n);
   const p = new Float64Array(n);
   // A p lives in the preconditioner's free vector when it offers one (used only between applications).
   const q = m.workspace?.length === n ? m.workspace : new Float64Array(n);

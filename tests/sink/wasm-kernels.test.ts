@@ -1,0 +1,125 @@
+/**
+ * The WebAssembly line sweeps (src/fd/wasm/assembly/line-sweeps.ts, run when the smoother's coefficients and the
+ * vectors live in a KernelMemory) against the TypeScript sweeps of sink-stencil-relaxation.ts, which they transcribe
+ * operation for operation: the same bits for every kind of sweep, both coefficient precisions, pins and plate fins
+ * (fin roots as extra couplings). Invented sinks (tests/sink/support/sink-case.ts). And the committed binary is what
+ * scripts/build-kernels.mjs makes from the sources.
+ */
+import { readFileSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { buildSinkGrid } from '../../src/mesh/index.js';
+import { relaxationBytes, stencilRelaxation, type RelaxationPrecision } from '../../src/fd/linear-algebra/sink-stencil-relaxation.js';
+import { sinkMultigrid } from '../../src/fd/linear-algebra/sink-multigrid.js';
+import { sparsePcg } from '../../src/fd/linear-algebra/sparse-pcg.js';
+import { assembleSink } from '../../src/fd/three-d/sink-system.js';
+import { RESIDUAL_TARGET } from '../../src/fd/three-d/sink-solve.js';
+import { sinkProblem } from '../../src/fd/three-d/sink-problem.js';
+import { KernelMemory, MemoryPlan, type KernelExports } from '../../src/fd/wasm/kernel-memory.js';
+import { compileKernels, kernelsModuleText } from '../../scripts/build-kernels.mjs';
+import { smallSink } from './support/sink-case.js';
+
+/** Indices where u and v differ as bits (Object.is: -0 and +0 differ, NaN equals NaN). */
+function differing(u: Float64Array, v: Float64Array): number {
+  let count = 0;
+  for (let k = 0; k < u.length; k++) if (!Object.is(u[k], v[k])) count++;
+  return count + Math.abs(u.length - v.length);
+}
+
+/** A KernelMemory that counts its kernel calls, to show the WebAssembly path ran. */
+function countingMemory(bytes: number): { memory: KernelMemory; calls: () => number } {
+  const memory = new KernelMemory(bytes);
+  const inner = memory.kernels;
+  let calls = 0;
+  const counted: KernelExports = {
+    sweepForward: (...a) => (calls++, inner.sweepForward(...a)),
+    sweepBackward: (...a) => (calls++, inner.sweepBackward(...a)),
+    forwardResidual: (...a) => (calls++, inner.forwardResidual(...a)),
+  };
+  Object.defineProperty(memory, 'kernels', { value: counted });
+  return { memory, calls: () => calls };
+}
+
+describe.each(['pins', 'plates'] as const)('%s: WebAssembly sweeps', (kind) => {
+  const problem = sinkProblem(smallSink(kind));
+  const grid = buildSinkGrid(problem.layout, { cellSize: 0.002, plateLayers: 2, finLayers: 4, refine: 2 });
+  const system = assembleSink(problem, grid, 'sheet');
+  const s = system.stencil!;
+  const n = s.n;
+
+  it.each(['float64', 'float32'] as const)('give the TypeScript sweeps bit for bit (%s coefficients)', (precision: RelaxationPrecision) => {
+    expect(s.extraTo.length).toBeGreaterThan(0);
+    const { memory, calls } = countingMemory(new MemoryPlan().add(relaxationBytes(s, precision), 1).add(n, 8).add(n, 8).add(n, 8).bytes);
+    const fast = stencilRelaxation(s, precision, memory);
+    const plain = stencilRelaxation(s, precision);
+    const b = memory.f64(n);
+    const x = memory.f64(n);
+    const r = memory.f64(n);
+    for (let p = 0; p < n; p++) b[p] = system.rhs[p]! + 1e-3 * Math.sin(0.7 * p);
+    const start = Float64Array.from({ length: n }, (_, p) => Math.cos(0.3 * p));
+    const bPlain = Float64Array.from(b);
+    const xPlain = new Float64Array(n);
+    const rPlain = new Float64Array(n);
+
+    x.set(start);
+    xPlain.set(start);
+    fast.sweep(b, x, 'forward');
+    plain.sweep(bPlain, xPlain, 'forward');
+    expect(differing(x, xPlain)).toBe(0);
+
+    fast.sweep(b, x, 'backward');
+    plain.sweep(bPlain, xPlain, 'backward');
+    expect(differing(x, xPlain)).toBe(0);
+
+    expect(Object.is(fast.backwardDot(b, x), plain.backwardDot(bPlain, xPlain))).toBe(true);
+    expect(differing(x, xPlain)).toBe(0);
+
+    x.fill(Number.NaN); // a sweep from zero reads no entry of x before writing it
+    fast.sweep(b, x, 'forward', true);
+    plain.sweep(bPlain, xPlain, 'forward', true);
+    expect(differing(x, xPlain)).toBe(0);
+
+    fast.forwardResidual(b, x, r);
+    plain.forwardResidual(bPlain, xPlain, rPlain);
+    expect(differing(x, xPlain)).toBe(0);
+    expect(differing(r, rPlain)).toBe(0);
+    expect(calls()).toBe(5);
+  });
+
+  it('CG with the WebAssembly smoother reaches the TypeScript one solution bit for bit', () => {
+    const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32');
+    expect(pre.scratch?.r.length).toBe(n);
+    const viaKernels = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, 400);
+    // The same preconditioner applied to vectors outside its memory sweeps its finest level in TypeScript.
+    const plainApply = { ...pre, scratch: undefined };
+    const viaPlain = sparsePcg(system.matrix, system.rhs, plainApply, RESIDUAL_TARGET, 400);
+    expect(viaKernels.report).toEqual(viaPlain.report);
+    expect(differing(viaKernels.x, viaPlain.x)).toBe(0);
+  });
+});
+
+describe('KernelMemory', () => {
+  it('refuses an allocation beyond its planned size', () => {
+    const memory = new KernelMemory(65536);
+    memory.f64(8000);
+    expect(() => memory.f64(500)).toThrow(/bytes asked/);
+  });
+
+  it('hands out aligned views that do not overlap', () => {
+    const memory = new KernelMemory(4096);
+    const a = memory.u8(3);
+    const b = memory.f64(2);
+    const c = memory.f32(5);
+    expect(b.byteOffset % 16).toBe(0);
+    expect(c.byteOffset).toBeGreaterThanOrEqual(b.byteOffset + 16);
+    expect(b.byteOffset).toBeGreaterThanOrEqual(a.byteOffset + 3);
+    expect(memory.holds(c)).toBe(true);
+    expect(memory.holds(new Float64Array(2))).toBe(false);
+  });
+});
+
+describe('the committed kernel binary', () => {
+  it('is what scripts/build-kernels.mjs compiles from the AssemblyScript sources', async () => {
+    const committed = readFileSync(new URL('../../src/fd/wasm/kernels-binary.ts', import.meta.url), 'utf8');
+    expect(committed).toBe(kernelsModuleText(await compileKernels()));
+  }, 60_000);
+});
