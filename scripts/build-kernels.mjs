@@ -6,7 +6,11 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import asc from 'assemblyscript/asc';
 
-export const KERNEL_SOURCES = ['src/fd/wasm/assembly/line-sweeps.ts'];
+export const KERNEL_SOURCES = [
+  'src/fd/wasm/assembly/line-sweeps.ts',
+  'src/fd/wasm/assembly/axis-transfers.ts',
+  'src/fd/wasm/assembly/stencil-products.ts',
+];
 const TARGET = 'src/fd/wasm/kernels-binary.ts';
 
 /** The compiled module's bytes: -O3, no runtime (the kernels allocate nothing), no bounds assertions, memory imported. */

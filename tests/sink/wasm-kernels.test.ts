@@ -1,8 +1,9 @@
 /**
- * The WebAssembly line sweeps (src/fd/wasm/assembly/line-sweeps.ts, run when the smoother's coefficients and the
- * vectors live in a KernelMemory) against the TypeScript sweeps of sink-stencil-relaxation.ts, which they transcribe
- * operation for operation: the same bits for every kind of sweep, both coefficient precisions, pins and plate fins
- * (fin roots as extra couplings). Invented sinks (tests/sink/support/sink-case.ts). And the committed binary is what
+ * The WebAssembly kernels (src/fd/wasm/assembly/, run when their tables and vectors live in a KernelMemory) against
+ * the TypeScript loops they transcribe operation for operation: the line sweeps of sink-stencil-relaxation.ts (every
+ * kind of sweep, both coefficient precisions), the transfers of sink-transfer.ts, the stencil products of
+ * sink-stencil-product.ts and CG's vector updates (sparse-pcg.ts): the same bits on pins and plate fins (fin roots
+ * as extra couplings). Invented sinks (tests/sink/support/sink-case.ts). And the committed binary is what
  * scripts/build-kernels.mjs makes from the sources.
  */
 import { readFileSync } from 'node:fs';
@@ -10,6 +11,9 @@ import { describe, expect, it } from 'vitest';
 import { buildSinkGrid } from '../../src/mesh/index.js';
 import { relaxationBytes, stencilRelaxation, type RelaxationPrecision } from '../../src/fd/linear-algebra/sink-stencil-relaxation.js';
 import { sinkMultigrid } from '../../src/fd/linear-algebra/sink-multigrid.js';
+import { coarseningDirections, levelUnknowns } from '../../src/fd/linear-algebra/aggregation.js';
+import { sinkTransfer, transferApply, transferBytes } from '../../src/fd/linear-algebra/sink-transfer.js';
+import { stencilInMemory, stencilMemoryBytes, stencilMultiply, stencilResidual } from '../../src/fd/linear-algebra/sink-stencil-product.js';
 import { sparsePcg } from '../../src/fd/linear-algebra/sparse-pcg.js';
 import { assembleSink } from '../../src/fd/three-d/sink-system.js';
 import { RESIDUAL_TARGET } from '../../src/fd/three-d/sink-solve.js';
@@ -31,6 +35,11 @@ function countingMemory(bytes: number): { memory: KernelMemory; calls: () => num
   const inner = memory.kernels;
   let calls = 0;
   const counted: KernelExports = {
+    ...inner,
+    stencilMultiply: (...a) => (calls++, inner.stencilMultiply(...a)),
+    stencilResidual: (...a) => (calls++, inner.stencilResidual(...a)),
+    restrictAxis: (...a) => (calls++, inner.restrictAxis(...a)),
+    prolongAxis: (...a) => (calls++, inner.prolongAxis(...a)),
     sweepForward: (...a) => (calls++, inner.sweepForward(...a)),
     sweepBackward: (...a) => (calls++, inner.sweepBackward(...a)),
     forwardResidual: (...a) => (calls++, inner.forwardResidual(...a)),
@@ -85,12 +94,71 @@ describe.each(['pins', 'plates'] as const)('%s: WebAssembly sweeps', (kind) => {
     expect(calls()).toBe(5);
   });
 
+  it('form the products and residuals of the stencil as the TypeScript loops do, bit for bit', () => {
+    const { memory, calls } = countingMemory(new MemoryPlan().add(stencilMemoryBytes(s), 1).add(n, 8).add(n, 8).add(n, 8).bytes);
+    const products = stencilInMemory(s, memory);
+    const x = memory.f64(n);
+    const b = memory.f64(n);
+    const out = memory.f64(n);
+    for (let p = 0; p < n; p++) {
+      x[p] = Math.sin(0.21 * p) + 1;
+      b[p] = system.rhs[p]!;
+    }
+    const plain = new Float64Array(n);
+    const xAx = products.multiply(x, out);
+    expect(Object.is(xAx, stencilMultiply(s, Float64Array.from(x), plain))).toBe(true);
+    expect(differing(out, plain)).toBe(0);
+    const norm = products.residual(x, b, out);
+    stencilResidual(s, Float64Array.from(x), Float64Array.from(b), plain);
+    expect(differing(out, plain)).toBe(0);
+    expect(norm).toBe(plain.reduce((sum, v) => sum + Math.abs(v), 0));
+    expect(calls()).toBe(2);
+  });
+
+  it('transfer between levels as the TypeScript passes do, bit for bit', () => {
+    // Two steps down, so that the second starts from a grid already coarsened (several directions at once).
+    let g = system.levelGrid;
+    for (let step = 0; step < 2; step++) {
+      const t = sinkTransfer(g, coarseningDirections(g));
+      const nf = levelUnknowns(t.fine);
+      const nc = levelUnknowns(t.coarse);
+      const { memory, calls } = countingMemory(new MemoryPlan().add(transferBytes(t), 1).add(nf, 8).add(nc, 8).add(nf, 8).bytes);
+      const fast = transferApply(t, memory);
+      const plain = transferApply(t);
+      const r = memory.f64(nf);
+      const rc = memory.f64(nc);
+      const x = memory.f64(nf);
+      for (let p = 0; p < nf; p++) r[p] = Math.sin(0.37 * p) + 2;
+      const rcPlain = new Float64Array(nc);
+      fast.restrict(r, rc);
+      plain.restrict(Float64Array.from(r), rcPlain);
+      expect(differing(rc, rcPlain)).toBe(0);
+      for (let p = 0; p < nf; p++) x[p] = Math.cos(0.11 * p);
+      const xPlain = Float64Array.from(x);
+      fast.prolongAdd(rc, x);
+      plain.prolongAdd(rcPlain, xPlain);
+      expect(differing(x, xPlain)).toBe(0);
+      expect(calls()).toBeGreaterThan(1);
+      g = t.coarse;
+    }
+  });
+
   it('CG with the WebAssembly smoother reaches the TypeScript one solution bit for bit', () => {
     const pre = sinkMultigrid(system.matrix, system.lines, system.levelGrid, system.fold, system.stencil, 'float32');
     expect(pre.scratch?.r.length).toBe(n);
-    const viaKernels = sparsePcg(system.matrix, system.rhs, pre, RESIDUAL_TARGET, 400);
+    // The updates through the scratch's kernels are counted: CG took the WebAssembly path.
+    let updates = 0;
+    const scratch = pre.scratch!;
+    const counted = {
+      ...scratch,
+      holds: scratch.holds,
+      step: (alpha: number, q: Float64Array) => (updates++, scratch.step(alpha, q)),
+      direction: (beta: number) => (updates++, scratch.direction(beta)),
+    };
+    const viaKernels = sparsePcg(system.matrix, system.rhs, { ...pre, scratch: counted, operator: pre.operator }, RESIDUAL_TARGET, 400);
+    expect(updates).toBeGreaterThan(2 * viaKernels.report.iterations - 2);
     // The same preconditioner applied to vectors outside its memory sweeps its finest level in TypeScript.
-    const plainApply = { ...pre, scratch: undefined };
+    const plainApply = { ...pre, scratch: undefined, operator: pre.operator };
     const viaPlain = sparsePcg(system.matrix, system.rhs, plainApply, RESIDUAL_TARGET, 400);
     expect(viaKernels.report).toEqual(viaPlain.report);
     expect(differing(viaKernels.x, viaPlain.x)).toBe(0);

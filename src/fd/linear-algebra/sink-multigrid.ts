@@ -21,10 +21,10 @@ import { galerkinCsr } from './galerkin-csr.js';
 import type { Prolongation } from './prolongation.js';
 import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
 import { stencilEntries, stencilFromCsr, stencilLines, stencilToCsr, type SinkStencil } from './sink-stencil.js';
-import { stencilMultiply, stencilResidual } from './sink-stencil-product.js';
+import { stencilInMemory, stencilMemoryBytes, stencilMultiply, stencilResidual, type KernelProducts } from './sink-stencil-product.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
 import { relaxationBytes, stencilRelaxation, type RelaxationPrecision } from './sink-stencil-relaxation.js';
-import { sinkTransfer, transferApply, type TransferApply } from './sink-transfer.js';
+import { sinkTransfer, transferApply, transferBytes, type SinkTransfer, type TransferApply } from './sink-transfer.js';
 import { dot } from './vector-ops.js';
 import { KernelMemory, MemoryPlan } from '../wasm/kernel-memory.js';
 
@@ -47,11 +47,29 @@ export interface Preconditioner {
    * residual), for a caller's own scratch: CG keeps A p there, one new vector fewer to touch.
    */
   readonly workspace?: Float64Array;
-  /**
-   * Two vectors of the system's size in the preconditioner's kernel memory, for one CG run at a time to keep its
-   * residual r and z = M^-1 r in: apply reads and writes them in WebAssembly without a copy.
-   */
-  readonly scratch?: { readonly r: Float64Array; readonly z: Float64Array };
+  /** CG's vectors in the preconditioner's kernel memory, for one CG run at a time (see CgScratch). */
+  readonly scratch?: CgScratch;
+}
+
+/**
+ * Five vectors of the system's size in a preconditioner's kernel memory, for CG's residual r, z = M^-1 r, direction
+ * p, iterate x and right-hand side b, with CG's two vector updates as WebAssembly (stencil-products.ts cgStep and cgDirection, the same
+ * operations as sparse-pcg.ts step and direction): apply, the structured products and the updates then read and
+ * write them without a copy. Valid for one CG run at a time.
+ */
+export interface CgScratch {
+  readonly r: Float64Array;
+  readonly z: Float64Array;
+  readonly p: Float64Array;
+  readonly x: Float64Array;
+  /** For a copy of the right-hand side (the residuals then run as WebAssembly too). */
+  readonly b: Float64Array;
+  /** Whether v is a view into the same memory. */
+  holds(v: Float64Array): boolean;
+  /** x += alpha p, r −= alpha q (q in the same memory, e.g. the workspace); returns |r|_1. */
+  step(alpha: number, q: Float64Array): number;
+  /** p = z + beta p. */
+  direction(beta: number): void;
 }
 
 export interface StructuredOperator {
@@ -142,13 +160,49 @@ function levelVectors(levels: Level[], memory: KernelMemory | null): void {
   });
 }
 
-/** The kernel memory's size for the stencil levels' smoothers, the level vectors and CG's two scratch vectors. */
-function memoryBytes(levelSizes: number[], stencils: SinkStencil[], precision: RelaxationPrecision): number {
+/**
+ * The kernel memory's size for the stencil levels' smoothers and transfers, the level vectors, CG's five scratch
+ * vectors and (operator: a float64 finest stencil) the copy the product kernels read.
+ */
+function memoryBytes(
+  levelSizes: number[],
+  stencils: SinkStencil[],
+  steps: SinkTransfer[],
+  precision: RelaxationPrecision,
+  operator: SinkStencil | null,
+): number {
   const plan = new MemoryPlan();
+  if (operator !== null) plan.add(stencilMemoryBytes(operator), 1);
   for (const s of stencils) plan.add(relaxationBytes(s, precision), 1);
+  for (const t of steps) plan.add(transferBytes(t), 1);
   if (levelSizes.length > 1) plan.add(levelSizes[0], 8);
   for (let l = 1; l < levelSizes.length; l++) plan.add(levelSizes[l], 8).add(levelSizes[l], 8);
-  return plan.add(levelSizes[0], 8).add(levelSizes[0], 8).bytes;
+  for (let k = 0; k < 5; k++) plan.add(levelSizes[0], 8);
+  return plan.bytes;
+}
+
+/** Whether a stencil's couplings are float64 (the product kernels read no other). */
+function float64Stencil(s: SinkStencil): boolean {
+  return s.line instanceof Float64Array && s.gx instanceof Float64Array && s.gy instanceof Float64Array && s.row instanceof Float64Array;
+}
+
+function cgScratch(memory: KernelMemory, n: number): CgScratch {
+  const r = memory.f64(n);
+  const z = memory.f64(n);
+  const p = memory.f64(n);
+  const x = memory.f64(n);
+  const b = memory.f64(n);
+  const k = memory.kernels;
+  return {
+    r,
+    z,
+    p,
+    x,
+    b,
+    holds: (v) => memory.holds(v),
+    step: (alpha, q) => k.cgStep(n, alpha, p.byteOffset, q.byteOffset, x.byteOffset, r.byteOffset),
+    direction: (beta) => k.cgDirection(n, beta, z.byteOffset, p.byteOffset),
+  };
 }
 
 /** The CSR fold (fins as cells onto sheets) as a level's transfers. */
@@ -189,7 +243,7 @@ export function sinkMultigrid(
   const csr: Level | null = fold !== null || a.n <= COARSEST || !linesAreStencilLines(lines, grid) ? csrLevel(a, lines) : null;
   /** The stencil levels, finest first; `stencil` the one the next coarsening starts from. */
   const stencils: SinkStencil[] = [];
-  const downs: TransferApply[] = [];
+  const steps: SinkTransfer[] = [];
   let finest: SinkStencil | null = null;
   let stencil: SinkStencil | null = null;
   if (csr !== null) {
@@ -213,22 +267,25 @@ export function sinkMultigrid(
     const t = sinkTransfer(g, coarseningDirections(g));
     const coarse = stencilCoarseOperator(stencil, t, precision);
     if (coarse.n === stencil.n) break;
-    downs.push(transferApply(t));
+    steps.push(t);
     stencil = coarse;
     stencils.push(stencil);
     g = t.coarse;
   }
   // A stencil level with lines to sweep (the one-level case is a direct solve): its smoothers in WebAssembly.
   const levelSizes = [...(csr !== null ? [a.n] : []), ...stencils.map((s) => s.n)];
-  const memory = stencils.length > 0 && levelSizes.length > 1 ? new KernelMemory(memoryBytes(levelSizes, stencils, precision)) : null;
+  const operatorStencil = finest !== null && float64Stencil(finest) ? finest : null;
+  const memory =
+    stencils.length > 0 && levelSizes.length > 1 ? new KernelMemory(memoryBytes(levelSizes, stencils, steps, precision, operatorStencil)) : null;
+  const products = memory !== null && operatorStencil !== null ? stencilInMemory(operatorStencil, memory) : null;
   // The CSR finest level (fins as cells, or other lines) sweeps in TypeScript: the kernels read stencils only.
   const levels: Level[] = [...(csr !== null ? [csr] : []), ...stencils.map((s) => stencilLevel(s, precision, memory))];
   // The coarsenings' transfers belong to the levels they leave: after the fold's level when there is one.
   const first = fold !== null ? 1 : 0;
-  downs.forEach((down, k) => (levels[first + k].down = down));
+  steps.forEach((t, k) => (levels[first + k].down = transferApply(t, memory)));
   const direct: CholeskyFactor = envelopeCholesky(levels.length === 1 && stencil === null ? a : stencilToCsr(stencil as SinkStencil));
   levelVectors(levels, memory);
-  const scratch = memory !== null ? { r: memory.f64(levelSizes[0]), z: memory.f64(levelSizes[0]) } : undefined;
+  const scratch = memory !== null ? cgScratch(memory, levelSizes[0]) : undefined;
 
   /** One V-cycle from level l; returns b · x on the finest level (0 below it). */
   const cycle = (l: number, b: Float64Array, x: Float64Array): number => {
@@ -257,9 +314,11 @@ export function sinkMultigrid(
     operator(m) {
       if (m !== a || finest === null) return null;
       const s = finest;
+      const held = (...v: Float64Array[]) => products !== null && memory !== null && v.every((u) => memory.holds(u));
       return {
-        multiply: (x, out) => stencilMultiply(s, x, out),
+        multiply: (x, out) => (held(x, out) ? (products as KernelProducts).multiply(x, out) : stencilMultiply(s, x, out)),
         residual(x, b, out) {
+          if (held(x, b, out)) return (products as KernelProducts).residual(x, b, out);
           stencilResidual(s, x, b, out);
           let norm = 0;
           for (let p = 0; p < out.length; p++) norm += Math.abs(out[p]);

@@ -3,9 +3,82 @@
  *   out = sign (b − A x),  (A x)_p = e_p x_p + sum_q G_pq (x_p − x_q),
  * over the plate's planes (neighbours by strides), each fin's nodes, then the extra couplings: the residual
  * (sign 1) and the product (sign −1, b = 0) that the multigrid and CG use, equal to csrResidual / csrMultiply on the
- * matrix the stencil stands for (tests/sink/stencil.test.ts).
+ * matrix the stencil stands for (tests/sink/stencil.test.ts). stencilInMemory gives the same two as WebAssembly
+ * (src/fd/wasm/assembly/stencil-products.ts, the same operations in the same order, so the same bits).
  */
 import type { Couplings, SinkStencil } from './sink-stencil.js';
+import { MemoryPlan, type KernelMemory } from '../wasm/kernel-memory.js';
+
+/** Words of a stencil's descriptor for the product kernels (src/fd/wasm/assembly/stencil-products.ts). */
+const DESCRIPTOR_WORDS = 18;
+
+/** The bytes stencilInMemory takes: a float64 copy of the stencil's couplings, extras and fin tables. */
+export function stencilMemoryBytes(s: SinkStencil): number {
+  const fins = s.grid.fins.length;
+  const e = s.extraTo.length;
+  return new MemoryPlan()
+    .add(s.line.length, 8)
+    .add(s.gx.length, 8)
+    .add(s.gy.length, 8)
+    .add(s.row.length, 8)
+    .add(s.excess.length, 8)
+    .add(e, 4)
+    .add(e, 4)
+    .add(e, 8)
+    .add(fins, 4)
+    .add(fins, 4)
+    .add(fins, 4)
+    .add(DESCRIPTOR_WORDS, 4).bytes;
+}
+
+/** The products of s (float64 couplings) as WebAssembly kernels on vectors in `memory`, with s copied into it. */
+export interface KernelProducts {
+  /** out = A x; returns x · A x (x and out views into the memory). */
+  multiply(x: Float64Array, out: Float64Array): number;
+  /** out = b − A x; returns |out|_1. */
+  residual(x: Float64Array, b: Float64Array, out: Float64Array): number;
+}
+
+export function stencilInMemory(s: SinkStencil, memory: KernelMemory): KernelProducts {
+  const f64 = (v: ArrayLike<number>): number => {
+    const c = memory.f64(v.length);
+    c.set(v);
+    return c.byteOffset;
+  };
+  const i32 = (v: ArrayLike<number>): number => {
+    const c = memory.i32(v.length);
+    c.set(v);
+    return c.byteOffset;
+  };
+  const fins = s.grid.fins;
+  const d = memory.i32(DESCRIPTOR_WORDS);
+  d.set([
+    s.grid.nx,
+    s.grid.ny,
+    s.grid.nz,
+    s.n,
+    s.plate,
+    fins.length,
+    f64(s.line),
+    f64(s.gx),
+    f64(s.gy),
+    f64(s.row),
+    f64(s.excess),
+    s.extraTo.length,
+    i32(s.extraFrom),
+    i32(s.extraTo),
+    f64(s.extraG),
+    i32(fins.map((_, f) => finOffset(s, f))),
+    i32(fins.map((f) => f.rows)),
+    i32(fins.map((f) => f.layers)),
+  ]);
+  const level = d.byteOffset;
+  const k = memory.kernels;
+  return {
+    multiply: (x, out) => k.stencilMultiply(level, x.byteOffset, out.byteOffset),
+    residual: (x, b, out) => k.stencilResidual(level, x.byteOffset, b.byteOffset, out.byteOffset),
+  };
+}
 
 /** out = b − A x in the difference form b_p − e_p x_p − sum_q G_pq (x_p − x_q) (out may not alias x). */
 export function stencilResidual(s: SinkStencil, x: Float64Array, b: Float64Array, out: Float64Array): void {

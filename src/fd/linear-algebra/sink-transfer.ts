@@ -7,6 +7,7 @@
  * The same P as coarsenSinkLevel's CSR form (the product of the weights), up to the order of the sums.
  */
 import { coarseLevelGrid, transfer, type SinkCoarsening, type SinkLevelGrid } from './aggregation.js';
+import { MemoryPlan, type KernelMemory } from '../wasm/kernel-memory.js';
 
 /** One direction: for each fine index its own coarse index, the neighbouring one, and the own one's weight. */
 export interface AxisTransfer {
@@ -115,11 +116,84 @@ interface BlockPlan {
   size: number;
 }
 
+interface TransferPlan {
+  restrictPlan: BlockPlan[];
+  prolongPlan: BlockPlan[];
+  /** Size of each of the two scratch vectors. */
+  scratch: number;
+  /** The directions the passes use, each once. */
+  axes: AxisTransfer[];
+}
+
+/** The bytes transferApply(t, memory) takes from `memory`: the scratch vectors and the passes' weight tables. */
+export function transferBytes(t: SinkTransfer): number {
+  const { scratch, axes } = planTransfer(t);
+  const plan = new MemoryPlan().add(scratch, 8).add(scratch, 8);
+  for (const a of axes) plan.add(a.n, 4).add(a.n, 4).add(a.n, 8);
+  return plan.bytes;
+}
+
 /**
  * The passes of P and P^T for a step, planned once; two scratch vectors hold the intermediate shapes of a block
- * coarsened in more than one direction.
+ * coarsened in more than one direction. `memory`, when given (sized with transferBytes), holds the scratch vectors
+ * and the weight tables: a transfer between vectors in the same block runs as WebAssembly
+ * (src/fd/wasm/assembly/axis-transfers.ts, the same operations in the same order, so the same bits).
  */
-export function transferApply(t: SinkTransfer): TransferApply {
+export function transferApply(t: SinkTransfer, memory: KernelMemory | null = null): TransferApply {
+  const { restrictPlan, prolongPlan, scratch, axes } = planTransfer(t);
+  const s1 = memory !== null ? memory.f64(scratch) : new Float64Array(scratch);
+  const s2 = memory !== null ? memory.f64(scratch) : new Float64Array(scratch);
+  const pick = (k: number, given: Float64Array, returned: Float64Array) => (k === 0 ? given : k === 1 ? s1 : k === 2 ? s2 : returned);
+  /** Per direction, the byte offsets of its tables in the kernel memory. */
+  const tables = new Map<AxisTransfer, { own: number; other: number; w: number }>();
+  if (memory !== null) {
+    for (const a of axes) {
+      const own = memory.i32(a.n);
+      own.set(a.own);
+      const other = memory.i32(a.n);
+      other.set(a.other);
+      const w = memory.f64(a.n);
+      w.set(a.w);
+      tables.set(a, { own: own.byteOffset, other: other.byteOffset, w: w.byteOffset });
+    }
+  }
+  const kernels = (u: Float64Array, v: Float64Array) => (memory !== null && memory.holds(u) && memory.holds(v) ? memory.kernels : null);
+  /** A pass's vector as the kernels take it: the byte offset of element 0 of the vector (the pass adds its start). */
+  const at = (v: Float64Array) => v.byteOffset;
+
+  return {
+    restrict(r, rc) {
+      const k = kernels(r, rc);
+      for (const b of restrictPlan) {
+        if (b.passes.length === 0) rc.set(r.subarray(b.fineStart, b.fineStart + b.size), b.coarseStart);
+        for (const q of b.passes) {
+          const src = pick(q.from, r, rc);
+          const dst = pick(q.to, r, rc);
+          const tab = tables.get(q.axis);
+          if (k !== null && tab !== undefined)
+            k.restrictAxis(q.axis.n, q.axis.nc, tab.own, tab.other, tab.w, q.outer, q.inner, at(src), q.fromStart, at(dst), q.toStart);
+          else restrictAxis(q.axis, q.outer, q.inner, src, q.fromStart, dst, q.toStart);
+        }
+      }
+    },
+    prolongAdd(e, x) {
+      const k = kernels(e, x);
+      for (const b of prolongPlan) {
+        if (b.passes.length === 0) for (let m = 0; m < b.size; m++) x[b.fineStart + m] += e[b.coarseStart + m];
+        for (const q of b.passes) {
+          const src = pick(q.from, e, x);
+          const dst = pick(q.to, e, x);
+          const tab = tables.get(q.axis);
+          if (k !== null && tab !== undefined)
+            k.prolongAxis(q.axis.n, q.axis.nc, tab.own, tab.other, tab.w, q.outer, q.inner, at(src), q.fromStart, at(dst), q.toStart, q.to === 3 ? 1 : 0);
+          else prolongAxis(q.axis, q.outer, q.inner, src, q.fromStart, dst, q.toStart, q.to === 3);
+        }
+      }
+    },
+  };
+}
+
+function planTransfer(t: SinkTransfer): TransferPlan {
   const blocks: { axes: AxisTransfer[]; fineStart: number; coarseStart: number }[] = [{ axes: [t.x, t.y, t.z], fineStart: 0, coarseStart: 0 }];
   let fineStart = t.fine.nx * t.fine.ny * t.fine.nz;
   let coarseStart = t.coarse.nx * t.coarse.ny * t.coarse.nz;
@@ -154,22 +228,6 @@ export function transferApply(t: SinkTransfer): TransferApply {
     });
   const restrictPlan = plan(true);
   const prolongPlan = plan(false);
-  const s1 = new Float64Array(scratch);
-  const s2 = new Float64Array(scratch);
-  const pick = (k: number, given: Float64Array, returned: Float64Array) => (k === 0 ? given : k === 1 ? s1 : k === 2 ? s2 : returned);
-
-  return {
-    restrict(r, rc) {
-      for (const b of restrictPlan) {
-        if (b.passes.length === 0) rc.set(r.subarray(b.fineStart, b.fineStart + b.size), b.coarseStart);
-        for (const q of b.passes) restrictAxis(q.axis, q.outer, q.inner, pick(q.from, r, rc), q.fromStart, pick(q.to, r, rc), q.toStart);
-      }
-    },
-    prolongAdd(e, x) {
-      for (const b of prolongPlan) {
-        if (b.passes.length === 0) for (let m = 0; m < b.size; m++) x[b.fineStart + m] += e[b.coarseStart + m];
-        for (const q of b.passes) prolongAxis(q.axis, q.outer, q.inner, pick(q.from, e, x), q.fromStart, pick(q.to, e, x), q.toStart, q.to === 3);
-      }
-    },
-  };
+  const axes = [...new Set([...restrictPlan, ...prolongPlan].flatMap((b) => b.passes.map((q) => q.axis)))];
+  return { restrictPlan, prolongPlan, scratch, axes };
 }

@@ -33,14 +33,21 @@ export function sparsePcg(
   const n = a.n;
   const bNorm = norm1(b);
   const scale = bNorm || 1;
-  const x = start ?? new Float64Array(n);
-  // r and z in the preconditioner's kernel memory when it offers them (its sweeps then read and write them directly).
-  const own = m.scratch !== undefined && m.scratch.r.length === n ? m.scratch : null;
-  const r = own?.r ?? new Float64Array(n);
-  const z = own?.z ?? new Float64Array(n);
-  const p = new Float64Array(n);
   // A p lives in the preconditioner's free vector when it offers one (used only between applications).
   const q = m.workspace?.length === n ? m.workspace : new Float64Array(n);
+  // CG's vectors in the preconditioner's kernel memory when it offers them: its sweeps, the structured products and
+  // the vector updates then run as WebAssembly on them directly; x is copied out at the end.
+  const own = m.scratch !== undefined && m.scratch.r.length === n && m.scratch.holds(q) ? m.scratch : null;
+  const r = own?.r ?? new Float64Array(n);
+  const z = own?.z ?? new Float64Array(n);
+  const p = own?.p ?? new Float64Array(n);
+  const x = own?.x ?? start ?? new Float64Array(n);
+  if (own !== null) {
+    if (start !== undefined) x.set(start);
+    else x.fill(0);
+    own.b.set(b);
+  }
+  const rhs = own?.b ?? b;
   // The preconditioner's structured copy of A multiplies faster than the CSR form (no column indices).
   const op = m.operator?.(a) ?? {
     multiply(v: Float64Array, out: Float64Array) {
@@ -52,9 +59,9 @@ export function sparsePcg(
   // From zero the residual is b itself (no product to form).
   let relative: number;
   if (start === undefined) {
-    r.set(b);
+    r.set(rhs);
     relative = bNorm / scale;
-  } else relative = op.residual(x, b, r) / scale;
+  } else relative = op.residual(x, rhs, r) / scale;
   let iterations = 0;
   let previous = Infinity;
   for (let restart = 0; restart <= RESTARTS && relative > tolerance && relative < 0.5 * previous; restart++) {
@@ -64,15 +71,16 @@ export function sparsePcg(
     for (let it = 0; it < maxIterations; it++) {
       const pq = op.multiply(p, q);
       if (!(pq > 0) || !(rz > 0)) break;
-      const size = step(n, rz / pq, p, q, x, r);
+      const size = own !== null ? own.step(rz / pq, q) : step(n, rz / pq, p, q, x, r);
       iterations++;
       if (size <= 0.5 * tolerance * scale) break;
       const next = m.apply(r, z);
       const beta = next / rz;
       rz = next;
-      direction(n, beta, z, p);
+      if (own !== null) own.direction(beta);
+      else direction(n, beta, z, p);
     }
-    relative = op.residual(x, b, r) / scale;
+    relative = op.residual(x, rhs, r) / scale;
   }
   const floor = relative > tolerance ? roundingFloor(a, x) / scale : 0;
   if (!(relative <= Math.max(tolerance, floor))) {
@@ -80,7 +88,10 @@ export function sparsePcg(
       `3-D sink solve: preconditioned CG reached a relative residual of ${relative.toExponential(2)} (target ${tolerance.toExponential(0)}) after ${iterations} iterations on ${n} unknowns`,
     );
   }
-  return { x, report: { iterations, relativeResidual: relative } };
+  if (own === null) return { x, report: { iterations, relativeResidual: relative } };
+  const out = start ?? new Float64Array(n);
+  out.set(x);
+  return { x: out, report: { iterations, relativeResidual: relative } };
 }
 
 /*

@@ -10,11 +10,48 @@
  */
 import { KERNELS_WASM_BASE64 } from './kernels-binary.js';
 
-/** The kernels' exports (src/fd/wasm/assembly/line-sweeps.ts); every pointer is a byte offset into the block. */
+/** The kernels' exports (src/fd/wasm/assembly/); every pointer is a byte offset into the block. */
 export interface KernelExports {
   sweepForward(level: number, b: number, x: number, fromZero: number): void;
   sweepBackward(level: number, b: number, x: number, withDot: number): number;
   forwardResidual(level: number, b: number, x: number, r: number): void;
+  /** (stencil-products.ts) out = b − A x on a stencil described at `level`; returns |out|_1. */
+  stencilResidual(level: number, x: number, b: number, out: number): number;
+  /** out = A x; returns x · A x. */
+  stencilMultiply(level: number, x: number, out: number): number;
+  /** x += alpha p, r −= alpha q over n entries; returns |r|_1. */
+  cgStep(n: number, alpha: number, p: number, q: number, x: number, r: number): number;
+  /** p = z + beta p over n entries. */
+  cgDirection(n: number, beta: number, z: number, p: number): void;
+  /** (axis-transfers.ts) dst = P^T src along one direction; so and d0 are element offsets. */
+  restrictAxis(
+    n: number,
+    nc: number,
+    own: number,
+    other: number,
+    w: number,
+    outer: number,
+    inner: number,
+    src: number,
+    so: number,
+    dst: number,
+    d0: number,
+  ): void;
+  /** dst (+)= P src along one direction. */
+  prolongAxis(
+    n: number,
+    nc: number,
+    own: number,
+    other: number,
+    w: number,
+    outer: number,
+    inner: number,
+    src: number,
+    so: number,
+    dst: number,
+    d0: number,
+    add: number,
+  ): void;
 }
 
 const PAGE = 65536;

@@ -1,0 +1,219 @@
+/**
+ * AssemblyScript (compiled by scripts/build-kernels.mjs): the products of a sink stencil in the difference form
+ * (sink-stencil-product.ts) and CG's vector updates (sparse-pcg.ts step and direction), operation for operation
+ * as the TypeScript there, so the same bits. Units: conductances W/K, x K, products W.
+ *   residual  out = b − A x,  (A x)_p = e_p x_p + sum_q G_pq (x_p − x_q);
+ *   multiply  out = A x, returning x · A x summed as the TypeScript sums it.
+ * A float64 stencil is described by 18 i32 words at `d` (byte offsets into memory for arrays):
+ *   0 nx  1 ny  2 nz  3 n  4 plate  5 fins  6 line  7 gx  8 gy  9 row  10 excess  11 extras  12 extraFrom (i32)
+ *   13 extraTo (i32)  14 extraG  15 finOffset (i32 per fin)  16 finRows (i32)  17 finLayers (i32).
+ */
+
+function word(d: usize, k: i32): i32 {
+  return load<i32>(d + ((<usize>k) << 2));
+}
+
+function at(base: usize, q: i32): f64 {
+  return load<f64>(base + ((<usize>q) << 3));
+}
+
+function put(base: usize, q: i32, v: f64): void {
+  store<f64>(base + ((<usize>q) << 3), v);
+}
+
+function i32At(base: usize, q: i32): i32 {
+  return load<i32>(base + ((<usize>q) << 2));
+}
+
+/** out = sign (b − A x) on plate plane i, each neighbour bounded (sink-stencil-product.ts edgePlane). */
+function edgePlane(d: usize, x: usize, b: usize, sign: f64, out: usize, i: i32): void {
+  const nx = word(d, 0);
+  const ny = word(d, 1);
+  const nz = word(d, 2);
+  const n = word(d, 3);
+  const line = <usize>word(d, 6);
+  const gx = <usize>word(d, 7);
+  const gy = <usize>word(d, 8);
+  const excess = <usize>word(d, 10);
+  const sx = ny * nz;
+  const p0 = i * sx;
+  const p1 = p0 + sx;
+  for (let p = p0; p < p1; p++) {
+    const xp = at(x, p);
+    let v = at(b, p) - at(excess, p) * xp;
+    if (p > 0) v += at(line, p - 1) * (at(x, p - 1) - xp);
+    if (p + 1 < n) v += at(line, p) * (at(x, p + 1) - xp);
+    if (i > 0) v += at(gx, p - sx) * (at(x, p - sx) - xp);
+    if (i + 1 < nx) v += at(gx, p) * (at(x, p + sx) - xp);
+    if (p - nz >= p0) v += at(gy, p - nz) * (at(x, p - nz) - xp);
+    if (p + nz < p1) v += at(gy, p) * (at(x, p + nz) - xp);
+    put(out, p, sign * v);
+  }
+}
+
+/** out = sign (b − A x) on fin f's nodes without the extra couplings (sink-stencil-product.ts residualFin). */
+function residualFin(d: usize, x: usize, b: usize, sign: f64, out: usize, f: i32): void {
+  const plate = word(d, 4);
+  const line = <usize>word(d, 6);
+  const row = <usize>word(d, 9);
+  const excess = <usize>word(d, 10);
+  const L = i32At(<usize>word(d, 17), f);
+  const offset = i32At(<usize>word(d, 15), f);
+  const rows = i32At(<usize>word(d, 16), f);
+  const end = offset + rows * L;
+  for (let p = offset + L; p < end - L; p++) {
+    const xp = at(x, p);
+    const q = p - plate;
+    put(
+      out,
+      p,
+      sign *
+        (at(b, p) -
+          at(excess, p) * xp +
+          at(line, p) * (at(x, p + 1) - xp) +
+          at(line, p - 1) * (at(x, p - 1) - xp) +
+          at(row, q) * (at(x, p + L) - xp) +
+          at(row, q - L) * (at(x, p - L) - xp)),
+    );
+  }
+  finEdgeRow(d, x, b, sign, out, offset, L, offset, end);
+  if (rows > 1) finEdgeRow(d, x, b, sign, out, end - L, L, offset, end);
+}
+
+function finEdgeRow(d: usize, x: usize, b: usize, sign: f64, out: usize, p0: i32, L: i32, offset: i32, end: i32): void {
+  const plate = word(d, 4);
+  const line = <usize>word(d, 6);
+  const row = <usize>word(d, 9);
+  const excess = <usize>word(d, 10);
+  for (let p = p0; p < p0 + L; p++) {
+    const xp = at(x, p);
+    let v = at(b, p) - at(excess, p) * xp;
+    if (p > p0) v += at(line, p - 1) * (at(x, p - 1) - xp);
+    if (p + 1 < p0 + L) v += at(line, p) * (at(x, p + 1) - xp);
+    if (p - L >= offset) v += at(row, p - L - plate) * (at(x, p - L) - xp);
+    if (p + L < end) v += at(row, p - plate) * (at(x, p + L) - xp);
+    put(out, p, sign * v);
+  }
+}
+
+/** out = b − A x (sink-stencil-product.ts stencilResidual); returns |out|_1 summed in index order. */
+export function stencilResidual(d: usize, x: usize, b: usize, out: usize): f64 {
+  const nx = word(d, 0);
+  const ny = word(d, 1);
+  const nz = word(d, 2);
+  const line = <usize>word(d, 6);
+  const gx = <usize>word(d, 7);
+  const gy = <usize>word(d, 8);
+  const excess = <usize>word(d, 10);
+  const sx = ny * nz;
+  const sign: f64 = 1;
+  // The interior planes in one flat pass (residualPlanes over all planes: from plane 1 to plane nx − 2).
+  for (let p = sx; p < (nx - 1) * sx; p++) {
+    const xp = at(x, p);
+    put(
+      out,
+      p,
+      sign *
+        (at(b, p) -
+          at(excess, p) * xp +
+          at(line, p) * (at(x, p + 1) - xp) +
+          at(line, p - 1) * (at(x, p - 1) - xp) +
+          at(gx, p) * (at(x, p + sx) - xp) +
+          at(gx, p - sx) * (at(x, p - sx) - xp) +
+          at(gy, p) * (at(x, p + nz) - xp) +
+          at(gy, p - nz) * (at(x, p - nz) - xp)),
+    );
+  }
+  edgePlane(d, x, b, sign, out, 0);
+  if (nx > 1) edgePlane(d, x, b, sign, out, nx - 1);
+  const fins = word(d, 5);
+  for (let f = 0; f < fins; f++) residualFin(d, x, b, sign, out, f);
+  const extras = word(d, 11);
+  const from_ = <usize>word(d, 12);
+  const to_ = <usize>word(d, 13);
+  const eg = <usize>word(d, 14);
+  for (let e = 0; e < extras; e++) {
+    const p = i32At(from_, e);
+    put(out, p, at(out, p) + sign * at(eg, e) * (at(x, i32At(to_, e)) - at(x, p)));
+  }
+  const n = word(d, 3);
+  let norm: f64 = 0;
+  for (let p = 0; p < n; p++) norm += Math.abs(at(out, p));
+  return norm;
+}
+
+/** out = A x (sink-stencil-product.ts stencilMultiply); returns x · A x. */
+export function stencilMultiply(d: usize, x: usize, out: usize): f64 {
+  const nx = word(d, 0);
+  const ny = word(d, 1);
+  const nz = word(d, 2);
+  const line = <usize>word(d, 6);
+  const gx = <usize>word(d, 7);
+  const gy = <usize>word(d, 8);
+  const excess = <usize>word(d, 10);
+  const sx = ny * nz;
+  let dot: f64 = 0;
+  const last = (nx - 1 > 1 ? nx - 1 : 1) * sx;
+  for (let p = sx; p < last; p++) {
+    const xp = at(x, p);
+    const v =
+      at(excess, p) * xp +
+      at(line, p) * (xp - at(x, p + 1)) +
+      at(line, p - 1) * (xp - at(x, p - 1)) +
+      at(gx, p) * (xp - at(x, p + sx)) +
+      at(gx, p - sx) * (xp - at(x, p - sx)) +
+      at(gy, p) * (xp - at(x, p + nz)) +
+      at(gy, p - nz) * (xp - at(x, p - nz));
+    put(out, p, v);
+    dot += xp * v;
+  }
+  // The edge planes and the fins through the residual's form with out zeroed as b (sign −1).
+  let p0 = 0;
+  let p1 = sx;
+  for (let p = p0; p < p1; p++) put(out, p, 0);
+  edgePlane(d, x, out, -1, out, 0);
+  for (let p = p0; p < p1; p++) dot += at(x, p) * at(out, p);
+  if (nx > 1) {
+    p0 = (nx - 1) * sx;
+    p1 = nx * sx;
+    for (let p = p0; p < p1; p++) put(out, p, 0);
+    edgePlane(d, x, out, -1, out, nx - 1);
+    for (let p = p0; p < p1; p++) dot += at(x, p) * at(out, p);
+  }
+  const fins = word(d, 5);
+  for (let f = 0; f < fins; f++) {
+    p0 = i32At(<usize>word(d, 15), f);
+    p1 = p0 + i32At(<usize>word(d, 16), f) * i32At(<usize>word(d, 17), f);
+    for (let p = p0; p < p1; p++) put(out, p, 0);
+    residualFin(d, x, out, -1, out, f);
+    for (let p = p0; p < p1; p++) dot += at(x, p) * at(out, p);
+  }
+  const extras = word(d, 11);
+  const from_ = <usize>word(d, 12);
+  const to_ = <usize>word(d, 13);
+  const eg = <usize>word(d, 14);
+  for (let e = 0; e < extras; e++) {
+    const p = i32At(from_, e);
+    const dd = at(eg, e) * (at(x, p) - at(x, i32At(to_, e)));
+    put(out, p, at(out, p) + dd);
+    dot += at(x, p) * dd;
+  }
+  return dot;
+}
+
+/** x += alpha p, r −= alpha q over n entries; returns |r|_1 (sparse-pcg.ts step). */
+export function cgStep(n: i32, alpha: f64, p: usize, q: usize, x: usize, r: usize): f64 {
+  let size: f64 = 0;
+  for (let k = 0; k < n; k++) {
+    put(x, k, at(x, k) + alpha * at(p, k));
+    const rk = at(r, k) - alpha * at(q, k);
+    put(r, k, rk);
+    size += Math.abs(rk);
+  }
+  return size;
+}
+
+/** p = z + beta p over n entries (sparse-pcg.ts direction). */
+export function cgDirection(n: i32, beta: f64, z: usize, p: usize): void {
+  for (let k = 0; k < n; k++) put(p, k, at(z, k) + beta * at(p, k));
+}
