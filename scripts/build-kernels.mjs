@@ -16,7 +16,7 @@ const TARGET = 'src/fd/wasm/kernels-binary.ts';
 /** The compiled module's bytes: -O3, no runtime (the kernels allocate nothing), no bounds assertions, memory imported. */
 export async function compileKernels() {
   let binary = null;
-  const { error, stderr } = await asc.main([...KERNEL_SOURCES, '-O3', '--noAssert', '--runtime', 'stub', '--importMemory', '--outFile', 'kernels.wasm'], {
+  const { error, stderr } = await asc.main([...KERNEL_SOURCES, '-O3', '--noAssert', '--runtime', 'stub', '--importMemory', '--debug', '--outFile', 'kernels.wasm'], {
     writeFile(name, contents) {
       if (name.endsWith('.wasm')) binary = contents;
     },
