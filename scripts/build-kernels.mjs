@@ -10,17 +10,21 @@ export const KERNEL_SOURCES = [
   'src/fd/wasm/assembly/line-sweeps.ts',
   'src/fd/wasm/assembly/axis-transfers.ts',
   'src/fd/wasm/assembly/stencil-products.ts',
+  'src/fd/wasm/assembly/csr-kernels.ts',
 ];
 const TARGET = 'src/fd/wasm/kernels-binary.ts';
 
 /** The compiled module's bytes: -O3, no runtime (the kernels allocate nothing), no bounds assertions, memory imported. */
 export async function compileKernels() {
   let binary = null;
-  const { error, stderr } = await asc.main([...KERNEL_SOURCES, '-O3', '--noAssert', '--runtime', 'stub', '--importMemory', '--debug', '--outFile', 'kernels.wasm'], {
-    writeFile(name, contents) {
-      if (name.endsWith('.wasm')) binary = contents;
+  const { error, stderr } = await asc.main(
+    [...KERNEL_SOURCES, '-O3', '--noAssert', '--runtime', 'stub', '--importMemory', '--debug', '--outFile', 'kernels.wasm'],
+    {
+      writeFile(name, contents) {
+        if (name.endsWith('.wasm')) binary = contents;
+      },
     },
-  });
+  );
   if (error) throw new Error(`AssemblyScript: ${error.message}\n${stderr.toString()}`);
   if (binary === null) throw new Error('AssemblyScript wrote no .wasm');
   return Buffer.from(binary);

@@ -2,8 +2,9 @@
  * The WebAssembly kernels (src/fd/wasm/assembly/, run when their tables and vectors live in a KernelMemory) against
  * the TypeScript loops they transcribe operation for operation: the line sweeps of sink-stencil-relaxation.ts (every
  * kind of sweep, both coefficient precisions), the transfers of sink-transfer.ts, the stencil products of
- * sink-stencil-product.ts and CG's vector updates (sparse-pcg.ts): the same bits on pins and plate fins (fin roots
- * as extra couplings). Invented sinks (tests/sink/support/sink-case.ts). And the committed binary is what
+ * sink-stencil-product.ts, CG's vector updates (sparse-pcg.ts), and for fins as 3-D cells the CSR product, residual
+ * and line sweeps of csr.ts and line-relaxation.ts: the same bits on pins and plate fins (fin roots as extra
+ * couplings). Invented sinks (tests/sink/support/sink-case.ts). And the committed binary is what
  * scripts/build-kernels.mjs makes from the sources.
  */
 import { readFileSync } from 'node:fs';
@@ -20,6 +21,9 @@ import { RESIDUAL_TARGET } from '../../src/fd/three-d/sink-solve.js';
 import { sinkProblem } from '../../src/fd/three-d/sink-problem.js';
 import { KernelMemory, MemoryPlan, type KernelExports } from '../../src/fd/wasm/kernel-memory.js';
 import { compileKernels, kernelsModuleText } from '../../scripts/build-kernels.mjs';
+import { csrMultiply, csrResidual } from '../../src/fd/linear-algebra/csr.js';
+import { csrInMemory, csrMemoryBytes } from '../../src/fd/linear-algebra/csr-in-memory.js';
+import { buildLineRelaxation, lineRelaxationBytes } from '../../src/fd/linear-algebra/line-relaxation.js';
 import { smallSink } from './support/sink-case.js';
 
 /** Indices where u and v differ as bits (Object.is: -0 and +0 differ, NaN equals NaN). */
@@ -36,6 +40,9 @@ function countingMemory(bytes: number): { memory: KernelMemory; calls: () => num
   let calls = 0;
   const counted: KernelExports = {
     ...inner,
+    csrMultiply: (...a) => (calls++, inner.csrMultiply(...a)),
+    csrResidual: (...a) => (calls++, inner.csrResidual(...a)),
+    csrLineSweep: (...a) => (calls++, inner.csrLineSweep(...a)),
     stencilMultiply: (...a) => (calls++, inner.stencilMultiply(...a)),
     stencilResidual: (...a) => (calls++, inner.stencilResidual(...a)),
     restrictAxis: (...a) => (calls++, inner.restrictAxis(...a)),
@@ -165,9 +172,48 @@ describe.each(['pins', 'plates'] as const)('%s: WebAssembly sweeps', (kind) => {
   });
 });
 
+describe.each(['pins', 'plates'] as const)('%s as 3-D cells: WebAssembly CSR kernels', (kind) => {
+  const problem = sinkProblem(smallSink(kind));
+  const grid = buildSinkGrid(problem.layout, { cellSize: 0.002, plateLayers: 2, finLayers: 4, refine: 2 });
+  const system = assembleSink(problem, grid, 'cells');
+  const a = system.matrix;
+  const n = a.n;
+
+  it('form the product, the residual and the line sweeps as csr.ts and line-relaxation.ts do, bit for bit', () => {
+    expect(a.excess).toBeDefined();
+    const { memory, calls } = countingMemory(
+      new MemoryPlan().add(csrMemoryBytes(a), 1).add(lineRelaxationBytes(a, system.lines), 1).add(n, 8).add(n, 8).add(n, 8).bytes,
+    );
+    const k = csrInMemory(a, memory);
+    const fast = buildLineRelaxation(a, system.lines, memory);
+    const plain = buildLineRelaxation(a, system.lines);
+    const x = memory.f64(n);
+    const b = memory.f64(n);
+    const out = memory.f64(n);
+    for (let p = 0; p < n; p++) {
+      x[p] = Math.sin(0.19 * p) + 1;
+      b[p] = a.excess![p]! * 3 + Math.cos(p);
+    }
+    const xPlain = Float64Array.from(x);
+    const bPlain = Float64Array.from(b);
+    const outPlain = new Float64Array(n);
+    k.multiply(x, out);
+    csrMultiply(a, xPlain, outPlain);
+    expect(differing(out, outPlain)).toBe(0);
+    expect(Object.is(k.residual(x, b, out), csrResidual(a, xPlain, bPlain, outPlain))).toBe(true);
+    expect(differing(out, outPlain)).toBe(0);
+    for (const direction of ['forward', 'backward'] as const) {
+      fast.sweep(b, x, direction);
+      plain.sweep(bPlain, xPlain, direction);
+      expect(differing(x, xPlain)).toBe(0);
+    }
+    expect(calls()).toBe(4);
+  });
+});
+
 describe('KernelMemory', () => {
   it('refuses an allocation beyond its planned size', () => {
-    const memory = new KernelMemory(65536);
+    const memory = new KernelMemory(64000);
     memory.f64(8000);
     expect(() => memory.f64(500)).toThrow(/bytes asked/);
   });

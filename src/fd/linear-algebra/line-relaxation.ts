@@ -12,6 +12,7 @@
  * diagonally dominant M-matrices).
  */
 import type { CsrMatrix } from './csr.js';
+import { MemoryPlan, type KernelMemory } from '../wasm/kernel-memory.js';
 
 /** Lines: the members of line l are order[start[l]] .. order[start[l + 1] − 1], in the tridiagonal order. */
 export interface LineSet {
@@ -24,7 +25,34 @@ export interface LineRelaxation {
   sweep(b: Float64Array, x: Float64Array, direction: 'forward' | 'backward'): void;
 }
 
-export function buildLineRelaxation(a: CsrMatrix, lines: LineSet): LineRelaxation {
+/** Words of a relaxation's descriptor (src/fd/wasm/assembly/csr-kernels.ts). */
+const DESCRIPTOR_WORDS = 10;
+
+/** The bytes buildLineRelaxation(a, lines, memory) takes from `memory` (at most: every off-diagonal entry off the lines). */
+export function lineRelaxationBytes(a: CsrMatrix, lines: LineSet): number {
+  const n = lines.order.length;
+  const off = Math.max(16, a.col.length);
+  let longest = 0;
+  for (let l = 0; l + 1 < lines.start.length; l++) longest = Math.max(longest, lines.start[l + 1] - lines.start[l]);
+  return new MemoryPlan()
+    .add(n, 4)
+    .add(lines.start.length, 4)
+    .add(n + 1, 4)
+    .add(off, 4)
+    .add(off, 8)
+    .add(n, 8)
+    .add(n, 8)
+    .add(n, 8)
+    .add(longest, 8)
+    .add(DESCRIPTOR_WORDS, 4).bytes;
+}
+
+/**
+ * `memory`, when given (planned with lineRelaxationBytes), receives a copy of the factored lines: a sweep whose
+ * vectors are views into it runs as WebAssembly (csr-kernels.ts csrLineSweep, the same operations in the same
+ * order as relaxLine below, so the same bits).
+ */
+export function buildLineRelaxation(a: CsrMatrix, lines: LineSet, memory: KernelMemory | null = null): LineRelaxation {
   const { order, start } = lines;
   const n = order.length;
   const lower = new Float64Array(n);
@@ -104,10 +132,58 @@ export function buildLineRelaxation(a: CsrMatrix, lines: LineSet): LineRelaxatio
     }
   };
 
+  const kernel = memory !== null ? copyLines(memory, { order, start, offStart, offCol, offVal, lower, inv, cp, longest, used: f }) : 0;
+
   return {
     sweep(b, x, direction) {
+      if (memory !== null && memory.holds(b) && memory.holds(x)) {
+        memory.kernels.csrLineSweep(kernel, b.byteOffset, x.byteOffset, direction === 'forward' ? 1 : 0);
+        return;
+      }
       if (direction === 'forward') for (let l = 0; l < nLines; l++) relaxLine(l, b, x);
       else for (let l = nLines - 1; l >= 0; l--) relaxLine(l, b, x);
     },
   };
+}
+
+interface FactoredLines {
+  order: Int32Array;
+  start: Int32Array;
+  offStart: Int32Array;
+  offCol: Int32Array;
+  offVal: Float64Array;
+  lower: Float64Array;
+  inv: Float64Array;
+  cp: Float64Array;
+  longest: number;
+  /** Packed off-line entries in use. */
+  used: number;
+}
+
+/** The factored lines copied into `memory`; returns the byte offset of their descriptor. */
+function copyLines(memory: KernelMemory, t: FactoredLines): number {
+  const i32 = (v: Int32Array): number => {
+    const c = memory.i32(v.length);
+    c.set(v);
+    return c.byteOffset;
+  };
+  const f64 = (v: Float64Array): number => {
+    const c = memory.f64(v.length);
+    c.set(v);
+    return c.byteOffset;
+  };
+  const d = memory.i32(DESCRIPTOR_WORDS);
+  d.set([
+    t.start.length - 1,
+    i32(t.order),
+    i32(t.start),
+    i32(t.offStart),
+    i32(t.offCol.subarray(0, t.used)),
+    f64(t.offVal.subarray(0, t.used)),
+    f64(t.lower),
+    f64(t.inv),
+    f64(t.cp),
+    memory.f64(t.longest).byteOffset,
+  ]);
+  return d.byteOffset;
 }

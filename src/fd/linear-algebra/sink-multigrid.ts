@@ -15,11 +15,12 @@
  * conjugate gradient method", NASA CP-3224 [from memory]).
  */
 import { coarseningDirections, levelUnknowns, prolongAddWith, restrictWith, type SinkLevelGrid } from './aggregation.js';
-import { csrResidual, type CsrMatrix } from './csr.js';
+import { csrMultiply, csrResidual, type CsrMatrix } from './csr.js';
+import { csrInMemory, csrMemoryBytes, type CsrKernels } from './csr-in-memory.js';
 import { envelopeCholesky, type CholeskyFactor } from './envelope-cholesky.js';
 import { galerkinCsr } from './galerkin-csr.js';
 import type { Prolongation } from './prolongation.js';
-import { buildLineRelaxation, type LineSet } from './line-relaxation.js';
+import { buildLineRelaxation, lineRelaxationBytes, type LineSet } from './line-relaxation.js';
 import { stencilEntries, stencilFromCsr, stencilLines, stencilToCsr, type SinkStencil } from './sink-stencil.js';
 import { stencilInMemory, stencilMemoryBytes, stencilMultiply, stencilResidual, type KernelProducts } from './sink-stencil-product.js';
 import { stencilCoarseOperator } from './sink-stencil-coarse.js';
@@ -104,8 +105,12 @@ interface Level {
 
 const EMPTY = new Float64Array(0);
 
-function csrLevel(a: CsrMatrix, lines: LineSet): Level {
-  const relax = buildLineRelaxation(a, lines);
+function csrLevel(a: CsrMatrix, lines: LineSet, memory: KernelMemory | null, kernels: CsrKernels | null): Level {
+  const relax = buildLineRelaxation(a, lines, memory);
+  const residual = (x: Float64Array, b: Float64Array, r: Float64Array): void => {
+    if (kernels !== null && memory !== null && memory.holds(x) && memory.holds(b) && memory.holds(r)) kernels.residual(x, b, r);
+    else csrResidual(a, x, b, r);
+  };
   return {
     n: a.n,
     entries: () => a.col.length,
@@ -116,7 +121,7 @@ function csrLevel(a: CsrMatrix, lines: LineSet): Level {
     presmooth(b, x, r) {
       x.fill(0);
       relax.sweep(b, x, 'forward');
-      csrResidual(a, x, b, r);
+      residual(x, b, r);
     },
     down: null,
     r: EMPTY,
@@ -186,6 +191,18 @@ function float64Stencil(s: SinkStencil): boolean {
   return s.line instanceof Float64Array && s.gx instanceof Float64Array && s.gy instanceof Float64Array && s.row instanceof Float64Array;
 }
 
+/** A by its CSR kernels on vectors in the memory, by csr.ts otherwise. */
+function csrOperator(a: CsrMatrix, k: CsrKernels, memory: KernelMemory): StructuredOperator {
+  return {
+    multiply(x, out) {
+      if (memory.holds(x) && memory.holds(out)) k.multiply(x, out);
+      else csrMultiply(a, x, out);
+      return dot(x, out);
+    },
+    residual: (x, b, out) => (memory.holds(x) && memory.holds(b) && memory.holds(out) ? k.residual(x, b, out) : csrResidual(a, x, b, out)),
+  };
+}
+
 function cgScratch(memory: KernelMemory, n: number): CgScratch {
   const r = memory.f64(n);
   const z = memory.f64(n);
@@ -240,15 +257,14 @@ export function sinkMultigrid(
 ): Preconditioner {
   // The hierarchy first (a CSR level where the finest is not a stencil, then the stencils with the transfers between
   // them), the smoothers after, once the kernel memory that holds them is sized.
-  const csr: Level | null = fold !== null || a.n <= COARSEST || !linesAreStencilLines(lines, grid) ? csrLevel(a, lines) : null;
+  const csrFinest = fold !== null || a.n <= COARSEST || !linesAreStencilLines(lines, grid);
   /** The stencil levels, finest first; `stencil` the one the next coarsening starts from. */
   const stencils: SinkStencil[] = [];
   const steps: SinkTransfer[] = [];
   let finest: SinkStencil | null = null;
   let stencil: SinkStencil | null = null;
-  if (csr !== null) {
+  if (csrFinest) {
     if (fold !== null) {
-      csr.down = foldTransfer(fold);
       stencil = stencilFromCsr(galerkinCsr(a, fold), grid);
       stencils.push(stencil);
     } else if (a.n > COARSEST) {
@@ -273,12 +289,18 @@ export function sinkMultigrid(
     g = t.coarse;
   }
   // A stencil level with lines to sweep (the one-level case is a direct solve): its smoothers in WebAssembly.
-  const levelSizes = [...(csr !== null ? [a.n] : []), ...stencils.map((s) => s.n)];
+  const levelSizes = [...(csrFinest ? [a.n] : []), ...stencils.map((s) => s.n)];
   const operatorStencil = finest !== null && float64Stencil(finest) ? finest : null;
-  const memory =
-    stencils.length > 0 && levelSizes.length > 1 ? new KernelMemory(memoryBytes(levelSizes, stencils, steps, precision, operatorStencil)) : null;
-  const products = memory !== null && operatorStencil !== null ? stencilInMemory(operatorStencil, memory) : null;
-  // The CSR finest level (fins as cells, or other lines) sweeps in TypeScript: the kernels read stencils only.
+  let memory: KernelMemory | null = null;
+  if (stencils.length > 0 && levelSizes.length > 1) {
+    const bytes = memoryBytes(levelSizes, stencils, steps, precision, operatorStencil);
+    memory = new KernelMemory(bytes + (csrFinest ? csrMemoryBytes(a) + lineRelaxationBytes(a, lines) : 0));
+  }
+  const products: KernelProducts | null = memory !== null && operatorStencil !== null ? stencilInMemory(operatorStencil, memory) : null;
+  const csrProducts: CsrKernels | null = memory !== null && csrFinest ? csrInMemory(a, memory) : null;
+  // A CSR finest level (fins as cells, or other lines): its line relaxation and products as CSR kernels.
+  const csr = csrFinest ? csrLevel(a, lines, memory, csrProducts) : null;
+  if (csr !== null && fold !== null) csr.down = foldTransfer(fold);
   const levels: Level[] = [...(csr !== null ? [csr] : []), ...stencils.map((s) => stencilLevel(s, precision, memory))];
   // The coarsenings' transfers belong to the levels they leave: after the fold's level when there is one.
   const first = fold !== null ? 1 : 0;
@@ -312,6 +334,7 @@ export function sinkMultigrid(
     workspace: levels.length > 1 ? levels[0].r : undefined,
     scratch,
     operator(m) {
+      if (m === a && csrProducts !== null && memory !== null) return csrOperator(a, csrProducts, memory);
       if (m !== a || finest === null) return null;
       const s = finest;
       const held = (...v: Float64Array[]) => products !== null && memory !== null && v.every((u) => memory.holds(u));

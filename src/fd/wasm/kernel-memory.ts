@@ -23,6 +23,12 @@ export interface KernelExports {
   cgStep(n: number, alpha: number, p: number, q: number, x: number, r: number): number;
   /** p = z + beta p over n entries. */
   cgDirection(n: number, beta: number, z: number, p: number): void;
+  /** (csr-kernels.ts) out = A x for the CSR matrix described at `matrix`. */
+  csrMultiply(matrix: number, x: number, out: number): void;
+  /** out = b − A x; returns |out|_1. */
+  csrResidual(matrix: number, x: number, b: number, out: number): number;
+  /** One line Gauss-Seidel sweep (forward != 0: in line order) with the relaxation described at `relaxation`. */
+  csrLineSweep(relaxation: number, b: number, x: number, forward: number): void;
   /** (axis-transfers.ts) dst = P^T src along one direction; so and d0 are element offsets. */
   restrictAxis(
     n: number,
@@ -82,11 +88,12 @@ export class MemoryPlan {
 export class KernelMemory {
   readonly memory: WebAssembly.Memory;
   readonly kernels: KernelExports;
-  private next = 0;
+  /** The first ALIGN bytes are never handed out, so that 0 is no array's offset (a kernel reads 0 as "none"). */
+  private next = ALIGN;
   private readonly size: number;
 
   constructor(bytes: number) {
-    const pages = Math.max(1, Math.ceil(bytes / PAGE));
+    const pages = Math.max(1, Math.ceil((bytes + ALIGN) / PAGE));
     this.memory = new WebAssembly.Memory({ initial: pages, maximum: pages });
     this.size = pages * PAGE;
     const instance = new WebAssembly.Instance(kernelModule(), {
