@@ -129,15 +129,51 @@ interface TransferPlan {
 export function transferBytes(t: SinkTransfer): number {
   const { scratch, axes } = planTransfer(t);
   const plan = new MemoryPlan().add(scratch, 8).add(scratch, 8);
-  for (const a of axes) plan.add(a.n, 4).add(a.n, 4).add(a.n, 8);
+  for (const a of axes)
+    plan
+      .add(a.n, 4)
+      .add(a.n, 4)
+      .add(a.n, 8)
+      .add(a.nc + 1, 4)
+      .add(2 * a.n, 4)
+      .add(2 * a.n, 8);
   return plan.bytes;
+}
+
+/**
+ * P^T of one direction by coarse cell: for coarse cell c its contributors k in start[c] .. start[c + 1] − 1, the
+ * fine cells in ascending order with their weights (w_i to the own cell, 1 − w_i to the other unless w_i = 1): the
+ * shares restrictAxis adds, in the order it adds them.
+ */
+export function gatherTable(a: AxisTransfer): { start: Int32Array; fine: Int32Array; weight: Float64Array } {
+  const start = new Int32Array(a.nc + 1);
+  for (let i = 0; i < a.n; i++) {
+    start[a.own[i] + 1]++;
+    if (a.w[i] !== 1) start[a.other[i] + 1]++;
+  }
+  for (let c = 0; c < a.nc; c++) start[c + 1] += start[c];
+  const fill = start.slice(0, a.nc);
+  const fine = new Int32Array(start[a.nc]);
+  const weight = new Float64Array(start[a.nc]);
+  for (let i = 0; i < a.n; i++) {
+    const k = fill[a.own[i]]++;
+    fine[k] = i;
+    weight[k] = a.w[i];
+    if (a.w[i] !== 1) {
+      const o = fill[a.other[i]]++;
+      fine[o] = i;
+      weight[o] = 1 - a.w[i];
+    }
+  }
+  return { start, fine, weight };
 }
 
 /**
  * The passes of P and P^T for a step, planned once; two scratch vectors hold the intermediate shapes of a block
  * coarsened in more than one direction. `memory`, when given (sized with transferBytes), holds the scratch vectors
  * and the weight tables: a transfer between vectors in the same block runs as WebAssembly
- * (src/fd/wasm/assembly/axis-transfers.ts, the same operations in the same order, so the same bits).
+ * (src/fd/wasm/assembly/axis-transfers.ts, the same operations in the same order, so the same bits; P^T as a
+ * gather by coarse cell, gatherTable).
  */
 export function transferApply(t: SinkTransfer, memory: KernelMemory | null = null): TransferApply {
   const { restrictPlan, prolongPlan, scratch, axes } = planTransfer(t);
@@ -145,16 +181,21 @@ export function transferApply(t: SinkTransfer, memory: KernelMemory | null = nul
   const s2 = memory !== null ? memory.f64(scratch) : new Float64Array(scratch);
   const pick = (k: number, given: Float64Array, returned: Float64Array) => (k === 0 ? given : k === 1 ? s1 : k === 2 ? s2 : returned);
   /** Per direction, the byte offsets of its tables in the kernel memory. */
-  const tables = new Map<AxisTransfer, { own: number; other: number; w: number }>();
+  const tables = new Map<AxisTransfer, { own: number; other: number; w: number; start: number; fine: number; weight: number }>();
   if (memory !== null) {
+    const i32 = (v: Int32Array): number => {
+      const c = memory.i32(v.length);
+      c.set(v);
+      return c.byteOffset;
+    };
+    const f64 = (v: Float64Array): number => {
+      const c = memory.f64(v.length);
+      c.set(v);
+      return c.byteOffset;
+    };
     for (const a of axes) {
-      const own = memory.i32(a.n);
-      own.set(a.own);
-      const other = memory.i32(a.n);
-      other.set(a.other);
-      const w = memory.f64(a.n);
-      w.set(a.w);
-      tables.set(a, { own: own.byteOffset, other: other.byteOffset, w: w.byteOffset });
+      const g = gatherTable(a);
+      tables.set(a, { own: i32(a.own), other: i32(a.other), w: f64(a.w), start: i32(g.start), fine: i32(g.fine), weight: f64(g.weight) });
     }
   }
   const kernels = (u: Float64Array, v: Float64Array) => (memory !== null && memory.holds(u) && memory.holds(v) ? memory.kernels : null);
@@ -171,7 +212,7 @@ export function transferApply(t: SinkTransfer, memory: KernelMemory | null = nul
           const dst = pick(q.to, r, rc);
           const tab = tables.get(q.axis);
           if (k !== null && tab !== undefined)
-            k.restrictAxis(q.axis.n, q.axis.nc, tab.own, tab.other, tab.w, q.outer, q.inner, at(src), q.fromStart, at(dst), q.toStart);
+            k.restrictGather(q.axis.n, q.axis.nc, tab.start, tab.fine, tab.weight, q.outer, q.inner, at(src), q.fromStart, at(dst), q.toStart);
           else restrictAxis(q.axis, q.outer, q.inner, src, q.fromStart, dst, q.toStart);
         }
       }

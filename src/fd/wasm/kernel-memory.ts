@@ -29,13 +29,13 @@ export interface KernelExports {
   csrResidual(matrix: number, x: number, b: number, out: number): number;
   /** One line Gauss-Seidel sweep (forward != 0: in line order) with the relaxation described at `relaxation`. */
   csrLineSweep(relaxation: number, b: number, x: number, forward: number): void;
-  /** (axis-transfers.ts) dst = P^T src along one direction; so and d0 are element offsets. */
-  restrictAxis(
+  /** (axis-transfers.ts; so and d0 are element offsets) dst = P^T src along one direction as a gather by coarse cell (sink-transfer.ts gatherTable). */
+  restrictGather(
     n: number,
     nc: number,
-    own: number,
-    other: number,
-    w: number,
+    start: number,
+    fine: number,
+    weight: number,
     outer: number,
     inner: number,
     src: number,

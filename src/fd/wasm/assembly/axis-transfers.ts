@@ -4,7 +4,8 @@
  * same bits. One direction of n fine and nc coarse cells: fine index i takes weight w_i of its own coarse cell own_i
  * and 1 − w_i of the neighbouring one other_i (cell-centred linear interpolation, weights 3/4 and 1/4, 1 at an edge);
  * the vectors are shaped [outer][n or nc][inner]. Pointers are byte offsets into memory: own and other i32, w and
- * the vectors f64.
+ * the vectors f64. P^T is formed as a gather by coarse cell (restrictGather: the sums of restrictAxis's scatter, in
+ * its order), P by prolongAxis.
  */
 
 function f64At(base: usize, q: i32): f64 {
@@ -17,30 +18,6 @@ function setF64(base: usize, q: i32, v: f64): void {
 
 function i32At(base: usize, q: i32): i32 {
   return load<i32>(base + ((<usize>q) << 2));
-}
-
-/** dst[d0 ..] = P^T src along the direction: src [outer][n][inner] from so, dst [outer][nc][inner] from d0. */
-export function restrictAxis(n: i32, nc: i32, own: usize, other: usize, w: usize, outer: i32, inner: i32, src: usize, so: i32, dst: usize, d0: i32): void {
-  const total = outer * nc * inner;
-  for (let q = d0; q < d0 + total; q++) setF64(dst, q, 0);
-  for (let o = 0; o < outer; o++) {
-    for (let i = 0; i < n; i++) {
-      const s = so + (o * n + i) * inner;
-      const a = d0 + (o * nc + i32At(own, i)) * inner;
-      const wi = f64At(w, i);
-      if (wi == 1) {
-        for (let m = 0; m < inner; m++) setF64(dst, a + m, f64At(dst, a + m) + f64At(src, s + m));
-        continue;
-      }
-      const b = d0 + (o * nc + i32At(other, i)) * inner;
-      const wo = 1 - wi;
-      for (let m = 0; m < inner; m++) {
-        const v = f64At(src, s + m);
-        setF64(dst, a + m, f64At(dst, a + m) + wi * v);
-        setF64(dst, b + m, f64At(dst, b + m) + wo * v);
-      }
-    }
-  }
 }
 
 /** dst (+)= P src along the direction: src [outer][nc][inner] from so, dst [outer][n][inner] from d0; add != 0: +=. */
@@ -67,6 +44,39 @@ export function prolongAxis(
       const wo = 1 - wi;
       if (add != 0) for (let m = 0; m < inner; m++) setF64(dst, d + m, f64At(dst, d + m) + (wi * f64At(src, a + m) + wo * f64At(src, b + m)));
       else for (let m = 0; m < inner; m++) setF64(dst, d + m, wi * f64At(src, a + m) + wo * f64At(src, b + m));
+    }
+  }
+}
+
+/**
+ * dst[d0 ..] = P^T src along the direction as a gather: coarse cell c is the sum over its contributors k, fine
+ * cells fine_k in ascending order with weights w_k (start_c .. start_{c+1} − 1), of w_k src: the products and the
+ * order of the sums of restrictAxis (which adds each fine cell's shares as it meets them, in ascending order, from
+ * 0), so the same bits, with each coarse row written once instead of read and written per contributor.
+ */
+export function restrictGather(
+  n: i32,
+  nc: i32,
+  start: usize,
+  fine: usize,
+  weight: usize,
+  outer: i32,
+  inner: i32,
+  src: usize,
+  so: i32,
+  dst: usize,
+  d0: i32,
+): void {
+  for (let o = 0; o < outer; o++) {
+    for (let c = 0; c < nc; c++) {
+      const a = d0 + (o * nc + c) * inner;
+      for (let m = 0; m < inner; m++) setF64(dst, a + m, 0);
+      const k1 = i32At(start, c + 1);
+      for (let k = i32At(start, c); k < k1; k++) {
+        const s = so + (o * n + i32At(fine, k)) * inner;
+        const wk = f64At(weight, k);
+        for (let m = 0; m < inner; m++) setF64(dst, a + m, f64At(dst, a + m) + wk * f64At(src, s + m));
+      }
     }
   }
 }
