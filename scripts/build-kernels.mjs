@@ -18,7 +18,7 @@ const TARGET = 'src/fd/wasm/kernels-binary.ts';
 export async function compileKernels() {
   let binary = null;
   const { error, stderr } = await asc.main(
-    [...KERNEL_SOURCES, '-O3', '--noAssert', '--runtime', 'stub', '--importMemory', '--debug', '--outFile', 'kernels.wasm'],
+    [...KERNEL_SOURCES, '-O3', '--noAssert', '--runtime', 'stub', '--importMemory', '--debug', '--enable', 'simd', '--outFile', 'kernels.wasm'],
     {
       writeFile(name, contents) {
         if (name.endsWith('.wasm')) binary = contents;

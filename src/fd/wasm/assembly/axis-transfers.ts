@@ -16,6 +16,11 @@ function setF64(base: usize, q: i32, v: f64): void {
   store<f64>(base + ((<usize>q) << 3), v);
 }
 
+/** base[q], base[q + 1] as f64x2. */
+function ld(base: usize, q: i32): v128 {
+  return v128.load(base + ((<usize>q) << 3));
+}
+
 function i32At(base: usize, q: i32): i32 {
   return load<i32>(base + ((<usize>q) << 2));
 }
@@ -42,8 +47,18 @@ export function prolongAxis(
       const wi = f64At(w, i);
       const b = so + (o * nc + i32At(other, i)) * inner;
       const wo = 1 - wi;
-      if (add != 0) for (let m = 0; m < inner; m++) setF64(dst, d + m, f64At(dst, d + m) + (wi * f64At(src, a + m) + wo * f64At(src, b + m)));
-      else for (let m = 0; m < inner; m++) setF64(dst, d + m, wi * f64At(src, a + m) + wo * f64At(src, b + m));
+      // Pairs of the inner index in f64x2 lanes (each lane the scalar expression), the odd one last.
+      const w1 = f64x2.splat(wi);
+      const w2 = f64x2.splat(wo);
+      let m = 0;
+      if (add != 0) {
+        for (; m + 1 < inner; m += 2)
+          v128.store(dst + ((<usize>(d + m)) << 3), f64x2.add(ld(dst, d + m), f64x2.add(f64x2.mul(w1, ld(src, a + m)), f64x2.mul(w2, ld(src, b + m)))));
+        for (; m < inner; m++) setF64(dst, d + m, f64At(dst, d + m) + (wi * f64At(src, a + m) + wo * f64At(src, b + m)));
+      } else {
+        for (; m + 1 < inner; m += 2) v128.store(dst + ((<usize>(d + m)) << 3), f64x2.add(f64x2.mul(w1, ld(src, a + m)), f64x2.mul(w2, ld(src, b + m))));
+        for (; m < inner; m++) setF64(dst, d + m, wi * f64At(src, a + m) + wo * f64At(src, b + m));
+      }
     }
   }
 }
@@ -75,7 +90,10 @@ export function restrictGather(
       for (let k = i32At(start, c); k < k1; k++) {
         const s = so + (o * n + i32At(fine, k)) * inner;
         const wk = f64At(weight, k);
-        for (let m = 0; m < inner; m++) setF64(dst, a + m, f64At(dst, a + m) + wk * f64At(src, s + m));
+        const w2 = f64x2.splat(wk);
+        let m = 0;
+        for (; m + 1 < inner; m += 2) v128.store(dst + ((<usize>(a + m)) << 3), f64x2.add(ld(dst, a + m), f64x2.mul(w2, ld(src, s + m))));
+        for (; m < inner; m++) setF64(dst, a + m, f64At(dst, a + m) + wk * f64At(src, s + m));
       }
     }
   }

@@ -35,6 +35,17 @@ function g<T>(base: usize, q: i32): f64 {
   return load<f64>(base + ((<usize>q) << 3));
 }
 
+/** Two consecutive f64 from base[q] (one v128 load). */
+function load2(base: usize, q: i32): v128 {
+  return v128.load(base + ((<usize>q) << 3));
+}
+
+/** Two consecutive coefficients from base[q] as f64x2 (float32 storage widened exactly, as g reads one). */
+function g2<T>(base: usize, q: i32): v128 {
+  if (sizeof<T>() == 4) return f64x2.promote_low_f32x4(v128.load64_zero(base + ((<usize>q) << 2)));
+  return v128.load(base + ((<usize>q) << 3));
+}
+
 /** x[p0 .. p0 + len) = T^-1 w (sink-stencil-relaxation.ts solveLine). */
 function solveLine<T>(w: usize, x: usize, inv: usize, line: usize, p0: i32, len: i32): void {
   const m = len >> 1;
@@ -104,8 +115,18 @@ function plane<T>(d: usize, i: i32, b: usize, x: usize, ahead: bool, forward: bo
     const j = forward ? t : ny - 1 - t;
     const p0 = (i * ny + j) * nz;
     if (interior) {
+      // Two members at a time (f64x2 lanes, each the scalar sum in the same order), the odd one last.
+      const pairs = nz >> 1;
       if (ahead) {
-        for (let k = 0, q = p0; k < nz; k++, q++)
+        for (let h = 0; h < pairs; h++) {
+          const q = p0 + 2 * h;
+          let v = f64x2.add(load2(b, q), f64x2.mul(g2<T>(gx, q - sx), load2(x, q - sx)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gx, q), load2(x, q + sx)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q - nz), load2(x, q - nz)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q), load2(x, q + nz)));
+          v128.store(w + ((<usize>(2 * h)) << 3), v);
+        }
+        for (let k = 2 * pairs, q = p0 + 2 * pairs; k < nz; k++, q++)
           setF64(
             w,
             k,
@@ -116,7 +137,14 @@ function plane<T>(d: usize, i: i32, b: usize, x: usize, ahead: bool, forward: bo
               g<T>(gy, q) * f64At(x, q + nz),
           );
       } else {
-        for (let k = 0, q = p0; k < nz; k++, q++) setF64(w, k, f64At(b, q) + g<T>(gx, q - sx) * f64At(x, q - sx) + g<T>(gy, q - nz) * f64At(x, q - nz));
+        for (let h = 0; h < pairs; h++) {
+          const q = p0 + 2 * h;
+          let v = f64x2.add(load2(b, q), f64x2.mul(g2<T>(gx, q - sx), load2(x, q - sx)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q - nz), load2(x, q - nz)));
+          v128.store(w + ((<usize>(2 * h)) << 3), v);
+        }
+        for (let k = 2 * pairs, q = p0 + 2 * pairs; k < nz; k++, q++)
+          setF64(w, k, f64At(b, q) + g<T>(gx, q - sx) * f64At(x, q - sx) + g<T>(gy, q - nz) * f64At(x, q - nz));
       }
     } else {
       const west = i > 0;
@@ -204,7 +232,11 @@ function aheadPlane<T>(d: usize, r: usize, x: usize, p0: i32, east: bool): void 
   const sx = ny * nz;
   const inner = (ny - 1) * nz;
   if (east) {
-    for (let q = p0; q < p0 + inner; q++) setF64(r, q, g<T>(gx, q) * f64At(x, q + sx) + g<T>(gy, q) * f64At(x, q + nz));
+    // Pairs in f64x2 lanes (each the scalar expression), the odd one last.
+    let q = p0;
+    for (; q + 1 < p0 + inner; q += 2)
+      v128.store(r + ((<usize>q) << 3), f64x2.add(f64x2.mul(g2<T>(gx, q), load2(x, q + sx)), f64x2.mul(g2<T>(gy, q), load2(x, q + nz))));
+    for (; q < p0 + inner; q++) setF64(r, q, g<T>(gx, q) * f64At(x, q + sx) + g<T>(gy, q) * f64At(x, q + nz));
     for (let q = p0 + inner; q < p0 + sx; q++) setF64(r, q, g<T>(gx, q) * f64At(x, q + sx));
   } else {
     for (let q = p0; q < p0 + inner; q++) setF64(r, q, g<T>(gy, q) * f64At(x, q + nz));

@@ -154,7 +154,24 @@ export function stencilMultiply(d: usize, x: usize, out: usize): f64 {
   const sx = ny * nz;
   let dot: f64 = 0;
   const last = (nx - 1 > 1 ? nx - 1 : 1) * sx;
-  for (let p = sx; p < last; p++) {
+  // Two cells at a time (f64x2 lanes, each the scalar sum in the same order; x . A x added lane by lane in index
+  // order), the odd one last.
+  let p = sx;
+  for (; p + 1 < last; p += 2) {
+    const xp = ld(x, p);
+    let v = f64x2.mul(ld(excess, p), xp);
+    v = f64x2.add(v, f64x2.mul(ld(line, p), f64x2.sub(xp, ld(x, p + 1))));
+    v = f64x2.add(v, f64x2.mul(ld(line, p - 1), f64x2.sub(xp, ld(x, p - 1))));
+    v = f64x2.add(v, f64x2.mul(ld(gx, p), f64x2.sub(xp, ld(x, p + sx))));
+    v = f64x2.add(v, f64x2.mul(ld(gx, p - sx), f64x2.sub(xp, ld(x, p - sx))));
+    v = f64x2.add(v, f64x2.mul(ld(gy, p), f64x2.sub(xp, ld(x, p + nz))));
+    v = f64x2.add(v, f64x2.mul(ld(gy, p - nz), f64x2.sub(xp, ld(x, p - nz))));
+    v128.store(out + ((<usize>p) << 3), v);
+    const d = f64x2.mul(xp, v);
+    dot += f64x2.extract_lane(d, 0);
+    dot += f64x2.extract_lane(d, 1);
+  }
+  for (; p < last; p++) {
     const xp = at(x, p);
     const v =
       at(excess, p) * xp +
@@ -201,10 +218,19 @@ export function stencilMultiply(d: usize, x: usize, out: usize): f64 {
   return dot;
 }
 
-/** x += alpha p, r −= alpha q over n entries; returns |r|_1 (sparse-pcg.ts step). */
+/** x += alpha p, r −= alpha q over n entries; returns |r|_1 (sparse-pcg.ts step), pairs in f64x2 lanes. */
 export function cgStep(n: i32, alpha: f64, p: usize, q: usize, x: usize, r: usize): f64 {
   let size: f64 = 0;
-  for (let k = 0; k < n; k++) {
+  const a = f64x2.splat(alpha);
+  let k = 0;
+  for (; k + 1 < n; k += 2) {
+    v128.store(x + ((<usize>k) << 3), f64x2.add(ld(x, k), f64x2.mul(a, ld(p, k))));
+    const rk = f64x2.sub(ld(r, k), f64x2.mul(a, ld(q, k)));
+    v128.store(r + ((<usize>k) << 3), rk);
+    size += Math.abs(f64x2.extract_lane(rk, 0));
+    size += Math.abs(f64x2.extract_lane(rk, 1));
+  }
+  for (; k < n; k++) {
     put(x, k, at(x, k) + alpha * at(p, k));
     const rk = at(r, k) - alpha * at(q, k);
     put(r, k, rk);
@@ -215,5 +241,13 @@ export function cgStep(n: i32, alpha: f64, p: usize, q: usize, x: usize, r: usiz
 
 /** p = z + beta p over n entries (sparse-pcg.ts direction). */
 export function cgDirection(n: i32, beta: f64, z: usize, p: usize): void {
-  for (let k = 0; k < n; k++) put(p, k, at(z, k) + beta * at(p, k));
+  const b = f64x2.splat(beta);
+  let k = 0;
+  for (; k + 1 < n; k += 2) v128.store(p + ((<usize>k) << 3), f64x2.add(ld(z, k), f64x2.mul(b, ld(p, k))));
+  for (; k < n; k++) put(p, k, at(z, k) + beta * at(p, k));
+}
+
+/** base[q], base[q + 1] as f64x2. */
+function ld(base: usize, q: i32): v128 {
+  return v128.load(base + ((<usize>q) << 3));
 }
