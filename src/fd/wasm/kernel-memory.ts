@@ -64,11 +64,26 @@ const PAGE = 65536;
 /** Every array starts on a 16-byte boundary. */
 const ALIGN = 16;
 
-let compiled: WebAssembly.Module | null = null;
+/** The compiled module; null when this runtime cannot compile it (WebAssembly SIMD needs SSE4.1 on x86-64). */
+let compiled: WebAssembly.Module | null | undefined;
 
-function kernelModule(): WebAssembly.Module {
-  compiled ??= new WebAssembly.Module(Buffer.from(KERNELS_WASM_BASE64, 'base64'));
+function kernelModule(): WebAssembly.Module | null {
+  if (compiled === undefined) {
+    try {
+      compiled = new WebAssembly.Module(Buffer.from(KERNELS_WASM_BASE64, 'base64'));
+    } catch {
+      compiled = null;
+    }
+  }
   return compiled;
+}
+
+/**
+ * Whether the kernels run here. Where they do not, the solvers make no KernelMemory and run their TypeScript loops,
+ * which give the same bits, only slower.
+ */
+export function kernelsAvailable(): boolean {
+  return kernelModule() !== null;
 }
 
 /** Bytes an allocation takes in a block (its size rounded up to the alignment). */
@@ -96,7 +111,9 @@ export class KernelMemory {
     const pages = Math.max(1, Math.ceil((bytes + ALIGN) / PAGE));
     this.memory = new WebAssembly.Memory({ initial: pages, maximum: pages });
     this.size = pages * PAGE;
-    const instance = new WebAssembly.Instance(kernelModule(), {
+    const module = kernelModule();
+    if (module === null) throw new Error('KernelMemory: this runtime cannot compile the WebAssembly kernels (ask kernelsAvailable first)');
+    const instance = new WebAssembly.Instance(module, {
       env: {
         memory: this.memory,
         abort: () => {
