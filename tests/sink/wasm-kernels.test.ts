@@ -19,7 +19,7 @@ import { sparsePcg } from '../../src/fd/linear-algebra/sparse-pcg.js';
 import { assembleSink } from '../../src/fd/three-d/sink-system.js';
 import { RESIDUAL_TARGET } from '../../src/fd/three-d/sink-solve.js';
 import { sinkProblem } from '../../src/fd/three-d/sink-problem.js';
-import { KernelMemory, MemoryPlan, kernelsAvailable, type KernelExports } from '../../src/fd/wasm/kernel-memory.js';
+import { KernelMemory, MemoryPlan, kernelsAvailable, tryKernelMemory, type KernelExports } from '../../src/fd/wasm/kernel-memory.js';
 import { compileKernels, kernelsModuleText } from '../../scripts/build-kernels.mjs';
 import { csrMultiply, csrResidual } from '../../src/fd/linear-algebra/csr.js';
 import { csrInMemory, csrMemoryBytes } from '../../src/fd/linear-algebra/csr-in-memory.js';
@@ -214,6 +214,11 @@ describe.each(['pins', 'plates'] as const)('%s as 3-D cells: WebAssembly CSR ker
 describe('KernelMemory', () => {
   it('compiles on this runtime (Node 20 on x86-64 with SSE4.1, or arm64), so the solvers take the WebAssembly path', () => {
     expect(kernelsAvailable()).toBe(true);
+  });
+
+  it('is not made beyond 4 GiB (the solvers then run their TypeScript loops)', () => {
+    expect(tryKernelMemory(2 ** 32)).toBeNull();
+    expect(tryKernelMemory(1000)).not.toBeNull();
   });
 
   it('refuses an allocation beyond its planned size', () => {

@@ -27,7 +27,7 @@ import { stencilCoarseOperator } from './sink-stencil-coarse.js';
 import { relaxationBytes, stencilRelaxation, type RelaxationPrecision } from './sink-stencil-relaxation.js';
 import { sinkTransfer, transferApply, transferBytes, type SinkTransfer, type TransferApply } from './sink-transfer.js';
 import { dot } from './vector-ops.js';
-import { KernelMemory, MemoryPlan, kernelsAvailable } from '../wasm/kernel-memory.js';
+import { MemoryPlan, tryKernelMemory, type KernelMemory } from '../wasm/kernel-memory.js';
 
 export interface Preconditioner {
   /** z = M^-1 r (r unchanged); returns r · z (CG's next inner product, summed as the cycle's last sweep forms z). */
@@ -292,9 +292,9 @@ export function sinkMultigrid(
   const levelSizes = [...(csrFinest ? [a.n] : []), ...stencils.map((s) => s.n)];
   const operatorStencil = finest !== null && float64Stencil(finest) ? finest : null;
   let memory: KernelMemory | null = null;
-  if (stencils.length > 0 && levelSizes.length > 1 && kernelsAvailable()) {
+  if (stencils.length > 0 && levelSizes.length > 1) {
     const bytes = memoryBytes(levelSizes, stencils, steps, precision, operatorStencil);
-    memory = new KernelMemory(bytes + (csrFinest ? csrMemoryBytes(a) + lineRelaxationBytes(a, lines) : 0));
+    memory = tryKernelMemory(bytes + (csrFinest ? csrMemoryBytes(a) + lineRelaxationBytes(a, lines) : 0));
   }
   const products: KernelProducts | null = memory !== null && operatorStencil !== null ? stencilInMemory(operatorStencil, memory) : null;
   const csrProducts: CsrKernels | null = memory !== null && csrFinest ? csrInMemory(a, memory) : null;

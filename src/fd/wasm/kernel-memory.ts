@@ -86,6 +86,23 @@ export function kernelsAvailable(): boolean {
   return kernelModule() !== null;
 }
 
+/** WebAssembly's 32-bit memories hold at most 65536 pages (4 GiB). */
+const MAX_PAGES = 65536;
+
+/**
+ * A block of `bytes`, or null where it cannot be had (beyond 4 GiB, or the runtime refuses the memory, or cannot
+ * compile the kernels): the caller then runs its TypeScript loops, with the same bits.
+ */
+export function tryKernelMemory(bytes: number): KernelMemory | null {
+  if (!kernelsAvailable() || Math.ceil((bytes + ALIGN) / PAGE) > MAX_PAGES) return null;
+  try {
+    return new KernelMemory(bytes);
+  } catch (e) {
+    if (e instanceof RangeError) return null;
+    throw e;
+  }
+}
+
 /** Bytes an allocation takes in a block (its size rounded up to the alignment). */
 export function allocationBytes(count: number, bytesPerElement: number): number {
   return Math.ceil((count * bytesPerElement) / ALIGN) * ALIGN;
