@@ -28,20 +28,9 @@ export interface CsrKernels {
 }
 
 export function csrInMemory(a: CsrMatrix, memory: KernelMemory): CsrKernels {
-  const rowStart = memory.i32(a.n + 1);
-  rowStart.set(a.rowStart);
-  const col = memory.i32(a.col.length);
-  col.set(a.col);
-  const val = memory.f64(a.val.length);
-  val.set(a.val);
-  let excess = 0;
-  if (a.excess !== undefined) {
-    const e = memory.f64(a.excess.length);
-    e.set(a.excess);
-    excess = e.byteOffset;
-  }
   const d = memory.i32(DESCRIPTOR_WORDS);
-  d.set([a.n, rowStart.byteOffset, col.byteOffset, val.byteOffset, excess]);
+  const excess = a.excess !== undefined ? memory.copyF64(a.excess) : 0;
+  d.set([a.n, memory.copyI32(a.rowStart.subarray(0, a.n + 1)), memory.copyI32(a.col), memory.copyF64(a.val), excess]);
   const k = memory.kernels;
   const level = d.byteOffset;
   return {

@@ -162,16 +162,8 @@ interface FactoredLines {
 
 /** The factored lines copied into `memory`; returns the byte offset of their descriptor. */
 function copyLines(memory: KernelMemory, t: FactoredLines): number {
-  const i32 = (v: Int32Array): number => {
-    const c = memory.i32(v.length);
-    c.set(v);
-    return c.byteOffset;
-  };
-  const f64 = (v: Float64Array): number => {
-    const c = memory.f64(v.length);
-    c.set(v);
-    return c.byteOffset;
-  };
+  const i32 = (v: Int32Array): number => memory.copyI32(v);
+  const f64 = (v: Float64Array): number => memory.copyF64(v);
   const d = memory.i32(DESCRIPTOR_WORDS);
   d.set([
     t.start.length - 1,

@@ -40,16 +40,8 @@ export interface KernelProducts {
 }
 
 export function stencilInMemory(s: SinkStencil, memory: KernelMemory): KernelProducts {
-  const f64 = (v: ArrayLike<number>): number => {
-    const c = memory.f64(v.length);
-    c.set(v);
-    return c.byteOffset;
-  };
-  const i32 = (v: ArrayLike<number>): number => {
-    const c = memory.i32(v.length);
-    c.set(v);
-    return c.byteOffset;
-  };
+  const f64 = (v: ArrayLike<number>): number => memory.copyF64(v);
+  const i32 = (v: ArrayLike<number>): number => memory.copyI32(v);
   const fins = s.grid.fins;
   const d = memory.i32(DESCRIPTOR_WORDS);
   d.set([

@@ -163,13 +163,6 @@ class StencilLines implements StencilRelaxation {
   private descriptor(memory: KernelMemory, single: boolean): number {
     const s = this.s;
     const fins = s.grid.fins;
-    const copy = (v: Int32Array): Int32Array => {
-      const c = memory.i32(v.length);
-      c.set(v);
-      return c;
-    };
-    const extraG = memory.f64(s.extraG.length);
-    extraG.set(s.extraG);
     const at = (v: ArrayBufferView): number => v.byteOffset;
     const d = memory.i32(DESCRIPTOR_WORDS);
     d.set([
@@ -184,15 +177,15 @@ class StencilLines implements StencilRelaxation {
       at(this.row),
       at(this.inv),
       at(this.w),
-      at(copy(s.extraStart)),
-      at(copy(s.extraFrom)),
-      at(copy(s.extraTo)),
-      at(extraG),
+      memory.copyI32(s.extraStart),
+      memory.copyI32(s.extraFrom),
+      memory.copyI32(s.extraTo),
+      memory.copyF64(s.extraG),
       at(this.extraAhead),
-      at(copy(Int32Array.from(this.finStart))),
-      at(copy(Int32Array.from(this.finLine))),
-      at(copy(Int32Array.from(fins, (f) => f.rows))),
-      at(copy(Int32Array.from(fins, (f) => f.layers))),
+      memory.copyI32(this.finStart),
+      memory.copyI32(this.finLine),
+      memory.copyI32(fins.map((f) => f.rows)),
+      memory.copyI32(fins.map((f) => f.layers)),
       single ? 1 : 0,
     ]);
     return d.byteOffset;

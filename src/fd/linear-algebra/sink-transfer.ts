@@ -183,19 +183,16 @@ export function transferApply(t: SinkTransfer, memory: KernelMemory | null = nul
   /** Per direction, the byte offsets of its tables in the kernel memory. */
   const tables = new Map<AxisTransfer, { own: number; other: number; w: number; start: number; fine: number; weight: number }>();
   if (memory !== null) {
-    const i32 = (v: Int32Array): number => {
-      const c = memory.i32(v.length);
-      c.set(v);
-      return c.byteOffset;
-    };
-    const f64 = (v: Float64Array): number => {
-      const c = memory.f64(v.length);
-      c.set(v);
-      return c.byteOffset;
-    };
     for (const a of axes) {
       const g = gatherTable(a);
-      tables.set(a, { own: i32(a.own), other: i32(a.other), w: f64(a.w), start: i32(g.start), fine: i32(g.fine), weight: f64(g.weight) });
+      tables.set(a, {
+        own: memory.copyI32(a.own),
+        other: memory.copyI32(a.other),
+        w: memory.copyF64(a.w),
+        start: memory.copyI32(g.start),
+        fine: memory.copyI32(g.fine),
+        weight: memory.copyF64(g.weight),
+      });
     }
   }
   const kernels = (u: Float64Array, v: Float64Array) => (memory !== null && memory.holds(u) && memory.holds(v) ? memory.kernels : null);

@@ -165,6 +165,20 @@ export class KernelMemory {
     return new Uint8Array(this.memory.buffer, this.take(count, 1), count);
   }
 
+  /** A copy of v in the block (a kernel's table); returns the copy's byte offset. */
+  copyF64(v: ArrayLike<number>): number {
+    const c = this.f64(v.length);
+    c.set(v);
+    return c.byteOffset;
+  }
+
+  /** As copyF64, for 32-bit integers (indices). */
+  copyI32(v: ArrayLike<number>): number {
+    const c = this.i32(v.length);
+    c.set(v);
+    return c.byteOffset;
+  }
+
   /** Whether a typed array is a view into this block (a kernel can read it by its byteOffset). */
   holds(v: ArrayBufferView): boolean {
     return v.buffer === this.memory.buffer;

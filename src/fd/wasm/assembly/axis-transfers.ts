@@ -8,22 +8,7 @@
  * its order), P by prolongAxis.
  */
 
-function f64At(base: usize, q: i32): f64 {
-  return load<f64>(base + ((<usize>q) << 3));
-}
-
-function setF64(base: usize, q: i32, v: f64): void {
-  store<f64>(base + ((<usize>q) << 3), v);
-}
-
-/** base[q], base[q + 1] as f64x2. */
-function ld(base: usize, q: i32): v128 {
-  return v128.load(base + ((<usize>q) << 3));
-}
-
-function i32At(base: usize, q: i32): i32 {
-  return load<i32>(base + ((<usize>q) << 2));
-}
+import { f64At, setF64, i32At, ld } from './memory-access';
 
 /** dst (+)= P src along the direction: src [outer][nc][inner] from so, dst [outer][n][inner] from d0; add != 0: +=. */
 export function prolongAxis(

@@ -11,21 +11,7 @@
  * algorithm in TypeScript (inv, cp), the couplings off the line packed per member (offStart, offCol, offVal).
  */
 
-function word(d: usize, k: i32): i32 {
-  return load<i32>(d + ((<usize>k) << 2));
-}
-
-function at(base: usize, q: i32): f64 {
-  return load<f64>(base + ((<usize>q) << 3));
-}
-
-function put(base: usize, q: i32, v: f64): void {
-  store<f64>(base + ((<usize>q) << 3), v);
-}
-
-function i32At(base: usize, q: i32): i32 {
-  return load<i32>(base + ((<usize>q) << 2));
-}
+import { word, f64At, setF64, i32At } from './memory-access';
 
 /** out = A x (csr.ts csrMultiply). */
 export function csrMultiply(d: usize, x: usize, out: usize): void {
@@ -36,19 +22,19 @@ export function csrMultiply(d: usize, x: usize, out: usize): void {
   const excess = <usize>word(d, 4);
   if (excess != 0) {
     for (let r = 0; r < n; r++) {
-      const xr = at(x, r);
-      let s = at(excess, r) * xr;
+      const xr = f64At(x, r);
+      let s = f64At(excess, r) * xr;
       const e1 = i32At(rowStart, r + 1);
-      for (let e = i32At(rowStart, r) + 1; e < e1; e++) s += at(val, e) * (at(x, i32At(col, e)) - xr);
-      put(out, r, s);
+      for (let e = i32At(rowStart, r) + 1; e < e1; e++) s += f64At(val, e) * (f64At(x, i32At(col, e)) - xr);
+      setF64(out, r, s);
     }
     return;
   }
   for (let r = 0; r < n; r++) {
     let s: f64 = 0;
     const e1 = i32At(rowStart, r + 1);
-    for (let e = i32At(rowStart, r); e < e1; e++) s += at(val, e) * at(x, i32At(col, e));
-    put(out, r, s);
+    for (let e = i32At(rowStart, r); e < e1; e++) s += f64At(val, e) * f64At(x, i32At(col, e));
+    setF64(out, r, s);
   }
 }
 
@@ -62,20 +48,20 @@ export function csrResidual(d: usize, x: usize, b: usize, out: usize): f64 {
   let norm: f64 = 0;
   if (excess != 0) {
     for (let r = 0; r < n; r++) {
-      const xr = at(x, r);
-      let s = at(b, r) - at(excess, r) * xr;
+      const xr = f64At(x, r);
+      let s = f64At(b, r) - f64At(excess, r) * xr;
       const e1 = i32At(rowStart, r + 1);
-      for (let e = i32At(rowStart, r) + 1; e < e1; e++) s -= at(val, e) * (at(x, i32At(col, e)) - xr);
-      put(out, r, s);
+      for (let e = i32At(rowStart, r) + 1; e < e1; e++) s -= f64At(val, e) * (f64At(x, i32At(col, e)) - xr);
+      setF64(out, r, s);
       norm += Math.abs(s);
     }
     return norm;
   }
   for (let r = 0; r < n; r++) {
-    let s = at(b, r);
+    let s = f64At(b, r);
     const e1 = i32At(rowStart, r + 1);
-    for (let e = i32At(rowStart, r); e < e1; e++) s -= at(val, e) * at(x, i32At(col, e));
-    put(out, r, s);
+    for (let e = i32At(rowStart, r); e < e1; e++) s -= f64At(val, e) * f64At(x, i32At(col, e));
+    setF64(out, r, s);
     norm += Math.abs(s);
   }
   return norm;
@@ -96,16 +82,16 @@ function relaxLine(rd: usize, l: i32, b: usize, x: usize): void {
   const q1 = i32At(start, l + 1);
   let prev: f64 = 0;
   for (let q = q0; q < q1; q++) {
-    let s = at(b, i32At(order, q));
+    let s = f64At(b, i32At(order, q));
     const e1 = i32At(offStart, q + 1);
-    for (let e = i32At(offStart, q); e < e1; e++) s -= at(offVal, e) * at(x, i32At(offCol, e));
-    prev = (s - at(lower, q) * prev) * at(inv, q);
-    put(work, q - q0, prev);
+    for (let e = i32At(offStart, q); e < e1; e++) s -= f64At(offVal, e) * f64At(x, i32At(offCol, e));
+    prev = (s - f64At(lower, q) * prev) * f64At(inv, q);
+    setF64(work, q - q0, prev);
   }
   let next: f64 = 0;
   for (let q = q1 - 1; q >= q0; q--) {
-    next = at(work, q - q0) - at(cp, q) * next;
-    put(x, i32At(order, q), next);
+    next = f64At(work, q - q0) - f64At(cp, q) * next;
+    setF64(x, i32At(order, q), next);
   }
 }
 

@@ -13,31 +13,12 @@
  * Vectors b, x, r are byte offsets of f64 arrays of the level's size.
  */
 
-function word(d: usize, k: i32): i32 {
-  return load<i32>(d + ((<usize>k) << 2));
-}
-
-function f64At(base: usize, q: i32): f64 {
-  return load<f64>(base + ((<usize>q) << 3));
-}
-
-function setF64(base: usize, q: i32, v: f64): void {
-  store<f64>(base + ((<usize>q) << 3), v);
-}
-
-function i32At(base: usize, q: i32): i32 {
-  return load<i32>(base + ((<usize>q) << 2));
-}
+import { word, f64At, setF64, i32At, ld } from './memory-access';
 
 /** A coefficient as a double (float32 storage is widened exactly, as a Float32Array read in TypeScript). */
 function g<T>(base: usize, q: i32): f64 {
   if (sizeof<T>() == 4) return <f64>load<f32>(base + ((<usize>q) << 2));
   return load<f64>(base + ((<usize>q) << 3));
-}
-
-/** Two consecutive f64 from base[q] (one v128 load). */
-function load2(base: usize, q: i32): v128 {
-  return v128.load(base + ((<usize>q) << 3));
 }
 
 /** Two consecutive coefficients from base[q] as f64x2 (float32 storage widened exactly, as g reads one). */
@@ -120,10 +101,10 @@ function plane<T>(d: usize, i: i32, b: usize, x: usize, ahead: bool, forward: bo
       if (ahead) {
         for (let h = 0; h < pairs; h++) {
           const q = p0 + 2 * h;
-          let v = f64x2.add(load2(b, q), f64x2.mul(g2<T>(gx, q - sx), load2(x, q - sx)));
-          v = f64x2.add(v, f64x2.mul(g2<T>(gx, q), load2(x, q + sx)));
-          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q - nz), load2(x, q - nz)));
-          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q), load2(x, q + nz)));
+          let v = f64x2.add(ld(b, q), f64x2.mul(g2<T>(gx, q - sx), ld(x, q - sx)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gx, q), ld(x, q + sx)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q - nz), ld(x, q - nz)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q), ld(x, q + nz)));
           v128.store(w + ((<usize>(2 * h)) << 3), v);
         }
         for (let k = 2 * pairs, q = p0 + 2 * pairs; k < nz; k++, q++)
@@ -139,8 +120,8 @@ function plane<T>(d: usize, i: i32, b: usize, x: usize, ahead: bool, forward: bo
       } else {
         for (let h = 0; h < pairs; h++) {
           const q = p0 + 2 * h;
-          let v = f64x2.add(load2(b, q), f64x2.mul(g2<T>(gx, q - sx), load2(x, q - sx)));
-          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q - nz), load2(x, q - nz)));
+          let v = f64x2.add(ld(b, q), f64x2.mul(g2<T>(gx, q - sx), ld(x, q - sx)));
+          v = f64x2.add(v, f64x2.mul(g2<T>(gy, q - nz), ld(x, q - nz)));
           v128.store(w + ((<usize>(2 * h)) << 3), v);
         }
         for (let k = 2 * pairs, q = p0 + 2 * pairs; k < nz; k++, q++)
@@ -235,7 +216,7 @@ function aheadPlane<T>(d: usize, r: usize, x: usize, p0: i32, east: bool): void 
     // Pairs in f64x2 lanes (each the scalar expression), the odd one last.
     let q = p0;
     for (; q + 1 < p0 + inner; q += 2)
-      v128.store(r + ((<usize>q) << 3), f64x2.add(f64x2.mul(g2<T>(gx, q), load2(x, q + sx)), f64x2.mul(g2<T>(gy, q), load2(x, q + nz))));
+      v128.store(r + ((<usize>q) << 3), f64x2.add(f64x2.mul(g2<T>(gx, q), ld(x, q + sx)), f64x2.mul(g2<T>(gy, q), ld(x, q + nz))));
     for (; q < p0 + inner; q++) setF64(r, q, g<T>(gx, q) * f64At(x, q + sx) + g<T>(gy, q) * f64At(x, q + nz));
     for (let q = p0 + inner; q < p0 + sx; q++) setF64(r, q, g<T>(gx, q) * f64At(x, q + sx));
   } else {

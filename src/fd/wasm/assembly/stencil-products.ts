@@ -9,21 +9,7 @@
  *   13 extraTo (i32)  14 extraG  15 finOffset (i32 per fin)  16 finRows (i32)  17 finLayers (i32).
  */
 
-function word(d: usize, k: i32): i32 {
-  return load<i32>(d + ((<usize>k) << 2));
-}
-
-function at(base: usize, q: i32): f64 {
-  return load<f64>(base + ((<usize>q) << 3));
-}
-
-function put(base: usize, q: i32, v: f64): void {
-  store<f64>(base + ((<usize>q) << 3), v);
-}
-
-function i32At(base: usize, q: i32): i32 {
-  return load<i32>(base + ((<usize>q) << 2));
-}
+import { word, f64At, setF64, i32At, ld } from './memory-access';
 
 /** out = sign (b − A x) on plate plane i, each neighbour bounded (sink-stencil-product.ts edgePlane). */
 function edgePlane(d: usize, x: usize, b: usize, sign: f64, out: usize, i: i32): void {
@@ -39,15 +25,15 @@ function edgePlane(d: usize, x: usize, b: usize, sign: f64, out: usize, i: i32):
   const p0 = i * sx;
   const p1 = p0 + sx;
   for (let p = p0; p < p1; p++) {
-    const xp = at(x, p);
-    let v = at(b, p) - at(excess, p) * xp;
-    if (p > 0) v += at(line, p - 1) * (at(x, p - 1) - xp);
-    if (p + 1 < n) v += at(line, p) * (at(x, p + 1) - xp);
-    if (i > 0) v += at(gx, p - sx) * (at(x, p - sx) - xp);
-    if (i + 1 < nx) v += at(gx, p) * (at(x, p + sx) - xp);
-    if (p - nz >= p0) v += at(gy, p - nz) * (at(x, p - nz) - xp);
-    if (p + nz < p1) v += at(gy, p) * (at(x, p + nz) - xp);
-    put(out, p, sign * v);
+    const xp = f64At(x, p);
+    let v = f64At(b, p) - f64At(excess, p) * xp;
+    if (p > 0) v += f64At(line, p - 1) * (f64At(x, p - 1) - xp);
+    if (p + 1 < n) v += f64At(line, p) * (f64At(x, p + 1) - xp);
+    if (i > 0) v += f64At(gx, p - sx) * (f64At(x, p - sx) - xp);
+    if (i + 1 < nx) v += f64At(gx, p) * (f64At(x, p + sx) - xp);
+    if (p - nz >= p0) v += f64At(gy, p - nz) * (f64At(x, p - nz) - xp);
+    if (p + nz < p1) v += f64At(gy, p) * (f64At(x, p + nz) - xp);
+    setF64(out, p, sign * v);
   }
 }
 
@@ -62,18 +48,18 @@ function residualFin(d: usize, x: usize, b: usize, sign: f64, out: usize, f: i32
   const rows = i32At(<usize>word(d, 16), f);
   const end = offset + rows * L;
   for (let p = offset + L; p < end - L; p++) {
-    const xp = at(x, p);
+    const xp = f64At(x, p);
     const q = p - plate;
-    put(
+    setF64(
       out,
       p,
       sign *
-        (at(b, p) -
-          at(excess, p) * xp +
-          at(line, p) * (at(x, p + 1) - xp) +
-          at(line, p - 1) * (at(x, p - 1) - xp) +
-          at(row, q) * (at(x, p + L) - xp) +
-          at(row, q - L) * (at(x, p - L) - xp)),
+        (f64At(b, p) -
+          f64At(excess, p) * xp +
+          f64At(line, p) * (f64At(x, p + 1) - xp) +
+          f64At(line, p - 1) * (f64At(x, p - 1) - xp) +
+          f64At(row, q) * (f64At(x, p + L) - xp) +
+          f64At(row, q - L) * (f64At(x, p - L) - xp)),
     );
   }
   finEdgeRow(d, x, b, sign, out, offset, L, offset, end);
@@ -86,13 +72,13 @@ function finEdgeRow(d: usize, x: usize, b: usize, sign: f64, out: usize, p0: i32
   const row = <usize>word(d, 9);
   const excess = <usize>word(d, 10);
   for (let p = p0; p < p0 + L; p++) {
-    const xp = at(x, p);
-    let v = at(b, p) - at(excess, p) * xp;
-    if (p > p0) v += at(line, p - 1) * (at(x, p - 1) - xp);
-    if (p + 1 < p0 + L) v += at(line, p) * (at(x, p + 1) - xp);
-    if (p - L >= offset) v += at(row, p - L - plate) * (at(x, p - L) - xp);
-    if (p + L < end) v += at(row, p - plate) * (at(x, p + L) - xp);
-    put(out, p, sign * v);
+    const xp = f64At(x, p);
+    let v = f64At(b, p) - f64At(excess, p) * xp;
+    if (p > p0) v += f64At(line, p - 1) * (f64At(x, p - 1) - xp);
+    if (p + 1 < p0 + L) v += f64At(line, p) * (f64At(x, p + 1) - xp);
+    if (p - L >= offset) v += f64At(row, p - L - plate) * (f64At(x, p - L) - xp);
+    if (p + L < end) v += f64At(row, p - plate) * (f64At(x, p + L) - xp);
+    setF64(out, p, sign * v);
   }
 }
 
@@ -109,19 +95,19 @@ export function stencilResidual(d: usize, x: usize, b: usize, out: usize): f64 {
   const sign: f64 = 1;
   // The interior planes in one flat pass (residualPlanes over all planes: from plane 1 to plane nx − 2).
   for (let p = sx; p < (nx - 1) * sx; p++) {
-    const xp = at(x, p);
-    put(
+    const xp = f64At(x, p);
+    setF64(
       out,
       p,
       sign *
-        (at(b, p) -
-          at(excess, p) * xp +
-          at(line, p) * (at(x, p + 1) - xp) +
-          at(line, p - 1) * (at(x, p - 1) - xp) +
-          at(gx, p) * (at(x, p + sx) - xp) +
-          at(gx, p - sx) * (at(x, p - sx) - xp) +
-          at(gy, p) * (at(x, p + nz) - xp) +
-          at(gy, p - nz) * (at(x, p - nz) - xp)),
+        (f64At(b, p) -
+          f64At(excess, p) * xp +
+          f64At(line, p) * (f64At(x, p + 1) - xp) +
+          f64At(line, p - 1) * (f64At(x, p - 1) - xp) +
+          f64At(gx, p) * (f64At(x, p + sx) - xp) +
+          f64At(gx, p - sx) * (f64At(x, p - sx) - xp) +
+          f64At(gy, p) * (f64At(x, p + nz) - xp) +
+          f64At(gy, p - nz) * (f64At(x, p - nz) - xp)),
     );
   }
   edgePlane(d, x, b, sign, out, 0);
@@ -134,11 +120,11 @@ export function stencilResidual(d: usize, x: usize, b: usize, out: usize): f64 {
   const eg = <usize>word(d, 14);
   for (let e = 0; e < extras; e++) {
     const p = i32At(from_, e);
-    put(out, p, at(out, p) + sign * at(eg, e) * (at(x, i32At(to_, e)) - at(x, p)));
+    setF64(out, p, f64At(out, p) + sign * f64At(eg, e) * (f64At(x, i32At(to_, e)) - f64At(x, p)));
   }
   const n = word(d, 3);
   let norm: f64 = 0;
-  for (let p = 0; p < n; p++) norm += Math.abs(at(out, p));
+  for (let p = 0; p < n; p++) norm += Math.abs(f64At(out, p));
   return norm;
 }
 
@@ -172,38 +158,38 @@ export function stencilMultiply(d: usize, x: usize, out: usize): f64 {
     dot += f64x2.extract_lane(d, 1);
   }
   for (; p < last; p++) {
-    const xp = at(x, p);
+    const xp = f64At(x, p);
     const v =
-      at(excess, p) * xp +
-      at(line, p) * (xp - at(x, p + 1)) +
-      at(line, p - 1) * (xp - at(x, p - 1)) +
-      at(gx, p) * (xp - at(x, p + sx)) +
-      at(gx, p - sx) * (xp - at(x, p - sx)) +
-      at(gy, p) * (xp - at(x, p + nz)) +
-      at(gy, p - nz) * (xp - at(x, p - nz));
-    put(out, p, v);
+      f64At(excess, p) * xp +
+      f64At(line, p) * (xp - f64At(x, p + 1)) +
+      f64At(line, p - 1) * (xp - f64At(x, p - 1)) +
+      f64At(gx, p) * (xp - f64At(x, p + sx)) +
+      f64At(gx, p - sx) * (xp - f64At(x, p - sx)) +
+      f64At(gy, p) * (xp - f64At(x, p + nz)) +
+      f64At(gy, p - nz) * (xp - f64At(x, p - nz));
+    setF64(out, p, v);
     dot += xp * v;
   }
   // The edge planes and the fins through the residual's form with out zeroed as b (sign −1).
   let p0 = 0;
   let p1 = sx;
-  for (let p = p0; p < p1; p++) put(out, p, 0);
+  for (let p = p0; p < p1; p++) setF64(out, p, 0);
   edgePlane(d, x, out, -1, out, 0);
-  for (let p = p0; p < p1; p++) dot += at(x, p) * at(out, p);
+  for (let p = p0; p < p1; p++) dot += f64At(x, p) * f64At(out, p);
   if (nx > 1) {
     p0 = (nx - 1) * sx;
     p1 = nx * sx;
-    for (let p = p0; p < p1; p++) put(out, p, 0);
+    for (let p = p0; p < p1; p++) setF64(out, p, 0);
     edgePlane(d, x, out, -1, out, nx - 1);
-    for (let p = p0; p < p1; p++) dot += at(x, p) * at(out, p);
+    for (let p = p0; p < p1; p++) dot += f64At(x, p) * f64At(out, p);
   }
   const fins = word(d, 5);
   for (let f = 0; f < fins; f++) {
     p0 = i32At(<usize>word(d, 15), f);
     p1 = p0 + i32At(<usize>word(d, 16), f) * i32At(<usize>word(d, 17), f);
-    for (let p = p0; p < p1; p++) put(out, p, 0);
+    for (let p = p0; p < p1; p++) setF64(out, p, 0);
     residualFin(d, x, out, -1, out, f);
-    for (let p = p0; p < p1; p++) dot += at(x, p) * at(out, p);
+    for (let p = p0; p < p1; p++) dot += f64At(x, p) * f64At(out, p);
   }
   const extras = word(d, 11);
   const from_ = <usize>word(d, 12);
@@ -211,9 +197,9 @@ export function stencilMultiply(d: usize, x: usize, out: usize): f64 {
   const eg = <usize>word(d, 14);
   for (let e = 0; e < extras; e++) {
     const p = i32At(from_, e);
-    const dd = at(eg, e) * (at(x, p) - at(x, i32At(to_, e)));
-    put(out, p, at(out, p) + dd);
-    dot += at(x, p) * dd;
+    const dd = f64At(eg, e) * (f64At(x, p) - f64At(x, i32At(to_, e)));
+    setF64(out, p, f64At(out, p) + dd);
+    dot += f64At(x, p) * dd;
   }
   return dot;
 }
@@ -231,9 +217,9 @@ export function cgStep(n: i32, alpha: f64, p: usize, q: usize, x: usize, r: usiz
     size += Math.abs(f64x2.extract_lane(rk, 1));
   }
   for (; k < n; k++) {
-    put(x, k, at(x, k) + alpha * at(p, k));
-    const rk = at(r, k) - alpha * at(q, k);
-    put(r, k, rk);
+    setF64(x, k, f64At(x, k) + alpha * f64At(p, k));
+    const rk = f64At(r, k) - alpha * f64At(q, k);
+    setF64(r, k, rk);
     size += Math.abs(rk);
   }
   return size;
@@ -244,10 +230,5 @@ export function cgDirection(n: i32, beta: f64, z: usize, p: usize): void {
   const b = f64x2.splat(beta);
   let k = 0;
   for (; k + 1 < n; k += 2) v128.store(p + ((<usize>k) << 3), f64x2.add(ld(z, k), f64x2.mul(b, ld(p, k))));
-  for (; k < n; k++) put(p, k, at(z, k) + beta * at(p, k));
-}
-
-/** base[q], base[q + 1] as f64x2. */
-function ld(base: usize, q: i32): v128 {
-  return v128.load(base + ((<usize>q) << 3));
+  for (; k < n; k++) setF64(p, k, f64At(z, k) + beta * f64At(p, k));
 }
